@@ -1,0 +1,144 @@
+import type { Command } from 'commander';
+import { cautionLines } from '../../caution.js';
+import { usageError } from '../../errors.js';
+import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
+import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
+import { writeFileAtomic } from '../../output/atomic.js';
+import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
+import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
+import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
+import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
+import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
+
+export interface GridCliOptions {
+  periods?: string;
+  damping?: string;
+  method?: string;
+  force?: boolean;
+}
+
+export interface SpectrumCliOptions extends RecordCliOptions, GridCliOptions {
+  format?: string;
+  out?: string;
+  lengthUnit?: string;
+}
+
+/** Add --periods, --damping, --method and --force. */
+export function addGridOptions(command: Command): Command {
+  return command
+    .option(
+      '--periods <grid>',
+      'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01:10:120)',
+    )
+    .option('--damping <list>', 'damping ratios as fractions or percentages, e.g. 0.02,5%', '5%')
+    .option('--method <method>', 'newmark-average, newmark-linear or piecewise-exact', 'newmark-average')
+    .option('--force', `allow more than ${MAX_OSCILLATORS.toLocaleString('en-US')} oscillators`);
+}
+
+export function gridFromOptions(options: GridCliOptions) {
+  const periodsS = options.periods === undefined ? defaultPeriodsS() : parsePeriods(options.periods);
+  const dampings = parseDampings(options.damping ?? '5%');
+  const method = parseMethod(options.method ?? 'newmark-average');
+  const count = periodsS.length * dampings.length;
+  if (count > MAX_OSCILLATORS && !options.force) {
+    throw usageError(`${count} oscillators is more than ${MAX_OSCILLATORS}; add --force if you mean it`);
+  }
+  return { periodsS, dampings, method };
+}
+
+export function registerSpectrum(program: Command): void {
+  const command = program
+    .command('spectrum')
+    .description('response spectra (SD, PSV, PSA, SV, SA) of a ground-acceleration record')
+    .argument('<record>', 'record file, or - for standard input');
+  addRecordOptions(command);
+  addGridOptions(command);
+  command
+    .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
+    .option('--out <path>', 'write to this file instead of standard output')
+    .option('--length-unit <unit>', 'length unit for CSV and the terminal summary: m, cm, mm, in, ft', 'm')
+    .action(async (source: string, options: SpectrumCliOptions) => {
+      await runSpectrum(source, options);
+    });
+}
+
+export async function runSpectrum(source: string, options: SpectrumCliOptions): Promise<void> {
+  const grid = gridFromOptions(options);
+  const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
+  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
+  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const record = await loadRecord(source, options);
+  const spectrum = responseSpectrum(record, grid);
+  const text =
+    format === 'json'
+      ? formatJson(spectrumToJson(spectrum))
+      : format === 'csv'
+        ? spectrumToCsv(spectrum, { lengthUnit })
+        : summaryTable(spectrum, lengthUnit);
+  if (options.out !== undefined) {
+    writeFileAtomic(options.out, text, [source]);
+  } else {
+    process.stdout.write(text);
+  }
+}
+
+/** A short table for the terminal: the caution first, then peaks at a few periods. */
+export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit): string {
+  const out: string[] = [];
+  for (const line of cautionLines(92)) out.push(`! ${line}`);
+  out.push('');
+  const r = spectrum.record;
+  out.push(
+    `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dtS} s, PGA ${(r.pgaMS2 / STANDARD_GRAVITY_MS2).toFixed(4)} g`,
+  );
+  for (const step of r.processing) out.push(`        processed: ${step.description}`);
+  out.push(`method  ${METHOD_DESCRIPTIONS[spectrum.method]}`);
+  out.push('');
+  const perLength = 1 / LENGTH_UNITS[lengthUnit];
+  const header = ['T (s)'.padStart(8)];
+  for (const curve of spectrum.curves) {
+    const d = dampingLabel(curve.damping);
+    header.push(`SD ${lengthUnit} @${d}`.padStart(14), `PSA g @${d}`.padStart(12));
+  }
+  out.push(header.join(' '));
+  for (const p of summaryRows(spectrum.periodsS)) {
+    const row = [formatPeriod(spectrum.periodsS[p]).padStart(8)];
+    for (const curve of spectrum.curves) {
+      row.push(
+        (curve.sdM[p] * perLength).toPrecision(4).padStart(14),
+        (curve.psaMS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(12),
+      );
+    }
+    out.push(row.join(' '));
+  }
+  out.push('');
+  for (const curve of spectrum.curves) {
+    let peak = 0;
+    for (let p = 1; p < curve.psaMS2.length; p++) if (curve.psaMS2[p] > curve.psaMS2[peak]) peak = p;
+    out.push(
+      `peak PSA at ${dampingLabel(curve.damping)}: ${(curve.psaMS2[peak] / STANDARD_GRAVITY_MS2).toPrecision(4)} g at T = ${formatPeriod(spectrum.periodsS[peak])} s`,
+    );
+  }
+  out.push(`(${spectrum.periodsS.length} periods; --format json or csv for all of them)`);
+  return `${out.join('\n')}\n`;
+}
+
+/** Indices of the grid nearest to a set of round periods, for the summary. */
+function summaryRows(periodsS: Float64Array): number[] {
+  if (periodsS.length <= 16) return Array.from(periodsS, (_, i) => i);
+  const targets = [0, 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5, 10];
+  const rows = new Set<number>();
+  for (const target of targets) {
+    if (target < periodsS[0] || target > periodsS[periodsS.length - 1]) continue;
+    let best = 0;
+    for (let i = 1; i < periodsS.length; i++) {
+      if (Math.abs(periodsS[i] - target) < Math.abs(periodsS[best] - target)) best = i;
+    }
+    rows.add(best);
+  }
+  return [...rows].sort((a, b) => a - b);
+}
+
+function formatPeriod(t: number): string {
+  return t === 0 ? '0' : Number(t.toPrecision(3)).toString();
+}

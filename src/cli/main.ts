@@ -1,0 +1,63 @@
+import { Command, CommanderError } from 'commander';
+import { isQuakesweepError } from '../errors.js';
+import { VERSION } from '../version.js';
+import { registerSpectrum } from './commands/spectrum.js';
+
+/** Exit codes: 0 done, 1 internal fault or partly failed batch, 2 bad input or usage. */
+export const EXIT_INPUT = 2;
+export const EXIT_INTERNAL = 1;
+
+export function buildProgram(): Command {
+  const program = new Command('quakesweep')
+    .description(
+      'Response spectra and preliminary equipment anchorage demands from ground-acceleration records.',
+    )
+    .version(VERSION)
+    .showHelpAfterError('(run with --help for usage)')
+    .exitOverride();
+  program.configureOutput({ writeErr: (text) => process.stderr.write(text) });
+  registerSpectrum(program);
+  return program;
+}
+
+/** Run the CLI; every failure becomes one line on stderr and an exit code, never a stack trace. */
+export async function main(argv: string[]): Promise<number> {
+  const program = buildProgram();
+  try {
+    await program.parseAsync(argv, { from: 'user' });
+    return 0;
+  } catch (error) {
+    return reportError(error);
+  }
+}
+
+export function reportError(error: unknown): number {
+  if (error instanceof CommanderError) {
+    if (
+      error.exitCode === 0 ||
+      error.code === 'commander.helpDisplayed' ||
+      error.code === 'commander.version'
+    )
+      return 0;
+    return EXIT_INPUT; // commander already printed its one-line message
+  }
+  if (isQuakesweepError(error)) {
+    process.stderr.write(`quakesweep: ${error.describe()}\n`);
+    return error.kind === 'internal' ? EXIT_INTERNAL : EXIT_INPUT;
+  }
+  const code = (error as NodeJS.ErrnoException | undefined)?.code;
+  if (code === 'ENOENT' || code === 'EACCES' || code === 'EISDIR' || code === 'ENOTDIR') {
+    const path = (error as NodeJS.ErrnoException).path ?? '';
+    const reason = {
+      ENOENT: 'no such file',
+      EACCES: 'permission denied',
+      EISDIR: 'is a folder',
+      ENOTDIR: 'not a folder',
+    }[code];
+    process.stderr.write(`quakesweep: ${path}: ${reason}\n`);
+    return EXIT_INPUT;
+  }
+  const message = error instanceof Error ? error.message : String(error);
+  process.stderr.write(`quakesweep: internal error: ${message.split('\n')[0]} (please report this)\n`);
+  return EXIT_INTERNAL;
+}

@@ -1,0 +1,78 @@
+import { createReadStream } from 'node:fs';
+import type { Command } from 'commander';
+import { usageError } from '../errors.js';
+import { type ReadOptions, type RecordLayout, readRecordStream } from '../record/read.js';
+import type { GroundRecord } from '../record/record.js';
+import { parseAccelerationUnit } from '../units.js';
+
+/** Options of every command that reads a record (values as commander hands them over). */
+export interface RecordCliOptions {
+  dt?: string;
+  units?: string;
+  column?: string;
+  skip?: string;
+  layout?: string;
+  name?: string;
+}
+
+/** Add the reading options to a command. */
+export function addRecordOptions(command: Command): Command {
+  return command
+    .option(
+      '--units <unit>',
+      'unit of the acceleration values: g, m/s2, cm/s2 (gal), mm/s2, in/s2, ft/s2 (required)',
+    )
+    .option('--dt <seconds>', 'time step, s, for files without a time column')
+    .option('--column <n>', '1-based column holding the acceleration (default: the last)')
+    .option('--skip <n>', 'header lines to skip before the data', '0')
+    .option(
+      '--layout <layout>',
+      'auto, single (one value a line), table (time and values), wrapped (several values a line)',
+      'auto',
+    )
+    .option('--name <name>', "the record's name in outputs (default: the file's base name)");
+}
+
+export function recordReadOptions(source: string, options: RecordCliOptions): ReadOptions {
+  const layout = options.layout ?? 'auto';
+  if (!['auto', 'single', 'table', 'wrapped'].includes(layout)) {
+    throw usageError(`--layout '${layout}': use auto, single, table or wrapped`);
+  }
+  return {
+    source,
+    units: parseAccelerationUnit(options.units),
+    dtS: options.dt === undefined ? undefined : positiveNumber('--dt', options.dt),
+    column: options.column === undefined ? undefined : positiveInteger('--column', options.column),
+    skip: options.skip === undefined ? 0 : nonNegativeInteger('--skip', options.skip),
+    layout: layout as RecordLayout,
+    name: options.name,
+  };
+}
+
+/** Open the file (or standard input for `-`) and read it as a record. */
+export async function loadRecord(source: string, options: RecordCliOptions): Promise<GroundRecord> {
+  const readOptions = recordReadOptions(source, options);
+  const stream = source === '-' ? process.stdin : createReadStream(source);
+  return readRecordStream(stream, readOptions);
+}
+
+export function positiveNumber(option: string, text: string): number {
+  const value = Number(text);
+  if (text.trim() === '' || !Number.isFinite(value) || value <= 0)
+    throw usageError(`${option} must be a positive number, got '${text}'`);
+  return value;
+}
+
+export function positiveInteger(option: string, text: string): number {
+  const value = Number(text);
+  if (!Number.isInteger(value) || value < 1)
+    throw usageError(`${option} must be a whole number ≥ 1, got '${text}'`);
+  return value;
+}
+
+export function nonNegativeInteger(option: string, text: string): number {
+  const value = Number(text);
+  if (!Number.isInteger(value) || value < 0)
+    throw usageError(`${option} must be a whole number ≥ 0, got '${text}'`);
+  return value;
+}

@@ -1,0 +1,46 @@
+/**
+ * Exponential of a small dense square matrix (row-major Float64Array of n×n), by scaling and
+ * squaring with a truncated Taylor series: method 3 of Moler and Van Loan, "Nineteen dubious ways
+ * to compute the exponential of a matrix, twenty-five years later", SIAM Review 45 (2003).
+ * The matrix is scaled by 2^-s so that its 1-norm is at most 1/2, where 18 Taylor terms leave a
+ * truncation error below 1e-20 of the norm; then the result is squared s times.
+ * Used once per (period, damping, step) to build step coefficients, never in the inner loop.
+ */
+export function expm(matrix: Float64Array, n: number): Float64Array {
+  let norm = 0;
+  for (let j = 0; j < n; j++) {
+    let column = 0;
+    for (let i = 0; i < n; i++) column += Math.abs(matrix[i * n + j]);
+    norm = Math.max(norm, column);
+  }
+  const squarings = norm > 0.5 ? Math.ceil(Math.log2(norm / 0.5)) : 0;
+  const scale = 2 ** -squarings;
+  const scaled = matrix.map((value) => value * scale);
+
+  let result = identity(n);
+  let term = identity(n);
+  for (let k = 1; k <= 18; k++) {
+    term = multiply(term, scaled, n).map((value) => value / k);
+    for (let i = 0; i < n * n; i++) result[i] += term[i];
+  }
+  for (let s = 0; s < squarings; s++) result = multiply(result, result, n);
+  return result;
+}
+
+function identity(n: number): Float64Array {
+  const out = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) out[i * n + i] = 1;
+  return out;
+}
+
+function multiply(a: Float64Array, b: Float64Array, n: number): Float64Array {
+  const out = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let k = 0; k < n; k++) {
+      const aik = a[i * n + k];
+      if (aik === 0) continue;
+      for (let j = 0; j < n; j++) out[i * n + j] += aik * b[k * n + j];
+    }
+  }
+  return out;
+}

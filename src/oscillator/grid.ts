@@ -1,0 +1,82 @@
+import { usageError } from '../errors.js';
+
+/** The default period grid: T = 0 (rigid) and 120 log-spaced periods from 0.01 s to 10 s. */
+export function defaultPeriodsS(): Float64Array {
+  return Float64Array.from([0, ...logSpaced(0.01, 10, 120)]);
+}
+
+/** `count` periods spaced evenly in log T from `fromS` to `toS`, both included. */
+export function logSpaced(fromS: number, toS: number, count: number): number[] {
+  if (count === 1) return [fromS];
+  const ratio = Math.log(toS / fromS);
+  return Array.from({ length: count }, (_, i) =>
+    i === count - 1 ? toS : fromS * Math.exp((ratio * i) / (count - 1)),
+  );
+}
+
+/** Most oscillators a sweep runs without `--force`. */
+export const MAX_OSCILLATORS = 1_000_000;
+
+/**
+ * Parse a period grid: a comma list (`0,0.1,0.2,1`) or `a:b:n`, n log-spaced periods from a to b
+ * seconds. Periods must be finite and ≥ 0; duplicates are refused and the list is sorted.
+ */
+export function parsePeriods(text: string): Float64Array {
+  const spec = text.trim();
+  let values: number[];
+  if (spec.includes(':')) {
+    const parts = spec.split(':');
+    if (parts.length !== 3) throw usageError(`--periods '${text}': use a:b:n, e.g. 0.01:10:100`);
+    const [from, to, count] = parts.map((part) => Number(part.trim()));
+    if (!(from > 0) || !(to > from) || !Number.isFinite(to)) {
+      throw usageError(
+        `--periods '${text}': need 0 < a < b (log spacing cannot start at 0; add 0 with a list)`,
+      );
+    }
+    if (!Number.isInteger(count) || count < 2)
+      throw usageError(`--periods '${text}': n must be an integer ≥ 2`);
+    if (count > MAX_OSCILLATORS)
+      throw usageError(`--periods '${text}': n = ${count} is more than ${MAX_OSCILLATORS}`);
+    values = logSpaced(from, to, count);
+  } else {
+    values = spec.split(',').map((part) => {
+      const value = Number(part.trim());
+      if (part.trim() === '' || !Number.isFinite(value))
+        throw usageError(`--periods: '${part}' is not a number`);
+      if (value < 0) throw usageError(`--periods: ${value} is negative; periods are ≥ 0 s (0 means rigid)`);
+      return value;
+    });
+  }
+  values.sort((a, b) => a - b);
+  for (let i = 1; i < values.length; i++) {
+    if (values[i] === values[i - 1]) throw usageError(`--periods: ${values[i]} s appears twice`);
+  }
+  if (values.length === 0) throw usageError('--periods: the grid is empty');
+  return Float64Array.from(values);
+}
+
+/**
+ * Parse damping ratios: fractions (`0.05`) or percentages (`5%`), comma separated. A bare number
+ * above 1 is refused (it is almost always a percentage written without `%`). Ratios above 1
+ * (overdamped) are allowed when written as percentages.
+ */
+export function parseDampings(text: string): Float64Array {
+  const values = text.split(',').map((raw) => {
+    const part = raw.trim();
+    const percent = part.endsWith('%');
+    const value = Number(percent ? part.slice(0, -1).trim() : part);
+    if (part === '' || !Number.isFinite(value)) throw usageError(`--damping: '${raw}' is not a number`);
+    if (value < 0) throw usageError(`--damping: ${part} is negative; damping ratios are ≥ 0`);
+    if (!percent && value > 1) {
+      throw usageError(
+        `--damping: ${part} is above 1; write ${part}% for a percentage, or a fraction such as 0.05`,
+      );
+    }
+    return percent ? value / 100 : value;
+  });
+  for (let i = 0; i < values.length; i++) {
+    if (values.indexOf(values[i]) !== i) throw usageError(`--damping: ${values[i]} appears twice`);
+  }
+  if (values.length === 0) throw usageError('--damping: the list is empty');
+  return Float64Array.from(values);
+}

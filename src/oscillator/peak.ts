@@ -1,0 +1,38 @@
+/**
+ * Peak of |q(t)| over one step, from the values and slopes at its two ends, by cubic Hermite
+ * interpolation (common practice; the cubic is exact when q is a cubic in t, and its error is
+ * h⁴·max|q''''|/384 otherwise — any numerical analysis text, e.g. Burden and Faires §3.4).
+ * `q0`, `q1` are the values at the ends, `dq0`, `dq1` the time derivatives, `stepS` the step.
+ */
+export function hermitePeak(q0: number, q1: number, dq0: number, dq1: number, stepS: number): number {
+  const m0 = dq0 * stepS;
+  const m1 = dq1 * stepS;
+  let peak = Math.max(Math.abs(q0), Math.abs(q1));
+  // H'(t) = A t² + B t + m0 on t in [0, 1].
+  const a = 6 * q0 + 3 * m0 - 6 * q1 + 3 * m1;
+  const b = -6 * q0 - 4 * m0 + 6 * q1 - 2 * m1;
+  const c = m0;
+  const scale = Math.abs(a) + Math.abs(b) + Math.abs(c);
+  if (scale === 0) return peak;
+  if (Math.abs(a) <= 1e-12 * scale) {
+    if (b !== 0) peak = Math.max(peak, hermiteAbs(q0, q1, m0, m1, -c / b));
+    return peak;
+  }
+  const discriminant = b * b - 4 * a * c;
+  if (discriminant < 0) return peak;
+  const root = Math.sqrt(discriminant);
+  // Numerically stable pair of roots.
+  const qq = -0.5 * (b + (b >= 0 ? root : -root));
+  if (qq !== 0) peak = Math.max(peak, hermiteAbs(q0, q1, m0, m1, c / qq));
+  peak = Math.max(peak, hermiteAbs(q0, q1, m0, m1, qq / a));
+  return peak;
+}
+
+function hermiteAbs(q0: number, q1: number, m0: number, m1: number, t: number): number {
+  if (!(t > 0 && t < 1)) return 0;
+  const t2 = t * t;
+  const t3 = t2 * t;
+  return Math.abs(
+    (2 * t3 - 3 * t2 + 1) * q0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * q1 + (t3 - t2) * m1,
+  );
+}

@@ -1,0 +1,53 @@
+import { randomBytes } from 'node:crypto';
+import {
+  closeSync,
+  existsSync,
+  fsyncSync,
+  openSync,
+  realpathSync,
+  renameSync,
+  rmSync,
+  statSync,
+  writeSync,
+} from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
+import { inputError } from '../errors.js';
+
+/**
+ * Write `contents` to `path` atomically: into a temporary file beside it, flushed, then renamed
+ * into place, so a reader never sees a half-written file and a failure leaves nothing behind.
+ * `protect` lists input paths that must never be overwritten.
+ */
+export function writeFileAtomic(
+  path: string,
+  contents: string | Uint8Array,
+  protect: readonly string[] = [],
+): void {
+  const target = resolve(path);
+  const folder = dirname(target);
+  if (!existsSync(folder) || !statSync(folder).isDirectory()) {
+    throw inputError(`cannot write ${path}: folder ${dirname(path)} does not exist`);
+  }
+  for (const input of protect) {
+    if (input === '-' || !existsSync(input)) continue;
+    if (existsSync(target) && realpathSync(target) === realpathSync(input)) {
+      throw inputError(`refusing to overwrite the input ${input} with an output`);
+    }
+  }
+  const temporary = join(folder, `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  let fd: number | undefined;
+  try {
+    fd = openSync(temporary, 'wx');
+    const bytes = typeof contents === 'string' ? Buffer.from(contents, 'utf8') : contents;
+    let offset = 0;
+    while (offset < bytes.length) offset += writeSync(fd, bytes, offset, bytes.length - offset);
+    fsyncSync(fd);
+    closeSync(fd);
+    fd = undefined;
+    renameSync(temporary, target);
+  } catch (error) {
+    if (fd !== undefined) closeSync(fd);
+    rmSync(temporary, { force: true });
+    throw error;
+  }
+}

@@ -1,0 +1,54 @@
+import { CAUTION } from '../caution.js';
+import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
+import type { Spectrum } from '../spectrum/spectrum.js';
+import { STANDARD_GRAVITY_MS2 } from '../units.js';
+
+/** The JSON contract of `quakesweep spectrum` (keys and units are relied on by scripts). */
+export interface SpectrumJson {
+  caution: string;
+  record: { name: string; source: string; npts: number; dt_s: number; pga_g: number; processing: unknown[] };
+  method: string;
+  method_description: string;
+  periods_s: number[];
+  spectra: {
+    damping: number;
+    sd_m: number[];
+    psv_m_s: number[];
+    psa_g: number[];
+    sv_m_s: number[];
+    sa_g: number[];
+  }[];
+  [extra: string]: unknown;
+}
+
+const toG = (values: Float64Array): number[] => Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
+
+export function spectrumToJson(spectrum: Spectrum): SpectrumJson {
+  return {
+    caution: CAUTION,
+    record: {
+      name: spectrum.record.name,
+      source: spectrum.record.source,
+      npts: spectrum.record.npts,
+      dt_s: spectrum.record.dtS,
+      pga_g: spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2,
+      processing: spectrum.record.processing.map((step) => ({ ...step })),
+    },
+    method: spectrum.method,
+    method_description: METHOD_DESCRIPTIONS[spectrum.method],
+    periods_s: Array.from(spectrum.periodsS),
+    spectra: spectrum.curves.map((curve) => ({
+      damping: curve.damping,
+      sd_m: Array.from(curve.sdM),
+      psv_m_s: Array.from(curve.psvMS),
+      psa_g: toG(curve.psaMS2),
+      sv_m_s: Array.from(curve.svMS),
+      sa_g: toG(curve.saMS2),
+    })),
+  };
+}
+
+/** JSON text with two-space indentation and numbers in full precision (same input, same bytes). */
+export function formatJson(value: unknown): string {
+  return `${JSON.stringify(value, null, 2)}\n`;
+}

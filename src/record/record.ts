@@ -1,0 +1,91 @@
+import { inputError } from '../errors.js';
+import type { AccelerationUnit } from '../units.js';
+
+/** One processing operation that was applied to a record, as stated in every output that used it. */
+export interface ProcessingStep {
+  /** Short machine name, e.g. `baseline`, `taper`, `filter`, `resample`, `scale`. */
+  operation: string;
+  /** One line for a reviewer, e.g. "high-pass Butterworth, order 4, 0.1 Hz, zero-phase". */
+  description: string;
+  /** The parameters, in SI units and plain numbers. */
+  parameters: { [name: string]: number | string | boolean | null };
+}
+
+/**
+ * A ground-acceleration record. (Named GroundRecord rather than Record so that it does not shadow
+ * TypeScript's own `Record` type.) Acceleration is always m/s² inside the program.
+ */
+export interface GroundRecord {
+  /** A name for people: the file's base name unless given. */
+  readonly name: string;
+  /** Where it came from: the path as given, `-` for standard input, or a description. */
+  readonly source: string;
+  /** Time step, s. */
+  readonly dtS: number;
+  /** Ground acceleration samples, m/s², at t = 0, dtS, 2 dtS, … */
+  readonly accelMS2: Float64Array;
+  /** The unit the values were given in (for warnings and reports). */
+  readonly unitsRead: AccelerationUnit;
+  /** What has been done to the record since it was read, in order. */
+  readonly processing: readonly ProcessingStep[];
+}
+
+export interface RecordFields {
+  name: string;
+  source?: string;
+  dtS: number;
+  accelMS2: Float64Array;
+  unitsRead?: AccelerationUnit;
+  processing?: readonly ProcessingStep[];
+}
+
+/** Build a record, refusing a step or samples that cannot describe a ground motion. */
+export function createRecord(fields: RecordFields): GroundRecord {
+  const { name, dtS, accelMS2 } = fields;
+  const source = fields.source ?? name;
+  if (!Number.isFinite(dtS) || dtS <= 0) {
+    throw inputError(`the time step must be a positive number of seconds, got ${dtS}`, { file: source });
+  }
+  if (accelMS2.length < 2) {
+    throw inputError(`a record needs at least 2 samples, got ${accelMS2.length}`, { file: source });
+  }
+  for (let i = 0; i < accelMS2.length; i++) {
+    if (!Number.isFinite(accelMS2[i])) {
+      throw inputError(`sample ${i + 1} is not a finite number (${accelMS2[i]})`, { file: source });
+    }
+  }
+  return {
+    name,
+    source,
+    dtS,
+    accelMS2,
+    unitsRead: fields.unitsRead ?? 'm/s2',
+    processing: fields.processing ?? [],
+  };
+}
+
+/** A copy of `record` with new samples (and step) and one more processing step on its list. */
+export function withProcessing(
+  record: GroundRecord,
+  accelMS2: Float64Array,
+  step: ProcessingStep,
+  dtS: number = record.dtS,
+): GroundRecord {
+  return createRecord({ ...record, accelMS2, dtS, processing: [...record.processing, step] });
+}
+
+/** Peak absolute ground acceleration, m/s². */
+export function peakGroundAcceleration(record: Pick<GroundRecord, 'accelMS2'>): number {
+  let peak = 0;
+  const a = record.accelMS2;
+  for (let i = 0; i < a.length; i++) {
+    const v = Math.abs(a[i]);
+    if (v > peak) peak = v;
+  }
+  return peak;
+}
+
+/** Duration covered by the samples, s. */
+export function recordDurationS(record: Pick<GroundRecord, 'accelMS2' | 'dtS'>): number {
+  return (record.accelMS2.length - 1) * record.dtS;
+}

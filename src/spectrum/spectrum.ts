@@ -1,0 +1,96 @@
+import type { Method } from '../oscillator/recurrence.js';
+import { type Peaks, sweepOscillators } from '../oscillator/sweep.js';
+import { type GroundRecord, type ProcessingStep, peakGroundAcceleration } from '../record/record.js';
+import { STANDARD_GRAVITY_MS2 } from '../units.js';
+
+/** The response spectra of one record at one damping ratio. All arrays are indexed by period. */
+export interface SpectrumCurve {
+  /** Damping ratio, fraction of critical. */
+  damping: number;
+  /** Peak relative displacement SD, m. */
+  sdM: Float64Array;
+  /** Pseudo-velocity PSV = ω·SD, m/s. */
+  psvMS: Float64Array;
+  /** Pseudo-acceleration PSA = ω²·SD, m/s² (PGA at T = 0). */
+  psaMS2: Float64Array;
+  /** Peak relative velocity SV, m/s. */
+  svMS: Float64Array;
+  /** Peak absolute acceleration SA, m/s². */
+  saMS2: Float64Array;
+}
+
+/** What a spectrum says about the record it came from. */
+export interface SpectrumRecordInfo {
+  name: string;
+  source: string;
+  npts: number;
+  dtS: number;
+  pgaMS2: number;
+  processing: readonly ProcessingStep[];
+}
+
+/** Response spectra of one record over a period grid and several damping ratios. */
+export interface Spectrum {
+  record: SpectrumRecordInfo;
+  method: Method;
+  periodsS: Float64Array;
+  curves: SpectrumCurve[];
+  /** Oscillator-steps the sweep executed (sub-steps included). */
+  oscillatorSteps: number;
+}
+
+export interface SpectrumOptions {
+  periodsS: ArrayLike<number>;
+  dampings: ArrayLike<number>;
+  method?: Method;
+}
+
+/** Sweep the record's oscillators and assemble SD, PSV, PSA, SV and SA for each damping ratio. */
+export function responseSpectrum(record: GroundRecord, options: SpectrumOptions): Spectrum {
+  const peaks = sweepOscillators(record.accelMS2, record.dtS, options);
+  return assembleSpectrum(record, peaks);
+}
+
+/** Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). */
+export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
+  const n = peaks.periodsS.length;
+  const pgaMS2 = peakGroundAcceleration(record);
+  const curves: SpectrumCurve[] = [];
+  for (let d = 0; d < peaks.dampings.length; d++) {
+    const sdM = peaks.sdM.slice(d * n, (d + 1) * n);
+    const svMS = peaks.svMS.slice(d * n, (d + 1) * n);
+    const saMS2 = peaks.saMS2.slice(d * n, (d + 1) * n);
+    const psvMS = new Float64Array(n);
+    const psaMS2 = new Float64Array(n);
+    for (let p = 0; p < n; p++) {
+      const t = peaks.periodsS[p];
+      if (t === 0) {
+        psaMS2[p] = pgaMS2;
+        continue;
+      }
+      const omega = (2 * Math.PI) / t;
+      psvMS[p] = omega * sdM[p];
+      psaMS2[p] = omega * omega * sdM[p];
+    }
+    curves.push({ damping: peaks.dampings[d], sdM, psvMS, psaMS2, svMS, saMS2 });
+  }
+  return {
+    record: {
+      name: record.name,
+      source: record.source,
+      npts: record.accelMS2.length,
+      dtS: record.dtS,
+      pgaMS2,
+      processing: record.processing,
+    },
+    method: peaks.method,
+    periodsS: peaks.periodsS,
+    curves,
+    oscillatorSteps: peaks.oscillatorSteps,
+  };
+}
+
+/** PSA in g, for outputs. */
+export function psaG(curve: SpectrumCurve): Float64Array {
+  return curve.psaMS2.map((value) => value / STANDARD_GRAVITY_MS2);
+}
