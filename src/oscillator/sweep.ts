@@ -1,6 +1,6 @@
 import { inputError } from '../errors.js';
-import { COEFFICIENT_STRIDE, GROUP_WIDTH, PEAK_STRIDE, sweepGroup } from './kernel.js';
-import { type Method, stepCoefficients, substepCount } from './recurrence.js';
+import { COEFFICIENT_STRIDE, GROUP_WIDTH, PEAK_STRIDE, STATE_STRIDE, sweepBlock } from './kernel.js';
+import { type Method, prewarpedOscillator, stepCoefficients, substepCount } from './recurrence.js';
 
 export interface SweepOptions {
   /** Natural periods, s; T = 0 is a rigid oscillator. */
@@ -9,6 +9,13 @@ export interface SweepOptions {
   dampings: ArrayLike<number>;
   /** Step method; Newmark-β average acceleration by default. */
   method?: Method;
+  /**
+   * Pre-warp the Newmark recurrences so that their poles are exact (default true; see
+   * prewarpedOscillator in recurrence.ts). False runs the textbook recurrences, sub-stepped more.
+   */
+  prewarp?: boolean;
+  /** Least steps per natural period (raises the rule of recurrence.ts, never lowers it). */
+  stepsPerPeriod?: number;
 }
 
 /** Peak responses of every oscillator of a sweep. Arrays are indexed [damping × nPeriods + period]. */
@@ -52,6 +59,8 @@ export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: S
   let pga = 0;
   for (let i = 0; i < accelMS2.length; i++) pga = Math.max(pga, Math.abs(accelMS2[i]));
 
+  const durationS = (accelMS2.length - 1) * dtS;
+  const prewarp = options.prewarp ?? true;
   const oscillators: Oscillator[] = [];
   for (let d = 0; d < dampings.length; d++) {
     for (let p = 0; p < periodsS.length; p++) {
@@ -65,15 +74,23 @@ export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: S
         index,
         periodS,
         damping: dampings[d],
-        substeps: substepCount(method, periodS, dtS),
+        substeps: substepCount(method, periodS, dtS, {
+          damping: dampings[d],
+          durationS,
+          prewarp,
+          stepsPerPeriod: options.stepsPerPeriod,
+        }),
       });
     }
   }
   oscillators.sort((a, b) => a.substeps - b.substeps || a.index - b.index);
 
+  const bounds = groundBounds(accelMS2, dtS);
   let oscillatorSteps = 0;
   const coefficients = new Float64Array(GROUP_WIDTH * COEFFICIENT_STRIDE);
+  const state = new Float64Array(GROUP_WIDTH * STATE_STRIDE);
   const peaks = new Float64Array(GROUP_WIDTH * PEAK_STRIDE);
+  const buffer = new Float64Array(BLOCK_STEPS + 1);
   for (let start = 0; start < oscillators.length; ) {
     const substeps = oscillators[start].substeps;
     const group: Oscillator[] = [];
@@ -86,9 +103,11 @@ export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: S
     }
     const stepS = dtS / substeps;
     for (let g = 0; g < GROUP_WIDTH; g++) {
-      packCoefficients(coefficients, g, group[Math.min(g, group.length - 1)], method, stepS);
+      packCoefficients(coefficients, g, group[Math.min(g, group.length - 1)], method, stepS, bounds, prewarp);
     }
-    sweepGroup(accelMS2, substeps, stepS, coefficients, 0, peaks);
+    state.fill(0);
+    peaks.fill(0);
+    runGroup(accelMS2, substeps, stepS, coefficients, state, peaks, buffer);
     for (let g = 0; g < group.length; g++) {
       const index = group[g].index;
       sdM[index] = peaks[g * PEAK_STRIDE];
@@ -100,6 +119,52 @@ export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: S
   return { method, periodsS, dampings, sdM, svMS, saMS2, oscillatorSteps };
 }
 
+/** Sub-steps per block: the interpolated input of a sub-stepped group is built a block at a time. */
+export const BLOCK_STEPS = 8192;
+
+/**
+ * Step one packed group over the whole record from rest: directly over the samples when there is
+ * one step per sample, otherwise over blocks of linearly interpolated sub-step inputs.
+ */
+function runGroup(
+  accelMS2: Float64Array,
+  substeps: number,
+  stepS: number,
+  coefficients: Float64Array,
+  state: Float64Array,
+  peaks: Float64Array,
+  buffer: Float64Array,
+): void {
+  const intervals = accelMS2.length - 1;
+  if (substeps === 1) {
+    for (let first = 0; first < intervals; first += BLOCK_STEPS) {
+      const steps = Math.min(BLOCK_STEPS, intervals - first);
+      sweepBlock(accelMS2.subarray(first, first + steps + 1), steps, stepS, coefficients, state, peaks);
+    }
+    return;
+  }
+  const total = intervals * substeps;
+  const fraction = 1 / substeps;
+  let sample = 0;
+  let within = 0;
+  for (let first = 0; first < total; first += BLOCK_STEPS) {
+    const steps = Math.min(BLOCK_STEPS, total - first);
+    // buffer[0] repeats the last value of the previous block; walk (sample, within) onwards.
+    let s = sample;
+    let w = within;
+    for (let j = 0; j <= steps; j++) {
+      buffer[j] = w === 0 ? accelMS2[s] : accelMS2[s] + (accelMS2[s + 1] - accelMS2[s]) * (w * fraction);
+      if (++w === substeps) {
+        w = 0;
+        s++;
+      }
+    }
+    sample = Math.floor((first + steps) / substeps);
+    within = first + steps - sample * substeps;
+    sweepBlock(buffer, steps, stepS, coefficients, state, peaks);
+  }
+}
+
 /** Write one oscillator's step coefficients into slot `slot` of the packed array. */
 export function packCoefficients(
   target: Float64Array,
@@ -107,9 +172,14 @@ export function packCoefficients(
   oscillator: { periodS: number; damping: number },
   method: Method,
   stepS: number,
+  bounds: GroundBounds,
+  prewarp = true,
 ): void {
   const omega = (2 * Math.PI) / oscillator.periodS;
-  const s = stepCoefficients(method, omega, oscillator.damping, stepS);
+  const warped = prewarp
+    ? prewarpedOscillator(method, omega, oscillator.damping, stepS)
+    : { omegaRadS: omega, damping: oscillator.damping };
+  const s = stepCoefficients(method, warped.omegaRadS, warped.damping, stepS);
   const o = slot * COEFFICIENT_STRIDE;
   target[o] = s.uu;
   target[o + 1] = s.uv;
@@ -121,6 +191,51 @@ export function packCoefficients(
   target[o + 7] = s.vp1;
   target[o + 8] = 2 * oscillator.damping * omega;
   target[o + 9] = omega * omega;
+  const t = refinementThresholds(omega, 2 * oscillator.damping * omega, stepS, bounds);
+  target[o + 10] = t.ratio;
+  target[o + 11] = t.displacementOffset;
+  target[o + 12] = t.velocityOffset;
+  target[o + 13] = t.accelerationOffset;
+}
+
+/** Bounds on the ground motion that the refinement thresholds use. */
+export interface GroundBounds {
+  /** Peak |ground acceleration|, m/s². */
+  pgaMS2: number;
+  /** Peak |ground jerk| of the linearly interpolated record, max |Δa|/dt, m/s³. */
+  jerkMS3: number;
+}
+
+export function groundBounds(accelMS2: Float64Array, dtS: number): GroundBounds {
+  let pgaMS2 = Math.abs(accelMS2[0]);
+  let jump = 0;
+  for (let i = 1; i < accelMS2.length; i++) {
+    pgaMS2 = Math.max(pgaMS2, Math.abs(accelMS2[i]));
+    jump = Math.max(jump, Math.abs(accelMS2[i] - accelMS2[i - 1]));
+  }
+  return { pgaMS2, jerkMS3: jump / dtS };
+}
+
+/**
+ * When to refine a peak between steps. Near its peak P* at t*, a quantity q falls off no faster
+ * than ½|q''|(t − t*)² (Taylor's theorem), so both ends of the step holding P* are above
+ * P* − ½h²·max|q''|. Bounding |q''| at the peak from the equation of motion (with a_rel = ü):
+ *   u'' = a_rel = −a_g − ω²u           → |u''| ≤ PGA + ω²P
+ *   v'' = ȧ_rel = −ȧ_g − 2ζωa_rel − ω²v → |v''| ≤ J + ω²P      (a_rel = 0 at a peak of v)
+ *   s'' (s = absolute acceleration)     → |s''| ≤ 2ζωJ + ω²(P + PGA)
+ * where J is the record's peak jerk. A step whose new end is below P·r − d (r = 1 − ½(ωh)²·m,
+ * d = ½h²·m·(bound's ground term), m = 1.1 a margin for the variation of q'' over the step)
+ * cannot hold a peak higher than the running one P, so only the others are examined.
+ */
+export function refinementThresholds(omegaRadS: number, cRadS: number, stepS: number, bounds: GroundBounds) {
+  const margin = 1.1;
+  const half = 0.5 * margin * stepS * stepS;
+  return {
+    ratio: 1 - half * omegaRadS * omegaRadS,
+    displacementOffset: half * bounds.pgaMS2,
+    velocityOffset: half * bounds.jerkMS3,
+    accelerationOffset: half * (cRadS * bounds.jerkMS3 + omegaRadS * omegaRadS * bounds.pgaMS2),
+  };
 }
 
 function checkSweep(

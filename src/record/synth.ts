@@ -1,0 +1,141 @@
+import { usageError } from '../errors.js';
+import { stepCoefficients } from '../oscillator/recurrence.js';
+import { STANDARD_GRAVITY_MS2 } from '../units.js';
+import { createRecord, type GroundRecord } from './record.js';
+
+/** Parameters of the stochastic ground-motion generator. Defaults describe a firm-soil site. */
+export interface SynthOptions {
+  /** Seed of the random number generator; the same seed gives the same record, bit for bit. */
+  seed: number;
+  /** Time step, s. Default 0.01. */
+  dtS?: number;
+  /** Duration, s. Default 30. */
+  durationS?: number;
+  /** Target peak ground acceleration, g; the record is scaled to it exactly. Default 0.3. */
+  pgaG?: number;
+  /** Kanai–Tajimi ground frequency f_g, Hz (default 2.5) and damping ζ_g (default 0.6). */
+  groundFrequencyHz?: number;
+  groundDamping?: number;
+  /** Clough–Penzien high-pass frequency f_f, Hz (default 0.25) and damping ζ_f (default 0.6). */
+  highPassFrequencyHz?: number;
+  highPassDamping?: number;
+  /** Envelope (Jennings, Housner and Tsai 1968): rise to t1, strong phase to t2, then exp(−c(t − t2)). */
+  riseEndS?: number;
+  strongEndS?: number;
+  decayPerS?: number;
+  name?: string;
+}
+
+/**
+ * Mulberry32, a small seeded 32-bit generator (Tommy Ettinger, public domain, 2017): reproducible
+ * across platforms because it uses only 32-bit integer arithmetic.
+ */
+export function seededUniform(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let t = state;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/** Standard normal variates by the Box–Muller transform (Box and Muller 1958). */
+export function seededNormal(seed: number): () => number {
+  const uniform = seededUniform(seed);
+  let spare: number | undefined;
+  return () => {
+    if (spare !== undefined) {
+      const value = spare;
+      spare = undefined;
+      return value;
+    }
+    let u = 0;
+    while (u === 0) u = uniform();
+    const v = uniform();
+    const radius = Math.sqrt(-2 * Math.log(u));
+    spare = radius * Math.sin(2 * Math.PI * v);
+    return radius * Math.cos(2 * Math.PI * v);
+  };
+}
+
+/**
+ * A synthetic ground-acceleration record: Gaussian white noise passed through the Kanai–Tajimi
+ * filter (Kanai 1957; Tajimi 1960) and the Clough–Penzien high-pass filter (Clough and Penzien,
+ * Dynamics of Structures, 1975), multiplied by the Jennings–Housner–Tsai (1968) intensity envelope
+ * and scaled to the target PGA. Each filter is a damped oscillator stepped exactly
+ * (piecewise-exact recurrence), so the filters' outputs are
+ *   a_KT = −(2ζ_gω_g ẋ_g + ω_g² x_g) with ẍ_g + 2ζ_gω_g ẋ_g + ω_g² x_g = −w(t), and
+ *   a = ẍ_f with ẍ_f + 2ζ_fω_f ẋ_f + ω_f² x_f = a_KT (the high-pass removes long-period drift).
+ * For demo and test data only: it is not a hazard-consistent ground motion.
+ */
+export function synthesizeRecord(options: SynthOptions): GroundRecord {
+  const dtS = options.dtS ?? 0.01;
+  const durationS = options.durationS ?? 30;
+  const pgaG = options.pgaG ?? 0.3;
+  const fg = options.groundFrequencyHz ?? 2.5;
+  const zg = options.groundDamping ?? 0.6;
+  const ff = options.highPassFrequencyHz ?? 0.25;
+  const zf = options.highPassDamping ?? 0.6;
+  const t1 = options.riseEndS ?? 0.1 * durationS;
+  const t2 = options.strongEndS ?? 0.45 * durationS;
+  const decay = options.decayPerS ?? 6 / durationS;
+  for (const [label, value] of Object.entries({ dtS, durationS, pgaG, fg, ff, zg, zf, decay })) {
+    if (!(value > 0) || !Number.isFinite(value))
+      throw usageError(`synth: ${label} must be positive, got ${value}`);
+  }
+  if (!(t1 >= 0 && t2 >= t1)) throw usageError('synth: the envelope needs 0 ≤ rise end ≤ strong-phase end');
+  if (fg >= 0.5 / dtS)
+    throw usageError(`synth: the ground frequency ${fg} Hz is above the Nyquist frequency`);
+  const n = Math.floor(durationS / dtS + 1e-9) + 1;
+  if (n > 50_000_000) throw usageError(`synth: ${n} samples is too many`);
+
+  const normal = seededNormal(options.seed);
+  // White noise of unit spectral density sampled at dt has variance 1/dt; the level does not
+  // matter because the record is scaled to its PGA at the end.
+  const noise = new Float64Array(n);
+  for (let i = 0; i < n; i++) noise[i] = normal();
+
+  const wg = 2 * Math.PI * fg;
+  const kt = stepCoefficients('piecewise-exact', wg, zg, dtS);
+  const wf = 2 * Math.PI * ff;
+  const cp = stepCoefficients('piecewise-exact', wf, zf, dtS);
+  const accel = new Float64Array(n);
+  let xg = 0;
+  let vg = 0;
+  let xf = 0;
+  let vf = 0;
+  let aktPrevious = 0;
+  for (let i = 1; i < n; i++) {
+    const xgNew = kt.uu * xg + kt.uv * vg + kt.up0 * noise[i - 1] + kt.up1 * noise[i];
+    const vgNew = kt.vu * xg + kt.vv * vg + kt.vp0 * noise[i - 1] + kt.vp1 * noise[i];
+    xg = xgNew;
+    vg = vgNew;
+    const akt = -(2 * zg * wg * vg + wg * wg * xg);
+    // The Clough–Penzien oscillator is driven by −a_KT in the recurrence's sign convention.
+    const xfNew = cp.uu * xf + cp.uv * vf - cp.up0 * aktPrevious - cp.up1 * akt;
+    const vfNew = cp.vu * xf + cp.vv * vf - cp.vp0 * aktPrevious - cp.vp1 * akt;
+    xf = xfNew;
+    vf = vfNew;
+    aktPrevious = akt;
+    accel[i] = akt - 2 * zf * wf * vf - wf * wf * xf;
+  }
+
+  let peak = 0;
+  for (let i = 0; i < n; i++) {
+    const t = i * dtS;
+    const envelope = t < t1 ? (t / t1) ** 2 : t <= t2 ? 1 : Math.exp(-decay * (t - t2));
+    accel[i] *= envelope;
+    peak = Math.max(peak, Math.abs(accel[i]));
+  }
+  const scale = peak > 0 ? (pgaG * STANDARD_GRAVITY_MS2) / peak : 0;
+  for (let i = 0; i < n; i++) accel[i] *= scale;
+  return createRecord({
+    name: options.name ?? `synthetic-${options.seed}`,
+    source: `quakesweep synth --seed ${options.seed}`,
+    dtS,
+    accelMS2: accel,
+    unitsRead: 'g',
+  });
+}
