@@ -99,7 +99,9 @@ export async function readRecordStream(
 export function unitWarnings(record: GroundRecord): string[] {
   const pgaMS2 = peakGroundAcceleration(record);
   const pgaG = pgaMS2 / STANDARD_GRAVITY_MS2;
-  if (pgaG <= 5 && pgaG >= 1e-4) return [];
+  // The bounds are compared with a part in 10¹² to spare, so a PGA of exactly 5 g or 0.0001 g
+  // that went through the unit factor is not warned about.
+  if (pgaG <= 5 * (1 + 1e-12) && pgaG >= 1e-4 * (1 - 1e-12)) return [];
   const readFactor = ACCELERATION_UNITS[record.unitsRead];
   const alternatives: string[] = [];
   for (const [unit, factor] of Object.entries(ACCELERATION_UNITS)) {
@@ -126,6 +128,7 @@ const FORTRAN_EXPONENT = /[dD]/;
 /** A decimal comma, read only in files separated by semicolons, where it cannot split fields. */
 const DECIMAL_COMMA = /^[+-]?(\d+,\d*|,\d+)([eEdD][+-]?\d+)?$/;
 /** Control characters and the replacement character that stands for bytes that are not UTF-8. */
+const LETTER = /\p{L}/u;
 const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
 
 /** `whitespace` is runs of spaces and tabs. */
@@ -133,8 +136,8 @@ type Separator = ',' | ';' | 'whitespace';
 
 /**
  * Choose the separator from the first line that holds only numbers and separators (so a header
- * written in words cannot mislead it): a semicolon if it has one, else a comma, else runs of
- * spaces and tabs. When `partial`, the text is cut mid-stream and its last line is not looked at.
+ * written in words cannot mislead it): a semicolon if it has one, else tabs and spaces if it
+ * has a tab, else a comma, else runs of spaces. When `partial`, the text is cut mid-stream and its last line is not looked at.
  */
 function sniffSeparator(text: string, skip: number, partial = false): Separator {
   const lines = text.split(/\r\n|\n|\r/, 2000).slice(skip);
@@ -151,6 +154,7 @@ function sniffSeparator(text: string, skip: number, partial = false): Separator 
 
 function separatorOf(line: string): Separator {
   if (line.includes(';')) return ';';
+  if (line.includes('\t')) return 'whitespace';
   if (line.includes(',')) return ',';
   return 'whitespace';
 }
@@ -234,7 +238,7 @@ class RecordReader {
       this.lastDataLine = line;
       return;
     }
-    if (this.columns === 0 && this.headerLine === 0 && !fields.every((f) => this.isNumber(f))) {
+    if (this.columns === 0 && this.headerLine === 0 && this.isHeader(fields)) {
       this.headerLine = line; // one header row of names is allowed before the data
       return;
     }
@@ -302,6 +306,11 @@ class RecordReader {
     }
     if (i === 0) this.timeFirstS = timeS;
     this.timePreviousS = timeS;
+  }
+
+  /** A row of names: not all numbers, and some letters (so `0\t0,5` is refused as data, not skipped). */
+  private isHeader(fields: string[]): boolean {
+    return !fields.every((f) => this.isNumber(f)) && fields.some((f) => LETTER.test(f));
   }
 
   private isNumber(text: string): boolean {
