@@ -23,7 +23,10 @@ export function addRecordOptions(command: Command): Command {
       'unit of the acceleration values: g, m/s2, cm/s2 (gal), mm/s2, in/s2, ft/s2 (required)',
     )
     .option('--dt <seconds>', 'time step, s, for files without a time column (single and wrapped layouts)')
-    .option('--column <n>', '1-based column holding the acceleration in a table; column 1 is time (default: the last)')
+    .option(
+      '--column <n>',
+      '1-based column holding the acceleration in a table; column 1 is time (default: the last)',
+    )
     .option('--skip <n>', 'header lines to skip before the data', '0')
     .option(
       '--layout <layout>',
@@ -56,8 +59,14 @@ export function recordReadOptions(source: string, options: RecordCliOptions): Re
 export async function loadRecord(source: string, options: RecordCliOptions): Promise<GroundRecord> {
   const readOptions = recordReadOptions(source, options);
   const stream = source === '-' ? process.stdin : createReadStream(source);
-  const record = await readRecordStream(stream, readOptions);
-  for (const warning of unitWarnings(record)) process.stderr.write(`quakesweep: warning: ${source}: ${warning}\n`);
+  const record = await readRecordStream(stream, readOptions).catch((error: unknown) => {
+    // Errors of reading (a folder, say) come without the path; give them the one the user typed.
+    const errno = error as NodeJS.ErrnoException;
+    if (typeof errno?.code === 'string' && !errno.path) errno.path = source;
+    throw error;
+  });
+  for (const warning of unitWarnings(record))
+    process.stderr.write(`quakesweep: warning: ${source}: ${warning}\n`);
   return record;
 }
 

@@ -127,8 +127,10 @@ const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eEdD][+-]?\d+)?$/;
 const FORTRAN_EXPONENT = /[dD]/;
 /** A decimal comma, read only in files separated by semicolons, where it cannot split fields. */
 const DECIMAL_COMMA = /^[+-]?(\d+,\d*|,\d+)([eEdD][+-]?\d+)?$/;
-/** Control characters and the replacement character that stands for bytes that are not UTF-8. */
+/** A letter of any script, which a header row of names has and a row of numbers has not. */
 const LETTER = /\p{L}/u;
+/** Control characters and the replacement character that stands for bytes that are not UTF-8. */
+// biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is the point
 const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
 
 /** `whitespace` is runs of spaces and tabs. */
@@ -245,7 +247,10 @@ class RecordReader {
     if (this.columns === 0) this.firstRow(fields.length, line);
     if (fields.length !== this.columns) {
       const found = fields.length === 1 ? '1 column' : `${fields.length} columns`;
-      throw this.error(`expected ${this.columns} column${this.columns === 1 ? '' : 's'}, found ${found}`, line);
+      throw this.error(
+        `expected ${this.columns} column${this.columns === 1 ? '' : 's'}, found ${found}`,
+        line,
+      );
     }
     for (let i = 0; i < fields.length; i++) {
       if (i === 0 || i === this.valueColumn - 1) continue;
@@ -297,7 +302,8 @@ class RecordReader {
       const tolerance = Math.min(printedResolution(text) * 1.01, 0.5 * meanStepS) + 1e-6 * meanStepS;
       const stepS = timeS - this.timePreviousS;
       if (Math.abs(stepS - meanStepS) > tolerance) {
-        const hint = this.layout === 'auto' ? ' (if the values are wrapped several a line, use --layout wrapped)' : '';
+        const hint =
+          this.layout === 'auto' ? ' (if the values are wrapped several a line, use --layout wrapped)' : '';
         throw this.error(
           `the time step changes here: ${formatS(stepS)} s after ${formatS(meanStepS)} s; the step must be uniform${hint}`,
           line,
@@ -327,7 +333,9 @@ class RecordReader {
     }
     if (!Number.isNaN(value)) return value;
     if (text === '') throw this.error(`empty value in column ${column}`, line);
-    const hint = /^[+-]?\d*,\d+$/.test(text) ? ' (decimal commas are read only in files separated by semicolons)' : '';
+    const hint = /^[+-]?\d*,\d+$/.test(text)
+      ? ' (decimal commas are read only in files separated by semicolons)'
+      : '';
     throw this.error(`${quote(text)} is not a number${hint}`, line);
   }
 
@@ -361,9 +369,12 @@ class RecordReader {
     if (this.count === 0) {
       if (this.headerLine > 0) throw this.error('a header row but no values after it', this.headerLine);
       const skipped = (o.skip ?? 0) > 0 ? ` after skipping ${o.skip} lines` : '';
-      throw inputError(`no values found${skipped}: the file is empty or holds only comments and blank lines`, {
-        file: o.source,
-      });
+      throw inputError(
+        `no values found${skipped}: the file is empty or holds only comments and blank lines`,
+        {
+          file: o.source,
+        },
+      );
     }
     if (this.count < 2)
       throw this.error('only 1 sample; a record needs at least 2', this.lastDataLine || this.firstDataLine);
@@ -371,7 +382,9 @@ class RecordReader {
     if (this.columns > 1) {
       const columnDtS = (this.timePreviousS - this.timeFirstS) / (this.count - 1);
       if (dtS !== undefined && Math.abs(dtS - columnDtS) > 1e-4 * columnDtS)
-        throw usageError(`--dt ${dtS} disagrees with the step of ${o.source}'s time column, ${formatS(columnDtS)} s`);
+        throw inputError(`--dt ${dtS} disagrees with the time column's step, ${formatS(columnDtS)} s`, {
+          file: o.source,
+        });
       dtS = columnDtS;
     }
     const factor = ACCELERATION_UNITS[o.units];

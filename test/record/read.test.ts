@@ -144,7 +144,9 @@ describe('decimal commas', () => {
   it('refuses a comma value in a tab file rather than guess', () => {
     const error = failure(() => read('0\t0,5\n0.01\t1,5\n'));
     expect(error.line).toBe(1);
-    expect(error.message).toMatch(/'0,5' is not a number \(decimal commas are read only in files separated by semicolons\)/);
+    expect(error.message).toMatch(
+      /'0,5' is not a number \(decimal commas are read only in files separated by semicolons\)/,
+    );
   });
 });
 
@@ -238,7 +240,9 @@ describe('bad input is refused with the line', () => {
     ['NUL bytes', '0.1\n0.2\n\u0000\u0001\u0002\n', 3, /binary data, not a text record/],
     ['bytes that are not UTF-8', '0.1\n\ufffd\ufffdP\n', 2, /binary data/],
   ])('%s', (_, text, line, message) => {
-    const error = failure(() => read(text, { dtS: text.includes(',') || text.includes(' ') ? undefined : 0.01 }));
+    const error = failure(() =>
+      read(text, { dtS: text.includes(',') || text.includes(' ') ? undefined : 0.01 }),
+    );
     expect(error.kind).toBe('input');
     expect(error.file).toBe('rec.csv');
     expect(error.line).toBe(line);
