@@ -39,12 +39,13 @@ export function readRecordText(text: string, options: ReadOptions): GroundRecord
   return reader.finish();
 }
 
-/** How much of a stream is looked at to choose the separator. */
+/** How much of a stream is looked at to choose the separator: this much, and this many lines after --skip. */
 const SNIFF_BYTES = 64 * 1024;
+const SNIFF_LINES = 100;
 
 /**
- * Read a record from a stream of text or bytes (a file, standard input). The first 64 KiB choose
- * the separator; then everything goes through csv-parse's stream interface, row by row, into a
+ * Read a record from a stream of text or bytes (a file, standard input). The first 64 KiB, and
+ * at least 100 lines past --skip, choose the separator; then everything goes through csv-parse's stream interface, row by row, into a
  * growing Float64Array, so memory holds the samples and one chunk of text, never a list of lines.
  */
 export async function readRecordStream(
@@ -57,7 +58,9 @@ export async function readRecordStream(
   const decoder = new TextDecoder('utf-8');
   let headText = '';
   let ended = false;
-  while (headText.length < SNIFF_BYTES) {
+  const skip = options.skip ?? 0;
+  let headLines = 0;
+  while (headText.length < SNIFF_BYTES || headLines < skip + SNIFF_LINES) {
     const next = await chunks.next();
     if (next.done) {
       ended = true;
@@ -65,9 +68,11 @@ export async function readRecordStream(
     }
     const chunk = typeof next.value === 'string' ? next.value : toBuffer(next.value);
     head.push(chunk);
-    headText += typeof chunk === 'string' ? chunk : decoder.decode(chunk, { stream: true });
+    const text = typeof chunk === 'string' ? chunk : decoder.decode(chunk, { stream: true });
+    headText += text;
+    for (let at = text.indexOf('\n'); at !== -1; at = text.indexOf('\n', at + 1)) headLines++;
   }
-  const separator = sniffSeparator(headText, options.skip ?? 0, !ended);
+  const separator = sniffSeparator(headText, skip, !ended);
   async function* all(): AsyncGenerator<string | Buffer> {
     try {
       yield* head;
@@ -142,7 +147,7 @@ type Separator = ',' | ';' | 'whitespace';
  * has a tab, else a comma, else runs of spaces. When `partial`, the text is cut mid-stream and its last line is not looked at.
  */
 function sniffSeparator(text: string, skip: number, partial = false): Separator {
-  const lines = text.split(/\r\n|\n|\r/, 2000).slice(skip);
+  const lines = text.split(/\r\n|\n|\r/, skip + 2000).slice(skip);
   if (partial) lines.pop();
   let firstText: string | undefined;
   for (const raw of lines) {

@@ -91,6 +91,17 @@ describe('layouts', () => {
     expect(record.dtS).toBe(0.02);
   });
 
+  it('chooses the separator past a long --skip header, in memory and through the stream', async () => {
+    // 3000 header lines with commas (over 64 KiB), then space-separated data.
+    const header = Array.from(
+      { length: 3000 },
+      (_, i) => `header line ${i}, of the invented file, ${'x'.repeat(20)}`,
+    );
+    const text = `${header.join('\n')}\n0  1\n0.5  2\n1.0  3\n`;
+    expect(values(read(text, { skip: 3000 }))).toEqual([1, 2, 3]);
+    expect(values(await readInPieces(text, 4096, { skip: 3000 }))).toEqual([1, 2, 3]);
+  });
+
   it('skips --skip lines before a table too, and counts lines from the top of the file', () => {
     const text = 'junk: 1,2;3\nmore junk\n0,1\n0.1,2\n0.2,x\n';
     expect(failure(() => read(text, { skip: 2 })).line).toBe(5);
