@@ -1,7 +1,7 @@
 import { createReadStream } from 'node:fs';
 import type { Command } from 'commander';
 import { usageError } from '../errors.js';
-import { type ReadOptions, type RecordLayout, readRecordStream } from '../record/read.js';
+import { type ReadOptions, type RecordLayout, readRecordStream, unitWarnings } from '../record/read.js';
 import type { GroundRecord } from '../record/record.js';
 import { parseAccelerationUnit } from '../units.js';
 
@@ -22,12 +22,15 @@ export function addRecordOptions(command: Command): Command {
       '--units <unit>',
       'unit of the acceleration values: g, m/s2, cm/s2 (gal), mm/s2, in/s2, ft/s2 (required)',
     )
-    .option('--dt <seconds>', 'time step, s, for files without a time column')
-    .option('--column <n>', '1-based column holding the acceleration (default: the last)')
+    .option('--dt <seconds>', 'time step, s, for files without a time column (single and wrapped layouts)')
+    .option(
+      '--column <n>',
+      '1-based column holding the acceleration in a table; column 1 is time (default: the last)',
+    )
     .option('--skip <n>', 'header lines to skip before the data', '0')
     .option(
       '--layout <layout>',
-      'auto, single (one value a line), table (time and values), wrapped (several values a line)',
+      'auto, single (one value a line), table (time, then values), wrapped (several values a line, row order)',
       'auto',
     )
     .option('--name <name>', "the record's name in outputs (default: the file's base name)");
@@ -49,11 +52,22 @@ export function recordReadOptions(source: string, options: RecordCliOptions): Re
   };
 }
 
-/** Open the file (or standard input for `-`) and read it as a record. */
+/**
+ * Open the file (or standard input for `-`) and read it as a record, printing on stderr any
+ * warning that the units look wrong.
+ */
 export async function loadRecord(source: string, options: RecordCliOptions): Promise<GroundRecord> {
   const readOptions = recordReadOptions(source, options);
   const stream = source === '-' ? process.stdin : createReadStream(source);
-  return readRecordStream(stream, readOptions);
+  const record = await readRecordStream(stream, readOptions).catch((error: unknown) => {
+    // Errors of reading (a folder, say) come without the path; give them the one the user typed.
+    const errno = error as NodeJS.ErrnoException;
+    if (typeof errno?.code === 'string' && !errno.path) errno.path = source;
+    throw error;
+  });
+  for (const warning of unitWarnings(record))
+    process.stderr.write(`quakesweep: warning: ${source}: ${warning}\n`);
+  return record;
 }
 
 export function positiveNumber(option: string, text: string): number {

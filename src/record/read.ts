@@ -1,8 +1,15 @@
+import { pipeline } from 'node:stream/promises';
+import { CsvError, type Options as CsvOptions, parse } from 'csv-parse';
+import { parse as parseSync } from 'csv-parse/sync';
 import { inputError, usageError } from '../errors.js';
-import { ACCELERATION_UNITS, type AccelerationUnit } from '../units.js';
-import { createRecord, type GroundRecord } from './record.js';
+import { ACCELERATION_UNITS, type AccelerationUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
+import { createRecord, type GroundRecord, peakGroundAcceleration } from './record.js';
 
-/** How the values are laid out in the file. `auto` tells single-column from time–value files. */
+/**
+ * How the values are laid out in the file. `single`: one acceleration value a line. `table`: time
+ * in column 1 and one or more value columns. `wrapped`: values several to a line, read in row
+ * order. `auto` tells single from table by the number of columns of the first data row.
+ */
 export type RecordLayout = 'auto' | 'single' | 'table' | 'wrapped';
 
 export interface ReadOptions {
@@ -10,7 +17,7 @@ export interface ReadOptions {
   units: AccelerationUnit;
   /** Time step, s, for files without a time column (single and wrapped layouts). */
   dtS?: number;
-  /** 1-based column holding the acceleration (default: the last column of a table). */
+  /** 1-based column holding the acceleration in a table (column 1 is time; default: the last). */
   column?: number;
   /** Lines to skip before the data (headers of fixed length). */
   skip?: number;
@@ -23,195 +30,396 @@ export interface ReadOptions {
 
 /** Read a record from text already in memory (tests and the library API). */
 export function readRecordText(text: string, options: ReadOptions): GroundRecord {
-  const parser = new RecordParser(options);
-  parser.push(text);
-  return parser.finish();
+  const reader = new RecordReader(options);
+  try {
+    parseSync(text, csvOptions(sniffSeparator(text, options.skip ?? 0), reader));
+  } catch (error) {
+    throw asInputError(error, options.source);
+  }
+  return reader.finish();
 }
 
-/** Read a record from a stream of text or bytes (a file, standard input), chunk by chunk. */
+/** How much of a stream is looked at to choose the separator: this much, and this many lines after --skip. */
+const SNIFF_BYTES = 64 * 1024;
+const SNIFF_LINES = 100;
+
+/**
+ * Read a record from a stream of text or bytes (a file, standard input). The first 64 KiB, and
+ * at least 100 lines past --skip, choose the separator; then everything goes through csv-parse's stream interface, row by row, into a
+ * growing Float64Array, so memory holds the samples and one chunk of text, never a list of lines.
+ */
 export async function readRecordStream(
   input: AsyncIterable<string | Uint8Array>,
   options: ReadOptions,
 ): Promise<GroundRecord> {
-  const parser = new RecordParser(options);
+  const reader = new RecordReader(options);
+  const chunks = input[Symbol.asyncIterator]();
+  const head: (string | Buffer)[] = [];
   const decoder = new TextDecoder('utf-8');
-  for await (const chunk of input)
-    parser.push(typeof chunk === 'string' ? chunk : decoder.decode(chunk, { stream: true }));
-  parser.push(decoder.decode());
-  return parser.finish();
+  let headText = '';
+  let ended = false;
+  const skip = options.skip ?? 0;
+  let headLines = 0;
+  while (headText.length < SNIFF_BYTES || headLines < skip + SNIFF_LINES) {
+    const next = await chunks.next();
+    if (next.done) {
+      ended = true;
+      break;
+    }
+    const chunk = typeof next.value === 'string' ? next.value : toBuffer(next.value);
+    head.push(chunk);
+    const text = typeof chunk === 'string' ? chunk : decoder.decode(chunk, { stream: true });
+    headText += text;
+    for (let at = text.indexOf('\n'); at !== -1; at = text.indexOf('\n', at + 1)) headLines++;
+  }
+  const separator = sniffSeparator(headText, skip, !ended);
+  async function* all(): AsyncGenerator<string | Buffer> {
+    try {
+      yield* head;
+      if (ended) return;
+      for (;;) {
+        const next = await chunks.next();
+        if (next.done) return;
+        yield typeof next.value === 'string' ? next.value : toBuffer(next.value);
+      }
+    } finally {
+      if (!ended) await chunks.return?.(); // close the file when reading stops early
+    }
+  }
+  try {
+    await pipeline(all, parse(csvOptions(separator, reader)), async (rows: AsyncIterable<unknown>) => {
+      for await (const _ of rows); // every row is taken in on_record; nothing comes out
+    });
+  } catch (error) {
+    throw asInputError(error, options.source);
+  }
+  return reader.finish();
 }
 
-const SEPARATOR = /[\s,;]+/;
+/**
+ * Warnings (not errors) when the peak read looks like the wrong unit: a PGA above 5 g or below
+ * 0.0001 g (common practice: recorded PGAs lie well inside this range). Returned as data; the CLI
+ * prints them.
+ */
+export function unitWarnings(record: GroundRecord): string[] {
+  const pgaMS2 = peakGroundAcceleration(record);
+  const pgaG = pgaMS2 / STANDARD_GRAVITY_MS2;
+  // The bounds are compared with a part in 10¹² to spare, so a PGA of exactly 5 g or 0.0001 g
+  // that went through the unit factor is not warned about.
+  if (pgaG <= 5 * (1 + 1e-12) && pgaG >= 1e-4 * (1 - 1e-12)) return [];
+  const readFactor = ACCELERATION_UNITS[record.unitsRead];
+  const alternatives: string[] = [];
+  for (const [unit, factor] of Object.entries(ACCELERATION_UNITS)) {
+    if (unit === 'gal' || factor === readFactor) continue;
+    const altG = (pgaMS2 / readFactor) * (factor / STANDARD_GRAVITY_MS2);
+    if (altG >= 0.01 && altG <= 2) alternatives.push(`in ${unit} it would be ${altG.toPrecision(3)} g`);
+  }
+  const bound = pgaG > 5 ? 'above 5 g' : 'below 0.0001 g';
+  const hint = alternatives.length > 0 ? `; ${alternatives.join(', ')}` : '';
+  return [
+    `PGA ${pgaG.toPrecision(3)} g read in ${record.unitsRead} is ${bound}: are the units right?${hint}`,
+  ];
+}
 
-/** Incremental line parser: holds the values read so far in a growing Float64Array. */
-class RecordParser {
-  private readonly options: ReadOptions;
-  private pending = '';
-  private lineNumber = 0;
-  private firstChunk = true;
-  private values: Float64Array = new Float64Array(4096);
+/** A number, with Fortran exponents (1.5D-03) accepted; NaN for anything else, NaN and ±Infinity included. */
+export function parseNumber(text: string): number {
+  if (!NUMBER.test(text)) return Number.NaN;
+  const value = Number(text.replace(FORTRAN_EXPONENT, 'e'));
+  return Number.isFinite(value) ? value : Number.NaN;
+}
+
+const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eEdD][+-]?\d+)?$/;
+const FORTRAN_EXPONENT = /[dD]/;
+/** A decimal comma, read only in files separated by semicolons, where it cannot split fields. */
+const DECIMAL_COMMA = /^[+-]?(\d+,\d*|,\d+)([eEdD][+-]?\d+)?$/;
+/** A letter of any script, which a header row of names has and a row of numbers has not. */
+const LETTER = /\p{L}/u;
+/** Control characters and the replacement character that stands for bytes that are not UTF-8. */
+// biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is the point
+const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
+
+/** `whitespace` is runs of spaces and tabs. */
+type Separator = ',' | ';' | 'whitespace';
+
+/**
+ * Choose the separator from the first line that holds only numbers and separators (so a header
+ * written in words cannot mislead it): a semicolon if it has one, else tabs and spaces if it
+ * has a tab, else a comma, else runs of spaces. When `partial`, the text is cut mid-stream and its last line is not looked at.
+ */
+function sniffSeparator(text: string, skip: number, partial = false): Separator {
+  const lines = text.split(/\r\n|\n|\r/, skip + 2000).slice(skip);
+  if (partial) lines.pop();
+  let firstText: string | undefined;
+  for (const raw of lines) {
+    const line = raw.replace(/^\ufeff/, '').trim();
+    if (line === '' || line.startsWith('#')) continue;
+    if (/^[0-9eEdD+\-.,;\s]+$/.test(line) && /\d/.test(line)) return separatorOf(line);
+    firstText ??= line;
+  }
+  return firstText === undefined ? ',' : separatorOf(firstText);
+}
+
+function separatorOf(line: string): Separator {
+  if (line.includes(';')) return ';';
+  if (line.includes('\t')) return 'whitespace';
+  if (line.includes(',')) return ',';
+  return 'whitespace';
+}
+
+function csvOptions(separator: Separator, reader: RecordReader): CsvOptions {
+  reader.separator = separator;
+  return {
+    delimiter: separator === 'whitespace' ? [' ', '\t'] : separator,
+    trim: separator !== 'whitespace',
+    bom: true,
+    comment: '#',
+    quote: false,
+    skip_empty_lines: true,
+    relax_column_count: true,
+    record_delimiter: ['\r\n', '\n', '\r'],
+    from_line: (reader.options.skip ?? 0) + 1,
+    max_record_size: MAX_LINE_CHARACTERS,
+    on_record: (fields: string[], info) => {
+      reader.row(fields, info.lines);
+      return null;
+    },
+  };
+}
+
+const MAX_LINE_CHARACTERS = 1_000_000;
+
+function asInputError(error: unknown, file: string): unknown {
+  if (!(error instanceof CsvError)) return error;
+  const line = typeof error.lines === 'number' ? error.lines : undefined;
+  if (error.code === 'CSV_MAX_RECORD_SIZE')
+    return inputError(`a line longer than ${MAX_LINE_CHARACTERS} characters: is this a text record?`, {
+      file,
+      line,
+    });
+  return inputError(`cannot read this line (${error.message.split('\n')[0]})`, { file, line });
+}
+
+function toBuffer(chunk: Uint8Array): Buffer {
+  return Buffer.isBuffer(chunk) ? chunk : Buffer.from(chunk.buffer, chunk.byteOffset, chunk.byteLength);
+}
+
+/** Takes rows one at a time and keeps the samples in a Float64Array grown by doubling. */
+class RecordReader {
+  readonly options: ReadOptions;
+  separator: Separator = ',';
+  private readonly layout: RecordLayout;
+  private values = new Float64Array(16384);
   private count = 0;
-  private times: Float64Array | undefined;
-  private columns = 0;
+  private headerLine = 0;
   private firstDataLine = 0;
+  private lastDataLine = 0;
+  private columns = 0;
+  private valueColumn = 0;
+  /** In a semicolon file, whether decimals are written with `.` or `,` (a file may not mix them). */
+  private decimalMark: '.' | ',' | undefined;
+  private decimalMarkLine = 0;
+  private timeFirstS = 0;
+  private timePreviousS = 0;
 
   constructor(options: ReadOptions) {
     this.options = options;
-    const layout = options.layout ?? 'auto';
-    if ((layout === 'single' || layout === 'wrapped') && options.dtS === undefined) {
-      throw usageError(`the ${layout} layout has no time column: give the time step with --dt`);
-    }
-    if (options.dtS !== undefined && !(options.dtS > 0 && Number.isFinite(options.dtS))) {
+    this.layout = options.layout ?? 'auto';
+    if ((this.layout === 'single' || this.layout === 'wrapped') && options.dtS === undefined)
+      throw usageError(`the ${this.layout} layout has no time column: give the time step with --dt`);
+    if (options.dtS !== undefined && !(options.dtS > 0 && Number.isFinite(options.dtS)))
       throw usageError(`--dt must be a positive number of seconds, got ${options.dtS}`);
-    }
+    if (this.layout === 'wrapped' && options.column !== undefined)
+      throw usageError('--column does not apply to the wrapped layout (values are read in row order)');
+    if (options.column !== undefined && !(Number.isInteger(options.column) && options.column >= 1))
+      throw usageError(`--column must be a whole number ≥ 1, got ${options.column}`);
   }
 
-  push(text: string): void {
-    if (this.firstChunk && text.length > 0) {
-      this.firstChunk = false;
-      if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
-    }
-    const lines = (this.pending + text).split('\n');
-    this.pending = lines.pop() ?? '';
-    for (const line of lines) this.line(line);
-  }
-
-  finish(): GroundRecord {
-    if (this.pending.length > 0) this.line(this.pending);
-    this.pending = '';
-    const o = this.options;
-    if (this.count === 0) throw inputError('no acceleration values found', { file: o.source });
-    const accel = this.values.slice(0, this.count);
-    const factor = ACCELERATION_UNITS[o.units];
-    for (let i = 0; i < accel.length; i++) accel[i] *= factor;
-    let dtS = o.dtS;
-    if (this.times !== undefined) {
-      dtS = this.uniformStep();
-      if (o.dtS !== undefined && Math.abs(o.dtS - dtS) > 1e-6 * dtS) {
-        throw usageError(`--dt ${o.dtS} disagrees with the time column's step ${dtS} in ${o.source}`);
-      }
-    }
-    if (dtS === undefined)
-      throw usageError(`${o.source} has one value per line: give the time step with --dt`);
-    if (accel.length < 2)
-      throw inputError(`only ${accel.length} sample found; a record needs at least 2`, { file: o.source });
-    return createRecord({
-      name: o.name ?? baseName(o.source),
-      source: o.source,
-      dtS,
-      accelMS2: accel,
-      unitsRead: o.units,
-    });
-  }
-
-  private line(raw: string): void {
-    this.lineNumber++;
-    if (this.lineNumber <= (this.options.skip ?? 0)) return;
-    const line = raw.endsWith('\r') ? raw.slice(0, -1) : raw;
-    const trimmed = line.trim();
-    if (trimmed === '' || trimmed.startsWith('#')) return;
-    const fields = trimmed.split(SEPARATOR).filter((field) => field !== '');
-    const numbers = fields.map(parseNumber);
-    const layout = this.options.layout ?? 'auto';
-    if (numbers.some((value) => Number.isNaN(value))) {
-      if (this.count === 0 && this.firstDataLine === 0 && layout !== 'wrapped') {
-        this.firstDataLine = -1; // one header row allowed before the data
-        return;
-      }
-      const bad = fields[numbers.findIndex((value) => Number.isNaN(value))];
-      throw inputError(`'${bad}' is not a number`, { file: this.options.source, line: this.lineNumber });
-    }
-    if (layout === 'wrapped') {
-      for (const value of numbers) this.add(value);
+  row(rawFields: string[], line: number): void {
+    const fields = this.separator === 'whitespace' ? rawFields.filter((f) => f !== '') : rawFields;
+    if (fields.length === 0 || (fields.length === 1 && fields[0] === '')) return;
+    if (fields[0].startsWith('#')) return;
+    for (const field of fields)
+      if (BINARY.test(field)) throw this.error('binary data, not a text record', line);
+    if (this.layout === 'wrapped') {
+      for (let i = 0; i < fields.length; i++) this.add(this.number(fields[i], line, i + 1));
+      this.lastDataLine = line;
       return;
     }
-    if (this.columns === 0) {
-      this.columns = numbers.length;
-      if (layout === 'single' && this.columns !== 1) {
-        throw inputError(`expected one value per line, found ${this.columns}`, {
-          file: this.options.source,
-          line: this.lineNumber,
-        });
-      }
-      if (this.columns > 1) this.times = new Float64Array(4096);
-    } else if (numbers.length !== this.columns) {
-      throw inputError(`expected ${this.columns} columns, found ${numbers.length}`, {
-        file: this.options.source,
-        line: this.lineNumber,
-      });
+    if (this.columns === 0 && this.headerLine === 0 && this.isHeader(fields)) {
+      this.headerLine = line; // one header row of names is allowed before the data
+      return;
+    }
+    if (this.columns === 0) this.firstRow(fields.length, line);
+    if (fields.length !== this.columns) {
+      const found = fields.length === 1 ? '1 column' : `${fields.length} columns`;
+      throw this.error(
+        `expected ${this.columns} column${this.columns === 1 ? '' : 's'}, found ${found}`,
+        line,
+      );
+    }
+    for (let i = 0; i < fields.length; i++) {
+      if (i === 0 || i === this.valueColumn - 1) continue;
+      this.number(fields[i], line, i + 1); // columns not used must still be numbers
     }
     if (this.columns === 1) {
-      this.add(numbers[0]);
+      this.add(this.number(fields[0], line, 1));
+    } else {
+      this.time(this.number(fields[0], line, 1), fields[0], line);
+      this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn));
+    }
+    this.lastDataLine = line;
+  }
+
+  private firstRow(columns: number, line: number): void {
+    const o = this.options;
+    this.columns = columns;
+    this.firstDataLine = line;
+    if (this.layout === 'single' && columns !== 1)
+      throw this.error(`the single layout has one value a line, found ${columns} columns`, line);
+    if (this.layout === 'table' && columns < 2)
+      throw this.error('the table layout needs a time column and a value column, found 1 column', line);
+    if (columns === 1) {
+      if (o.column !== undefined && o.column !== 1)
+        throw usageError(`--column ${o.column}: ${o.source} has one value a line`);
+      if (o.dtS === undefined)
+        throw usageError(`${o.source} has one value a line and no time column: give the time step with --dt`);
+      this.valueColumn = 1;
       return;
     }
-    const column = this.options.column ?? this.columns;
-    if (column < 1 || column > this.columns || column === 1) {
-      throw usageError(`--column ${column}: the table has ${this.columns} columns and column 1 is time`);
+    const column = o.column ?? columns;
+    if (column === 1 || column > columns)
+      throw usageError(
+        `--column ${column}: ${o.source} has ${columns} columns; column 1 is time, so choose 2 to ${columns}`,
+      );
+    this.valueColumn = column;
+  }
+
+  /** Check that the time column advances by one uniform step. */
+  private time(timeS: number, text: string, line: number): void {
+    const i = this.count;
+    if (i > 0 && !(timeS > this.timePreviousS)) {
+      throw this.error(`time does not increase: ${text} s after ${this.timePreviousS} s`, line);
     }
-    this.addTimed(numbers[0], numbers[column - 1]);
-  }
-
-  private add(value: number): void {
-    if (this.count === this.values.length) this.values = grow(this.values);
-    this.values[this.count++] = value;
-  }
-
-  private timeLines: number[] = [];
-
-  private addTimed(time: number, value: number): void {
-    if (this.times === undefined) return;
-    if (this.count === this.times.length) this.times = grow(this.times);
-    this.times[this.count] = time;
-    if (this.count < 2 || this.timeLines.length < 2) this.timeLines.push(this.lineNumber);
-    this.add(value);
-    this.checkStep(time);
-  }
-
-  private step = 0;
-
-  private checkStep(time: number): void {
-    const times = this.times!;
-    const i = this.count - 1;
-    if (i === 0) return;
-    const delta = time - times[i - 1];
-    if (i === 1) {
-      if (!(delta > 0))
-        throw inputError(`time does not increase (${times[0]} then ${time})`, {
-          file: this.options.source,
-          line: this.lineNumber,
-        });
-      this.step = delta;
-      return;
+    if (i >= 2) {
+      // Times are printed to a few decimals: allow a step one last printed digit off the mean,
+      // but never half a step, which is a real change whatever the rounding.
+      const meanStepS = (this.timePreviousS - this.timeFirstS) / (i - 1);
+      const tolerance = Math.min(printedResolution(text) * 1.01, 0.5 * meanStepS) + 1e-6 * meanStepS;
+      const stepS = timeS - this.timePreviousS;
+      if (Math.abs(stepS - meanStepS) > tolerance) {
+        const hint =
+          this.layout === 'auto' ? ' (if the values are wrapped several a line, use --layout wrapped)' : '';
+        throw this.error(
+          `the time step changes here: ${formatS(stepS)} s after ${formatS(meanStepS)} s; the step must be uniform${hint}`,
+          line,
+        );
+      }
     }
-    const expected = times[0] + i * this.step;
-    if (Math.abs(time - expected) > 1e-3 * this.step) {
-      throw inputError(
-        `the time step changes here: ${time} s where ${expected.toPrecision(8)} s was expected (step ${this.step} s)`,
-        {
-          file: this.options.source,
-          line: this.lineNumber,
-        },
+    if (i === 0) this.timeFirstS = timeS;
+    this.timePreviousS = timeS;
+  }
+
+  /** A row of names: not all numbers, and some letters (so `0\t0,5` is refused as data, not skipped). */
+  private isHeader(fields: string[]): boolean {
+    return !fields.every((f) => this.isNumber(f)) && fields.some((f) => LETTER.test(f));
+  }
+
+  private isNumber(text: string): boolean {
+    return NUMBER.test(text) || (this.separator === ';' && DECIMAL_COMMA.test(text));
+  }
+
+  private number(text: string, line: number, column: number): number {
+    let value = parseNumber(text);
+    if (Number.isNaN(value) && this.separator === ';' && DECIMAL_COMMA.test(text)) {
+      this.mark(',', line);
+      value = parseNumber(text.replace(',', '.'));
+    } else if (this.separator === ';' && text.includes('.')) {
+      this.mark('.', line);
+    }
+    if (!Number.isNaN(value)) return value;
+    if (text === '') throw this.error(`empty value in column ${column}`, line);
+    const hint = /^[+-]?\d*,\d+$/.test(text)
+      ? ' (decimal commas are read only in files separated by semicolons)'
+      : '';
+    throw this.error(`${quote(text)} is not a number${hint}`, line);
+  }
+
+  private mark(mark: '.' | ',', line: number): void {
+    if (this.decimalMark === undefined) {
+      this.decimalMark = mark;
+      this.decimalMarkLine = line;
+    } else if (this.decimalMark !== mark) {
+      throw this.error(
+        `a decimal '${mark}' here, but line ${this.decimalMarkLine} used '${this.decimalMark}'; a file must use one decimal mark`,
+        line,
       );
     }
   }
 
-  private uniformStep(): number {
-    const times = this.times!;
-    if (this.count < 2) return Number.NaN;
-    return (times[this.count - 1] - times[0]) / (this.count - 1);
+  private add(value: number): void {
+    if (this.count === this.values.length) {
+      const bigger = new Float64Array(this.values.length * 2);
+      bigger.set(this.values);
+      this.values = bigger;
+    }
+    this.values[this.count++] = value;
+  }
+
+  private error(message: string, line: number) {
+    return inputError(message, { file: this.options.source, line });
+  }
+
+  finish(): GroundRecord {
+    const o = this.options;
+    if (this.count === 0) {
+      if (this.headerLine > 0) throw this.error('a header row but no values after it', this.headerLine);
+      const skipped = (o.skip ?? 0) > 0 ? ` after skipping ${o.skip} lines` : '';
+      throw inputError(
+        `no values found${skipped}: the file is empty or holds only comments and blank lines`,
+        {
+          file: o.source,
+        },
+      );
+    }
+    if (this.count < 2)
+      throw this.error('only 1 sample; a record needs at least 2', this.lastDataLine || this.firstDataLine);
+    let dtS = o.dtS;
+    if (this.columns > 1) {
+      const columnDtS = (this.timePreviousS - this.timeFirstS) / (this.count - 1);
+      if (dtS !== undefined && Math.abs(dtS - columnDtS) > 1e-4 * columnDtS)
+        throw inputError(`--dt ${dtS} disagrees with the time column's step, ${formatS(columnDtS)} s`, {
+          file: o.source,
+        });
+      dtS = columnDtS;
+    }
+    const factor = ACCELERATION_UNITS[o.units];
+    const accelMS2 = this.values.slice(0, this.count);
+    for (let i = 0; i < accelMS2.length; i++) accelMS2[i] *= factor;
+    return createRecord({
+      name: o.name ?? baseName(o.source),
+      source: o.source,
+      dtS: dtS as number,
+      accelMS2,
+      unitsRead: o.units,
+    });
   }
 }
 
-function grow(array: Float64Array): Float64Array {
-  const bigger = new Float64Array(array.length * 2);
-  bigger.set(array);
-  return bigger;
+/** The place value of the last printed digit: 0.001 for `0.005`, 1e-5 for `1.5e-4`. */
+function printedResolution(text: string): number {
+  const match = /^[+-]?\d*(?:[.,](\d*))?(?:[eEdD]([+-]?\d+))?$/.exec(text);
+  if (match === null) return 0;
+  return 10 ** (Number(match[2] ?? 0) - (match[1]?.length ?? 0));
 }
 
-/** A number, with Fortran exponents (1.5D-03) accepted; NaN for anything else. */
-export function parseNumber(text: string): number {
-  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eEdD][+-]?\d+)?$/.test(text)) return Number.NaN;
-  return Number(text.replace(/[dD]/, 'e'));
+function formatS(valueS: number): string {
+  return Number(valueS.toPrecision(6)).toString();
+}
+
+/** A field as shown in a message: quoted, cut short, with unprintable characters escaped. */
+function quote(text: string): string {
+  const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
+  return `'${short.replace(/[^\x20-\x7e\u00a0-\uffff]/g, (c) => `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`)}'`;
 }
 
 function baseName(source: string): string {
