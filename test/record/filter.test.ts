@@ -48,7 +48,9 @@ describe('zeroPhaseFilter (forward and backward)', () => {
   /** A long sine and its filtered version, compared in the middle where the ends' transients are gone. */
   function throughFilter(frequencyHz: number, spec: Parameters<typeof zeroPhaseFilter>[2]) {
     const n = 24000; // 120 s
-    const input = Float64Array.from({ length: n }, (_, i) => Math.sin(2 * Math.PI * frequencyHz * i * dtS + 0.3));
+    const input = Float64Array.from({ length: n }, (_, i) =>
+      Math.sin(2 * Math.PI * frequencyHz * i * dtS + 0.3),
+    );
     return { input, output: zeroPhaseFilter(input, dtS, spec), middle: [8000, 16000] as const };
   }
 
@@ -64,7 +66,12 @@ describe('zeroPhaseFilter (forward and backward)', () => {
   }
 
   it('passes a sine far inside the pass band unchanged and in phase', () => {
-    const { input, output, middle } = throughFilter(2, { kind: 'bandpass', order: 4, lowCornerHz: 0.1, highCornerHz: 25 });
+    const { input, output, middle } = throughFilter(2, {
+      kind: 'bandpass',
+      order: 4,
+      lowCornerHz: 0.1,
+      highCornerHz: 25,
+    });
     const expected = analog(2, 0.1, 4, 'highpass') ** 2 * warped(2, 25, 4, 'lowpass') ** 2;
     for (let i = middle[0]; i < middle[1]; i++) expect(output[i]).toBeCloseTo(expected * input[i], 5);
   });
@@ -91,12 +98,14 @@ describe('checkFilter refuses what would be silently wrong', () => {
     expect(() => checkFilter({ kind: 'lowpass', order: 2.5, highCornerHz: 5 }, dtS)).toThrow(/order/);
   });
   it('a band with low ≥ high', () => {
-    expect(() => filterSections({ kind: 'bandpass', order: 4, lowCornerHz: 5, highCornerHz: 5 }, dtS)).toThrow(
-      /below its high corner/,
-    );
+    expect(() =>
+      filterSections({ kind: 'bandpass', order: 4, lowCornerHz: 5, highCornerHz: 5 }, dtS),
+    ).toThrow(/below its high corner/);
   });
   it('a missing or non-positive corner', () => {
     expect(() => checkFilter({ kind: 'highpass', order: 4 }, dtS)).toThrow(/positive frequency/);
-    expect(() => checkFilter({ kind: 'highpass', order: 4, lowCornerHz: -1 }, dtS)).toThrow(/positive frequency/);
+    expect(() => checkFilter({ kind: 'highpass', order: 4, lowCornerHz: -1 }, dtS)).toThrow(
+      /positive frequency/,
+    );
   });
 });

@@ -16,10 +16,7 @@ describe('fourierAmplitudeSpectrum (DFT × Δt; Brigham 1988 §6.1)', () => {
       { bin: 1000, amplitude: 0.05, phase: -0.7 },
     ];
     const values = Float64Array.from({ length: n }, (_, j) =>
-      components.reduce(
-        (sum, c) => sum + c.amplitude * Math.sin((2 * Math.PI * c.bin * j) / n + c.phase),
-        0,
-      ),
+      components.reduce((sum, c) => sum + c.amplitude * Math.sin((2 * Math.PI * c.bin * j) / n + c.phase), 0),
     );
     const { frequenciesHz, amplitudeMS, transformLength } = fourierAmplitudeSpectrum(values, dtS);
     expect(transformLength).toBe(n);

@@ -41,7 +41,10 @@ describe('Arias intensity (Arias 1970) and CAV (EPRI 1988)', () => {
 describe('significant duration (Trifunac and Brady 1975) from a known Husid curve', () => {
   it('a constant amplitude has H(t) = t/T, so D5–95 = 0.9T and D5–75 = 0.7T (closed form)', () => {
     const T = 20;
-    const husid = husidCurve(sampled(T, () => 0.3), dtS);
+    const husid = husidCurve(
+      sampled(T, () => 0.3),
+      dtS,
+    );
     expect(significantDuration(husid, dtS, 0.05, 0.95).durationS).toBeCloseTo(0.9 * T, 9);
     expect(significantDuration(husid, dtS, 0.05, 0.75).durationS).toBeCloseTo(0.7 * T, 9);
   });

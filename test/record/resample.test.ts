@@ -17,7 +17,8 @@ describe('resampleHistory (Lanczos-windowed sinc, Duchon 1979; anti-alias low-pa
     const { values, antiAliasHz } = resampleHistory(sine(2, 0.005, 8001), 0.005, 0.02);
     expect(antiAliasHz).toBeCloseTo(20, 12); // 0.8 × 25 Hz
     const expected = sine(2, 0.02, values.length);
-    for (let j = 200; j < values.length - 200; j++) expect(Math.abs(values[j] - expected[j])).toBeLessThan(1e-3);
+    for (let j = 200; j < values.length - 200; j++)
+      expect(Math.abs(values[j] - expected[j])).toBeLessThan(1e-3);
   });
 
   it('a coarser step removes content above the new Nyquist frequency instead of folding it back (aliasing)', () => {
