@@ -8,8 +8,11 @@ import { cautionLines } from '../caution.js';
  */
 
 export const CHART_WIDTH = 760;
-export const CHART_HEIGHT = 520;
+/** Height of the frame down to the bottom of the plot area; notes and the caution go below. */
+const PLOT_FRAME_HEIGHT = 520;
 export const MARGIN = { top: 48, right: 24, bottom: 150, left: 78 };
+/** Characters of a note line (11 px sans-serif across the figure). */
+const NOTE_WIDTH = 112;
 const FONT = 'font-family="sans-serif"';
 
 /** Escape text for SVG/XML content and attribute values. */
@@ -47,20 +50,39 @@ export interface ChartSpec {
 export const plotLeft = MARGIN.left;
 export const plotRight = CHART_WIDTH - MARGIN.right;
 export const plotTop = MARGIN.top;
-export const plotBottom = CHART_HEIGHT - MARGIN.bottom;
+export const plotBottom = PLOT_FRAME_HEIGHT - MARGIN.bottom;
 
 /** A number as a short tick label. */
 export function shortNumber(value: number): string {
   return Number(value.toPrecision(3)).toString();
 }
 
+/** Break text into lines of at most `width` characters at spaces. */
+export function wrapText(text: string, width: number): string[] {
+  const lines: string[] = [];
+  let line = '';
+  for (const word of text.split(' ')) {
+    if (line.length > 0 && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = `  ${word}`;
+    } else {
+      line = line.length > 0 ? `${line} ${word}` : word;
+    }
+  }
+  if (line.length > 0) lines.push(line);
+  return lines;
+}
+
 export function renderChart(spec: ChartSpec): string {
   const { x, y } = spec;
+  const notes = (spec.notes ?? []).flatMap((note) => wrapText(note, NOTE_WIDTH));
+  const caution = cautionLines(118);
+  const height = plotBottom + 58 + 15 * notes.length + 10 + 13 * caution.length;
   const out: string[] = [];
   out.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${CHART_WIDTH}" height="${CHART_HEIGHT}" viewBox="0 0 ${CHART_WIDTH} ${CHART_HEIGHT}">`,
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${CHART_WIDTH}" height="${height}" viewBox="0 0 ${CHART_WIDTH} ${height}">`,
   );
-  out.push(`<rect width="${CHART_WIDTH}" height="${CHART_HEIGHT}" fill="#ffffff"/>`);
+  out.push(`<rect width="${CHART_WIDTH}" height="${height}" fill="#ffffff"/>`);
   out.push(
     `<text x="${CHART_WIDTH / 2}" y="28" text-anchor="middle" font-size="16" ${FONT}>${escapeXml(spec.title)}</text>`,
   );
@@ -103,13 +125,13 @@ export function renderChart(spec: ChartSpec): string {
   if (spec.overlay !== undefined) out.push(spec.overlay);
   out.push('</g>');
   let lineY = plotBottom + 58;
-  for (const note of spec.notes ?? []) {
+  for (const note of notes) {
     out.push(`<text x="${plotLeft}" y="${lineY}" font-size="11" ${FONT}>${escapeXml(note)}</text>`);
     lineY += 15;
   }
-  lineY = Math.max(lineY + 4, CHART_HEIGHT - 12 - 13 * (cautionLines(118).length - 1));
-  for (const caution of cautionLines(118)) {
-    out.push(`<text x="12" y="${lineY}" font-size="10" fill="#555555" ${FONT}>${escapeXml(caution)}</text>`);
+  lineY += 10;
+  for (const text of caution) {
+    out.push(`<text x="12" y="${lineY}" font-size="10" fill="#555555" ${FONT}>${escapeXml(text)}</text>`);
     lineY += 13;
   }
   out.push('</svg>');
