@@ -8,6 +8,7 @@ import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
+import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
 
 export interface GridCliOptions {
@@ -17,7 +18,7 @@ export interface GridCliOptions {
   force?: boolean;
 }
 
-export interface SpectrumCliOptions extends RecordCliOptions, GridCliOptions {
+export interface SpectrumCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
   format?: string;
   out?: string;
   lengthUnit?: string;
@@ -52,6 +53,7 @@ export function registerSpectrum(program: Command): void {
     .description('response spectra (SD, PSV, PSA, SV, SA) of a ground-acceleration record')
     .argument('<record>', 'record file, or - for standard input');
   addRecordOptions(command);
+  addProcessingOptions(command);
   addGridOptions(command);
   command
     .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
@@ -67,7 +69,7 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
   const format = options.format ?? (options.out === undefined ? 'table' : 'json');
   if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
-  const record = await loadRecord(source, options);
+  const record = applyProcessing(await loadRecord(source, options), options);
   const spectrum = responseSpectrum(record, grid);
   const text =
     format === 'json'

@@ -1,0 +1,43 @@
+/**
+ * Time integration of sampled histories. Everything in quakesweep that needs a running integral
+ * (velocity, displacement, the Husid curve, CAV) goes through `cumulativeTrapezoid`.
+ */
+
+/**
+ * The running integral of `values` sampled at step `dtS`, by the trapezoidal rule, starting from
+ * `initial` (0: from rest): out[0] = initial, out[i] = out[i−1] + dtS·(values[i−1] + values[i])/2.
+ * Trapezoidal rule (common practice; e.g. Press et al., Numerical Recipes, 3rd ed., §4.1): exact for
+ * histories that are linear between samples, which is how quakesweep reads a record.
+ */
+export function cumulativeTrapezoid(values: Float64Array, dtS: number, initial = 0): Float64Array {
+  const out = new Float64Array(values.length);
+  if (values.length === 0) return out;
+  out[0] = initial;
+  const half = dtS / 2;
+  for (let i = 1; i < values.length; i++) out[i] = out[i - 1] + half * (values[i - 1] + values[i]);
+  return out;
+}
+
+/** The total integral of `values` at step `dtS` by the trapezoidal rule (common practice). */
+export function trapezoid(values: Float64Array, dtS: number): number {
+  let sum = 0;
+  for (let i = 1; i < values.length; i++) sum += values[i - 1] + values[i];
+  return (sum * dtS) / 2;
+}
+
+/** Ground velocity, m/s, and displacement, m, of an acceleration history, each integrated from rest. */
+export interface GroundMotionHistories {
+  accelMS2: Float64Array;
+  velocityMS: Float64Array;
+  displacementM: Float64Array;
+}
+
+/**
+ * Velocity and displacement by two trapezoidal integrations from rest (v(0) = 0, d(0) = 0; common
+ * practice). No baseline is removed here: ask for it in processing, where it is recorded.
+ */
+export function integrateRecord(record: { accelMS2: Float64Array; dtS: number }): GroundMotionHistories {
+  const velocityMS = cumulativeTrapezoid(record.accelMS2, record.dtS);
+  const displacementM = cumulativeTrapezoid(velocityMS, record.dtS);
+  return { accelMS2: record.accelMS2, velocityMS, displacementM };
+}

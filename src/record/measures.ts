@@ -1,0 +1,180 @@
+import { usageError } from '../errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../units.js';
+import { fourierAmplitudeSpectrum } from './fourier.js';
+import { cumulativeTrapezoid, integrateRecord, trapezoid } from './integrate.js';
+import type { GroundRecord } from './record.js';
+
+/** A peak of |x(t)| and the time of its first occurrence. */
+export interface Peak {
+  value: number;
+  timeS: number;
+}
+
+/** Ground-motion measures of one record (SI units throughout). */
+export interface GroundMotionMeasures {
+  pga: Peak;
+  /** m/s */
+  pgv: Peak;
+  /** m */
+  pgd: Peak;
+  /** Arias intensity, m/s. */
+  ariasMS: number;
+  /** Significant durations, s, and the times that bound them. */
+  d5to75S: number;
+  d5to95S: number;
+  t5S: number;
+  t75S: number;
+  t95S: number;
+  /** Bracketed duration above the threshold, s (0 if never reached), and its bounds (null then). */
+  bracketedS: number;
+  bracketStartS: number | null;
+  bracketEndS: number | null;
+  bracketThresholdMS2: number;
+  /** Cumulative absolute velocity, m/s. */
+  cavMS: number;
+  /** Mean period, s (null if the band 0.25–20 Hz holds no Fourier line). */
+  meanPeriodS: number | null;
+  /** The band actually used for the mean period, Hz (20 Hz is cut to the Nyquist frequency). */
+  meanPeriodBandHz: [number, number];
+}
+
+export interface MeasureOptions {
+  /** Threshold of the bracketed duration, m/s²; default 0.05 g. */
+  bracketThresholdMS2?: number;
+}
+
+/** Largest |x| and the time of its first occurrence (samples at step dtS from t = 0). */
+export function peakOf(values: Float64Array, dtS: number): Peak {
+  let index = 0;
+  for (let i = 1; i < values.length; i++) if (Math.abs(values[i]) > Math.abs(values[index])) index = i;
+  return { value: Math.abs(values[index]), timeS: index * dtS };
+}
+
+/**
+ * Arias intensity I_a = π/(2g) ∫ a(t)² dt, m/s (Arias 1970, "A measure of earthquake intensity", in
+ * Seismic Design for Nuclear Power Plants, MIT Press), the integral by the trapezoidal rule.
+ */
+export function ariasIntensity(accelMS2: Float64Array, dtS: number): number {
+  return (Math.PI / (2 * STANDARD_GRAVITY_MS2)) * trapezoid(squares(accelMS2), dtS);
+}
+
+/**
+ * The Husid curve H(t) = ∫₀ᵗ a² dτ / ∫₀ᵀ a² dτ, rising from 0 to 1 (Husid 1969), by the
+ * trapezoidal rule. A record of zeros gives all zeros.
+ */
+export function husidCurve(accelMS2: Float64Array, dtS: number): Float64Array {
+  const running = cumulativeTrapezoid(squares(accelMS2), dtS);
+  const total = running[running.length - 1];
+  if (total > 0) for (let i = 0; i < running.length; i++) running[i] /= total;
+  return running;
+}
+
+/** First time at which a rising curve reaches `level`, linearly interpolated between samples. */
+export function timeToReach(curve: Float64Array, dtS: number, level: number): number {
+  for (let i = 0; i < curve.length; i++) {
+    if (curve[i] >= level) {
+      if (i === 0) return 0;
+      const rise = curve[i] - curve[i - 1];
+      return (i - 1 + (rise > 0 ? (level - curve[i - 1]) / rise : 1)) * dtS;
+    }
+  }
+  return (curve.length - 1) * dtS;
+}
+
+/**
+ * Significant duration between fractions `from` and `to` of the Arias intensity (Trifunac and Brady
+ * 1975, BSSA 65(3): D5–95; D5–75 as in Abrahamson and Silva 1996), from the Husid curve.
+ */
+export function significantDuration(husid: Float64Array, dtS: number, from: number, to: number) {
+  const startS = timeToReach(husid, dtS, from);
+  const endS = timeToReach(husid, dtS, to);
+  return { startS, endS, durationS: endS - startS };
+}
+
+/**
+ * Bracketed duration: time from the first to the last sample with |a| ≥ threshold (Bolt 1973,
+ * "Duration of strong ground motion", Proc. 5th WCEE), 0 if the threshold is never reached.
+ */
+export function bracketedDuration(accelMS2: Float64Array, dtS: number, thresholdMS2: number) {
+  if (!Number.isFinite(thresholdMS2) || thresholdMS2 <= 0) {
+    throw usageError(`the bracketed-duration threshold must be positive, got ${thresholdMS2} m/s²`);
+  }
+  let first = -1;
+  let last = -1;
+  for (let i = 0; i < accelMS2.length; i++) {
+    if (Math.abs(accelMS2[i]) >= thresholdMS2) {
+      if (first < 0) first = i;
+      last = i;
+    }
+  }
+  if (first < 0) return { durationS: 0, startS: null, endS: null };
+  return { durationS: (last - first) * dtS, startS: first * dtS, endS: last * dtS };
+}
+
+/**
+ * Cumulative absolute velocity CAV = ∫|a(t)| dt, m/s (EPRI 1988, NP-5930; without the 0.025 g
+ * window screening of later versions), by the trapezoidal rule on |a|.
+ */
+export function cumulativeAbsoluteVelocity(accelMS2: Float64Array, dtS: number): number {
+  return trapezoid(accelMS2.map(Math.abs), dtS);
+}
+
+/**
+ * Mean period T_m = Σ (C_i²/f_i) / Σ C_i² over the Fourier amplitudes C_i at the discrete
+ * frequencies 0.25 ≤ f_i ≤ 20 Hz (Rathje, Abrahamson and Bray 1998, J. Geotech. Geoenv. Eng.
+ * 124(2), eq. 3). The upper limit is cut to the Nyquist frequency for coarse steps.
+ */
+export function meanPeriod(
+  accelMS2: Float64Array,
+  dtS: number,
+): { periodS: number | null; bandHz: [number, number] } {
+  const { frequenciesHz, amplitudeMS } = fourierAmplitudeSpectrum(accelMS2, dtS);
+  const bandHz: [number, number] = [0.25, Math.min(20, 1 / (2 * dtS))];
+  let numerator = 0;
+  let denominator = 0;
+  for (let i = 0; i < frequenciesHz.length; i++) {
+    const f = frequenciesHz[i];
+    if (f < bandHz[0] || f > bandHz[1]) continue;
+    const c2 = amplitudeMS[i] * amplitudeMS[i];
+    numerator += c2 / f;
+    denominator += c2;
+  }
+  return { periodS: denominator > 0 ? numerator / denominator : null, bandHz };
+}
+
+/** All the measures of a record; velocity and displacement by trapezoidal integration from rest. */
+export function groundMotionMeasures(
+  record: GroundRecord,
+  options: MeasureOptions = {},
+): GroundMotionMeasures {
+  const { dtS, accelMS2 } = record;
+  const { velocityMS, displacementM } = integrateRecord(record);
+  const husid = husidCurve(accelMS2, dtS);
+  const d75 = significantDuration(husid, dtS, 0.05, 0.75);
+  const d95 = significantDuration(husid, dtS, 0.05, 0.95);
+  const bracketThresholdMS2 = options.bracketThresholdMS2 ?? 0.05 * STANDARD_GRAVITY_MS2;
+  const bracket = bracketedDuration(accelMS2, dtS, bracketThresholdMS2);
+  const mean = meanPeriod(accelMS2, dtS);
+  return {
+    pga: peakOf(accelMS2, dtS),
+    pgv: peakOf(velocityMS, dtS),
+    pgd: peakOf(displacementM, dtS),
+    ariasMS: ariasIntensity(accelMS2, dtS),
+    d5to75S: d75.durationS,
+    d5to95S: d95.durationS,
+    t5S: d95.startS,
+    t75S: d75.endS,
+    t95S: d95.endS,
+    bracketedS: bracket.durationS,
+    bracketStartS: bracket.startS,
+    bracketEndS: bracket.endS,
+    bracketThresholdMS2,
+    cavMS: cumulativeAbsoluteVelocity(accelMS2, dtS),
+    meanPeriodS: mean.periodS,
+    meanPeriodBandHz: mean.bandHz,
+  };
+}
+
+function squares(values: Float64Array): Float64Array {
+  return values.map((v) => v * v);
+}
