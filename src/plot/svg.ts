@@ -2,7 +2,10 @@ import { JSDOM } from 'jsdom';
 
 export const SVG_NS = 'http://www.w3.org/2000/svg';
 
-/** Attribute values; numbers are written with at most two decimals (0.01 px is finer than any print). */
+/**
+ * Attribute values. Numbers are written with at most two decimals (0.01 px is finer than any print),
+ * except in data-* attributes, which keep the full value for readers of the file.
+ */
 export type Attributes = Readonly<Record<string, string | number | undefined>>;
 
 /**
@@ -27,7 +30,10 @@ export function createSvgDocument(widthPx: number, heightPx: number): SvgDocumen
   const set = (node: Element, attributes: Attributes) => {
     for (const [key, value] of Object.entries(attributes)) {
       if (value === undefined) continue;
-      node.setAttribute(key, typeof value === 'number' ? formatCoordinate(value) : value);
+      node.setAttribute(
+        key,
+        typeof value === 'number' && !key.startsWith('data-') ? formatCoordinate(value) : String(value),
+      );
     }
   };
   set(root, {
