@@ -1,3 +1,5 @@
+import { existsSync, statSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
@@ -6,6 +8,8 @@ import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
+import { historiesFigure, psaFigure, psvFigure, sdFigure, tripartiteFigure } from '../../plot/index.js';
+import type { GroundRecord } from '../../record/record.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
@@ -22,6 +26,9 @@ export interface SpectrumCliOptions extends RecordCliOptions, ProcessingCliOptio
   format?: string;
   out?: string;
   lengthUnit?: string;
+  svg?: string;
+  axes?: string;
+  histories?: boolean;
 }
 
 /** Add --periods, --damping, --method and --force. */
@@ -58,7 +65,17 @@ export function registerSpectrum(program: Command): void {
   command
     .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
-    .option('--length-unit <unit>', 'length unit for CSV and the terminal summary: m, cm, mm, in, ft', 'm')
+    .option(
+      '--length-unit <unit>',
+      'length unit for CSV, figures and the terminal summary: m, cm, mm, in, ft',
+      'm',
+    )
+    .option('--svg <dir>', 'also write psa.svg, sd.svg, psv.svg and tripartite.svg into this existing folder')
+    .option('--axes <axes>', 'axes of the PSA, SD and PSV figures: log or linear', 'log')
+    .option(
+      '--histories',
+      'with --svg, also write histories.svg (ground acceleration, velocity, displacement)',
+    )
     .action(async (source: string, options: SpectrumCliOptions) => {
       await runSpectrum(source, options);
     });
@@ -69,8 +86,11 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
   const format = options.format ?? (options.out === undefined ? 'table' : 'json');
   if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const axes = figureAxes(options);
   const record = applyProcessing(await loadRecord(source, options), options);
   const spectrum = responseSpectrum(record, grid);
+  if (options.svg !== undefined)
+    writeFigures(options.svg, record, spectrum, { axes, lengthUnit }, options, source);
   const text =
     format === 'json'
       ? formatJson(spectrumToJson(spectrum))
@@ -82,6 +102,38 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   } else {
     process.stdout.write(text);
   }
+}
+
+function figureAxes(options: SpectrumCliOptions): 'log' | 'linear' {
+  const axes = options.axes ?? 'log';
+  if (axes !== 'log' && axes !== 'linear') throw usageError(`--axes '${axes}': use log or linear`);
+  if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
+  if (options.svg !== undefined && !(existsSync(options.svg) && statSync(options.svg).isDirectory())) {
+    throw usageError(`--svg ${options.svg}: no such folder (create it first)`);
+  }
+  return axes;
+}
+
+/** Write the figures into `folder`, each file atomically. */
+function writeFigures(
+  folder: string,
+  record: GroundRecord,
+  spectrum: Spectrum,
+  figure: { axes: 'log' | 'linear'; lengthUnit: LengthUnit },
+  options: SpectrumCliOptions,
+  source: string,
+): void {
+  const shared = { ...figure, methodDescription: METHOD_DESCRIPTIONS[spectrum.method] };
+  const files: [string, string][] = [
+    ['psa.svg', psaFigure(spectrum, shared)],
+    ['sd.svg', sdFigure(spectrum, shared)],
+    ['psv.svg', psvFigure(spectrum, shared)],
+    ['tripartite.svg', tripartiteFigure(spectrum, shared)],
+  ];
+  if (options.histories) {
+    files.push(['histories.svg', historiesFigure(record, { lengthUnit: figure.lengthUnit })]);
+  }
+  for (const [name, text] of files) writeFileAtomic(join(folder, name), text, [source]);
 }
 
 /** A short table for the terminal: the caution first, then peaks at a few periods. */

@@ -1,0 +1,39 @@
+/** How one curve is drawn. */
+export interface SeriesStyle {
+  /** Stroke colour, any SVG colour. */
+  color: string;
+  /** SVG stroke-dasharray, or 'none' for a solid line. */
+  dash: string;
+  widthPx: number;
+}
+
+/**
+ * Curve colours: the colour-blind-safe set of Okabe and Ito (2008), yellow left out because it is
+ * too pale on white. Each colour is paired with its own dash pattern, so curves stay apart in
+ * greyscale and for readers who do not tell the colours apart.
+ */
+const COLOURS = ['#0072B2', '#D55E00', '#009E73', '#CC79A7', '#E69F00', '#56B4E9', '#000000'];
+const DASHES = ['none', '7 3', '2 2.5', '9 3 2 3', '4 2 1 2 1 2', '12 3', '1 4'];
+
+/** The style of the `index`-th data curve; patterns repeat after seven curves. */
+export function seriesStyle(index: number): SeriesStyle {
+  return {
+    color: COLOURS[index % COLOURS.length],
+    dash: DASHES[index % DASHES.length],
+    widthPx: 1.6,
+  };
+}
+
+/**
+ * The style of the `index`-th overlay (a target or design curve drawn over the data): black and
+ * heavier than any data curve, so it reads as the reference.
+ */
+export function overlayStyle(index: number): SeriesStyle {
+  const dashes = ['none', '10 3 3 3', '14 4'];
+  return { color: '#222222', dash: dashes[index % dashes.length], widthPx: 2.4 };
+}
+
+export const GRID_COLOUR = '#d9d9d9';
+export const MINOR_GRID_COLOUR = '#eeeeee';
+export const FRAME_COLOUR = '#333333';
+export const TEXT_COLOUR = '#111111';

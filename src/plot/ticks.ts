@@ -1,0 +1,139 @@
+import { scaleLinear } from 'd3-scale';
+
+/** Ticks of one axis: every tick position, and the subset that carries a label (with its text). */
+export interface AxisTicks {
+  major: number[];
+  minor: number[];
+  labels: { value: number; text: string }[];
+}
+
+/** Rough width of a label in a sans-serif font: 0.6 em a character (wide enough for DejaVu Sans). */
+export function textWidthPx(text: string, fontSizePx: number): number {
+  return text.length * fontSizePx * 0.6;
+}
+
+const SUPERSCRIPT: Readonly<Record<string, string>> = {
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+};
+
+/** A tick value for a log axis: plain decimals from 0.001 to 10 000, powers of ten beyond. */
+export function formatLogValue(value: number): string {
+  const exponent = Math.floor(Math.log10(value) + 1e-9);
+  if (exponent >= -3 && exponent <= 4) return String(Number(value.toPrecision(6)));
+  const mantissa = Number((value / 10 ** exponent).toPrecision(3));
+  const power = `10${String(exponent)
+    .split('')
+    .map((c) => SUPERSCRIPT[c])
+    .join('')}`;
+  return mantissa === 1 ? power : `${mantissa}×${power}`;
+}
+
+/**
+ * Decade ticks with minor ticks at 2…9 × 10ᵏ on a log axis (common practice). Decades are labelled,
+ * thinned to every second or third decade when their labels would touch; 2 and 5 × 10ᵏ are labelled
+ * too when the axis spans less than about two decades and there is room.
+ */
+export function logTicks(
+  domain: readonly [number, number],
+  toPixel: (value: number) => number,
+  labelExtentPx: (text: string) => number,
+): AxisTicks {
+  const [low, high] = domain[0] < domain[1] ? domain : [domain[1], domain[0]];
+  const inside = (v: number) => v >= low * (1 - 1e-9) && v <= high * (1 + 1e-9);
+  const major: number[] = [];
+  const minor: number[] = [];
+  for (let k = Math.floor(Math.log10(low)); k <= Math.ceil(Math.log10(high)); k++) {
+    const decade = 10 ** k;
+    if (inside(decade)) major.push(decade);
+    for (let m = 2; m <= 9; m++) if (inside(m * decade)) minor.push(m * decade);
+  }
+  const placed: { value: number; text: string; from: number; to: number }[] = [];
+  const fits = (from: number, to: number) => placed.every((p) => to + 4 <= p.from || from >= p.to + 4);
+  const span = (value: number) => {
+    const text = formatLogValue(value);
+    const centre = toPixel(value);
+    const half = labelExtentPx(text) / 2;
+    return { value, text, from: centre - half, to: centre + half };
+  };
+  for (let stride = 1; stride <= Math.max(1, major.length); stride++) {
+    placed.length = 0;
+    let ok = true;
+    for (let i = 0; i < major.length; i += stride) {
+      const s = span(major[i]);
+      if (!fits(s.from, s.to)) {
+        ok = false;
+        break;
+      }
+      placed.push(s);
+    }
+    if (ok) break;
+  }
+  const decades = Math.log10(high / low);
+  if (placed.length < 3 || decades < 2) {
+    const extra = decades < 1.2 ? minor : minor.filter((v) => [2, 5].includes(leadingDigit(v)));
+    for (const value of extra) {
+      const s = span(value);
+      if (fits(s.from, s.to)) placed.push(s);
+    }
+  }
+  placed.sort((a, b) => a.value - b.value);
+  return { major, minor, labels: placed.map(({ value, text }) => ({ value, text })) };
+}
+
+/**
+ * Ticks of a linear axis from d3-scale's 1-2-5 tick rule, as many as fit: the count is lowered
+ * until no two labels touch.
+ */
+export function linearTicks(
+  domain: readonly [number, number],
+  toPixel: (value: number) => number,
+  labelExtentPx: (text: string) => number,
+  lengthPx: number,
+): AxisTicks {
+  const scale = scaleLinear().domain(domain);
+  for (let count = Math.max(2, Math.round(lengthPx / 50)); count >= 2; count--) {
+    const values = scale.ticks(count);
+    const format = scale.tickFormat(count);
+    const spans = values.map((value) => {
+      const text = format(value);
+      const half = labelExtentPx(text) / 2;
+      return { value, text, from: toPixel(value) - half, to: toPixel(value) + half };
+    });
+    spans.sort((a, b) => a.from - b.from);
+    const clear = spans.every((s, i) => i === 0 || s.from >= spans[i - 1].to + 4);
+    if (clear || count === 2) {
+      const minor = scale.ticks(count * 5).filter((v) => !values.includes(v));
+      return { major: values, minor, labels: spans.map(({ value, text }) => ({ value, text })) };
+    }
+  }
+  return { major: [], minor: [], labels: [] };
+}
+
+function leadingDigit(value: number): number {
+  return Math.round(value / 10 ** Math.floor(Math.log10(value) + 1e-9));
+}
+
+/** The 1-2-5 value at or below `value` (> 0). */
+export function niceFloor125(value: number): number {
+  const decade = 10 ** Math.floor(Math.log10(value) + 1e-12);
+  const steps = [5, 2, 1];
+  for (const s of steps) if (s * decade <= value * (1 + 1e-12)) return s * decade;
+  return decade;
+}
+
+/** The 1-2-5 value at or above `value` (> 0). */
+export function niceCeil125(value: number): number {
+  const decade = 10 ** Math.floor(Math.log10(value) + 1e-12);
+  for (const s of [1, 2, 5, 10]) if (s * decade >= value * (1 - 1e-12)) return s * decade;
+  return 10 * decade;
+}
