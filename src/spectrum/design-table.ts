@@ -71,6 +71,7 @@ export function tableSpectrum(table: SpectrumTable, source: string): DesignSpect
     damping: undefined,
     minPeriodS: periodsS[0],
     maxPeriodS: periodsS[last],
+    tabulatedPeriodsS: periodsS,
     psaG(periodS: number): number {
       checkPeriod(this, periodS);
       let lo = 0;

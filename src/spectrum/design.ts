@@ -19,6 +19,8 @@ export interface DesignSpectrum {
   minPeriodS: number;
   /** Longest period where the spectrum is defined, s (Infinity if unbounded). */
   maxPeriodS: number;
+  /** The periods a tabulated spectrum was given at, s (tables only). */
+  tabulatedPeriodsS?: Float64Array;
   /** PSA in g at period T (s); throws outside the defined range. */
   psaG(periodS: number): number;
 }
@@ -193,7 +195,7 @@ export function coversPeriod(spectrum: DesignSpectrum, periodS: number): boolean
 export function checkPeriod(spectrum: DesignSpectrum, periodS: number): void {
   if (!Number.isFinite(periodS) || !coversPeriod(spectrum, periodS)) {
     throw inputError(
-      `T = ${periodS} s is outside the ${spectrum.code} spectrum, defined from ${spectrum.minPeriodS} s to ${spectrum.maxPeriodS} s`,
+      `T = ${periodS} s is outside the ${spectrum.code === 'table' ? `table ${spectrum.parameters.source}` : `${spectrum.code} spectrum`}, defined from ${spectrum.minPeriodS} s to ${spectrum.maxPeriodS} s`,
     );
   }
 }

@@ -9,6 +9,7 @@ import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
+import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../target-options.js';
 
 export interface GridCliOptions {
   periods?: string;
@@ -17,7 +18,7 @@ export interface GridCliOptions {
   force?: boolean;
 }
 
-export interface SpectrumCliOptions extends RecordCliOptions, GridCliOptions {
+export interface SpectrumCliOptions extends RecordCliOptions, GridCliOptions, TargetCliOptions {
   format?: string;
   out?: string;
   lengthUnit?: string;
@@ -53,6 +54,7 @@ export function registerSpectrum(program: Command): void {
     .argument('<record>', 'record file, or - for standard input');
   addRecordOptions(command);
   addGridOptions(command);
+  addTargetOptions(command);
   command
     .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
@@ -67,14 +69,16 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
   const format = options.format ?? (options.out === undefined ? 'table' : 'json');
   if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const target = loadTarget(options);
   const record = await loadRecord(source, options);
-  const spectrum = responseSpectrum(record, grid);
+  const targeted = applyTarget(responseSpectrum(record, grid), target, options);
+  const spectrum = targeted.spectrum;
   const text =
     format === 'json'
-      ? formatJson(spectrumToJson(spectrum))
+      ? formatJson({ ...spectrumToJson(spectrum), ...targeted.json })
       : format === 'csv'
-        ? spectrumToCsv(spectrum, { lengthUnit })
-        : summaryTable(spectrum, lengthUnit);
+        ? targeted.csv(spectrumToCsv(spectrum, { lengthUnit }))
+        : targeted.table(summaryTable(spectrum, lengthUnit));
   if (options.out !== undefined) {
     writeFileAtomic(options.out, text, [source]);
   } else {
