@@ -1,7 +1,10 @@
 import { Command, CommanderError } from 'commander';
 import { isQuakesweepError } from '../errors.js';
 import { VERSION } from '../version.js';
+import { registerDamping } from './commands/damping.js';
+import { registerDesign } from './commands/design.js';
 import { registerInfo } from './commands/info.js';
+import { registerRotD } from './commands/rotd.js';
 import { registerSpectrum } from './commands/spectrum.js';
 
 /** Exit codes: 0 done, 1 internal fault or partly failed batch, 2 bad input or usage. */
@@ -19,6 +22,9 @@ export function buildProgram(): Command {
   program.configureOutput({ writeErr: (text) => process.stderr.write(text) });
   registerSpectrum(program);
   registerInfo(program);
+  registerDesign(program);
+  registerDamping(program);
+  registerRotD(program);
   return program;
 }
 

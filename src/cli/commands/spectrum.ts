@@ -8,12 +8,20 @@ import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
-import { historiesFigure, psaFigure, psvFigure, sdFigure, tripartiteFigure } from '../../plot/index.js';
+import {
+  historiesFigure,
+  type PsaOverlay,
+  psaFigure,
+  psvFigure,
+  sdFigure,
+  tripartiteFigure,
+} from '../../plot/index.js';
 import type { GroundRecord } from '../../record/record.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
+import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../target-options.js';
 
 export interface GridCliOptions {
   periods?: string;
@@ -22,7 +30,11 @@ export interface GridCliOptions {
   force?: boolean;
 }
 
-export interface SpectrumCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
+export interface SpectrumCliOptions
+  extends RecordCliOptions,
+    ProcessingCliOptions,
+    GridCliOptions,
+    TargetCliOptions {
   format?: string;
   out?: string;
   lengthUnit?: string;
@@ -62,6 +74,7 @@ export function registerSpectrum(program: Command): void {
   addRecordOptions(command);
   addProcessingOptions(command);
   addGridOptions(command);
+  addTargetOptions(command);
   command
     .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
@@ -87,18 +100,23 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const format = options.format ?? (options.out === undefined ? 'table' : 'json');
   if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
   const axes = figureAxes(options);
-  const record = applyProcessing(await loadRecord(source, options), options);
-  const spectrum = responseSpectrum(record, grid);
-  if (options.svg !== undefined)
-    writeFigures(options.svg, record, spectrum, { axes, lengthUnit }, options, source);
+  const target = loadTarget(options);
+  const processed = applyProcessing(await loadRecord(source, options), options);
+  const targeted = applyTarget(responseSpectrum(processed, grid), target, options);
+  const spectrum = targeted.spectrum;
+  const record = targeted.record(processed);
+  if (options.svg !== undefined) {
+    const overlays = targeted.overlay === undefined ? [] : [targeted.overlay];
+    writeFigures(options.svg, record, spectrum, { axes, lengthUnit, overlays }, options, source);
+  }
   const text =
     format === 'json'
-      ? formatJson(spectrumToJson(spectrum))
+      ? formatJson({ ...spectrumToJson(spectrum), ...targeted.json })
       : format === 'csv'
-        ? spectrumToCsv(spectrum, { lengthUnit })
-        : summaryTable(spectrum, lengthUnit);
+        ? targeted.csv(spectrumToCsv(spectrum, { lengthUnit }))
+        : targeted.table(summaryTable(spectrum, lengthUnit));
   if (options.out !== undefined) {
-    writeFileAtomic(options.out, text, [source]);
+    writeFileAtomic(options.out, text, options.target === undefined ? [source] : [source, options.target]);
   } else {
     process.stdout.write(text);
   }
@@ -119,7 +137,7 @@ function writeFigures(
   folder: string,
   record: GroundRecord,
   spectrum: Spectrum,
-  figure: { axes: 'log' | 'linear'; lengthUnit: LengthUnit },
+  figure: { axes: 'log' | 'linear'; lengthUnit: LengthUnit; overlays: PsaOverlay[] },
   options: SpectrumCliOptions,
   source: string,
 ): void {
@@ -178,7 +196,7 @@ export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit): string
 }
 
 /** Indices of the grid nearest to a set of round periods, for the summary. */
-function summaryRows(periodsS: Float64Array): number[] {
+export function summaryRows(periodsS: Float64Array): number[] {
   if (periodsS.length <= 16) return Array.from(periodsS, (_, i) => i);
   const targets = [0, 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5, 10];
   const rows = new Set<number>();

@@ -1,0 +1,244 @@
+import { inputError, usageError } from '../errors.js';
+import { hermitePeak } from '../oscillator/peak.js';
+import {
+  type Method,
+  prewarpedOscillator,
+  stepCoefficients,
+  substepCount,
+} from '../oscillator/recurrence.js';
+import { refinementThresholds } from '../oscillator/sweep.js';
+import { type GroundRecord, peakGroundAcceleration } from '../record/record.js';
+import type { SpectrumRecordInfo } from './spectrum.js';
+
+/** Two-component spectra of a pair of horizontal records at one damping ratio, m/s², by period. */
+export interface RotDCurve {
+  damping: number;
+  /** Median over rotation angles of PSA(θ) (Boore 2010, RotD50). */
+  rotd50MS2: Float64Array;
+  /** Largest over rotation angles of PSA(θ) (Boore 2010, RotD100). */
+  rotd100MS2: Float64Array;
+  /** √(PSA₁ · PSA₂) of the two components as recorded. */
+  geomeanMS2: Float64Array;
+}
+
+export interface RotDSpectra {
+  records: [SpectrumRecordInfo, SpectrumRecordInfo];
+  method: Method;
+  periodsS: Float64Array;
+  /** Angle between successive rotations, degrees; the angles are 0 ≤ θ < 180°. */
+  angleStepDeg: number;
+  /** Zero samples appended to the shorter record so both have the same length. */
+  paddedSamples: number;
+  curves: RotDCurve[];
+}
+
+export interface RotDOptions {
+  periodsS: ArrayLike<number>;
+  dampings: ArrayLike<number>;
+  method?: Method;
+  /** Rotation step, degrees, dividing 180 into a whole number of steps; default 1. */
+  angleStepDeg?: number;
+}
+
+/**
+ * RotD50 and RotD100 (Boore, "Orientation-independent, nongeometric-mean measures of seismic
+ * intensity from two horizontal components of motion", BSSA 100(4), 2010) and the geometric mean
+ * of two horizontal components with the same time step.
+ *
+ * The oscillator is linear, so its displacement under the ground motion rotated by θ is
+ * u(θ, t) = u₁(t) cos θ + u₂(t) sin θ: each oscillator is run once per component, with the
+ * sub-steps and step coefficients of the sweep (recurrence.ts), and at every sub-step the
+ * rotated displacement is formed for each angle and its peak kept, with the cubic Hermite
+ * refinement between sub-steps the sweep uses. PSA(θ) = ω² max|u(θ, t)|. With an even number of
+ * angles the median is the mean of the two middle values. A shorter record is padded with zeros
+ * (ground at rest) to the length of the longer.
+ */
+export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDSpectra {
+  const method = options.method ?? 'newmark-average';
+  const periodsS = Float64Array.from(options.periodsS);
+  const dampings = Float64Array.from(options.dampings);
+  const angleStepDeg = options.angleStepDeg ?? 1;
+  const angleCount = checkAngleStep(angleStepDeg);
+  if (Math.abs(first.dtS - second.dtS) > 1e-9 * first.dtS) {
+    throw inputError(
+      `the two components have different time steps (${first.dtS} s and ${second.dtS} s); resample one first`,
+      { file: second.source },
+    );
+  }
+  if (periodsS.length === 0) throw usageError('the period grid is empty');
+  if (dampings.length === 0) throw usageError('the damping list is empty');
+  const length = Math.max(first.accelMS2.length, second.accelMS2.length);
+  const a1 = padded(first.accelMS2, length);
+  const a2 = padded(second.accelMS2, length);
+  const dtS = first.dtS;
+
+  const cos = new Float64Array(angleCount);
+  const sin = new Float64Array(angleCount);
+  for (let k = 0; k < angleCount; k++) {
+    const degrees = k * angleStepDeg;
+    cos[k] = degrees === 90 ? 0 : Math.cos((degrees * Math.PI) / 180);
+    sin[k] = degrees === 0 ? 0 : degrees === 90 ? 1 : Math.sin((degrees * Math.PI) / 180);
+  }
+  const quarter = Math.round(90 / angleStepDeg);
+  const peaks = new Float64Array(angleCount);
+  const thresholds = new Float64Array(angleCount);
+
+  const curves: RotDCurve[] = [];
+  for (let d = 0; d < dampings.length; d++) {
+    const damping = dampings[d];
+    if (!(damping >= 0) || !Number.isFinite(damping)) throw usageError(`damping must be ≥ 0, got ${damping}`);
+    const rotd50MS2 = new Float64Array(periodsS.length);
+    const rotd100MS2 = new Float64Array(periodsS.length);
+    const geomeanMS2 = new Float64Array(periodsS.length);
+    for (let p = 0; p < periodsS.length; p++) {
+      const periodS = periodsS[p];
+      if (!(periodS >= 0) || !Number.isFinite(periodS))
+        throw usageError(`periods must be ≥ 0 s, got ${periodS}`);
+      let scale = 1;
+      if (periodS === 0) {
+        groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
+      } else {
+        const omega = (2 * Math.PI) / periodS;
+        scale = omega * omega;
+        oscillatorPeaks(a1, a2, dtS, { periodS, damping, method }, cos, sin, peaks, thresholds);
+      }
+      geomeanMS2[p] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
+      peaks.sort();
+      rotd100MS2[p] = scale * peaks[angleCount - 1];
+      const middle = angleCount >> 1;
+      rotd50MS2[p] =
+        scale * (angleCount % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
+    }
+    curves.push({ damping, rotd50MS2, rotd100MS2, geomeanMS2 });
+  }
+  return {
+    records: [recordInfo(first), recordInfo(second)],
+    method,
+    periodsS,
+    angleStepDeg,
+    paddedSamples: Math.abs(first.accelMS2.length - second.accelMS2.length),
+    curves,
+  };
+}
+
+/** Number of angles in [0°, 180°) for a step that divides 180° into whole steps, at most 1°. */
+function checkAngleStep(angleStepDeg: number): number {
+  const count = Math.round(180 / angleStepDeg);
+  if (!(angleStepDeg > 0) || angleStepDeg > 1 || Math.abs(count * angleStepDeg - 180) > 1e-9) {
+    throw usageError(`angle step ${angleStepDeg}°: use at most 1° and a divisor of 180° (1, 0.5, 0.25, …)`);
+  }
+  return count;
+}
+
+function padded(samples: Float64Array, length: number): Float64Array {
+  if (samples.length === length) return samples;
+  const out = new Float64Array(length);
+  out.set(samples);
+  return out;
+}
+
+/** Peak over the samples of |a₁ cos θ + a₂ sin θ| (exact for linear interpolation between samples). */
+function groundPeaks(
+  a1: Float64Array,
+  a2: Float64Array,
+  cos: Float64Array,
+  sin: Float64Array,
+  peaks: Float64Array,
+): void {
+  peaks.fill(0);
+  for (let n = 0; n < a1.length; n++) {
+    const x = a1[n];
+    const y = a2[n];
+    for (let k = 0; k < peaks.length; k++) {
+      const value = Math.abs(cos[k] * x + sin[k] * y);
+      if (value > peaks[k]) peaks[k] = value;
+    }
+  }
+}
+
+/**
+ * Peak |u(θ, t)| for every angle of one oscillator, m, into `peaks`. Both components are stepped
+ * together with the sweep's sub-stepping; nothing is allocated inside the loops.
+ */
+function oscillatorPeaks(
+  a1: Float64Array,
+  a2: Float64Array,
+  dtS: number,
+  oscillator: { periodS: number; damping: number; method: Method },
+  cos: Float64Array,
+  sin: Float64Array,
+  peaks: Float64Array,
+  thresholds: Float64Array,
+): void {
+  const { periodS, damping, method } = oscillator;
+  const durationS = (a1.length - 1) * dtS;
+  const substeps = substepCount(method, periodS, dtS, { damping, durationS });
+  const h = dtS / substeps;
+  const omega = (2 * Math.PI) / periodS;
+  const warped = prewarpedOscillator(method, omega, damping, h);
+  const c = stepCoefficients(method, warped.omegaRadS, warped.damping, h);
+  const { uu, uv, up0, up1, vu, vv, vp0, vp1 } = c;
+  const angles = peaks.length;
+  const inverse = 1 / substeps;
+  // The sweep's refinement rule (see refinementThresholds), with the ground's peak over all
+  // directions: a rotated component never exceeds |(a₁, a₂)|.
+  let pga = 0;
+  for (let n = 0; n < a1.length; n++) pga = Math.max(pga, Math.hypot(a1[n], a2[n]));
+  const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: pga, jerkMS3: 0 });
+  const R = rule.ratio;
+  const offset = rule.displacementOffset;
+  peaks.fill(0);
+  thresholds.fill(0);
+  let u1 = 0;
+  let v1 = 0;
+  let u2 = 0;
+  let v2 = 0;
+  const last = a1.length - 1;
+  for (let n = 0; n < last; n++) {
+    const start1 = a1[n];
+    const end1 = a1[n + 1];
+    const increment1 = (end1 - start1) * inverse;
+    const start2 = a2[n];
+    const end2 = a2[n + 1];
+    const increment2 = (end2 - start2) * inverse;
+    let pa1 = start1;
+    let pa2 = start2;
+    for (let j = 1; j <= substeps; j++) {
+      const pb1 = j === substeps ? end1 : start1 + j * increment1;
+      const pb2 = j === substeps ? end2 : start2 + j * increment2;
+      const uo1 = u1;
+      const vo1 = v1;
+      const uo2 = u2;
+      const vo2 = v2;
+      u1 = uu * uo1 + uv * vo1 + up0 * pa1 + up1 * pb1;
+      v1 = vu * uo1 + vv * vo1 + vp0 * pa1 + vp1 * pb1;
+      u2 = uu * uo2 + uv * vo2 + up0 * pa2 + up1 * pb2;
+      v2 = vu * uo2 + vv * vo2 + vp0 * pa2 + vp1 * pb2;
+      for (let k = 0; k < angles; k++) {
+        const ck = cos[k];
+        const sk = sin[k];
+        const u = ck * u1 + sk * u2;
+        if (Math.abs(u) > thresholds[k]) {
+          const peak = hermitePeak(ck * uo1 + sk * uo2, u, ck * vo1 + sk * vo2, ck * v1 + sk * v2, h);
+          if (peak > peaks[k]) {
+            peaks[k] = peak;
+            thresholds[k] = peak * R - offset;
+          }
+        }
+      }
+      pa1 = pb1;
+      pa2 = pb2;
+    }
+  }
+}
+
+function recordInfo(record: GroundRecord): SpectrumRecordInfo {
+  return {
+    name: record.name,
+    source: record.source,
+    npts: record.accelMS2.length,
+    dtS: record.dtS,
+    pgaMS2: peakGroundAcceleration(record),
+    processing: record.processing,
+  };
+}

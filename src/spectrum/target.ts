@@ -1,0 +1,104 @@
+import { usageError } from '../errors.js';
+import { asce716Spectrum, type DesignSpectrum, EC8_GROUNDS, type Ec8Ground, ec8Spectrum } from './design.js';
+
+/**
+ * A target spectrum as written on the command line: a code spectrum, already built, or the path
+ * of a table file, which the caller reads (the core does no I/O).
+ */
+export type TargetSpec = { kind: 'code'; spectrum: DesignSpectrum } | { kind: 'table'; path: string };
+
+/**
+ * Parse a target: `asce7-16:sds=1.0,sd1=0.6,tl=8`, `ec8:type=1,ground=C,ag=0.25[,damping=5%]`
+ * (accelerations in g, periods in s, damping as a fraction or a percentage), or anything else,
+ * which is taken as the path of a two-column table of period (s) and PSA (g).
+ */
+export function parseTargetSpec(text: string): TargetSpec {
+  const spec = text.trim();
+  const colon = spec.indexOf(':');
+  const code = colon > 0 ? spec.slice(0, colon).toLowerCase() : '';
+  if (code !== 'asce7-16' && code !== 'ec8') {
+    if (spec === '') throw usageError('--target is empty');
+    return { kind: 'table', path: spec };
+  }
+  const fields = parseFields(spec, spec.slice(colon + 1));
+  if (code === 'asce7-16') {
+    onlyKeys(spec, fields, ['sds', 'sd1', 'tl']);
+    return {
+      kind: 'code',
+      spectrum: asce716Spectrum({
+        sdsG: numberField(spec, fields, 'sds'),
+        sd1G: numberField(spec, fields, 'sd1'),
+        tlS: numberField(spec, fields, 'tl'),
+      }),
+    };
+  }
+  onlyKeys(spec, fields, ['type', 'ground', 'ag', 'damping']);
+  return {
+    kind: 'code',
+    spectrum: ec8Spectrum({
+      type: parseEc8Type(requiredField(spec, fields, 'type')),
+      ground: parseEc8Ground(requiredField(spec, fields, 'ground')),
+      agG: numberField(spec, fields, 'ag'),
+      damping: fields.damping === undefined ? 0.05 : parseDampingRatio(fields.damping),
+    }),
+  };
+}
+
+/** `1` or `2`. */
+export function parseEc8Type(text: string): 1 | 2 {
+  if (text.trim() === '1') return 1;
+  if (text.trim() === '2') return 2;
+  throw usageError(`Eurocode 8 spectrum type '${text}': use 1 or 2`);
+}
+
+/** A ground type A–E, in either case. */
+export function parseEc8Ground(text: string): Ec8Ground {
+  const ground = text.trim().toUpperCase();
+  if ((EC8_GROUNDS as readonly string[]).includes(ground)) return ground as Ec8Ground;
+  throw usageError(`Eurocode 8 ground type '${text}': use A, B, C, D or E (S1 and S2 need special studies)`);
+}
+
+/** One damping ratio: a fraction (0.05) or a percentage (5%); a bare number above 1 is refused. */
+export function parseDampingRatio(text: string): number {
+  const part = text.trim();
+  const percent = part.endsWith('%');
+  const value = Number(percent ? part.slice(0, -1).trim() : part);
+  if (part === '' || !Number.isFinite(value) || value < 0) {
+    throw usageError(`damping '${text}' is not a ratio ≥ 0 (write 0.05 or 5%)`);
+  }
+  if (!percent && value > 1) throw usageError(`damping ${part} is above 1; write ${part}% for a percentage`);
+  return percent ? value / 100 : value;
+}
+
+function parseFields(spec: string, body: string): { [key: string]: string } {
+  const fields: { [key: string]: string } = {};
+  for (const item of body.split(',')) {
+    const equals = item.indexOf('=');
+    if (equals <= 0) throw usageError(`target '${spec}': '${item}' is not key=value`);
+    const key = item.slice(0, equals).trim().toLowerCase();
+    if (key in fields) throw usageError(`target '${spec}': ${key} is given twice`);
+    fields[key] = item.slice(equals + 1).trim();
+  }
+  return fields;
+}
+
+function onlyKeys(spec: string, fields: { [key: string]: string }, allowed: string[]): void {
+  for (const key of Object.keys(fields)) {
+    if (!allowed.includes(key)) {
+      throw usageError(`target '${spec}': unknown key '${key}'; accepted: ${allowed.join(', ')}`);
+    }
+  }
+}
+
+function requiredField(spec: string, fields: { [key: string]: string }, key: string): string {
+  const value = fields[key];
+  if (value === undefined || value === '') throw usageError(`target '${spec}': ${key}= is required`);
+  return value;
+}
+
+function numberField(spec: string, fields: { [key: string]: string }, key: string): number {
+  const text = requiredField(spec, fields, key);
+  const value = Number(text);
+  if (!Number.isFinite(value)) throw usageError(`target '${spec}': ${key}=${text} is not a number`);
+  return value;
+}
