@@ -1,6 +1,8 @@
 import { Command, CommanderError } from 'commander';
 import { isQuakesweepError } from '../errors.js';
 import { VERSION } from '../version.js';
+import { registerAnchor } from './commands/anchor.js';
+import { registerFloor } from './commands/floor.js';
 import { registerSpectrum } from './commands/spectrum.js';
 
 /** Exit codes: 0 done, 1 internal fault or partly failed batch, 2 bad input or usage. */
@@ -17,6 +19,8 @@ export function buildProgram(): Command {
     .exitOverride();
   program.configureOutput({ writeErr: (text) => process.stderr.write(text) });
   registerSpectrum(program);
+  registerFloor(program);
+  registerAnchor(program);
   return program;
 }
 
