@@ -45,7 +45,8 @@ export function anchorageToJson(analysis: AnchorageAnalysis) {
         'rigid base, elastic bolt group about the anchor centroid; tension T_i = −F·h_cg·(I⁻¹u)·r_i − ' +
         '(0.9 − 0.2 S_DS)W_p(1/n + (I⁻¹e)·r_i), ≥ 0; shear F/n plus torsion of an eccentric centre of mass; ' +
         'directions of shaking 0–360° in 1° steps refined to the exact worst direction',
-      direction_convention: 'direction of the horizontal force on the equipment, degrees counter-clockwise from +x',
+      direction_convention:
+        'direction of the horizontal force on the equipment, degrees counter-clockwise from +x',
       max_tension: force(a.maxTension),
       max_tension_direction_deg: a.maxTensionDirectionDeg,
       governing_anchor: a.governingAnchor + 1,

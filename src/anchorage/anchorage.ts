@@ -1,6 +1,11 @@
 import { usageError } from '../errors.js';
 import { type BoltGroupResult, boltGroupForces } from './bolt-group.js';
-import { type CodeForce, codeHorizontalForce, counteractingDeadLoadFactor, verticalForce } from './code-force.js';
+import {
+  type CodeForce,
+  codeHorizontalForce,
+  counteractingDeadLoadFactor,
+  verticalForce,
+} from './code-force.js';
 import type { SpectralValue } from './elastic-demand.js';
 import type { Equipment } from './equipment.js';
 
@@ -49,7 +54,9 @@ export function analyseAnchorage(
 ): AnchorageAnalysis {
   const { demand, elastic } = options;
   if (demand !== 'code' && elastic === null) {
-    throw usageError(`--demand ${demand} needs a ground motion: give --record or --spectrum (or use --demand code)`);
+    throw usageError(
+      `--demand ${demand} needs a ground motion: give --record or --spectrum (or use --demand code)`,
+    );
   }
   const code = codeHorizontalForce({
     weight: equipment.weightKN,
@@ -120,9 +127,12 @@ function assumptionsOf(
         'linearly over the pattern (less relief for anchors far from it); the horizontal force acts at the same point.',
     );
   }
-  if (code.heightRatioCapped) out.push('z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.');
+  if (code.heightRatioCapped)
+    out.push('z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.');
   if (equipment.omega0 !== null) {
-    out.push(`Ω₀ = ${equipment.omega0} multiplies the code horizontal force for the anchors (not the dead load, not the record demand).`);
+    out.push(
+      `Ω₀ = ${equipment.omega0} multiplies the code horizontal force for the anchors (not the dead load, not the record demand).`,
+    );
   }
   if (elastic !== null) {
     out.push(
@@ -130,7 +140,9 @@ function assumptionsOf(
         'multiplied by I_p or Ω₀.',
     );
   }
-  out.push(`Governing horizontal force for the anchors: ${governing === 'code' ? 'the code force' : 'the record demand'}.`);
+  out.push(
+    `Governing horizontal force for the anchors: ${governing === 'code' ? 'the code force' : 'the record demand'}.`,
+  );
   return out;
 }
 

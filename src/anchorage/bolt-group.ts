@@ -40,6 +40,27 @@ export interface BoltGroupResult {
 }
 
 /**
+ * Tension (≥ 0) and shear of every anchor for the horizontal force in one direction, degrees
+ * counter-clockwise from +x (same method as boltGroupForces).
+ */
+export function boltGroupAtDirection(
+  input: BoltGroupInput,
+  directionDeg: number,
+): { tension: number[]; shear: number[] } {
+  const { n, A, B, C, L, F } = coefficients(input);
+  const c = Math.cos((directionDeg * Math.PI) / 180);
+  const s = Math.sin((directionDeg * Math.PI) / 180);
+  const tension: number[] = [];
+  const shear: number[] = [];
+  for (let i = 0; i < n; i++) {
+    tension.push(Math.max(0, A[i] * c + B[i] * s - C[i]));
+    const [l11, l12, l21, l22] = L[i];
+    shear.push(Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s));
+  }
+  return { tension, shear };
+}
+
+/**
  * Anchor tension and shear of a rigid base on an elastic anchor group (the elastic method for
  * eccentrically loaded fastener groups, e.g. Salmon and Johnson, Steel Structures, §4.12 for shear
  * and the analogous linear-strain rule for axial load; common practice for equipment anchorage).
@@ -62,47 +83,7 @@ export interface BoltGroupResult {
  * maxima do not depend on the step.
  */
 export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
-  const n = input.anchors.length;
-  const [cx, cy] = centroid(input.anchors);
-  const rx = input.anchors.map((p) => p[0] - cx);
-  const ry = input.anchors.map((p) => p[1] - cy);
-  let ixx = 0;
-  let iyy = 0;
-  let ixy = 0;
-  let polar = 0;
-  for (let i = 0; i < n; i++) {
-    ixx += rx[i] * rx[i];
-    iyy += ry[i] * ry[i];
-    ixy += rx[i] * ry[i];
-    polar += rx[i] * rx[i] + ry[i] * ry[i];
-  }
-  const det = ixx * iyy - ixy * ixy;
-  // I⁻¹ = [[iyy, −ixy], [−ixy, ixx]] / det
-  const inv = (vx: number, vy: number): [number, number] => [(iyy * vx - ixy * vy) / det, (ixx * vy - ixy * vx) / det];
-  const ex = input.cgPlan[0] - cx;
-  const ey = input.cgPlan[1] - cy;
-  const [gx, gy] = inv(ex, ey);
-  const F = input.horizontalForce;
-  const D = input.deadLoad;
-
-  // Tension T_i(θ) = A_i cos θ + B_i sin θ − C_i.
-  const A: number[] = [];
-  const B: number[] = [];
-  const C: number[] = [];
-  // Shear vector V_i(θ) = F·L_i·u, L_i = 𝟙/n + w_i gᵀ with w_i = ẑ × r_i and g = (−e_y, e_x)/J.
-  const L: [number, number, number, number][] = [];
-  for (let i = 0; i < n; i++) {
-    const [qx, qy] = inv(rx[i], ry[i]);
-    A.push(-F * input.cgHeight * qx);
-    B.push(-F * input.cgHeight * qy);
-    C.push(D * (1 / n + gx * rx[i] + gy * ry[i]));
-    const wx = -ry[i];
-    const wy = rx[i];
-    const tx = -ey / polar;
-    const ty = ex / polar;
-    L.push([1 / n + wx * tx, wx * ty, wy * tx, 1 / n + wy * ty]);
-  }
-
+  const { n, A, B, C, L, F, D } = coefficients(input);
   const step = input.stepDeg ?? 1;
   const directions: number[] = [];
   for (let k = 0; k * step < 360 - 1e-9; k++) directions.push(k * step);
@@ -127,13 +108,19 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     for (let i = 0; i < n; i++) {
       const tension = A[i] * c + B[i] * s - C[i];
       const a = perAnchor[i];
-      if (tension > a.tension + tolerance || (Math.abs(tension - a.tension) <= tolerance && deg < a.tensionDirectionDeg)) {
+      if (
+        tension > a.tension + tolerance ||
+        (Math.abs(tension - a.tension) <= tolerance && deg < a.tensionDirectionDeg)
+      ) {
         a.tension = tension;
         a.tensionDirectionDeg = deg;
       }
       const [l11, l12, l21, l22] = L[i];
       const shear = Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s);
-      if (shear > a.shear + tolerance || (Math.abs(shear - a.shear) <= tolerance && deg < a.shearDirectionDeg)) {
+      if (
+        shear > a.shear + tolerance ||
+        (Math.abs(shear - a.shear) <= tolerance && deg < a.shearDirectionDeg)
+      ) {
         a.shear = shear;
         a.shearDirectionDeg = deg;
       }
@@ -170,4 +157,52 @@ function worstShearDirectionDeg([a, b, c, d]: [number, number, number, number]):
 function normalizeDeg(deg: number): number {
   const value = ((deg % 360) + 360) % 360;
   return value >= 360 - 1e-12 ? 0 : value;
+}
+
+function coefficients(input: BoltGroupInput) {
+  const n = input.anchors.length;
+  const [cx, cy] = centroid(input.anchors);
+  const rx = input.anchors.map((p) => p[0] - cx);
+  const ry = input.anchors.map((p) => p[1] - cy);
+  let ixx = 0;
+  let iyy = 0;
+  let ixy = 0;
+  let polar = 0;
+  for (let i = 0; i < n; i++) {
+    ixx += rx[i] * rx[i];
+    iyy += ry[i] * ry[i];
+    ixy += rx[i] * ry[i];
+    polar += rx[i] * rx[i] + ry[i] * ry[i];
+  }
+  const det = ixx * iyy - ixy * ixy;
+  // I⁻¹ = [[iyy, −ixy], [−ixy, ixx]] / det
+  const inv = (vx: number, vy: number): [number, number] => [
+    (iyy * vx - ixy * vy) / det,
+    (ixx * vy - ixy * vx) / det,
+  ];
+  const ex = input.cgPlan[0] - cx;
+  const ey = input.cgPlan[1] - cy;
+  const [gx, gy] = inv(ex, ey);
+  const F = input.horizontalForce;
+  const D = input.deadLoad;
+
+  // Tension T_i(θ) = A_i cos θ + B_i sin θ − C_i.
+  const A: number[] = [];
+  const B: number[] = [];
+  const C: number[] = [];
+  // Shear vector V_i(θ) = F·L_i·u, L_i = 𝟙/n + w_i gᵀ with w_i = ẑ × r_i and g = (−e_y, e_x)/J.
+  const L: [number, number, number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    const [qx, qy] = inv(rx[i], ry[i]);
+    A.push(-F * input.cgHeight * qx);
+    B.push(-F * input.cgHeight * qy);
+    C.push(D * (1 / n + gx * rx[i] + gy * ry[i]));
+    const wx = -ry[i];
+    const wy = rx[i];
+    const tx = -ey / polar;
+    const ty = ex / polar;
+    L.push([1 / n + wx * tx, wx * ty, wy * tx, 1 / n + wy * ty]);
+  }
+
+  return { n, A, B, C, L, F, D };
 }

@@ -1,6 +1,6 @@
 import { inputError } from '../errors.js';
-import { sweepOscillators } from '../oscillator/sweep.js';
 import type { Method } from '../oscillator/recurrence.js';
+import { sweepOscillators } from '../oscillator/sweep.js';
 import { type GroundRecord, peakGroundAcceleration } from '../record/record.js';
 import { STANDARD_GRAVITY_MS2 } from '../units.js';
 
@@ -9,6 +9,8 @@ export interface SpectralValue {
   psaG: number;
   how: string;
 }
+
+const short = (value: number) => Number(value.toPrecision(5)).toString();
 
 /**
  * PSA at period T read from a tabulated spectrum (periods in s, PSA in g, same length).
@@ -43,13 +45,16 @@ export function psaAtPeriod(
   const p1 = psaG[i];
   if (t0 === 0 || !(p0 > 0) || !(p1 > 0)) {
     const value = p0 + ((p1 - p0) * (periodS - t0)) / (t1 - t0);
-    return { psaG: value, how: `PSA at T = ${periodS} s, interpolated linearly between ${t0} s and ${t1} s` };
+    return {
+      psaG: value,
+      how: `PSA at T = ${periodS} s, interpolated linearly between ${short(t0)} s and ${short(t1)} s`,
+    };
   }
   const fraction = Math.log(periodS / t0) / Math.log(t1 / t0);
   const value = Math.exp(Math.log(p0) + fraction * Math.log(p1 / p0));
   return {
     psaG: value,
-    how: `PSA at T = ${periodS} s, interpolated log–log between ${t0} s and ${t1} s`,
+    how: `PSA at T = ${periodS} s, interpolated log–log between ${short(t0)} s and ${short(t1)} s`,
   };
 }
 
@@ -69,7 +74,11 @@ export function recordPsaForComponent(
       how: `PGA of ${record.name} (rigid component)`,
     };
   }
-  const peaks = sweepOscillators(record.accelMS2, record.dtS, { periodsS: [periodS], dampings: [damping], method });
+  const peaks = sweepOscillators(record.accelMS2, record.dtS, {
+    periodsS: [periodS],
+    dampings: [damping],
+    method,
+  });
   const omega = (2 * Math.PI) / periodS;
   return {
     psaG: (omega * omega * peaks.sdM[0]) / STANDARD_GRAVITY_MS2,

@@ -46,7 +46,21 @@ export interface Equipment {
   input: Readonly<Record<string, unknown>>;
 }
 
-const REQUIRED = ['name', 'units', 'weight', 'cg_height', 'anchors', 'period_s', 'damping', 'z', 'h', 'ap', 'rp', 'ip', 'sds'];
+const REQUIRED = [
+  'name',
+  'units',
+  'weight',
+  'cg_height',
+  'anchors',
+  'period_s',
+  'damping',
+  'z',
+  'h',
+  'ap',
+  'rp',
+  'ip',
+  'sds',
+];
 const OPTIONAL = ['omega0', 'cg_plan', 'notes'];
 const KNOWN = [...REQUIRED, ...OPTIONAL];
 
@@ -69,7 +83,10 @@ export function parseEquipment(text: string, file: string): Equipment {
     const message = error instanceof Error ? error.message : String(error);
     const position = /position (\d+)/.exec(message);
     const line = position ? lineOf(text, Number(position[1])) : undefined;
-    throw inputError(`not valid JSON (${message.replace(/ in JSON at position \d+.*$/, '')})`, { file, line });
+    throw inputError(`not valid JSON (${message.replace(/ in JSON at position \d+.*$/, '')})`, {
+      file,
+      line,
+    });
   }
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
     throw inputError('an equipment file holds one JSON object {"name": ..., "units": ..., ...}', { file });
@@ -86,7 +103,10 @@ export function parseEquipment(text: string, file: string): Equipment {
   for (const key of Object.keys(object)) {
     if (!KNOWN.includes(key)) {
       const hint = KNOWN.find((known) => known.replace(/_/g, '') === key.replace(/_/g, '').toLowerCase());
-      fail(key, `is not a known field${hint ? ` (did you mean "${hint}"?)` : ''}; known: ${KNOWN.join(', ')}`);
+      fail(
+        key,
+        `is not a known field${hint ? ` (did you mean "${hint}"?)` : ''}; known: ${KNOWN.join(', ')}`,
+      );
     }
   }
   for (const key of REQUIRED) {
@@ -118,7 +138,11 @@ export function parseEquipment(text: string, file: string): Equipment {
   const cgGiven = object['cg_plan'] !== undefined && object['cg_plan'] !== null;
   if (cgGiven) {
     const point = object['cg_plan'];
-    if (!Array.isArray(point) || point.length !== 2 || !point.every((v) => typeof v === 'number' && Number.isFinite(v))) {
+    if (
+      !Array.isArray(point) ||
+      point.length !== 2 ||
+      !point.every((v) => typeof v === 'number' && Number.isFinite(v))
+    ) {
       fail('cg_plan', `must be [x, y] in ${system.length}`);
     }
     cgPlan = [(point as number[])[0], (point as number[])[1]];
@@ -132,8 +156,16 @@ export function parseEquipment(text: string, file: string): Equipment {
   else if (typeof periodRaw === 'number' && Number.isFinite(periodRaw) && periodRaw > 0) periodS = periodRaw;
   else periodS = fail('period_s', `must be a period > 0 s or "rigid", got ${JSON.stringify(periodRaw)}`);
 
-  const damping = number('damping', (v) => v >= 0 && v < 1, 'a fraction of critical, 0 ≤ ζ < 1 (0.05 for 5%)');
-  const z = number('z', (v) => v >= 0, `a height ≥ 0 above the base in ${system.length} (0 at or below the base, ASCE 7-16 §13.3.1)`);
+  const damping = number(
+    'damping',
+    (v) => v >= 0 && v < 1,
+    'a fraction of critical, 0 ≤ ζ < 1 (0.05 for 5%)',
+  );
+  const z = number(
+    'z',
+    (v) => v >= 0,
+    `a height ≥ 0 above the base in ${system.length} (0 at or below the base, ASCE 7-16 §13.3.1)`,
+  );
   const h = number('h', (v) => v > 0, `the roof height above the base, > 0, in ${system.length}`);
   const ap = number('ap', (v) => v > 0, 'a positive amplification factor a_p');
   const rp = number('rp', (v) => v > 0, 'a positive response modification factor R_p');
@@ -170,7 +202,11 @@ function readPoints(value: unknown, fail: (message: string) => never): [number, 
   if (!Array.isArray(value)) return fail('must be a list of [x, y] anchor positions');
   if (value.length < 2) return fail(`needs at least 2 anchors, got ${value.length}`);
   return value.map((point, i) => {
-    if (!Array.isArray(point) || point.length !== 2 || !point.every((v) => typeof v === 'number' && Number.isFinite(v))) {
+    if (
+      !Array.isArray(point) ||
+      point.length !== 2 ||
+      !point.every((v) => typeof v === 'number' && Number.isFinite(v))
+    ) {
       return fail(`anchor ${i + 1} must be [x, y] with two numbers, got ${JSON.stringify(point)}`);
     }
     return [point[0], point[1]] as [number, number];

@@ -60,9 +60,13 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   );
   parts.push(`<title>${escapeXml(input.title)}</title>`);
   parts.push(`<rect width="${width}" height="${height}" fill="white"/>`);
-  parts.push(`<text x="${width / 2}" y="22" text-anchor="middle" font-size="15">${escapeXml(input.title)}</text>`);
+  parts.push(
+    `<text x="${width / 2}" y="22" text-anchor="middle" font-size="15">${escapeXml(input.title)}</text>`,
+  );
   notes.forEach((line, i) => {
-    parts.push(`<text x="${width / 2}" y="${40 + i * 16}" text-anchor="middle" fill="#333">${escapeXml(line)}</text>`);
+    parts.push(
+      `<text x="${width / 2}" y="${40 + i * 16}" text-anchor="middle" fill="#333">${escapeXml(line)}</text>`,
+    );
   });
   parts.push(
     `<rect x="${left}" y="${top}" width="${plotSize}" height="${plotSize}" fill="none" stroke="#999" stroke-width="1"/>`,

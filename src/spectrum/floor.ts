@@ -40,7 +40,7 @@ export function floorRecord(ground: GroundRecord, building: BuildingMode): Groun
   const stiffness = omega * omega;
   let q = 0;
   let v = 0;
-  floor[0] = ag[0] + building.modalFactor * (-ag[0]);
+  floor[0] = ag[0] + building.modalFactor * -ag[0];
   for (let i = 1; i < ag.length; i++) {
     const p0 = ag[i - 1];
     const dp = (ag[i] - p0) / substeps;
@@ -91,8 +91,13 @@ function checkBuilding(building: BuildingMode): void {
  * not narrow it. The guide's further smoothing of valleys is not done. T = 0 is left as is.
  * The result is never below the unbroadened spectrum (T itself lies in its window).
  */
-export function broadenCurve(periodsS: ArrayLike<number>, values: ArrayLike<number>, fraction = 0.15): Float64Array {
-  if (!(fraction >= 0) || !(fraction < 1)) throw inputError(`the broadening must be a fraction 0 ≤ b < 1, got ${fraction}`);
+export function broadenCurve(
+  periodsS: ArrayLike<number>,
+  values: ArrayLike<number>,
+  fraction = 0.15,
+): Float64Array {
+  if (!(fraction >= 0) || !(fraction < 1))
+    throw inputError(`the broadening must be a fraction 0 ≤ b < 1, got ${fraction}`);
   const n = periodsS.length;
   const out = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -107,7 +112,11 @@ export function broadenCurve(periodsS: ArrayLike<number>, values: ArrayLike<numb
     for (let j = 0; j < n; j++) {
       if (periodsS[j] >= low && periodsS[j] <= high && values[j] > peak) peak = values[j];
     }
-    peak = Math.max(peak, interpolateLogLog(periodsS, values, low), interpolateLogLog(periodsS, values, high));
+    peak = Math.max(
+      peak,
+      interpolateLogLog(periodsS, values, low),
+      interpolateLogLog(periodsS, values, high),
+    );
     out[i] = peak;
   }
   return out;

@@ -1,11 +1,17 @@
 import { mkdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { cautionLines } from '../../caution.js';
-import { ANCHORAGE_SCOPE, type AnchorageAnalysis, analyseAnchorage, type ElasticInput, parseDemandChoice } from '../../anchorage/anchorage.js';
+import {
+  ANCHORAGE_SCOPE,
+  type AnchorageAnalysis,
+  analyseAnchorage,
+  type ElasticInput,
+  parseDemandChoice,
+} from '../../anchorage/anchorage.js';
 import { anchorageToJson } from '../../anchorage/anchorage-json.js';
 import { psaAtPeriod, recordPsaForComponent } from '../../anchorage/elastic-demand.js';
 import { centroid, EQUIPMENT_UNITS, type Equipment, parseEquipment } from '../../anchorage/equipment.js';
+import { cautionLines } from '../../caution.js';
 import { inputError, usageError } from '../../errors.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
@@ -33,9 +39,20 @@ export function registerAnchor(program: Command): void {
       'preliminary anchor demands (tension, shear) of rigidly based equipment: ASCE 7-16 §13.3.1 force and/or a record’s elastic demand',
     )
     .option('--equipment <file>', 'equipment description (JSON; see the README)')
-    .option('--record <file>', 'ground record for the elastic demand (repeatable: the largest governs)', collect, [])
-    .option('--spectrum <file>', 'spectrum JSON from `quakesweep spectrum --format json` or `quakesweep floor`')
-    .option('--demand <choice>', 'horizontal force for the anchors: code, record or max (default: max with a motion, else code)')
+    .option(
+      '--record <file>',
+      'ground record for the elastic demand (repeatable: the largest governs)',
+      collect,
+      [],
+    )
+    .option(
+      '--spectrum <file>',
+      'spectrum JSON from `quakesweep spectrum --format json` or `quakesweep floor`',
+    )
+    .option(
+      '--demand <choice>',
+      'horizontal force for the anchors: code, record or max (default: max with a motion, else code)',
+    )
     .option('--method <method>', 'oscillator step method for --record', 'newmark-average');
   addRecordOptions(command);
   command
@@ -107,7 +124,9 @@ function refuseGroundOnFloor(equipment: Equipment, demand: string, notes: string
         'or use --demand code',
     );
   }
-  notes.push('The ground motion given was not used: the equipment is above the base and no floor spectrum was given.');
+  notes.push(
+    'The ground motion given was not used: the equipment is above the base and no floor spectrum was given.',
+  );
 }
 
 interface SpectrumFileValue {
@@ -153,8 +172,10 @@ export function readSpectrumFile(file: string, equipment: Equipment): SpectrumFi
   if (equipment.periodS === 'rigid') {
     const zero = periods.indexOf(0);
     const pga = (object['record'] as Record<string, unknown> | undefined)?.['pga_g'];
-    if (zero >= 0) value = { psaG: psa[zero], how: 'PSA at T = 0 (PGA) of the spectrum, rigid component', source: file };
-    else if (typeof pga === 'number') value = { psaG: pga, how: '"record.pga_g" of the spectrum file, rigid component', source: file };
+    if (zero >= 0)
+      value = { psaG: psa[zero], how: 'PSA at T = 0 (PGA) of the spectrum, rigid component', source: file };
+    else if (typeof pga === 'number')
+      value = { psaG: pga, how: '"record.pga_g" of the spectrum file, rigid component', source: file };
     else throw inputError('has neither T = 0 nor "record.pga_g" for a rigid component', { file });
   } else {
     value = { ...psaAtPeriod(periods, psa, equipment.periodS, file), source: file };
@@ -213,8 +234,11 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
   out.push(
     `  F_p code (ASCE 7-16 Eq. 13.3-1)   ${f(c.fpFormula).padStart(10)} ${unit}   bounds ${f(c.fpMin)} to ${f(c.fpMax)} ${unit}`,
   );
-  out.push(`  F_p code, bounded                ${f(c.fp).padStart(10)} ${unit}   (${c.bound}; z/h = ${c.heightRatio.toFixed(3)})`);
-  if (e.omega0 !== null) out.push(`  Ω₀·F_p                           ${f(analysis.codeForAnchorsKN).padStart(10)} ${unit}`);
+  out.push(
+    `  F_p code, bounded                ${f(c.fp).padStart(10)} ${unit}   (${c.bound}; z/h = ${c.heightRatio.toFixed(3)})`,
+  );
+  if (e.omega0 !== null)
+    out.push(`  Ω₀·F_p                           ${f(analysis.codeForAnchorsKN).padStart(10)} ${unit}`);
   if (analysis.elasticKN !== null && analysis.elastic !== null) {
     out.push(
       `  record elastic PSA·W_p           ${f(analysis.elasticKN).padStart(10)} ${unit}   (PSA ${analysis.elastic.psaG.toPrecision(4)} g)`,
@@ -228,7 +252,9 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
   out.push(`vertical  E_v = ±0.2 S_DS W_p = ${f(analysis.verticalKN)} ${unit}`);
   out.push('');
   const a = analysis.anchors;
-  out.push('anchors (worst over every direction of shaking; direction of the force, ° counter-clockwise from +x)');
+  out.push(
+    'anchors (worst over every direction of shaking; direction of the force, ° counter-clockwise from +x)',
+  );
   out.push(
     `  ${'#'.padStart(3)} ${`x ${system.length}`.padStart(9)} ${`y ${system.length}`.padStart(9)} ${`tension ${unit}`.padStart(13)} ${'at °'.padStart(7)} ${`shear ${unit}`.padStart(11)} ${'at °'.padStart(7)}`,
   );
@@ -240,7 +266,8 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
   out.push(
     `  max tension ${f(a.maxTension)} ${unit} at ${a.maxTensionDirectionDeg.toFixed(1)}° (anchor ${a.governingAnchor + 1}); max shear ${f(a.maxShear)} ${unit}`,
   );
-  if (a.maxTension === 0) out.push('  no anchor goes into tension: the counteracting dead load exceeds the overturning.');
+  if (a.maxTension === 0)
+    out.push('  no anchor goes into tension: the counteracting dead load exceeds the overturning.');
   out.push('');
   out.push('method and assumptions');
   for (const line of analysis.assumptions) out.push(`  - ${line}`);

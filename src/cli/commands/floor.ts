@@ -29,7 +29,10 @@ export function registerFloor(program: Command): void {
   command
     .option('--building-period <seconds>', "the building's fundamental period T_b, s (required)")
     .option('--building-damping <ratio>', "the building's modal damping, fraction or percentage", '5%')
-    .option('--modal-factor <value>', 'Γφ at the floor: participation factor times mode shape there (required)')
+    .option(
+      '--modal-factor <value>',
+      'Γφ at the floor: participation factor times mode shape there (required)',
+    )
     .option('--broaden [fraction]', 'broaden peaks over [T(1−b), T/(1−b)], b = 0.15 unless given')
     .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
@@ -40,17 +43,23 @@ export function registerFloor(program: Command): void {
 
 export function buildingFromOptions(options: FloorCliOptions): BuildingMode {
   if (options.buildingPeriod === undefined) throw usageError('--building-period <seconds> is required');
-  if (options.modalFactor === undefined) throw usageError('--modal-factor <Γφ> is required (1 is the base of a rigid building; about 1.3 to 1.6 at the roof of a regular one)');
+  if (options.modalFactor === undefined)
+    throw usageError(
+      '--modal-factor <Γφ> is required (1 is the base of a rigid building; about 1.3 to 1.6 at the roof of a regular one)',
+    );
   const periodS = Number(options.buildingPeriod);
   if (!(periodS > 0) || !Number.isFinite(periodS)) {
-    throw usageError(`--building-period must be a positive number of seconds, got '${options.buildingPeriod}'`);
+    throw usageError(
+      `--building-period must be a positive number of seconds, got '${options.buildingPeriod}'`,
+    );
   }
   const modalFactor = Number(options.modalFactor);
   if (options.modalFactor.trim() === '' || !Number.isFinite(modalFactor)) {
     throw usageError(`--modal-factor must be a number, got '${options.modalFactor}'`);
   }
   const dampings = parseDampings(options.buildingDamping ?? '5%');
-  if (dampings.length !== 1 || !(dampings[0] < 1)) throw usageError('--building-damping takes one ratio below 1');
+  if (dampings.length !== 1 || !(dampings[0] < 1))
+    throw usageError('--building-damping takes one ratio below 1');
   return { periodS, damping: dampings[0], modalFactor };
 }
 
@@ -58,7 +67,8 @@ function broadeningFromOptions(value: string | boolean | undefined): number | nu
   if (value === undefined || value === false) return null;
   if (value === true) return 0.15;
   const b = Number(value);
-  if (value.trim() === '' || !(b >= 0) || !(b < 1)) throw usageError(`--broaden must be a fraction 0 ≤ b < 1, got '${value}'`);
+  if (value.trim() === '' || !(b >= 0) || !(b < 1))
+    throw usageError(`--broaden must be a fraction 0 ≤ b < 1, got '${value}'`);
   return b;
 }
 
@@ -108,7 +118,11 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
       broadening:
         broadening === null
           ? null
-          : { fraction: broadening, window: 'max over [T(1-b), T/(1-b)]', source: 'US NRC Regulatory Guide 1.122 (from memory)' },
+          : {
+              fraction: broadening,
+              window: 'max over [T(1-b), T/(1-b)]',
+              source: 'US NRC Regulatory Guide 1.122 (from memory)',
+            },
       unbroadened_psa_g: result.unbroadened.curves.map((curve) => ({
         damping: curve.damping,
         psa_g: Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
@@ -133,12 +147,19 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
   else process.stdout.write(text);
 }
 
-function floorTable(floor: Spectrum, ground: Spectrum, building: BuildingMode, assumptions: string[]): string {
+function floorTable(
+  floor: Spectrum,
+  ground: Spectrum,
+  building: BuildingMode,
+  assumptions: string[],
+): string {
   const g = STANDARD_GRAVITY_MS2;
   const out: string[] = [];
   for (const line of cautionLines(92)) out.push(`! ${line}`);
   out.push('');
-  out.push(`record    ${ground.record.name} (${ground.record.source}), PGA ${(ground.record.pgaMS2 / g).toFixed(4)} g`);
+  out.push(
+    `record    ${ground.record.name} (${ground.record.source}), PGA ${(ground.record.pgaMS2 / g).toFixed(4)} g`,
+  );
   out.push(
     `building  T_b ${building.periodS} s, ζ_b ${building.damping}, Γφ ${building.modalFactor}; floor PGA ${(floor.record.pgaMS2 / g).toFixed(4)} g`,
   );
@@ -155,7 +176,10 @@ function floorTable(floor: Spectrum, ground: Spectrum, building: BuildingMode, a
   for (const p of rows) {
     const row = [Number(periods[p].toPrecision(3)).toString().padStart(8)];
     floor.curves.forEach((curve, d) => {
-      row.push((ground.curves[d].psaMS2[p] / g).toPrecision(4).padStart(18), (curve.psaMS2[p] / g).toPrecision(4).padStart(17));
+      row.push(
+        (ground.curves[d].psaMS2[p] / g).toPrecision(4).padStart(18),
+        (curve.psaMS2[p] / g).toPrecision(4).padStart(17),
+      );
     });
     out.push(row.join(' '));
   }
@@ -171,7 +195,8 @@ function pickRows(periodsS: Float64Array): number[] {
   const rows = new Set<number>();
   for (const target of targets) {
     let best = 0;
-    for (let i = 1; i < periodsS.length; i++) if (Math.abs(periodsS[i] - target) < Math.abs(periodsS[best] - target)) best = i;
+    for (let i = 1; i < periodsS.length; i++)
+      if (Math.abs(periodsS[i] - target) < Math.abs(periodsS[best] - target)) best = i;
     rows.add(best);
   }
   return [...rows].sort((a, b) => a - b);
