@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { codeHorizontalForce, counteractingDeadLoadFactor, verticalForce } from '../../src/anchorage/code-force.js';
+import {
+  codeHorizontalForce,
+  counteractingDeadLoadFactor,
+  verticalForce,
+} from '../../src/anchorage/code-force.js';
 
 // Source: ASCE/SEI 7-16 §13.3.1, Eqs. 13.3-1 to 13.3-3 and §13.3.1.2; the numbers are hand calculations.
 const generator = { weight: 45, z: 0, h: 10, ap: 2.5, rp: 2, ip: 1.5, sds: 1 };
