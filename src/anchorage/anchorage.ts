@@ -113,7 +113,8 @@ function assumptionsOf(
     'Vertical: E_v = 0.2 S_DS W_p (§13.3.1.2); in the anchor tension it enters through the dead load ' +
       `(0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p of ASCE/SEI 7-16 §2.3.6, which counteracts uplift.`,
     'Anchors: rigid base, elastic bolt group about the anchors’ centroid, all anchors of equal stiffness ' +
-      'in tension and compression; the base’s bearing on the support is not modelled. Horizontal force at the ' +
+      'in tension and compression; the neutral axis follows from moment equilibrium about both plan axes, so ' +
+      'off the pattern’s principal axes it is not perpendicular to the direction of shaking; the base’s bearing on the support is not modelled. Horizontal force at the ' +
       'centre-of-mass height; overturning M = F·h_cg; every direction of shaking 0–360° (1° steps, refined to ' +
       'each anchor’s exact worst direction); one horizontal direction at a time (no orthogonal combination).',
     'Shear: F/n per anchor' +

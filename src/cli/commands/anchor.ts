@@ -220,7 +220,7 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
   const out: string[] = [];
   for (const line of cautionLines(92)) out.push(`! ${line}`);
   out.push('');
-  out.push(`scope     ${ANCHORAGE_SCOPE}`);
+  out.push(...wrapText(ANCHORAGE_SCOPE, 92, 'scope     ', '          '));
   out.push('');
   out.push(`equipment ${e.name} (${e.units}: ${unit}, ${system.length})`);
   out.push(
@@ -270,6 +270,24 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
     out.push('  no anchor goes into tension: the counteracting dead load exceeds the overturning.');
   out.push('');
   out.push('method and assumptions');
-  for (const line of analysis.assumptions) out.push(`  - ${line}`);
+  for (const line of analysis.assumptions) out.push(...wrapText(line, 92, '  - ', '    '));
   return `${out.join('\n')}\n`;
+}
+
+/** Wrap a paragraph at `width` columns, the first line after `first`, the others after `rest`. */
+export function wrapText(text: string, width: number, first: string, rest: string): string[] {
+  const lines: string[] = [];
+  let line = first;
+  let fresh = true;
+  for (const word of text.split(' ')) {
+    if (!fresh && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = rest + word;
+    } else {
+      line = fresh ? line + word : `${line} ${word}`;
+    }
+    fresh = false;
+  }
+  lines.push(line);
+  return lines;
 }

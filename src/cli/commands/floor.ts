@@ -10,6 +10,7 @@ import { type BuildingMode, type FloorSpectra, floorSpectrum } from '../../spect
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord } from '../record-options.js';
+import { wrapText } from './anchor.js';
 import { addGridOptions, gridFromOptions, type SpectrumCliOptions } from './spectrum.js';
 
 export interface FloorCliOptions extends SpectrumCliOptions {
@@ -186,7 +187,7 @@ function floorTable(
   out.push(`(${periods.length} periods; --format json for all of them)`);
   out.push('');
   out.push('method and assumptions');
-  for (const line of assumptions) out.push(`  - ${line}`);
+  for (const line of assumptions) out.push(...wrapText(line, 92, '  - ', '    '));
   return `${out.join('\n')}\n`;
 }
 
