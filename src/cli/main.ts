@@ -1,8 +1,10 @@
 import { Command, CommanderError } from 'commander';
 import { isQuakesweepError } from '../errors.js';
 import { VERSION } from '../version.js';
+import { registerAnchor } from './commands/anchor.js';
 import { registerDamping } from './commands/damping.js';
 import { registerDesign } from './commands/design.js';
+import { registerFloor } from './commands/floor.js';
 import { registerInfo } from './commands/info.js';
 import { registerRotD } from './commands/rotd.js';
 import { registerSpectrum } from './commands/spectrum.js';
@@ -25,6 +27,8 @@ export function buildProgram(): Command {
   registerDesign(program);
   registerDamping(program);
   registerRotD(program);
+  registerFloor(program);
+  registerAnchor(program);
   return program;
 }
 

@@ -1,0 +1,155 @@
+import { usageError } from '../errors.js';
+import { type BoltGroupResult, boltGroupForces } from './bolt-group.js';
+import {
+  type CodeForce,
+  codeHorizontalForce,
+  counteractingDeadLoadFactor,
+  verticalForce,
+} from './code-force.js';
+import type { SpectralValue } from './elastic-demand.js';
+import type { Equipment } from './equipment.js';
+
+export type DemandChoice = 'code' | 'record' | 'max';
+
+export const DEMAND_CHOICES: readonly DemandChoice[] = ['code', 'record', 'max'];
+
+export function parseDemandChoice(text: string): DemandChoice {
+  if ((DEMAND_CHOICES as readonly string[]).includes(text)) return text as DemandChoice;
+  throw usageError(`--demand '${text}': use code, record or max`);
+}
+
+/** The elastic demand from a record or a spectrum, with where it came from. */
+export interface ElasticInput extends SpectralValue {
+  /** A record name or a spectrum file, for outputs. */
+  source: string;
+}
+
+/** Everything the anchorage outputs state; forces in kN, lengths in m. */
+export interface AnchorageAnalysis {
+  equipment: Equipment;
+  code: CodeForce;
+  /** Ω₀·F_p when Ω₀ is given, else F_p, kN. */
+  codeForAnchorsKN: number;
+  /** PSA·W_p, kN, or null without a record or spectrum. */
+  elasticKN: number | null;
+  elastic: ElasticInput | null;
+  demand: DemandChoice;
+  governing: 'code' | 'record';
+  /** The horizontal force the anchors were computed for, kN. */
+  horizontalForAnchorsKN: number;
+  verticalKN: number;
+  deadLoadFactor: number;
+  anchors: BoltGroupResult;
+  assumptions: string[];
+}
+
+/**
+ * Code force (ASCE/SEI 7-16 §13.3.1), elastic record demand, the user's choice between them, and
+ * the anchor forces of the rigid base by the elastic bolt-group method (see bolt-group.ts).
+ * Ω₀ multiplies the code's horizontal force only: the elastic record demand is already unreduced.
+ */
+export function analyseAnchorage(
+  equipment: Equipment,
+  options: { elastic: ElasticInput | null; demand: DemandChoice },
+): AnchorageAnalysis {
+  const { demand, elastic } = options;
+  if (demand !== 'code' && elastic === null) {
+    throw usageError(
+      `--demand ${demand} needs a ground motion: give --record or --spectrum (or use --demand code)`,
+    );
+  }
+  const code = codeHorizontalForce({
+    weight: equipment.weightKN,
+    z: equipment.zM,
+    h: equipment.hM,
+    ap: equipment.ap,
+    rp: equipment.rp,
+    ip: equipment.ip,
+    sds: equipment.sds,
+  });
+  const omega0 = equipment.omega0 ?? 1;
+  const codeForAnchorsKN = omega0 * code.fp;
+  const elasticKN = elastic === null ? null : elastic.psaG * equipment.weightKN;
+  let governing: 'code' | 'record';
+  if (demand === 'code') governing = 'code';
+  else if (demand === 'record') governing = 'record';
+  else governing = elasticKN !== null && elasticKN > codeForAnchorsKN ? 'record' : 'code';
+  const horizontalForAnchorsKN = governing === 'code' ? codeForAnchorsKN : (elasticKN as number);
+  const deadLoadFactor = counteractingDeadLoadFactor(equipment.sds);
+  const anchors = boltGroupForces({
+    anchors: equipment.anchorsM,
+    cgPlan: equipment.cgPlanM,
+    cgHeight: equipment.cgHeightM,
+    horizontalForce: horizontalForAnchorsKN,
+    deadLoad: deadLoadFactor * equipment.weightKN,
+  });
+  return {
+    equipment,
+    code,
+    codeForAnchorsKN,
+    elasticKN,
+    elastic,
+    demand,
+    governing,
+    horizontalForAnchorsKN,
+    verticalKN: verticalForce({ weight: equipment.weightKN, sds: equipment.sds }),
+    deadLoadFactor,
+    anchors,
+    assumptions: assumptionsOf(equipment, code, elastic, governing, deadLoadFactor),
+  };
+}
+
+function assumptionsOf(
+  equipment: Equipment,
+  code: CodeForce,
+  elastic: ElasticInput | null,
+  governing: 'code' | 'record',
+  deadLoadFactor: number,
+): string[] {
+  const out: string[] = [
+    'Code force: ASCE/SEI 7-16 §13.3.1, F_p = 0.4 a_p S_DS W_p (1 + 2z/h)/(R_p/I_p), bounded by ' +
+      '0.3 S_DS I_p W_p and 1.6 S_DS I_p W_p; a_p, R_p, I_p and S_DS are as given in the equipment file ' +
+      '(not chosen by this tool from the standard).',
+    'Vertical: E_v = 0.2 S_DS W_p (§13.3.1.2); in the anchor tension it enters through the dead load ' +
+      `(0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p of ASCE/SEI 7-16 §2.3.6, which counteracts uplift.`,
+    'Anchors: rigid base, elastic bolt group about the anchors’ centroid, all anchors of equal stiffness ' +
+      'in tension and compression; the neutral axis follows from moment equilibrium about both plan axes, so ' +
+      'off the pattern’s principal axes it is not perpendicular to the direction of shaking; the base’s bearing on the support is not modelled. Horizontal force at the ' +
+      'centre-of-mass height; overturning M = F·h_cg; every direction of shaking 0–360° (1° steps, refined to ' +
+      'each anchor’s exact worst direction); one horizontal direction at a time (no orthogonal combination).',
+    'Shear: F/n per anchor' +
+      (equipment.cgPlanGiven
+        ? ' plus the torsion of the eccentric centre of mass, F·e, shared by the polar moment of the pattern (elastic method).'
+        : '; the centre of mass is taken at the anchors’ centroid (no torsion).'),
+  ];
+  if (equipment.cgPlanGiven) {
+    out.push(
+      'Eccentric centre of mass: the counteracting dead load acts at the given plan position and is shared ' +
+        'linearly over the pattern (less relief for anchors far from it); the horizontal force acts at the same point.',
+    );
+  }
+  if (code.heightRatioCapped)
+    out.push('z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.');
+  if (equipment.omega0 !== null) {
+    out.push(
+      `Ω₀ = ${equipment.omega0} multiplies the code horizontal force for the anchors (not the dead load, not the record demand).`,
+    );
+  }
+  if (elastic !== null) {
+    out.push(
+      `Record demand: elastic, PSA·W_p with ${elastic.how} (source: ${elastic.source}); not reduced by R_p nor ` +
+        'multiplied by I_p or Ω₀.',
+    );
+  }
+  out.push(
+    `Governing horizontal force for the anchors: ${governing === 'code' ? 'the code force' : 'the record demand'}.`,
+  );
+  return out;
+}
+
+/** What these outputs cover and what they do not (stated in every output). */
+export const ANCHORAGE_SCOPE =
+  'Demands only: forces on the anchors. Anchor capacities (steel strength, concrete breakout, pull-out, ' +
+  'side-face blowout, pryout, edge distances, embedment, base-plate and equipment-frame strength) and the ' +
+  'anchors’ qualification are not checked. A licensed structural engineer must review these numbers and ' +
+  'the governing local code applies.';

@@ -1,0 +1,208 @@
+import { centroid } from './equipment.js';
+
+export interface BoltGroupInput {
+  /** Plan positions of the anchors (any length unit, the same for every length here). */
+  anchors: readonly (readonly [number, number])[];
+  /** Plan position of the centre of mass. */
+  cgPlan: readonly [number, number];
+  /** Height of the centre of mass above the anchor plane. */
+  cgHeight: number;
+  /** Horizontal force at the centre of mass (any force unit; Ω₀ already applied if wanted). */
+  horizontalForce: number;
+  /** Counteracting dead load, (0.9 − 0.2 S_DS)·W_p, in the same force unit (acts downward at the centre of mass). */
+  deadLoad: number;
+  /** Step of the direction sweep, degrees (default 1). */
+  stepDeg?: number;
+}
+
+export interface AnchorDemand {
+  x: number;
+  y: number;
+  /** Worst tension over all directions (0 when the anchor never goes into tension). */
+  tension: number;
+  /** Direction of the horizontal force that gives it, degrees counter-clockwise from +x. */
+  tensionDirectionDeg: number;
+  /** Worst shear over all directions. */
+  shear: number;
+  shearDirectionDeg: number;
+}
+
+export interface BoltGroupResult {
+  perAnchor: AnchorDemand[];
+  /** 0-based index of the anchor with the largest tension (the first, on a tie). */
+  governingAnchor: number;
+  maxTension: number;
+  maxTensionDirectionDeg: number;
+  maxShear: number;
+  maxShearDirectionDeg: number;
+  /** Directions evaluated (the regular sweep plus each anchor's exact worst directions). */
+  directionsEvaluated: number;
+}
+
+/**
+ * Tension (≥ 0) and shear of every anchor for the horizontal force in one direction, degrees
+ * counter-clockwise from +x (same method as boltGroupForces).
+ */
+export function boltGroupAtDirection(
+  input: BoltGroupInput,
+  directionDeg: number,
+): { tension: number[]; shear: number[] } {
+  const { n, A, B, C, L, F } = coefficients(input);
+  const c = Math.cos((directionDeg * Math.PI) / 180);
+  const s = Math.sin((directionDeg * Math.PI) / 180);
+  const tension: number[] = [];
+  const shear: number[] = [];
+  for (let i = 0; i < n; i++) {
+    tension.push(Math.max(0, A[i] * c + B[i] * s - C[i]));
+    const [l11, l12, l21, l22] = L[i];
+    shear.push(Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s));
+  }
+  return { tension, shear };
+}
+
+/**
+ * Anchor tension and shear of a rigid base on an elastic anchor group (the elastic method for
+ * eccentrically loaded fastener groups, e.g. Salmon and Johnson, Steel Structures, §4.12 for shear
+ * and the analogous linear-strain rule for axial load; common practice for equipment anchorage).
+ *
+ * Axial: the base rotates rigidly about a neutral axis through the anchors' centroid, so each
+ * anchor's force is linear in its position, P_i = N/n + b·r_i, with N and b fixed by ΣP_i = N and
+ * ΣP_i r_i = moment; b = I⁻¹·m with I = Σ r_i r_iᵀ the pattern's second-moment matrix. For the
+ * force F in the unit direction u at height h_cg, tension T_i = −F h_cg (I⁻¹u)·r_i; the dead load D
+ * at the plan offset e of the centre of mass from the centroid gives compression
+ * D (1/n + (I⁻¹e)·r_i). For a direction along a principal axis of the pattern this is
+ * T_i = M d_i / Σd_j² − D/n with d_i the distance from the neutral axis perpendicular to u; off
+ * those axes the neutral axis of an elastic group is not perpendicular to u (moment equilibrium
+ * about both plan axes requires the I⁻¹ form). Tension below zero is reported as zero.
+ *
+ * Shear: direct share F/n plus the torsion F·(e × u) of an eccentric centre of mass, shared in
+ * proportion to distance from the centroid (polar moment J = Σ|r_i|²), added as vectors.
+ *
+ * The sweep evaluates every `stepDeg` degrees from 0 to 360 and, because each anchor's forces are
+ * linear in (cos θ, sin θ), also at each anchor's exact worst direction (closed form), so the
+ * maxima do not depend on the step.
+ */
+export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
+  const { n, A, B, C, L, F, D } = coefficients(input);
+  const step = input.stepDeg ?? 1;
+  const directions: number[] = [];
+  for (let k = 0; k * step < 360 - 1e-9; k++) directions.push(k * step);
+  for (let i = 0; i < n; i++) {
+    if (A[i] !== 0 || B[i] !== 0) directions.push(normalizeDeg((Math.atan2(B[i], A[i]) * 180) / Math.PI));
+    const worst = worstShearDirectionDeg(L[i]);
+    directions.push(worst, normalizeDeg(worst + 180));
+  }
+
+  const perAnchor: AnchorDemand[] = input.anchors.map((p) => ({
+    x: p[0],
+    y: p[1],
+    tension: -Infinity,
+    tensionDirectionDeg: 0,
+    shear: -Infinity,
+    shearDirectionDeg: 0,
+  }));
+  const tolerance = 1e-12 * (Math.abs(F) * (input.cgHeight + 1) + Math.abs(D) + 1);
+  for (const deg of directions) {
+    const c = Math.cos((deg * Math.PI) / 180);
+    const s = Math.sin((deg * Math.PI) / 180);
+    for (let i = 0; i < n; i++) {
+      const tension = A[i] * c + B[i] * s - C[i];
+      const a = perAnchor[i];
+      if (
+        tension > a.tension + tolerance ||
+        (Math.abs(tension - a.tension) <= tolerance && deg < a.tensionDirectionDeg)
+      ) {
+        a.tension = tension;
+        a.tensionDirectionDeg = deg;
+      }
+      const [l11, l12, l21, l22] = L[i];
+      const shear = Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s);
+      if (
+        shear > a.shear + tolerance ||
+        (Math.abs(shear - a.shear) <= tolerance && deg < a.shearDirectionDeg)
+      ) {
+        a.shear = shear;
+        a.shearDirectionDeg = deg;
+      }
+    }
+  }
+  let governingAnchor = 0;
+  let shearAnchor = 0;
+  for (let i = 0; i < n; i++) {
+    perAnchor[i].tension = Math.max(0, perAnchor[i].tension);
+    if (perAnchor[i].tension > perAnchor[governingAnchor].tension + tolerance) governingAnchor = i;
+    if (perAnchor[i].shear > perAnchor[shearAnchor].shear + tolerance) shearAnchor = i;
+  }
+  return {
+    perAnchor,
+    governingAnchor,
+    maxTension: perAnchor[governingAnchor].tension,
+    maxTensionDirectionDeg: perAnchor[governingAnchor].tensionDirectionDeg,
+    maxShear: perAnchor[shearAnchor].shear,
+    maxShearDirectionDeg: perAnchor[shearAnchor].shearDirectionDeg,
+    directionsEvaluated: directions.length,
+  };
+}
+
+/** The direction of u maximising |L u| (the leading right singular vector of the 2×2 matrix L). */
+function worstShearDirectionDeg([a, b, c, d]: [number, number, number, number]): number {
+  // LᵀL = [[p, q], [q, r]]; its leading eigenvector's angle is ½·atan2(2q, p − r).
+  const p = a * a + c * c;
+  const q = a * b + c * d;
+  const r = b * b + d * d;
+  if (Math.abs(q) < 1e-15 * (p + r) && Math.abs(p - r) < 1e-15 * (p + r)) return 0;
+  return normalizeDeg((0.5 * Math.atan2(2 * q, p - r) * 180) / Math.PI);
+}
+
+function normalizeDeg(deg: number): number {
+  const value = ((deg % 360) + 360) % 360;
+  return value >= 360 - 1e-12 ? 0 : value;
+}
+
+function coefficients(input: BoltGroupInput) {
+  const n = input.anchors.length;
+  const [cx, cy] = centroid(input.anchors);
+  const rx = input.anchors.map((p) => p[0] - cx);
+  const ry = input.anchors.map((p) => p[1] - cy);
+  let ixx = 0;
+  let iyy = 0;
+  let ixy = 0;
+  let polar = 0;
+  for (let i = 0; i < n; i++) {
+    ixx += rx[i] * rx[i];
+    iyy += ry[i] * ry[i];
+    ixy += rx[i] * ry[i];
+    polar += rx[i] * rx[i] + ry[i] * ry[i];
+  }
+  const det = ixx * iyy - ixy * ixy;
+  // I⁻¹ = [[iyy, −ixy], [−ixy, ixx]] / det
+  const inv = (vx: number, vy: number): [number, number] => [
+    (iyy * vx - ixy * vy) / det,
+    (ixx * vy - ixy * vx) / det,
+  ];
+  const ex = input.cgPlan[0] - cx;
+  const ey = input.cgPlan[1] - cy;
+  const [gx, gy] = inv(ex, ey);
+  const F = input.horizontalForce;
+  const D = input.deadLoad;
+
+  // Tension T_i(θ) = A_i cos θ + B_i sin θ − C_i.
+  const A: number[] = [];
+  const B: number[] = [];
+  const C: number[] = [];
+  // Shear vector V_i(θ) = F·L_i·u, L_i = 𝟙/n + w_i gᵀ with w_i = ẑ × r_i and g = (−e_y, e_x)/J.
+  const L: [number, number, number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    const [qx, qy] = inv(rx[i], ry[i]);
+    A.push(-F * input.cgHeight * qx);
+    B.push(-F * input.cgHeight * qy);
+    C.push(D * (1 / n + gx * rx[i] + gy * ry[i]));
+    const wx = -ry[i];
+    const wy = rx[i];
+    const tx = -ey / polar;
+    const ty = ex / polar;
+    L.push([1 / n + wx * tx, wx * ty, wy * tx, 1 / n + wy * ty]);
+  }
+
+  return { n, A, B, C, L, F, D };
+}

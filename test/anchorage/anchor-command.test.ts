@@ -1,0 +1,103 @@
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { JSDOM } from 'jsdom';
+import { describe, expect, it } from 'vitest';
+import { CAUTION } from '../../src/caution.js';
+import { runAnchor } from '../../src/cli/commands/anchor.js';
+import { runFloor } from '../../src/cli/commands/floor.js';
+import { anchorPlanSvg } from '../../src/plot/anchor-plan.js';
+
+describe('floor → anchor --spectrum (the floor JSON is the spectrum contract plus the building)', () => {
+  it('round-trips, and the anchor JSON keeps the caution first', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'quakesweep-anchor-'));
+    const recordFile = join(dir, 'invented.txt');
+    const lines: string[] = [];
+    for (let i = 0; i < 1500; i++)
+      lines.push((0.2 * Math.sin(2 * Math.PI * 2 * i * 0.01) * Math.min(1, i / 200)).toFixed(6));
+    writeFileSync(recordFile, `${lines.join('\n')}\n`);
+    const floorFile = join(dir, 'floor.json');
+    await runFloor(recordFile, {
+      units: 'g',
+      dt: '0.01',
+      buildingPeriod: '0.5',
+      modalFactor: '1.3',
+      broaden: true,
+      out: floorFile,
+      damping: '5%',
+    });
+    const floor = JSON.parse(readFileSync(floorFile, 'utf8'));
+    for (const key of [
+      'caution',
+      'record',
+      'method',
+      'periods_s',
+      'spectra',
+      'building',
+      'broadening',
+      'ground',
+      'assumptions',
+    ]) {
+      expect(floor).toHaveProperty(key);
+    }
+    expect(floor.building).toEqual({
+      period_s: 0.5,
+      damping: 0.05,
+      modal_factor: 1.3,
+      method: 'newmark-average',
+    });
+    const out = join(dir, 'anchor.json');
+    await runAnchor({
+      equipment: 'records/equipment-cabinet-floor4.json',
+      record: [],
+      spectrum: floorFile,
+      out,
+      svg: dir,
+    });
+    const json = JSON.parse(readFileSync(out, 'utf8'));
+    expect(Object.keys(json)[0]).toBe('caution');
+    expect(json.force_unit).toBe('lb');
+    expect(json.horizontal.elastic_record).toBeGreaterThan(0);
+    expect(json.assumptions.join(' ')).toMatch(/Floor spectrum/);
+    const svg = readFileSync(join(dir, 'anchor-plan.svg'), 'utf8');
+    expect(svg).toMatch(/<svg/);
+  });
+
+  it('refuses a ground record for equipment above the base unless --demand code', async () => {
+    await expect(
+      runAnchor({
+        equipment: 'records/equipment-cabinet-floor4.json',
+        record: ['x.txt'],
+        units: 'g',
+        dt: '0.01',
+      }),
+    ).rejects.toThrow(/does not describe its floor/);
+  });
+});
+
+describe('anchorPlanSvg', () => {
+  it('escapes text from files, uses sans-serif, carries the caution and units', () => {
+    const svg = anchorPlanSvg({
+      title: 'Pump <P-7> & "co" (invented)',
+      forceUnit: 'kN',
+      lengthUnit: 'm',
+      anchors: [
+        { x: 0, y: 0, tension: 1 },
+        { x: 1, y: 0, tension: 2 },
+        { x: 0, y: 1, tension: 0 },
+      ],
+      governingAnchor: 1,
+      directionDeg: 45,
+      cgPlan: [0.3, 0.3],
+      centroid: [1 / 3, 1 / 3],
+    });
+    const document = new JSDOM(svg, { contentType: 'image/svg+xml' }).window.document;
+    expect(document.querySelector('parsererror')).toBeNull();
+    expect(document.querySelector('title')?.textContent).toBe('Pump <P-7> & "co" (invented)');
+    expect(svg).toMatch(/font-family="sans-serif"/);
+    expect(svg).toMatch(/x \(m\)/);
+    expect(svg).toMatch(/T = 2 kN \(governs\)/);
+    const text = Array.from(document.querySelectorAll('text'), (t) => t.textContent).join(' ');
+    expect(text.replace(/\s+/g, ' ')).toContain(CAUTION.slice(0, 40));
+  });
+});

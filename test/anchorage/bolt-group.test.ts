@@ -1,0 +1,139 @@
+import { describe, expect, it } from 'vitest';
+import { boltGroupAtDirection, boltGroupForces } from '../../src/anchorage/bolt-group.js';
+
+/*
+ * Hand calculation (closed form; elastic bolt group about the centroid, common practice):
+ * rectangle of anchors at (±a, ±b), a = 0.8 m, b = 0.5 m (a 1.6 m × 1.0 m pattern), n = 4.
+ * F = 33.75 kN at h_cg = 1.1 m → M = 37.125 kN·m. Dead load (0.9 − 0.2·1.0)·45 = 31.5 kN, D/n = 7.875 kN.
+ * I = Σ r rᵀ = diag(4a², 4b²) = diag(2.56, 1.00) m².
+ *   θ = 0°  (force +x): d = 0.8 for the two anchors at x = −a; T = M·0.8/2.56 − 7.875 = 11.6016 − 7.875 = 3.7266 kN.
+ *   θ = 90° (force +y): d = 0.5 for the anchors at y = −b; T = M·0.5/1.00 − 7.875 = 18.5625 − 7.875 = 10.6875 kN.
+ *   Any θ, anchor (−a, −b): T(θ) = (M/4)(cos θ/a + sin θ/b) − D/4. dT/dθ = 0 ⇒ tan θ* = a/b,
+ *   θ* = atan(0.8/0.5) = 57.9946°, T* = (M/4)·√(1/a² + 1/b²) − D/4 = 9.28125·2.358495 − 7.875 = 14.0148 kN.
+ *   (√(1/0.64 + 1/0.25) = √5.5625 = 2.3584953.) The worst direction is not along an axis.
+ */
+const rectangle = {
+  anchors: [
+    [-0.8, -0.5],
+    [0.8, -0.5],
+    [0.8, 0.5],
+    [-0.8, 0.5],
+  ] as [number, number][],
+  cgPlan: [0, 0] as [number, number],
+  cgHeight: 1.1,
+  horizontalForce: 33.75,
+  deadLoad: 31.5,
+};
+const M = 33.75 * 1.1;
+
+describe('boltGroupForces, 4-anchor 1.6 m × 1.0 m rectangle', () => {
+  it('θ = 0°: trailing anchors T = M·a/(4a²) − D/4 = 3.7266 kN, leading ones 0', () => {
+    const { tension } = boltGroupAtDirection(rectangle, 0);
+    expect(tension[0]).toBeCloseTo((M * 0.8) / 2.56 - 7.875, 9);
+    expect(tension[0]).toBeCloseTo(3.7266, 3);
+    expect(tension[3]).toBeCloseTo(tension[0], 12);
+    expect(tension[1]).toBe(0);
+    expect(tension[2]).toBe(0);
+  });
+
+  it('θ = 90°: anchors at y = −b carry T = M·b/(4b²) − D/4 = 10.6875 kN', () => {
+    const { tension } = boltGroupAtDirection(rectangle, 90);
+    expect(tension[0]).toBeCloseTo(10.6875, 9);
+    expect(tension[1]).toBeCloseTo(10.6875, 9);
+    expect(tension[2]).toBe(0);
+  });
+
+  it('worst direction θ* = atan(a/b) = 57.99°, T* = (M/4)√(1/a² + 1/b²) − D/4 = 14.0148 kN', () => {
+    const result = boltGroupForces(rectangle);
+    const thetaStar = (Math.atan(0.8 / 0.5) * 180) / Math.PI;
+    const tStar = (M / 4) * Math.sqrt(1 / 0.64 + 1 / 0.25) - 7.875;
+    expect(tStar).toBeCloseTo(14.0148, 3);
+    expect(result.maxTension).toBeCloseTo(tStar, 9);
+    expect(result.perAnchor[0].tensionDirectionDeg).toBeCloseTo(thetaStar, 6);
+    expect(result.governingAnchor).toBe(0);
+    expect(result.maxTensionDirectionDeg).toBeCloseTo(57.9946, 3);
+    // By symmetry each corner has the same worst value, at 180° − θ*, 180° + θ*, 360° − θ*.
+    expect(result.perAnchor[1].tensionDirectionDeg).toBeCloseTo(180 - thetaStar, 6);
+    expect(result.perAnchor[2].tensionDirectionDeg).toBeCloseTo(180 + thetaStar, 6);
+    expect(result.perAnchor[3].tensionDirectionDeg).toBeCloseTo(360 - thetaStar, 6);
+    for (const anchor of result.perAnchor) expect(anchor.tension).toBeCloseTo(tStar, 9);
+    // The worst beats both axes.
+    expect(tStar).toBeGreaterThan(10.6875);
+  });
+
+  it('shear F/n = 33.75/4 = 8.4375 kN per anchor with the centre of mass at the centroid', () => {
+    const result = boltGroupForces(rectangle);
+    for (const anchor of result.perAnchor) expect(anchor.shear).toBeCloseTo(8.4375, 10);
+  });
+
+  it('no tension when the dead load exceeds the overturning (clamped at zero)', () => {
+    const result = boltGroupForces({ ...rectangle, horizontalForce: 1 });
+    expect(result.maxTension).toBe(0);
+  });
+});
+
+describe('boltGroupForces, eccentric centre of mass (elastic method, hand calculation)', () => {
+  /*
+   * Square of side 2 (anchors at (±1, ±1)), J = Σ|r|² = 8, I = diag(4, 4). Centre of mass at e = (0.5, 0).
+   * Dead load D = 8 only (F = 0): compression C_i = D(1/4 + e·r_i/4) = 2 ± 1 → 3 at x = +1, 1 at x = −1.
+   * Force F = 8 along +y at the centre of mass: torsion e × F = 0.5·8 = 4 (counter-clockwise);
+   * torsional shear 4·|r|/J = 4·√2/8 = 0.7071 at each anchor, perpendicular to r; direct 8/4 = 2 along y.
+   * Anchor (1, 1): ẑ × r = (−1, 1); reaction V = F(u/n + (e×u)_z/J · ẑ×r) = 8·((0, 0.25) + (0.5/8)(−1, 1)) = (−0.5, 2.5),
+   * |V| = √(0.25 + 6.25) = 2.5495.
+   */
+  const square = {
+    anchors: [
+      [-1, -1],
+      [1, -1],
+      [1, 1],
+      [-1, 1],
+    ] as [number, number][],
+    cgPlan: [0.5, 0] as [number, number],
+    cgHeight: 0,
+  };
+
+  it('shares an eccentric dead load linearly: C = 2 ± 1', () => {
+    // With h_cg = 0 there is no overturning; a tiny uplift-free check via negative dead load (net uplift of 8):
+    const { tension } = boltGroupAtDirection({ ...square, horizontalForce: 0, deadLoad: -8 }, 0);
+    expect(tension[0]).toBeCloseTo(1, 12);
+    expect(tension[1]).toBeCloseTo(3, 12);
+    expect(tension[2]).toBeCloseTo(3, 12);
+    expect(tension[3]).toBeCloseTo(1, 12);
+  });
+
+  it('adds torsional shear: anchor (1, 1) under F = 8 along +y carries √(0.5² + 2.5²) = 2.5495', () => {
+    const { shear } = boltGroupAtDirection({ ...square, horizontalForce: 8, deadLoad: 0 }, 90);
+    expect(shear[2]).toBeCloseTo(Math.hypot(0.5, 2.5), 12);
+    const worst = boltGroupForces({ ...square, horizontalForce: 8, deadLoad: 0 });
+    expect(worst.maxShear).toBeGreaterThanOrEqual(shear[2] - 1e-12);
+  });
+
+  it('the worst found does not depend on the sweep step (exact directions are added)', () => {
+    const fine = boltGroupForces({ ...square, cgHeight: 1.3, horizontalForce: 8, deadLoad: 5, stepDeg: 0.1 });
+    const coarse = boltGroupForces({ ...square, cgHeight: 1.3, horizontalForce: 8, deadLoad: 5, stepDeg: 5 });
+    expect(coarse.maxTension).toBeGreaterThanOrEqual(fine.maxTension - 1e-9);
+    expect(coarse.maxShear).toBeGreaterThanOrEqual(fine.maxShear - 1e-9);
+  });
+});
+
+describe('boltGroupForces reduces to M·d_i/Σd² − D/n along a principal axis (ASCE-style elastic formula, common practice)', () => {
+  it('an unequal 3-anchor pattern symmetric about x, force along x', () => {
+    // Anchors (0, −1), (0, 1), (3, 0): centroid (1, 0); r_x = −1, −1, 2; Σd² about the y-axis = 6.
+    // Force along +x: d = −r_x → 1, 1, −2; T = M·1/6 − D/3 for the two anchors at x = 0.
+    const input = {
+      anchors: [
+        [0, -1],
+        [0, 1],
+        [3, 0],
+      ] as [number, number][],
+      cgPlan: [1, 0] as [number, number],
+      cgHeight: 2,
+      horizontalForce: 10,
+      deadLoad: 3,
+    };
+    const { tension } = boltGroupAtDirection(input, 0);
+    expect(tension[0]).toBeCloseTo((20 * 1) / 6 - 1, 12);
+    expect(tension[1]).toBeCloseTo((20 * 1) / 6 - 1, 12);
+    expect(tension[2]).toBe(0);
+  });
+});
