@@ -8,6 +8,7 @@ import { registerFloor } from './commands/floor.js';
 import { registerInfo } from './commands/info.js';
 import { registerRotD } from './commands/rotd.js';
 import { registerSpectrum } from './commands/spectrum.js';
+import { registerSynth } from './commands/synth.js';
 
 /** Exit codes: 0 done, 1 internal fault or partly failed batch, 2 bad input or usage. */
 export const EXIT_INPUT = 2;
@@ -29,6 +30,7 @@ export function buildProgram(): Command {
   registerRotD(program);
   registerFloor(program);
   registerAnchor(program);
+  registerSynth(program);
   return program;
 }
 

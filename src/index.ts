@@ -1,0 +1,67 @@
+// The public library API of quakesweep: re-exports only. See README.md for examples.
+
+export {
+  type AnchorageAnalysis,
+  analyseAnchorage,
+  type DemandChoice,
+} from './anchorage/anchorage.js';
+export { type Equipment, parseEquipment } from './anchorage/equipment.js';
+export { CAUTION, cautionLines } from './caution.js';
+export { type ErrorKind, inputError, isQuakesweepError, QuakesweepError, usageError } from './errors.js';
+export { defaultPeriodsS, logSpaced, parseDampings, parsePeriods } from './oscillator/grid.js';
+export { hermitePeak } from './oscillator/peak.js';
+export {
+  METHOD_DESCRIPTIONS,
+  METHODS,
+  type Method,
+  newmarkCoefficients,
+  piecewiseExactCoefficients,
+  prewarpedOscillator,
+  type StepCoefficients,
+  stepCoefficients,
+  substepCount,
+} from './oscillator/recurrence.js';
+export { type Peaks, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
+export { writeFileAtomic } from './output/atomic.js';
+export { spectrumToCsv } from './output/spectrum-csv.js';
+export { formatJson, type SpectrumJson, spectrumToJson } from './output/spectrum-json.js';
+export * from './plot/index.js';
+export { fourierAmplitudeSpectrum, konnoOhmachiSmooth, konnoOhmachiWeight } from './record/fourier.js';
+export { integrateRecord } from './record/integrate.js';
+export {
+  ariasIntensity,
+  cumulativeAbsoluteVelocity,
+  type GroundMotionMeasures,
+  groundMotionMeasures,
+  husidCurve,
+} from './record/measures.js';
+export { applyProcessingPlan, type ProcessingPlan } from './record/process.js';
+export { type ReadOptions, readRecordStream, readRecordText, unitWarnings } from './record/read.js';
+export {
+  createRecord,
+  type GroundRecord,
+  type ProcessingStep,
+  peakGroundAcceleration,
+} from './record/record.js';
+export { type SynthOptions, synthesizeRecord } from './record/synth.js';
+export { compareDamping, newmarkHallFactors } from './spectrum/damping.js';
+export {
+  asce716Spectrum,
+  type DesignSpectrum,
+  designPsaG,
+  ec8DampingCorrection,
+  ec8Spectrum,
+} from './spectrum/design.js';
+export { readSpectrumTable, tableSpectrum } from './spectrum/design-table.js';
+export { broadenSpectrum, floorRecord, floorSpectrum } from './spectrum/floor.js';
+export { type RotDSpectra, rotDSpectra } from './spectrum/rotd.js';
+export { scaleToTarget } from './spectrum/scale.js';
+export {
+  assembleSpectrum,
+  responseSpectrum,
+  type Spectrum,
+  type SpectrumCurve,
+  type SpectrumOptions,
+} from './spectrum/spectrum.js';
+export * from './units.js';
+export { VERSION } from './version.js';
