@@ -1,8 +1,8 @@
-import { execFileSync, spawnSync } from 'node:child_process';
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 
 // End to end: the built CLI, spawned as a user would run it, on invented records.
 
@@ -10,9 +10,6 @@ const root = resolve(import.meta.dirname, '../..');
 const bin = join(root, 'bin', 'quakesweep.js');
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-cli-'));
 
-beforeAll(() => {
-  execFileSync('npx', ['tsc', '-p', 'tsconfig.json'], { cwd: root, stdio: 'pipe' });
-});
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
 
 function run(args: string[], input?: string | Buffer) {
