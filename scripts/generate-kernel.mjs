@@ -17,6 +17,9 @@ const evaluate = (target, t) => `if (${t} > 0 && ${t} < 1) {
               const value = (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ${t}) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
               ${target} = Math.max(${target}, Math.abs(value));
             }`;
+// The roots are found without optional arithmetic on either side of a branch (no `-x` that only
+// one arm computes), so V8 has type feedback for every operation after a short warm-up (see
+// warmKernel in sweep.ts) and does not throw its optimized code away later.
 const hermite = (target, q0, q1, d0, d1) => `{
           const m0 = (${d0}) * h;
           const m1 = (${d1}) * h;
@@ -24,20 +27,21 @@ const hermite = (target, q0, q1, d0, d1) => `{
           const qb = ${q1};
           const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
           const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+          let ta = -1;
+          let tb = -1;
+          const disc = cb * cb - 4 * ca * m0;
           if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-            const disc = cb * cb - 4 * ca * m0;
             if (disc >= 0) {
-              const root = Math.sqrt(disc);
-              const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-              const ta = qq / ca;
-              const tb = qq !== 0 ? m0 / qq : -1;
-              ${evaluate(target, 'ta')}
-              ${evaluate(target, 'tb')}
+              const sign = cb >= 0 ? 1 : -1;
+              const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+              ta = qq / ca;
+              tb = qq !== 0 ? m0 / qq : -1;
             }
-          } else if (cb !== 0) {
-            const tc = -m0 / cb;
-            ${evaluate(target, 'tc')}
+          } else {
+            ta = cb !== 0 ? (0 - m0) / cb : -1;
           }
+          ${evaluate(target, 'ta')}
+          ${evaluate(target, 'tb')}
         }`;
 
 const names = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1', 'c', 'k', 'r', 'du', 'dv', 'ds'];

@@ -122,43 +122,32 @@ export function sweepBlock(
         const qb = u0;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu0 = Math.max(pu0, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu0 = Math.max(pu0, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pu0 = Math.max(pu0, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu0 = Math.max(pu0, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu0 = Math.max(pu0, Math.abs(value));
         }
       }
       peaks[q0] = pu0;
@@ -174,43 +163,32 @@ export function sweepBlock(
         const qb = v0;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv0 = Math.max(pv0, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv0 = Math.max(pv0, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pv0 = Math.max(pv0, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv0 = Math.max(pv0, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv0 = Math.max(pv0, Math.abs(value));
         }
       }
       peaks[q0 + 1] = pv0;
@@ -228,43 +206,32 @@ export function sweepBlock(
         const qb = s0;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps0 = Math.max(ps0, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps0 = Math.max(ps0, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            ps0 = Math.max(ps0, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps0 = Math.max(ps0, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps0 = Math.max(ps0, Math.abs(value));
         }
       }
       peaks[q0 + 2] = ps0;
@@ -291,43 +258,32 @@ export function sweepBlock(
         const qb = u1;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu1 = Math.max(pu1, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu1 = Math.max(pu1, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pu1 = Math.max(pu1, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu1 = Math.max(pu1, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu1 = Math.max(pu1, Math.abs(value));
         }
       }
       peaks[q1] = pu1;
@@ -343,43 +299,32 @@ export function sweepBlock(
         const qb = v1;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv1 = Math.max(pv1, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv1 = Math.max(pv1, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pv1 = Math.max(pv1, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv1 = Math.max(pv1, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv1 = Math.max(pv1, Math.abs(value));
         }
       }
       peaks[q1 + 1] = pv1;
@@ -397,43 +342,32 @@ export function sweepBlock(
         const qb = s1;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps1 = Math.max(ps1, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps1 = Math.max(ps1, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            ps1 = Math.max(ps1, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps1 = Math.max(ps1, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps1 = Math.max(ps1, Math.abs(value));
         }
       }
       peaks[q1 + 2] = ps1;
@@ -460,43 +394,32 @@ export function sweepBlock(
         const qb = u2;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu2 = Math.max(pu2, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu2 = Math.max(pu2, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pu2 = Math.max(pu2, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu2 = Math.max(pu2, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu2 = Math.max(pu2, Math.abs(value));
         }
       }
       peaks[q2] = pu2;
@@ -512,43 +435,32 @@ export function sweepBlock(
         const qb = v2;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv2 = Math.max(pv2, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv2 = Math.max(pv2, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pv2 = Math.max(pv2, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv2 = Math.max(pv2, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv2 = Math.max(pv2, Math.abs(value));
         }
       }
       peaks[q2 + 1] = pv2;
@@ -566,43 +478,32 @@ export function sweepBlock(
         const qb = s2;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps2 = Math.max(ps2, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps2 = Math.max(ps2, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            ps2 = Math.max(ps2, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps2 = Math.max(ps2, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps2 = Math.max(ps2, Math.abs(value));
         }
       }
       peaks[q2 + 2] = ps2;
@@ -629,43 +530,32 @@ export function sweepBlock(
         const qb = u3;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu3 = Math.max(pu3, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pu3 = Math.max(pu3, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pu3 = Math.max(pu3, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu3 = Math.max(pu3, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pu3 = Math.max(pu3, Math.abs(value));
         }
       }
       peaks[q3] = pu3;
@@ -681,43 +571,32 @@ export function sweepBlock(
         const qb = v3;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv3 = Math.max(pv3, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              pv3 = Math.max(pv3, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            pv3 = Math.max(pv3, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv3 = Math.max(pv3, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          pv3 = Math.max(pv3, Math.abs(value));
         }
       }
       peaks[q3 + 1] = pv3;
@@ -735,43 +614,32 @@ export function sweepBlock(
         const qb = s3;
         const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
         const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+        let ta = -1;
+        let tb = -1;
+        const disc = cb * cb - 4 * ca * m0;
         if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
           if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            if (ta > 0 && ta < 1) {
-              const t2 = ta * ta;
-              const t3 = t2 * ta;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + ta) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps3 = Math.max(ps3, Math.abs(value));
-            }
-            if (tb > 0 && tb < 1) {
-              const t2 = tb * tb;
-              const t3 = t2 * tb;
-              const value =
-                (2 * t3 - 3 * t2 + 1) * qa +
-                (t3 - 2 * t2 + tb) * m0 +
-                (-2 * t3 + 3 * t2) * qb +
-                (t3 - t2) * m1;
-              ps3 = Math.max(ps3, Math.abs(value));
-            }
+            const sign = cb >= 0 ? 1 : -1;
+            const qq = -0.5 * (cb + sign * Math.sqrt(disc));
+            ta = qq / ca;
+            tb = qq !== 0 ? m0 / qq : -1;
           }
-        } else if (cb !== 0) {
-          const tc = -m0 / cb;
-          if (tc > 0 && tc < 1) {
-            const t2 = tc * tc;
-            const t3 = t2 * tc;
-            const value =
-              (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tc) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-            ps3 = Math.max(ps3, Math.abs(value));
-          }
+        } else {
+          ta = cb !== 0 ? (0 - m0) / cb : -1;
+        }
+        if (ta > 0 && ta < 1) {
+          const t2 = ta * ta;
+          const t3 = t2 * ta;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + ta) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps3 = Math.max(ps3, Math.abs(value));
+        }
+        if (tb > 0 && tb < 1) {
+          const t2 = tb * tb;
+          const t3 = t2 * tb;
+          const value =
+            (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + tb) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
+          ps3 = Math.max(ps3, Math.abs(value));
         }
       }
       peaks[q3 + 2] = ps3;

@@ -85,6 +85,7 @@ export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: S
   }
   oscillators.sort((a, b) => a.substeps - b.substeps || a.index - b.index);
 
+  warmKernel();
   const bounds = groundBounds(accelMS2, dtS);
   let oscillatorSteps = 0;
   const coefficients = new Float64Array(GROUP_WIDTH * COEFFICIENT_STRIDE);
@@ -117,6 +118,47 @@ export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: S
     oscillatorSteps += group.length * substeps * (accelMS2.length - 1);
   }
   return { method, periodsS, dampings, sdM, svMS, saMS2, oscillatorSteps };
+}
+
+let kernelWarm = false;
+
+/**
+ * Run the kernel once over a short invented chirp with oscillators that take every path of its
+ * code (each lane refines u, v and the absolute acceleration, on both the quadratic and the
+ * linear branch of the Hermite root). V8 optimizes the kernel on the type feedback it has seen;
+ * a path first taken after that would throw the optimized code away ("insufficient type
+ * feedback"), and recompiling this large function many times cost seconds on a cold start.
+ */
+function warmKernel(): void {
+  if (kernelWarm) return;
+  kernelWarm = true;
+  const n = 400;
+  const dtS = 0.01;
+  const chirp = new Float64Array(n + 1);
+  for (let i = 0; i <= n; i++) {
+    const t = i * dtS;
+    chirp[i] = Math.sin(2 * Math.PI * (0.5 + 3 * t) * t) * Math.exp(-((t - 2) ** 2));
+  }
+  const bounds = groundBounds(chirp, dtS);
+  const coefficients = new Float64Array(GROUP_WIDTH * COEFFICIENT_STRIDE);
+  const state = new Float64Array(GROUP_WIDTH * STATE_STRIDE);
+  const peaks = new Float64Array(GROUP_WIDTH * PEAK_STRIDE);
+  const lanes = [
+    { periodS: 0.3, damping: 0 },
+    { periodS: 1, damping: 0.05 },
+    { periodS: 0.15, damping: 0.5 },
+    { periodS: 3, damping: 0.02 },
+  ];
+  for (const method of ['newmark-average', 'piecewise-exact', 'newmark-linear'] as const) {
+    for (let shift = 0; shift < GROUP_WIDTH; shift++) {
+      for (let g = 0; g < GROUP_WIDTH; g++) {
+        packCoefficients(coefficients, g, lanes[(g + shift) % lanes.length], method, dtS, bounds);
+      }
+      state.fill(0);
+      peaks.fill(0);
+      sweepBlock(chirp, n, dtS, coefficients, state, peaks);
+    }
+  }
 }
 
 /** Sub-steps per block: the interpolated input of a sub-stepped group is built a block at a time. */

@@ -70,7 +70,14 @@ describe('quakesweep spectrum', () => {
     const comments = lines.filter((line) => line.startsWith('#'));
     expect(comments.map((line) => line.slice(2)).join(' ')).toContain(CAUTION);
     const header = lines.find((line) => line.startsWith('period_s'))!;
-    expect(header.split(',')).toEqual(['period_s', 'sd_mm@5%', 'psv_mm_s@5%', 'psa_g@5%', 'sv_mm_s@5%', 'sa_g@5%']);
+    expect(header.split(',')).toEqual([
+      'period_s',
+      'sd_mm@5%',
+      'psv_mm_s@5%',
+      'psa_g@5%',
+      'sv_mm_s@5%',
+      'sa_g@5%',
+    ]);
     const rows = lines.filter((line) => !line.startsWith('#') && line !== header);
     expect(rows).toHaveLength(5);
     const json = JSON.parse(run('--format', 'json', '--periods', '0.2:2:5').stdout);

@@ -22,14 +22,17 @@ describe.each([
     method: 'piecewise-exact',
     stepsPerPeriod: 400,
   });
-  it.each(['newmark-average', 'newmark-linear', 'piecewise-exact'] as const)('%s keeps every peak within 0.5%', (method) => {
-    const peaks = sweepOscillators(record.accelMS2, dtS, { periodsS: periods, dampings, method });
-    for (const key of ['sdM', 'svMS', 'saMS2'] as const) {
-      for (let i = 0; i < exact[key].length; i++) {
-        expect(Math.abs(peaks[key][i] / exact[key][i] - 1)).toBeLessThan(0.005);
+  it.each(['newmark-average', 'newmark-linear', 'piecewise-exact'] as const)(
+    '%s keeps every peak within 0.5%',
+    (method) => {
+      const peaks = sweepOscillators(record.accelMS2, dtS, { periodsS: periods, dampings, method });
+      for (const key of ['sdM', 'svMS', 'saMS2'] as const) {
+        for (let i = 0; i < exact[key].length; i++) {
+          expect(Math.abs(peaks[key][i] / exact[key][i] - 1)).toBeLessThan(0.005);
+        }
       }
-    }
-  });
+    },
+  );
   it('the textbook (not pre-warped) Newmark recurrences also keep it, with more sub-steps', () => {
     const peaks = sweepOscillators(record.accelMS2, dtS, {
       periodsS: periods,
@@ -37,6 +40,7 @@ describe.each([
       method: 'newmark-average',
       prewarp: false,
     });
-    for (let i = 0; i < exact.sdM.length; i++) expect(Math.abs(peaks.sdM[i] / exact.sdM[i] - 1)).toBeLessThan(0.005);
+    for (let i = 0; i < exact.sdM.length; i++)
+      expect(Math.abs(peaks.sdM[i] / exact.sdM[i] - 1)).toBeLessThan(0.005);
   });
 });

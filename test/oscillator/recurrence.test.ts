@@ -139,7 +139,8 @@ describe('piecewise-exact step (Nigam and Jennings 1969)', () => {
       const u = freeVibration(piecewiseExactCoefficients(omega, zeta, h), 1, 0, 200);
       u.forEach((value, n) => {
         const t = n * h;
-        const exact = Math.exp(-zeta * omega * t) * (Math.cosh(wd * t) + ((zeta * omega) / wd) * Math.sinh(wd * t));
+        const exact =
+          Math.exp(-zeta * omega * t) * (Math.cosh(wd * t) + ((zeta * omega) / wd) * Math.sinh(wd * t));
         expect(value).toBeCloseTo(exact, 10);
       });
     }
@@ -152,7 +153,8 @@ describe('piecewise-exact step (Nigam and Jennings 1969)', () => {
       const u = freeVibration(piecewiseExactCoefficients(omega, zeta, h), 1, 0, 400);
       u.forEach((value, n) => {
         const t = n * h;
-        const exact = Math.exp(-zeta * omega * t) * (Math.cos(wd * t) + ((zeta * omega) / wd) * Math.sin(wd * t));
+        const exact =
+          Math.exp(-zeta * omega * t) * (Math.cos(wd * t) + ((zeta * omega) / wd) * Math.sin(wd * t));
         expect(value).toBeCloseTo(exact, 11);
       });
     }

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { hermitePeak } from '../../src/oscillator/peak.js';
-import { type Method, prewarpedOscillator, stepCoefficients, substepCount } from '../../src/oscillator/recurrence.js';
+import {
+  type Method,
+  prewarpedOscillator,
+  stepCoefficients,
+  substepCount,
+} from '../../src/oscillator/recurrence.js';
 import { sweepOscillators } from '../../src/oscillator/sweep.js';
 import { sineRecord, testRecord } from '../helpers/records.js';
 
@@ -78,9 +83,15 @@ describe('sweepOscillators', () => {
 
   it('refuses negative periods, negative damping and empty grids', () => {
     const record = testRecord(1, 0.02, 2);
-    expect(() => sweepOscillators(record.accelMS2, 0.02, { periodsS: [-1], dampings: [0.05] })).toThrow(/periods/);
-    expect(() => sweepOscillators(record.accelMS2, 0.02, { periodsS: [1], dampings: [-0.1] })).toThrow(/damping/);
-    expect(() => sweepOscillators(record.accelMS2, 0.02, { periodsS: [], dampings: [0.05] })).toThrow(/empty/);
+    expect(() => sweepOscillators(record.accelMS2, 0.02, { periodsS: [-1], dampings: [0.05] })).toThrow(
+      /periods/,
+    );
+    expect(() => sweepOscillators(record.accelMS2, 0.02, { periodsS: [1], dampings: [-0.1] })).toThrow(
+      /damping/,
+    );
+    expect(() => sweepOscillators(record.accelMS2, 0.02, { periodsS: [], dampings: [0.05] })).toThrow(
+      /empty/,
+    );
   });
 
   // Steady-state base excitation a_g = a0 sin Ωt (Chopra, Dynamics of Structures, §3.2 and §3.6):
@@ -146,13 +157,17 @@ describe('sweepOscillators', () => {
     let pgd = 0;
     const a = record.accelMS2;
     for (let i = 1; i < a.length; i++) {
-      const vNew = v + (0.5 * (a[i - 1] + a[i]) * record.dtS);
+      const vNew = v + 0.5 * (a[i - 1] + a[i]) * record.dtS;
       d += 0.5 * (v + vNew) * record.dtS;
       v = vNew;
       pgd = Math.max(pgd, Math.abs(d));
     }
     // T = 5000 s over a 30 s record: ωt < 0.04, so the spring barely acts and u = −u_g.
-    const peaks = sweepOscillators(a, record.dtS, { periodsS: [5000], dampings: [0], method: 'piecewise-exact' });
+    const peaks = sweepOscillators(a, record.dtS, {
+      periodsS: [5000],
+      dampings: [0],
+      method: 'piecewise-exact',
+    });
     expect(peaks.sdM[0] / pgd).toBeCloseTo(1, 3);
   });
 });

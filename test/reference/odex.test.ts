@@ -74,7 +74,9 @@ describe('against ODEX (Hairer and Wanner) for whole records', () => {
   it('every method peaks within 0.5% of the ODE solution (the accuracy rule)', () => {
     const periods = [0.01, 0.03, 0.09, 0.3, 1, 3];
     const dampings = [0, 0.05, 0.5];
-    const exact = dampings.map((zeta) => periods.map((t) => odexResponse(record.accelMS2, record.dtS, t, zeta)));
+    const exact = dampings.map((zeta) =>
+      periods.map((t) => odexResponse(record.accelMS2, record.dtS, t, zeta)),
+    );
     for (const method of ['newmark-average', 'newmark-linear', 'piecewise-exact'] as const) {
       const peaks = sweepOscillators(record.accelMS2, record.dtS, { periodsS: periods, dampings, method });
       dampings.forEach((_zeta, d) => {
