@@ -24,7 +24,8 @@ describe('matrix exponential', () => {
     const reference = (mathjsExpm(matrix(rows)).toArray() as number[][]).flat();
     const ours = expm(Float64Array.from(rows.flat()), 4);
     const scale = Math.max(...reference.map(Math.abs));
-    for (const [i, value] of reference.entries()) expect(Math.abs(ours[i] - value) / scale).toBeLessThan(1e-12);
+    for (const [i, value] of reference.entries())
+      expect(Math.abs(ours[i] - value) / scale).toBeLessThan(1e-12);
     const step = piecewiseExactCoefficients(omega, zeta, h);
     expect(step.uu).toBeCloseTo(reference[0], 12);
     expect(step.up1).toBeCloseTo(reference[3], 12);
