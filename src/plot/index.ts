@@ -9,7 +9,7 @@ export {
   type Series,
 } from './figure.js';
 export { type HistoriesFigureInput, type HistoriesFigureOptions, historiesFigure } from './histories.js';
-export { groundHistories, integrateTrapezoidal, peakIndex } from './histories-data.js';
+export { peakIndex } from './histories.js';
 export { type LineChartOptions, lineChart } from './line-chart.js';
 export {
   type PsaFigureOptions,
