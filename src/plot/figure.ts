@@ -153,6 +153,7 @@ export function renderFigure(spec: FigureSpec): string {
   const heightPx = Math.ceil(y);
 
   const doc = createSvgDocument(widthPx, heightPx);
+  doc.element(doc.root, 'title').textContent = spec.title;
   doc.element(doc.root, 'rect', { width: widthPx, height: heightPx, fill: '#ffffff' });
   const header = doc.element(doc.root, 'g', { class: 'header', fill: TEXT_COLOUR });
   let line = titleTop;

@@ -43,7 +43,7 @@ export function floorFigure(input: FloorFigureInput): string {
         label: `floor, not broadened${suffix(curve.damping)}`,
         x: input.unbroadened.periodsS,
         y: Array.from(input.unbroadened.curves[d].psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
-        style: { color: '#CC79A7', dash: d === 0 ? '3 2' : dash, widthPx: 1.1 },
+        style: { color: '#A8558A', dash: d === 0 ? '3 2' : dash, widthPx: 1.2 },
       });
     }
     series.push({
@@ -69,7 +69,7 @@ export function floorFigure(input: FloorFigureInput): string {
   ];
   if (Array.from(floor.periodsS).includes(0)) {
     notes.push(
-      'T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there PSA is the peak acceleration of the floor or of the ground).',
+      'T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there PSA is the peak acceleration, the floor and ground PGA given above).',
     );
   }
   return lineChart({
