@@ -170,11 +170,13 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
       stroke: '#ffffff',
       'stroke-width': 1,
     });
-    const right = p.x >= input.centroid[0];
-    doc.text(anchor, `${i + 1}: T = ${format(p.tension)} ${input.forceUnit}${governing ? ' (governs)' : ''}`, {
-      x: cx + (right ? r + 4 : -(r + 4)),
-      y: cy + (p.y >= input.centroid[1] ? -r - 3 : r + 11),
-      'text-anchor': right ? 'start' : 'end',
+    // Centred above the anchors of the upper half, below those of the lower half, kept in the frame.
+    const label = `${i + 1}: T = ${format(p.tension)} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
+    const halfWidth = textWidthPx(label, 9.5) / 2;
+    doc.text(anchor, label, {
+      x: Math.min(plotLeft + plotSize - halfWidth - 3, Math.max(plotLeft + halfWidth + 3, cx)),
+      y: cy + (p.y >= input.centroid[1] ? -r - 4 : r + 12),
+      'text-anchor': 'middle',
       'font-size': 9.5,
       fill: TEXT_COLOUR,
       stroke: '#ffffff',
@@ -201,7 +203,7 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     doc.text(legend, text, { x: lx + 16, y: ly + tickPx * 0.35 });
     lx += 16 + textWidthPx(text, tickPx) + 14;
   };
-  item((x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: ANCHOR, 'fill-opacity': 0.85 }), 'anchor (area ∝ tension)');
+  item((x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: ANCHOR, 'fill-opacity': 0.85 }), 'anchor (larger: more tension)');
   item((x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: GOVERNING, 'fill-opacity': 0.85 }), 'governing anchor');
   item((x) => doc.element(legend, 'path', { d: cross(x, ly, 6), stroke: MASS, 'stroke-width': 2 }), 'centre of mass');
   item(
