@@ -67,7 +67,13 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   let line = 10;
   for (const text of titleLines) {
     line += titlePx + 2;
-    doc.text(header, text, { x: sidePx, y: line, 'font-size': titlePx, 'font-weight': 'bold', class: 'title' });
+    doc.text(header, text, {
+      x: sidePx,
+      y: line,
+      'font-size': titlePx,
+      'font-weight': 'bold',
+      class: 'title',
+    });
     line += 2;
   }
   for (const text of subtitleLines) {
@@ -84,10 +90,17 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const panel = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': 0 });
   const extent = (text: string) => textWidthPx(text, tickPx);
   const xTicks = linearTicks(px.domain() as [number, number], (v) => px(v), extent, plotSize);
-  const yTicks = linearTicks(py.domain() as [number, number], (v) => py(v), () => tickPx * 1.3, plotSize);
+  const yTicks = linearTicks(
+    py.domain() as [number, number],
+    (v) => py(v),
+    () => tickPx * 1.3,
+    plotSize,
+  );
   const grid = doc.element(panel, 'g', { class: 'grid', stroke: GRID_COLOUR, 'stroke-width': 0.6 });
-  for (const v of xTicks.major) doc.element(grid, 'line', { x1: px(v), x2: px(v), y1: plotTop, y2: plotTop + plotSize });
-  for (const v of yTicks.major) doc.element(grid, 'line', { x1: plotLeft, x2: plotLeft + plotSize, y1: py(v), y2: py(v) });
+  for (const v of xTicks.major)
+    doc.element(grid, 'line', { x1: px(v), x2: px(v), y1: plotTop, y2: plotTop + plotSize });
+  for (const v of yTicks.major)
+    doc.element(grid, 'line', { x1: plotLeft, x2: plotLeft + plotSize, y1: py(v), y2: py(v) });
   doc.element(panel, 'rect', {
     class: 'frame',
     x: plotLeft,
@@ -160,7 +173,11 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     const governing = i === input.governingAnchor && maxTension > 0;
     const r = 4 + (maxTension > 0 ? 8 * Math.sqrt(p.tension / maxTension) : 0);
     const [cx, cy] = [px(p.x), py(p.y)];
-    const anchor = doc.element(marks, 'g', { class: 'anchor', 'data-tension': p.tension, 'data-index': i + 1 });
+    const anchor = doc.element(marks, 'g', {
+      class: 'anchor',
+      'data-tension': p.tension,
+      'data-index': i + 1,
+    });
     doc.element(anchor, 'circle', {
       cx,
       cy,
@@ -184,7 +201,8 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
       'paint-order': 'stroke',
     });
   });
-  const cross = (x: number, yy: number, size: number) => `M${x - size},${yy}H${x + size}M${x},${yy - size}V${yy + size}`;
+  const cross = (x: number, yy: number, size: number) =>
+    `M${x - size},${yy}H${x + size}M${x},${yy - size}V${yy + size}`;
   const [kx, ky] = [px(input.centroid[0]), py(input.centroid[1])];
   doc.element(marks, 'path', {
     class: 'centroid',
@@ -192,7 +210,12 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     stroke: '#555555',
     'stroke-width': 1.2,
   });
-  doc.element(marks, 'path', { class: 'centre-of-mass', d: cross(gx, gy, 7), stroke: MASS, 'stroke-width': 2 });
+  doc.element(marks, 'path', {
+    class: 'centre-of-mass',
+    d: cross(gx, gy, 7),
+    stroke: MASS,
+    'stroke-width': 2,
+  });
 
   // Legend of the marks.
   const legend = doc.element(doc.root, 'g', { class: 'legend', 'font-size': tickPx, fill: TEXT_COLOUR });
@@ -203,9 +226,18 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     doc.text(legend, text, { x: lx + 16, y: ly + tickPx * 0.35 });
     lx += 16 + textWidthPx(text, tickPx) + 14;
   };
-  item((x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: ANCHOR, 'fill-opacity': 0.85 }), 'anchor (larger: more tension)');
-  item((x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: GOVERNING, 'fill-opacity': 0.85 }), 'governing anchor');
-  item((x) => doc.element(legend, 'path', { d: cross(x, ly, 6), stroke: MASS, 'stroke-width': 2 }), 'centre of mass');
+  item(
+    (x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: ANCHOR, 'fill-opacity': 0.85 }),
+    'anchor (larger: more tension)',
+  );
+  item(
+    (x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: GOVERNING, 'fill-opacity': 0.85 }),
+    'governing anchor',
+  );
+  item(
+    (x) => doc.element(legend, 'path', { d: cross(x, ly, 6), stroke: MASS, 'stroke-width': 2 }),
+    'centre of mass',
+  );
   item(
     (x) =>
       doc.element(legend, 'path', {

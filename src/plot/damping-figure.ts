@@ -112,7 +112,11 @@ export function dampingFigure(input: DampingFigureInput): string {
       heightPx: 230,
       gapAbovePx: 16,
       x: { title: 'Period T (s)' },
-      y: { title: `PSA(ζ) / PSA(${percentLabel(comparison.referenceDamping)})`, scale: 'linear', domain: ratioDomain },
+      y: {
+        title: `PSA(ζ) / PSA(${percentLabel(comparison.referenceDamping)})`,
+        scale: 'linear',
+        domain: ratioDomain,
+      },
       series: [...referenceSeries, ...ratioSeries, ...legendSamples],
       overlay: (context) => labelReferences(context, references, colourOf),
     },
@@ -127,7 +131,9 @@ export function dampingFigure(input: DampingFigureInput): string {
     'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
   ];
   if (Array.from(periods).includes(0)) {
-    notes.push('T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there every ratio is 1).');
+    notes.push(
+      'T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there every ratio is 1).',
+    );
   }
   return renderFigure({
     title: 'Damping comparison: PSA and its ratio to 5% damping',

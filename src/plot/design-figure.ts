@@ -33,7 +33,8 @@ export function designFigure(input: DesignFigureInput): string {
   notes.push(
     'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',
   );
-  const damping = spectrum.damping === undefined ? 'not stated' : `${Number((spectrum.damping * 100).toPrecision(6))}%`;
+  const damping =
+    spectrum.damping === undefined ? 'not stated' : `${Number((spectrum.damping * 100).toPrecision(6))}%`;
   return lineChart({
     title: 'Design spectrum, pseudo-acceleration PSA',
     subtitle: [`Spectrum: ${spectrum.description}`, `Damping: ${damping}`],

@@ -8,8 +8,12 @@ export {
   renderFigure,
   type Series,
 } from './figure.js';
-export { type HistoriesFigureInput, type HistoriesFigureOptions, historiesFigure } from './histories.js';
-export { peakIndex } from './histories.js';
+export {
+  type HistoriesFigureInput,
+  type HistoriesFigureOptions,
+  historiesFigure,
+  peakIndex,
+} from './histories.js';
 export { type LineChartOptions, lineChart } from './line-chart.js';
 export {
   type PsaFigureOptions,

@@ -51,7 +51,9 @@ export function rotdFigure(input: RotDFigureInput): string {
     `PSA(θ) = ω² max|u₁ cos θ + u₂ sin θ| over ${180 / spectra.angleStepDeg} angles 0 ≤ θ < 180° in steps of ${spectra.angleStepDeg}°; RotD50 is the median over the angles, RotD100 the largest (Boore 2010); geometric mean √(PSA₁·PSA₂) of the components as recorded.`,
   ];
   if (spectra.paddedSamples > 0) {
-    notes.push(`The shorter component was padded with ${spectra.paddedSamples} zero samples (ground at rest).`);
+    notes.push(
+      `The shorter component was padded with ${spectra.paddedSamples} zero samples (ground at rest).`,
+    );
   }
   const zero = Array.from(spectra.periodsS).indexOf(0);
   if (zero >= 0) {

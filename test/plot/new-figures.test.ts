@@ -12,7 +12,9 @@ const figures = newFigures();
 /** The drawn curves of a figure: data curves and overlays (reference lines are counted apart). */
 function curvePaths(doc: Document, name: string): Element[] {
   if (name === 'anchor-plan') return [...doc.querySelectorAll('g.anchor circle')];
-  return [...doc.querySelectorAll('g.curves path')].filter((p) => !['reference', 'legend-only'].includes(p.getAttribute('class') ?? ''));
+  return [...doc.querySelectorAll('g.curves path')].filter(
+    (p) => !['reference', 'legend-only'].includes(p.getAttribute('class') ?? ''),
+  );
 }
 
 describe('the figures of design, damping, rotd, floor, info and anchor', () => {

@@ -9,7 +9,7 @@ import { husidFigure } from '../../src/plot/husid.js';
 import { rotdFigure } from '../../src/plot/rotd-figure.js';
 import { fourierAmplitudeSpectrum } from '../../src/record/fourier.js';
 import { integrateRecord } from '../../src/record/integrate.js';
-import { husidCurve, groundMotionMeasures } from '../../src/record/measures.js';
+import { groundMotionMeasures, husidCurve } from '../../src/record/measures.js';
 import { createRecord } from '../../src/record/record.js';
 import { compareDamping } from '../../src/spectrum/damping.js';
 import { asce716Spectrum, designPsaG } from '../../src/spectrum/design.js';
@@ -48,11 +48,19 @@ export function newFigures(): Record<string, { svg: string; curves: number }> {
   const fas = fourierAmplitudeSpectrum(record.accelMS2, record.dtS);
   return {
     design: {
-      svg: designFigure({ spectrum: design, periodsS: designPeriods, psaG: designPsaG(design, designPeriods) }),
+      svg: designFigure({
+        spectrum: design,
+        periodsS: designPeriods,
+        psaG: designPsaG(design, designPeriods),
+      }),
       curves: 1,
     },
     damping: {
-      svg: dampingFigure({ record: spectrum.record, methodDescription: 'test', comparison: compareDamping(spectrum) }),
+      svg: dampingFigure({
+        record: spectrum.record,
+        methodDescription: 'test',
+        comparison: compareDamping(spectrum),
+      }),
       curves: 6,
     },
     rotd: { svg: rotdFigure({ spectra: rotd, methodDescription: 'test' }), curves: 3 },

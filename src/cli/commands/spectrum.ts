@@ -150,7 +150,10 @@ function writeFigures(
     ['tripartite.svg', tripartiteFigure(spectrum, shared)],
   ];
   if (options.histories) {
-    files.push(['histories.svg', historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: figure.lengthUnit })]);
+    files.push([
+      'histories.svg',
+      historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: figure.lengthUnit }),
+    ]);
   }
   for (const [name, text] of files) writeFileAtomic(join(folder, name), text, [source]);
 }
