@@ -33,6 +33,7 @@ export function designFigure(input: DesignFigureInput): string {
   notes.push(
     'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',
   );
+  const drawn = densified(input);
   const damping =
     spectrum.damping === undefined ? 'not stated' : `${Number((spectrum.damping * 100).toPrecision(6))}%`;
   return lineChart({
@@ -44,12 +45,29 @@ export function designFigure(input: DesignFigureInput): string {
     series: [
       {
         label: CODE_LABELS[spectrum.code],
-        x: input.periodsS,
-        y: input.psaG,
+        x: drawn.periodsS,
+        y: drawn.psaG,
         style: overlayStyle(0),
         kind: 'curve',
       },
     ],
     notes,
   });
+}
+
+/**
+ * The curve to draw: a code spectrum is a function, so it is drawn at the periods asked for plus
+ * 400 log-spaced ones over the same range, which keeps its corners sharp; a table is drawn as given.
+ */
+function densified(input: DesignFigureInput): { periodsS: number[]; psaG: number[] } {
+  const given = Array.from(input.periodsS);
+  const positive = given.filter((t) => t > 0);
+  if (input.spectrum.code === 'table' || positive.length < 2) {
+    return { periodsS: given, psaG: Array.from(input.psaG) };
+  }
+  const low = Math.min(...positive);
+  const high = Math.max(...positive);
+  const extra = Array.from({ length: 400 }, (_, i) => low * (high / low) ** (i / 399));
+  const periodsS = [...new Set([...positive, ...extra])].sort((a, b) => a - b);
+  return { periodsS, psaG: periodsS.map((t) => input.spectrum.psaG(t)) };
 }
