@@ -1,5 +1,5 @@
 import { CAUTION } from '../caution.js';
-import { ANCHORAGE_SCOPE, type AnchorageAnalysis } from './anchorage.js';
+import { ANCHOR_RULE_TEXT, ANCHORAGE_SCOPE, type AnchorageAnalysis } from './anchorage.js';
 import { EQUIPMENT_UNITS } from './equipment.js';
 
 /** The JSON contract of `quakesweep anchor`: forces in the equipment's force unit, lengths in its length unit. */
@@ -41,10 +41,12 @@ export function anchorageToJson(analysis: AnchorageAnalysis) {
       dead_load_factor: analysis.deadLoadFactor,
     },
     anchors: {
+      rule: a.rule,
       method:
-        'rigid base, elastic bolt group about the anchor centroid; tension T_i = −F·h_cg·(I⁻¹u)·r_i − ' +
-        '(0.9 − 0.2 S_DS)W_p(1/n + (I⁻¹e)·r_i), ≥ 0; shear F/n plus torsion of an eccentric centre of mass; ' +
-        'directions of shaking 0–360° in 1° steps refined to the exact worst direction',
+        `rigid base, elastic bolt group about the anchor centroid; ${ANCHOR_RULE_TEXT[a.rule]} ` +
+        'Dead-load share (0.9 − 0.2 S_DS)W_p(1/n + (I⁻¹e)·r_i) for a centre of mass at offset e; tension ≥ 0; ' +
+        'shear F/n plus torsion of an eccentric centre of mass; directions of shaking 0–360° in 1° steps refined ' +
+        'to the exact worst direction',
       direction_convention:
         'direction of the horizontal force on the equipment, degrees counter-clockwise from +x',
       max_tension: force(a.maxTension),

@@ -1,5 +1,5 @@
 import { usageError } from '../errors.js';
-import { type BoltGroupResult, boltGroupForces } from './bolt-group.js';
+import { type AnchorRule, type BoltGroupResult, boltGroupForces } from './bolt-group.js';
 import {
   type CodeForce,
   codeHorizontalForce,
@@ -50,9 +50,10 @@ export interface AnchorageAnalysis {
  */
 export function analyseAnchorage(
   equipment: Equipment,
-  options: { elastic: ElasticInput | null; demand: DemandChoice },
+  options: { elastic: ElasticInput | null; demand: DemandChoice; anchorRule?: AnchorRule },
 ): AnchorageAnalysis {
   const { demand, elastic } = options;
+  const anchorRule = options.anchorRule ?? 'projected';
   if (demand !== 'code' && elastic === null) {
     throw usageError(
       `--demand ${demand} needs a ground motion: give --record or --spectrum (or use --demand code)`,
@@ -82,6 +83,7 @@ export function analyseAnchorage(
     cgHeight: equipment.cgHeightM,
     horizontalForce: horizontalForAnchorsKN,
     deadLoad: deadLoadFactor * equipment.weightKN,
+    rule: anchorRule,
   });
   return {
     equipment,
@@ -95,7 +97,7 @@ export function analyseAnchorage(
     verticalKN: verticalForce({ weight: equipment.weightKN, sds: equipment.sds }),
     deadLoadFactor,
     anchors,
-    assumptions: assumptionsOf(equipment, code, elastic, governing, deadLoadFactor),
+    assumptions: assumptionsOf(equipment, code, elastic, governing, deadLoadFactor, anchorRule),
   };
 }
 
@@ -105,6 +107,7 @@ function assumptionsOf(
   elastic: ElasticInput | null,
   governing: 'code' | 'record',
   deadLoadFactor: number,
+  anchorRule: AnchorRule,
 ): string[] {
   const out: string[] = [
     'Code force: ASCE/SEI 7-16 §13.3.1, F_p = 0.4 a_p S_DS W_p (1 + 2z/h)/(R_p/I_p), bounded by ' +
@@ -113,8 +116,8 @@ function assumptionsOf(
     'Vertical: E_v = 0.2 S_DS W_p (§13.3.1.2); in the anchor tension it enters through the dead load ' +
       `(0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p of ASCE/SEI 7-16 §2.3.6, which counteracts uplift.`,
     'Anchors: rigid base, elastic bolt group about the anchors’ centroid, all anchors of equal stiffness ' +
-      'in tension and compression; the neutral axis follows from moment equilibrium about both plan axes, so ' +
-      'off the pattern’s principal axes it is not perpendicular to the direction of shaking; the base’s bearing on the support is not modelled. Horizontal force at the ' +
+      `in tension and compression; ${ANCHOR_RULE_TEXT[anchorRule]} ` +
+      'The base’s bearing on the support is not modelled. Horizontal force at the ' +
       'centre-of-mass height; overturning M = F·h_cg; every direction of shaking 0–360° (1° steps, refined to ' +
       'each anchor’s exact worst direction); one horizontal direction at a time (no orthogonal combination).',
     'Shear: F/n per anchor' +
@@ -146,6 +149,18 @@ function assumptionsOf(
   );
   return out;
 }
+
+/** How each anchor rule shares the overturning moment, one sentence for outputs. */
+export const ANCHOR_RULE_TEXT: Readonly<Record<AnchorRule, string>> = {
+  projected:
+    'anchor rule "projected": T_i = M·d_i/Σd_j² − (0.9 − 0.2 S_DS)W_p/n with d_i the distance from the neutral axis ' +
+    'through the centroid perpendicular to the direction of shaking (conservative off the pattern’s principal axes; ' +
+    '--anchor-rule biaxial gives the general elastic solution with moment equilibrium about both plan axes, lower there).',
+  biaxial:
+    'anchor rule "biaxial": the general elastic solution, T_i = −M(I⁻¹u)·r_i − (0.9 − 0.2 S_DS)W_p/n, with moment ' +
+    'equilibrium about both plan axes, so off the pattern’s principal axes the neutral axis is not perpendicular to the ' +
+    'direction of shaking (--anchor-rule projected, the default, takes it perpendicular and gives higher tensions there).',
+};
 
 /** What these outputs cover and what they do not (stated in every output). */
 export const ANCHORAGE_SCOPE =

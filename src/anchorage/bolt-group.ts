@@ -1,4 +1,23 @@
+import { usageError } from '../errors.js';
 import { centroid } from './equipment.js';
+
+/**
+ * How overturning is shared among the anchors.
+ * - 'projected': T_i = M·d_i/Σd_j² − D/n, d_i the distance of anchor i from the neutral axis
+ *   through the centroid perpendicular to the direction of shaking (the rule commonly written for
+ *   equipment anchorage; common practice). Conservative off the pattern's principal axes.
+ * - 'biaxial': the general elastic solution, moment equilibrium about both plan axes,
+ *   T_i = −M (I⁻¹u)·r_i − D/n; the neutral axis then need not be perpendicular to u.
+ * Both agree along a principal axis of the pattern.
+ */
+export type AnchorRule = 'projected' | 'biaxial';
+
+export const ANCHOR_RULES: readonly AnchorRule[] = ['projected', 'biaxial'];
+
+export function parseAnchorRule(text: string): AnchorRule {
+  if ((ANCHOR_RULES as readonly string[]).includes(text)) return text as AnchorRule;
+  throw usageError(`--anchor-rule '${text}': use projected or biaxial`);
+}
 
 export interface BoltGroupInput {
   /** Plan positions of the anchors (any length unit, the same for every length here). */
@@ -13,6 +32,8 @@ export interface BoltGroupInput {
   deadLoad: number;
   /** Step of the direction sweep, degrees (default 1). */
   stepDeg?: number;
+  /** How overturning is shared (default 'projected'). */
+  rule?: AnchorRule;
 }
 
 export interface AnchorDemand {
@@ -37,6 +58,7 @@ export interface BoltGroupResult {
   maxShearDirectionDeg: number;
   /** Directions evaluated (the regular sweep plus each anchor's exact worst directions). */
   directionsEvaluated: number;
+  rule: AnchorRule;
 }
 
 /**
@@ -47,13 +69,14 @@ export function boltGroupAtDirection(
   input: BoltGroupInput,
   directionDeg: number,
 ): { tension: number[]; shear: number[] } {
-  const { n, A, B, C, L, F } = coefficients(input);
+  const k = coefficients(input);
+  const { n, L, F } = k;
   const c = Math.cos((directionDeg * Math.PI) / 180);
   const s = Math.sin((directionDeg * Math.PI) / 180);
   const tension: number[] = [];
   const shear: number[] = [];
   for (let i = 0; i < n; i++) {
-    tension.push(Math.max(0, A[i] * c + B[i] * s - C[i]));
+    tension.push(Math.max(0, k.tension(i, c, s)));
     const [l11, l12, l21, l22] = L[i];
     shear.push(Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s));
   }
@@ -65,7 +88,13 @@ export function boltGroupAtDirection(
  * eccentrically loaded fastener groups, e.g. Salmon and Johnson, Steel Structures, §4.12 for shear
  * and the analogous linear-strain rule for axial load; common practice for equipment anchorage).
  *
- * Axial: the base rotates rigidly about a neutral axis through the anchors' centroid, so each
+ * Axial, rule 'projected' (the default): for the force F in the unit direction u at height h_cg,
+ * M = F·h_cg turns the base about the neutral axis through the centroid perpendicular to u, and
+ * T_i = M d_i/Σd_j² − D_i with d_i = −r_i·u (positive on the side that lifts) and Σd_j² = uᵀIu.
+ * D_i is the anchor's share of the dead load, D/n when the centre of mass is over the centroid
+ * (the eccentric share below otherwise, the same for both rules).
+ *
+ * Axial, rule 'biaxial': the base rotates rigidly about a neutral axis through the anchors' centroid, so each
  * anchor's force is linear in its position, P_i = N/n + b·r_i, with N and b fixed by ΣP_i = N and
  * ΣP_i r_i = moment; b = I⁻¹·m with I = Σ r_i r_iᵀ the pattern's second-moment matrix. For the
  * force F in the unit direction u at height h_cg, tension T_i = −F h_cg (I⁻¹u)·r_i; the dead load D
@@ -78,17 +107,24 @@ export function boltGroupAtDirection(
  * Shear: direct share F/n plus the torsion F·(e × u) of an eccentric centre of mass, shared in
  * proportion to distance from the centroid (polar moment J = Σ|r_i|²), added as vectors.
  *
- * The sweep evaluates every `stepDeg` degrees from 0 to 360 and, because each anchor's forces are
- * linear in (cos θ, sin θ), also at each anchor's exact worst direction (closed form), so the
- * maxima do not depend on the step.
+ * The sweep evaluates every `stepDeg` degrees from 0 to 360 and each anchor's worst direction:
+ * under 'biaxial' the forces are linear in (cos θ, sin θ), so it is found in closed form; under
+ * 'projected' the sampled maximum is refined by golden-section search (Kiefer 1953) over the
+ * step on either side. The maxima therefore do not depend on the step.
  */
 export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
-  const { n, A, B, C, L, F, D } = coefficients(input);
+  const k = coefficients(input);
+  const { n, A, B, L, F, D } = k;
+  const rule = input.rule ?? 'projected';
   const step = input.stepDeg ?? 1;
   const directions: number[] = [];
-  for (let k = 0; k * step < 360 - 1e-9; k++) directions.push(k * step);
+  for (let j = 0; j * step < 360 - 1e-9; j++) directions.push(j * step);
   for (let i = 0; i < n; i++) {
-    if (A[i] !== 0 || B[i] !== 0) directions.push(normalizeDeg((Math.atan2(B[i], A[i]) * 180) / Math.PI));
+    if (rule === 'biaxial') {
+      if (A[i] !== 0 || B[i] !== 0) directions.push(normalizeDeg((Math.atan2(B[i], A[i]) * 180) / Math.PI));
+    } else {
+      directions.push(worstProjectedDirectionDeg((deg) => k.tensionAtDeg(i, deg), step));
+    }
     const worst = worstShearDirectionDeg(L[i]);
     directions.push(worst, normalizeDeg(worst + 180));
   }
@@ -106,7 +142,7 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     const c = Math.cos((deg * Math.PI) / 180);
     const s = Math.sin((deg * Math.PI) / 180);
     for (let i = 0; i < n; i++) {
-      const tension = A[i] * c + B[i] * s - C[i];
+      const tension = k.tension(i, c, s);
       const a = perAnchor[i];
       if (
         tension > a.tension + tolerance ||
@@ -141,7 +177,40 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     maxShear: perAnchor[shearAnchor].shear,
     maxShearDirectionDeg: perAnchor[shearAnchor].shearDirectionDeg,
     directionsEvaluated: directions.length,
+    rule,
   };
+}
+
+/**
+ * The direction (degrees) of the largest value of a smooth periodic function: sampled every `step`
+ * degrees, then refined by golden-section search (Kiefer 1953) within one step of the best sample.
+ */
+function worstProjectedDirectionDeg(f: (deg: number) => number, step: number): number {
+  let best = 0;
+  for (let deg = 0; deg < 360; deg += Math.min(step, 1)) if (f(deg) > f(best)) best = deg;
+  let lo = best - Math.min(step, 1);
+  let hi = best + Math.min(step, 1);
+  const ratio = (Math.sqrt(5) - 1) / 2;
+  let x1 = hi - ratio * (hi - lo);
+  let x2 = lo + ratio * (hi - lo);
+  let f1 = f(x1);
+  let f2 = f(x2);
+  for (let iteration = 0; iteration < 80 && hi - lo > 1e-10; iteration++) {
+    if (f1 < f2) {
+      lo = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = lo + ratio * (hi - lo);
+      f2 = f(x2);
+    } else {
+      hi = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = hi - ratio * (hi - lo);
+      f1 = f(x1);
+    }
+  }
+  return normalizeDeg((lo + hi) / 2);
 }
 
 /** The direction of u maximising |L u| (the leading right singular vector of the 2×2 matrix L). */
@@ -204,5 +273,17 @@ function coefficients(input: BoltGroupInput) {
     L.push([1 / n + wx * tx, wx * ty, wy * tx, 1 / n + wy * ty]);
   }
 
-  return { n, A, B, C, L, F, D };
+  const rule = input.rule ?? 'projected';
+  const moment = F * input.cgHeight;
+  /** Tension of anchor i (may be negative: compression) for the force along (c, s). */
+  const tension =
+    rule === 'biaxial'
+      ? (i: number, c: number, s: number) => A[i] * c + B[i] * s - C[i]
+      : (i: number, c: number, s: number) => {
+          const sumD2 = ixx * c * c + 2 * ixy * c * s + iyy * s * s;
+          return (moment * -(rx[i] * c + ry[i] * s)) / sumD2 - C[i];
+        };
+  const tensionAtDeg = (i: number, deg: number) =>
+    tension(i, Math.cos((deg * Math.PI) / 180), Math.sin((deg * Math.PI) / 180));
+  return { n, A, B, C, L, F, D, tension, tensionAtDeg };
 }

@@ -1,4 +1,9 @@
-import { cautionLines } from '../caution.js';
+import { scaleLinear } from 'd3-scale';
+import { cautionHeightPx, drawCaution, FIGURE_TEXT, FIGURE_WIDTH_PX } from './figure.js';
+import { FRAME_COLOUR, GRID_COLOUR, TEXT_COLOUR } from './styles.js';
+import { createSvgDocument } from './svg.js';
+import { wrapText } from './text.js';
+import { linearTicks, textWidthPx } from './ticks.js';
 
 /** What the plan view needs (plain values in the user's units; no dependency on anchorage types). */
 export interface AnchorPlanInput {
@@ -12,128 +17,245 @@ export interface AnchorPlanInput {
   directionDeg: number;
   cgPlan: readonly [number, number];
   centroid: readonly [number, number];
-  /** Extra lines under the title (method, demand). */
+  /** Lines under the title (demand, method). */
+  subtitle?: readonly string[];
+  /** Small print above the caution. */
   notes?: readonly string[];
 }
 
-export function escapeXml(text: string): string {
-  return text
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&#39;');
-}
-
-const fmt = (value: number) => Number(value.toPrecision(4)).toString();
+const GOVERNING = '#D55E00';
+const ANCHOR = '#0072B2';
+const MASS = '#111111';
 
 /**
- * Plan view of an anchor pattern as SVG text: each anchor with its worst tension, the centre of
- * mass, and an arrow for the governing direction of the horizontal force. Equal scales on x and y.
+ * Plan view of an anchor pattern as SVG text: each anchor with its worst tension (circle area in
+ * proportion), the centre of mass, the anchors' centroid and an arrow for the direction of the
+ * horizontal force that governs. Equal scales on x and y; the same header, fonts and caution footer
+ * as the other figures, all text escaped by the document's serializer.
  */
 export function anchorPlanSvg(input: AnchorPlanInput): string {
-  const width = 720;
-  const notes = input.notes ?? [];
-  const caution = cautionLines(110);
-  const top = 40 + notes.length * 16;
-  const plotSize = 440;
-  const height = top + plotSize + 70 + caution.length * 14;
-  const xs = [...input.anchors.map((a) => a.x), input.cgPlan[0]];
-  const ys = [...input.anchors.map((a) => a.y), input.cgPlan[1]];
-  const minX = Math.min(...xs);
-  const maxX = Math.max(...xs);
-  const minY = Math.min(...ys);
-  const maxY = Math.max(...ys);
+  const widthPx = FIGURE_WIDTH_PX;
+  const { titlePx, subtitlePx, tickPx, axisTitlePx, notePx, sidePx } = FIGURE_TEXT;
+  const textWidth = widthPx - 2 * sidePx;
+  const titleLines = wrapText(input.title, textWidth, titlePx);
+  const subtitleLines = (input.subtitle ?? []).flatMap((s) => wrapText(s, textWidth, subtitlePx));
+  const noteLines = (input.notes ?? []).flatMap((n) => wrapText(n, textWidth, notePx));
+
+  const xs = [...input.anchors.map((a) => a.x), input.cgPlan[0], input.centroid[0]];
+  const ys = [...input.anchors.map((a) => a.y), input.cgPlan[1], input.centroid[1]];
+  const [minX, maxX, minY, maxY] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
   const span = Math.max(maxX - minX, maxY - minY) || 1;
-  const margin = span * 0.35;
-  const scale = plotSize / (span + 2 * margin);
-  const left = (width - plotSize) / 2;
+  const half = span / 2 + span * 0.3;
   const midX = (minX + maxX) / 2;
   const midY = (minY + maxY) / 2;
-  const px = (x: number) => left + plotSize / 2 + (x - midX) * scale;
-  const py = (y: number) => top + plotSize / 2 - (y - midY) * scale;
-  const maxTension = Math.max(...input.anchors.map((a) => a.tension), 0);
+  const plotSize = 400;
+  const plotLeft = (widthPx - plotSize) / 2;
+  let y = 10 + titleLines.length * (titlePx + 4) + subtitleLines.length * (subtitlePx + 3) + 16;
+  const plotTop = y;
+  y += plotSize + tickPx + 8 + axisTitlePx + 16;
+  const legendTop = y;
+  y += 20;
+  const notesTop = y;
+  y += noteLines.length * (notePx + 3);
+  const footerTop = y + 6;
+  const heightPx = Math.ceil(footerTop + cautionHeightPx(widthPx));
 
-  const parts: string[] = [];
-  parts.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="sans-serif" font-size="12">`,
+  const doc = createSvgDocument(widthPx, heightPx);
+  doc.element(doc.root, 'title').textContent = input.title;
+  doc.element(doc.root, 'rect', { width: widthPx, height: heightPx, fill: '#ffffff' });
+  const header = doc.element(doc.root, 'g', { class: 'header', fill: TEXT_COLOUR });
+  let line = 10;
+  for (const text of titleLines) {
+    line += titlePx + 2;
+    doc.text(header, text, {
+      x: sidePx,
+      y: line,
+      'font-size': titlePx,
+      'font-weight': 'bold',
+      class: 'title',
+    });
+    line += 2;
+  }
+  for (const text of subtitleLines) {
+    line += subtitlePx + 3;
+    doc.text(header, text, { x: sidePx, y: line - 1, 'font-size': subtitlePx, class: 'subtitle' });
+  }
+
+  const px = scaleLinear()
+    .domain([midX - half, midX + half])
+    .range([plotLeft, plotLeft + plotSize]);
+  const py = scaleLinear()
+    .domain([midY - half, midY + half])
+    .range([plotTop + plotSize, plotTop]);
+  const panel = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': 0 });
+  const extent = (text: string) => textWidthPx(text, tickPx);
+  const xTicks = linearTicks(px.domain() as [number, number], (v) => px(v), extent, plotSize);
+  const yTicks = linearTicks(
+    py.domain() as [number, number],
+    (v) => py(v),
+    () => tickPx * 1.3,
+    plotSize,
   );
-  parts.push(`<title>${escapeXml(input.title)}</title>`);
-  parts.push(`<rect width="${width}" height="${height}" fill="white"/>`);
-  parts.push(
-    `<text x="${width / 2}" y="22" text-anchor="middle" font-size="15">${escapeXml(input.title)}</text>`,
-  );
-  notes.forEach((line, i) => {
-    parts.push(
-      `<text x="${width / 2}" y="${40 + i * 16}" text-anchor="middle" fill="#333">${escapeXml(line)}</text>`,
-    );
+  const grid = doc.element(panel, 'g', { class: 'grid', stroke: GRID_COLOUR, 'stroke-width': 0.6 });
+  for (const v of xTicks.major)
+    doc.element(grid, 'line', { x1: px(v), x2: px(v), y1: plotTop, y2: plotTop + plotSize });
+  for (const v of yTicks.major)
+    doc.element(grid, 'line', { x1: plotLeft, x2: plotLeft + plotSize, y1: py(v), y2: py(v) });
+  doc.element(panel, 'rect', {
+    class: 'frame',
+    x: plotLeft,
+    y: plotTop,
+    width: plotSize,
+    height: plotSize,
+    fill: 'none',
+    stroke: FRAME_COLOUR,
+    'stroke-width': 0.8,
   });
-  parts.push(
-    `<rect x="${left}" y="${top}" width="${plotSize}" height="${plotSize}" fill="none" stroke="#999" stroke-width="1"/>`,
-  );
-  parts.push(
-    `<text x="${left + plotSize / 2}" y="${top + plotSize + 30}" text-anchor="middle">x (${escapeXml(input.lengthUnit)})</text>`,
-  );
-  parts.push(
-    `<text x="${left - 36}" y="${top + plotSize / 2}" text-anchor="middle" transform="rotate(-90 ${left - 36} ${top + plotSize / 2})">y (${escapeXml(input.lengthUnit)})</text>`,
-  );
-  // Axis extremes as tick labels.
-  const x0 = midX - plotSize / 2 / scale;
-  const x1 = midX + plotSize / 2 / scale;
-  const y0 = midY - plotSize / 2 / scale;
-  const y1 = midY + plotSize / 2 / scale;
-  parts.push(`<text x="${left}" y="${top + plotSize + 14}" text-anchor="start">${fmt(x0)}</text>`);
-  parts.push(`<text x="${left + plotSize}" y="${top + plotSize + 14}" text-anchor="end">${fmt(x1)}</text>`);
-  parts.push(`<text x="${left - 6}" y="${top + plotSize}" text-anchor="end">${fmt(y0)}</text>`);
-  parts.push(`<text x="${left - 6}" y="${top + 10}" text-anchor="end">${fmt(y1)}</text>`);
+  const labels = doc.element(panel, 'g', { class: 'tick-labels', fill: TEXT_COLOUR, 'font-size': tickPx });
+  const xLabels = doc.element(labels, 'g', { class: 'x-ticks', 'text-anchor': 'middle' });
+  for (const { value, text } of xTicks.labels)
+    doc.text(xLabels, text, { x: px(value), y: plotTop + plotSize + 7 + tickPx, 'data-value': value });
+  const yLabels = doc.element(labels, 'g', { class: 'y-ticks', 'text-anchor': 'end' });
+  for (const { value, text } of yTicks.labels)
+    doc.text(yLabels, text, { x: plotLeft - 6, y: py(value) + tickPx * 0.35, 'data-value': value });
+  doc.text(panel, `x (${input.lengthUnit})`, {
+    class: 'axis-title x-title',
+    x: plotLeft + plotSize / 2,
+    y: plotTop + plotSize + 7 + tickPx + 6 + axisTitlePx,
+    'text-anchor': 'middle',
+    'font-size': axisTitlePx,
+    fill: TEXT_COLOUR,
+  });
+  const yTitleX = plotLeft - 6 - Math.max(...yTicks.labels.map((l) => extent(l.text)), 20) - 10;
+  doc.text(panel, `y (${input.lengthUnit})`, {
+    class: 'axis-title y-title',
+    transform: `translate(${yTitleX}, ${plotTop + plotSize / 2}) rotate(-90)`,
+    'text-anchor': 'middle',
+    'font-size': axisTitlePx,
+    fill: TEXT_COLOUR,
+  });
 
-  // Governing direction: an arrow through the centroid.
-  const [cx, cy] = input.centroid;
+  const marks = doc.element(panel, 'g', { class: 'plan' });
+  // The governing direction: an arrow through the centre of mass, where the force acts.
+  const [gx, gy] = [px(input.cgPlan[0]), py(input.cgPlan[1])];
   const rad = (input.directionDeg * Math.PI) / 180;
-  const arrow = plotSize * 0.38;
-  const ax0 = px(cx) - Math.cos(rad) * arrow;
-  const ay0 = py(cy) + Math.sin(rad) * arrow;
-  const ax1 = px(cx) + Math.cos(rad) * arrow;
-  const ay1 = py(cy) - Math.sin(rad) * arrow;
-  const head = 12;
-  const hx1 = ax1 - head * Math.cos(rad - 0.4);
-  const hy1 = ay1 + head * Math.sin(rad - 0.4);
-  const hx2 = ax1 - head * Math.cos(rad + 0.4);
-  const hy2 = ay1 + head * Math.sin(rad + 0.4);
-  parts.push(
-    `<line x1="${ax0.toFixed(2)}" y1="${ay0.toFixed(2)}" x2="${ax1.toFixed(2)}" y2="${ay1.toFixed(2)}" stroke="#b03a2e" stroke-width="2"/>`,
-  );
-  parts.push(
-    `<polygon points="${ax1.toFixed(2)},${ay1.toFixed(2)} ${hx1.toFixed(2)},${hy1.toFixed(2)} ${hx2.toFixed(2)},${hy2.toFixed(2)}" fill="#b03a2e"/>`,
-  );
-  parts.push(
-    `<text x="${(ax1 + 6).toFixed(2)}" y="${(ay1 - 6).toFixed(2)}" fill="#b03a2e">${escapeXml(`governing force direction ${input.directionDeg.toFixed(1)}°`)}</text>`,
-  );
-
-  // Centre of mass.
-  const gx = px(input.cgPlan[0]);
-  const gy = py(input.cgPlan[1]);
-  parts.push(
-    `<path d="M${gx - 7},${gy} H${gx + 7} M${gx},${gy - 7} V${gy + 7}" stroke="#1f4e79" stroke-width="2"/>`,
-  );
-  parts.push(`<text x="${gx + 9}" y="${gy + 16}" fill="#1f4e79">centre of mass</text>`);
-
-  input.anchors.forEach((a, i) => {
-    const r = 5 + (maxTension > 0 ? (9 * a.tension) / maxTension : 0);
-    const governing = i === input.governingAnchor;
-    parts.push(
-      `<circle cx="${px(a.x).toFixed(2)}" cy="${py(a.y).toFixed(2)}" r="${r.toFixed(2)}" fill="${governing ? '#b03a2e' : '#777'}" fill-opacity="0.8"/>`,
-    );
-    const label = `${i + 1}: T = ${fmt(a.tension)} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
-    parts.push(
-      `<text x="${(px(a.x) + r + 4).toFixed(2)}" y="${(py(a.y) - r - 2).toFixed(2)}">${escapeXml(label)}</text>`,
-    );
+  const [ux, uy] = [Math.cos(rad), -Math.sin(rad)];
+  const length = plotSize * 0.3;
+  const [tipX, tipY] = [gx + ux * length, gy + uy * length];
+  const arrow = doc.element(marks, 'g', { class: 'direction', 'data-direction-deg': input.directionDeg });
+  doc.element(arrow, 'path', {
+    d: `M${gx - ux * length * 0.4},${gy - uy * length * 0.4}L${tipX - ux * 8},${tipY - uy * 8}`,
+    stroke: GOVERNING,
+    'stroke-width': 2,
+    fill: 'none',
+  });
+  const head = (angle: number) => [tipX - 11 * Math.cos(angle), tipY - 11 * Math.sin(angle)];
+  const a = Math.atan2(uy, ux);
+  const [h1x, h1y] = head(a - 0.38);
+  const [h2x, h2y] = head(a + 0.38);
+  doc.element(arrow, 'path', { d: `M${tipX},${tipY}L${h1x},${h1y}L${h2x},${h2y}Z`, fill: GOVERNING });
+  const arrowText = `force direction ${input.directionDeg.toFixed(1)}°`;
+  const arrowTextWidth = textWidthPx(arrowText, 9.5);
+  const textX = Math.min(plotLeft + plotSize - 4 - (ux >= 0 ? arrowTextWidth : 0), tipX + (ux >= 0 ? 6 : -6));
+  doc.text(arrow, arrowText, {
+    x: Math.max(plotLeft + 4 + (ux < 0 ? arrowTextWidth : 0), textX),
+    y: Math.min(plotTop + plotSize - 6, Math.max(plotTop + 12, tipY + (uy <= 0 ? -6 : 14))),
+    'text-anchor': ux >= 0 ? 'start' : 'end',
+    'font-size': 9.5,
+    fill: GOVERNING,
+    stroke: '#ffffff',
+    'stroke-width': 2.5,
+    'paint-order': 'stroke',
   });
 
-  const footer = top + plotSize + 56;
-  caution.forEach((line, i) => {
-    parts.push(`<text x="12" y="${footer + i * 14}" font-size="11" fill="#555">${escapeXml(line)}</text>`);
+  const maxTension = Math.max(...input.anchors.map((p) => p.tension), 0);
+  input.anchors.forEach((p, i) => {
+    const governing = i === input.governingAnchor && maxTension > 0;
+    const r = 4 + (maxTension > 0 ? 8 * Math.sqrt(p.tension / maxTension) : 0);
+    const [cx, cy] = [px(p.x), py(p.y)];
+    const anchor = doc.element(marks, 'g', {
+      class: 'anchor',
+      'data-tension': p.tension,
+      'data-index': i + 1,
+    });
+    doc.element(anchor, 'circle', {
+      cx,
+      cy,
+      r,
+      fill: governing ? GOVERNING : ANCHOR,
+      'fill-opacity': 0.85,
+      stroke: '#ffffff',
+      'stroke-width': 1,
+    });
+    // Centred above the anchors of the upper half, below those of the lower half, kept in the frame.
+    const label = `${i + 1}: T = ${format(p.tension)} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
+    const halfWidth = textWidthPx(label, 9.5) / 2;
+    doc.text(anchor, label, {
+      x: Math.min(plotLeft + plotSize - halfWidth - 3, Math.max(plotLeft + halfWidth + 3, cx)),
+      y: cy + (p.y >= input.centroid[1] ? -r - 4 : r + 12),
+      'text-anchor': 'middle',
+      'font-size': 9.5,
+      fill: TEXT_COLOUR,
+      stroke: '#ffffff',
+      'stroke-width': 2.5,
+      'paint-order': 'stroke',
+    });
   });
-  parts.push('</svg>');
-  return `${parts.join('\n')}\n`;
+  const cross = (x: number, yy: number, size: number) =>
+    `M${x - size},${yy}H${x + size}M${x},${yy - size}V${yy + size}`;
+  const [kx, ky] = [px(input.centroid[0]), py(input.centroid[1])];
+  doc.element(marks, 'path', {
+    class: 'centroid',
+    d: `M${kx - 4},${ky - 4}L${kx + 4},${ky + 4}M${kx - 4},${ky + 4}L${kx + 4},${ky - 4}`,
+    stroke: '#555555',
+    'stroke-width': 1.2,
+  });
+  doc.element(marks, 'path', {
+    class: 'centre-of-mass',
+    d: cross(gx, gy, 7),
+    stroke: MASS,
+    'stroke-width': 2,
+  });
+
+  // Legend of the marks.
+  const legend = doc.element(doc.root, 'g', { class: 'legend', 'font-size': tickPx, fill: TEXT_COLOUR });
+  const ly = legendTop + 6;
+  let lx = sidePx;
+  const item = (draw: (x: number) => void, text: string) => {
+    draw(lx + 6);
+    doc.text(legend, text, { x: lx + 16, y: ly + tickPx * 0.35 });
+    lx += 16 + textWidthPx(text, tickPx) + 14;
+  };
+  item(
+    (x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: ANCHOR, 'fill-opacity': 0.85 }),
+    'anchor (larger: more tension)',
+  );
+  item(
+    (x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: GOVERNING, 'fill-opacity': 0.85 }),
+    'governing anchor',
+  );
+  item(
+    (x) => doc.element(legend, 'path', { d: cross(x, ly, 6), stroke: MASS, 'stroke-width': 2 }),
+    'centre of mass',
+  );
+  item(
+    (x) =>
+      doc.element(legend, 'path', {
+        d: `M${x - 4},${ly - 4}L${x + 4},${ly + 4}M${x - 4},${ly + 4}L${x + 4},${ly - 4}`,
+        stroke: '#555555',
+        'stroke-width': 1.2,
+      }),
+    'anchor centroid',
+  );
+
+  const notes = doc.element(doc.root, 'g', { class: 'notes', fill: TEXT_COLOUR, 'font-size': notePx });
+  noteLines.forEach((text, i) => {
+    doc.text(notes, text, { x: sidePx, y: notesTop + (i + 1) * (notePx + 3) - 2 });
+  });
+  drawCaution(doc, footerTop, widthPx);
+  return doc.serialize();
+}
+
+function format(value: number): string {
+  return Number(value.toPrecision(4)).toString();
 }

@@ -40,6 +40,11 @@ export interface Series {
   legend?: boolean;
   /** A class name on the curve's path, e.g. 'curve' or 'overlay'. Default 'curve'. */
   kind?: string;
+  /**
+   * Draw only the first, lowest, highest and last point of each pixel column (x ascending), for
+   * long sampled histories: the drawn envelope and every peak are kept exactly, the file stays small.
+   */
+  decimate?: boolean;
 }
 
 /** What a panel's decorations draw with. */
@@ -78,16 +83,29 @@ export interface FigureSpec {
   /** Lines of small print above the caution (method notes, what is left off the plot). */
   notes?: readonly string[];
   widthPx?: number;
+  /** Room right of the plots, px, e.g. for labels at the right end of lines; default 18. */
+  rightMarginPx?: number;
 }
 
-const TITLE_PX = 13;
-const SUBTITLE_PX = 10;
-const TICK_PX = 10;
-const AXIS_TITLE_PX = 10.5;
-const NOTE_PX = 8.5;
-const FOOTER_PX = 8;
+/** Font sizes and side margin shared by every figure, px. */
+export const FIGURE_TEXT = {
+  titlePx: 13,
+  subtitlePx: 10,
+  tickPx: 10,
+  axisTitlePx: 10.5,
+  notePx: 8.5,
+  footerPx: 8,
+  sidePx: 14,
+} as const;
+
+const TITLE_PX = FIGURE_TEXT.titlePx;
+const SUBTITLE_PX = FIGURE_TEXT.subtitlePx;
+const TICK_PX = FIGURE_TEXT.tickPx;
+const AXIS_TITLE_PX = FIGURE_TEXT.axisTitlePx;
+const NOTE_PX = FIGURE_TEXT.notePx;
+const FOOTER_PX = FIGURE_TEXT.footerPx;
 const RIGHT_MARGIN_PX = 18;
-const SIDE_PX = 14;
+const SIDE_PX = FIGURE_TEXT.sidePx;
 
 interface PanelLayout {
   spec: PanelSpec;
@@ -108,7 +126,7 @@ export function renderFigure(spec: FigureSpec): string {
   const layouts = spec.panels.map(layoutPanel);
   const yLabelWidth = Math.max(...layouts.map((l) => l.yLabelWidthPx), 20);
   const plotLeft = SIDE_PX + AXIS_TITLE_PX + 8 + yLabelWidth + 7;
-  const plotWidth = widthPx - plotLeft - RIGHT_MARGIN_PX;
+  const plotWidth = widthPx - plotLeft - (spec.rightMarginPx ?? RIGHT_MARGIN_PX);
   const textWidth = widthPx - 2 * SIDE_PX;
 
   const titleLines = wrapText(spec.title, textWidth, TITLE_PX);
@@ -116,7 +134,6 @@ export function renderFigure(spec: FigureSpec): string {
   const legendEntries = layouts.flatMap((l) => l.series.filter((s) => s.series.legend !== false));
   const legendRows = legendLayout(legendEntries, spec.legendTitle, plotWidth);
   const noteLines = (spec.notes ?? []).flatMap((n) => wrapText(n, textWidth, NOTE_PX));
-  const footerLines = wrapText(CAUTION, textWidth, FOOTER_PX);
 
   let y = 10;
   const titleTop = y;
@@ -132,10 +149,11 @@ export function renderFigure(spec: FigureSpec): string {
   const notesTop = y;
   y += noteLines.length * (NOTE_PX + 3);
   const footerTop = y + 6;
-  y = footerTop + 6 + footerLines.length * (FOOTER_PX + 3) + 6;
+  y = footerTop + cautionHeightPx(widthPx);
   const heightPx = Math.ceil(y);
 
   const doc = createSvgDocument(widthPx, heightPx);
+  doc.element(doc.root, 'title').textContent = spec.title;
   doc.element(doc.root, 'rect', { width: widthPx, height: heightPx, fill: '#ffffff' });
   const header = doc.element(doc.root, 'g', { class: 'header', fill: TEXT_COLOUR });
   let line = titleTop;
@@ -167,19 +185,75 @@ export function renderFigure(spec: FigureSpec): string {
   noteLines.forEach((text, i) => {
     doc.text(notes, text, { x: SIDE_PX, y: notesTop + (i + 1) * (NOTE_PX + 3) - 2 });
   });
+  drawCaution(doc, footerTop, widthPx);
+  return doc.serialize();
+}
+
+/** Height of the caution footer of a figure `widthPx` wide, px, rule and margins included. */
+export function cautionHeightPx(widthPx: number): number {
+  return 6 + wrapText(CAUTION, widthPx - 2 * SIDE_PX, FOOTER_PX).length * (FOOTER_PX + 3) + 6;
+}
+
+/** The standing caution in small print under a rule at `top`, as every figure ends. */
+export function drawCaution(doc: SvgDocument, top: number, widthPx: number): void {
+  const footerLines = wrapText(CAUTION, widthPx - 2 * SIDE_PX, FOOTER_PX);
   const footer = doc.element(doc.root, 'g', { class: 'caution', fill: '#444444', 'font-size': FOOTER_PX });
   doc.element(footer, 'line', {
     x1: SIDE_PX,
     x2: widthPx - SIDE_PX,
-    y1: footerTop,
-    y2: footerTop,
+    y1: top,
+    y2: top,
     stroke: '#999999',
     'stroke-width': 0.6,
   });
   footerLines.forEach((text, i) => {
-    doc.text(footer, text, { x: SIDE_PX, y: footerTop + 4 + (i + 1) * (FOOTER_PX + 3) - 2 });
+    doc.text(footer, text, { x: SIDE_PX, y: top + 4 + (i + 1) * (FOOTER_PX + 3) - 2 });
   });
-  return doc.serialize();
+}
+
+/**
+ * The indices of a series to draw when it is decimated: in each pixel column (x ascending) its
+ * first, lowest, highest and last point, in order; points that cannot be drawn are kept as breaks.
+ * The polyline through them covers the same pixels as the full one to within a column, and the
+ * largest and smallest values are among them exactly (common practice for drawing long signals).
+ */
+export function decimatedIndices(
+  count: number,
+  toPixelX: (i: number) => number,
+  value: (i: number) => number,
+  drawable: (i: number) => boolean,
+): number[] {
+  const out: number[] = [];
+  let column = Number.NaN;
+  let first = -1;
+  let last = -1;
+  let low = -1;
+  let high = -1;
+  const flush = () => {
+    if (first < 0) return;
+    const picked = [...new Set([first, low, high, last])].sort((a, b) => a - b);
+    out.push(...picked);
+    first = -1;
+  };
+  for (let i = 0; i < count; i++) {
+    if (!drawable(i)) {
+      flush();
+      out.push(i);
+      column = Number.NaN;
+      continue;
+    }
+    const c = Math.floor(toPixelX(i));
+    if (c !== column) {
+      flush();
+      column = c;
+      first = low = high = i;
+    }
+    last = i;
+    if (value(i) < value(low)) low = i;
+    if (value(i) > value(high)) high = i;
+  }
+  flush();
+  return out;
 }
 
 function layoutPanel(spec: PanelSpec): PanelLayout {
@@ -303,9 +377,18 @@ function drawPanel(
   }
   const curves = doc.element(group, 'g', { class: 'curves', fill: 'none', 'clip-path': `url(#${clipId})` });
   for (const { series, style } of layout.series) {
-    const indices = Array.from({ length: Math.min(series.x.length, series.y.length) }, (_, i) => i);
+    const count = Math.min(series.x.length, series.y.length);
+    const canDraw = (i: number) => drawable(series.x[i], series.y[i], layout.xScale, layout.yScale);
+    const indices = series.decimate
+      ? decimatedIndices(
+          count,
+          (i) => x(series.x[i]),
+          (i) => series.y[i],
+          canDraw,
+        )
+      : Array.from({ length: count }, (_, i) => i);
     const path = line<number>()
-      .defined((i) => drawable(series.x[i], series.y[i], layout.xScale, layout.yScale))
+      .defined(canDraw)
       .x((i) => x(series.x[i]))
       .y((i) => y(series.y[i]))
       .digits(2)(indices);

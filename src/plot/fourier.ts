@@ -1,66 +1,72 @@
-import { scaleLog } from 'd3-scale';
-import { plotBottom, plotLeft, plotRight, plotTop, renderChart, shortNumber } from './simple-chart.js';
+import type { Series } from './figure.js';
+import { lineChart } from './line-chart.js';
+import { niceCeil125, niceFloor125 } from './ticks.js';
 
-export interface FourierFigure {
-  recordName: string;
-  frequenciesHz: Float64Array;
-  amplitudeMS: Float64Array;
+export interface FourierFigureInput {
+  /** The record's name and where it came from. */
+  name: string;
+  source?: string;
+  frequenciesHz: ArrayLike<number>;
+  /** Fourier amplitude, m/s, at `frequenciesHz`. */
+  amplitudeMS: ArrayLike<number>;
   /** Smoothed amplitudes at `smoothedHz`, or none. */
-  smoothedHz?: Float64Array;
-  smoothedMS?: Float64Array;
-  /** e.g. "Konno–Ohmachi, b = 40". */
+  smoothedHz?: ArrayLike<number>;
+  smoothedMS?: ArrayLike<number>;
+  /** e.g. "Konno–Ohmachi 1998, b = 40". */
   smoothingLabel?: string;
-  notes?: string[];
+  /** How the transform was taken, one line. */
+  methodDescription?: string;
+  processing?: readonly { description: string }[];
 }
 
-/** Fourier amplitude spectrum on log–log axes: raw in grey, smoothed (if given) in dark blue. */
-export function fourierSvg(figure: FourierFigure): string {
-  const positive = (f: number, a: number) => f > 0 && a > 0 && Number.isFinite(a);
-  const fx: number[] = [];
-  const ay: number[] = [];
-  for (let i = 0; i < figure.frequenciesHz.length; i++) {
-    if (positive(figure.frequenciesHz[i], figure.amplitudeMS[i])) {
-      fx.push(figure.frequenciesHz[i]);
-      ay.push(figure.amplitudeMS[i]);
-    }
+/** Decades of amplitude drawn below the largest: the rest is numerical noise at this scale. */
+const AMPLITUDE_DECADES = 5;
+
+/**
+ * Fourier amplitude spectrum of the ground acceleration on log–log axes: the raw amplitudes thin
+ * and grey, the smoothed ones (if given) over them. The axis keeps five decades below the peak.
+ */
+export function fourierFigure(input: FourierFigureInput): string {
+  let peak = 0;
+  for (let i = 0; i < input.amplitudeMS.length; i++)
+    if (input.frequenciesHz[i] > 0 && input.amplitudeMS[i] > peak) peak = input.amplitudeMS[i];
+  if (!(peak > 0)) peak = 1;
+  const series: Series[] = [
+    {
+      label: 'unsmoothed',
+      x: input.frequenciesHz,
+      y: input.amplitudeMS,
+      style: { color: '#9a9a9a', dash: 'none', widthPx: 0.7 },
+      decimate: true,
+    },
+  ];
+  if (input.smoothedHz !== undefined && input.smoothedMS !== undefined) {
+    series.push({
+      label: `smoothed (${input.smoothingLabel ?? 'smoothed'})`,
+      x: input.smoothedHz,
+      y: input.smoothedMS,
+      style: { color: '#0072B2', dash: 'none', widthPx: 1.8 },
+    });
   }
-  const fMin = fx.length > 0 ? fx[0] : 0.01;
-  const fMax = fx.length > 0 ? fx[fx.length - 1] : 100;
-  const aMax = ay.length > 0 ? Math.max(...ay) : 1;
-  const aMin = aMax * 1e-5;
-  const x = scaleLog()
-    .domain([fMin, Math.max(fMax, fMin * 10)])
-    .range([plotLeft, plotRight]);
-  const y = scaleLog()
-    .domain([aMin, aMax * 2])
-    .range([plotBottom, plotTop])
-    .clamp(true);
-  const series = [{ x: fx, y: ay, stroke: '#a6a6a6', width: 0.8 }];
-  const notes = [...(figure.notes ?? [])];
-  if (figure.smoothedHz !== undefined && figure.smoothedMS !== undefined) {
-    const sx: number[] = [];
-    const sy: number[] = [];
-    for (let i = 0; i < figure.smoothedHz.length; i++) {
-      if (positive(figure.smoothedHz[i], figure.smoothedMS[i])) {
-        sx.push(figure.smoothedHz[i]);
-        sy.push(figure.smoothedMS[i]);
-      }
-    }
-    series.push({ x: sx, y: sy, stroke: '#1f4e79', width: 1.6 });
-    notes.unshift(`grey: unsmoothed; blue: smoothed (${figure.smoothingLabel ?? 'smoothed'})`);
-  }
-  const logTick = (v: number) =>
-    Number.isInteger(Math.log10(v) + 1e-9) || Math.abs(Math.log10(v) - Math.round(Math.log10(v))) < 1e-9
-      ? shortNumber(v)
-      : '';
-  return renderChart({
-    title: `Fourier amplitude spectrum: ${figure.recordName}`,
-    xLabel: 'frequency, Hz',
-    yLabel: 'Fourier amplitude, m/s',
-    x,
-    y,
+  const source = input.source !== undefined && input.source !== input.name ? ` (${input.source})` : '';
+  const subtitle = [`Record: ${input.name}${source}`];
+  const processing = input.processing ?? [];
+  if (processing.length === 0) subtitle.push('Processed: nothing (as read)');
+  for (const step of processing) subtitle.push(`Processed: ${step.description}`);
+  if (input.methodDescription !== undefined) subtitle.push(`Method: ${input.methodDescription}`);
+  return lineChart({
+    title: 'Fourier amplitude spectrum of the ground acceleration',
+    subtitle,
+    x: { title: 'Frequency f (Hz)' },
+    y: {
+      title: 'Fourier amplitude (m/s)',
+      domain: [niceFloor125(peak * 10 ** -AMPLITUDE_DECADES), niceCeil125(peak * 1.2)],
+    },
+    axes: 'log',
+    heightPx: 320,
     series,
-    notes,
-    tickFormat: { x: logTick, y: logTick },
+    notes: [
+      `Amplitudes more than ${AMPLITUDE_DECADES} decades below the largest are cut off at the bottom of the plot; the unsmoothed line is drawn by the lowest and highest value of each pixel column.`,
+    ],
   });
 }

@@ -1,6 +1,5 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
 import { type PanelContext, type PanelSpec, renderFigure } from './figure.js';
-import { groundHistories, peakIndex } from './histories-data.js';
 import { TEXT_COLOUR } from './styles.js';
 import { formatValue } from './text.js';
 
@@ -12,6 +11,12 @@ export interface HistoriesFigureInput {
   dtS: number;
   /** Ground acceleration, m/s². */
   accelMS2: ArrayLike<number>;
+  /** Ground velocity, m/s, at the same times (integrated by the caller, e.g. with integrateRecord). */
+  velocityMS: ArrayLike<number>;
+  /** Ground displacement, m, at the same times. */
+  displacementM: ArrayLike<number>;
+  /** How velocity and displacement were obtained, for the subtitle; default the trapezoidal rule from rest. */
+  integrationDescription?: string;
   /** What was done to the record, one line each. */
   processing?: readonly { description: string }[];
 }
@@ -23,30 +28,36 @@ export interface HistoriesFigureOptions {
 
 /**
  * Ground acceleration (g), velocity and displacement stacked on one time axis, each peak marked and
- * labelled. Velocity and displacement are integrated from rest by the trapezoidal rule.
+ * labelled. The histories are given (the plot module does no integration); long ones are drawn
+ * with one low and one high point per pixel column, which keeps every peak exactly.
  */
 export function historiesFigure(input: HistoriesFigureInput, options: HistoriesFigureOptions = {}): string {
   const unit = options.lengthUnit ?? 'm';
   const perLength = 1 / LENGTH_UNITS[unit];
-  const h = groundHistories(input.accelMS2, input.dtS);
-  const durationS = h.timesS[h.timesS.length - 1];
+  const n = input.accelMS2.length;
+  if (input.velocityMS.length !== n || input.displacementM.length !== n) {
+    throw new RangeError('acceleration, velocity and displacement must have the same number of samples');
+  }
+  const timesS = Float64Array.from({ length: n }, (_, i) => i * input.dtS);
+  const durationS = n > 1 ? timesS[n - 1] : input.dtS;
+  const scaled = (values: ArrayLike<number>, factor: number) => Float64Array.from(values, (v) => v * factor);
   const rows = [
     {
       title: 'Acceleration (g)',
       unit: 'g',
-      values: h.accelMS2.map((v) => v / STANDARD_GRAVITY_MS2),
+      values: scaled(input.accelMS2, 1 / STANDARD_GRAVITY_MS2),
       color: '#0072B2',
     },
     {
       title: `Velocity (${unit}/s)`,
       unit: `${unit}/s`,
-      values: h.velocityMS.map((v) => v * perLength),
+      values: scaled(input.velocityMS, perLength),
       color: '#D55E00',
     },
     {
       title: `Displacement (${unit})`,
       unit,
-      values: h.displacementM.map((v) => v * perLength),
+      values: scaled(input.displacementM, perLength),
       color: '#009E73',
     },
   ];
@@ -58,27 +69,33 @@ export function historiesFigure(input: HistoriesFigureInput, options: HistoriesF
     series: [
       {
         label: row.title,
-        x: h.timesS,
+        x: timesS,
         y: row.values,
         style: { color: row.color, dash: 'none', widthPx: 1 },
         legend: false,
         kind: 'history',
+        decimate: true,
       },
     ],
     xLabels: i === rows.length - 1,
-    overlay: (context) => markPeak(context, h.timesS, row.values, row.unit),
+    overlay: (context) => markPeak(context, timesS, row.values, row.unit),
   }));
   const source = input.source !== undefined && input.source !== input.name ? ` (${input.source})` : '';
-  const subtitle = [`Record: ${input.name}${source}; ${h.timesS.length} samples at Δt = ${input.dtS} s`];
+  const subtitle = [`Record: ${input.name}${source}; ${n} samples at Δt = ${input.dtS} s`];
   for (const step of input.processing ?? []) subtitle.push(`Processed: ${step.description}`);
   subtitle.push(
-    'Method: velocity and displacement by the trapezoidal rule from rest (v = u = 0 at t = 0); no damping',
+    `Method: ${input.integrationDescription ?? 'velocity and displacement by the trapezoidal rule from rest (v = u = 0 at t = 0)'}`,
   );
   return renderFigure({
     title: 'Ground acceleration, velocity and displacement',
     subtitle,
     panels,
     notes: [
+      ...(n > 1000
+        ? [
+            `The ${n} samples are drawn by the first, lowest, highest and last of each pixel column; the peaks marked are the exact sample peaks.`,
+          ]
+        : []),
       'No baseline correction is made here beyond the processing listed above; drift in the displacement usually shows an offset or long-period noise in the record.',
     ],
   });
@@ -116,4 +133,11 @@ function markPeak(context: PanelContext, timesS: Float64Array, values: Float64Ar
     stroke: TEXT_COLOUR,
     'stroke-width': 1.2,
   });
+}
+
+/** Index of the largest absolute value (the first one, if it repeats). */
+export function peakIndex(values: ArrayLike<number>): number {
+  let best = 0;
+  for (let i = 1; i < values.length; i++) if (Math.abs(values[i]) > Math.abs(values[best])) best = i;
+  return best;
 }

@@ -1,53 +1,85 @@
-import { scaleLinear } from 'd3-scale';
-import { escapeXml, plotBottom, plotLeft, plotRight, plotTop, renderChart } from './simple-chart.js';
+import type { PanelContext } from './figure.js';
+import { lineChart } from './line-chart.js';
+import { TEXT_COLOUR } from './styles.js';
 
-export interface HusidFigure {
-  recordName: string;
+export interface HusidFigureInput {
+  /** The record's name and where it came from. */
+  name: string;
+  source?: string;
   dtS: number;
   /** Normalised Husid curve, 0 → 1, one value a sample. */
-  husid: Float64Array;
+  husid: ArrayLike<number>;
   t5S: number;
   t75S: number;
   t95S: number;
-  /** Lines describing processing and method, shown under the axes. */
-  notes?: string[];
+  /** What was done to the record, one line each. */
+  processing?: readonly { description: string }[];
 }
 
-/** The Husid curve (normalised Arias intensity against time) with the 5, 75 and 95% levels marked. */
-export function husidSvg(figure: HusidFigure): string {
-  const n = figure.husid.length;
-  const times = Float64Array.from({ length: n }, (_, i) => i * figure.dtS);
-  const x = scaleLinear()
-    .domain([0, (n - 1) * figure.dtS])
-    .range([plotLeft, plotRight]);
-  const y = scaleLinear().domain([0, 1]).range([plotBottom, plotTop]);
-  const overlay: string[] = [];
-  for (const [level, timeS] of [
-    [0.05, figure.t5S],
-    [0.75, figure.t75S],
-    [0.95, figure.t95S],
-  ] as const) {
-    const py = y(level).toFixed(2);
-    const px = x(timeS).toFixed(2);
-    overlay.push(
-      `<line x1="${plotLeft}" x2="${plotRight}" y1="${py}" y2="${py}" stroke="#8c8c8c" stroke-dasharray="4 3"/>`,
-      `<line x1="${px}" x2="${px}" y1="${py}" y2="${plotBottom}" stroke="#8c8c8c" stroke-dasharray="4 3"/>`,
-      `<text x="${plotRight - 4}" y="${py}" dy="-0.3em" text-anchor="end" font-size="11" font-family="sans-serif">${escapeXml(`${level * 100}% at ${timeS.toFixed(2)} s`)}</text>`,
-    );
-  }
-  const d595 = figure.t95S - figure.t5S;
-  const d575 = figure.t75S - figure.t5S;
-  return renderChart({
-    title: `Husid curve: ${figure.recordName}`,
-    xLabel: 'time, s',
-    yLabel: 'normalised Arias intensity',
-    x,
-    y,
-    series: [{ x: times, y: figure.husid, stroke: '#1f4e79', width: 1.6 }],
-    overlay: overlay.join('\n'),
+/**
+ * The Husid curve, normalised Arias intensity (Arias 1970) against time, with the 5, 75 and 95%
+ * levels and the significant durations D5–75 and D5–95 (Trifunac and Brady 1975) marked.
+ */
+export function husidFigure(input: HusidFigureInput): string {
+  const n = input.husid.length;
+  const timesS = Float64Array.from({ length: n }, (_, i) => i * input.dtS);
+  const durationS = n > 1 ? timesS[n - 1] : input.dtS;
+  const source = input.source !== undefined && input.source !== input.name ? ` (${input.source})` : '';
+  const subtitle = [`Record: ${input.name}${source}; ${n} samples at Δt = ${input.dtS} s`];
+  const processing = input.processing ?? [];
+  if (processing.length === 0) subtitle.push('Processed: nothing (as read)');
+  for (const step of processing) subtitle.push(`Processed: ${step.description}`);
+  subtitle.push('Method: I(t) = ∫₀ᵗ a² dt / ∫₀ᵀ a² dt by the trapezoidal rule (Husid 1969; Arias 1970)');
+  const levels: [number, number][] = [
+    [0.05, input.t5S],
+    [0.75, input.t75S],
+    [0.95, input.t95S],
+  ];
+  return lineChart({
+    title: 'Husid curve: normalised Arias intensity',
+    subtitle,
+    x: { title: 'Time t (s)', domain: [0, durationS] },
+    y: { title: 'Normalised Arias intensity', domain: [0, 1] },
+    axes: 'linear',
+    heightPx: 300,
+    series: [
+      {
+        label: 'Husid curve',
+        x: timesS,
+        y: input.husid,
+        style: { color: '#0072B2', dash: 'none', widthPx: 1.6 },
+        legend: false,
+        decimate: true,
+      },
+    ],
+    overlay: (context) => markLevels(context, levels),
     notes: [
-      `D5–75 = ${d575.toFixed(2)} s, D5–95 = ${d595.toFixed(2)} s (Trifunac and Brady 1975); Arias intensity by the trapezoidal rule`,
-      ...(figure.notes ?? []),
+      `D5–75 = ${(input.t75S - input.t5S).toFixed(2)} s, D5–95 = ${(input.t95S - input.t5S).toFixed(2)} s: significant durations between the times the curve reaches 5%, 75% and 95% (Trifunac and Brady 1975), linear between samples.`,
     ],
   });
+}
+
+function markLevels(context: PanelContext, levels: readonly [number, number][]): void {
+  const { doc, group, x, y, plot } = context;
+  const marks = doc.element(group, 'g', { class: 'levels', fill: 'none' });
+  for (const [level, timeS] of levels) {
+    const px = x(timeS);
+    const py = y(level);
+    const mark = doc.element(marks, 'g', { class: 'level', 'data-level': level, 'data-time': timeS });
+    doc.element(mark, 'path', {
+      d: `M${plot.left},${py}H${px}V${plot.top + plot.height}`,
+      stroke: '#777777',
+      'stroke-width': 0.9,
+      'stroke-dasharray': '4 3',
+    });
+    doc.text(mark, `${level * 100}% at t = ${timeS.toFixed(2)} s`, {
+      x: px + 5,
+      y: py + (level > 0.5 ? 12 : -5),
+      'font-size': 9,
+      fill: TEXT_COLOUR,
+      stroke: '#ffffff',
+      'stroke-width': 2.5,
+      'paint-order': 'stroke',
+    });
+  }
 }

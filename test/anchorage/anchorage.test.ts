@@ -8,14 +8,21 @@ import { CAUTION } from '../../src/caution.js';
 const generator = parseEquipment(readFileSync('records/equipment-generator.json', 'utf8'), 'gen');
 
 describe('analyseAnchorage', () => {
-  it('code demand of the invented generator: F_p = 33.75 kN, worst tension 14.0148 kN at 57.99° (hand calculation in bolt-group.test.ts)', () => {
-    const a = analyseAnchorage(generator, { elastic: null, demand: 'code' });
+  it('code demand of the invented generator: F_p = 33.75 kN, worst tension 14.0148 kN at 57.99° under the biaxial rule (hand calculation in bolt-group.test.ts)', () => {
+    const a = analyseAnchorage(generator, { elastic: null, demand: 'code', anchorRule: 'biaxial' });
     expect(a.code.fp).toBeCloseTo(33.75, 10);
     expect(a.anchors.maxTension).toBeCloseTo(
       (33.75 * 1.1 * Math.sqrt(1 / 0.64 + 1 / 0.25)) / 4 - (0.7 * 45) / 4,
       9,
     );
     expect(a.verticalKN).toBeCloseTo(9, 12);
+  });
+
+  it('the default projected rule gives 15.4840 kN at 71.27° (cubic of bolt-group.test.ts) and says so', () => {
+    const a = analyseAnchorage(generator, { elastic: null, demand: 'code' });
+    expect(a.anchors.rule).toBe('projected');
+    expect(a.anchors.maxTension).toBeCloseTo(15.484, 3);
+    expect(a.assumptions.join(' ')).toContain('projected');
   });
 
   it('max picks the larger of Ω₀·F_p and PSA·W_p; Ω₀ scales the code force only', () => {

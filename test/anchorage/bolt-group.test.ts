@@ -23,10 +23,11 @@ const rectangle = {
   cgHeight: 1.1,
   horizontalForce: 33.75,
   deadLoad: 31.5,
+  rule: 'biaxial' as const,
 };
 const M = 33.75 * 1.1;
 
-describe('boltGroupForces, 4-anchor 1.6 m × 1.0 m rectangle', () => {
+describe('boltGroupForces, biaxial rule, 4-anchor 1.6 m × 1.0 m rectangle', () => {
   it('θ = 0°: trailing anchors T = M·a/(4a²) − D/4 = 3.7266 kN, leading ones 0', () => {
     const { tension } = boltGroupAtDirection(rectangle, 0);
     expect(tension[0]).toBeCloseTo((M * 0.8) / 2.56 - 7.875, 9);
@@ -135,5 +136,83 @@ describe('boltGroupForces reduces to M·d_i/Σd² − D/n along a principal axis
     expect(tension[0]).toBeCloseTo((20 * 1) / 6 - 1, 12);
     expect(tension[1]).toBeCloseTo((20 * 1) / 6 - 1, 12);
     expect(tension[2]).toBe(0);
+  });
+});
+
+/*
+ * The same rectangle under the projected rule (the rule written in the issue; common practice):
+ * T_i = M·d_i/Σd_j² − D/n, d_i the distance from the neutral axis through the centroid
+ * perpendicular to the direction of shaking u = (cos θ, sin θ). For the anchor (−a, −b):
+ *   d = a cos θ + b sin θ,  Σd² = 4(a² cos²θ + b² sin²θ),
+ *   T(θ) = (M/4)·g(θ) − D/4,  g(θ) = (a c + b s)/(a² c² + b² s²), c = cos θ, s = sin θ.
+ * θ = 0°: g = 1/a → 3.7266 kN; θ = 90°: g = 1/b → 10.6875 kN (both as the biaxial rule: principal axes).
+ * At θ = atan(a/b): a c + b s = 2ab/√(a²+b²), a²c² + b²s² = 2a²b²/(a²+b²), g = √(a²+b²)/(ab)
+ * = √(1/a² + 1/b²): the same 14.0148 kN as the biaxial rule's maximum, but not the maximum here.
+ * Worst direction: g'(θ) = 0 ⇔ (b c − a s)(a² c² + b² s²) = 2(b² − a²) s c (a c + b s); dividing by c³
+ * with t = tan θ and collecting terms,
+ *   −a b² t³ + (2a² b − b³) t² + (a³ − 2a b²) t + a² b = 0,
+ * a cubic with one real root (a = 0.8, b = 0.5: t* = 2.94889, θ* = 71.2677°), solved below by
+ * Cardano's formula. Then g* = (a + b t*)√(1 + t*²)/(a² + b² t*²) = 2.51680 and
+ * T* = (M/4)·g* − D/4 = 15.4840 kN, 10.5% above the biaxial maximum. (Check on the square a = b:
+ * the cubic is b³(1 − t)(1 + t²) = 0, θ* = 45°, where both rules agree.)
+ */
+function cardanoRealRoot(c3: number, c2: number, c1: number, c0: number): number {
+  // x³ + p2 x² + p1 x + p0 = 0 → depressed y³ + p y + q = 0 with x = y − p2/3 (Cardano 1545).
+  const [p2, p1, p0] = [c2 / c3, c1 / c3, c0 / c3];
+  const p = p1 - (p2 * p2) / 3;
+  const q = (2 * p2 ** 3) / 27 - (p2 * p1) / 3 + p0;
+  const disc = (q / 2) ** 2 + (p / 3) ** 3;
+  expect(disc).toBeGreaterThan(0); // one real root
+  const y = Math.cbrt(-q / 2 + Math.sqrt(disc)) + Math.cbrt(-q / 2 - Math.sqrt(disc));
+  return y - p2 / 3;
+}
+
+describe('boltGroupForces, projected rule (default), the same rectangle', () => {
+  const projected = { ...rectangle, rule: 'projected' as const };
+  const [a, b] = [0.8, 0.5];
+
+  it('is the default rule', () => {
+    const { rule: _rule, ...withoutRule } = rectangle;
+    expect(boltGroupForces(withoutRule).rule).toBe('projected');
+    expect(boltGroupForces(withoutRule).maxTension).toBeCloseTo(boltGroupForces(projected).maxTension, 12);
+  });
+
+  it('θ = 0° and 90°: M·d/Σd² − D/4 = 3.7266 and 10.6875 kN, as the biaxial rule on the principal axes', () => {
+    expect(boltGroupAtDirection(projected, 0).tension[0]).toBeCloseTo((M * a) / (4 * a * a) - 7.875, 9);
+    expect(boltGroupAtDirection(projected, 90).tension[0]).toBeCloseTo(10.6875, 9);
+    expect(boltGroupAtDirection(projected, 90).tension[2]).toBe(0);
+  });
+
+  it('θ = atan(a/b): (M/4)√(1/a² + 1/b²) − D/4 = 14.0148 kN, equal to the biaxial maximum', () => {
+    const theta = (Math.atan(a / b) * 180) / Math.PI;
+    expect(boltGroupAtDirection(projected, theta).tension[0]).toBeCloseTo(14.0148, 3);
+  });
+
+  it('worst direction from the cubic (Cardano): θ* = 71.27°, T* = 15.4840 kN, above the biaxial 14.0148 kN', () => {
+    const t = cardanoRealRoot(-a * b * b, 2 * a * a * b - b ** 3, a ** 3 - 2 * a * b * b, a * a * b);
+    const thetaStar = (Math.atan(t) * 180) / Math.PI;
+    const gStar = ((a + b * t) * Math.sqrt(1 + t * t)) / (a * a + b * b * t * t);
+    const tStar = (M / 4) * gStar - 7.875;
+    expect(thetaStar).toBeCloseTo(71.2677, 3);
+    expect(tStar).toBeCloseTo(15.484, 3);
+    const result = boltGroupForces(projected);
+    expect(result.maxTension).toBeCloseTo(tStar, 8);
+    expect(result.perAnchor[0].tensionDirectionDeg).toBeCloseTo(thetaStar, 4);
+    expect(result.governingAnchor).toBe(0);
+    // Symmetry: the other corners peak at 180° − θ*, 180° + θ*, 360° − θ*.
+    expect(result.perAnchor[1].tensionDirectionDeg).toBeCloseTo(180 - thetaStar, 4);
+    expect(result.perAnchor[2].tensionDirectionDeg).toBeCloseTo(180 + thetaStar, 4);
+    expect(result.perAnchor[3].tensionDirectionDeg).toBeCloseTo(360 - thetaStar, 4);
+    expect(result.maxTension).toBeGreaterThan(boltGroupForces(rectangle).maxTension);
+  });
+
+  it('the worst found does not depend on the sweep step (golden-section refinement)', () => {
+    const coarse = boltGroupForces({ ...projected, stepDeg: 10 });
+    const fine = boltGroupForces({ ...projected, stepDeg: 0.25 });
+    expect(coarse.maxTension).toBeCloseTo(fine.maxTension, 8);
+  });
+
+  it('shear is the same under both rules (the rules differ in the overturning share only)', () => {
+    expect(boltGroupForces(projected).maxShear).toBeCloseTo(boltGroupForces(rectangle).maxShear, 12);
   });
 });

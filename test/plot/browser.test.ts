@@ -4,8 +4,10 @@ import { logSpaced } from '../../src/oscillator/grid.js';
 import { historiesFigure } from '../../src/plot/histories.js';
 import { psaFigure, psvFigure, sdFigure } from '../../src/plot/spectrum-figures.js';
 import { tripartiteFigure } from '../../src/plot/tripartite.js';
+import { integrateRecord } from '../../src/record/integrate.js';
 import { createRecord } from '../../src/record/record.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
+import { newFigures } from './new-figures.js';
 
 // An invented record: two decaying sines, 15 s at 100 samples a second.
 const record = createRecord({
@@ -25,7 +27,8 @@ const figures: Record<string, string> = {
   sd: sdFigure(spectrum, { lengthUnit: 'cm' }),
   psv: psvFigure(spectrum, { axes: 'linear' }),
   tripartite: tripartiteFigure(spectrum, { lengthUnit: 'cm' }),
-  histories: historiesFigure(record, { lengthUnit: 'cm' }),
+  histories: historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: 'cm' }),
+  ...Object.fromEntries(Object.entries(newFigures()).map(([name, figure]) => [name, figure.svg])),
 };
 
 let browser: Browser;
@@ -94,7 +97,8 @@ describe('figures in headless Chromium', () => {
       expect(counts.height).toBe(size.height);
       expect(counts.ink / counts.total).toBeGreaterThan(0.02);
       expect(counts.ink / counts.total).toBeLessThan(0.6);
-      expect(counts.coloured).toBeGreaterThan(200); // the curves are drawn in colour
+      // The curves are drawn in colour; a design spectrum alone is drawn black, as design overlays are.
+      if (name !== 'design') expect(counts.coloured).toBeGreaterThan(200);
 
       // Every text lies inside the page, and tick labels of one axis do not overlap (as laid out by the browser).
       const layout = await page.evaluate(() => {

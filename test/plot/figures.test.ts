@@ -5,6 +5,7 @@ import { historiesFigure } from '../../src/plot/histories.js';
 import { lineChart } from '../../src/plot/line-chart.js';
 import { psaFigure, psvFigure, sdFigure } from '../../src/plot/spectrum-figures.js';
 import { tripartiteFigure } from '../../src/plot/tripartite.js';
+import { integrateRecord } from '../../src/record/integrate.js';
 import { createRecord } from '../../src/record/record.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../src/units.js';
@@ -166,7 +167,10 @@ describe('time histories', () => {
     const amplitude = 0.5 * STANDARD_GRAVITY_MS2;
     const n = 801;
     const accelMS2 = Float64Array.from({ length: n }, (_, i) => amplitude * Math.sin(omega * i * dtS));
-    const doc = parseSvg(historiesFigure({ name: 'invented <sine> & "test"', dtS, accelMS2 }));
+    // The histories are given by the caller, integrated by the shared rule (src/record/integrate.ts).
+    const doc = parseSvg(
+      historiesFigure({ name: 'invented <sine> & "test"', dtS, ...integrateRecord({ accelMS2, dtS }) }),
+    );
     const peaks = [...doc.querySelectorAll('g.peak')].map((g) => Number(g.getAttribute('data-value')));
     expect(peaks).toHaveLength(3);
     expect(peaks[0]).toBeCloseTo(0.5, 3);

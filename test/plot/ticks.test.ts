@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { integrateTrapezoidal } from '../../src/plot/histories-data.js';
+import { decimatedIndices } from '../../src/plot/figure.js';
 import { wrapText } from '../../src/plot/text.js';
 import { formatLogValue, logTicks } from '../../src/plot/ticks.js';
 
@@ -33,12 +33,27 @@ describe('logTicks', () => {
   });
 });
 
-describe('integrateTrapezoidal', () => {
-  it('is exact for a linear integrand: ∫ 2t dt = t² (closed form)', () => {
-    const dt = 0.1;
-    const f = Float64Array.from({ length: 11 }, (_, i) => 2 * i * dt);
-    const out = integrateTrapezoidal(f, dt);
-    for (let i = 0; i < out.length; i++) expect(out[i]).toBeCloseTo((i * dt) ** 2, 12);
+describe('decimatedIndices', () => {
+  it('keeps the first, lowest, highest and last point of each pixel column, in order (common practice)', () => {
+    // 1000 samples of a sine over 10 columns: each column holds 100 samples.
+    const values = Float64Array.from({ length: 1000 }, (_, i) => Math.sin(i / 7) + (i === 537 ? 5 : 0));
+    const kept = decimatedIndices(
+      1000,
+      (i) => i / 100,
+      (i) => values[i],
+      () => true,
+    );
+    expect(kept.length).toBeLessThanOrEqual(40);
+    expect(kept).toEqual([...kept].sort((a, b) => a - b));
+    expect(kept).toContain(537); // the spike survives
+    for (let column = 0; column < 10; column++) {
+      const slice = Array.from(values.subarray(column * 100, column * 100 + 100));
+      const inColumn = kept.filter((i) => Math.floor(i / 100) === column).map((i) => values[i]);
+      expect(Math.max(...inColumn)).toBe(Math.max(...slice));
+      expect(Math.min(...inColumn)).toBe(Math.min(...slice));
+      expect(kept).toContain(column * 100);
+      expect(kept).toContain(column * 100 + 99);
+    }
   });
 });
 

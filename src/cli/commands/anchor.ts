@@ -9,6 +9,7 @@ import {
   parseDemandChoice,
 } from '../../anchorage/anchorage.js';
 import { anchorageToJson } from '../../anchorage/anchorage-json.js';
+import { parseAnchorRule } from '../../anchorage/bolt-group.js';
 import { psaAtPeriod, recordPsaForComponent } from '../../anchorage/elastic-demand.js';
 import { centroid, EQUIPMENT_UNITS, type Equipment, parseEquipment } from '../../anchorage/equipment.js';
 import { cautionLines } from '../../caution.js';
@@ -28,6 +29,7 @@ export interface AnchorCliOptions extends RecordCliOptions {
   format?: string;
   out?: string;
   svg?: string;
+  anchorRule?: string;
 }
 
 const collect = (value: string, previous: string[]) => [...previous, value];
@@ -53,7 +55,12 @@ export function registerAnchor(program: Command): void {
       '--demand <choice>',
       'horizontal force for the anchors: code, record or max (default: max with a motion, else code)',
     )
-    .option('--method <method>', 'oscillator step method for --record', 'newmark-average');
+    .option('--method <method>', 'oscillator step method for --record', 'newmark-average')
+    .option(
+      '--anchor-rule <rule>',
+      'overturning share: projected (M·d_i/Σd², neutral axis perpendicular to the shaking) or biaxial (general elastic)',
+      'projected',
+    );
   addRecordOptions(command);
   command
     .option('--format <format>', 'json or table (default: table on the terminal, json with --out)')
@@ -75,6 +82,7 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   const hasMotion = records.length > 0 || options.spectrum !== undefined;
   const demand = parseDemandChoice(options.demand ?? (hasMotion ? 'max' : 'code'));
   const method = parseMethod(options.method ?? 'newmark-average');
+  const anchorRule = parseAnchorRule(options.anchorRule ?? 'projected');
 
   const equipment = parseEquipment(readFileSync(options.equipment, 'utf8'), options.equipment);
   const notes: string[] = [];
@@ -102,7 +110,7 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
     }
   }
 
-  const analysis = analyseAnchorage(equipment, { elastic, demand });
+  const analysis = analyseAnchorage(equipment, { elastic, demand, anchorRule });
   analysis.assumptions.push(...notes);
   const text = format === 'json' ? formatJson(anchorageToJson(analysis)) : anchorTable(analysis);
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
@@ -202,10 +210,14 @@ function planInput(analysis: AnchorageAnalysis) {
     directionDeg: a.maxTensionDirectionDeg,
     cgPlan: [l(e.cgPlanM[0]), l(e.cgPlanM[1])] as [number, number],
     centroid: centroid(e.anchorsM).map(l) as [number, number],
-    notes: [
+    subtitle: [
       `Horizontal force for the anchors ${(analysis.horizontalForAnchorsKN / system.kNPerForce).toPrecision(4)} ${system.force} ` +
-        `(${analysis.governing === 'code' ? 'ASCE 7-16 §13.3.1 code force' : 'record elastic demand'}); rigid base, elastic bolt group.`,
-      'Demands only; anchor capacities are not checked.',
+        `(${analysis.governing === 'code' ? 'ASCE 7-16 §13.3.1 code force' : 'record elastic demand'}) at h_cg = ${Number(l(e.cgHeightM).toPrecision(4))} ${system.length}; W_p = ${(e.weightKN / system.kNPerForce).toPrecision(4)} ${system.force}`,
+      `Method: rigid base, elastic bolt group, anchor rule ${a.rule}${a.rule === 'projected' ? ' (T_i = M·d_i/Σd_j² − D/n, neutral axis perpendicular to the shaking)' : ' (general elastic solution, moment equilibrium about both plan axes)'}`,
+    ],
+    notes: [
+      'Each anchor shows its own worst tension over every direction of shaking (0–360°), not the tensions of one direction; the arrow is the direction of the horizontal force on the equipment that gives the governing anchor its worst tension, degrees counter-clockwise from +x.',
+      'Demands only: anchor capacities (steel, concrete breakout, pull-out, edge distances, embedment) are not checked.',
     ],
   };
 }
@@ -253,8 +265,9 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
   out.push('');
   const a = analysis.anchors;
   out.push(
-    'anchors (worst over every direction of shaking; direction of the force, ° counter-clockwise from +x)',
+    `anchors (rule ${a.rule}${a.rule === 'projected' ? '; --anchor-rule biaxial for the general elastic solution' : '; --anchor-rule projected, the default, is more conservative'})`,
   );
+  out.push('  worst over every direction of shaking; direction of the force, ° counter-clockwise from +x');
   out.push(
     `  ${'#'.padStart(3)} ${`x ${system.length}`.padStart(9)} ${`y ${system.length}`.padStart(9)} ${`tension ${unit}`.padStart(13)} ${'at °'.padStart(7)} ${`shear ${unit}`.padStart(11)} ${'at °'.padStart(7)}`,
   );

@@ -1,3 +1,5 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
@@ -5,6 +7,7 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel } from '../../output/spectrum-csv.js';
 import { formatJson } from '../../output/spectrum-json.js';
+import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping, type DampingComparison } from '../../spectrum/damping.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
@@ -14,6 +17,7 @@ import { addGridOptions, type GridCliOptions, gridFromOptions } from './spectrum
 export interface DampingCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
   out?: string;
+  svg?: string;
 }
 
 /** Damping ratios compared when --damping is not given. */
@@ -34,6 +38,7 @@ export function registerDamping(program: Command): void {
   command
     .option('--format <format>', 'json or csv (default: a table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
+    .option('--svg <dir>', 'also draw the spectra and their ratios to 5%, DIR/damping.svg')
     .action(async (source: string, options: DampingCliOptions) => {
       const fromDefault = command.getOptionValueSource('damping') === 'default';
       await runDamping(source, { ...options, damping: fromDefault ? DEFAULT_DAMPING_LIST : options.damping });
@@ -55,6 +60,15 @@ export async function runDamping(source: string, options: DampingCliOptions): Pr
       : format === 'csv'
         ? dampingToCsv(spectrum, comparison)
         : dampingTable(spectrum, comparison, added);
+  if (options.svg !== undefined) {
+    mkdirSync(options.svg, { recursive: true });
+    const figure = dampingFigure({
+      record: spectrum.record,
+      methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
+      comparison,
+    });
+    writeFileAtomic(join(options.svg, 'damping.svg'), figure, [source]);
+  }
   if (options.out !== undefined) writeFileAtomic(options.out, text, [source]);
   else process.stdout.write(text);
 }

@@ -1,9 +1,12 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
 import { defaultPeriodsS, parsePeriods } from '../../oscillator/grid.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { formatJson } from '../../output/spectrum-json.js';
+import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../target-options.js';
 
@@ -11,6 +14,7 @@ export interface DesignCommandOptions extends DesignCliOptions {
   periods?: string;
   format?: string;
   out?: string;
+  svg?: string;
 }
 
 export function registerDesign(program: Command): void {
@@ -25,6 +29,7 @@ export function registerDesign(program: Command): void {
     )
     .option('--format <format>', 'json or csv (default: a table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
+    .option('--svg <dir>', 'also draw the spectrum, DIR/design.svg (PSA against T, log–log)')
     .action((options: DesignCommandOptions) => runDesign(options));
 }
 
@@ -40,8 +45,13 @@ export function runDesign(options: DesignCommandOptions): void {
       : format === 'csv'
         ? designToCsv(spectrum, periodsS, psaG)
         : designTable(spectrum, periodsS, psaG);
+  const inputs = options.table === undefined ? [] : [options.table];
+  if (options.svg !== undefined) {
+    mkdirSync(options.svg, { recursive: true });
+    writeFileAtomic(join(options.svg, 'design.svg'), designFigure({ spectrum, periodsS, psaG }), inputs);
+  }
   if (options.out !== undefined) {
-    writeFileAtomic(options.out, text, options.table === undefined ? [] : [options.table]);
+    writeFileAtomic(options.out, text, inputs);
   } else {
     process.stdout.write(text);
   }

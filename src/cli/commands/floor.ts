@@ -1,3 +1,5 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
@@ -6,6 +8,7 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
+import { floorFigure } from '../../plot/floor-figure.js';
 import { type BuildingMode, type FloorSpectra, floorSpectrum } from '../../spectrum/floor.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
@@ -18,6 +21,7 @@ export interface FloorCliOptions extends SpectrumCliOptions {
   buildingDamping?: string;
   modalFactor?: string;
   broaden?: string | boolean;
+  svg?: string;
 }
 
 export function registerFloor(program: Command): void {
@@ -37,6 +41,7 @@ export function registerFloor(program: Command): void {
     .option('--broaden [fraction]', 'broaden peaks over [T(1−b), T/(1−b)], b = 0.15 unless given')
     .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
+    .option('--svg <dir>', 'also draw the floor spectrum against the ground spectrum, DIR/floor.svg')
     .action(async (source: string, options: FloorCliOptions) => {
       await runFloor(source, options);
     });
@@ -143,6 +148,18 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
     text = spectrumToCsv(result.spectrum, { lengthUnit: 'm' });
   } else {
     text = floorTable(result.spectrum, groundSpectrum, building, assumptions);
+  }
+  if (options.svg !== undefined) {
+    mkdirSync(options.svg, { recursive: true });
+    const figure = floorFigure({
+      ground: groundSpectrum,
+      floor: result.spectrum,
+      unbroadened: result.broadening === null ? undefined : result.unbroadened,
+      broadening: result.broadening,
+      building,
+      methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
+    });
+    writeFileAtomic(join(options.svg, 'floor.svg'), figure, [source]);
   }
   if (options.out !== undefined) writeFileAtomic(options.out, text, [source]);
   else process.stdout.write(text);

@@ -6,13 +6,15 @@ import { usageError } from '../../errors.js';
 import { logSpaced } from '../../oscillator/grid.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { formatJson } from '../../output/spectrum-json.js';
-import { fourierSvg } from '../../plot/fourier.js';
-import { husidSvg } from '../../plot/husid.js';
+import { fourierFigure } from '../../plot/fourier.js';
+import { historiesFigure } from '../../plot/histories.js';
+import { husidFigure } from '../../plot/husid.js';
 import {
   fourierAmplitudeSpectrum,
   KONNO_OHMACHI_DEFAULT_B,
   konnoOhmachiSmooth,
 } from '../../record/fourier.js';
+import { integrateRecord } from '../../record/integrate.js';
 import { type GroundMotionMeasures, groundMotionMeasures, husidCurve } from '../../record/measures.js';
 import { PROCESSING_ORDER } from '../../record/process.js';
 import type { GroundRecord } from '../../record/record.js';
@@ -51,7 +53,7 @@ export function registerInfo(program: Command): void {
   command
     .option('--format <format>', 'table or json (default: table on the terminal, json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
-    .option('--svg <folder>', 'also draw husid.svg and fourier.svg into this folder')
+    .option('--svg <folder>', 'also draw histories.svg, husid.svg and fourier.svg into this folder')
     .option('--bracket-threshold <g>', 'threshold of the bracketed duration, g', '0.05')
     .option(
       '--smoothing <b>',
@@ -181,7 +183,7 @@ function fixed(value: number, digits: number): string {
   return value.toFixed(digits);
 }
 
-/** husid.svg and fourier.svg; the time histories figure belongs to the shared plot renderers. */
+/** histories.svg, husid.svg and fourier.svg, each written atomically. */
 function writeFigures(
   folder: string,
   record: GroundRecord,
@@ -190,19 +192,29 @@ function writeFigures(
   protect: string[],
 ): void {
   mkdirSync(folder, { recursive: true });
-  const notes = record.processing.map((step) => `processed: ${step.description}`);
-  if (notes.length === 0) notes.push('processed: nothing (as read)');
-  const husid = husidCurve(record.accelMS2, record.dtS);
+  const about = { name: record.name, source: record.source, processing: record.processing };
+  writeFileAtomic(
+    join(folder, 'histories.svg'),
+    historiesFigure(
+      {
+        ...about,
+        dtS: record.dtS,
+        ...integrateRecord(record),
+        integrationDescription: INFO_METHODS.integration,
+      },
+      { lengthUnit: 'm' },
+    ),
+    protect,
+  );
   writeFileAtomic(
     join(folder, 'husid.svg'),
-    husidSvg({
-      recordName: record.name,
+    husidFigure({
+      ...about,
       dtS: record.dtS,
-      husid,
+      husid: husidCurve(record.accelMS2, record.dtS),
       t5S: m.t5S,
       t75S: m.t75S,
       t95S: m.t95S,
-      notes,
     }),
     protect,
   );
@@ -224,12 +236,12 @@ function writeFigures(
   }
   writeFileAtomic(
     join(folder, 'fourier.svg'),
-    fourierSvg({
-      recordName: record.name,
+    fourierFigure({
+      ...about,
       frequenciesHz: fas.frequenciesHz,
       amplitudeMS: fas.amplitudeMS,
       ...smoothed,
-      notes: [`FFT of ${fas.transformLength} points (zero-padded), amplitude = Δt·|DFT|`, ...notes],
+      methodDescription: `FFT of ${fas.transformLength} points (zero-padded), amplitude = Δt·|DFT|`,
     }),
     protect,
   );

@@ -1,3 +1,5 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
@@ -5,6 +7,7 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel } from '../../output/spectrum-csv.js';
 import { formatJson } from '../../output/spectrum-json.js';
+import { rotdFigure } from '../../plot/rotd-figure.js';
 import { type RotDSpectra, rotDSpectra } from '../../spectrum/rotd.js';
 import type { SpectrumRecordInfo } from '../../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
@@ -16,6 +19,7 @@ export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
   out?: string;
   angleStep?: string;
+  svg?: string;
 }
 
 export function registerRotD(program: Command): void {
@@ -30,6 +34,7 @@ export function registerRotD(program: Command): void {
     .option('--angle-step <degrees>', 'rotation step over 0–180°, at most 1° and a divisor of 180', '1')
     .option('--format <format>', 'json or csv (default: a table on the terminal, or json with --out)')
     .option('--out <path>', 'write to this file instead of standard output')
+    .option('--svg <dir>', 'also draw RotD50, RotD100 and the geometric mean, DIR/rotd.svg')
     .action(async (first: string, second: string, options: RotDCliOptions) => {
       await runRotD(first, second, options);
     });
@@ -51,6 +56,11 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
       : format === 'csv'
         ? rotdToCsv(spectra)
         : rotdTable(spectra);
+  if (options.svg !== undefined) {
+    mkdirSync(options.svg, { recursive: true });
+    const figure = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] });
+    writeFileAtomic(join(options.svg, 'rotd.svg'), figure, [first, second]);
+  }
   if (options.out !== undefined) writeFileAtomic(options.out, text, [first, second]);
   else process.stdout.write(text);
 }

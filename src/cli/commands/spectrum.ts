@@ -16,6 +16,7 @@ import {
   sdFigure,
   tripartiteFigure,
 } from '../../plot/index.js';
+import { integrateRecord } from '../../record/integrate.js';
 import type { GroundRecord } from '../../record/record.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
@@ -149,7 +150,10 @@ function writeFigures(
     ['tripartite.svg', tripartiteFigure(spectrum, shared)],
   ];
   if (options.histories) {
-    files.push(['histories.svg', historiesFigure(record, { lengthUnit: figure.lengthUnit })]);
+    files.push([
+      'histories.svg',
+      historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: figure.lengthUnit }),
+    ]);
   }
   for (const [name, text] of files) writeFileAtomic(join(folder, name), text, [source]);
 }

@@ -101,7 +101,7 @@ describe('quakesweep info', () => {
     expect(result.stderr).toMatch(/^quakesweep: .*Nyquist frequency 50 Hz.*\n$/);
   });
 
-  it('--svg writes husid.svg and fourier.svg with escaped text and the caution', async () => {
+  it('--svg writes histories.svg, husid.svg and fourier.svg with escaped text and the caution', async () => {
     const svgFolder = join(folder, 'figures');
     const result = await run([
       'info',
@@ -118,9 +118,10 @@ describe('quakesweep info', () => {
       'json',
     ]);
     expect(result.code).toBe(0);
-    for (const file of ['husid.svg', 'fourier.svg']) {
+    for (const file of ['histories.svg', 'husid.svg', 'fourier.svg']) {
       const svg = readFileSync(join(svgFolder, file), 'utf8');
-      expect(svg).toContain('site &lt;A&gt; &amp; &quot;B&quot;');
+      // < and & must be escaped in character data; a quote need not be (XML 1.0 §2.4).
+      expect(svg).toContain('site &lt;A&gt; &amp; "B"');
       expect(svg).not.toContain('<A>');
       expect(svg).toContain('Preliminary engineering aid only.');
     }

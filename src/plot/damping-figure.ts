@@ -1,0 +1,204 @@
+import type { DampingComparison } from '../spectrum/damping.js';
+import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
+import { STANDARD_GRAVITY_MS2 } from '../units.js';
+import { type PanelContext, type PanelSpec, renderFigure, type Series } from './figure.js';
+import { seriesStyle, TEXT_COLOUR } from './styles.js';
+import { formatValue, percentLabel } from './text.js';
+
+export interface DampingFigureInput {
+  record: SpectrumRecordInfo;
+  /** How the oscillators were solved, one line. */
+  methodDescription: string;
+  comparison: DampingComparison;
+}
+
+/** Line styles of the published ratios: one per source, grey, so the data curves keep the colours. */
+const REFERENCE_STYLES = {
+  ec8: { color: '#444444', dash: 'none', widthPx: 0.9 },
+  acceleration: { color: '#444444', dash: '6 3', widthPx: 0.9 },
+  velocity: { color: '#444444', dash: '2 2', widthPx: 0.9 },
+  displacement: { color: '#444444', dash: '8 2 2 2', widthPx: 0.9 },
+} as const;
+
+const REFERENCE_LABELS = {
+  ec8: 'EC8 η',
+  acceleration: 'NH acc.',
+  velocity: 'NH vel.',
+  displacement: 'NH disp.',
+} as const;
+
+type ReferenceKind = keyof typeof REFERENCE_STYLES;
+
+/**
+ * The record's PSA at each damping ratio (top) and its ratio to the reference damping's PSA period
+ * by period (bottom), with the published ratios drawn as labelled horizontal lines: Eurocode 8
+ * η(ξ)/η(5%) (EN 1998-1 §3.2.2.2, Eq. 3.6) and the Newmark–Hall (1982) median amplification
+ * factors for the acceleration, velocity and displacement regions, each at ξ over at 5%.
+ */
+export function dampingFigure(input: DampingFigureInput): string {
+  const { comparison, record } = input;
+  const periods = comparison.periodsS;
+  const positive = Array.from(periods).filter((t) => t > 0);
+  const tLow = Math.min(...positive);
+  const tHigh = Math.max(...positive);
+  const colourOf = (damping: number) =>
+    seriesStyle(comparison.curves.findIndex((c) => c.damping === damping)).color;
+  const others = comparison.curves.filter((c) => Math.abs(c.damping - comparison.referenceDamping) > 1e-12);
+  const psaSeries: Series[] = comparison.curves.map((curve, i) => ({
+    label: `ζ = ${percentLabel(curve.damping)}`,
+    x: periods,
+    y: Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
+    style: seriesStyle(i),
+  }));
+  const ratioSeries: Series[] = comparison.curves.map((curve, i) => ({
+    label: `ζ = ${percentLabel(curve.damping)}`,
+    x: periods,
+    y: curve.ratio,
+    style: seriesStyle(i),
+    legend: false,
+  }));
+  const references: { kind: ReferenceKind; damping: number; value: number }[] = [];
+  for (const curve of others) {
+    const nh = curve.published.newmarkHall;
+    references.push({ kind: 'ec8', damping: curve.damping, value: curve.published.ec8Eta });
+    for (const kind of ['acceleration', 'velocity', 'displacement'] as const) {
+      const value = nh[kind];
+      if (value !== null) references.push({ kind, damping: curve.damping, value });
+    }
+  }
+  const seen = new Set<ReferenceKind>();
+  // Each published line in the colour of its damping ratio; the legend shows the dash of each source.
+  const referenceSeries: Series[] = references.map((r) => {
+    seen.add(r.kind);
+    return {
+      label: LEGEND_LABELS[r.kind],
+      x: [tLow, tHigh],
+      y: [r.value, r.value],
+      style: { ...REFERENCE_STYLES[r.kind], color: colourOf(r.damping) },
+      legend: false,
+      kind: 'reference',
+    };
+  });
+  const legendSamples: Series[] = (Object.keys(REFERENCE_STYLES) as ReferenceKind[])
+    .filter((kind) => seen.has(kind))
+    .map((kind) => ({
+      label: LEGEND_LABELS[kind],
+      x: [],
+      y: [],
+      style: REFERENCE_STYLES[kind],
+      kind: 'legend-only',
+    }));
+  let low = 1;
+  let high = 1;
+  for (const s of [...ratioSeries, ...referenceSeries]) {
+    for (let i = 0; i < s.x.length; i++) {
+      if (s.x[i] > 0 && Number.isFinite(s.y[i])) {
+        low = Math.min(low, s.y[i]);
+        high = Math.max(high, s.y[i]);
+      }
+    }
+  }
+  const pad = 0.06 * (high - low || 1);
+  const ratioDomain: [number, number] = [Math.max(0, low - pad), high + pad];
+  const panels: PanelSpec[] = [
+    {
+      heightPx: 250,
+      x: { title: 'Period T (s)' },
+      y: { title: 'PSA (g)' },
+      series: psaSeries,
+      xLabels: false,
+    },
+    {
+      heightPx: 230,
+      gapAbovePx: 16,
+      x: { title: 'Period T (s)' },
+      y: {
+        title: `PSA(ζ) / PSA(${percentLabel(comparison.referenceDamping)})`,
+        scale: 'linear',
+        domain: ratioDomain,
+      },
+      series: [...referenceSeries, ...ratioSeries, ...legendSamples],
+      overlay: (context) => labelReferences(context, references, colourOf),
+    },
+  ];
+  const subtitle = [
+    `Record: ${record.name} (${record.source}); ${record.npts} samples at Δt = ${record.dtS} s; PGA = ${formatValue(record.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
+    ...record.processing.map((step) => `Processed: ${step.description}`),
+    `Method: ${input.methodDescription}; damping ζ = ${comparison.curves.map((c) => percentLabel(c.damping)).join(', ')}`,
+  ];
+  const notes = [
+    `Bottom: the record's PSA at each damping ratio divided by its PSA at ${percentLabel(comparison.referenceDamping)}, period by period. Thin horizontal lines, in the colour of their damping ratio and dashed by source: the published ratios for that damping, labelled at the right.`,
+    'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
+  ];
+  if (Array.from(periods).includes(0)) {
+    notes.push(
+      'T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there every ratio is 1).',
+    );
+  }
+  return renderFigure({
+    title: 'Damping comparison: PSA and its ratio to 5% damping',
+    subtitle,
+    panels,
+    legendTitle: 'Damping:',
+    rightMarginPx: 104,
+    notes,
+  });
+}
+
+const LEGEND_LABELS: Readonly<Record<ReferenceKind, string>> = {
+  ec8: 'EC8 η ratio',
+  acceleration: 'Newmark–Hall acc.',
+  velocity: 'Newmark–Hall vel.',
+  displacement: 'Newmark–Hall disp.',
+};
+
+const LABEL_PX = 8.5;
+
+/** Labels at the right end of the reference lines, pushed apart vertically so none overlap. */
+function labelReferences(
+  context: PanelContext,
+  references: readonly { kind: ReferenceKind; damping: number; value: number }[],
+  colourOf: (damping: number) => string,
+): void {
+  const { doc, group, y, plot } = context;
+  const items = references
+    .map((r) => ({
+      ...r,
+      at: y(r.value),
+      text: `${percentLabel(r.damping)}: ${REFERENCE_LABELS[r.kind]} ${r.value.toFixed(2)}`,
+    }))
+    .sort((a, b) => a.at - b.at);
+  const gap = LABEL_PX + 1.5;
+  const placed = items.map((item) => ({ ...item, textY: item.at }));
+  for (let i = 1; i < placed.length; i++) {
+    placed[i].textY = Math.max(placed[i].textY, placed[i - 1].textY + gap);
+  }
+  const bottom = plot.top + plot.height + 20;
+  const overflow = placed.length > 0 ? placed[placed.length - 1].textY - bottom : 0;
+  if (overflow > 0) {
+    for (const p of placed) p.textY -= overflow;
+    for (let i = placed.length - 2; i >= 0; i--)
+      placed[i].textY = Math.min(placed[i].textY, placed[i + 1].textY - gap);
+  }
+  const labels = doc.element(group, 'g', {
+    class: 'reference-labels',
+    'font-size': LABEL_PX,
+    fill: TEXT_COLOUR,
+  });
+  // Outside the frame on the right, each joined to its line by a short leader.
+  const right = plot.left + plot.width;
+  for (const p of placed) {
+    doc.element(labels, 'path', {
+      d: `M${right},${p.at}L${right + 6},${p.textY}`,
+      stroke: colourOf(p.damping),
+      'stroke-width': 0.7,
+      fill: 'none',
+    });
+    doc.text(labels, p.text, {
+      x: right + 8,
+      y: p.textY + LABEL_PX * 0.35,
+      fill: colourOf(p.damping),
+      'data-value': p.value,
+    });
+  }
+}

@@ -1,0 +1,73 @@
+import type { DesignSpectrum } from '../spectrum/design.js';
+import { lineChart } from './line-chart.js';
+import { overlayStyle } from './styles.js';
+import { formatValue } from './text.js';
+
+const CODE_LABELS: Readonly<Record<DesignSpectrum['code'], string>> = {
+  'asce7-16': 'ASCE/SEI 7-16 design spectrum',
+  ec8: 'Eurocode 8 elastic spectrum',
+  table: 'tabulated design spectrum',
+};
+
+export interface DesignFigureInput {
+  spectrum: DesignSpectrum;
+  /** The periods the spectrum was evaluated at, s. */
+  periodsS: ArrayLike<number>;
+  /** PSA at those periods, g. */
+  psaG: ArrayLike<number>;
+}
+
+/**
+ * A code design spectrum, PSA (g) against period on log–log axes, drawn as the reference curves
+ * are drawn over record spectra. T = 0 cannot sit on a log axis: it is left off and its value stated.
+ */
+export function designFigure(input: DesignFigureInput): string {
+  const { spectrum } = input;
+  const notes: string[] = [];
+  const zero = Array.from(input.periodsS).indexOf(0);
+  if (zero >= 0) {
+    notes.push(
+      `T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there PSA = ${formatValue(input.psaG[zero])} g).`,
+    );
+  }
+  notes.push(
+    'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',
+  );
+  const drawn = densified(input);
+  const damping =
+    spectrum.damping === undefined ? 'not stated' : `${Number((spectrum.damping * 100).toPrecision(6))}%`;
+  return lineChart({
+    title: 'Design spectrum, pseudo-acceleration PSA',
+    subtitle: [`Spectrum: ${spectrum.description}`, `Damping: ${damping}`],
+    x: { title: 'Period T (s)' },
+    y: { title: 'Pseudo-acceleration PSA (g)' },
+    axes: 'log',
+    series: [
+      {
+        label: CODE_LABELS[spectrum.code],
+        x: drawn.periodsS,
+        y: drawn.psaG,
+        style: overlayStyle(0),
+        kind: 'curve',
+      },
+    ],
+    notes,
+  });
+}
+
+/**
+ * The curve to draw: a code spectrum is a function, so it is drawn at the periods asked for plus
+ * 400 log-spaced ones over the same range, which keeps its corners sharp; a table is drawn as given.
+ */
+function densified(input: DesignFigureInput): { periodsS: number[]; psaG: number[] } {
+  const given = Array.from(input.periodsS);
+  const positive = given.filter((t) => t > 0);
+  if (input.spectrum.code === 'table' || positive.length < 2) {
+    return { periodsS: given, psaG: Array.from(input.psaG) };
+  }
+  const low = Math.min(...positive);
+  const high = Math.max(...positive);
+  const extra = Array.from({ length: 400 }, (_, i) => low * (high / low) ** (i / 399));
+  const periodsS = [...new Set([...positive, ...extra])].sort((a, b) => a - b);
+  return { periodsS, psaG: periodsS.map((t) => input.spectrum.psaG(t)) };
+}

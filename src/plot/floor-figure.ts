@@ -1,0 +1,110 @@
+import type { Spectrum } from '../spectrum/spectrum.js';
+import { STANDARD_GRAVITY_MS2 } from '../units.js';
+import type { PanelContext, Series } from './figure.js';
+import { lineChart } from './line-chart.js';
+import { TEXT_COLOUR } from './styles.js';
+import { formatValue, percentLabel } from './text.js';
+
+export interface FloorFigureInput {
+  /** The ground record's spectrum. */
+  ground: Spectrum;
+  /** The floor spectrum as it is reported (broadened when asked). */
+  floor: Spectrum;
+  /** The floor spectrum before broadening, when it was broadened. */
+  unbroadened?: Spectrum;
+  /** The broadening fraction b, when broadened. */
+  broadening?: number | null;
+  building: { periodS: number; damping: number; modalFactor: number };
+  methodDescription: string;
+}
+
+const DASHES = ['none', '7 3', '2 2.5', '9 3 2 3'];
+
+/**
+ * The in-structure (floor) PSA spectrum against the ground spectrum it came from, and the floor
+ * spectrum before peak broadening when it was broadened; log–log, with the building period marked.
+ */
+export function floorFigure(input: FloorFigureInput): string {
+  const { ground, floor } = input;
+  const many = floor.curves.length > 1;
+  const broadened = input.unbroadened !== undefined && input.broadening != null;
+  const suffix = (damping: number) => (many ? `, ζ = ${percentLabel(damping)}` : '');
+  const series: Series[] = [];
+  floor.curves.forEach((curve, d) => {
+    const dash = DASHES[d % DASHES.length];
+    series.push({
+      label: `${broadened ? 'floor, broadened' : 'floor'}${suffix(curve.damping)}`,
+      x: floor.periodsS,
+      y: Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
+      style: { color: '#D55E00', dash, widthPx: 2 },
+    });
+    if (broadened && input.unbroadened !== undefined) {
+      series.push({
+        label: `floor, not broadened${suffix(curve.damping)}`,
+        x: input.unbroadened.periodsS,
+        y: Array.from(input.unbroadened.curves[d].psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
+        style: { color: '#A8558A', dash: d === 0 ? '3 2' : dash, widthPx: 1.2 },
+      });
+    }
+    series.push({
+      label: `ground${suffix(curve.damping)}`,
+      x: ground.periodsS,
+      y: Array.from(ground.curves[d].psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
+      style: { color: '#0072B2', dash, widthPx: 1.4 },
+    });
+  });
+  const b = input.building;
+  const r = ground.record;
+  const subtitle = [
+    `Ground record: ${r.name} (${r.source}); ${r.npts} samples at Δt = ${r.dtS} s; PGA = ${formatValue(r.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
+    ...r.processing.map((step) => `Processed: ${step.description}`),
+    `Building, one mode: T_b = ${b.periodS} s, ζ_b = ${percentLabel(b.damping)}, Γφ = ${b.modalFactor}; floor PGA = ${formatValue(floor.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
+    `Method: ${input.methodDescription}; component damping ζ = ${floor.curves.map((c) => percentLabel(c.damping)).join(', ')}`,
+  ];
+  const notes = [
+    "Floor absolute acceleration a_g + Γφ·q'' of the building's fundamental mode; higher modes, soil–structure interaction, nonlinear building response and the equipment's feedback on the floor are not represented.",
+    broadened
+      ? `Peaks broadened: the value at T is the largest over [T(1−b), T/(1−b)], b = ${input.broadening} (US NRC Regulatory Guide 1.122, from memory).`
+      : 'Peaks not broadened.',
+  ];
+  if (Array.from(floor.periodsS).includes(0)) {
+    notes.push(
+      'T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there PSA is the peak acceleration, the floor and ground PGA given above).',
+    );
+  }
+  return lineChart({
+    title: 'Floor response spectrum against the ground spectrum, PSA',
+    subtitle,
+    x: { title: 'Period T (s)' },
+    y: { title: 'Pseudo-acceleration PSA (g)' },
+    axes: 'log',
+    series,
+    notes,
+    underlay: (context) => markBuildingPeriod(context, b.periodS),
+  });
+}
+
+function markBuildingPeriod(context: PanelContext, periodS: number): void {
+  const { doc, group, x, plot, xDomain } = context;
+  if (!(periodS >= xDomain[0] && periodS <= xDomain[1])) return;
+  const px = x(periodS);
+  const mark = doc.element(group, 'g', { class: 'building-period', 'data-period-s': periodS });
+  doc.element(mark, 'line', {
+    x1: px,
+    x2: px,
+    y1: plot.top,
+    y2: plot.top + plot.height,
+    stroke: '#777777',
+    'stroke-width': 0.9,
+    'stroke-dasharray': '1 3',
+  });
+  doc.text(mark, `T_b = ${periodS} s`, {
+    x: px + 4,
+    y: plot.top + 12,
+    'font-size': 9,
+    fill: TEXT_COLOUR,
+    stroke: '#ffffff',
+    'stroke-width': 2.5,
+    'paint-order': 'stroke',
+  });
+}

@@ -1,0 +1,120 @@
+import { logSpaced } from '../../src/oscillator/grid.js';
+import { anchorPlanSvg } from '../../src/plot/anchor-plan.js';
+import { dampingFigure } from '../../src/plot/damping-figure.js';
+import { designFigure } from '../../src/plot/design-figure.js';
+import { floorFigure } from '../../src/plot/floor-figure.js';
+import { fourierFigure } from '../../src/plot/fourier.js';
+import { historiesFigure } from '../../src/plot/histories.js';
+import { husidFigure } from '../../src/plot/husid.js';
+import { rotdFigure } from '../../src/plot/rotd-figure.js';
+import { fourierAmplitudeSpectrum } from '../../src/record/fourier.js';
+import { integrateRecord } from '../../src/record/integrate.js';
+import { groundMotionMeasures, husidCurve } from '../../src/record/measures.js';
+import { createRecord } from '../../src/record/record.js';
+import { compareDamping } from '../../src/spectrum/damping.js';
+import { asce716Spectrum, designPsaG } from '../../src/spectrum/design.js';
+import { floorSpectrum } from '../../src/spectrum/floor.js';
+import { rotDSpectra } from '../../src/spectrum/rotd.js';
+import { responseSpectrum } from '../../src/spectrum/spectrum.js';
+
+/** A name with every character XML escapes. */
+export const NASTY = `yard <7> & "east" 'bay' (invented)`;
+
+/** An invented record: two decaying sines, `seconds` long at 100 samples a second. */
+export function inventedRecord(seconds = 15, phase = 0) {
+  return createRecord({
+    name: NASTY,
+    dtS: 0.01,
+    accelMS2: Float64Array.from({ length: Math.round(seconds * 100) }, (_, i) => {
+      const t = i * 0.01;
+      return (
+        Math.exp(-t / 4) * (2 * Math.sin(2 * Math.PI * 1.2 * t + phase) + 0.8 * Math.sin(2 * Math.PI * 6 * t))
+      );
+    }),
+  });
+}
+
+/** Every figure added with the design, damping, RotD, floor, info and anchor commands, drawn from invented data. */
+export function newFigures(): Record<string, { svg: string; curves: number }> {
+  const record = inventedRecord();
+  const grid = { periodsS: [0, ...logSpaced(0.02, 5, 40)], dampings: [0.02, 0.05, 0.1] };
+  const spectrum = responseSpectrum(record, grid);
+  const design = asce716Spectrum({ sdsG: 1, sd1G: 0.6, tlS: 8 });
+  const designPeriods = Float64Array.from([0, ...logSpaced(0.01, 10, 60)]);
+  const rotd = rotDSpectra(record, inventedRecord(15, 1), { periodsS: grid.periodsS, dampings: [0.05] });
+  const floorGrid = { periodsS: grid.periodsS, dampings: [0.05] };
+  const floor = floorSpectrum(record, { periodS: 0.5, damping: 0.05, modalFactor: 1.4 }, floorGrid, 0.15);
+  const measures = groundMotionMeasures(record, { bracketThresholdMS2: 0.5 });
+  const fas = fourierAmplitudeSpectrum(record.accelMS2, record.dtS);
+  return {
+    design: {
+      svg: designFigure({
+        spectrum: design,
+        periodsS: designPeriods,
+        psaG: designPsaG(design, designPeriods),
+      }),
+      curves: 1,
+    },
+    damping: {
+      svg: dampingFigure({
+        record: spectrum.record,
+        methodDescription: 'test',
+        comparison: compareDamping(spectrum),
+      }),
+      curves: 6,
+    },
+    rotd: { svg: rotdFigure({ spectra: rotd, methodDescription: 'test' }), curves: 3 },
+    floor: {
+      svg: floorFigure({
+        ground: responseSpectrum(record, floorGrid),
+        floor: floor.spectrum,
+        unbroadened: floor.unbroadened,
+        broadening: 0.15,
+        building: { periodS: 0.5, damping: 0.05, modalFactor: 1.4 },
+        methodDescription: 'test',
+      }),
+      curves: 3,
+    },
+    histories: { svg: historiesFigure({ ...record, ...integrateRecord(record) }), curves: 3 },
+    husid: {
+      svg: husidFigure({
+        name: NASTY,
+        dtS: record.dtS,
+        husid: husidCurve(record.accelMS2, record.dtS),
+        t5S: measures.t5S,
+        t75S: measures.t75S,
+        t95S: measures.t95S,
+      }),
+      curves: 1,
+    },
+    fourier: {
+      svg: fourierFigure({
+        name: NASTY,
+        frequenciesHz: fas.frequenciesHz,
+        amplitudeMS: fas.amplitudeMS,
+        smoothedHz: fas.frequenciesHz.slice(1, 50),
+        smoothedMS: fas.amplitudeMS.slice(1, 50),
+      }),
+      curves: 2,
+    },
+    'anchor-plan': {
+      svg: anchorPlanSvg({
+        title: `${NASTY}: anchor plan`,
+        forceUnit: 'kN',
+        lengthUnit: 'm',
+        anchors: [
+          { x: -0.8, y: -0.5, tension: 15.48 },
+          { x: 0.8, y: -0.5, tension: 15.48 },
+          { x: 0.8, y: 0.5, tension: 15.48 },
+          { x: -0.8, y: 0.5, tension: 15.48 },
+        ],
+        governingAnchor: 0,
+        directionDeg: 71.27,
+        cgPlan: [0, 0],
+        centroid: [0, 0],
+        subtitle: ['invented'],
+      }),
+      curves: 4,
+    },
+  };
+}
