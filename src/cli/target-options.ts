@@ -191,7 +191,7 @@ export function applyTarget(
     csv: (text) => csvWithTarget(text, target, targetG, scaling, applied),
     table: (text) => `${text}\n${scalingLines(target, scaling, curve.damping, applied).join('\n')}\n`,
     overlay: {
-      label: `target: ${target.description.split(": ")[0]}`,
+      label: `target: ${target.description.split(': ')[0]}`,
       periodsS: Array.from(spectrum.periodsS).filter((_, i) => targetG[i] !== null),
       psaG: targetG.filter((value): value is number => value !== null),
     },
