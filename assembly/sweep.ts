@@ -62,18 +62,25 @@ function refineLane(
       const qb = u;
       const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
       const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-      if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-        const disc = cb * cb - 4 * ca * m0;
-        if (disc >= 0) {
-          const root = Math.sqrt(disc);
-          const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-          const ta = qq / ca;
-          const tb = qq !== 0 ? m0 / qq : -1;
-          pu = hermiteAt(pu, qa, qb, m0, m1, ta);
-          pu = hermiteAt(pu, qa, qb, m0, m1, tb);
+      // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
+      // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
+      // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
+      // (0, 1) (or at its ends, where H is the end value already counted), and the square root
+      // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
+      if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
+        if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
+          const disc = cb * cb - 4 * ca * m0;
+          if (disc >= 0) {
+            const root = Math.sqrt(disc);
+            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
+            const ta = qq / ca;
+            const tb = qq !== 0 ? m0 / qq : -1;
+            pu = hermiteAt(pu, qa, qb, m0, m1, ta);
+            pu = hermiteAt(pu, qa, qb, m0, m1, tb);
+          }
+        } else if (cb !== 0) {
+          pu = hermiteAt(pu, qa, qb, m0, m1, -m0 / cb);
         }
-      } else if (cb !== 0) {
-        pu = hermiteAt(pu, qa, qb, m0, m1, -m0 / cb);
       }
     }
     store<f64>(pk, pu);
@@ -89,18 +96,25 @@ function refineLane(
       const qb = v;
       const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
       const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-      if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-        const disc = cb * cb - 4 * ca * m0;
-        if (disc >= 0) {
-          const root = Math.sqrt(disc);
-          const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-          const ta = qq / ca;
-          const tb = qq !== 0 ? m0 / qq : -1;
-          pv = hermiteAt(pv, qa, qb, m0, m1, ta);
-          pv = hermiteAt(pv, qa, qb, m0, m1, tb);
+      // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
+      // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
+      // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
+      // (0, 1) (or at its ends, where H is the end value already counted), and the square root
+      // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
+      if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
+        if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
+          const disc = cb * cb - 4 * ca * m0;
+          if (disc >= 0) {
+            const root = Math.sqrt(disc);
+            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
+            const ta = qq / ca;
+            const tb = qq !== 0 ? m0 / qq : -1;
+            pv = hermiteAt(pv, qa, qb, m0, m1, ta);
+            pv = hermiteAt(pv, qa, qb, m0, m1, tb);
+          }
+        } else if (cb !== 0) {
+          pv = hermiteAt(pv, qa, qb, m0, m1, -m0 / cb);
         }
-      } else if (cb !== 0) {
-        pv = hermiteAt(pv, qa, qb, m0, m1, -m0 / cb);
       }
     }
     store<f64>(pk, pv, 16);
@@ -118,18 +132,25 @@ function refineLane(
       const qb = s;
       const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
       const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-      if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-        const disc = cb * cb - 4 * ca * m0;
-        if (disc >= 0) {
-          const root = Math.sqrt(disc);
-          const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-          const ta = qq / ca;
-          const tb = qq !== 0 ? m0 / qq : -1;
-          ps = hermiteAt(ps, qa, qb, m0, m1, ta);
-          ps = hermiteAt(ps, qa, qb, m0, m1, tb);
+      // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
+      // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
+      // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
+      // (0, 1) (or at its ends, where H is the end value already counted), and the square root
+      // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
+      if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
+        if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
+          const disc = cb * cb - 4 * ca * m0;
+          if (disc >= 0) {
+            const root = Math.sqrt(disc);
+            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
+            const ta = qq / ca;
+            const tb = qq !== 0 ? m0 / qq : -1;
+            ps = hermiteAt(ps, qa, qb, m0, m1, ta);
+            ps = hermiteAt(ps, qa, qb, m0, m1, tb);
+          }
+        } else if (cb !== 0) {
+          ps = hermiteAt(ps, qa, qb, m0, m1, -m0 / cb);
         }
-      } else if (cb !== 0) {
-        ps = hermiteAt(ps, qa, qb, m0, m1, -m0 / cb);
       }
     }
     store<f64>(pk, ps, 32);

@@ -88,6 +88,12 @@ const hermite = (target, q0, q1, d0, d1) => `{
     const qb = ${q1};
     const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
     const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+    // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
+    // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
+    // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
+    // (0, 1) (or at its ends, where H is the end value already counted), and the square root
+    // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
+    if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
     if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
       const disc = cb * cb - 4 * ca * m0;
       if (disc >= 0) {
@@ -100,6 +106,7 @@ const hermite = (target, q0, q1, d0, d1) => `{
       }
     } else if (cb !== 0) {
       ${target} = hermiteAt(${target}, qa, qb, m0, m1, -m0 / cb);
+    }
     }
   }`;
 

@@ -163,13 +163,13 @@ export function storeGroup(
 }
 
 /** The kernel a sweep uses: WebAssembly SIMD where the engine has it, unless told otherwise. */
-export function resolveKernel(kernel: SweepKernel): 'wasm' | 'js' {
+export function resolveKernel(kernel: SweepKernel, simd = wasmSimdSupported()): 'wasm' | 'js' {
   if (kernel === 'js') return 'js';
   if (kernel === 'wasm') {
-    if (!wasmSimdSupported()) throw inputError('the WebAssembly SIMD kernel does not run on this engine');
+    if (!simd) throw inputError('the WebAssembly SIMD kernel does not run on this engine');
     return 'wasm';
   }
-  return wasmSimdSupported() ? 'wasm' : 'js';
+  return simd ? 'wasm' : 'js';
 }
 
 /**

@@ -37,11 +37,21 @@ const SIMD_PROBE = new Uint8Array([
 
 let simdSupported: boolean | undefined;
 
-/** Whether this engine runs WebAssembly SIMD (checked once, by validating a tiny SIMD module). */
-export function wasmSimdSupported(): boolean {
-  if (simdSupported === undefined) {
-    simdSupported = typeof WebAssembly === 'object' && WebAssembly.validate(SIMD_PROBE);
+/** Whether `validate` (WebAssembly.validate by default) accepts a SIMD module. */
+export function detectWasmSimd(
+  validate: (bytes: Uint8Array) => boolean = (bytes) =>
+    typeof WebAssembly === 'object' && WebAssembly.validate(bytes),
+): boolean {
+  try {
+    return validate(SIMD_PROBE);
+  } catch {
+    return false;
   }
+}
+
+/** Whether this engine runs WebAssembly SIMD (detected once). */
+export function wasmSimdSupported(): boolean {
+  simdSupported ??= detectWasmSimd();
   return simdSupported;
 }
 
