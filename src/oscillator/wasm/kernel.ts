@@ -4,7 +4,7 @@ import { SWEEP_WASM_BASE64 } from './binary.js';
  * A tiny module whose one function returns a v128 constant: it validates only where the engine
  * has WebAssembly 128-bit SIMD (the fixed-width SIMD proposal, WebAssembly 2.0 §4.3).
  */
-const SIMD_PROBE = new Uint8Array([
+const SIMD_PROBE: Uint8Array<ArrayBuffer> = new Uint8Array([
   0x00,
   0x61,
   0x73,
@@ -39,7 +39,7 @@ let simdSupported: boolean | undefined;
 
 /** Whether `validate` (WebAssembly.validate by default) accepts a SIMD module. */
 export function detectWasmSimd(
-  validate: (bytes: Uint8Array) => boolean = (bytes) =>
+  validate: (bytes: Uint8Array<ArrayBuffer>) => boolean = (bytes) =>
     typeof WebAssembly === 'object' && WebAssembly.validate(bytes),
 ): boolean {
   try {
