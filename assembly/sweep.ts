@@ -3,8 +3,8 @@
 // recurrence (recurrence.ts), the refinement thresholds and the cubic Hermite peak (peak.ts).
 // Compiled by scripts/build-wasm.mjs with `asc --enable simd`.
 
-/** Oscillators per pass: 4 vectors of two f64 lanes. */
-export const WIDTH: i32 = 8;
+/** Oscillators per pass: 2 vectors of two f64 lanes. */
+export const WIDTH: i32 = 4;
 
 /**
  * Layout of the packed arrays (all f64, vector-interleaved: quantity q of oscillator i is at
@@ -159,7 +159,7 @@ function refineLane(
 }
 
 /**
- * Step 8 oscillators over `steps` steps of length `h` through the ground accelerations
+ * Step 4 oscillators over `steps` steps of length `h` through the ground accelerations
  * input[0..steps] (f64 at byte address `input`), continuing from `state` and updating `peaks`.
  */
 function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state: usize, peaks: usize): void {
@@ -183,26 +183,6 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
   const vp11 = v128.load(coefficients, 336);
   const c1 = v128.load(coefficients, 352);
   const k1 = v128.load(coefficients, 368);
-  const uu2 = v128.load(coefficients, 448);
-  const uv2 = v128.load(coefficients, 464);
-  const up02 = v128.load(coefficients, 480);
-  const up12 = v128.load(coefficients, 496);
-  const vu2 = v128.load(coefficients, 512);
-  const vv2 = v128.load(coefficients, 528);
-  const vp02 = v128.load(coefficients, 544);
-  const vp12 = v128.load(coefficients, 560);
-  const c2 = v128.load(coefficients, 576);
-  const k2 = v128.load(coefficients, 592);
-  const uu3 = v128.load(coefficients, 672);
-  const uv3 = v128.load(coefficients, 688);
-  const up03 = v128.load(coefficients, 704);
-  const up13 = v128.load(coefficients, 720);
-  const vu3 = v128.load(coefficients, 736);
-  const vv3 = v128.load(coefficients, 752);
-  const vp03 = v128.load(coefficients, 768);
-  const vp13 = v128.load(coefficients, 784);
-  const c3 = v128.load(coefficients, 800);
-  const k3 = v128.load(coefficients, 816);
   let u0 = v128.load(state, 0);
   let v0 = v128.load(state, 16);
   let tu0 = v128.load(state, 32);
@@ -213,16 +193,6 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
   let tu1 = v128.load(state, 112);
   let tv1 = v128.load(state, 128);
   let ts1 = v128.load(state, 144);
-  let u2 = v128.load(state, 160);
-  let v2 = v128.load(state, 176);
-  let tu2 = v128.load(state, 192);
-  let tv2 = v128.load(state, 208);
-  let ts2 = v128.load(state, 224);
-  let u3 = v128.load(state, 240);
-  let v3 = v128.load(state, 256);
-  let tu3 = v128.load(state, 272);
-  let tv3 = v128.load(state, 288);
-  let ts3 = v128.load(state, 304);
   let pas = load<f64>(input);
   let pa = f64x2.splat(pas);
   for (let n = 1; n <= steps; n++) {
@@ -260,39 +230,7 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
       v128.or(f64x2.gt(f64x2.abs(u1), tu1), f64x2.gt(f64x2.abs(v1), tv1)),
       f64x2.gt(as1, ts1),
     );
-    const uo2 = u2;
-    const vo2 = v2;
-    u2 = f64x2.add(
-      f64x2.add(f64x2.add(f64x2.mul(uu2, uo2), f64x2.mul(uv2, vo2)), f64x2.mul(up02, pa)),
-      f64x2.mul(up12, pb),
-    );
-    v2 = f64x2.add(
-      f64x2.add(f64x2.add(f64x2.mul(vu2, uo2), f64x2.mul(vv2, vo2)), f64x2.mul(vp02, pa)),
-      f64x2.mul(vp12, pb),
-    );
-    // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as2 = f64x2.abs(f64x2.add(f64x2.mul(c2, v2), f64x2.mul(k2, u2)));
-    const m2 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u2), tu2), f64x2.gt(f64x2.abs(v2), tv2)),
-      f64x2.gt(as2, ts2),
-    );
-    const uo3 = u3;
-    const vo3 = v3;
-    u3 = f64x2.add(
-      f64x2.add(f64x2.add(f64x2.mul(uu3, uo3), f64x2.mul(uv3, vo3)), f64x2.mul(up03, pa)),
-      f64x2.mul(up13, pb),
-    );
-    v3 = f64x2.add(
-      f64x2.add(f64x2.add(f64x2.mul(vu3, uo3), f64x2.mul(vv3, vo3)), f64x2.mul(vp03, pa)),
-      f64x2.mul(vp13, pb),
-    );
-    // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as3 = f64x2.abs(f64x2.add(f64x2.mul(c3, v3), f64x2.mul(k3, u3)));
-    const m3 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u3), tu3), f64x2.gt(f64x2.abs(v3), tv3)),
-      f64x2.gt(as3, ts3),
-    );
-    if (v128.any_true(v128.or(v128.or(m0, m1), v128.or(m2, m3)))) {
+    if (v128.any_true(v128.or(m0, m1))) {
       const bits0 = i64x2.bitmask(m0);
       if (bits0 !== 0) {
         const bits = bits0;
@@ -371,84 +309,6 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
         tv1 = v128.load(t, 48);
         ts1 = v128.load(t, 64);
       }
-      const bits2 = i64x2.bitmask(m2);
-      if (bits2 !== 0) {
-        const bits = bits2;
-        const t = state + 160;
-        v128.store(t, tu2, 32);
-        v128.store(t, tv2, 48);
-        v128.store(t, ts2, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo2, 0),
-            f64x2.extract_lane(vo2, 0),
-            f64x2.extract_lane(u2, 0),
-            f64x2.extract_lane(v2, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 448,
-            t + 0,
-            peaks + 96,
-          );
-        }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo2, 1),
-            f64x2.extract_lane(vo2, 1),
-            f64x2.extract_lane(u2, 1),
-            f64x2.extract_lane(v2, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 456,
-            t + 8,
-            peaks + 104,
-          );
-        }
-        tu2 = v128.load(t, 32);
-        tv2 = v128.load(t, 48);
-        ts2 = v128.load(t, 64);
-      }
-      const bits3 = i64x2.bitmask(m3);
-      if (bits3 !== 0) {
-        const bits = bits3;
-        const t = state + 240;
-        v128.store(t, tu3, 32);
-        v128.store(t, tv3, 48);
-        v128.store(t, ts3, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo3, 0),
-            f64x2.extract_lane(vo3, 0),
-            f64x2.extract_lane(u3, 0),
-            f64x2.extract_lane(v3, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 672,
-            t + 0,
-            peaks + 144,
-          );
-        }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo3, 1),
-            f64x2.extract_lane(vo3, 1),
-            f64x2.extract_lane(u3, 1),
-            f64x2.extract_lane(v3, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 680,
-            t + 8,
-            peaks + 152,
-          );
-        }
-        tu3 = v128.load(t, 32);
-        tv3 = v128.load(t, 48);
-        ts3 = v128.load(t, 64);
-      }
     }
     pas = pbs;
     pa = pb;
@@ -463,20 +323,10 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
   v128.store(state, tu1, 112);
   v128.store(state, tv1, 128);
   v128.store(state, ts1, 144);
-  v128.store(state, u2, 160);
-  v128.store(state, v2, 176);
-  v128.store(state, tu2, 192);
-  v128.store(state, tv2, 208);
-  v128.store(state, ts2, 224);
-  v128.store(state, u3, 240);
-  v128.store(state, v3, 256);
-  v128.store(state, tu3, 272);
-  v128.store(state, tv3, 288);
-  v128.store(state, ts3, 304);
 }
 
 /**
- * Step 8 oscillators over `steps` steps of length `h` through the ground accelerations
+ * Step 4 oscillators over `steps` steps of length `h` through the ground accelerations
  * input[0..steps] (f64 at byte address `input`), continuing from `state` and updating `peaks`.
  * For recurrences whose two forcing coefficients are equal (up0 = up1 and vp0 = vp1, as for Newmark
  * average acceleration, where both are −βh²/D and −γh/D in exact arithmetic): the forcing is
@@ -506,22 +356,6 @@ function sweepBlockSymmetric(
   const vp11 = v128.load(coefficients, 336);
   const c1 = v128.load(coefficients, 352);
   const k1 = v128.load(coefficients, 368);
-  const uu2 = v128.load(coefficients, 448);
-  const uv2 = v128.load(coefficients, 464);
-  const up12 = v128.load(coefficients, 496);
-  const vu2 = v128.load(coefficients, 512);
-  const vv2 = v128.load(coefficients, 528);
-  const vp12 = v128.load(coefficients, 560);
-  const c2 = v128.load(coefficients, 576);
-  const k2 = v128.load(coefficients, 592);
-  const uu3 = v128.load(coefficients, 672);
-  const uv3 = v128.load(coefficients, 688);
-  const up13 = v128.load(coefficients, 720);
-  const vu3 = v128.load(coefficients, 736);
-  const vv3 = v128.load(coefficients, 752);
-  const vp13 = v128.load(coefficients, 784);
-  const c3 = v128.load(coefficients, 800);
-  const k3 = v128.load(coefficients, 816);
   let u0 = v128.load(state, 0);
   let v0 = v128.load(state, 16);
   let tu0 = v128.load(state, 32);
@@ -532,16 +366,6 @@ function sweepBlockSymmetric(
   let tu1 = v128.load(state, 112);
   let tv1 = v128.load(state, 128);
   let ts1 = v128.load(state, 144);
-  let u2 = v128.load(state, 160);
-  let v2 = v128.load(state, 176);
-  let tu2 = v128.load(state, 192);
-  let tv2 = v128.load(state, 208);
-  let ts2 = v128.load(state, 224);
-  let u3 = v128.load(state, 240);
-  let v3 = v128.load(state, 256);
-  let tu3 = v128.load(state, 272);
-  let tv3 = v128.load(state, 288);
-  let ts3 = v128.load(state, 304);
   let pas = load<f64>(input);
   for (let n = 1; n <= steps; n++) {
     const pbs = load<f64>(input + ((<usize>n) << 3));
@@ -566,27 +390,7 @@ function sweepBlockSymmetric(
       v128.or(f64x2.gt(f64x2.abs(u1), tu1), f64x2.gt(f64x2.abs(v1), tv1)),
       f64x2.gt(as1, ts1),
     );
-    const uo2 = u2;
-    const vo2 = v2;
-    u2 = f64x2.add(f64x2.add(f64x2.mul(uu2, uo2), f64x2.mul(uv2, vo2)), f64x2.mul(up12, sum));
-    v2 = f64x2.add(f64x2.add(f64x2.mul(vu2, uo2), f64x2.mul(vv2, vo2)), f64x2.mul(vp12, sum));
-    // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as2 = f64x2.abs(f64x2.add(f64x2.mul(c2, v2), f64x2.mul(k2, u2)));
-    const m2 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u2), tu2), f64x2.gt(f64x2.abs(v2), tv2)),
-      f64x2.gt(as2, ts2),
-    );
-    const uo3 = u3;
-    const vo3 = v3;
-    u3 = f64x2.add(f64x2.add(f64x2.mul(uu3, uo3), f64x2.mul(uv3, vo3)), f64x2.mul(up13, sum));
-    v3 = f64x2.add(f64x2.add(f64x2.mul(vu3, uo3), f64x2.mul(vv3, vo3)), f64x2.mul(vp13, sum));
-    // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as3 = f64x2.abs(f64x2.add(f64x2.mul(c3, v3), f64x2.mul(k3, u3)));
-    const m3 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u3), tu3), f64x2.gt(f64x2.abs(v3), tv3)),
-      f64x2.gt(as3, ts3),
-    );
-    if (v128.any_true(v128.or(v128.or(m0, m1), v128.or(m2, m3)))) {
+    if (v128.any_true(v128.or(m0, m1))) {
       const bits0 = i64x2.bitmask(m0);
       if (bits0 !== 0) {
         const bits = bits0;
@@ -665,84 +469,6 @@ function sweepBlockSymmetric(
         tv1 = v128.load(t, 48);
         ts1 = v128.load(t, 64);
       }
-      const bits2 = i64x2.bitmask(m2);
-      if (bits2 !== 0) {
-        const bits = bits2;
-        const t = state + 160;
-        v128.store(t, tu2, 32);
-        v128.store(t, tv2, 48);
-        v128.store(t, ts2, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo2, 0),
-            f64x2.extract_lane(vo2, 0),
-            f64x2.extract_lane(u2, 0),
-            f64x2.extract_lane(v2, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 448,
-            t + 0,
-            peaks + 96,
-          );
-        }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo2, 1),
-            f64x2.extract_lane(vo2, 1),
-            f64x2.extract_lane(u2, 1),
-            f64x2.extract_lane(v2, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 456,
-            t + 8,
-            peaks + 104,
-          );
-        }
-        tu2 = v128.load(t, 32);
-        tv2 = v128.load(t, 48);
-        ts2 = v128.load(t, 64);
-      }
-      const bits3 = i64x2.bitmask(m3);
-      if (bits3 !== 0) {
-        const bits = bits3;
-        const t = state + 240;
-        v128.store(t, tu3, 32);
-        v128.store(t, tv3, 48);
-        v128.store(t, ts3, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo3, 0),
-            f64x2.extract_lane(vo3, 0),
-            f64x2.extract_lane(u3, 0),
-            f64x2.extract_lane(v3, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 672,
-            t + 0,
-            peaks + 144,
-          );
-        }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo3, 1),
-            f64x2.extract_lane(vo3, 1),
-            f64x2.extract_lane(u3, 1),
-            f64x2.extract_lane(v3, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 680,
-            t + 8,
-            peaks + 152,
-          );
-        }
-        tu3 = v128.load(t, 32);
-        tv3 = v128.load(t, 48);
-        ts3 = v128.load(t, 64);
-      }
     }
     pas = pbs;
   }
@@ -756,16 +482,6 @@ function sweepBlockSymmetric(
   v128.store(state, tu1, 112);
   v128.store(state, tv1, 128);
   v128.store(state, ts1, 144);
-  v128.store(state, u2, 160);
-  v128.store(state, v2, 176);
-  v128.store(state, tu2, 192);
-  v128.store(state, tv2, 208);
-  v128.store(state, ts2, 224);
-  v128.store(state, u3, 240);
-  v128.store(state, v3, 256);
-  v128.store(state, tu3, 272);
-  v128.store(state, tv3, 288);
-  v128.store(state, ts3, 304);
 }
 
 /**

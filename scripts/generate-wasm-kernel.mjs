@@ -1,13 +1,15 @@
 // Writes assembly/sweep.ts: the SIMD sweep kernel in AssemblyScript, the WebAssembly twin of
 // src/oscillator/kernel.ts (same recurrence, same operation order, same threshold test and
-// Hermite refinement). Eight oscillators are stepped per pass as four f64x2 vectors whose
-// coefficients and states live in locals. Run `npm run generate` after editing this template;
-// the output is committed and reviewed like any other source file, and compiled by
-// scripts/build-wasm.mjs at build time.
+// Hermite refinement). Four oscillators are stepped per pass as two f64x2 vectors whose
+// coefficients and states live in locals. Four rather than eight: with eight, a step somewhere
+// in the pass needs refinement most of the time (each lane does on about a fifth of its steps),
+// and sub-step counts shared by few oscillators leave more lanes idle; four measured faster.
+// Run `npm run generate` after editing this template; the output is committed and reviewed like
+// any other source file, and compiled by scripts/build-wasm.mjs at build time.
 import { writeFileSync } from 'node:fs';
 
 // Vectors per pass (two oscillators each); VECTORS=n in the environment tries another width.
-const VECTORS = Number(process.env.VECTORS ?? 4);
+const VECTORS = Number(process.env.VECTORS ?? 2);
 const COEFFICIENT_COUNT = 14;
 const each = (fn, join = '\n') => Array.from({ length: VECTORS }, (_, j) => fn(j)).join(join);
 // The masks of all vectors or-ed as a balanced tree, for one any_true per step.

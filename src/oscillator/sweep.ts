@@ -68,8 +68,8 @@ export const GROUP_SIZE = WASM_WIDTH;
 /**
  * Run every oscillator of the grid periods × dampings over one ground-acceleration history
  * (m/s², step dtS, linearly interpolated between samples, from rest) and return their peaks.
- * Oscillators with the same sub-step count are stepped several at a time in one pass (eight in
- * the WebAssembly SIMD kernel, four in the TypeScript one; both give the same numbers); see
+ * Oscillators with the same sub-step count are stepped four at a time in one pass (two f64x2
+ * vectors in the WebAssembly SIMD kernel, four locals in the TypeScript one; both give the same numbers); see
  * recurrence.ts for the methods and the sub-step rule.
  */
 export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: SweepOptions): Peaks {

@@ -55,8 +55,8 @@ export function wasmSimdSupported(): boolean {
   return simdSupported;
 }
 
-/** Oscillators per pass of the WebAssembly kernel (four f64x2 vectors). */
-export const WASM_WIDTH = 8;
+/** Oscillators per pass of the WebAssembly kernel (two f64x2 vectors; see assembly/sweep.ts). */
+export const WASM_WIDTH = 4;
 /** Coefficients, state values and peaks per oscillator (the layout of assembly/sweep.ts). */
 const COEFFICIENTS = 14;
 const STATES = 5;
@@ -93,7 +93,7 @@ function sweepModule(): WebAssembly.Module {
 
 /**
  * One instance of the WebAssembly kernel with a record loaded into its memory. Groups of up to
- * eight oscillators are stepped by `run`, which takes their coefficients packed as sweep.ts packs
+ * WASM_WIDTH oscillators are stepped by `run`, which takes their coefficients packed as sweep.ts packs
  * them (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator).
  */
 export class WasmSweeper {
@@ -133,7 +133,7 @@ export class WasmSweeper {
   }
 
   /**
-   * Step `count` (≤ 8) oscillators from rest over the record with `substeps` sub-steps of
+   * Step `count` (≤ WASM_WIDTH) oscillators from rest over the record with `substeps` sub-steps of
    * `stepS`; `packed` holds their coefficients at COEFFICIENT_STRIDE `stride`, and their peaks
    * are written to `out` at PEAK_STRIDE (3) per oscillator.
    */
