@@ -31,13 +31,19 @@ const median = (values) => {
 };
 async function timed(fn, repeat = REPEAT) {
   const times = [];
+  const cpu = [];
   let result;
   for (let i = 0; i < repeat; i++) {
     const start = performance.now();
+    const used = process.cpuUsage();
     result = await fn();
     times.push(performance.now() - start);
+    const { user, system } = process.cpuUsage(used);
+    cpu.push((user + system) / 1000);
   }
-  return { ms: median(times), result };
+  // cpuMs: CPU time of all this process's threads; on a machine shared with other work it shows
+  // whether the threads ran side by side (cpuMs ≈ threads × ms) or took turns (cpuMs ≈ ms).
+  return { ms: median(times), cpuMs: median(cpu), result };
 }
 const mega = (steps, ms) => (steps / ms / 1e3).toFixed(0);
 function row(job, variant, fields) {
@@ -76,7 +82,12 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
     sweepOscillators(standard.accelMS2, standard.dtS, options); // warm-up (JIT, wasm tier-up)
     const one = await timed(() => sweepOscillators(standard.accelMS2, standard.dtS, options));
     const steps = one.result.oscillatorSteps;
-    row('standard', `${method} ${kernel} 1 thread`, { ms: one.ms, steps, mps: mega(steps, one.ms) });
+    row('standard', `${method} ${kernel} 1 thread`, {
+      ms: one.ms,
+      steps,
+      mps: mega(steps, one.ms),
+      note: `CPU ${one.cpuMs.toFixed(0)} ms: ${mega(steps, one.cpuMs)} M/s of CPU time`,
+    });
     const pool = new SweepPool(cores);
     await pool.sweep(standard.accelMS2, standard.dtS, options); // warm-up
     const all = await timed(() => pool.sweep(standard.accelMS2, standard.dtS, options));
@@ -85,7 +96,7 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
       ms: all.ms,
       steps,
       mps: mega(steps, all.ms),
-      note: `×${(one.ms / all.ms).toFixed(2)} (pool started)`,
+      note: `×${(one.ms / all.ms).toFixed(2)} (pool started); CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
     });
   }
 }
@@ -170,7 +181,12 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
     QUICK ? 1 : REPEAT,
   );
   await pool.close();
-  row('batch 50', `pool of ${cores} threads`, { ms: pooled.ms, steps, mps: mega(steps, pooled.ms) });
+  row('batch 50', `pool of ${cores} threads`, {
+    ms: pooled.ms,
+    steps,
+    mps: mega(steps, pooled.ms),
+    note: `×${(alone.ms / pooled.ms).toFixed(2)}; CPU ${pooled.cpuMs.toFixed(0)} ms, all threads`,
+  });
 }
 
 // Memory: a 2,000,000-sample record with the default grid, through the CLI.
