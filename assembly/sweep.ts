@@ -485,10 +485,217 @@ function sweepBlockSymmetric(
 }
 
 /**
+ * Step 2 oscillators over `steps` steps of length `h` through the ground accelerations
+ * input[0..steps] (f64 at byte address `input`), continuing from `state` and updating `peaks`.
+ */
+function sweepBlockNarrow(
+  input: usize,
+  steps: i32,
+  h: f64,
+  coefficients: usize,
+  state: usize,
+  peaks: usize,
+): void {
+  const uu0 = v128.load(coefficients, 0);
+  const uv0 = v128.load(coefficients, 16);
+  const up00 = v128.load(coefficients, 32);
+  const up10 = v128.load(coefficients, 48);
+  const vu0 = v128.load(coefficients, 64);
+  const vv0 = v128.load(coefficients, 80);
+  const vp00 = v128.load(coefficients, 96);
+  const vp10 = v128.load(coefficients, 112);
+  const c0 = v128.load(coefficients, 128);
+  const k0 = v128.load(coefficients, 144);
+  let u0 = v128.load(state, 0);
+  let v0 = v128.load(state, 16);
+  let tu0 = v128.load(state, 32);
+  let tv0 = v128.load(state, 48);
+  let ts0 = v128.load(state, 64);
+  let pas = load<f64>(input);
+  let pa = f64x2.splat(pas);
+  for (let n = 1; n <= steps; n++) {
+    const pbs = load<f64>(input + ((<usize>n) << 3));
+    const pb = f64x2.splat(pbs);
+    const uo0 = u0;
+    const vo0 = v0;
+    u0 = f64x2.add(
+      f64x2.add(f64x2.add(f64x2.mul(uu0, uo0), f64x2.mul(uv0, vo0)), f64x2.mul(up00, pa)),
+      f64x2.mul(up10, pb),
+    );
+    v0 = f64x2.add(
+      f64x2.add(f64x2.add(f64x2.mul(vu0, uo0), f64x2.mul(vv0, vo0)), f64x2.mul(vp00, pa)),
+      f64x2.mul(vp10, pb),
+    );
+    // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
+    const as0 = f64x2.abs(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
+    const m0 = v128.or(
+      v128.or(f64x2.gt(f64x2.abs(u0), tu0), f64x2.gt(f64x2.abs(v0), tv0)),
+      f64x2.gt(as0, ts0),
+    );
+    if (v128.any_true(m0)) {
+      const bits0 = i64x2.bitmask(m0);
+      if (bits0 !== 0) {
+        const bits = bits0;
+        const t = state + 0;
+        v128.store(t, tu0, 32);
+        v128.store(t, tv0, 48);
+        v128.store(t, ts0, 64);
+        if (bits & 1) {
+          refineLane(
+            f64x2.extract_lane(uo0, 0),
+            f64x2.extract_lane(vo0, 0),
+            f64x2.extract_lane(u0, 0),
+            f64x2.extract_lane(v0, 0),
+            pas,
+            pbs,
+            h,
+            coefficients + 0,
+            t + 0,
+            peaks + 0,
+          );
+        }
+        if (bits & 2) {
+          refineLane(
+            f64x2.extract_lane(uo0, 1),
+            f64x2.extract_lane(vo0, 1),
+            f64x2.extract_lane(u0, 1),
+            f64x2.extract_lane(v0, 1),
+            pas,
+            pbs,
+            h,
+            coefficients + 8,
+            t + 8,
+            peaks + 8,
+          );
+        }
+        tu0 = v128.load(t, 32);
+        tv0 = v128.load(t, 48);
+        ts0 = v128.load(t, 64);
+      }
+    }
+    pas = pbs;
+    pa = pb;
+  }
+  v128.store(state, u0, 0);
+  v128.store(state, v0, 16);
+  v128.store(state, tu0, 32);
+  v128.store(state, tv0, 48);
+  v128.store(state, ts0, 64);
+}
+
+/**
+ * Step 2 oscillators over `steps` steps of length `h` through the ground accelerations
+ * input[0..steps] (f64 at byte address `input`), continuing from `state` and updating `peaks`.
+ * For recurrences whose two forcing coefficients are equal (up0 = up1 and vp0 = vp1, as for Newmark
+ * average acceleration, where both are −βh²/D and −γh/D in exact arithmetic): the forcing is
+ * up1·(p_n + p_{n+1}), two multiplications and two additions fewer per oscillator-step.
+ */
+function sweepBlockSymmetricNarrow(
+  input: usize,
+  steps: i32,
+  h: f64,
+  coefficients: usize,
+  state: usize,
+  peaks: usize,
+): void {
+  const uu0 = v128.load(coefficients, 0);
+  const uv0 = v128.load(coefficients, 16);
+  const up10 = v128.load(coefficients, 48);
+  const vu0 = v128.load(coefficients, 64);
+  const vv0 = v128.load(coefficients, 80);
+  const vp10 = v128.load(coefficients, 112);
+  const c0 = v128.load(coefficients, 128);
+  const k0 = v128.load(coefficients, 144);
+  let u0 = v128.load(state, 0);
+  let v0 = v128.load(state, 16);
+  let tu0 = v128.load(state, 32);
+  let tv0 = v128.load(state, 48);
+  let ts0 = v128.load(state, 64);
+  let pas = load<f64>(input);
+  for (let n = 1; n <= steps; n++) {
+    const pbs = load<f64>(input + ((<usize>n) << 3));
+    const sum = f64x2.splat(pas + pbs);
+    const uo0 = u0;
+    const vo0 = v0;
+    u0 = f64x2.add(f64x2.add(f64x2.mul(uu0, uo0), f64x2.mul(uv0, vo0)), f64x2.mul(up10, sum));
+    v0 = f64x2.add(f64x2.add(f64x2.mul(vu0, uo0), f64x2.mul(vv0, vo0)), f64x2.mul(vp10, sum));
+    // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
+    const as0 = f64x2.abs(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
+    const m0 = v128.or(
+      v128.or(f64x2.gt(f64x2.abs(u0), tu0), f64x2.gt(f64x2.abs(v0), tv0)),
+      f64x2.gt(as0, ts0),
+    );
+    if (v128.any_true(m0)) {
+      const bits0 = i64x2.bitmask(m0);
+      if (bits0 !== 0) {
+        const bits = bits0;
+        const t = state + 0;
+        v128.store(t, tu0, 32);
+        v128.store(t, tv0, 48);
+        v128.store(t, ts0, 64);
+        if (bits & 1) {
+          refineLane(
+            f64x2.extract_lane(uo0, 0),
+            f64x2.extract_lane(vo0, 0),
+            f64x2.extract_lane(u0, 0),
+            f64x2.extract_lane(v0, 0),
+            pas,
+            pbs,
+            h,
+            coefficients + 0,
+            t + 0,
+            peaks + 0,
+          );
+        }
+        if (bits & 2) {
+          refineLane(
+            f64x2.extract_lane(uo0, 1),
+            f64x2.extract_lane(vo0, 1),
+            f64x2.extract_lane(u0, 1),
+            f64x2.extract_lane(v0, 1),
+            pas,
+            pbs,
+            h,
+            coefficients + 8,
+            t + 8,
+            peaks + 8,
+          );
+        }
+        tu0 = v128.load(t, 32);
+        tv0 = v128.load(t, 48);
+        ts0 = v128.load(t, 64);
+      }
+    }
+    pas = pbs;
+  }
+  v128.store(state, u0, 0);
+  v128.store(state, v0, 16);
+  v128.store(state, tu0, 32);
+  v128.store(state, tv0, 48);
+  v128.store(state, ts0, 64);
+}
+
+/** One block with the kernel for the recurrence (bit 0: symmetric) and pass width (bit 1: narrow). */
+function sweep(
+  kind: i32,
+  input: usize,
+  steps: i32,
+  h: f64,
+  coefficients: usize,
+  state: usize,
+  peaks: usize,
+): void {
+  if (kind === 0) sweepBlock(input, steps, h, coefficients, state, peaks);
+  else if (kind === 1) sweepBlockSymmetric(input, steps, h, coefficients, state, peaks);
+  else if (kind === 2) sweepBlockNarrow(input, steps, h, coefficients, state, peaks);
+  else sweepBlockSymmetricNarrow(input, steps, h, coefficients, state, peaks);
+}
+
+/**
  * Step one packed group over a whole record of `samples` values at byte address `record`, from
  * the state given: directly over the samples when `substeps` is 1, otherwise over blocks of
  * `blockSteps` linearly interpolated sub-step inputs built in `buffer` (the arithmetic of runGroup
- * in sweep.ts).
+ * in sweep.ts). `narrow` steps only the first vector (two oscillators), for small groups.
  */
 export function runGroup(
   record: usize,
@@ -501,15 +708,16 @@ export function runGroup(
   buffer: usize,
   blockSteps: i32,
   symmetric: i32,
+  narrow: i32,
 ): void {
+  const kind = (symmetric ? 1 : 0) | (narrow ? 2 : 0);
   const intervals = samples - 1;
   if (substeps === 1) {
     // Blocks here too, so that the engine's optimizing tier takes over between calls.
     for (let first = 0; first < intervals; first += blockSteps) {
       const steps = min(blockSteps, intervals - first);
       const input = record + ((<usize>first) << 3);
-      if (symmetric) sweepBlockSymmetric(input, steps, h, coefficients, state, peaks);
-      else sweepBlock(input, steps, h, coefficients, state, peaks);
+      sweep(kind, input, steps, h, coefficients, state, peaks);
     }
     return;
   }
@@ -534,7 +742,6 @@ export function runGroup(
     }
     sample = (first + steps) / substeps;
     within = first + steps - sample * substeps;
-    if (symmetric) sweepBlockSymmetric(buffer, steps, h, coefficients, state, peaks);
-    else sweepBlock(buffer, steps, h, coefficients, state, peaks);
+    sweep(kind, buffer, steps, h, coefficients, state, peaks);
   }
 }

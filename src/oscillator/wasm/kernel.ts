@@ -76,6 +76,7 @@ interface SweepExports {
     buffer: number,
     blockSteps: number,
     symmetric: number,
+    narrow: number,
   ): void;
 }
 
@@ -166,6 +167,8 @@ export class WasmSweeper {
       this.buffer,
       this.blockSteps,
       symmetric ? 1 : 0,
+      // A group of one or two oscillators fills one vector: step that one only.
+      count <= 2 ? 1 : 0,
     );
     const p = this.peaks / 8;
     for (let i = 0; i < count; i++) {
