@@ -9,6 +9,7 @@ export { type Equipment, parseEquipment } from './anchorage/equipment.js';
 export { CAUTION, cautionLines } from './caution.js';
 export { type ErrorKind, inputError, isQuakesweepError, QuakesweepError, usageError } from './errors.js';
 export { defaultPeriodsS, logSpaced, parseDampings, parsePeriods } from './oscillator/grid.js';
+export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './oscillator/parallel.js';
 export { hermitePeak } from './oscillator/peak.js';
 export {
   METHOD_DESCRIPTIONS,
@@ -21,7 +22,8 @@ export {
   stepCoefficients,
   substepCount,
 } from './oscillator/recurrence.js';
-export { type Peaks, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
+export { type Peaks, type SweepKernel, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
+export { wasmSimdSupported } from './oscillator/wasm/kernel.js';
 export { writeFileAtomic } from './output/atomic.js';
 export { spectrumToCsv } from './output/spectrum-csv.js';
 export { formatJson, type SpectrumJson, spectrumToJson } from './output/spectrum-json.js';

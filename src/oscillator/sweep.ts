@@ -1,6 +1,7 @@
 import { inputError } from '../errors.js';
 import { COEFFICIENT_STRIDE, GROUP_WIDTH, PEAK_STRIDE, STATE_STRIDE, sweepBlock } from './kernel.js';
 import { type Method, prewarpedOscillator, stepCoefficients, substepCount } from './recurrence.js';
+import { WASM_WIDTH, WasmSweeper, wasmSimdSupported } from './wasm/kernel.js';
 
 export interface SweepOptions {
   /** Natural periods, s; T = 0 is a rigid oscillator. */
@@ -16,6 +17,8 @@ export interface SweepOptions {
   prewarp?: boolean;
   /** Least steps per natural period (raises the rule of recurrence.ts, never lowers it). */
   stepsPerPeriod?: number;
+  /** Kernel: 'auto' (WebAssembly SIMD where the engine has it, else TypeScript), 'wasm' or 'js'. */
+  kernel?: SweepKernel;
 }
 
 /** Peak responses of every oscillator of a sweep. Arrays are indexed [damping × nPeriods + period]. */
@@ -33,45 +36,65 @@ export interface Peaks {
   oscillatorSteps: number;
 }
 
-interface Oscillator {
+/** Which kernel steps the oscillators: the WebAssembly SIMD one, the TypeScript one, or the first where it runs. */
+export type SweepKernel = 'auto' | 'wasm' | 'js';
+
+/** One oscillator of a planned sweep: its index in the result arrays and its sub-step count. */
+export interface PlannedOscillator {
   index: number;
   periodS: number;
   damping: number;
   substeps: number;
 }
 
+/** What every kernel and thread of a sweep shares: the grid, the method and the record's bounds. */
+export interface SweepPlan {
+  method: Method;
+  prewarp: boolean;
+  /** Time step of the record, s. */
+  dtS: number;
+  periodsS: Float64Array;
+  dampings: Float64Array;
+  /** Peak |ground acceleration|, the SA of rigid oscillators. */
+  pgaMS2: number;
+  bounds: GroundBounds;
+  /** Groups of at most GROUP_SIZE oscillators with the same sub-step count, in sub-step order. */
+  groups: PlannedOscillator[][];
+}
+
+/** Oscillators per planned group: one pass of the WebAssembly kernel, two of the TypeScript one. */
+export const GROUP_SIZE = WASM_WIDTH;
+
 /**
  * Run every oscillator of the grid periods × dampings over one ground-acceleration history
  * (m/s², step dtS, linearly interpolated between samples, from rest) and return their peaks.
- * Oscillators with the same sub-step count are stepped four at a time in one pass; see
+ * Oscillators with the same sub-step count are stepped four at a time in one pass (two f64x2
+ * vectors in the WebAssembly SIMD kernel, four locals in the TypeScript one; both give the same numbers); see
  * recurrence.ts for the methods and the sub-step rule.
  */
 export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: SweepOptions): Peaks {
+  const plan = planSweep(accelMS2, dtS, options);
+  const peaks = emptyPeaks(plan);
+  const runner = groupRunner(accelMS2, plan, options.kernel ?? 'auto');
+  for (const group of plan.groups) storeGroup(peaks, group, runner(group), accelMS2.length);
+  return peaks;
+}
+
+/** Check the sweep and group its oscillators by sub-step count (rigid ones are not stepped). */
+export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOptions): SweepPlan {
   const method = options.method ?? 'newmark-average';
   const periodsS = Float64Array.from(options.periodsS);
   const dampings = Float64Array.from(options.dampings);
   checkSweep(accelMS2, dtS, periodsS, dampings);
-
-  const count = periodsS.length * dampings.length;
-  const sdM = new Float64Array(count);
-  const svMS = new Float64Array(count);
-  const saMS2 = new Float64Array(count);
-  let pga = 0;
-  for (let i = 0; i < accelMS2.length; i++) pga = Math.max(pga, Math.abs(accelMS2[i]));
-
   const durationS = (accelMS2.length - 1) * dtS;
   const prewarp = options.prewarp ?? true;
-  const oscillators: Oscillator[] = [];
+  const oscillators: PlannedOscillator[] = [];
   for (let d = 0; d < dampings.length; d++) {
     for (let p = 0; p < periodsS.length; p++) {
-      const index = d * periodsS.length + p;
       const periodS = periodsS[p];
-      if (periodS === 0) {
-        saMS2[index] = pga; // rigid: moves with the ground
-        continue;
-      }
+      if (periodS === 0) continue;
       oscillators.push({
-        index,
+        index: d * periodsS.length + p,
         periodS,
         damping: dampings[d],
         substeps: substepCount(method, periodS, dtS, {
@@ -84,40 +107,121 @@ export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: S
     }
   }
   oscillators.sort((a, b) => a.substeps - b.substeps || a.index - b.index);
-
-  warmKernel();
+  const groups: PlannedOscillator[][] = [];
+  for (let start = 0; start < oscillators.length; ) {
+    const group = [oscillators[start++]];
+    while (
+      group.length < GROUP_SIZE &&
+      start < oscillators.length &&
+      oscillators[start].substeps === group[0].substeps
+    ) {
+      group.push(oscillators[start++]);
+    }
+    groups.push(group);
+  }
   const bounds = groundBounds(accelMS2, dtS);
-  let oscillatorSteps = 0;
+  return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups };
+}
+
+/** Result arrays of a plan, with the rigid oscillators' SA (the PGA) filled in. */
+export function emptyPeaks(plan: SweepPlan): Peaks {
+  const count = plan.periodsS.length * plan.dampings.length;
+  const peaks: Peaks = {
+    method: plan.method,
+    periodsS: plan.periodsS,
+    dampings: plan.dampings,
+    sdM: new Float64Array(count),
+    svMS: new Float64Array(count),
+    saMS2: new Float64Array(count),
+    oscillatorSteps: 0,
+  };
+  for (let d = 0; d < plan.dampings.length; d++) {
+    for (let p = 0; p < plan.periodsS.length; p++) {
+      if (plan.periodsS[p] === 0) peaks.saMS2[d * plan.periodsS.length + p] = plan.pgaMS2; // rigid: moves with the ground
+    }
+  }
+  return peaks;
+}
+
+/**
+ * Copy one group's peaks (PEAK_STRIDE per oscillator) into the result arrays and count the
+ * oscillator-steps it executed over a record of `samples` values.
+ */
+export function storeGroup(
+  peaks: Peaks,
+  group: PlannedOscillator[],
+  values: Float64Array,
+  samples: number,
+): void {
+  for (let g = 0; g < group.length; g++) {
+    const index = group[g].index;
+    peaks.sdM[index] = values[g * PEAK_STRIDE];
+    peaks.svMS[index] = values[g * PEAK_STRIDE + 1];
+    peaks.saMS2[index] = values[g * PEAK_STRIDE + 2];
+  }
+  peaks.oscillatorSteps += group.length * group[0].substeps * (samples - 1);
+}
+
+/** The kernel a sweep uses: WebAssembly SIMD where the engine has it, unless told otherwise. */
+export function resolveKernel(kernel: SweepKernel, simd = wasmSimdSupported()): 'wasm' | 'js' {
+  if (kernel === 'js') return 'js';
+  if (kernel === 'wasm') {
+    if (!simd) throw inputError('the WebAssembly SIMD kernel does not run on this engine');
+    return 'wasm';
+  }
+  return simd ? 'wasm' : 'js';
+}
+
+/**
+ * A function that steps one planned group over the record from rest and returns its peaks
+ * (PEAK_STRIDE per oscillator; the array is reused from call to call).
+ */
+export function groupRunner(
+  accelMS2: Float64Array,
+  plan: SweepPlan,
+  kernel: SweepKernel,
+): (group: PlannedOscillator[]) => Float64Array {
+  const packed = new Float64Array(GROUP_SIZE * COEFFICIENT_STRIDE);
+  const values = new Float64Array(GROUP_SIZE * PEAK_STRIDE);
+  const dtS = plan.dtS;
+  const pack = (group: PlannedOscillator[], stepS: number) => {
+    for (let g = 0; g < group.length; g++) {
+      packCoefficients(packed, g, group[g], plan.method, stepS, plan.bounds, plan.prewarp);
+    }
+  };
+  if (resolveKernel(kernel) === 'wasm') {
+    const sweeper = new WasmSweeper(accelMS2, BLOCK_STEPS);
+    // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts).
+    const symmetric = plan.method === 'newmark-average';
+    return (group) => {
+      const stepS = dtS / group[0].substeps;
+      pack(group, stepS);
+      sweeper.run(packed, COEFFICIENT_STRIDE, group.length, group[0].substeps, stepS, symmetric, values);
+      return values;
+    };
+  }
+  warmKernel();
   const coefficients = new Float64Array(GROUP_WIDTH * COEFFICIENT_STRIDE);
   const state = new Float64Array(GROUP_WIDTH * STATE_STRIDE);
   const peaks = new Float64Array(GROUP_WIDTH * PEAK_STRIDE);
   const buffer = new Float64Array(BLOCK_STEPS + 1);
-  for (let start = 0; start < oscillators.length; ) {
-    const substeps = oscillators[start].substeps;
-    const group: Oscillator[] = [];
-    while (
-      group.length < GROUP_WIDTH &&
-      start < oscillators.length &&
-      oscillators[start].substeps === substeps
-    ) {
-      group.push(oscillators[start++]);
-    }
+  return (group) => {
+    const substeps = group[0].substeps;
     const stepS = dtS / substeps;
-    for (let g = 0; g < GROUP_WIDTH; g++) {
-      packCoefficients(coefficients, g, group[Math.min(g, group.length - 1)], method, stepS, bounds, prewarp);
+    pack(group, stepS);
+    for (let first = 0; first < group.length; first += GROUP_WIDTH) {
+      const count = Math.min(GROUP_WIDTH, group.length - first);
+      for (let g = 0; g < GROUP_WIDTH; g++) {
+        const from = (first + Math.min(g, count - 1)) * COEFFICIENT_STRIDE;
+        coefficients.set(packed.subarray(from, from + COEFFICIENT_STRIDE), g * COEFFICIENT_STRIDE);
+      }
+      state.fill(0);
+      peaks.fill(0);
+      runGroup(accelMS2, substeps, stepS, coefficients, state, peaks, buffer);
+      values.set(peaks.subarray(0, count * PEAK_STRIDE), first * PEAK_STRIDE);
     }
-    state.fill(0);
-    peaks.fill(0);
-    runGroup(accelMS2, substeps, stepS, coefficients, state, peaks, buffer);
-    for (let g = 0; g < group.length; g++) {
-      const index = group[g].index;
-      sdM[index] = peaks[g * PEAK_STRIDE];
-      svMS[index] = peaks[g * PEAK_STRIDE + 1];
-      saMS2[index] = peaks[g * PEAK_STRIDE + 2];
-    }
-    oscillatorSteps += group.length * substeps * (accelMS2.length - 1);
-  }
-  return { method, periodsS, dampings, sdM, svMS, saMS2, oscillatorSteps };
+    return values;
+  };
 }
 
 let kernelWarm = false;

@@ -4,7 +4,9 @@ import type { Command } from 'commander';
 import { cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
 import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
+import { sweepOscillatorsParallel } from '../../oscillator/parallel.js';
 import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
+import { planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
@@ -18,7 +20,7 @@ import {
 } from '../../plot/index.js';
 import { integrateRecord } from '../../record/integrate.js';
 import type { GroundRecord } from '../../record/record.js';
-import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
+import { assembleSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
@@ -42,6 +44,8 @@ export interface SpectrumCliOptions
   svg?: string;
   axes?: string;
   histories?: boolean;
+  threads?: string;
+  kernel?: string;
 }
 
 /** Add --periods, --damping, --method and --force. */
@@ -90,6 +94,8 @@ export function registerSpectrum(program: Command): void {
       '--histories',
       'with --svg, also write histories.svg (ground acceleration, velocity, displacement)',
     )
+    .option('--threads <n>', 'threads for a large sweep (default: all cores; small sweeps use one)')
+    .option('--kernel <kernel>', 'sweep kernel: auto (WebAssembly SIMD where available), wasm or js', 'auto')
     .action(async (source: string, options: SpectrumCliOptions) => {
       await runSpectrum(source, options);
     });
@@ -102,8 +108,9 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
   const axes = figureAxes(options);
   const target = loadTarget(options);
+  const sweep = sweepChoice(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
-  const targeted = applyTarget(responseSpectrum(processed, grid), target, options);
+  const targeted = applyTarget(await sweepSpectrum(processed, grid, sweep), target, options);
   const spectrum = targeted.spectrum;
   const record = targeted.record(processed);
   if (options.svg !== undefined) {
@@ -121,6 +128,43 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   } else {
     process.stdout.write(text);
   }
+}
+
+/**
+ * Oscillator-steps from which a sweep is split over threads: starting a worker costs 30–50 ms,
+ * about 15 million oscillator-steps of one core's work, so smaller sweeps stay on one thread.
+ */
+export const PARALLEL_MIN_OSCILLATOR_STEPS = 30_000_000;
+
+function sweepChoice(options: SpectrumCliOptions): { threads?: number; kernel: SweepKernel } {
+  const kernel = options.kernel ?? 'auto';
+  if (kernel !== 'auto' && kernel !== 'wasm' && kernel !== 'js') {
+    throw usageError(`--kernel '${kernel}': use auto, wasm or js`);
+  }
+  if (options.threads === undefined) return { kernel };
+  const threads = Number(options.threads);
+  if (!Number.isInteger(threads) || threads < 1 || threads > 256) {
+    throw usageError(`--threads must be a whole number from 1 to 256, got '${options.threads}'`);
+  }
+  return { threads, kernel };
+}
+
+/** The spectrum of a record, its sweep split over threads when it is large. */
+async function sweepSpectrum(
+  record: GroundRecord,
+  grid: ReturnType<typeof gridFromOptions>,
+  choice: { threads?: number; kernel: SweepKernel },
+): Promise<Spectrum> {
+  const options = { ...grid, kernel: choice.kernel };
+  const plan = planSweep(record.accelMS2, record.dtS, options);
+  let steps = 0;
+  for (const group of plan.groups) steps += group.length * group[0].substeps * (record.accelMS2.length - 1);
+  const threads = choice.threads ?? (steps >= PARALLEL_MIN_OSCILLATOR_STEPS ? undefined : 1);
+  const peaks =
+    threads === 1
+      ? sweepOscillators(record.accelMS2, record.dtS, options)
+      : await sweepOscillatorsParallel(record.accelMS2, record.dtS, { ...options, threads });
+  return assembleSpectrum(record, peaks);
 }
 
 function figureAxes(options: SpectrumCliOptions): 'log' | 'linear' {

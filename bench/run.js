@@ -1,0 +1,214 @@
+// The sweep benchmark (`npm run bench`, after `npm run build`): the standard job, a RotD job, a
+// 50-record batch and the memory of a 2,000,000-sample record. Every figure is the median of
+// REPEAT runs; the machine may be shared, so read the figures as indications. Nothing here is a
+// test: speed is measured here and never asserted in the test suite.
+import { execFileSync, spawnSync } from 'node:child_process';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { availableParallelism, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { loadRecord } from '../dist/cli/record-options.js';
+import { defaultPeriodsS, logSpaced } from '../dist/oscillator/grid.js';
+import { SweepPool } from '../dist/oscillator/parallel.js';
+import { substepCount } from '../dist/oscillator/recurrence.js';
+import { sweepOscillators } from '../dist/oscillator/sweep.js';
+import { writeFileAtomic } from '../dist/output/atomic.js';
+import { formatJson, spectrumToJson } from '../dist/output/spectrum-json.js';
+import { synthesizeRecord } from '../dist/record/synth.js';
+import { rotDSpectra } from '../dist/spectrum/rotd.js';
+import { assembleSpectrum } from '../dist/spectrum/spectrum.js';
+
+const REPEAT = Number(process.env.BENCH_REPEAT ?? 5);
+const QUICK = process.env.BENCH_QUICK === '1';
+const folder = mkdtempSync(join(tmpdir(), 'quakesweep-bench-'));
+const cli = new URL('../bin/quakesweep.js', import.meta.url).pathname;
+const cores = availableParallelism();
+const rows = [];
+
+const median = (values) => {
+  const sorted = [...values].sort((a, b) => a - b);
+  const m = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[m] : 0.5 * (sorted[m - 1] + sorted[m]);
+};
+async function timed(fn, repeat = REPEAT) {
+  const times = [];
+  const cpu = [];
+  let result;
+  for (let i = 0; i < repeat; i++) {
+    const start = performance.now();
+    const used = process.cpuUsage();
+    result = await fn();
+    times.push(performance.now() - start);
+    const { user, system } = process.cpuUsage(used);
+    cpu.push((user + system) / 1000);
+  }
+  // cpuMs: CPU time of all this process's threads; on a machine shared with other work it shows
+  // whether the threads ran side by side (cpuMs ≈ threads × ms) or took turns (cpuMs ≈ ms).
+  return { ms: median(times), cpuMs: median(cpu), result };
+}
+const mega = (steps, ms) => (steps / ms / 1e3).toFixed(0);
+function row(job, variant, fields) {
+  rows.push({ job, variant, ...fields });
+}
+function writeCsv(path, record) {
+  const lines = ['time_s,accel_g'];
+  for (let i = 0; i < record.accelMS2.length; i++) {
+    lines.push(`${(i * record.dtS).toFixed(4)},${(record.accelMS2[i] / 9.80665).toPrecision(9)}`);
+  }
+  writeFileSync(path, `${lines.join('\n')}\n`);
+}
+function peakKb(args) {
+  // GNU time's maximum resident set size, where it is installed.
+  if (!existsSync('/usr/bin/time')) return undefined;
+  const run = spawnSync('/usr/bin/time', ['-f', '%M', process.execPath, ...args], { encoding: 'utf8' });
+  if (run.status !== 0) throw new Error(`bench: ${args.join(' ')} failed: ${run.stderr}`);
+  return Number(run.stderr.trim().split('\n').pop());
+}
+function childMs(args) {
+  const start = performance.now();
+  execFileSync(process.execPath, args, { stdio: ['ignore', 'ignore', 'inherit'] });
+  return performance.now() - start;
+}
+
+// The standard job: 40,000 samples at 0.005 s, 200 periods 0.05–10 s, five dampings.
+const standard = synthesizeRecord({ seed: 2026, dtS: 0.005, durationS: 199.995, name: 'bench-standard' });
+const grid = { periodsS: logSpaced(0.05, 10, 200), dampings: [0, 0.02, 0.05, 0.1, 0.2] };
+const nominal = grid.periodsS.length * grid.dampings.length * standard.accelMS2.length;
+const csv = join(folder, 'standard.csv');
+writeCsv(csv, standard);
+
+for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewise-exact']) {
+  for (const kernel of ['wasm', 'js']) {
+    const options = { ...grid, method, kernel };
+    sweepOscillators(standard.accelMS2, standard.dtS, options); // warm-up (JIT, wasm tier-up)
+    const one = await timed(() => sweepOscillators(standard.accelMS2, standard.dtS, options));
+    const steps = one.result.oscillatorSteps;
+    row('standard', `${method} ${kernel} 1 thread`, {
+      ms: one.ms,
+      steps,
+      mps: mega(steps, one.ms),
+      note: `CPU ${one.cpuMs.toFixed(0)} ms: ${mega(steps, one.cpuMs)} M/s of CPU time`,
+    });
+    const pool = new SweepPool(cores);
+    await pool.sweep(standard.accelMS2, standard.dtS, options); // warm-up
+    const all = await timed(() => pool.sweep(standard.accelMS2, standard.dtS, options));
+    await pool.close();
+    row('standard', `${method} ${kernel} ${cores} threads`, {
+      ms: all.ms,
+      steps,
+      mps: mega(steps, all.ms),
+      note: `×${(one.ms / all.ms).toFixed(2)} (pool started); CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
+    });
+  }
+}
+
+// Stages of the standard job in this process, and the whole CLI job as a child process.
+{
+  const read = await timed(() => loadRecord(csv, { units: 'g' }));
+  const record = read.result;
+  const sweep = await timed(() => sweepOscillators(record.accelMS2, record.dtS, grid));
+  const out = join(folder, 'standard.json');
+  const write = await timed(() =>
+    writeFileAtomic(out, formatJson(spectrumToJson(assembleSpectrum(record, sweep.result))), [csv]),
+  );
+  row('standard stages', 'read CSV / sweep (1 thread) / write JSON', {
+    ms: read.ms + sweep.ms + write.ms,
+    note: `${read.ms.toFixed(0)} + ${sweep.ms.toFixed(0)} + ${write.ms.toFixed(0)} ms`,
+  });
+  const startup = median(Array.from({ length: REPEAT }, () => childMs(['-e', '0'])));
+  const args = ['spectrum', csv, '--units', 'g', '--periods', '0.05:10:200', '--damping', '0,2%,5%,10%,20%'];
+  for (const extra of [[], ['--threads', '1'], ['--kernel', 'js', '--threads', '1']]) {
+    const runs = Array.from({ length: REPEAT }, () => childMs([cli, ...args, ...extra, '--out', out]));
+    row('standard CLI', `quakesweep spectrum ${extra.join(' ') || '(defaults)'}`, {
+      ms: median(runs),
+      note: `node start-up ${startup.toFixed(0)} ms; peak ${peakKb([cli, ...args, ...extra, '--out', out]) ?? '?'} KB`,
+    });
+  }
+}
+
+// RotD: two components, its own loop (one thread, one kernel: rotd.ts steps in TypeScript).
+{
+  const first = synthesizeRecord({ seed: 3001, dtS: 0.01, durationS: 79.99 });
+  const second = synthesizeRecord({ seed: 3002, dtS: 0.01, durationS: 79.99 });
+  const rotd = { periodsS: logSpaced(0.05, 10, QUICK ? 10 : 40), dampings: [0.05] };
+  const n = first.accelMS2.length;
+  let steps = 0;
+  for (const periodS of rotd.periodsS) {
+    steps +=
+      2 *
+      (n - 1) *
+      substepCount('newmark-average', periodS, 0.01, { damping: 0.05, durationS: (n - 1) * 0.01 });
+  }
+  const run = await timed(() => rotDSpectra(first, second, rotd), QUICK ? 1 : REPEAT);
+  row('RotD', `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles`, {
+    ms: run.ms,
+    steps,
+    mps: mega(steps, run.ms),
+    note: `nominal ${2 * rotd.periodsS.length * n}`,
+  });
+}
+
+// A batch of 50 records (no batch command on this branch: the library sweep, one record after
+// another, alone and in a pool of all cores).
+{
+  const records = Array.from({ length: 50 }, (_, i) =>
+    synthesizeRecord({ seed: 5000 + i, dtS: 0.005, durationS: 40 + (i % 7) }),
+  );
+  const batch = { periodsS: defaultPeriodsS(), dampings: [0.05] };
+  let steps = 0;
+  let nominalBatch = 0;
+  const alone = await timed(
+    () => {
+      steps = 0;
+      nominalBatch = 0;
+      for (const r of records) {
+        steps += sweepOscillators(r.accelMS2, r.dtS, batch).oscillatorSteps;
+        nominalBatch += batch.periodsS.length * r.accelMS2.length;
+      }
+    },
+    QUICK ? 1 : REPEAT,
+  );
+  row('batch 50', '1 thread', {
+    ms: alone.ms,
+    steps,
+    mps: mega(steps, alone.ms),
+    note: `nominal ${nominalBatch}`,
+  });
+  const pool = new SweepPool(cores);
+  const pooled = await timed(
+    async () => {
+      for (const r of records) await pool.sweep(r.accelMS2, r.dtS, batch);
+    },
+    QUICK ? 1 : REPEAT,
+  );
+  await pool.close();
+  row('batch 50', `pool of ${cores} threads`, {
+    ms: pooled.ms,
+    steps,
+    mps: mega(steps, pooled.ms),
+    note: `×${(alone.ms / pooled.ms).toFixed(2)}; CPU ${pooled.cpuMs.toFixed(0)} ms, all threads`,
+  });
+}
+
+// Memory: a 2,000,000-sample record with the default grid, through the CLI.
+if (!QUICK) {
+  const big = synthesizeRecord({ seed: 7007, dtS: 0.01, durationS: 19999.99 });
+  const path = join(folder, 'big.csv');
+  writeCsv(path, big);
+  const start = performance.now();
+  const kb = peakKb([cli, 'spectrum', path, '--units', 'g', '--out', join(folder, 'big.json')]);
+  row('memory', `CLI spectrum, ${big.accelMS2.length} samples, default grid`, {
+    ms: performance.now() - start,
+    note: `peak ${kb ?? '?'} KB (limit 300 MB)`,
+  });
+}
+
+rmSync(folder, { recursive: true, force: true });
+console.log(`quakesweep bench: medians of ${REPEAT}, ${cores} cores (shared machines make these noisy)`);
+console.log(`standard job nominal oscillator-steps (oscillators × samples): ${nominal}`);
+const pad = (text, width) => String(text).padEnd(width);
+console.log(`${pad('job', 16)}${pad('variant', 50)}${pad('ms', 9)}${pad('steps', 12)}${pad('M/s', 7)}note`);
+for (const r of rows) {
+  console.log(
+    `${pad(r.job, 16)}${pad(r.variant, 50)}${pad(r.ms.toFixed(0), 9)}${pad(r.steps ?? '', 12)}${pad(r.mps ?? '', 7)}${r.note ?? ''}`,
+  );
+}

@@ -1,0 +1,188 @@
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
+import { inputError, QuakesweepError } from '../errors.js';
+import {
+  emptyPeaks,
+  groupRunner,
+  type Peaks,
+  planSweep,
+  type SweepOptions,
+  type SweepPlan,
+  sweepOscillators,
+} from './sweep.js';
+
+export interface ParallelSweepOptions extends SweepOptions {
+  /** Threads stepping oscillators, this one included; default all cores. 1 sweeps here alone. */
+  threads?: number;
+}
+
+/**
+ * A job as the threads share it: the record, the order in which groups are claimed, a counter
+ * that hands out the next group (Atomics.add, so every group runs exactly once), and the result
+ * arrays sdM, svMS, saMS2 one after the other. All buffers are SharedArrayBuffers.
+ */
+export interface SharedSweepJob {
+  accelMS2: Float64Array;
+  dtS: number;
+  options: SweepOptions;
+  order: Int32Array;
+  counter: Int32Array;
+  results: Float64Array;
+}
+
+/**
+ * Claim groups of the plan one at a time from the shared counter, step them with this thread's
+ * kernel and write their peaks into the shared results. Each oscillator's peaks depend only on
+ * its own coefficients and the record, so which thread steps a group changes no bit.
+ */
+export function runClaimedGroups(job: SharedSweepJob, plan: SweepPlan): void {
+  const count = plan.periodsS.length * plan.dampings.length;
+  let runner: ReturnType<typeof groupRunner> | undefined;
+  for (;;) {
+    const next = Atomics.add(job.counter, 0, 1);
+    if (next >= job.order.length) return;
+    runner ??= groupRunner(job.accelMS2, plan, job.options.kernel ?? 'auto');
+    const group = plan.groups[job.order[next]];
+    const values = runner(group);
+    for (let g = 0; g < group.length; g++) {
+      const index = group[g].index;
+      job.results[index] = values[3 * g];
+      job.results[count + index] = values[3 * g + 1];
+      job.results[2 * count + index] = values[3 * g + 2];
+    }
+  }
+}
+
+function workerUrl(): URL {
+  // Under a test runner this module runs from its TypeScript source; workers run the build.
+  return import.meta.url.endsWith('.ts')
+    ? new URL('../../dist/oscillator/parallel-worker.js', import.meta.url)
+    : new URL('./parallel-worker.js', import.meta.url);
+}
+
+function shared(values: Float64Array): Float64Array {
+  if (values.buffer instanceof SharedArrayBuffer) return values;
+  const copy = new Float64Array(new SharedArrayBuffer(values.byteLength));
+  copy.set(values);
+  return copy;
+}
+
+/**
+ * Worker threads that sweep together with the calling thread. A pool can run many sweeps (one
+ * record after another, each split over all its threads); close it when done so that the process
+ * can exit.
+ */
+export class SweepPool {
+  readonly threads: number;
+  private readonly workers: Worker[] = [];
+  private nextId = 0;
+  private readonly pending = new Map<
+    number,
+    { left: number; resolve: () => void; reject: (e: Error) => void }
+  >();
+
+  constructor(threads = availableParallelism()) {
+    if (!Number.isInteger(threads) || threads < 1) {
+      throw inputError(`the thread count must be a whole number ≥ 1, got ${threads}`);
+    }
+    this.threads = threads;
+    for (let i = 1; i < threads; i++) {
+      const worker = new Worker(workerUrl());
+      worker.on('message', (message: { id: number; error?: string }) => this.settle(message));
+      worker.on('error', (error) => this.failAll(error));
+      this.workers.push(worker);
+    }
+  }
+
+  private settle(message: { id: number; error?: string }): void {
+    const entry = this.pending.get(message.id);
+    if (entry === undefined) return;
+    if (message.error !== undefined) {
+      this.pending.delete(message.id);
+      entry.reject(new QuakesweepError('internal', `sweep worker: ${message.error}`));
+      return;
+    }
+    if (--entry.left === 0) {
+      this.pending.delete(message.id);
+      entry.resolve();
+    }
+  }
+
+  private failAll(error: Error): void {
+    for (const entry of this.pending.values()) entry.reject(error);
+    this.pending.clear();
+  }
+
+  /** The peaks of sweepOscillators, bit for bit, computed by all the pool's threads. */
+  async sweep(accelMS2: Float64Array, dtS: number, options: SweepOptions): Promise<Peaks> {
+    const plan = planSweep(accelMS2, dtS, options);
+    const peaks = emptyPeaks(plan);
+    const count = plan.periodsS.length * plan.dampings.length;
+    // Costliest groups first, so that the last groups claimed are short ones.
+    const costs = plan.groups.map((group) => group.length * group[0].substeps);
+    const order = new Int32Array(new SharedArrayBuffer(4 * plan.groups.length));
+    Array.from(plan.groups, (_, i) => i)
+      .sort((a, b) => costs[b] - costs[a] || a - b)
+      .forEach((group, i) => {
+        order[i] = group;
+      });
+    const job: SharedSweepJob = {
+      accelMS2: shared(accelMS2),
+      dtS,
+      options: { ...options, periodsS: plan.periodsS, dampings: plan.dampings },
+      order,
+      counter: new Int32Array(new SharedArrayBuffer(4)),
+      results: new Float64Array(new SharedArrayBuffer(8 * 3 * count)),
+    };
+    const id = this.nextId++;
+    const done = new Promise<void>((resolve, reject) => {
+      if (this.workers.length === 0) resolve();
+      else this.pending.set(id, { left: this.workers.length, resolve, reject });
+    });
+    for (const worker of this.workers) worker.postMessage({ id, job });
+    try {
+      runClaimedGroups(job, plan);
+    } finally {
+      await done;
+    }
+    for (let d = 0; d < plan.dampings.length; d++) {
+      for (let p = 0; p < plan.periodsS.length; p++) {
+        const index = d * plan.periodsS.length + p;
+        if (plan.periodsS[p] === 0) continue;
+        peaks.sdM[index] = job.results[index];
+        peaks.svMS[index] = job.results[count + index];
+        peaks.saMS2[index] = job.results[2 * count + index];
+      }
+    }
+    for (const group of plan.groups)
+      peaks.oscillatorSteps += group.length * group[0].substeps * (accelMS2.length - 1);
+    return peaks;
+  }
+
+  /** Stop the worker threads. */
+  async close(): Promise<void> {
+    await Promise.all(this.workers.map((worker) => worker.terminate()));
+    this.workers.length = 0;
+  }
+}
+
+/**
+ * sweepOscillators split over `threads` threads (default: all cores): worker threads and this
+ * one claim groups of oscillators from a shared counter, the record being shared once through a
+ * SharedArrayBuffer. The peaks are the same, bit for bit, as those of sweepOscillators with the
+ * same kernel. Starting a worker costs tens of milliseconds: use it for large sweeps only.
+ */
+export async function sweepOscillatorsParallel(
+  accelMS2: Float64Array,
+  dtS: number,
+  options: ParallelSweepOptions,
+): Promise<Peaks> {
+  const threads = options.threads ?? availableParallelism();
+  if (threads === 1) return sweepOscillators(accelMS2, dtS, options);
+  const pool = new SweepPool(threads);
+  try {
+    return await pool.sweep(accelMS2, dtS, options);
+  } finally {
+    await pool.close();
+  }
+}

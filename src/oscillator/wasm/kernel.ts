@@ -1,0 +1,179 @@
+import { SWEEP_WASM_BASE64 } from './binary.js';
+
+/**
+ * A tiny module whose one function returns a v128 constant: it validates only where the engine
+ * has WebAssembly 128-bit SIMD (the fixed-width SIMD proposal, WebAssembly 2.0 §4.3).
+ */
+const SIMD_PROBE: Uint8Array<ArrayBuffer> = new Uint8Array([
+  0x00,
+  0x61,
+  0x73,
+  0x6d,
+  0x01,
+  0x00,
+  0x00,
+  0x00, // magic, version
+  0x01,
+  0x05,
+  0x01,
+  0x60,
+  0x00,
+  0x01,
+  0x7b, // type section: () → v128
+  0x03,
+  0x02,
+  0x01,
+  0x00, // function section
+  0x0a,
+  0x16,
+  0x01,
+  0x14,
+  0x00,
+  0xfd,
+  0x0c, // code section: v128.const
+  ...new Array(16).fill(0),
+  0x0b,
+]);
+
+let simdSupported: boolean | undefined;
+
+/** Whether `validate` (WebAssembly.validate by default) accepts a SIMD module. */
+export function detectWasmSimd(
+  validate: (bytes: Uint8Array<ArrayBuffer>) => boolean = (bytes) =>
+    typeof WebAssembly === 'object' && WebAssembly.validate(bytes),
+): boolean {
+  try {
+    return validate(SIMD_PROBE);
+  } catch {
+    return false;
+  }
+}
+
+/** Whether this engine runs WebAssembly SIMD (detected once). */
+export function wasmSimdSupported(): boolean {
+  simdSupported ??= detectWasmSimd();
+  return simdSupported;
+}
+
+/** Oscillators per pass of the WebAssembly kernel (two f64x2 vectors; see assembly/sweep.ts). */
+export const WASM_WIDTH = 4;
+/** Coefficients, state values and peaks per oscillator (the layout of assembly/sweep.ts). */
+const COEFFICIENTS = 14;
+const STATES = 5;
+const PEAKS = 3;
+
+interface SweepExports {
+  memory: WebAssembly.Memory;
+  heapBase(): number;
+  runGroup(
+    record: number,
+    samples: number,
+    substeps: number,
+    stepS: number,
+    coefficients: number,
+    state: number,
+    peaks: number,
+    buffer: number,
+    blockSteps: number,
+    symmetric: number,
+    narrow: number,
+  ): void;
+}
+
+let compiled: WebAssembly.Module | undefined;
+
+function sweepModule(): WebAssembly.Module {
+  if (compiled === undefined) {
+    const text = atob(SWEEP_WASM_BASE64);
+    const bytes = new Uint8Array(text.length);
+    for (let i = 0; i < text.length; i++) bytes[i] = text.charCodeAt(i);
+    compiled = new WebAssembly.Module(bytes);
+  }
+  return compiled;
+}
+
+/**
+ * One instance of the WebAssembly kernel with a record loaded into its memory. Groups of up to
+ * WASM_WIDTH oscillators are stepped by `run`, which takes their coefficients packed as sweep.ts packs
+ * them (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator).
+ */
+export class WasmSweeper {
+  private readonly exports: SweepExports;
+  private readonly samples: number;
+  private readonly blockSteps: number;
+  private readonly coefficients: number;
+  private readonly state: number;
+  private readonly peaks: number;
+  private readonly buffer: number;
+  private readonly record: number;
+  private readonly view: Float64Array;
+
+  constructor(accelMS2: Float64Array, blockSteps: number) {
+    const instance = new WebAssembly.Instance(sweepModule(), {});
+    this.exports = instance.exports as unknown as SweepExports;
+    this.samples = accelMS2.length;
+    this.blockSteps = blockSteps;
+    const align = (bytes: number) => Math.ceil(bytes / 16) * 16;
+    let next = this.exports.heapBase();
+    const take = (bytes: number) => {
+      const at = next;
+      next += align(bytes);
+      return at;
+    };
+    this.coefficients = take(WASM_WIDTH * COEFFICIENTS * 8);
+    this.state = take(WASM_WIDTH * STATES * 8);
+    this.peaks = take(WASM_WIDTH * PEAKS * 8);
+    this.buffer = take((blockSteps + 1) * 8);
+    // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
+    this.record = take(accelMS2.length * 8 + 16);
+    const memory = this.exports.memory;
+    const pages = Math.ceil(next / 65536) - memory.buffer.byteLength / 65536;
+    if (pages > 0) memory.grow(pages);
+    this.view = new Float64Array(memory.buffer);
+    this.view.set(accelMS2, this.record / 8);
+  }
+
+  /**
+   * Step `count` (≤ WASM_WIDTH) oscillators from rest over the record with `substeps` sub-steps of
+   * `stepS`; `packed` holds their coefficients at COEFFICIENT_STRIDE `stride`, and their peaks
+   * are written to `out` at PEAK_STRIDE (3) per oscillator.
+   */
+  run(
+    packed: Float64Array,
+    stride: number,
+    count: number,
+    substeps: number,
+    stepS: number,
+    symmetric: boolean,
+    out: Float64Array,
+  ) {
+    const view = this.view;
+    const c = this.coefficients / 8;
+    for (let i = 0; i < WASM_WIDTH; i++) {
+      const from = Math.min(i, count - 1) * stride;
+      const lane = (i >> 1) * COEFFICIENTS * 2 + (i & 1);
+      for (let q = 0; q < COEFFICIENTS; q++) view[c + lane + 2 * q] = packed[from + q];
+    }
+    view.fill(0, this.state / 8, this.state / 8 + WASM_WIDTH * STATES);
+    view.fill(0, this.peaks / 8, this.peaks / 8 + WASM_WIDTH * PEAKS);
+    this.exports.runGroup(
+      this.record,
+      this.samples,
+      substeps,
+      stepS,
+      this.coefficients,
+      this.state,
+      this.peaks,
+      this.buffer,
+      this.blockSteps,
+      symmetric ? 1 : 0,
+      // A group of one or two oscillators fills one vector: step that one only.
+      count <= 2 ? 1 : 0,
+    );
+    const p = this.peaks / 8;
+    for (let i = 0; i < count; i++) {
+      const lane = (i >> 1) * PEAKS * 2 + (i & 1);
+      for (let q = 0; q < PEAKS; q++) out[i * PEAKS + q] = view[p + lane + 2 * q];
+    }
+  }
+}
