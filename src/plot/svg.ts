@@ -1,4 +1,10 @@
-import { JSDOM } from 'jsdom';
+import { createRequire } from 'node:module';
+import type { JSDOM as JsdomClass } from 'jsdom';
+
+// jsdom takes about half a second to load: load it with the first figure, not at start-up, so
+// commands that draw nothing do not pay for it.
+const require = createRequire(import.meta.url);
+let JSDOM: typeof JsdomClass | undefined;
 
 export const SVG_NS = 'http://www.w3.org/2000/svg';
 
@@ -24,6 +30,7 @@ export interface SvgDocument {
 
 /** A new SVG document `widthPx` × `heightPx`, with a matching viewBox and a generic sans-serif font. */
 export function createSvgDocument(widthPx: number, heightPx: number): SvgDocument {
+  JSDOM ??= (require('jsdom') as { JSDOM: typeof JsdomClass }).JSDOM;
   const dom = new JSDOM(`<svg xmlns="${SVG_NS}"/>`, { contentType: 'image/svg+xml' });
   const document = dom.window.document;
   const root = document.documentElement as unknown as SVGSVGElement;
