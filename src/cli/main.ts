@@ -6,6 +6,7 @@ import { registerDamping } from './commands/damping.js';
 import { registerDesign } from './commands/design.js';
 import { registerFloor } from './commands/floor.js';
 import { registerInfo } from './commands/info.js';
+import { registerReport } from './commands/report.js';
 import { registerRotD } from './commands/rotd.js';
 import { registerSpectrum } from './commands/spectrum.js';
 import { registerSynth } from './commands/synth.js';
@@ -31,6 +32,7 @@ export function buildProgram(): Command {
   registerFloor(program);
   registerAnchor(program);
   registerSynth(program);
+  registerReport(program);
   return program;
 }
 
