@@ -3,6 +3,7 @@ import { isQuakesweepError } from '../errors.js';
 import { VERSION } from '../version.js';
 import { registerAnchor } from './commands/anchor.js';
 import { registerDamping } from './commands/damping.js';
+import { registerDemo } from './commands/demo.js';
 import { registerDesign } from './commands/design.js';
 import { registerFloor } from './commands/floor.js';
 import { registerInfo } from './commands/info.js';
@@ -33,6 +34,7 @@ export function buildProgram(): Command {
   registerAnchor(program);
   registerSynth(program);
   registerReport(program);
+  registerDemo(program);
   return program;
 }
 

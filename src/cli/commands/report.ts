@@ -211,7 +211,9 @@ export async function runReport(
         svg: demand.floor,
       });
     }
-    input.anchorage.push({ item: { json: anchorageToJson(analysis), file, motion: demand.motion }, figures });
+    const json = anchorageToJson(analysis);
+    files.set(`anchorage-${n}.json`, formatJson(json));
+    input.anchorage.push({ item: { json, file, motion: demand.motion }, figures });
   });
 
   const figures = [
