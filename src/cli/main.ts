@@ -2,11 +2,13 @@ import { Command, CommanderError } from 'commander';
 import { isQuakesweepError } from '../errors.js';
 import { VERSION } from '../version.js';
 import { registerAnchor } from './commands/anchor.js';
+import { registerBatch } from './commands/batch.js';
 import { registerDamping } from './commands/damping.js';
 import { registerDemo } from './commands/demo.js';
 import { registerDesign } from './commands/design.js';
 import { registerFloor } from './commands/floor.js';
 import { registerInfo } from './commands/info.js';
+import { registerMerge } from './commands/merge.js';
 import { registerReport } from './commands/report.js';
 import { registerRotD } from './commands/rotd.js';
 import { registerSpectrum } from './commands/spectrum.js';
@@ -35,6 +37,8 @@ export function buildProgram(): Command {
   registerSynth(program);
   registerReport(program);
   registerDemo(program);
+  registerBatch(program);
+  registerMerge(program);
   return program;
 }
 
