@@ -47,6 +47,8 @@ export interface ReportTarget {
 /** Everything one report shows. The function that renders it does no I/O. */
 export interface ReportInput {
   title: string;
+  /** Paragraphs under the title (where the inputs come from, what they are for). */
+  notes: string[];
   read: RecordFacts;
   spectrum: Spectrum;
   measures: GroundMotionMeasures;
@@ -203,6 +205,7 @@ export function renderReport(input: ReportInput): string {
 <p>Response spectrum calculation · quakesweep ${escapeHtml(input.version)} · record ${escapeHtml(input.read.name)}</p>
 </header>
 <div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
+${input.notes.map((note) => paragraph(note, 'intro')).join('\n')}
 <nav class="contents"><strong>Contents</strong><ol class="plain">
 ${contents}
 </ol></nav>

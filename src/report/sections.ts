@@ -94,7 +94,7 @@ function peakIndex(periodsS: Float64Array, values: Float64Array): number {
   for (let p = 0; p < values.length; p++) {
     if (periodsS[p] > 0 && (best < 0 || values[p] > values[best])) best = p;
   }
-  return best < 0 ? 0 : best;
+  return Math.max(best, 0);
 }
 
 /** PSA at the grid period nearest to `t`, with that period. */

@@ -13,6 +13,7 @@ header.title { border-bottom: 2px solid #111; padding-bottom: 8px; margin-bottom
 header.title h1 { font-size: 17pt; margin: 0 0 4px; font-weight: 700; }
 header.title p { margin: 2px 0; color: #333; }
 .caution { border: 2px solid #8a5a00; background: #fff6e0; padding: 8px 12px; margin: 12px 0 18px; font-weight: 600; }
+p.intro { margin: 6px 0; }
 .caution-inline { border-left: 4px solid #8a5a00; padding: 4px 10px; font-weight: 600; }
 .caution strong { display: block; text-transform: uppercase; letter-spacing: 0.06em; font-size: 9pt; color: #6b4500; margin-bottom: 2px; }
 nav.contents ol { margin: 4px 0 0; padding-left: 0; list-style: none; columns: 2; }
@@ -25,7 +26,7 @@ thead th { background: #eee; }
 table.facts th { width: 34%; background: #f6f6f6; font-weight: 600; }
 td.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
 code, .command { font-family: "DejaVu Sans Mono", "Liberation Mono", Consolas, monospace; font-size: 9pt; }
-.command { background: #f4f4f4; border: 1px solid #ccc; padding: 6px 8px; white-space: pre-wrap; word-break: break-all; }
+.command { background: #f4f4f4; border: 1px solid #ccc; padding: 6px 8px; white-space: pre-wrap; overflow-wrap: anywhere; }
 figure { margin: 14px 0; }
 figure svg { display: block; width: 100%; max-width: 640px; height: auto; margin: 0 auto; }
 figcaption { font-size: 9.5pt; margin-top: 4px; }

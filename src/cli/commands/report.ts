@@ -18,7 +18,7 @@ import { type ReportFigure, type ReportInput, type ReportTarget, renderReport } 
 import { compareDamping } from '../../spectrum/damping.js';
 import { type BuildingMode, floorSpectrum } from '../../spectrum/floor.js';
 import { rotDSpectra } from '../../spectrum/rotd.js';
-import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
+import { responseSpectrum } from '../../spectrum/spectrum.js';
 import { parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { VERSION } from '../../version.js';
 import { addProcessingOptions, applyProcessing } from '../processing-options.js';
@@ -29,7 +29,7 @@ import { INFO_METHODS } from './info.js';
 import { addGridOptions, gridFromOptions, type SpectrumCliOptions } from './spectrum.js';
 
 export interface ReportCliOptions extends SpectrumCliOptions {
-  equipment: string[];
+  equipment?: string[];
   buildingPeriod?: string;
   buildingDamping?: string;
   modalFactor?: string;
@@ -37,6 +37,7 @@ export interface ReportCliOptions extends SpectrumCliOptions {
   pair?: string;
   angleStep?: string;
   title?: string;
+  note?: string[];
 }
 
 const collect = (value: string, previous: string[]) => [...previous, value];
@@ -54,6 +55,12 @@ export function registerReport(program: Command): void {
     .requiredOption(
       '--out <dir>',
       'folder for report.html and the files beside it (created if its parent exists)',
+    )
+    .option(
+      '--note <text>',
+      'a paragraph under the title, e.g. where the inputs come from (repeatable)',
+      collect,
+      [],
     )
     .option('--title <text>', 'title of the report (default: "Response spectra of <record name>")')
     .option('--length-unit <unit>', 'length unit of SD and PSV in tables and figures: m, cm, mm, in, ft', 'm')
@@ -144,6 +151,7 @@ export async function runReport(
   ];
   const input: ReportInput = {
     title: options.title ?? `Response spectra of ${record.name}`,
+    notes: options.note ?? [],
     read: {
       name: raw.name,
       source: raw.source,
@@ -176,7 +184,8 @@ export async function runReport(
     };
   }
   if (options.pair !== undefined) {
-    const second = applyProcessing(await loadRecord(options.pair, options), options);
+    // --name names the main record only; the second component keeps its file's name.
+    const second = applyProcessing(await loadRecord(options.pair, { ...options, name: undefined }), options);
     const angleStepDeg = positiveNumber('--angle-step', options.angleStep ?? '1');
     // One damping ratio (5% where the grid has it): the rotation sweep costs about 180 single sweeps.
     const damping = grid.dampings.find((d) => Math.abs(d - 0.05) < 1e-12) ?? grid.dampings[0];
@@ -341,7 +350,9 @@ function methodStatements(method: Method): string[] {
   return [
     `Oscillators: ${METHOD_DESCRIPTIONS[method]}; ground acceleration linear between samples; sub-steps where Δt is long against the period, and each peak refined by cubic Hermite interpolation between steps.`,
     'Spectra: SD is the peak relative displacement; PSV = ωSD and PSA = ω²SD with ω = 2π/T; SV is the peak relative velocity and SA the peak absolute acceleration; at T = 0, PSA = PGA.',
-    ...Object.values(INFO_METHODS).slice(0, 6),
+    ...Object.entries(INFO_METHODS)
+      .slice(0, 6)
+      .map(([key, text]) => `${key[0].toUpperCase()}${key.slice(1).replace(/_/g, ' ')}: ${text}.`),
     'Units: SI inside the program (m, s, m/s², kN); g = 9.80665 m/s² at the edges.',
   ];
 }
