@@ -2,10 +2,14 @@ import { Command, CommanderError } from 'commander';
 import { isQuakesweepError } from '../errors.js';
 import { VERSION } from '../version.js';
 import { registerAnchor } from './commands/anchor.js';
+import { registerBatch } from './commands/batch.js';
 import { registerDamping } from './commands/damping.js';
+import { registerDemo } from './commands/demo.js';
 import { registerDesign } from './commands/design.js';
 import { registerFloor } from './commands/floor.js';
 import { registerInfo } from './commands/info.js';
+import { registerMerge } from './commands/merge.js';
+import { registerReport } from './commands/report.js';
 import { registerRotD } from './commands/rotd.js';
 import { registerSpectrum } from './commands/spectrum.js';
 import { registerSynth } from './commands/synth.js';
@@ -31,6 +35,10 @@ export function buildProgram(): Command {
   registerFloor(program);
   registerAnchor(program);
   registerSynth(program);
+  registerReport(program);
+  registerDemo(program);
+  registerBatch(program);
+  registerMerge(program);
   return program;
 }
 

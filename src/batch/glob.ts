@@ -1,0 +1,61 @@
+import { existsSync, readdirSync, statSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+
+/** Whether a path names a pattern: `*` or `?` in its last segment. */
+export function isPattern(path: string): boolean {
+  return /[*?]/.test(path.split(/[\\/]/).pop() ?? '');
+}
+
+/**
+ * A file-name pattern as a regular expression: `*` matches any run of characters (none too),
+ * `?` exactly one; everything else stands for itself. A leading dot must be matched explicitly
+ * (as in a POSIX shell), so `*` does not pick up hidden files.
+ */
+export function patternRegExp(pattern: string): RegExp {
+  const body = pattern
+    .replace(/[.+^${}()|[\]\\]/g, '\\$&')
+    .replace(/\*/g, '[^/\\\\]*')
+    .replace(/\?/g, '[^/\\\\]');
+  return new RegExp(`^${pattern.startsWith('.') ? '' : '(?!\\.)'}${body}$`);
+}
+
+export interface Expansion {
+  /** Every file named or matched, each once, sorted (code-unit order, so the same everywhere). */
+  files: string[];
+  /** Patterns that matched no file. */
+  unmatched: string[];
+}
+
+/**
+ * Expand the arguments of `batch`: a plain path is taken as is (a missing file is reported by the
+ * run, not here); a pattern with `*` or `?` in its last segment is matched against the files of
+ * its folder (no recursion, no `**`, no brackets; the folder part is literal).
+ */
+export function expandPatterns(args: readonly string[]): Expansion {
+  const found = new Set<string>();
+  const unmatched: string[] = [];
+  for (const arg of args) {
+    if (!isPattern(arg)) {
+      found.add(arg);
+      continue;
+    }
+    const folder = /[\\/]/.test(arg) ? dirname(arg) : '.';
+    const name = arg.split(/[\\/]/).pop() ?? arg;
+    const matcher = patternRegExp(name);
+    const matches =
+      existsSync(folder) && statSync(folder).isDirectory()
+        ? readdirSync(folder)
+            .filter((entry) => matcher.test(entry))
+            .map((entry) => (folder === '.' && !arg.startsWith('.') ? entry : join(folder, entry)))
+            .filter((path) => statSync(path).isFile())
+        : [];
+    if (matches.length === 0) unmatched.push(arg);
+    for (const path of matches) found.add(path);
+  }
+  return { files: [...found].sort(compareText), unmatched };
+}
+
+/** Code-unit order: the same on every machine and locale. */
+export function compareText(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}

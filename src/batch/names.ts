@@ -1,0 +1,46 @@
+import { compareText } from './glob.js';
+
+/** File names the suite itself writes in its folder, which a record folder must not take. */
+const RESERVED = /^(suite\.json|shard-.*\.json)$/i;
+
+/** The record's default name: the file's base name without its last extension (as the reader names it). */
+export function recordBaseName(file: string): string {
+  const base = file.split(/[\\/]/).pop() ?? file;
+  const dot = base.lastIndexOf('.');
+  return dot > 0 ? base.slice(0, dot) : base;
+}
+
+/**
+ * A folder name that stays inside the output folder whatever the record is called: letters,
+ * digits, `-`, `_` and single dots only (anything else becomes `_`), no `..`, no leading dot, at
+ * most 96 characters, never empty and never one of the suite's own file names.
+ */
+export function sanitiseName(name: string): string {
+  let safe = name
+    .normalize('NFC')
+    .replace(/[^A-Za-z0-9._-]/g, '_')
+    .replace(/\.{2,}/g, '_')
+    .replace(/^\.+/, '_')
+    .slice(0, 96);
+  if (safe === '' || safe === '_' || /^_+$/.test(safe)) safe = `record${safe}`;
+  if (RESERVED.test(safe)) safe = `record-${safe}`;
+  return safe;
+}
+
+/**
+ * Folder names for every file of the whole (unsharded) list, so that every shard gives a record
+ * the same name: sanitised, then made unique without regard to case in sorted-file order, the
+ * first keeping its name and the later ones taking `-2`, `-3`, … (the first free one).
+ */
+export function assignNames(files: readonly string[]): Map<string, string> {
+  const names = new Map<string, string>();
+  const taken = new Set<string>();
+  for (const file of [...files].sort(compareText)) {
+    const base = sanitiseName(recordBaseName(file));
+    let name = base;
+    for (let k = 2; taken.has(name.toLowerCase()); k++) name = `${base}-${k}`;
+    taken.add(name.toLowerCase());
+    names.set(file, name);
+  }
+  return names;
+}

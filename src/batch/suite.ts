@@ -1,0 +1,62 @@
+import { CAUTION } from '../caution.js';
+import { compareText } from './glob.js';
+import type { Shard } from './shard.js';
+import { STATISTICS_METHOD, type SuiteCurve, suiteStatistics } from './statistics.js';
+import type { SuiteSettings } from './work.js';
+
+/** A record of the suite that was swept, with its PSA in g (per damping, per period). */
+export interface SuiteRecord {
+  name: string;
+  file: string;
+  psaG: number[][];
+}
+
+export interface SuiteFailure {
+  file: string;
+  error: string;
+}
+
+/** The contract of DIR/suite.json. */
+export interface SuiteJson {
+  caution: string;
+  records: string[];
+  failed: SuiteFailure[];
+  periods_s: number[];
+  statistics: string;
+  spectra: SuiteCurve[];
+}
+
+/** suite.json of a set of records: names and failures sorted, statistics over the records by name. */
+export function suiteJson(
+  records: readonly SuiteRecord[],
+  failed: readonly SuiteFailure[],
+  settings: Pick<SuiteSettings, 'periodsS' | 'dampings'>,
+): SuiteJson {
+  const sorted = [...records].sort((a, b) => compareText(a.name, b.name));
+  return {
+    caution: CAUTION,
+    records: sorted.map((r) => r.name),
+    failed: [...failed].sort((a, b) => compareText(a.file, b.file)),
+    periods_s: [...settings.periodsS],
+    statistics: STATISTICS_METHOD,
+    spectra: suiteStatistics(sorted, settings.dampings, settings.periodsS.length),
+  };
+}
+
+export const SHARD_FORMAT = 'quakesweep-shard-1';
+
+/** What one shard writes (DIR/shard-i-of-N.json): enough to merge to the same suite.json exactly. */
+export interface ShardJson {
+  caution: string;
+  format: typeof SHARD_FORMAT;
+  shard: Shard;
+  /** Every file of the whole run, sorted, so that a merge can check the shards belong together. */
+  all_files: string[];
+  settings: SuiteSettings;
+  records: SuiteRecord[];
+  failed: SuiteFailure[];
+}
+
+export function shardFileName(shard: Shard): string {
+  return `shard-${shard.index}-of-${shard.count}.json`;
+}

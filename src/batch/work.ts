@@ -1,0 +1,66 @@
+import { mkdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { isQuakesweepError } from '../errors.js';
+import type { Method } from '../oscillator/recurrence.js';
+import { writeFileAtomic } from '../output/atomic.js';
+import { formatJson, spectrumToJson } from '../output/spectrum-json.js';
+import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';
+import { type ReadOptions, readRecordText, unitWarnings } from '../record/read.js';
+import { responseSpectrum } from '../spectrum/spectrum.js';
+import { STANDARD_GRAVITY_MS2 } from '../units.js';
+
+/** What every record of a suite shares: how to read it, process it and sweep it (plain data, for workers). */
+export interface SuiteSettings {
+  read: Omit<ReadOptions, 'source' | 'name'>;
+  plan: ProcessingPlan;
+  periodsS: number[];
+  dampings: number[];
+  method: Method;
+}
+
+export interface RecordTask {
+  file: string;
+  /** Folder name under the output folder (already sanitised and unique). */
+  name: string;
+  outDir: string;
+  settings: SuiteSettings;
+}
+
+export type RecordOutcome =
+  | { ok: true; file: string; name: string; psaG: number[][]; warnings: string[] }
+  | { ok: false; file: string; name: string; error: string };
+
+/** One line for a person from whatever a record's reading or sweeping threw. */
+export function describeError(error: unknown, file: string): string {
+  if (isQuakesweepError(error))
+    return error.file === undefined ? `${file}: ${error.message}` : error.describe();
+  const errno = error as NodeJS.ErrnoException;
+  if (errno?.code === 'ENOENT') return `${file}: no such file`;
+  if (errno?.code === 'EISDIR') return `${file}: is a folder`;
+  if (errno?.code === 'EACCES') return `${file}: permission denied`;
+  const message = error instanceof Error ? error.message : String(error);
+  return `${file}: ${message.split('\n')[0]}`;
+}
+
+/**
+ * Read, process and sweep one record, and write DIR/<name>/spectra.json (the JSON of
+ * `quakesweep spectrum`). Never throws: a bad record comes back as an outcome with its error.
+ */
+export function processRecord(task: RecordTask): RecordOutcome {
+  const { file, name, settings } = task;
+  try {
+    const text = readFileSync(file, 'utf8');
+    const record = applyProcessingPlan(
+      readRecordText(text, { ...settings.read, source: file }),
+      settings.plan,
+    );
+    const spectrum = responseSpectrum(record, settings);
+    const folder = join(task.outDir, name);
+    mkdirSync(folder, { recursive: true });
+    writeFileAtomic(join(folder, 'spectra.json'), formatJson(spectrumToJson(spectrum)), [file]);
+    const psaG = spectrum.curves.map((curve) => Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2));
+    return { ok: true, file, name, psaG, warnings: unitWarnings(record) };
+  } catch (error) {
+    return { ok: false, file, name, error: describeError(error, file) };
+  }
+}

@@ -1,0 +1,120 @@
+import { existsSync, readFileSync } from 'node:fs';
+import { dirname, join, relative, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { Command } from 'commander';
+import { cautionLines } from '../../caution.js';
+import { usageError } from '../../errors.js';
+import { registerReport } from './report.js';
+
+/** The package's records/ folder, found from this file (dist/cli/commands/demo.js) whatever the cwd. */
+export function recordsFolder(): string {
+  const here = dirname(fileURLToPath(import.meta.url));
+  const folder = resolve(here, '..', '..', '..', 'records');
+  if (!existsSync(join(folder, 'marrowby-h1.csv')))
+    throw usageError(`the demo records are missing from ${folder}`);
+  return folder;
+}
+
+/** A path as short as it can be said from the cwd (relative when it lies below it). */
+function shown(path: string): string {
+  const r = relative(process.cwd(), path);
+  return r !== '' && !r.startsWith('..') ? r : path;
+}
+
+/**
+ * The arguments of `quakesweep report` for the invented Marrowby Flats scenario (records/README.md):
+ * H1 processed, four dampings, an invented ASCE 7-16 site, RotD of H1 and H2, the invented generator
+ * on grade and the invented cabinet on level 4 of an invented one-mode building.
+ */
+export function demoReportArguments(records: string, out: string): string[] {
+  const file = (name: string) => shown(join(records, name));
+  return [
+    'report',
+    file('marrowby-h1.csv'),
+    '--units',
+    'g',
+    '--name',
+    'Marrowby Flats H1 (invented)',
+    '--baseline',
+    'linear',
+    '--taper',
+    '5%',
+    '--filter',
+    'bandpass:0.1-25',
+    '--damping',
+    '2%,5%,10%,20%',
+    '--target',
+    'asce7-16:sds=1.0,sd1=0.6,tl=8',
+    '--pair',
+    file('marrowby-h2.csv'),
+    '--equipment',
+    file('equipment-generator.json'),
+    '--equipment',
+    file('equipment-cabinet-floor4.json'),
+    '--building-period',
+    '0.8',
+    '--modal-factor',
+    '1.3',
+    '--broaden',
+    '--note',
+    'Everything in this report is invented for demonstration: the Marrowby Flats site, the Corrin Ridge scenario event, the records (written by quakesweep synth), the building and the equipment. The ASCE 7-16 site values S_DS = 1.0 g, S_D1 = 0.6 g, T_L = 8 s are invented too. Nothing here may be used for design.',
+    '--note',
+    'Equipment: the invented standby generator G-1 on grade, and the invented cabinet EC-4 on level 4 of an invented building idealised by one mode (T_b = 0.8 s, ζ_b = 5%, Γφ = 1.3, floor spectrum peaks broadened ±15%).',
+    '--title',
+    'Marrowby Flats pumping station (invented scenario): record H1',
+    '--out',
+    out,
+  ];
+}
+
+export function registerDemo(program: Command): void {
+  program
+    .command('demo')
+    .description('write the full report of the invented Marrowby Flats scenario (records/README.md)')
+    .option('--out <dir>', 'folder for the report (created if its parent exists)', 'demo-output')
+    .action(async (options: { out: string }) => {
+      await runDemo(options.out);
+    });
+}
+
+export async function runDemo(out: string): Promise<void> {
+  const args = demoReportArguments(recordsFolder(), out);
+  const started = Date.now();
+  // A program of its own, so that the report records exactly the report command it ran.
+  const program = new Command('quakesweep').exitOverride();
+  registerReport(program);
+  await program.parseAsync(args, { from: 'user' });
+  const seconds = ((Date.now() - started) / 1000).toFixed(1);
+  const spectra = JSON.parse(readFileSync(join(out, 'spectra.json'), 'utf8'));
+  const lines = cautionLines(92).map((line) => `! ${line}`);
+  lines.push(
+    '',
+    'Invented scenario: Marrowby Flats pumping station, H1 (all data invented; see records/README.md).',
+  );
+  lines.push('ASCE 7-16 target with invented site values S_DS 1.0 g, S_D1 0.6 g, T_L 8 s.', '');
+  lines.push(`${'damping'.padEnd(9)} ${'peak PSA g'.padStart(11)} ${'at T s'.padStart(8)}`);
+  for (const curve of spectra.spectra as { damping: number; psa_g: number[] }[]) {
+    let best = 0;
+    curve.psa_g.forEach((v, i) => {
+      if (spectra.periods_s[i] > 0 && v > curve.psa_g[best]) best = i;
+    });
+    lines.push(
+      `${`${curve.damping * 100}%`.padEnd(9)} ${curve.psa_g[best].toPrecision(4).padStart(11)} ${Number(spectra.periods_s[best].toPrecision(3)).toString().padStart(8)}`,
+    );
+  }
+  const scaling = spectra.scaling as { factor: number } | undefined;
+  if (scaling)
+    lines.push('', `scale factor to the target at 5%: ${scaling.factor.toPrecision(4)} (not applied)`);
+  lines.push('', `${'equipment'.padEnd(52)} ${'horizontal'.padStart(12)} ${'max tension'.padStart(12)}`);
+  for (const n of [1, 2]) {
+    const a = JSON.parse(readFileSync(join(out, `anchorage-${n}.json`), 'utf8'));
+    const unit = a.force_unit as string;
+    lines.push(
+      `${String(a.equipment.name).padEnd(52)} ${`${a.horizontal.force_for_anchors.toPrecision(4)} ${unit}`.padStart(12)} ${`${a.anchors.max_tension.toPrecision(4)} ${unit}`.padStart(12)}`,
+    );
+  }
+  lines.push('(anchor demands only: capacities are not checked)');
+  lines.push('', `report written in ${seconds} s: ${shown(resolve(out, 'report.html'))}`);
+  lines.push('open it in a browser; it needs no network and prints on A4 or letter.');
+  process.stdout.write(`${lines.join('\n')}\n`);
+}

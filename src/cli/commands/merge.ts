@@ -1,0 +1,97 @@
+import { existsSync, mkdirSync, readdirSync, readFileSync, realpathSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import type { Command } from 'commander';
+import { sanitiseName } from '../../batch/names.js';
+import {
+  SHARD_FORMAT,
+  type ShardJson,
+  type SuiteFailure,
+  type SuiteRecord,
+  suiteJson,
+} from '../../batch/suite.js';
+import { inputError, usageError } from '../../errors.js';
+import { writeFileAtomic } from '../../output/atomic.js';
+import { formatJson } from '../../output/spectrum-json.js';
+import { prepareOutputFolder } from './report.js';
+
+export function registerMerge(program: Command): void {
+  program
+    .command('merge')
+    .description('combine the outputs of `batch --shard` runs into the suite.json of a single run')
+    .argument('<dirs...>', 'folders holding shard-i-of-N.json files (and the shards’ record folders)')
+    .requiredOption(
+      '--out <dir>',
+      'folder for suite.json and the record folders (may be one of the shard folders)',
+    )
+    .action((dirs: string[], options: { out: string }) => {
+      runMerge(dirs, options.out);
+    });
+}
+
+const SHARD_FILE = /^shard-(\d+)-of-(\d+)\.json$/;
+
+/** Read every shard summary, check that they make one whole run, copy the record folders, write suite.json. */
+export function runMerge(dirs: string[], out: string): void {
+  const shards: { dir: string; file: string; json: ShardJson }[] = [];
+  for (const dir of dirs) {
+    if (!existsSync(dir)) throw usageError(`${dir}: no such folder`);
+    for (const entry of readdirSync(dir)
+      .filter((e) => SHARD_FILE.test(e))
+      .sort()) {
+      const file = join(dir, entry);
+      let json: ShardJson;
+      try {
+        json = JSON.parse(readFileSync(file, 'utf8')) as ShardJson;
+      } catch {
+        throw inputError('not valid JSON; expected a shard summary of `quakesweep batch --shard`', { file });
+      }
+      if (json?.format !== SHARD_FORMAT)
+        throw inputError(`not a shard summary (format ${SHARD_FORMAT})`, { file });
+      shards.push({ dir, file, json });
+    }
+  }
+  if (shards.length === 0) throw usageError(`no shard-i-of-N.json in ${dirs.join(', ')}`);
+  const first = shards[0].json;
+  const count = first.shard.count;
+  const seen = new Map<number, string>();
+  for (const { file, json } of shards) {
+    if (json.shard.count !== count)
+      throw inputError(`is shard ${json.shard.index} of ${json.shard.count}, others are of ${count}`, {
+        file,
+      });
+    if (JSON.stringify(json.settings) !== JSON.stringify(first.settings))
+      throw inputError('was run with other reading, processing or grid options', { file });
+    if (JSON.stringify(json.all_files) !== JSON.stringify(first.all_files))
+      throw inputError('was run on another list of files', { file });
+    const again = seen.get(json.shard.index);
+    if (again !== undefined)
+      throw inputError(`shard ${json.shard.index} of ${count} is also in ${again}`, { file });
+    seen.set(json.shard.index, file);
+  }
+  const missing = Array.from({ length: count }, (_, i) => i + 1).filter((i) => !seen.has(i));
+  if (missing.length > 0)
+    throw usageError(`shard${missing.length > 1 ? 's' : ''} ${missing.join(', ')} of ${count} missing`);
+
+  prepareOutputFolder(out);
+  const records: SuiteRecord[] = [];
+  const failed: SuiteFailure[] = [];
+  for (const { dir, file, json } of shards) {
+    const sameFolder = realpathSync(dir) === realpathSync(resolve(out));
+    for (const record of json.records) {
+      if (typeof record.name !== 'string' || sanitiseName(record.name) !== record.name) {
+        throw inputError(`record name ${JSON.stringify(record.name)} is not a safe folder name`, { file });
+      }
+      records.push(record);
+      if (!sameFolder) {
+        const from = join(dir, record.name, 'spectra.json');
+        mkdirSync(join(out, record.name), { recursive: true });
+        writeFileAtomic(join(out, record.name, 'spectra.json'), readFileSync(from));
+      }
+    }
+    failed.push(...json.failed);
+  }
+  writeFileAtomic(join(out, 'suite.json'), formatJson(suiteJson(records, failed, first.settings)));
+  process.stderr.write(
+    `quakesweep: merged ${count} shards: ${records.length} records, ${failed.length} failed; ${join(out, 'suite.json')}\n`,
+  );
+}

@@ -1,0 +1,248 @@
+import { CAUTION } from '../caution.js';
+import type { GroundMotionMeasures } from '../record/measures.js';
+import type { DampingComparison } from '../spectrum/damping.js';
+import type { RotDSpectra } from '../spectrum/rotd.js';
+import type { Spectrum } from '../spectrum/spectrum.js';
+import type { LengthUnit } from '../units.js';
+import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
+import { definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
+import { inlineSvg } from './inline-svg.js';
+import {
+  dampingSection,
+  measuresSection,
+  peaksSection,
+  processingSection,
+  type RecordFacts,
+  recordSection,
+  rotdSection,
+} from './sections.js';
+import { REPORT_CSS } from './styles.js';
+
+export type { ReportAnchorage } from './anchorage-section.js';
+export type { RecordFacts } from './sections.js';
+
+/** A figure of the report: the SVG text as the figure functions write it, and the file it is also saved as. */
+export interface ReportFigure {
+  file: string;
+  caption: string;
+  svg: string;
+}
+
+/** The target comparison, as `quakesweep spectrum --target` writes it in its JSON. */
+export interface ReportTarget {
+  description: string;
+  factor: number;
+  rangeS: [number, number];
+  periodCount: number;
+  meanRatio: number;
+  minRatio: number;
+  maxRatio: number;
+  criterion: string;
+  damping: number;
+  applied: boolean;
+  /** Target PSA at the grid periods (null where the target does not cover the period). */
+  psaG: (number | null)[];
+}
+
+/** Everything one report shows. The function that renders it does no I/O. */
+export interface ReportInput {
+  title: string;
+  /** Paragraphs under the title (where the inputs come from, what they are for). */
+  notes: string[];
+  read: RecordFacts;
+  spectrum: Spectrum;
+  measures: GroundMotionMeasures;
+  lengthUnit: LengthUnit;
+  spectrumFigures: ReportFigure[];
+  target?: ReportTarget;
+  damping?: { comparison: DampingComparison; figure: ReportFigure };
+  rotd?: { spectra: RotDSpectra; figure: ReportFigure };
+  anchorage: { item: ReportAnchorage; figures: ReportFigure[] }[];
+  /** Method statements from the rest of the program (oscillator, spectra). */
+  methods: string[];
+  version: string;
+  /** The command line that produced the report, as words (quoted for a POSIX shell when shown). */
+  commandLine: string[];
+  /** The folder the command was run from, for the relative paths in it. */
+  workingDirectory: string;
+  /** ISO 8601 time of generation: the one item that differs between two runs of the same command. */
+  generatedAt: string;
+  /** The other files written beside report.html. */
+  files: string[];
+}
+
+/** Quote a word for a POSIX shell, only where it needs it. */
+export function shellQuote(word: string): string {
+  if (/^[A-Za-z0-9_@%+=:,./-]+$/.test(word)) return word;
+  return `'${word.replace(/'/g, `'\\''`)}'`;
+}
+
+/** Limits of use, stated in every report. */
+export const LIMITS_OF_USE = [
+  'Linear elastic single-degree-of-freedom oscillators with viscous damping: no yielding, no soil–structure interaction, no higher modes of the equipment.',
+  'The spectra describe this one record as processed here; one record is not a hazard level. Design motions come from a site-specific hazard study or the governing code.',
+  'Processing (baseline, taper, filter) changes long-period values: periods beyond about 1/(1.25 × high-pass corner) are not reliable after high-pass filtering (common practice).',
+  'Code spectra are drawn from the parameters given; this program does not select site class, risk category or coefficients.',
+  'Anchorage results are demands only; anchor capacities and embedments are not checked.',
+];
+
+/**
+ * The self-contained report: one HTML document with its style sheet and figures inline, no script
+ * and no reference to any address, so it opens offline and prints on A4 or US letter. Every piece
+ * of text from a file or an option is escaped.
+ */
+export function renderReport(input: ReportInput): string {
+  const sections: { id: string; title: string; body: string }[] = [];
+  let tableNumber = 3;
+  let figureNumber = 1;
+  const figure = (f: ReportFigure, id: string) => {
+    const n = figureNumber++;
+    return `<figure id="figure-${n}">\n${inlineSvg(f.svg, `${id}-${n}`)}\n<figcaption><strong>Figure ${n}.</strong> ${escapeHtml(f.caption)} (also saved as <code>${escapeHtml(f.file)}</code>)</figcaption>\n</figure>`;
+  };
+  sections.push({ id: 'record', title: 'Record', body: recordSection(input.read, input.spectrum.record) });
+  sections.push({
+    id: 'processing',
+    title: 'Processing applied',
+    body: processingSection(input.spectrum.record.processing),
+  });
+  sections.push({ id: 'measures', title: 'Ground-motion measures', body: measuresSection(input.measures) });
+  sections.push({
+    id: 'spectra',
+    title: 'Response spectra',
+    body: [
+      peaksSection(input.spectrum, input.lengthUnit, tableNumber++),
+      paragraph(
+        'All values for every period are in spectra.json and spectra.csv beside this report.',
+        'note',
+      ),
+      ...input.spectrumFigures.map((f) => figure(f, 'spectra')),
+    ].join('\n'),
+  });
+  if (input.target !== undefined) {
+    const t = input.target;
+    sections.push({
+      id: 'target',
+      title: 'Comparison with the target spectrum',
+      body: [
+        definitionTable(`Table ${tableNumber++}. Target and amplitude scaling`, [
+          ['Target', t.description],
+          ['Damping compared', `${formatNumber(t.damping * 100, 6)}%`],
+          ['Scale factor', formatNumber(t.factor, 5)],
+          [
+            'Fitted over',
+            `${formatNumber(t.rangeS[0])} to ${formatNumber(t.rangeS[1])} s (${t.periodCount} grid periods)`,
+          ],
+          [
+            'Scaled record / target',
+            `mean ${formatNumber(t.meanRatio)}, least ${formatNumber(t.minRatio)}, greatest ${formatNumber(t.maxRatio)}`,
+          ],
+          ['Criterion', t.criterion],
+          [
+            'Applied to the spectra of this report',
+            t.applied ? 'yes: every spectral value above is scaled' : 'no: the values above are as recorded',
+          ],
+        ]),
+        paragraph('The target is drawn on the PSA and four-way figures of section 4.', 'note'),
+      ].join('\n'),
+    });
+  }
+  if (input.damping !== undefined) {
+    sections.push({
+      id: 'damping',
+      title: 'Damping comparison',
+      body: [
+        dampingSection(input.damping.comparison, tableNumber++),
+        figure(input.damping.figure, 'damping'),
+      ].join('\n'),
+    });
+  }
+  if (input.rotd !== undefined) {
+    sections.push({
+      id: 'rotd',
+      title: 'Two horizontal components: RotD50 and RotD100',
+      body: [rotdSection(input.rotd.spectra, tableNumber++), figure(input.rotd.figure, 'rotd')].join('\n'),
+    });
+  }
+  if (input.anchorage.length > 0) {
+    const parts: string[] = [paragraph(CAUTION, 'caution-inline')];
+    input.anchorage.forEach(({ item, figures }, i) => {
+      const number = `${sections.length + 1}.${i + 1}`;
+      parts.push(
+        `<h3>${number} ${escapeHtml(String((item.json.equipment as { name?: unknown }).name ?? item.file))}</h3>`,
+      );
+      parts.push(anchorageSection(item, number, tableNumber));
+      tableNumber += 3;
+      for (const f of figures) parts.push(figure(f, `anchor-${i + 1}`));
+    });
+    sections.push({ id: 'anchorage', title: 'Equipment anchorage demands', body: parts.join('\n') });
+  }
+  sections.push({ id: 'method', title: 'Method and assumptions', body: list(input.methods) });
+  sections.push({ id: 'limits', title: 'Limits of use', body: list(LIMITS_OF_USE) });
+  sections.push({
+    id: 'reproduce',
+    title: 'Reproducing this report',
+    body: reproduceSection(input, tableNumber),
+  });
+
+  const contents = sections
+    .map((s, i) => `<li><a href="#${s.id}">${i + 1}. ${escapeHtml(s.title)}</a></li>`)
+    .join('\n');
+  const body = sections
+    .map((s, i) => `<section id="${s.id}">\n<h2>${i + 1}. ${escapeHtml(s.title)}</h2>\n${s.body}\n</section>`)
+    .join('\n');
+  return `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<meta name="generator" content="quakesweep ${escapeHtml(input.version)}">
+<title>${escapeHtml(input.title)}</title>
+<style>${REPORT_CSS}</style>
+</head>
+<body>
+<header class="title">
+<h1>${escapeHtml(input.title)}</h1>
+<p>Response spectrum calculation · quakesweep ${escapeHtml(input.version)} · record ${escapeHtml(input.read.name)}</p>
+</header>
+<div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
+${input.notes.map((note) => paragraph(note, 'intro')).join('\n')}
+<nav class="contents"><strong>Contents</strong><ol class="plain">
+${contents}
+</ol></nav>
+${body}
+<footer>${escapeHtml(CAUTION)}</footer>
+</body>
+</html>
+`;
+}
+
+function reproduceSection(input: ReportInput, tableNumber: number): string {
+  const command = ['quakesweep', ...input.commandLine].map(shellQuote).join(' ');
+  return [
+    definitionTable(`Table ${tableNumber}. Program and run`, [
+      ['Program', `quakesweep ${input.version}`],
+      ['Run from the folder', input.workingDirectory],
+      ['Files written beside report.html', input.files.join(', ')],
+    ]),
+    paragraph(
+      'Command line (run it again with the same inputs and version to get the same numbers and figures):',
+    ),
+    `<pre class="command">${escapeHtml(command)}</pre>`,
+    `<p class="nondeterministic">Generated at <time datetime="${escapeHtml(input.generatedAt)}">${escapeHtml(input.generatedAt)}</time>. This time is the one item of the report that is not determined by the inputs; everything else is the same on every run (set SOURCE_DATE_EPOCH to fix it too).</p>`,
+    table(
+      `Table ${tableNumber + 1}. Oscillator grid`,
+      ['Quantity', 'Value'],
+      [
+        [
+          'Periods',
+          `${input.spectrum.periodsS.length}, ${formatNumber(input.spectrum.periodsS[0])} to ${formatNumber(input.spectrum.periodsS[input.spectrum.periodsS.length - 1])} s`,
+        ],
+        [
+          'Damping ratios',
+          input.spectrum.curves.map((c) => `${formatNumber(c.damping * 100, 6)}%`).join(', '),
+        ],
+        ['Step method', input.spectrum.method],
+      ],
+    ),
+  ].join('\n');
+}

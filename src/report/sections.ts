@@ -1,0 +1,210 @@
+import type { GroundMotionMeasures } from '../record/measures.js';
+import { PROCESSING_ORDER } from '../record/process.js';
+import type { DampingComparison } from '../spectrum/damping.js';
+import type { RotDSpectra } from '../spectrum/rotd.js';
+import type { Spectrum } from '../spectrum/spectrum.js';
+import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
+import { type Cell, definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
+
+/** What the report says of the record as it was read (before processing). */
+export interface RecordFacts {
+  name: string;
+  source: string;
+  dtS: number;
+  npts: number;
+  unitsRead: string;
+}
+
+const g = STANDARD_GRAVITY_MS2;
+const percent = (damping: number) => `${Number((damping * 100).toPrecision(6))}%`;
+
+export function recordSection(read: RecordFacts, processed: { dtS: number; npts: number }): string {
+  const rows: [string, string][] = [
+    ['Name', read.name],
+    ['Source file', read.source],
+    ['Units read', `${read.unitsRead} (converted to m/s² inside the program)`],
+    ['Time step Δt as read', `${read.dtS} s`],
+    ['Samples as read', String(read.npts)],
+    ['Length as read', `${formatNumber((read.npts - 1) * read.dtS, 6)} s`],
+  ];
+  if (processed.dtS !== read.dtS || processed.npts !== read.npts) {
+    rows.push(['Time step after processing', `${processed.dtS} s`]);
+    rows.push(['Samples after processing', String(processed.npts)]);
+  }
+  return definitionTable('Table 1. The record', rows);
+}
+
+export function processingSection(steps: readonly { operation: string; description: string }[]): string {
+  if (steps.length === 0)
+    return paragraph(
+      'None: the record is used as read (no baseline correction, taper, filter or resampling).',
+    );
+  return [
+    paragraph(`Applied in this order (the program's fixed order is ${PROCESSING_ORDER.join(' → ')}):`),
+    `<ol>\n${steps.map((s) => `<li><strong>${escapeHtml(s.operation)}</strong>: ${escapeHtml(s.description)}</li>`).join('\n')}\n</ol>`,
+  ].join('\n');
+}
+
+export function measuresSection(m: GroundMotionMeasures): string {
+  const at = (t: number) => `at t = ${formatNumber(t, 5)} s`;
+  const rows: Cell[][] = [
+    ['Peak ground acceleration PGA', m.pga.value / g, 'g', at(m.pga.timeS)],
+    ['Peak ground velocity PGV', m.pgv.value, 'm/s', at(m.pgv.timeS)],
+    ['Peak ground displacement PGD', m.pgd.value, 'm', at(m.pgd.timeS)],
+    ['Arias intensity I_a', m.ariasMS, 'm/s', 'π/(2g)∫a²dt (Arias 1970)'],
+    [
+      'Significant duration D5–75',
+      m.d5to75S,
+      's',
+      `${formatNumber(m.t5S)} to ${formatNumber(m.t75S)} s (Trifunac and Brady 1975)`,
+    ],
+    ['Significant duration D5–95', m.d5to95S, 's', `${formatNumber(m.t5S)} to ${formatNumber(m.t95S)} s`],
+    [
+      `Bracketed duration (|a| ≥ ${formatNumber(m.bracketThresholdMS2 / g)} g)`,
+      m.bracketedS,
+      's',
+      m.bracketStartS === null
+        ? 'threshold never reached'
+        : `${formatNumber(m.bracketStartS)} to ${formatNumber(m.bracketEndS)} s (Bolt 1973)`,
+    ],
+    ['Cumulative absolute velocity CAV', m.cavMS, 'm/s', '∫|a|dt (EPRI 1988), no threshold'],
+    [
+      'Mean period T_m',
+      m.meanPeriodS,
+      's',
+      `Fourier lines ${formatNumber(m.meanPeriodBandHz[0])}–${formatNumber(m.meanPeriodBandHz[1])} Hz (Rathje, Abrahamson and Bray 1998)`,
+    ],
+  ];
+  return [
+    table(
+      'Table 2. Ground-motion measures of the processed record',
+      ['Measure', 'Value', 'Unit', 'Where / how'],
+      rows,
+    ),
+    paragraph(
+      'Velocity and displacement by the trapezoidal rule from rest, after the processing of section 2.',
+      'note',
+    ),
+  ].join('\n');
+}
+
+/** Index of the largest value at a period above 0. */
+function peakIndex(periodsS: Float64Array, values: Float64Array): number {
+  let best = -1;
+  for (let p = 0; p < values.length; p++) {
+    if (periodsS[p] > 0 && (best < 0 || values[p] > values[best])) best = p;
+  }
+  return Math.max(best, 0);
+}
+
+/** PSA at the grid period nearest to `t`, with that period. */
+function nearest(periodsS: Float64Array, t: number): number {
+  let best = 0;
+  for (let p = 1; p < periodsS.length; p++)
+    if (Math.abs(periodsS[p] - t) < Math.abs(periodsS[best] - t)) best = p;
+  return best;
+}
+
+export function peaksSection(spectrum: Spectrum, lengthUnit: LengthUnit, tableNumber: number): string {
+  const perLength = 1 / LENGTH_UNITS[lengthUnit];
+  const periods = spectrum.periodsS;
+  const short = nearest(periods, 0.2);
+  const long = nearest(periods, 1);
+  const rows = spectrum.curves.map((curve): Cell[] => {
+    const pPsa = peakIndex(periods, curve.psaMS2);
+    const pSd = peakIndex(periods, curve.sdM);
+    const pPsv = peakIndex(periods, curve.psvMS);
+    return [
+      percent(curve.damping),
+      curve.psaMS2[pPsa] / g,
+      periods[pPsa],
+      curve.psaMS2[short] / g,
+      curve.psaMS2[long] / g,
+      curve.sdM[pSd] * perLength,
+      periods[pSd],
+      curve.psvMS[pPsv] * perLength,
+      periods[pPsv],
+    ];
+  });
+  return table(
+    `Table ${tableNumber}. Peak spectral values (grid of ${periods.length} periods, ${formatNumber(periods[0])} to ${formatNumber(periods[periods.length - 1])} s)`,
+    [
+      'Damping ζ',
+      'Peak PSA (g)',
+      'at T (s)',
+      `PSA at T = ${formatNumber(periods[short])} s (g)`,
+      `PSA at T = ${formatNumber(periods[long])} s (g)`,
+      `Peak SD (${lengthUnit})`,
+      'at T (s)',
+      `Peak PSV (${lengthUnit}/s)`,
+      'at T (s)',
+    ],
+    rows,
+  );
+}
+
+export function dampingSection(comparison: DampingComparison, tableNumber: number): string {
+  const rows = comparison.curves.map((curve): Cell[] => [
+    percent(curve.damping),
+    curve.geometricMeanRatio,
+    curve.published.ec8Eta,
+    curve.published.newmarkHall.acceleration,
+    curve.published.newmarkHall.velocity,
+    curve.published.newmarkHall.displacement,
+  ]);
+  return [
+    table(
+      `Table ${tableNumber}. PSA(ζ)/PSA(${percent(comparison.referenceDamping)}): this record beside published factors`,
+      [
+        'Damping ζ',
+        'Record, geometric mean over T > 0 (–)',
+        'EC8 η(ζ)/η(5%) (–)',
+        'Newmark–Hall, acceleration (–)',
+        'Newmark–Hall, velocity (–)',
+        'Newmark–Hall, displacement (–)',
+      ],
+      rows,
+    ),
+    list([
+      'EC8: EN 1998-1:2004 §3.2.2.2, Eq. 3.6, η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent.',
+      'Newmark and Hall (1982) median amplification factors, ratio at ζ to that at 5% (coefficients from memory).',
+      'The record ratio is the geometric mean over the grid periods above 0 s; it varies with period (see the figure).',
+    ]),
+  ].join('\n');
+}
+
+export function rotdSection(spectra: RotDSpectra, tableNumber: number): string {
+  const periods = spectra.periodsS;
+  const rows: Cell[][] = [];
+  for (const curve of spectra.curves) {
+    for (const t of [0, 0.2, 0.5, 1, 2]) {
+      if (t < periods[0] || t > periods[periods.length - 1]) continue;
+      const p = nearest(periods, t);
+      rows.push([
+        percent(curve.damping),
+        periods[p],
+        curve.rotd50MS2[p] / g,
+        curve.rotd100MS2[p] / g,
+        curve.geomeanMS2[p] / g,
+        curve.rotd50MS2[p] > 0 ? curve.rotd100MS2[p] / curve.rotd50MS2[p] : null,
+      ]);
+    }
+  }
+  return [
+    definitionTable('Components', [
+      ['First component', `${spectra.records[0].name} (${spectra.records[0].source})`],
+      ['Second component', `${spectra.records[1].name} (${spectra.records[1].source})`],
+      ['Rotation angles', `0 ≤ θ < 180° in steps of ${spectra.angleStepDeg}°`],
+      ['Zero padding of the shorter component', `${spectra.paddedSamples} samples`],
+    ]),
+    table(
+      `Table ${tableNumber}. Two-component PSA at selected periods`,
+      ['Damping ζ', 'T (s)', 'RotD50 (g)', 'RotD100 (g)', 'Geometric mean (g)', 'RotD100/RotD50 (–)'],
+      rows,
+    ),
+    paragraph(
+      'PSA(θ) = ω² max|u₁ cos θ + u₂ sin θ|; RotD50 is the median over the angles and RotD100 the largest (Boore 2010); the geometric mean is √(PSA₁·PSA₂) of the components as recorded.',
+      'note',
+    ),
+  ].join('\n');
+}
