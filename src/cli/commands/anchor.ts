@@ -196,7 +196,7 @@ export function readSpectrumFile(file: string, equipment: Equipment): SpectrumFi
   return { value, isFloor, floorNote };
 }
 
-function planInput(analysis: AnchorageAnalysis) {
+export function planInput(analysis: AnchorageAnalysis) {
   const e = analysis.equipment;
   const system = EQUIPMENT_UNITS[e.units];
   const l = (m: number) => m / system.mPerLength;

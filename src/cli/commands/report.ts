@@ -10,10 +10,19 @@ import { METHOD_DESCRIPTIONS, type Method } from '../../oscillator/recurrence.js
 import { writeFileAtomic } from '../../output/atomic.js';
 import { spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
-import { historiesFigure, psaFigure, psvFigure, sdFigure, tripartiteFigure } from '../../plot/index.js';
+import {
+  anchorPlanSvg,
+  dampingFigure,
+  historiesFigure,
+  psaFigure,
+  psvFigure,
+  rotdFigure,
+  sdFigure,
+  tripartiteFigure,
+} from '../../plot/index.js';
+import { integrateRecord } from '../../record/integrate.js';
 import { groundMotionMeasures } from '../../record/measures.js';
 import type { GroundRecord } from '../../record/record.js';
-import { anchorPlanFigure, dampingRatioFigure, rotdFigure } from '../../report/figures.js';
 import { type ReportFigure, type ReportInput, type ReportTarget, renderReport } from '../../report/report.js';
 import { compareDamping } from '../../spectrum/damping.js';
 import { type BuildingMode, floorSpectrum } from '../../spectrum/floor.js';
@@ -24,6 +33,7 @@ import { VERSION } from '../../version.js';
 import { addProcessingOptions, applyProcessing } from '../processing-options.js';
 import { addRecordOptions, loadRecord, positiveNumber } from '../record-options.js';
 import { addTargetOptions, applyTarget, loadTarget } from '../target-options.js';
+import { planInput } from './anchor.js';
 import { buildingFromOptions, floorAssumptions } from './floor.js';
 import { INFO_METHODS } from './info.js';
 import { addGridOptions, gridFromOptions, type SpectrumCliOptions } from './spectrum.js';
@@ -146,7 +156,7 @@ export async function runReport(
     {
       file: 'histories.svg',
       caption: 'Ground acceleration, velocity and displacement of the processed record',
-      svg: historiesFigure(record, { lengthUnit }),
+      svg: historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit }),
     },
   ];
   const input: ReportInput = {
@@ -179,7 +189,11 @@ export async function runReport(
       figure: {
         file: 'damping.svg',
         caption: 'PSA at each damping ratio relative to 5%',
-        svg: dampingRatioFigure(comparison, record.name),
+        svg: dampingFigure({
+          record: spectrum.record,
+          methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
+          comparison,
+        }),
       },
     };
   }
@@ -192,7 +206,11 @@ export async function runReport(
     const spectra = rotDSpectra(processed, second, { ...grid, dampings: [damping], angleStepDeg });
     input.rotd = {
       spectra,
-      figure: { file: 'rotd.svg', caption: 'RotD50, RotD100 and geometric mean', svg: rotdFigure(spectra) },
+      figure: {
+        file: 'rotd.svg',
+        caption: 'RotD50, RotD100 and geometric mean',
+        svg: rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] }),
+      },
     };
     input.methods.push(
       `RotD spectra: at ζ = ${damping * 100}% only; both components processed alike and unscaled (a target scaling is not applied to them).`,
@@ -210,7 +228,7 @@ export async function runReport(
       {
         file: `anchor-plan-${n}.svg`,
         caption: `Anchor plan of equipment ${n} with the worst tensions`,
-        svg: anchorPlanFigure(analysis),
+        svg: anchorPlanSvg(planInput(analysis)),
       },
     ];
     if (demand.floor !== undefined) {
