@@ -188,6 +188,14 @@ function csvOptions(separator: Separator, reader: RecordReader): CsvOptions {
 
 const MAX_LINE_CHARACTERS = 1_000_000;
 
+/**
+ * Largest acceleration sample accepted, 10⁶ g (common practice: recorded PGAs stay below about
+ * 5 g, and even a record in mm/s² read as g stays below 10⁵ g). Beyond it the value is not a
+ * ground motion in any unit, and squares and sweeps of it could overflow to Infinity.
+ */
+const MAX_ABS_ACCELERATION_G = 1e6;
+const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
+
 function asInputError(error: unknown, file: string): unknown {
   if (!(error instanceof CsvError)) return error;
   const line = typeof error.lines === 'number' ? error.lines : undefined;
@@ -241,7 +249,7 @@ class RecordReader {
     for (const field of fields)
       if (BINARY.test(field)) throw this.error('binary data, not a text record', line);
     if (this.layout === 'wrapped') {
-      for (let i = 0; i < fields.length; i++) this.add(this.number(fields[i], line, i + 1));
+      for (let i = 0; i < fields.length; i++) this.add(this.number(fields[i], line, i + 1), line);
       this.lastDataLine = line;
       return;
     }
@@ -262,10 +270,10 @@ class RecordReader {
       this.number(fields[i], line, i + 1); // columns not used must still be numbers
     }
     if (this.columns === 1) {
-      this.add(this.number(fields[0], line, 1));
+      this.add(this.number(fields[0], line, 1), line);
     } else {
       this.time(this.number(fields[0], line, 1), fields[0], line);
-      this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn));
+      this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn), line);
     }
     this.lastDataLine = line;
   }
@@ -356,7 +364,13 @@ class RecordReader {
     }
   }
 
-  private add(value: number): void {
+  private add(value: number, line: number): void {
+    if (Math.abs(value) * ACCELERATION_UNITS[this.options.units] > MAX_ABS_ACCELERATION_MS2) {
+      throw this.error(
+        `${value} ${this.options.units} is above ${MAX_ABS_ACCELERATION_G.toExponential(0)} g, which no ground motion reaches in any unit`,
+        line,
+      );
+    }
     if (this.count === this.values.length) {
       const bigger = new Float64Array(this.values.length * 2);
       bigger.set(this.values);
