@@ -177,9 +177,11 @@ function csvOptions(separator: Separator, reader: RecordReader): CsvOptions {
     skip_empty_lines: true,
     relax_column_count: true,
     record_delimiter: ['\r\n', '\n', '\r'],
-    from_line: (reader.options.skip ?? 0) + 1,
     max_record_size: MAX_LINE_CHARACTERS,
     on_record: (fields: string[], info) => {
+      // --skip counts lines of the file; csv-parse's from_line does not count comment lines, so a
+      // `#` line among the skipped ones made it skip a line of data as well.
+      if (info.lines <= (reader.options.skip ?? 0)) return null;
       reader.row(fields, info.lines);
       return null;
     },
@@ -433,7 +435,13 @@ function formatS(valueS: number): string {
 /** A field as shown in a message: quoted, cut short, with unprintable characters escaped. */
 function quote(text: string): string {
   const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
-  return `'${short.replace(/[^\x20-\x7e\u00a0-\uffff]/g, (c) => `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`)}'`;
+  // Line and paragraph separators and the byte-order mark are escaped too, so the message stays one visible line.
+  return `'${short.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
+    const code = c.charCodeAt(0);
+    return code <= 0xff
+      ? `\\x${code.toString(16).padStart(2, '0')}`
+      : `\\u${code.toString(16).padStart(4, '0')}`;
+  })}'`;
 }
 
 function baseName(source: string): string {
