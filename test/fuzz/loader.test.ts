@@ -16,7 +16,8 @@ import { chunked, G_MS2, mutatedRecord, streamOf, wellFormedRecord } from './rec
 
 const SOURCE = 'fuzz/record.txt';
 
-type Outcome = { record: GroundRecord } | { error: string; line: number | undefined };
+type Failure = { error: string; line: number | undefined };
+type Outcome = { record: GroundRecord } | Failure;
 
 function outcome(read: () => GroundRecord): Outcome {
   try {
@@ -40,7 +41,7 @@ function failure(error: unknown): Outcome {
   return { error: error.describe(), line: error.line };
 }
 
-function checkFailure(result: Outcome & { error: string }, lineCount: number): void {
+function checkFailure(result: Failure, lineCount: number): void {
   expect(result.error).not.toMatch(/[\r\n\u2028\u2029]/); // one line for a person
   expect(result.error).toContain(SOURCE);
   if (result.line !== undefined) {
