@@ -1,4 +1,5 @@
 import { inputError } from '../errors.js';
+import { MIN_PERIOD_S } from '../oscillator/grid.js';
 
 /** Unit systems an equipment file may use: forces and lengths together. */
 export type EquipmentUnits = 'SI' | 'US-kip-in' | 'US-lb-in';
@@ -153,8 +154,13 @@ export function parseEquipment(text: string, file: string): Equipment {
   const periodRaw = object['period_s'];
   let periodS: number | 'rigid';
   if (periodRaw === 'rigid') periodS = 'rigid';
-  else if (typeof periodRaw === 'number' && Number.isFinite(periodRaw) && periodRaw > 0) periodS = periodRaw;
-  else periodS = fail('period_s', `must be a period > 0 s or "rigid", got ${JSON.stringify(periodRaw)}`);
+  else if (typeof periodRaw === 'number' && Number.isFinite(periodRaw) && periodRaw >= MIN_PERIOD_S)
+    periodS = periodRaw;
+  else
+    periodS = fail(
+      'period_s',
+      `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodRaw)}`,
+    );
 
   const damping = number(
     'damping',

@@ -24,9 +24,14 @@ export function buildProgram(): Command {
       'Response spectra and preliminary equipment anchorage demands from ground-acceleration records.',
     )
     .version(VERSION)
-    .showHelpAfterError('(run with --help for usage)')
     .exitOverride();
-  program.configureOutput({ writeErr: (text) => process.stderr.write(text) });
+  // Commander's own errors become one line like every other error: its message (with any
+  // "Did you mean" hint) and the pointer to --help, folded together.
+  program.configureOutput({
+    writeErr: (text) => process.stderr.write(text),
+    outputError: (text, write) =>
+      write(`quakesweep: ${oneLine(text.replace(/^error: /, ''))} (run with --help for usage)\n`),
+  });
   registerSpectrum(program);
   registerInfo(program);
   registerDesign(program);
@@ -64,7 +69,7 @@ export function reportError(error: unknown): number {
     return EXIT_INPUT; // commander already printed its one-line message
   }
   if (isQuakesweepError(error)) {
-    process.stderr.write(`quakesweep: ${error.describe()}\n`);
+    process.stderr.write(`quakesweep: ${oneLine(error.describe())}\n`);
     return error.kind === 'internal' ? EXIT_INTERNAL : EXIT_INPUT;
   }
   const code = (error as NodeJS.ErrnoException | undefined)?.code;
@@ -76,10 +81,17 @@ export function reportError(error: unknown): number {
       EISDIR: 'is a folder',
       ENOTDIR: 'not a folder',
     }[code];
-    process.stderr.write(`quakesweep: ${path}: ${reason}\n`);
+    process.stderr.write(`quakesweep: ${oneLine(`${path}: ${reason}`)}\n`);
     return EXIT_INPUT;
   }
   const message = error instanceof Error ? error.message : String(error);
-  process.stderr.write(`quakesweep: internal error: ${message.split('\n')[0]} (please report this)\n`);
+  process.stderr.write(
+    `quakesweep: internal error: ${oneLine(message.split('\n')[0])} (please report this)\n`,
+  );
   return EXIT_INTERNAL;
+}
+
+/** A message on one line: breaks that came in with a file name or an option value become spaces. */
+function oneLine(text: string): string {
+  return text.trim().replace(/[\r\n\u2028\u2029]+/g, ' ');
 }

@@ -14,6 +14,13 @@ export function logSpaced(fromS: number, toS: number, count: number): number[] {
   );
 }
 
+/**
+ * Shortest period other than 0 in a grid, s (10 kHz). The sweep sub-steps each sample to follow
+ * the oscillator, so the work grows as 1/T; far below this no record is sampled finely enough for
+ * the period to mean anything, and T = 0 (rigid) is the way to ask for the PGA.
+ */
+export const MIN_PERIOD_S = 1e-4;
+
 /** Most oscillators a sweep runs without `--force`. */
 export const MAX_OSCILLATORS = 1_000_000;
 
@@ -28,6 +35,7 @@ export function parsePeriods(text: string): Float64Array {
     const parts = spec.split(':');
     if (parts.length !== 3) throw usageError(`--periods '${text}': use a:b:n, e.g. 0.01:10:100`);
     const [from, to, count] = parts.map((part) => Number(part.trim()));
+    if (from > 0 && from < MIN_PERIOD_S) throw usageError(tooShort(text, from));
     if (!(from > 0) || !(to > from) || !Number.isFinite(to)) {
       throw usageError(
         `--periods '${text}': need 0 < a < b (log spacing cannot start at 0; add 0 with a list)`,
@@ -44,6 +52,7 @@ export function parsePeriods(text: string): Float64Array {
       if (part.trim() === '' || !Number.isFinite(value))
         throw usageError(`--periods: '${part}' is not a number`);
       if (value < 0) throw usageError(`--periods: ${value} is negative; periods are ≥ 0 s (0 means rigid)`);
+      if (value > 0 && value < MIN_PERIOD_S) throw usageError(tooShort(text, value));
       return value;
     });
   }
@@ -53,6 +62,10 @@ export function parsePeriods(text: string): Float64Array {
   }
   if (values.length === 0) throw usageError('--periods: the grid is empty');
   return Float64Array.from(values);
+}
+
+function tooShort(text: string, periodS: number): string {
+  return `--periods '${text}': ${periodS} s is shorter than ${MIN_PERIOD_S} s; use 0 for a rigid oscillator`;
 }
 
 /**

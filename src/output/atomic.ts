@@ -14,6 +14,29 @@ import { basename, dirname, join, resolve } from 'node:path';
 import { inputError } from '../errors.js';
 
 /**
+ * Check that `path` can take an output: its folder exists, it is not a folder itself, and it is
+ * not (through a symlink or another spelling) one of the `protect`ed inputs. Commands that write
+ * several files check them all first, so a refusal leaves none written. Returns the full path.
+ */
+export function checkOutputPath(path: string, protect: readonly string[] = []): string {
+  const target = resolve(path);
+  const folder = dirname(target);
+  if (!existsSync(folder) || !statSync(folder).isDirectory()) {
+    throw inputError(`cannot write ${path}: folder ${dirname(path)} does not exist`);
+  }
+  if (existsSync(target) && statSync(target).isDirectory()) {
+    throw inputError(`cannot write ${path}: it is a folder`);
+  }
+  for (const input of protect) {
+    if (input === '-' || !existsSync(input)) continue;
+    if (existsSync(target) && realpathSync(target) === realpathSync(input)) {
+      throw inputError(`refusing to overwrite the input ${input} with an output`);
+    }
+  }
+  return target;
+}
+
+/**
  * Write `contents` to `path` atomically: into a temporary file beside it, flushed, then renamed
  * into place, so a reader never sees a half-written file and a failure leaves nothing behind.
  * `protect` lists input paths that must never be overwritten.
@@ -23,17 +46,8 @@ export function writeFileAtomic(
   contents: string | Uint8Array,
   protect: readonly string[] = [],
 ): void {
-  const target = resolve(path);
+  const target = checkOutputPath(path, protect);
   const folder = dirname(target);
-  if (!existsSync(folder) || !statSync(folder).isDirectory()) {
-    throw inputError(`cannot write ${path}: folder ${dirname(path)} does not exist`);
-  }
-  for (const input of protect) {
-    if (input === '-' || !existsSync(input)) continue;
-    if (existsSync(target) && realpathSync(target) === realpathSync(input)) {
-      throw inputError(`refusing to overwrite the input ${input} with an output`);
-    }
-  }
   const temporary = join(folder, `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
   let fd: number | undefined;
   try {

@@ -1,6 +1,7 @@
 import { cautionLines } from '../caution.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
+import { assertFiniteResult } from './finite.js';
 
 export interface CsvOptions {
   /** Unit for SD, PSV and SV (PSV and SV in that unit per second). Default m. */
@@ -18,6 +19,10 @@ export function dampingLabel(damping: number): string {
  */
 export function spectrumToCsv(spectrum: Spectrum, options: CsvOptions = {}): string {
   const unit = options.lengthUnit ?? 'm';
+  assertFiniteResult([
+    spectrum.periodsS,
+    ...spectrum.curves.map((c) => [c.sdM, c.psvMS, c.psaMS2, c.svMS, c.saMS2]),
+  ]);
   const perLength = 1 / LENGTH_UNITS[unit];
   const lines = cautionLines().map((line) => `# ${line}`);
   lines.push(

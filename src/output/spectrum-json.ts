@@ -2,6 +2,7 @@ import { CAUTION } from '../caution.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../units.js';
+import { assertFiniteResult } from './finite.js';
 
 /** The JSON contract of `quakesweep spectrum` (keys and units are relied on by scripts). */
 export interface SpectrumJson {
@@ -48,7 +49,11 @@ export function spectrumToJson(spectrum: Spectrum): SpectrumJson {
   };
 }
 
-/** JSON text with two-space indentation and numbers in full precision (same input, same bytes). */
+/**
+ * JSON text with two-space indentation and numbers in full precision (same input, same bytes).
+ * Refuses NaN and ±Infinity, which JSON.stringify would silently turn into null.
+ */
 export function formatJson(value: unknown): string {
+  assertFiniteResult(value);
   return `${JSON.stringify(value, null, 2)}\n`;
 }

@@ -177,9 +177,11 @@ function csvOptions(separator: Separator, reader: RecordReader): CsvOptions {
     skip_empty_lines: true,
     relax_column_count: true,
     record_delimiter: ['\r\n', '\n', '\r'],
-    from_line: (reader.options.skip ?? 0) + 1,
     max_record_size: MAX_LINE_CHARACTERS,
     on_record: (fields: string[], info) => {
+      // --skip counts lines of the file; csv-parse's from_line does not count comment lines, so a
+      // `#` line among the skipped ones made it skip a line of data as well.
+      if (info.lines <= (reader.options.skip ?? 0)) return null;
       reader.row(fields, info.lines);
       return null;
     },
@@ -187,6 +189,14 @@ function csvOptions(separator: Separator, reader: RecordReader): CsvOptions {
 }
 
 const MAX_LINE_CHARACTERS = 1_000_000;
+
+/**
+ * Largest acceleration sample accepted, 10⁶ g (common practice: recorded PGAs stay below about
+ * 5 g, and even a record in mm/s² read as g stays below 10⁵ g). Beyond it the value is not a
+ * ground motion in any unit, and squares and sweeps of it could overflow to Infinity.
+ */
+const MAX_ABS_ACCELERATION_G = 1e6;
+const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
 
 function asInputError(error: unknown, file: string): unknown {
   if (!(error instanceof CsvError)) return error;
@@ -241,7 +251,7 @@ class RecordReader {
     for (const field of fields)
       if (BINARY.test(field)) throw this.error('binary data, not a text record', line);
     if (this.layout === 'wrapped') {
-      for (let i = 0; i < fields.length; i++) this.add(this.number(fields[i], line, i + 1));
+      for (let i = 0; i < fields.length; i++) this.add(this.number(fields[i], line, i + 1), line);
       this.lastDataLine = line;
       return;
     }
@@ -262,10 +272,10 @@ class RecordReader {
       this.number(fields[i], line, i + 1); // columns not used must still be numbers
     }
     if (this.columns === 1) {
-      this.add(this.number(fields[0], line, 1));
+      this.add(this.number(fields[0], line, 1), line);
     } else {
       this.time(this.number(fields[0], line, 1), fields[0], line);
-      this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn));
+      this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn), line);
     }
     this.lastDataLine = line;
   }
@@ -356,7 +366,13 @@ class RecordReader {
     }
   }
 
-  private add(value: number): void {
+  private add(value: number, line: number): void {
+    if (Math.abs(value) * ACCELERATION_UNITS[this.options.units] > MAX_ABS_ACCELERATION_MS2) {
+      throw this.error(
+        `${value} ${this.options.units} is above ${MAX_ABS_ACCELERATION_G.toExponential(0)} g, which no ground motion reaches in any unit`,
+        line,
+      );
+    }
     if (this.count === this.values.length) {
       const bigger = new Float64Array(this.values.length * 2);
       bigger.set(this.values);
@@ -419,7 +435,13 @@ function formatS(valueS: number): string {
 /** A field as shown in a message: quoted, cut short, with unprintable characters escaped. */
 function quote(text: string): string {
   const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
-  return `'${short.replace(/[^\x20-\x7e\u00a0-\uffff]/g, (c) => `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`)}'`;
+  // Line and paragraph separators and the byte-order mark are escaped too, so the message stays one visible line.
+  return `'${short.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
+    const code = c.charCodeAt(0);
+    return code <= 0xff
+      ? `\\x${code.toString(16).padStart(2, '0')}`
+      : `\\u${code.toString(16).padStart(4, '0')}`;
+  })}'`;
 }
 
 function baseName(source: string): string {

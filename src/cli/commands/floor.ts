@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
-import { parseDampings } from '../../oscillator/grid.js';
+import { MIN_PERIOD_S, parseDampings } from '../../oscillator/grid.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
@@ -54,9 +54,9 @@ export function buildingFromOptions(options: FloorCliOptions): BuildingMode {
       '--modal-factor <Γφ> is required (1 is the base of a rigid building; about 1.3 to 1.6 at the roof of a regular one)',
     );
   const periodS = Number(options.buildingPeriod);
-  if (!(periodS > 0) || !Number.isFinite(periodS)) {
+  if (!(periodS >= MIN_PERIOD_S) || !Number.isFinite(periodS)) {
     throw usageError(
-      `--building-period must be a positive number of seconds, got '${options.buildingPeriod}'`,
+      `--building-period must be a number of seconds ≥ ${MIN_PERIOD_S}, got '${options.buildingPeriod}'`,
     );
   }
   const modalFactor = Number(options.modalFactor);

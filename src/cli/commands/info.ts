@@ -1,10 +1,10 @@
-import { mkdirSync } from 'node:fs';
+import { existsSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
 import { logSpaced } from '../../oscillator/grid.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
 import { formatJson } from '../../output/spectrum-json.js';
 import { fourierFigure } from '../../plot/fourier.js';
 import { historiesFigure } from '../../plot/histories.js';
@@ -75,7 +75,13 @@ export async function runInfo(source: string, options: InfoCliOptions): Promise<
   const predominant = predominantPeriod(record);
   const json = infoToJson(record, measures, predominant);
   const text = format === 'json' ? formatJson(json) : infoTable(json);
-  if (options.svg !== undefined) writeFigures(options.svg, record, measures, smoothing, [source]);
+  // Check every output before writing any, so a refusal leaves nothing behind.
+  if (options.out !== undefined) checkOutputPath(options.out, [source]);
+  if (options.svg !== undefined) {
+    if (existsSync(options.svg))
+      for (const name of ['husid.svg', 'fourier.svg']) checkOutputPath(join(options.svg, name), [source]);
+    writeFigures(options.svg, record, measures, smoothing, [source]);
+  }
   if (options.out !== undefined) writeFileAtomic(options.out, text, [source]);
   else process.stdout.write(text);
 }

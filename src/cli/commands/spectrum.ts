@@ -7,7 +7,7 @@ import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '.
 import { sweepOscillatorsParallel } from '../../oscillator/parallel.js';
 import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
 import { planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
 import {
@@ -113,6 +113,8 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const targeted = applyTarget(await sweepSpectrum(processed, grid, sweep), target, options);
   const spectrum = targeted.spectrum;
   const record = targeted.record(processed);
+  const protect = options.target === undefined ? [source] : [source, options.target];
+  if (options.out !== undefined) checkOutputPath(options.out, protect);
   if (options.svg !== undefined) {
     const overlays = targeted.overlay === undefined ? [] : [targeted.overlay];
     writeFigures(options.svg, record, spectrum, { axes, lengthUnit, overlays }, options, source);
@@ -124,7 +126,7 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
         ? targeted.csv(spectrumToCsv(spectrum, { lengthUnit }))
         : targeted.table(summaryTable(spectrum, lengthUnit));
   if (options.out !== undefined) {
-    writeFileAtomic(options.out, text, options.target === undefined ? [source] : [source, options.target]);
+    writeFileAtomic(options.out, text, protect);
   } else {
     process.stdout.write(text);
   }
@@ -199,6 +201,8 @@ function writeFigures(
       historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: figure.lengthUnit }),
     ]);
   }
+  // Every figure is checked before any is written, so a refused one leaves none behind.
+  for (const [name] of files) checkOutputPath(join(folder, name), [source]);
   for (const [name, text] of files) writeFileAtomic(join(folder, name), text, [source]);
 }
 

@@ -1,0 +1,39 @@
+import { inputError } from '../errors.js';
+
+/**
+ * Refuse a result that holds a number that is not finite. JSON.stringify writes NaN and ±Infinity
+ * as null without a word, and String() writes them as "NaN" into a table; either would pass a
+ * broken result off as data, so outputs are checked before they are written. `null` is allowed:
+ * outputs use it on purpose for "not defined here".
+ */
+export function assertFiniteResult(value: unknown): void {
+  const path = nonFinitePath(value, '');
+  if (path !== undefined) {
+    throw inputError(
+      `a result is not a finite number (${path || 'the value'}); the record or the options are out of range, so nothing was written`,
+    );
+  }
+}
+
+function nonFinitePath(value: unknown, path: string): string | undefined {
+  if (typeof value === 'number') return Number.isFinite(value) ? undefined : `${path} = ${value}`;
+  if (value === null || typeof value !== 'object') return undefined;
+  if (ArrayBuffer.isView(value) && !(value instanceof DataView)) {
+    const array = value as unknown as ArrayLike<number>;
+    for (let i = 0; i < array.length; i++)
+      if (typeof array[i] === 'number' && !Number.isFinite(array[i])) return `${path}[${i}] = ${array[i]}`;
+    return undefined;
+  }
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) {
+      const found = nonFinitePath(value[i], `${path}[${i}]`);
+      if (found !== undefined) return found;
+    }
+    return undefined;
+  }
+  for (const [key, item] of Object.entries(value)) {
+    const found = nonFinitePath(item, path === '' ? key : `${path}.${key}`);
+    if (found !== undefined) return found;
+  }
+  return undefined;
+}

@@ -1,0 +1,154 @@
+/**
+ * Errors everywhere: every command with missing, malformed or unknown options, missing files, a
+ * folder as a file, an empty file and an unreadable file exits 2 with one line on stderr and no
+ * stack trace (the project's rule for errors; common practice for command-line tools).
+ */
+import { chmodSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { writeFixtures } from './fixtures.js';
+import { expectOneLineFailure, runMain } from './run-cli.js';
+
+const f = writeFixtures();
+const unreadable = join(f.dir, 'unreadable.txt');
+writeFileSync(unreadable, '0.1\n0.2\n');
+chmodSync(unreadable, 0o000);
+afterAll(() => {
+  chmodSync(unreadable, 0o600);
+  rmSync(f.dir, { recursive: true, force: true });
+});
+/** Root reads any file whatever its mode; then the unreadable cases cannot be made and are left out. */
+const canBeUnreadable = (() => {
+  try {
+    readFileSync(unreadable);
+    return false;
+  } catch {
+    return true;
+  }
+})();
+const missing = join(f.dir, 'no-such-file.csv');
+const bldg = ['--building-period', '0.4', '--modal-factor', '1.3'];
+const asce = ['--code', 'asce7-16', '--sds', '1', '--sd1', '0.6', '--tl', '8'];
+
+/** Each command's bad invocations, and a word the one line must hold. */
+const CASES: Record<string, [string[], RegExp][]> = {
+  spectrum: [
+    [['spectrum'], /missing required argument/],
+    [['spectrum', f.h1], /units are required/],
+    [['spectrum', f.h1, '--units', 'furlongs'], /unknown acceleration unit/],
+    [['spectrum', f.single, '--units', 'g'], /--dt/],
+    [['spectrum', f.single, '--units', 'g', '--dt', 'abc'], /--dt/],
+    [['spectrum', f.single, '--units', 'g', '--dt', '-1'], /--dt/],
+    [['spectrum', f.h1, '--units', 'g', '--dt', '0.02'], /disagrees/],
+    [['spectrum', f.h1, '--units', 'g', '--format', 'xml'], /--format/],
+    [['spectrum', f.h1, '--units', 'g', '--axes', 'polar'], /--axes/],
+    [['spectrum', f.h1, '--units', 'g', '--method', 'euler'], /method/],
+    [['spectrum', f.h1, '--units', 'g', '--length-unit', 'cubit'], /length unit/],
+    [['spectrum', f.h1, '--units', 'g', '--svg', missing], /no such folder/],
+    [['spectrum', f.h1, '--units', 'g', '--histories'], /--svg/],
+    [['spectrum', f.h1, '--units', 'g', '--column', '0'], /--column/],
+    [['spectrum', f.h1, '--units', 'g', '--column', '7'], /--column/],
+    [['spectrum', f.h1, '--units', 'g', '--skip', '-2'], /--skip/],
+    [['spectrum', f.h1, '--units', 'g', '--layout', 'diagonal'], /--layout/],
+    [['spectrum', f.h1, '--units', 'g', '--filter', 'highpass:x'], /--filter/],
+    [['spectrum', f.h1, '--units', 'g', '--taper', '70%'], /--taper/],
+    [['spectrum', f.h1, '--units', 'g', '--baseline', 'quartic'], /--baseline/],
+    [['spectrum', f.h1, '--units', 'g', '--resample', '0'], /--resample/],
+    [['spectrum', f.h1, '--units', 'g', '--target', 'asce7-16:sds=x'], /./],
+    [['spectrum', f.h1, '--units', 'g', '--scale-range', '0.1:1'], /--target/],
+    [['spectrum', f.h1, '--units', 'g', '--perods', '1'], /unknown option/],
+    [['spectrum', missing, '--units', 'g'], /no such file/],
+    [['spectrum', f.dir, '--units', 'g'], /is a folder/],
+    [['spectrum', f.empty, '--units', 'g', '--dt', '0.01'], /no values/],
+    [['spectrum', unreadable, '--units', 'g', '--dt', '0.01'], /permission denied/],
+  ],
+  info: [
+    [['info'], /missing required argument/],
+    [['info', f.h1], /units are required/],
+    [['info', f.h1, '--units', 'g', '--format', 'csv'], /--format/],
+    [['info', f.h1, '--units', 'g', '--bracket-threshold', '-1'], /--bracket-threshold/],
+    [['info', f.h1, '--units', 'g', '--smoothing', 'wide'], /--smoothing/],
+    [['info', missing, '--units', 'g'], /no such file/],
+    [['info', f.dir, '--units', 'g'], /is a folder/],
+    [['info', f.empty, '--units', 'g', '--dt', '0.01'], /no values/],
+  ],
+  design: [
+    [['design'], /choose a spectrum/],
+    [['design', '--code', 'nz1170'], /--code/],
+    [['design', '--code', 'asce7-16', '--sds', '1'], /--sd1/],
+    [['design', ...asce.slice(0, 3), 'x', ...asce.slice(4)], /not a number/],
+    [['design', '--code', 'ec8', '--type', '3', '--ground', 'C', '--ag', '0.2'], /type/i],
+    [['design', '--code', 'ec8', '--type', '1', '--ground', 'Z', '--ag', '0.2'], /ground/i],
+    [['design', ...asce, '--format', 'xml'], /--format/],
+    [['design', '--table', missing], /no such file/],
+    [['design', '--table', f.dir], /is a folder/],
+    [['design', '--table', f.empty], /./],
+    [['design', '--table', unreadable], /permission denied/],
+  ],
+  damping: [
+    [['damping'], /missing required argument/],
+    [['damping', f.h1], /units are required/],
+    [['damping', f.h1, '--units', 'g', '--format', 'xml'], /--format/],
+    [['damping', missing, '--units', 'g'], /no such file/],
+    [['damping', f.empty, '--units', 'g', '--dt', '0.01'], /no values/],
+  ],
+  rotd: [
+    [['rotd', f.h1], /missing required argument/],
+    [['rotd', f.h1, f.h2], /units are required/],
+    [['rotd', f.h1, f.h2, '--units', 'g', '--angle-step', '7'], /angle step/],
+    [['rotd', f.h1, f.h2, '--units', 'g', '--angle-step', 'x'], /--angle-step/],
+    [['rotd', '-', '-', '--units', 'g'], /standard input/],
+    [['rotd', f.h1, missing, '--units', 'g'], /no such file/],
+    [['rotd', f.h1, f.single, '--units', 'g', '--dt', '0.02'], /./],
+  ],
+  floor: [
+    [['floor', f.h1, '--units', 'g'], /--building-period/],
+    [['floor', f.h1, '--units', 'g', '--building-period', '0.4'], /--modal-factor/],
+    [['floor', f.h1, '--units', 'g', ...bldg, '--building-damping', '2%,5%'], /building-damping/],
+    [['floor', f.h1, '--units', 'g', ...bldg, '--broaden', '1.5'], /--broaden/],
+    [['floor', f.h1, '--units', 'g', '--building-period', 'abc', '--modal-factor', '1'], /--building-period/],
+    [['floor', f.h1, '--units', 'g', '--building-period', '0.4', '--modal-factor', 'x'], /--modal-factor/],
+    [['floor', missing, '--units', 'g', ...bldg], /no such file/],
+  ],
+  anchor: [
+    [['anchor'], /--equipment/],
+    [['anchor', '--equipment', missing], /no such file/],
+    [['anchor', '--equipment', f.dir], /is a folder/],
+    [['anchor', '--equipment', f.empty], /./],
+    [['anchor', '--equipment', f.h1], /./],
+    [['anchor', '--equipment', unreadable], /permission denied/],
+    [['anchor', '--equipment', f.equipment, '--demand', 'most'], /demand/],
+    [['anchor', '--equipment', f.equipment, '--record', f.h1], /units are required/],
+    [['anchor', '--equipment', f.equipment, '--spectrum', f.h1], /./],
+    [['anchor', '--equipment', f.equipment, '--spectrum', missing], /no such file/],
+    [['anchor', '--equipment', f.equipment, '--format', 'csv'], /--format/],
+  ],
+  synth: [
+    [['synth', '--dt', '0'], /--dt/],
+    [['synth', '--seed', '-1'], /--seed/],
+    [['synth', '--duration', 'long'], /--duration/],
+    [['synth', '--out', join(missing, 'x.csv')], /does not exist/],
+  ],
+  program: [
+    [['bogus'], /unknown command/],
+    [['--frobnicate'], /unknown option/],
+  ],
+};
+
+describe('every bad invocation gives exit 2 and one line', () => {
+  for (const [command, cases] of Object.entries(CASES)) {
+    it(command, async () => {
+      const wrong: string[] = [];
+      for (const [argv, expected] of cases) {
+        if (!canBeUnreadable && argv.includes(unreadable)) continue;
+        try {
+          const line = expectOneLineFailure(await runMain(argv));
+          if (!expected.test(line)) wrong.push(`${argv.join(' ')}\n  got: ${line}`);
+        } catch (error) {
+          wrong.push(`${argv.join(' ')}\n  ${(error as Error).message}`);
+        }
+      }
+      expect(wrong).toEqual([]);
+    });
+  }
+});
