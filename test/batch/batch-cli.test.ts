@@ -1,4 +1,4 @@
-import { execFileSync, spawnSync } from 'node:child_process';
+import { spawnSync } from 'node:child_process';
 import {
   existsSync,
   mkdirSync,
@@ -46,7 +46,6 @@ function record(name: string, frequencyHz: number): void {
 }
 
 beforeAll(() => {
-  execFileSync('npx', ['tsc', '-p', 'tsconfig.json'], { cwd: root, stdio: 'pipe' });
   mkdirSync(inputs);
   for (let k = 1; k <= 5; k++) record(`rec${k}.txt`, 0.7 * k);
   writeFileSync(join(inputs, 'broken.txt'), '0.1\nnot-a-number\n0.2\n');

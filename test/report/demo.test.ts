@@ -1,17 +1,14 @@
-import { execFileSync, spawnSync } from 'node:child_process';
+import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/caution.js';
 
 const root = resolve(import.meta.dirname, '../..');
 const bin = join(root, 'bin', 'quakesweep.js');
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-demo-'));
 
-beforeAll(() => {
-  execFileSync('npx', ['tsc', '-p', 'tsconfig.json'], { cwd: root, stdio: 'pipe' });
-});
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
 
 describe('quakesweep demo and report folders', () => {
