@@ -75,6 +75,33 @@ describe('hostile names and headers in SVG figures', () => {
     }
   });
 
+  it('the HTML report: hostile names and headers run nothing and show as text', async () => {
+    for (const [i, payload] of PAYLOADS.entries()) {
+      const file = join(f.dir, `report-${i}.csv`);
+      hostileRecord(file);
+      const folder = join(f.dir, `report-${i}`);
+      const result = await runMain([
+        'report',
+        file,
+        '--units',
+        'g',
+        '--name',
+        payload,
+        '--note',
+        payload,
+        '--periods',
+        '0,0.1,0.5,2',
+        '--out',
+        folder,
+      ]);
+      expect(result.code, result.stderr).toBe(0);
+      const seen = await openInert(browser, join(folder, 'report.html'));
+      expect(seen.dialogs).toEqual([]);
+      expect(seen.flagSet).toBe(false);
+      expect(seen.text).toContain(payload);
+    }
+  });
+
   it('the checker itself notices a payload that is not escaped (so it can fail)', async () => {
     const seen = await openInert(browser, {
       type: 'svg',
