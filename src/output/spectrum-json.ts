@@ -24,17 +24,22 @@ export interface SpectrumJson {
 
 const toG = (values: Float64Array): number[] => Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
 
+/** The `record` object of the JSON outputs: name, source, npts, dt_s, pga_g and processing. */
+export function recordToJson(record: Spectrum['record']): SpectrumJson['record'] {
+  return {
+    name: record.name,
+    source: record.source,
+    npts: record.npts,
+    dt_s: record.dtS,
+    pga_g: record.pgaMS2 / STANDARD_GRAVITY_MS2,
+    processing: record.processing.map((step) => ({ ...step })),
+  };
+}
+
 export function spectrumToJson(spectrum: Spectrum): SpectrumJson {
   return {
     caution: CAUTION,
-    record: {
-      name: spectrum.record.name,
-      source: spectrum.record.source,
-      npts: spectrum.record.npts,
-      dt_s: spectrum.record.dtS,
-      pga_g: spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2,
-      processing: spectrum.record.processing.map((step) => ({ ...step })),
-    },
+    record: recordToJson(spectrum.record),
     method: spectrum.method,
     method_description: METHOD_DESCRIPTIONS[spectrum.method],
     periods_s: Array.from(spectrum.periodsS),

@@ -6,13 +6,13 @@ import { usageError } from '../../errors.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel } from '../../output/spectrum-csv.js';
-import { formatJson } from '../../output/spectrum-json.js';
+import { formatJson, recordToJson } from '../../output/spectrum-json.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping, type DampingComparison } from '../../spectrum/damping.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions } from './spectrum.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions, summaryRows } from './spectrum.js';
 
 export interface DampingCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
@@ -84,14 +84,7 @@ const nullable = (value: number | null) => (value === null || Number.isNaN(value
 export function dampingToJson(spectrum: Spectrum, comparison: DampingComparison, added: boolean) {
   return {
     caution: CAUTION,
-    record: {
-      name: spectrum.record.name,
-      source: spectrum.record.source,
-      npts: spectrum.record.npts,
-      dt_s: spectrum.record.dtS,
-      pga_g: spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2,
-      processing: spectrum.record.processing.map((step) => ({ ...step })),
-    },
+    record: recordToJson(spectrum.record),
     method: spectrum.method,
     method_description: METHOD_DESCRIPTIONS[spectrum.method],
     reference_damping: comparison.referenceDamping,
@@ -169,7 +162,7 @@ export function dampingTable(spectrum: Spectrum, comparison: DampingComparison, 
     header.push(`PSA g @${d}`.padStart(13), `ratio @${d}`.padStart(12));
   }
   out.push(header.join(' '));
-  for (const p of summaryPeriodRows(comparison.periodsS)) {
+  for (const p of summaryRows(comparison.periodsS)) {
     const row = [Number(comparison.periodsS[p].toPrecision(3)).toString().padStart(8)];
     for (const curve of comparison.curves) {
       row.push(
@@ -181,20 +174,4 @@ export function dampingTable(spectrum: Spectrum, comparison: DampingComparison, 
   }
   out.push(`(${comparison.periodsS.length} periods; --format json or csv for all of them)`);
   return `${out.join('\n')}\n`;
-}
-
-/** Indices of the grid nearest to a set of round periods (all of a short grid), for terminal tables. */
-export function summaryPeriodRows(periodsS: Float64Array): number[] {
-  if (periodsS.length <= 16) return Array.from(periodsS, (_, i) => i);
-  const targets = [0, 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5, 10];
-  const rows = new Set<number>();
-  for (const target of targets) {
-    if (target < periodsS[0] || target > periodsS[periodsS.length - 1]) continue;
-    let best = 0;
-    for (let i = 1; i < periodsS.length; i++) {
-      if (Math.abs(periodsS[i] - target) < Math.abs(periodsS[best] - target)) best = i;
-    }
-    rows.add(best);
-  }
-  return [...rows].sort((a, b) => a - b);
 }

@@ -12,8 +12,7 @@ import { type RotDSpectra, rotDSpectra } from '../../spectrum/rotd.js';
 import type { SpectrumRecordInfo } from '../../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
-import { summaryPeriodRows } from './damping.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions } from './spectrum.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions, summaryRows } from './spectrum.js';
 
 export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
@@ -155,7 +154,7 @@ export function rotdTable(spectra: RotDSpectra): string {
     );
   }
   out.push(header.join(' '));
-  for (const p of summaryPeriodRows(spectra.periodsS)) {
+  for (const p of summaryRows(spectra.periodsS)) {
     const row = [Number(spectra.periodsS[p].toPrecision(3)).toString().padStart(8)];
     for (const curve of spectra.curves) {
       row.push(
