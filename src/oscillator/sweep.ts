@@ -87,6 +87,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const dampings = Float64Array.from(options.dampings);
   checkSweep(accelMS2, dtS, periodsS, dampings);
   const durationS = (accelMS2.length - 1) * dtS;
+  const roughness = recordRoughness(accelMS2);
   const prewarp = options.prewarp ?? true;
   const oscillators: PlannedOscillator[] = [];
   for (let d = 0; d < dampings.length; d++) {
@@ -101,6 +102,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
           damping: dampings[d],
           durationS,
           prewarp,
+          roughness,
           stepsPerPeriod: options.stepsPerPeriod,
         }),
       });
@@ -342,6 +344,22 @@ export function packCoefficients(
   target[o + 11] = t.displacementOffset;
   target[o + 12] = t.velocityOffset;
   target[o + 13] = t.accelerationOffset;
+}
+
+/**
+ * How much of the record's content sits near its Nyquist frequency: R = RMS(Δa)/RMS(a), which is
+ * 2 sin(Ωdt/2) for a sine of circular frequency Ω (0 for a constant, 2 at the Nyquist
+ * frequency). The sub-step rule uses it (see recordSubsteps in recurrence.ts).
+ */
+export function recordRoughness(accelMS2: Float64Array): number {
+  let sum = 0;
+  let sumDifferences = 0;
+  for (let i = 0; i < accelMS2.length; i++) {
+    sum += accelMS2[i] * accelMS2[i];
+    if (i > 0) sumDifferences += (accelMS2[i] - accelMS2[i - 1]) ** 2;
+  }
+  if (sum === 0) return 0;
+  return Math.sqrt(sumDifferences / (accelMS2.length - 1) / (sum / accelMS2.length));
 }
 
 /** Bounds on the ground motion that the refinement thresholds use. */

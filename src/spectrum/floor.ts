@@ -5,6 +5,7 @@ import {
   stepCoefficients,
   substepCount,
 } from '../oscillator/recurrence.js';
+import { recordRoughness } from '../oscillator/sweep.js';
 import { type GroundRecord, withProcessing } from '../record/record.js';
 import { responseSpectrum, type Spectrum, type SpectrumCurve, type SpectrumOptions } from './spectrum.js';
 
@@ -41,6 +42,7 @@ export function floorRecord(ground: GroundRecord, building: BuildingMode): Groun
   const substeps = substepCount(method, building.periodS, ground.dtS, {
     damping: building.damping,
     durationS,
+    roughness: recordRoughness(ground.accelMS2),
   });
   const h = ground.dtS / substeps;
   const warped = prewarpedOscillator(method, omega, building.damping, h);

@@ -6,7 +6,7 @@ import {
   stepCoefficients,
   substepCount,
 } from '../oscillator/recurrence.js';
-import { refinementThresholds } from '../oscillator/sweep.js';
+import { recordRoughness, refinementThresholds } from '../oscillator/sweep.js';
 import { type GroundRecord, peakGroundAcceleration } from '../record/record.js';
 import type { SpectrumRecordInfo } from './spectrum.js';
 
@@ -172,7 +172,8 @@ function oscillatorPeaks(
 ): void {
   const { periodS, damping, method } = oscillator;
   const durationS = (a1.length - 1) * dtS;
-  const substeps = substepCount(method, periodS, dtS, { damping, durationS });
+  const roughness = Math.max(recordRoughness(a1), recordRoughness(a2));
+  const substeps = substepCount(method, periodS, dtS, { damping, durationS, roughness });
   const h = dtS / substeps;
   const omega = (2 * Math.PI) / periodS;
   const warped = prewarpedOscillator(method, omega, damping, h);

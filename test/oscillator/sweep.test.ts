@@ -6,12 +6,16 @@ import {
   stepCoefficients,
   substepCount,
 } from '../../src/oscillator/recurrence.js';
-import { sweepOscillators } from '../../src/oscillator/sweep.js';
+import { recordRoughness, sweepOscillators } from '../../src/oscillator/sweep.js';
 import { sineRecord, testRecord } from '../helpers/records.js';
 
 /** The sweep's peaks without its threshold test: Hermite refinement on every step. */
 function bruteForcePeaks(accel: Float64Array, dtS: number, periodS: number, zeta: number, method: Method) {
-  const m = substepCount(method, periodS, dtS, { damping: zeta, durationS: (accel.length - 1) * dtS });
+  const m = substepCount(method, periodS, dtS, {
+    damping: zeta,
+    durationS: (accel.length - 1) * dtS,
+    roughness: recordRoughness(accel),
+  });
   const h = dtS / m;
   const omega = (2 * Math.PI) / periodS;
   const w = prewarpedOscillator(method, omega, zeta, h);
