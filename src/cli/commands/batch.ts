@@ -1,10 +1,8 @@
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
-import { SingleBar } from 'cli-progress';
 import type { Command } from 'commander';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
-import { runTasks } from '../../batch/pool.js';
 import { parseShard, type Shard, shardSlice } from '../../batch/shard.js';
 import {
   SHARD_FORMAT,
@@ -100,7 +98,11 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
   prepareOutputFolder(out);
 
   const tasks = mine.map((file) => ({ file, name: names.get(file) as string, outDir: out, settings }));
-  const bar = process.stderr.isTTY
+  // The pool and the progress bar are loaded here, not at start-up, so other commands do not pay
+  // for them.
+  const { runTasks } = await import('../../batch/pool.js');
+  const { SingleBar } = process.stderr.isTTY ? await import('cli-progress') : { SingleBar: undefined };
+  const bar = SingleBar
     ? new SingleBar({
         stream: process.stderr,
         format: 'quakesweep batch [{bar}] {value}/{total} records, {eta}s left',
