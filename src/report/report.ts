@@ -2,6 +2,7 @@ import { CAUTION } from '../caution.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
+import type { ScaleResult } from '../spectrum/scale.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { LengthUnit } from '../units.js';
 import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
@@ -29,15 +30,8 @@ export interface ReportFigure {
 }
 
 /** The target comparison, as `quakesweep spectrum --target` writes it in its JSON. */
-export interface ReportTarget {
+export interface ReportTarget extends ScaleResult {
   description: string;
-  factor: number;
-  rangeS: [number, number];
-  periodCount: number;
-  meanRatio: number;
-  minRatio: number;
-  maxRatio: number;
-  criterion: string;
   damping: number;
   applied: boolean;
   /** Target PSA at the grid periods (null where the target does not cover the period). */

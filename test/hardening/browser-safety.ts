@@ -4,7 +4,7 @@
  * markup itself, so the HTML report can be checked the same way as the figures.
  */
 import { pathToFileURL } from 'node:url';
-import { type Browser, chromium } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 
 export const PAYLOAD_FLAG = '__quakesweepPayloadRan';
 
@@ -16,20 +16,7 @@ export const PAYLOADS = [
   `"' onload="window.${PAYLOAD_FLAG}=1" x='`,
 ];
 
-export function launchChromium(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--disable-quic',
-    ],
-  });
-}
+export { launchChromium } from '../helpers/chromium.js';
 
 export interface InertCheck {
   dialogs: string[];

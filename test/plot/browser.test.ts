@@ -1,4 +1,4 @@
-import { type Browser, chromium, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { logSpaced } from '../../src/oscillator/grid.js';
 import { historiesFigure } from '../../src/plot/histories.js';
@@ -7,6 +7,7 @@ import { tripartiteFigure } from '../../src/plot/tripartite.js';
 import { integrateRecord } from '../../src/record/integrate.js';
 import { createRecord } from '../../src/record/record.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
+import { launchChromium } from '../helpers/chromium.js';
 import { newFigures } from './new-figures.js';
 
 // An invented record: two decaying sines, 15 s at 100 samples a second.
@@ -35,18 +36,7 @@ let browser: Browser;
 let page: Page;
 
 beforeAll(async () => {
-  browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--disable-quic',
-    ],
-  });
+  browser = await launchChromium();
   page = await browser.newPage();
 });
 

@@ -1,13 +1,14 @@
 import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { type Browser, chromium } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/caution.js';
 import { runReport } from '../../src/cli/commands/report.js';
 import { runSpectrum } from '../../src/cli/commands/spectrum.js';
 import { escapeHtml } from '../../src/report/html.js';
 import { inlineSvg } from '../../src/report/inline-svg.js';
+import { launchChromium } from '../helpers/chromium.js';
 
 // An invented record (a decaying 2 Hz sine), an invented generator on grade, a coarse grid.
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-report-'));
@@ -59,18 +60,7 @@ beforeAll(async () => {
     'x',
   ]);
   html = readFileSync(join(folder, 'out', 'report.html'), 'utf8');
-  browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--disable-quic',
-    ],
-  });
+  browser = await launchChromium();
 });
 
 afterAll(async () => {

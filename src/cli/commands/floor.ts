@@ -69,7 +69,8 @@ export function buildingFromOptions(options: FloorCliOptions): BuildingMode {
   return { periodS, damping: dampings[0], modalFactor };
 }
 
-function broadeningFromOptions(value: string | boolean | undefined): number | null {
+/** `--broaden [b]`: null when absent, 0.15 when given bare, else the fraction 0 ≤ b < 1. */
+export function broadeningFromOptions(value: string | boolean | undefined): number | null {
   if (value === undefined || value === false) return null;
   if (value === true) return 0.15;
   const b = Number(value);

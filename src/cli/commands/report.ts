@@ -34,7 +34,7 @@ import { addProcessingOptions, applyProcessing } from '../processing-options.js'
 import { addRecordOptions, loadRecord, positiveNumber } from '../record-options.js';
 import { addTargetOptions, applyTarget, loadTarget } from '../target-options.js';
 import { planInput } from './anchor.js';
-import { buildingFromOptions, floorAssumptions } from './floor.js';
+import { broadeningFromOptions, buildingFromOptions, floorAssumptions } from './floor.js';
 import { INFO_METHODS } from './info.js';
 import { addGridOptions, gridFromOptions, type SpectrumCliOptions } from './spectrum.js';
 
@@ -125,7 +125,7 @@ export async function runReport(
     equipment.map((e) => e.value),
     options,
   );
-  const broadeningFraction = parseBroadening(options.broaden);
+  const broadeningFraction = broadeningFromOptions(options.broaden);
   prepareOutputFolder(out);
 
   const raw = await loadRecord(source, options);
@@ -353,15 +353,6 @@ function equipmentDemand(
     ],
     floor: figure,
   };
-}
-
-function parseBroadening(value: string | boolean | undefined): number | null {
-  if (value === undefined || value === false) return null;
-  if (value === true) return 0.15;
-  const b = Number(value);
-  if (value.trim() === '' || !(b >= 0) || !(b < 1))
-    throw usageError(`--broaden must be a fraction 0 ≤ b < 1, got '${value}'`);
-  return b;
 }
 
 function methodStatements(method: Method): string[] {

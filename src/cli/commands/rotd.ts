@@ -6,10 +6,9 @@ import { usageError } from '../../errors.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel } from '../../output/spectrum-csv.js';
-import { formatJson } from '../../output/spectrum-json.js';
+import { formatJson, recordToJson } from '../../output/spectrum-json.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { type RotDSpectra, rotDSpectra } from '../../spectrum/rotd.js';
-import type { SpectrumRecordInfo } from '../../spectrum/spectrum.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions, summaryRows } from './spectrum.js';
@@ -76,21 +75,10 @@ function notes(spectra: RotDSpectra): string[] {
   return out;
 }
 
-function recordJson(record: SpectrumRecordInfo) {
-  return {
-    name: record.name,
-    source: record.source,
-    npts: record.npts,
-    dt_s: record.dtS,
-    pga_g: record.pgaMS2 / STANDARD_GRAVITY_MS2,
-    processing: record.processing.map((step) => ({ ...step })),
-  };
-}
-
 export function rotdToJson(spectra: RotDSpectra) {
   return {
     caution: CAUTION,
-    records: spectra.records.map(recordJson),
+    records: spectra.records.map(recordToJson),
     method: spectra.method,
     method_description: METHOD_DESCRIPTIONS[spectra.method],
     angle_step_deg: spectra.angleStepDeg,
