@@ -266,3 +266,53 @@ export function prewarpedOscillator(
   }
   return { omegaRadS: omega, damping: zeta };
 }
+
+/**
+ * The map of `count` consecutive steps of `s` under an input that varies linearly from p0 to p1
+ * over all of them (sub-step j runs from p0 + (p1 − p0)·j/count to p0 + (p1 − p0)·(j + 1)/count),
+ * as one step in the same form. It is the sub-stepped recurrence itself, read off by stepping the
+ * four unit vectors, so a composed step gives the numbers of the sub-steps (to rounding) for the
+ * cost of one; only the values between its ends are not visited.
+ */
+export function composeSteps(s: StepCoefficients, count: number): StepCoefficients {
+  if (count === 1) return s;
+  const run = (u0: number, v0: number, p0: number, p1: number): [number, number] => {
+    let u = u0;
+    let v = v0;
+    for (let j = 0; j < count; j++) {
+      const pa = p0 + ((p1 - p0) * j) / count;
+      const pb = p0 + ((p1 - p0) * (j + 1)) / count;
+      const un = s.uu * u + s.uv * v + s.up0 * pa + s.up1 * pb;
+      v = s.vu * u + s.vv * v + s.vp0 * pa + s.vp1 * pb;
+      u = un;
+    }
+    return [u, v];
+  };
+  const [uu, vu] = run(1, 0, 0, 0);
+  const [uv, vv] = run(0, 1, 0, 0);
+  const [up0, vp0] = run(0, 0, 1, 0);
+  const [up1, vp1] = run(0, 0, 0, 1);
+  return { uu, uv, up0, up1, vu, vv, vp0, vp1 };
+}
+
+/**
+ * How a sweep runs an oscillator that the rule gives `substeps` sub-steps per record step: as
+ * `steps` executed steps per record step, each composing `composed` sub-steps (composeSteps), with
+ * steps × composed ≥ substeps. Peaks between executed steps are refined by cubic Hermite
+ * interpolation, which needs MIN_STEPS_PER_PERIOD of them a period (and, for content near the
+ * record's Nyquist frequency, the piecewise-exact method's record rule), so only the sub-steps
+ * beyond that are composed.
+ */
+export function executionPlan(
+  substeps: number,
+  periodS: number,
+  dtS: number,
+  roughness: number,
+): { steps: number; composed: number } {
+  const hermite = Math.max(
+    recordSubsteps('piecewise-exact', roughness),
+    Math.ceil((dtS * MIN_STEPS_PER_PERIOD) / periodS - 1e-9),
+  );
+  const steps = Math.min(substeps, hermite);
+  return { steps, composed: Math.ceil(substeps / steps) };
+}

@@ -1,6 +1,13 @@
 import { inputError } from '../errors.js';
 import { COEFFICIENT_STRIDE, GROUP_WIDTH, PEAK_STRIDE, STATE_STRIDE, sweepBlock } from './kernel.js';
-import { type Method, prewarpedOscillator, stepCoefficients, substepCount } from './recurrence.js';
+import {
+  composeSteps,
+  executionPlan,
+  type Method,
+  prewarpedOscillator,
+  stepCoefficients,
+  substepCount,
+} from './recurrence.js';
 import { WASM_WIDTH, WasmSweeper, wasmSimdSupported } from './wasm/kernel.js';
 
 export interface SweepOptions {
@@ -39,12 +46,19 @@ export interface Peaks {
 /** Which kernel steps the oscillators: the WebAssembly SIMD one, the TypeScript one, or the first where it runs. */
 export type SweepKernel = 'auto' | 'wasm' | 'js';
 
-/** One oscillator of a planned sweep: its index in the result arrays and its sub-step count. */
+/**
+ * One oscillator of a planned sweep: its index in the result arrays, the steps the kernel executes
+ * per record step, and the method's sub-steps composed into each (see executionPlan in
+ * recurrence.ts).
+ */
 export interface PlannedOscillator {
   index: number;
   periodS: number;
   damping: number;
+  /** Steps executed per record step (the kernel's sub-steps). */
   substeps: number;
+  /** Sub-steps of the method composed into each executed step (1: none). */
+  composed: number;
 }
 
 /** What every kernel and thread of a sweep shares: the grid, the method and the record's bounds. */
@@ -94,17 +108,20 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
     for (let p = 0; p < periodsS.length; p++) {
       const periodS = periodsS[p];
       if (periodS === 0) continue;
+      const substeps = substepCount(method, periodS, dtS, {
+        damping: dampings[d],
+        durationS,
+        prewarp,
+        roughness,
+        stepsPerPeriod: options.stepsPerPeriod,
+      });
+      const run = executionPlan(substeps, periodS, dtS, roughness);
       oscillators.push({
         index: d * periodsS.length + p,
         periodS,
         damping: dampings[d],
-        substeps: substepCount(method, periodS, dtS, {
-          damping: dampings[d],
-          durationS,
-          prewarp,
-          roughness,
-          stepsPerPeriod: options.stepsPerPeriod,
-        }),
+        substeps: run.steps,
+        composed: run.composed,
       });
     }
   }
@@ -193,9 +210,10 @@ export function groupRunner(
   };
   if (resolveKernel(kernel) === 'wasm') {
     const sweeper = new WasmSweeper(accelMS2, BLOCK_STEPS);
-    // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts).
-    const symmetric = plan.method === 'newmark-average';
     return (group) => {
+      // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),
+      // unless sub-steps are composed.
+      const symmetric = plan.method === 'newmark-average' && group.every((o) => o.composed === 1);
       const stepS = dtS / group[0].substeps;
       pack(group, stepS);
       sweeper.run(packed, COEFFICIENT_STRIDE, group.length, group[0].substeps, stepS, symmetric, values);
@@ -317,17 +335,19 @@ function runGroup(
 export function packCoefficients(
   target: Float64Array,
   slot: number,
-  oscillator: { periodS: number; damping: number },
+  oscillator: { periodS: number; damping: number; composed?: number },
   method: Method,
   stepS: number,
   bounds: GroundBounds,
   prewarp = true,
 ): void {
   const omega = (2 * Math.PI) / oscillator.periodS;
+  const composed = oscillator.composed ?? 1;
+  const substepS = stepS / composed;
   const warped = prewarp
-    ? prewarpedOscillator(method, omega, oscillator.damping, stepS)
+    ? prewarpedOscillator(method, omega, oscillator.damping, substepS)
     : { omegaRadS: omega, damping: oscillator.damping };
-  const s = stepCoefficients(method, warped.omegaRadS, warped.damping, stepS);
+  const s = composeSteps(stepCoefficients(method, warped.omegaRadS, warped.damping, substepS), composed);
   const o = slot * COEFFICIENT_STRIDE;
   target[o] = s.uu;
   target[o + 1] = s.uv;

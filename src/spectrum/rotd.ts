@@ -1,6 +1,8 @@
 import { inputError, usageError } from '../errors.js';
 import { hermitePeak } from '../oscillator/peak.js';
 import {
+  composeSteps,
+  executionPlan,
   type Method,
   prewarpedOscillator,
   stepCoefficients,
@@ -173,11 +175,22 @@ function oscillatorPeaks(
   const { periodS, damping, method } = oscillator;
   const durationS = (a1.length - 1) * dtS;
   const roughness = Math.max(recordRoughness(a1), recordRoughness(a2));
-  const substeps = substepCount(method, periodS, dtS, { damping, durationS, roughness });
+  // The sweep's execution plan: the method's sub-steps, composed down to the steps that the
+  // Hermite refinement needs (executionPlan in recurrence.ts), so PSA here is the sweep's PSA.
+  const run = executionPlan(
+    substepCount(method, periodS, dtS, { damping, durationS, roughness }),
+    periodS,
+    dtS,
+    roughness,
+  );
+  const substeps = run.steps;
   const h = dtS / substeps;
   const omega = (2 * Math.PI) / periodS;
-  const warped = prewarpedOscillator(method, omega, damping, h);
-  const c = stepCoefficients(method, warped.omegaRadS, warped.damping, h);
+  const warped = prewarpedOscillator(method, omega, damping, h / run.composed);
+  const c = composeSteps(
+    stepCoefficients(method, warped.omegaRadS, warped.damping, h / run.composed),
+    run.composed,
+  );
   const { uu, uv, up0, up1, vu, vv, vp0, vp1 } = c;
   const angles = peaks.length;
   const inverse = 1 / substeps;

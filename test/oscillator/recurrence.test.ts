@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
+  composeSteps,
+  executionPlan,
   newmarkCoefficients,
   piecewiseExactCoefficients,
   prewarpedOscillator,
@@ -193,5 +195,54 @@ describe('pre-warped Newmark recurrences', () => {
       expect(c.uu + c.vv).toBeCloseTo(exact.uu + exact.vv, 12);
       expect(c.uu * c.vv - c.uv * c.vu).toBeCloseTo(exact.uu * exact.vv - exact.uv * exact.vu, 12);
     }
+  });
+});
+
+describe('composed sub-steps (composeSteps, executionPlan)', () => {
+  // Piecewise-exact is exact for an input linear over the step (Nigam and Jennings 1969), so k
+  // exact sub-steps over a linear input compose to the exact step over the whole interval.
+  it('composes k exact steps into the exact step of k·h', () => {
+    for (const zeta of [0, 0.05, 1, 3]) {
+      const omega = 2 * Math.PI * 7;
+      const whole = piecewiseExactCoefficients(omega, zeta, 0.01);
+      const composed = composeSteps(piecewiseExactCoefficients(omega, zeta, 0.01 / 7), 7);
+      for (const key of Object.keys(whole) as (keyof StepCoefficients)[]) {
+        const scale = Math.abs(whole[key]) + 1e-6 * (key.startsWith('u') ? 1e-2 : 1);
+        expect(Math.abs(composed[key] - whole[key]) / scale).toBeLessThan(1e-11);
+      }
+    }
+  });
+
+  // The composed map is the sub-stepped recurrence itself: stepping it once gives what stepping
+  // the k sub-steps over the linearly interpolated input gives (to rounding).
+  it.each(['newmark-average', 'newmark-linear'] as const)(
+    'gives the sub-steps of %s to rounding',
+    (method) => {
+      const omega = (2 * Math.PI) / 0.05;
+      const k = 9;
+      const s = stepCoefficients(method, omega, 0.05, 0.01 / k);
+      const c = composeSteps(s, k);
+      const [u0, v0, p0, p1] = [3e-3, -0.2, 1.7, -2.4];
+      let u = u0;
+      let v = v0;
+      for (let j = 0; j < k; j++) {
+        const pa = p0 + ((p1 - p0) * j) / k;
+        const pb = p0 + ((p1 - p0) * (j + 1)) / k;
+        const un = s.uu * u + s.uv * v + s.up0 * pa + s.up1 * pb;
+        v = s.vu * u + s.vv * v + s.vp0 * pa + s.vp1 * pb;
+        u = un;
+      }
+      expect(c.uu * u0 + c.uv * v0 + c.up0 * p0 + c.up1 * p1).toBeCloseTo(u, 15);
+      expect((c.vu * u0 + c.vv * v0 + c.vp0 * p0 + c.vp1 * p1) / v).toBeCloseTo(1, 13);
+    },
+  );
+
+  it('keeps MIN_STEPS_PER_PERIOD executed steps a period and composes the rest', () => {
+    // T = 0.05 s at Δt = 0.005 s: 10 steps a period already; 7 sub-steps of Newmark average composed.
+    expect(executionPlan(7, 0.05, 0.005, 0.1)).toEqual({ steps: 1, composed: 7 });
+    // T = 0.01 s at Δt = 0.005 s needs 5 executed steps a record step; 14 sub-steps become 5 × 3.
+    expect(executionPlan(14, 0.01, 0.005, 0.1)).toEqual({ steps: 5, composed: 3 });
+    // Fewer sub-steps than Hermite needs: nothing to compose.
+    expect(executionPlan(3, 0.01, 0.005, 0.1)).toEqual({ steps: 3, composed: 1 });
   });
 });

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { hermitePeak } from '../../src/oscillator/peak.js';
 import {
+  composeSteps,
+  executionPlan,
   type Method,
   prewarpedOscillator,
   stepCoefficients,
@@ -9,17 +11,22 @@ import {
 import { recordRoughness, sweepOscillators } from '../../src/oscillator/sweep.js';
 import { sineRecord, testRecord } from '../helpers/records.js';
 
-/** The sweep's peaks without its threshold test: Hermite refinement on every step. */
+/**
+ * The sweep's peaks without its threshold test: Hermite refinement on every executed step (the
+ * method's sub-steps composed as executionPlan says).
+ */
 function bruteForcePeaks(accel: Float64Array, dtS: number, periodS: number, zeta: number, method: Method) {
-  const m = substepCount(method, periodS, dtS, {
+  const roughness = recordRoughness(accel);
+  const substeps = substepCount(method, periodS, dtS, {
     damping: zeta,
     durationS: (accel.length - 1) * dtS,
-    roughness: recordRoughness(accel),
+    roughness,
   });
+  const { steps: m, composed } = executionPlan(substeps, periodS, dtS, roughness);
   const h = dtS / m;
   const omega = (2 * Math.PI) / periodS;
-  const w = prewarpedOscillator(method, omega, zeta, h);
-  const co = stepCoefficients(method, w.omegaRadS, w.damping, h);
+  const w = prewarpedOscillator(method, omega, zeta, h / composed);
+  const co = composeSteps(stepCoefficients(method, w.omegaRadS, w.damping, h / composed), composed);
   const c = 2 * zeta * omega;
   const k = omega * omega;
   let u = 0;
