@@ -32,130 +32,40 @@ function hermiteAt(peak: f64, qa: f64, qb: f64, m0: f64, m1: f64, t: f64): f64 {
 }
 
 /**
- * The rare path of one lane: the threshold test and Hermite peak refinement of sweepBlock in
- * kernel.ts, in scalar code. Pointers address the lane's first value; lanes are 16 bytes apart.
+ * The scalar end of the rare path: the cubic Hermite peak of |q| inside one step (q and its
+ * derivative at both ends), folded into the peak at `peak` (the refinement of kernel.ts).
  */
-function refineLane(
-  uo: f64,
-  vo: f64,
-  u: f64,
-  v: f64,
-  pa: f64,
-  pb: f64,
-  h: f64,
-  co: usize,
-  st: usize,
-  pk: usize,
-): void {
-  const c = load<f64>(co, 8 * 16);
-  const k = load<f64>(co, 9 * 16);
-  const s = -(c * v + k * u);
-  const au = Math.abs(u);
-  const av = Math.abs(v);
-  const as = Math.abs(s);
-  if (au > load<f64>(st, 2 * 16)) {
-    let pu = Math.max(load<f64>(pk), au);
-    {
-      const m0 = vo * h;
-      const m1 = v * h;
-      const qa = uo;
-      const qb = u;
-      const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
-      const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-      // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
-      // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
-      // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
-      // (0, 1) (or at its ends, where H is the end value already counted), and the square root
-      // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
-      if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
-        if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
-          if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            pu = hermiteAt(pu, qa, qb, m0, m1, ta);
-            pu = hermiteAt(pu, qa, qb, m0, m1, tb);
-          }
-        } else if (cb !== 0) {
-          pu = hermiteAt(pu, qa, qb, m0, m1, -m0 / cb);
+function hermiteLane(qa0: f64, qb0: f64, d0: f64, d1: f64, h: f64, peak: usize): void {
+  let p = load<f64>(peak);
+  {
+    const m0 = d0 * h;
+    const m1 = d1 * h;
+    const qa = qa0;
+    const qb = qb0;
+    const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
+    const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
+    // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
+    // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
+    // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
+    // (0, 1) (or at its ends, where H is the end value already counted), and the square root
+    // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
+    if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
+      if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
+        const disc = cb * cb - 4 * ca * m0;
+        if (disc >= 0) {
+          const root = Math.sqrt(disc);
+          const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
+          const ta = qq / ca;
+          const tb = qq !== 0 ? m0 / qq : -1;
+          p = hermiteAt(p, qa, qb, m0, m1, ta);
+          p = hermiteAt(p, qa, qb, m0, m1, tb);
         }
+      } else if (cb !== 0) {
+        p = hermiteAt(p, qa, qb, m0, m1, -m0 / cb);
       }
     }
-    store<f64>(pk, pu);
-    store<f64>(st, pu * load<f64>(co, 10 * 16) - load<f64>(co, 11 * 16), 2 * 16);
   }
-  if (av > load<f64>(st, 3 * 16)) {
-    let pv = Math.max(load<f64>(pk, 16), av);
-    const so = -(c * vo + k * uo);
-    {
-      const m0 = (so - pa) * h;
-      const m1 = (s - pb) * h;
-      const qa = vo;
-      const qb = v;
-      const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
-      const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-      // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
-      // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
-      // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
-      // (0, 1) (or at its ends, where H is the end value already counted), and the square root
-      // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
-      if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
-        if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
-          if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            pv = hermiteAt(pv, qa, qb, m0, m1, ta);
-            pv = hermiteAt(pv, qa, qb, m0, m1, tb);
-          }
-        } else if (cb !== 0) {
-          pv = hermiteAt(pv, qa, qb, m0, m1, -m0 / cb);
-        }
-      }
-    }
-    store<f64>(pk, pv, 16);
-    store<f64>(st, pv * load<f64>(co, 10 * 16) - load<f64>(co, 12 * 16), 3 * 16);
-  }
-  if (as > load<f64>(st, 4 * 16)) {
-    let ps = Math.max(load<f64>(pk, 32), as);
-    const so = -(c * vo + k * uo);
-    const dso = -c * (so - pa) - k * vo;
-    const ds = -c * (s - pb) - k * v;
-    {
-      const m0 = dso * h;
-      const m1 = ds * h;
-      const qa = so;
-      const qb = s;
-      const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
-      const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-      // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
-      // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
-      // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
-      // (0, 1) (or at its ends, where H is the end value already counted), and the square root
-      // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
-      if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
-        if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-          const disc = cb * cb - 4 * ca * m0;
-          if (disc >= 0) {
-            const root = Math.sqrt(disc);
-            const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-            const ta = qq / ca;
-            const tb = qq !== 0 ? m0 / qq : -1;
-            ps = hermiteAt(ps, qa, qb, m0, m1, ta);
-            ps = hermiteAt(ps, qa, qb, m0, m1, tb);
-          }
-        } else if (cb !== 0) {
-          ps = hermiteAt(ps, qa, qb, m0, m1, -m0 / cb);
-        }
-      }
-    }
-    store<f64>(pk, ps, 32);
-    store<f64>(st, ps * load<f64>(co, 10 * 16) - load<f64>(co, 13 * 16), 4 * 16);
-  }
+  store<f64>(peak, p);
 }
 
 /**
@@ -193,6 +103,11 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
   let tu1 = v128.load(state, 112);
   let tv1 = v128.load(state, 128);
   let ts1 = v128.load(state, 144);
+  const hv = f64x2.splat(h);
+  const zero = f64x2.splat(0);
+  const three = f64x2.splat(3);
+  const six = f64x2.splat(6);
+  const bend = f64x2.splat(3.5);
   let pas = load<f64>(input);
   let pa = f64x2.splat(pas);
   for (let n = 1; n <= steps; n++) {
@@ -231,83 +146,279 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
       f64x2.gt(as1, ts1),
     );
     if (v128.any_true(v128.or(m0, m1))) {
-      const bits0 = i64x2.bitmask(m0);
-      if (bits0 !== 0) {
-        const bits = bits0;
-        const t = state + 0;
-        v128.store(t, tu0, 32);
-        v128.store(t, tv0, 48);
-        v128.store(t, ts0, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo0, 0),
-            f64x2.extract_lane(vo0, 0),
-            f64x2.extract_lane(u0, 0),
-            f64x2.extract_lane(v0, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 0,
-            t + 0,
-            peaks + 0,
-          );
+      if (i64x2.bitmask(m0) !== 0) {
+        const pav = f64x2.splat(pas);
+        const pbv = f64x2.splat(pbs);
+        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
+        const ar00 = f64x2.sub(so0, pav);
+        const ar10 = f64x2.sub(sn0, pbv);
+        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
+        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+        const ratio = v128.load(coefficients, 160);
+        {
+          const end = f64x2.abs(u0);
+          const hit = f64x2.gt(end, tu0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 0), end);
+            v128.store(peaks, peak, 0);
+            const m0 = f64x2.mul(vo0, hv);
+            const m1 = f64x2.mul(v0, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(uo0, u0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 0),
+                  f64x2.extract_lane(u0, 0),
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  h,
+                  peaks + 0,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 1),
+                  f64x2.extract_lane(u0, 1),
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  h,
+                  peaks + 8,
+                );
+              }
+              refined = v128.load(peaks, 0);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 176));
+            tu0 = v128.bitselect(threshold, tu0, hit);
+          }
         }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo0, 1),
-            f64x2.extract_lane(vo0, 1),
-            f64x2.extract_lane(u0, 1),
-            f64x2.extract_lane(v0, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 8,
-            t + 8,
-            peaks + 8,
-          );
+        {
+          const end = f64x2.abs(v0);
+          const hit = f64x2.gt(end, tv0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 16), end);
+            v128.store(peaks, peak, 16);
+            const m0 = f64x2.mul(ar00, hv);
+            const m1 = f64x2.mul(ar10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  f64x2.extract_lane(ar00, 0),
+                  f64x2.extract_lane(ar10, 0),
+                  h,
+                  peaks + 16,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  f64x2.extract_lane(ar00, 1),
+                  f64x2.extract_lane(ar10, 1),
+                  h,
+                  peaks + 24,
+                );
+              }
+              refined = v128.load(peaks, 16);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 192));
+            tv0 = v128.bitselect(threshold, tv0, hit);
+          }
         }
-        tu0 = v128.load(t, 32);
-        tv0 = v128.load(t, 48);
-        ts0 = v128.load(t, 64);
+        {
+          const end = f64x2.abs(sn0);
+          const hit = f64x2.gt(end, ts0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 32), end);
+            v128.store(peaks, peak, 32);
+            const m0 = f64x2.mul(js00, hv);
+            const m1 = f64x2.mul(js10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 0),
+                  f64x2.extract_lane(sn0, 0),
+                  f64x2.extract_lane(js00, 0),
+                  f64x2.extract_lane(js10, 0),
+                  h,
+                  peaks + 32,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 1),
+                  f64x2.extract_lane(sn0, 1),
+                  f64x2.extract_lane(js00, 1),
+                  f64x2.extract_lane(js10, 1),
+                  h,
+                  peaks + 40,
+                );
+              }
+              refined = v128.load(peaks, 32);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 208));
+            ts0 = v128.bitselect(threshold, ts0, hit);
+          }
+        }
       }
-      const bits1 = i64x2.bitmask(m1);
-      if (bits1 !== 0) {
-        const bits = bits1;
-        const t = state + 80;
-        v128.store(t, tu1, 32);
-        v128.store(t, tv1, 48);
-        v128.store(t, ts1, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo1, 0),
-            f64x2.extract_lane(vo1, 0),
-            f64x2.extract_lane(u1, 0),
-            f64x2.extract_lane(v1, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 224,
-            t + 0,
-            peaks + 48,
-          );
+      if (i64x2.bitmask(m1) !== 0) {
+        const pav = f64x2.splat(pas);
+        const pbv = f64x2.splat(pbs);
+        const so1 = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
+        const sn1 = f64x2.neg(f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1)));
+        const ar01 = f64x2.sub(so1, pav);
+        const ar11 = f64x2.sub(sn1, pbv);
+        const js01 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar01), f64x2.mul(k1, vo1));
+        const js11 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar11), f64x2.mul(k1, v1));
+        const ratio = v128.load(coefficients, 384);
+        {
+          const end = f64x2.abs(u1);
+          const hit = f64x2.gt(end, tu1);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 48), end);
+            v128.store(peaks, peak, 48);
+            const m0 = f64x2.mul(vo1, hv);
+            const m1 = f64x2.mul(v1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(uo1, u1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(uo1, 0),
+                  f64x2.extract_lane(u1, 0),
+                  f64x2.extract_lane(vo1, 0),
+                  f64x2.extract_lane(v1, 0),
+                  h,
+                  peaks + 48,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(uo1, 1),
+                  f64x2.extract_lane(u1, 1),
+                  f64x2.extract_lane(vo1, 1),
+                  f64x2.extract_lane(v1, 1),
+                  h,
+                  peaks + 56,
+                );
+              }
+              refined = v128.load(peaks, 48);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 400));
+            tu1 = v128.bitselect(threshold, tu1, hit);
+          }
         }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo1, 1),
-            f64x2.extract_lane(vo1, 1),
-            f64x2.extract_lane(u1, 1),
-            f64x2.extract_lane(v1, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 232,
-            t + 8,
-            peaks + 56,
-          );
+        {
+          const end = f64x2.abs(v1);
+          const hit = f64x2.gt(end, tv1);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 64), end);
+            v128.store(peaks, peak, 64);
+            const m0 = f64x2.mul(ar01, hv);
+            const m1 = f64x2.mul(ar11, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo1, v1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(vo1, 0),
+                  f64x2.extract_lane(v1, 0),
+                  f64x2.extract_lane(ar01, 0),
+                  f64x2.extract_lane(ar11, 0),
+                  h,
+                  peaks + 64,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(vo1, 1),
+                  f64x2.extract_lane(v1, 1),
+                  f64x2.extract_lane(ar01, 1),
+                  f64x2.extract_lane(ar11, 1),
+                  h,
+                  peaks + 72,
+                );
+              }
+              refined = v128.load(peaks, 64);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 416));
+            tv1 = v128.bitselect(threshold, tv1, hit);
+          }
         }
-        tu1 = v128.load(t, 32);
-        tv1 = v128.load(t, 48);
-        ts1 = v128.load(t, 64);
+        {
+          const end = f64x2.abs(sn1);
+          const hit = f64x2.gt(end, ts1);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 80), end);
+            v128.store(peaks, peak, 80);
+            const m0 = f64x2.mul(js01, hv);
+            const m1 = f64x2.mul(js11, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so1, sn1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(so1, 0),
+                  f64x2.extract_lane(sn1, 0),
+                  f64x2.extract_lane(js01, 0),
+                  f64x2.extract_lane(js11, 0),
+                  h,
+                  peaks + 80,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(so1, 1),
+                  f64x2.extract_lane(sn1, 1),
+                  f64x2.extract_lane(js01, 1),
+                  f64x2.extract_lane(js11, 1),
+                  h,
+                  peaks + 88,
+                );
+              }
+              refined = v128.load(peaks, 80);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 432));
+            ts1 = v128.bitselect(threshold, ts1, hit);
+          }
+        }
       }
     }
     pas = pbs;
@@ -366,6 +477,11 @@ function sweepBlockSymmetric(
   let tu1 = v128.load(state, 112);
   let tv1 = v128.load(state, 128);
   let ts1 = v128.load(state, 144);
+  const hv = f64x2.splat(h);
+  const zero = f64x2.splat(0);
+  const three = f64x2.splat(3);
+  const six = f64x2.splat(6);
+  const bend = f64x2.splat(3.5);
   let pas = load<f64>(input);
   for (let n = 1; n <= steps; n++) {
     const pbs = load<f64>(input + ((<usize>n) << 3));
@@ -391,83 +507,279 @@ function sweepBlockSymmetric(
       f64x2.gt(as1, ts1),
     );
     if (v128.any_true(v128.or(m0, m1))) {
-      const bits0 = i64x2.bitmask(m0);
-      if (bits0 !== 0) {
-        const bits = bits0;
-        const t = state + 0;
-        v128.store(t, tu0, 32);
-        v128.store(t, tv0, 48);
-        v128.store(t, ts0, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo0, 0),
-            f64x2.extract_lane(vo0, 0),
-            f64x2.extract_lane(u0, 0),
-            f64x2.extract_lane(v0, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 0,
-            t + 0,
-            peaks + 0,
-          );
+      if (i64x2.bitmask(m0) !== 0) {
+        const pav = f64x2.splat(pas);
+        const pbv = f64x2.splat(pbs);
+        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
+        const ar00 = f64x2.sub(so0, pav);
+        const ar10 = f64x2.sub(sn0, pbv);
+        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
+        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+        const ratio = v128.load(coefficients, 160);
+        {
+          const end = f64x2.abs(u0);
+          const hit = f64x2.gt(end, tu0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 0), end);
+            v128.store(peaks, peak, 0);
+            const m0 = f64x2.mul(vo0, hv);
+            const m1 = f64x2.mul(v0, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(uo0, u0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 0),
+                  f64x2.extract_lane(u0, 0),
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  h,
+                  peaks + 0,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 1),
+                  f64x2.extract_lane(u0, 1),
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  h,
+                  peaks + 8,
+                );
+              }
+              refined = v128.load(peaks, 0);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 176));
+            tu0 = v128.bitselect(threshold, tu0, hit);
+          }
         }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo0, 1),
-            f64x2.extract_lane(vo0, 1),
-            f64x2.extract_lane(u0, 1),
-            f64x2.extract_lane(v0, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 8,
-            t + 8,
-            peaks + 8,
-          );
+        {
+          const end = f64x2.abs(v0);
+          const hit = f64x2.gt(end, tv0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 16), end);
+            v128.store(peaks, peak, 16);
+            const m0 = f64x2.mul(ar00, hv);
+            const m1 = f64x2.mul(ar10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  f64x2.extract_lane(ar00, 0),
+                  f64x2.extract_lane(ar10, 0),
+                  h,
+                  peaks + 16,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  f64x2.extract_lane(ar00, 1),
+                  f64x2.extract_lane(ar10, 1),
+                  h,
+                  peaks + 24,
+                );
+              }
+              refined = v128.load(peaks, 16);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 192));
+            tv0 = v128.bitselect(threshold, tv0, hit);
+          }
         }
-        tu0 = v128.load(t, 32);
-        tv0 = v128.load(t, 48);
-        ts0 = v128.load(t, 64);
+        {
+          const end = f64x2.abs(sn0);
+          const hit = f64x2.gt(end, ts0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 32), end);
+            v128.store(peaks, peak, 32);
+            const m0 = f64x2.mul(js00, hv);
+            const m1 = f64x2.mul(js10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 0),
+                  f64x2.extract_lane(sn0, 0),
+                  f64x2.extract_lane(js00, 0),
+                  f64x2.extract_lane(js10, 0),
+                  h,
+                  peaks + 32,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 1),
+                  f64x2.extract_lane(sn0, 1),
+                  f64x2.extract_lane(js00, 1),
+                  f64x2.extract_lane(js10, 1),
+                  h,
+                  peaks + 40,
+                );
+              }
+              refined = v128.load(peaks, 32);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 208));
+            ts0 = v128.bitselect(threshold, ts0, hit);
+          }
+        }
       }
-      const bits1 = i64x2.bitmask(m1);
-      if (bits1 !== 0) {
-        const bits = bits1;
-        const t = state + 80;
-        v128.store(t, tu1, 32);
-        v128.store(t, tv1, 48);
-        v128.store(t, ts1, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo1, 0),
-            f64x2.extract_lane(vo1, 0),
-            f64x2.extract_lane(u1, 0),
-            f64x2.extract_lane(v1, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 224,
-            t + 0,
-            peaks + 48,
-          );
+      if (i64x2.bitmask(m1) !== 0) {
+        const pav = f64x2.splat(pas);
+        const pbv = f64x2.splat(pbs);
+        const so1 = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
+        const sn1 = f64x2.neg(f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1)));
+        const ar01 = f64x2.sub(so1, pav);
+        const ar11 = f64x2.sub(sn1, pbv);
+        const js01 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar01), f64x2.mul(k1, vo1));
+        const js11 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar11), f64x2.mul(k1, v1));
+        const ratio = v128.load(coefficients, 384);
+        {
+          const end = f64x2.abs(u1);
+          const hit = f64x2.gt(end, tu1);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 48), end);
+            v128.store(peaks, peak, 48);
+            const m0 = f64x2.mul(vo1, hv);
+            const m1 = f64x2.mul(v1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(uo1, u1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(uo1, 0),
+                  f64x2.extract_lane(u1, 0),
+                  f64x2.extract_lane(vo1, 0),
+                  f64x2.extract_lane(v1, 0),
+                  h,
+                  peaks + 48,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(uo1, 1),
+                  f64x2.extract_lane(u1, 1),
+                  f64x2.extract_lane(vo1, 1),
+                  f64x2.extract_lane(v1, 1),
+                  h,
+                  peaks + 56,
+                );
+              }
+              refined = v128.load(peaks, 48);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 400));
+            tu1 = v128.bitselect(threshold, tu1, hit);
+          }
         }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo1, 1),
-            f64x2.extract_lane(vo1, 1),
-            f64x2.extract_lane(u1, 1),
-            f64x2.extract_lane(v1, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 232,
-            t + 8,
-            peaks + 56,
-          );
+        {
+          const end = f64x2.abs(v1);
+          const hit = f64x2.gt(end, tv1);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 64), end);
+            v128.store(peaks, peak, 64);
+            const m0 = f64x2.mul(ar01, hv);
+            const m1 = f64x2.mul(ar11, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo1, v1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(vo1, 0),
+                  f64x2.extract_lane(v1, 0),
+                  f64x2.extract_lane(ar01, 0),
+                  f64x2.extract_lane(ar11, 0),
+                  h,
+                  peaks + 64,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(vo1, 1),
+                  f64x2.extract_lane(v1, 1),
+                  f64x2.extract_lane(ar01, 1),
+                  f64x2.extract_lane(ar11, 1),
+                  h,
+                  peaks + 72,
+                );
+              }
+              refined = v128.load(peaks, 64);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 416));
+            tv1 = v128.bitselect(threshold, tv1, hit);
+          }
         }
-        tu1 = v128.load(t, 32);
-        tv1 = v128.load(t, 48);
-        ts1 = v128.load(t, 64);
+        {
+          const end = f64x2.abs(sn1);
+          const hit = f64x2.gt(end, ts1);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 80), end);
+            v128.store(peaks, peak, 80);
+            const m0 = f64x2.mul(js01, hv);
+            const m1 = f64x2.mul(js11, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so1, sn1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(so1, 0),
+                  f64x2.extract_lane(sn1, 0),
+                  f64x2.extract_lane(js01, 0),
+                  f64x2.extract_lane(js11, 0),
+                  h,
+                  peaks + 80,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(so1, 1),
+                  f64x2.extract_lane(sn1, 1),
+                  f64x2.extract_lane(js01, 1),
+                  f64x2.extract_lane(js11, 1),
+                  h,
+                  peaks + 88,
+                );
+              }
+              refined = v128.load(peaks, 80);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 432));
+            ts1 = v128.bitselect(threshold, ts1, hit);
+          }
+        }
       }
     }
     pas = pbs;
@@ -511,6 +823,11 @@ function sweepBlockNarrow(
   let tu0 = v128.load(state, 32);
   let tv0 = v128.load(state, 48);
   let ts0 = v128.load(state, 64);
+  const hv = f64x2.splat(h);
+  const zero = f64x2.splat(0);
+  const three = f64x2.splat(3);
+  const six = f64x2.splat(6);
+  const bend = f64x2.splat(3.5);
   let pas = load<f64>(input);
   let pa = f64x2.splat(pas);
   for (let n = 1; n <= steps; n++) {
@@ -533,44 +850,142 @@ function sweepBlockNarrow(
       f64x2.gt(as0, ts0),
     );
     if (v128.any_true(m0)) {
-      const bits0 = i64x2.bitmask(m0);
-      if (bits0 !== 0) {
-        const bits = bits0;
-        const t = state + 0;
-        v128.store(t, tu0, 32);
-        v128.store(t, tv0, 48);
-        v128.store(t, ts0, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo0, 0),
-            f64x2.extract_lane(vo0, 0),
-            f64x2.extract_lane(u0, 0),
-            f64x2.extract_lane(v0, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 0,
-            t + 0,
-            peaks + 0,
-          );
+      if (i64x2.bitmask(m0) !== 0) {
+        const pav = f64x2.splat(pas);
+        const pbv = f64x2.splat(pbs);
+        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
+        const ar00 = f64x2.sub(so0, pav);
+        const ar10 = f64x2.sub(sn0, pbv);
+        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
+        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+        const ratio = v128.load(coefficients, 160);
+        {
+          const end = f64x2.abs(u0);
+          const hit = f64x2.gt(end, tu0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 0), end);
+            v128.store(peaks, peak, 0);
+            const m0 = f64x2.mul(vo0, hv);
+            const m1 = f64x2.mul(v0, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(uo0, u0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 0),
+                  f64x2.extract_lane(u0, 0),
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  h,
+                  peaks + 0,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 1),
+                  f64x2.extract_lane(u0, 1),
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  h,
+                  peaks + 8,
+                );
+              }
+              refined = v128.load(peaks, 0);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 176));
+            tu0 = v128.bitselect(threshold, tu0, hit);
+          }
         }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo0, 1),
-            f64x2.extract_lane(vo0, 1),
-            f64x2.extract_lane(u0, 1),
-            f64x2.extract_lane(v0, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 8,
-            t + 8,
-            peaks + 8,
-          );
+        {
+          const end = f64x2.abs(v0);
+          const hit = f64x2.gt(end, tv0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 16), end);
+            v128.store(peaks, peak, 16);
+            const m0 = f64x2.mul(ar00, hv);
+            const m1 = f64x2.mul(ar10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  f64x2.extract_lane(ar00, 0),
+                  f64x2.extract_lane(ar10, 0),
+                  h,
+                  peaks + 16,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  f64x2.extract_lane(ar00, 1),
+                  f64x2.extract_lane(ar10, 1),
+                  h,
+                  peaks + 24,
+                );
+              }
+              refined = v128.load(peaks, 16);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 192));
+            tv0 = v128.bitselect(threshold, tv0, hit);
+          }
         }
-        tu0 = v128.load(t, 32);
-        tv0 = v128.load(t, 48);
-        ts0 = v128.load(t, 64);
+        {
+          const end = f64x2.abs(sn0);
+          const hit = f64x2.gt(end, ts0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 32), end);
+            v128.store(peaks, peak, 32);
+            const m0 = f64x2.mul(js00, hv);
+            const m1 = f64x2.mul(js10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 0),
+                  f64x2.extract_lane(sn0, 0),
+                  f64x2.extract_lane(js00, 0),
+                  f64x2.extract_lane(js10, 0),
+                  h,
+                  peaks + 32,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 1),
+                  f64x2.extract_lane(sn0, 1),
+                  f64x2.extract_lane(js00, 1),
+                  f64x2.extract_lane(js10, 1),
+                  h,
+                  peaks + 40,
+                );
+              }
+              refined = v128.load(peaks, 32);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 208));
+            ts0 = v128.bitselect(threshold, ts0, hit);
+          }
+        }
       }
     }
     pas = pbs;
@@ -611,6 +1026,11 @@ function sweepBlockSymmetricNarrow(
   let tu0 = v128.load(state, 32);
   let tv0 = v128.load(state, 48);
   let ts0 = v128.load(state, 64);
+  const hv = f64x2.splat(h);
+  const zero = f64x2.splat(0);
+  const three = f64x2.splat(3);
+  const six = f64x2.splat(6);
+  const bend = f64x2.splat(3.5);
   let pas = load<f64>(input);
   for (let n = 1; n <= steps; n++) {
     const pbs = load<f64>(input + ((<usize>n) << 3));
@@ -626,44 +1046,142 @@ function sweepBlockSymmetricNarrow(
       f64x2.gt(as0, ts0),
     );
     if (v128.any_true(m0)) {
-      const bits0 = i64x2.bitmask(m0);
-      if (bits0 !== 0) {
-        const bits = bits0;
-        const t = state + 0;
-        v128.store(t, tu0, 32);
-        v128.store(t, tv0, 48);
-        v128.store(t, ts0, 64);
-        if (bits & 1) {
-          refineLane(
-            f64x2.extract_lane(uo0, 0),
-            f64x2.extract_lane(vo0, 0),
-            f64x2.extract_lane(u0, 0),
-            f64x2.extract_lane(v0, 0),
-            pas,
-            pbs,
-            h,
-            coefficients + 0,
-            t + 0,
-            peaks + 0,
-          );
+      if (i64x2.bitmask(m0) !== 0) {
+        const pav = f64x2.splat(pas);
+        const pbv = f64x2.splat(pbs);
+        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
+        const ar00 = f64x2.sub(so0, pav);
+        const ar10 = f64x2.sub(sn0, pbv);
+        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
+        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+        const ratio = v128.load(coefficients, 160);
+        {
+          const end = f64x2.abs(u0);
+          const hit = f64x2.gt(end, tu0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 0), end);
+            v128.store(peaks, peak, 0);
+            const m0 = f64x2.mul(vo0, hv);
+            const m1 = f64x2.mul(v0, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(uo0, u0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 0),
+                  f64x2.extract_lane(u0, 0),
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  h,
+                  peaks + 0,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(uo0, 1),
+                  f64x2.extract_lane(u0, 1),
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  h,
+                  peaks + 8,
+                );
+              }
+              refined = v128.load(peaks, 0);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 176));
+            tu0 = v128.bitselect(threshold, tu0, hit);
+          }
         }
-        if (bits & 2) {
-          refineLane(
-            f64x2.extract_lane(uo0, 1),
-            f64x2.extract_lane(vo0, 1),
-            f64x2.extract_lane(u0, 1),
-            f64x2.extract_lane(v0, 1),
-            pas,
-            pbs,
-            h,
-            coefficients + 8,
-            t + 8,
-            peaks + 8,
-          );
+        {
+          const end = f64x2.abs(v0);
+          const hit = f64x2.gt(end, tv0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 16), end);
+            v128.store(peaks, peak, 16);
+            const m0 = f64x2.mul(ar00, hv);
+            const m1 = f64x2.mul(ar10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 0),
+                  f64x2.extract_lane(v0, 0),
+                  f64x2.extract_lane(ar00, 0),
+                  f64x2.extract_lane(ar10, 0),
+                  h,
+                  peaks + 16,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(vo0, 1),
+                  f64x2.extract_lane(v0, 1),
+                  f64x2.extract_lane(ar00, 1),
+                  f64x2.extract_lane(ar10, 1),
+                  h,
+                  peaks + 24,
+                );
+              }
+              refined = v128.load(peaks, 16);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 192));
+            tv0 = v128.bitselect(threshold, tv0, hit);
+          }
         }
-        tu0 = v128.load(t, 32);
-        tv0 = v128.load(t, 48);
-        ts0 = v128.load(t, 64);
+        {
+          const end = f64x2.abs(sn0);
+          const hit = f64x2.gt(end, ts0);
+          if (v128.any_true(hit)) {
+            const peak = f64x2.max(v128.load(peaks, 32), end);
+            v128.store(peaks, peak, 32);
+            const m0 = f64x2.mul(js00, hv);
+            const m1 = f64x2.mul(js10, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(hit, turns));
+            let refined = peak;
+            if (need !== 0) {
+              if (need & 1) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 0),
+                  f64x2.extract_lane(sn0, 0),
+                  f64x2.extract_lane(js00, 0),
+                  f64x2.extract_lane(js10, 0),
+                  h,
+                  peaks + 32,
+                );
+              }
+              if (need & 2) {
+                hermiteLane(
+                  f64x2.extract_lane(so0, 1),
+                  f64x2.extract_lane(sn0, 1),
+                  f64x2.extract_lane(js00, 1),
+                  f64x2.extract_lane(js10, 1),
+                  h,
+                  peaks + 40,
+                );
+              }
+              refined = v128.load(peaks, 32);
+            }
+            const threshold = f64x2.sub(f64x2.mul(refined, ratio), v128.load(coefficients, 208));
+            ts0 = v128.bitselect(threshold, ts0, hit);
+          }
+        }
       }
     }
     pas = pbs;

@@ -55,34 +55,76 @@ const step = (symmetric, vectors) =>
     vectors,
   );
 
-const lane = (j, l) => `          if (bits & ${1 << l}) {
-            refineLane(
-              f64x2.extract_lane(uo${j}, ${l}),
-              f64x2.extract_lane(vo${j}, ${l}),
-              f64x2.extract_lane(u${j}, ${l}),
-              f64x2.extract_lane(v${j}, ${l}),
-              pas,
-              pbs,
-              h,
-              coefficients + ${(j * COEFFICIENT_COUNT * 2 + l) * 8},
-              t + ${l * 8},
-              peaks + ${(j * 3 * 2 + l) * 8},
-            );
-          }`;
+// The rare path of one vector, taken when a lane's new end passes a threshold. Per quantity
+// (u, v, s) and in vector form: the peak becomes max(peak, |new end|) and the threshold follows
+// it, as in kernel.ts; only lanes whose cubic Hermite H may turn inside the step go on to the
+// scalar refinement (hermiteLane). H' is the quadratic f(t) = m0(1 − t) + m1·t − ca·t(1 − t)
+// (ca as in the Hermite below), so with m0 and m1 of one sign f ≥ min(|m0|, |m1|) − |ca|/4 and
+// a root in (0, 1) needs m0·m1 ≤ 0 or |ca| ≥ 4·min(|m0|, |m1|); the test takes 3.5 for rounding
+// to spare, so it is a superset of the steps where the scalar refinement changes anything, and
+// the peaks are those of refinement on every passing step. Most passing steps are a quantity
+// climbing past its running peak, which need no Hermite.
+const quantities = (j) => [
+  { name: 'u', q0: `uo${j}`, q1: `u${j}`, d0: `vo${j}`, d1: `v${j}`, slot: 0, offset: 11, t: `tu${j}` },
+  { name: 'v', q0: `vo${j}`, q1: `v${j}`, d0: `ar0${j}`, d1: `ar1${j}`, slot: 1, offset: 12, t: `tv${j}` },
+  { name: 's', q0: `so${j}`, q1: `sn${j}`, d0: `js0${j}`, d1: `js1${j}`, slot: 2, offset: 13, t: `ts${j}` },
+];
+const lane = (j, q, l) => `              if (need & ${1 << l}) {
+                hermiteLane(
+                  f64x2.extract_lane(${q.q0}, ${l}),
+                  f64x2.extract_lane(${q.q1}, ${l}),
+                  f64x2.extract_lane(${q.d0}, ${l}),
+                  f64x2.extract_lane(${q.d1}, ${l}),
+                  h,
+                  peaks + ${((j * 3 + q.slot) * 2 + l) * 8},
+                );
+              }`;
 const refine = (vectors) =>
   each(
-    (j) => `        const bits${j} = i64x2.bitmask(m${j});
-        if (bits${j} !== 0) {
-          const bits = bits${j};
-          const t = state + ${j * stateNames.length * 16};
-          v128.store(t, tu${j}, 32);
-          v128.store(t, tv${j}, 48);
-          v128.store(t, ts${j}, 64);
-${lane(j, 0)}
-${lane(j, 1)}
-          tu${j} = v128.load(t, 32);
-          tv${j} = v128.load(t, 48);
-          ts${j} = v128.load(t, 64);
+    (j) => `        if (i64x2.bitmask(m${j}) !== 0) {
+          const pav = f64x2.splat(pas);
+          const pbv = f64x2.splat(pbs);
+          const so${j} = f64x2.neg(f64x2.add(f64x2.mul(c${j}, vo${j}), f64x2.mul(k${j}, uo${j})));
+          const sn${j} = f64x2.neg(f64x2.add(f64x2.mul(c${j}, v${j}), f64x2.mul(k${j}, u${j})));
+          const ar0${j} = f64x2.sub(so${j}, pav);
+          const ar1${j} = f64x2.sub(sn${j}, pbv);
+          const js0${j} = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar0${j}), f64x2.mul(k${j}, vo${j}));
+          const js1${j} = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar1${j}), f64x2.mul(k${j}, v${j}));
+          const ratio = v128.load(coefficients, ${(j * COEFFICIENT_COUNT + 10) * 16});
+${quantities(j)
+  .map(
+    (q) => `          {
+            const end = f64x2.abs(${q.q1});
+            const hit = f64x2.gt(end, ${q.t});
+            if (v128.any_true(hit)) {
+              const peak = f64x2.max(v128.load(peaks, ${(j * 3 + q.slot) * 16}), end);
+              v128.store(peaks, peak, ${(j * 3 + q.slot) * 16});
+              const m0 = f64x2.mul(${q.d0}, hv);
+              const m1 = f64x2.mul(${q.d1}, hv);
+              const ca = f64x2.add(
+                f64x2.mul(six, f64x2.sub(${q.q0}, ${q.q1})),
+                f64x2.mul(three, f64x2.add(m0, m1)),
+              );
+              const turns = v128.or(
+                f64x2.le(f64x2.mul(m0, m1), zero),
+                f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+              );
+              const need = i64x2.bitmask(v128.and(hit, turns));
+              let refined = peak;
+              if (need !== 0) {
+${lane(j, q, 0)}
+${lane(j, q, 1)}
+                refined = v128.load(peaks, ${(j * 3 + q.slot) * 16});
+              }
+              const threshold = f64x2.sub(
+                f64x2.mul(refined, ratio),
+                v128.load(coefficients, ${(j * COEFFICIENT_COUNT + q.offset) * 16}),
+              );
+              ${q.t} = v128.bitselect(threshold, ${q.t}, hit);
+            }
+          }`,
+  )
+  .join('\n')}
         }`,
     '\n',
     vectors,
@@ -141,6 +183,11 @@ ${each(
   vectors,
 )}
 ${each((j) => stateNames.map((n, q) => `  let ${n}${j} = v128.load(state, ${(j * stateNames.length + q) * 16});`).join('\n'), '\n', vectors)}
+  const hv = f64x2.splat(h);
+  const zero = f64x2.splat(0);
+  const three = f64x2.splat(3);
+  const six = f64x2.splat(6);
+  const bend = f64x2.splat(3.5);
   let pas = load<f64>(input);${symmetric ? '' : '\n  let pa = f64x2.splat(pas);'}
   for (let n = 1; n <= steps; n++) {
     const pbs = load<f64>(input + (<usize>n << 3));
@@ -187,38 +234,13 @@ function hermiteAt(peak: f64, qa: f64, qb: f64, m0: f64, m1: f64, t: f64): f64 {
 }
 
 /**
- * The rare path of one lane: the threshold test and Hermite peak refinement of sweepBlock in
- * kernel.ts, in scalar code. Pointers address the lane's first value; lanes are 16 bytes apart.
+ * The scalar end of the rare path: the cubic Hermite peak of |q| inside one step (q and its
+ * derivative at both ends), folded into the peak at \`peak\` (the refinement of kernel.ts).
  */
-function refineLane(uo: f64, vo: f64, u: f64, v: f64, pa: f64, pb: f64, h: f64, co: usize, st: usize, pk: usize): void {
-  const c = load<f64>(co, 8 * 16);
-  const k = load<f64>(co, 9 * 16);
-  const s = -(c * v + k * u);
-  const au = Math.abs(u);
-  const av = Math.abs(v);
-  const as = Math.abs(s);
-  if (au > load<f64>(st, 2 * 16)) {
-    let pu = Math.max(load<f64>(pk), au);
-    ${hermite('pu', 'uo', 'u', 'vo', 'v')}
-    store<f64>(pk, pu);
-    store<f64>(st, pu * load<f64>(co, 10 * 16) - load<f64>(co, 11 * 16), 2 * 16);
-  }
-  if (av > load<f64>(st, 3 * 16)) {
-    let pv = Math.max(load<f64>(pk, 16), av);
-    const so = -(c * vo + k * uo);
-    ${hermite('pv', 'vo', 'v', 'so - pa', 's - pb')}
-    store<f64>(pk, pv, 16);
-    store<f64>(st, pv * load<f64>(co, 10 * 16) - load<f64>(co, 12 * 16), 3 * 16);
-  }
-  if (as > load<f64>(st, 4 * 16)) {
-    let ps = Math.max(load<f64>(pk, 32), as);
-    const so = -(c * vo + k * uo);
-    const dso = -c * (so - pa) - k * vo;
-    const ds = -c * (s - pb) - k * v;
-    ${hermite('ps', 'so', 's', 'dso', 'ds')}
-    store<f64>(pk, ps, 32);
-    store<f64>(st, ps * load<f64>(co, 10 * 16) - load<f64>(co, 13 * 16), 4 * 16);
-  }
+function hermiteLane(qa0: f64, qb0: f64, d0: f64, d1: f64, h: f64, peak: usize): void {
+  let p = load<f64>(peak);
+  ${hermite('p', 'qa0', 'qb0', 'd0', 'd1')}
+  store<f64>(peak, p);
 }
 
 ${kernel('sweepBlock', false, VECTORS)}
