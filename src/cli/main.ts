@@ -1,24 +1,37 @@
 import { Command, CommanderError } from 'commander';
 import { isQuakesweepError } from '../errors.js';
 import { VERSION } from '../version.js';
-import { registerAnchor } from './commands/anchor.js';
-import { registerBatch } from './commands/batch.js';
-import { registerDamping } from './commands/damping.js';
-import { registerDemo } from './commands/demo.js';
-import { registerDesign } from './commands/design.js';
-import { registerFloor } from './commands/floor.js';
-import { registerInfo } from './commands/info.js';
-import { registerMerge } from './commands/merge.js';
-import { registerReport } from './commands/report.js';
-import { registerRotD } from './commands/rotd.js';
-import { registerSpectrum } from './commands/spectrum.js';
-import { registerSynth } from './commands/synth.js';
+
+type Register = (program: Command) => void;
+
+/**
+ * The commands, in the order of --help, each loaded only when needed: a run of one command loads
+ * that command's modules and no other's (start-up is part of every job's time).
+ */
+const COMMANDS: [string, () => Promise<Register>][] = [
+  ['spectrum', async () => (await import('./commands/spectrum.js')).registerSpectrum],
+  ['info', async () => (await import('./commands/info.js')).registerInfo],
+  ['design', async () => (await import('./commands/design.js')).registerDesign],
+  ['damping', async () => (await import('./commands/damping.js')).registerDamping],
+  ['rotd', async () => (await import('./commands/rotd.js')).registerRotD],
+  ['floor', async () => (await import('./commands/floor.js')).registerFloor],
+  ['anchor', async () => (await import('./commands/anchor.js')).registerAnchor],
+  ['synth', async () => (await import('./commands/synth.js')).registerSynth],
+  ['report', async () => (await import('./commands/report.js')).registerReport],
+  ['demo', async () => (await import('./commands/demo.js')).registerDemo],
+  ['batch', async () => (await import('./commands/batch.js')).registerBatch],
+  ['merge', async () => (await import('./commands/merge.js')).registerMerge],
+];
 
 /** Exit codes: 0 done, 1 internal fault or partly failed batch, 2 bad input or usage. */
 export const EXIT_INPUT = 2;
 export const EXIT_INTERNAL = 1;
 
-export function buildProgram(): Command {
+/**
+ * The program with every command, or with only `only` when it names one (for a run of that
+ * command; help, unknown commands and their suggestions see them all).
+ */
+export async function buildProgram(only?: string): Promise<Command> {
   const program = new Command('quakesweep')
     .description(
       'Response spectra and preliminary equipment anchorage demands from ground-acceleration records.',
@@ -32,25 +45,15 @@ export function buildProgram(): Command {
     outputError: (text, write) =>
       write(`quakesweep: ${oneLine(text.replace(/^error: /, ''))} (run with --help for usage)\n`),
   });
-  registerSpectrum(program);
-  registerInfo(program);
-  registerDesign(program);
-  registerDamping(program);
-  registerRotD(program);
-  registerFloor(program);
-  registerAnchor(program);
-  registerSynth(program);
-  registerReport(program);
-  registerDemo(program);
-  registerBatch(program);
-  registerMerge(program);
+  const chosen = COMMANDS.filter(([name]) => name === only);
+  for (const [, load] of chosen.length === 1 ? chosen : COMMANDS) (await load())(program);
   return program;
 }
 
 /** Run the CLI; every failure becomes one line on stderr and an exit code, never a stack trace. */
 export async function main(argv: string[]): Promise<number> {
-  const program = buildProgram();
   try {
+    const program = await buildProgram(argv[0]);
     await program.parseAsync(argv, { from: 'user' });
     return 0;
   } catch (error) {

@@ -10,14 +10,7 @@ import { planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/
 import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
-import {
-  historiesFigure,
-  type PsaOverlay,
-  psaFigure,
-  psvFigure,
-  sdFigure,
-  tripartiteFigure,
-} from '../../plot/index.js';
+import type { PsaOverlay } from '../../plot/index.js';
 import { integrateRecord } from '../../record/integrate.js';
 import type { GroundRecord } from '../../record/record.js';
 import { assembleSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
@@ -117,7 +110,7 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   if (options.out !== undefined) checkOutputPath(options.out, protect);
   if (options.svg !== undefined) {
     const overlays = targeted.overlay === undefined ? [] : [targeted.overlay];
-    writeFigures(options.svg, record, spectrum, { axes, lengthUnit, overlays }, options, source);
+    await writeFigures(options.svg, record, spectrum, { axes, lengthUnit, overlays }, options, source);
   }
   const text =
     format === 'json'
@@ -179,15 +172,18 @@ function figureAxes(options: SpectrumCliOptions): 'log' | 'linear' {
   return axes;
 }
 
-/** Write the figures into `folder`, each file atomically. */
-function writeFigures(
+/** Write the figures into `folder`, each file atomically (the figure modules load only here). */
+async function writeFigures(
   folder: string,
   record: GroundRecord,
   spectrum: Spectrum,
   figure: { axes: 'log' | 'linear'; lengthUnit: LengthUnit; overlays: PsaOverlay[] },
   options: SpectrumCliOptions,
   source: string,
-): void {
+): Promise<void> {
+  const { historiesFigure, psaFigure, psvFigure, sdFigure, tripartiteFigure } = await import(
+    '../../plot/index.js'
+  );
   const shared = { ...figure, methodDescription: METHOD_DESCRIPTIONS[spectrum.method] };
   const files: [string, string][] = [
     ['psa.svg', psaFigure(spectrum, shared)],
