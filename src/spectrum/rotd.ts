@@ -1,3 +1,5 @@
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
 import { inputError, usageError } from '../errors.js';
 import { hermitePeak } from '../oscillator/peak.js';
 import {
@@ -56,11 +58,93 @@ export interface RotDOptions {
  * (ground at rest) to the length of the longer.
  */
 export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDSpectra {
+  const work = prepareRotD(first, second, options);
+  return finishRotD(first, second, work, rotDCurves(work));
+}
+
+export interface ParallelRotDOptions extends RotDOptions {
+  /** Threads, this one included; default all cores. 1 computes here alone. */
+  threads?: number;
+}
+
+/**
+ * rotDSpectra with its periods dealt out over worker threads (every thread-th period to each, so
+ * short and long periods mix); each period's curves are computed as on one thread, so the numbers
+ * are the same bits.
+ */
+export async function rotDSpectraParallel(
+  first: GroundRecord,
+  second: GroundRecord,
+  options: ParallelRotDOptions,
+): Promise<RotDSpectra> {
+  const work = prepareRotD(first, second, options);
+  const threads = Math.max(1, Math.min(options.threads ?? availableParallelism(), work.periodsS.length));
+  if (threads === 1) return finishRotD(first, second, work, rotDCurves(work));
+  const a1 = shared(work.a1);
+  const a2 = shared(work.a2);
+  const share = (t: number) => {
+    const indices = Array.from(
+      { length: Math.ceil((work.periodsS.length - t) / threads) },
+      (_, i) => t + i * threads,
+    );
+    return {
+      indices,
+      work: { ...work, a1, a2, periodsS: Float64Array.from(indices, (i) => work.periodsS[i]) },
+    };
+  };
+  const shares = Array.from({ length: threads }, (_, t) => share(t));
+  const others = shares.slice(1).map(
+    ({ work: part }) =>
+      new Promise<RotDCurve[]>((resolve, reject) => {
+        const worker = new Worker(rotdWorkerUrl(), { workerData: part });
+        worker.once('message', (message: { curves?: RotDCurve[]; error?: string }) => {
+          void worker.terminate();
+          if (message.curves) resolve(message.curves);
+          else reject(new Error(`a RotD worker failed: ${message.error}`));
+        });
+        worker.once('error', reject);
+      }),
+  );
+  const mine = rotDCurves(shares[0].work);
+  const parts = [mine, ...(await Promise.all(others))];
+  const curves: RotDCurve[] = Array.from(work.dampings, (damping) => ({
+    damping,
+    rotd50MS2: new Float64Array(work.periodsS.length),
+    rotd100MS2: new Float64Array(work.periodsS.length),
+    geomeanMS2: new Float64Array(work.periodsS.length),
+  }));
+  parts.forEach((part, t) => {
+    part.forEach((curve, d) => {
+      shares[t].indices.forEach((p, i) => {
+        curves[d].rotd50MS2[p] = curve.rotd50MS2[i];
+        curves[d].rotd100MS2[p] = curve.rotd100MS2[i];
+        curves[d].geomeanMS2[p] = curve.geomeanMS2[i];
+      });
+    });
+  });
+  return finishRotD(first, second, work, curves);
+}
+
+function rotdWorkerUrl(): URL {
+  // Under a test runner this module runs from its TypeScript source; workers run the build.
+  return import.meta.url.endsWith('.ts')
+    ? new URL('../../dist/spectrum/rotd-worker.js', import.meta.url)
+    : new URL('./rotd-worker.js', import.meta.url);
+}
+
+function shared(values: Float64Array): Float64Array {
+  const copy = new Float64Array(new SharedArrayBuffer(values.byteLength));
+  copy.set(values);
+  return copy;
+}
+
+/** Check the pair and the grid, and pad the shorter component. */
+function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDWork {
   const method = options.method ?? 'newmark-average';
   const periodsS = Float64Array.from(options.periodsS);
   const dampings = Float64Array.from(options.dampings);
   const angleStepDeg = options.angleStepDeg ?? 1;
-  const angleCount = checkAngleStep(angleStepDeg);
+  checkAngleStep(angleStepDeg);
   if (Math.abs(first.dtS - second.dtS) > 1e-9 * first.dtS) {
     throw inputError(
       `the two components have different time steps (${first.dtS} s and ${second.dtS} s); resample one first`,
@@ -69,11 +153,56 @@ export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: 
   }
   if (periodsS.length === 0) throw usageError('the period grid is empty');
   if (dampings.length === 0) throw usageError('the damping list is empty');
+  for (const damping of dampings) {
+    if (!(damping >= 0) || !Number.isFinite(damping)) throw usageError(`damping must be ≥ 0, got ${damping}`);
+  }
+  for (const periodS of periodsS) {
+    if (!(periodS >= 0) || !Number.isFinite(periodS))
+      throw usageError(`periods must be ≥ 0 s, got ${periodS}`);
+  }
   const length = Math.max(first.accelMS2.length, second.accelMS2.length);
-  const a1 = padded(first.accelMS2, length);
-  const a2 = padded(second.accelMS2, length);
-  const dtS = first.dtS;
+  return {
+    a1: padded(first.accelMS2, length),
+    a2: padded(second.accelMS2, length),
+    dtS: first.dtS,
+    periodsS,
+    dampings,
+    method,
+    angleStepDeg,
+  };
+}
 
+function finishRotD(
+  first: GroundRecord,
+  second: GroundRecord,
+  work: RotDWork,
+  curves: RotDCurve[],
+): RotDSpectra {
+  return {
+    records: [recordInfo(first), recordInfo(second)],
+    method: work.method,
+    periodsS: work.periodsS,
+    angleStepDeg: work.angleStepDeg,
+    paddedSamples: Math.abs(first.accelMS2.length - second.accelMS2.length),
+    curves,
+  };
+}
+
+/** What one thread needs to compute RotD curves: both components (same length), the grid and the method. */
+export interface RotDWork {
+  a1: Float64Array;
+  a2: Float64Array;
+  dtS: number;
+  periodsS: Float64Array;
+  dampings: Float64Array;
+  method: Method;
+  angleStepDeg: number;
+}
+
+/** The RotD curves of checked work (see rotDSpectra), one per damping ratio. */
+export function rotDCurves(work: RotDWork): RotDCurve[] {
+  const { a1, a2, dtS, periodsS, dampings, method, angleStepDeg } = work;
+  const angleCount = checkAngleStep(angleStepDeg);
   const cos = new Float64Array(angleCount);
   const sin = new Float64Array(angleCount);
   for (let k = 0; k < angleCount; k++) {
@@ -88,14 +217,11 @@ export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: 
   const curves: RotDCurve[] = [];
   for (let d = 0; d < dampings.length; d++) {
     const damping = dampings[d];
-    if (!(damping >= 0) || !Number.isFinite(damping)) throw usageError(`damping must be ≥ 0, got ${damping}`);
     const rotd50MS2 = new Float64Array(periodsS.length);
     const rotd100MS2 = new Float64Array(periodsS.length);
     const geomeanMS2 = new Float64Array(periodsS.length);
     for (let p = 0; p < periodsS.length; p++) {
       const periodS = periodsS[p];
-      if (!(periodS >= 0) || !Number.isFinite(periodS))
-        throw usageError(`periods must be ≥ 0 s, got ${periodS}`);
       let scale = 1;
       if (periodS === 0) {
         groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
@@ -113,14 +239,7 @@ export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: 
     }
     curves.push({ damping, rotd50MS2, rotd100MS2, geomeanMS2 });
   }
-  return {
-    records: [recordInfo(first), recordInfo(second)],
-    method,
-    periodsS,
-    angleStepDeg,
-    paddedSamples: Math.abs(first.accelMS2.length - second.accelMS2.length),
-    curves,
-  };
+  return curves;
 }
 
 /** Number of angles in [0°, 180°) for a step that divides 180° into whole steps, at most 1°. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Method } from '../../src/oscillator/recurrence.js';
 import { createRecord, type GroundRecord } from '../../src/record/record.js';
-import { rotDSpectra } from '../../src/spectrum/rotd.js';
+import { rotDSpectra, rotDSpectraParallel } from '../../src/spectrum/rotd.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
 
 /** Invented test motions, m/s². */
@@ -110,5 +110,22 @@ describe('RotD50, RotD100 and geometric mean (Boore 2010)', () => {
     expect(() => rotDSpectra(one, two, { periodsS, dampings: [0.05], angleStepDeg: 0.7 })).toThrow(
       /angle step/,
     );
+  });
+});
+
+describe('RotD over worker threads', () => {
+  // Each period's curves are computed by one thread as rotDSpectra computes them, so dealing the
+  // periods out over threads changes no bit (the order of the results is the grid's).
+  it.each([2, 3])('gives the same bits on %s threads as on one', async (threads) => {
+    const grid = { periodsS, dampings, method: 'newmark-average' as const };
+    const alone = rotDSpectra(one, two, grid);
+    const split = await rotDSpectraParallel(one, two, { ...grid, threads });
+    expect(split.periodsS).toEqual(alone.periodsS);
+    split.curves.forEach((curve, d) => {
+      expect(curve.damping).toBe(alone.curves[d].damping);
+      expect(Array.from(curve.rotd50MS2)).toEqual(Array.from(alone.curves[d].rotd50MS2));
+      expect(Array.from(curve.rotd100MS2)).toEqual(Array.from(alone.curves[d].rotd100MS2));
+      expect(Array.from(curve.geomeanMS2)).toEqual(Array.from(alone.curves[d].geomeanMS2));
+    });
   });
 });
