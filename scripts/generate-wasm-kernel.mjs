@@ -313,6 +313,9 @@ export function runGroup(
     sweep(kind, buffer, steps, h, coefficients, state, peaks);
   }
 }
+
+// RotD's loop (hand-written, in assembly/rotd.ts) is compiled into the same module.
+export { rotdPeaks } from './rotd';
 `;
 
 writeFileSync(new URL('../assembly/sweep.ts', import.meta.url), source);

@@ -10,7 +10,13 @@ import {
   stepCoefficients,
   substepCount,
 } from '../oscillator/recurrence.js';
-import { recordRoughness, refinementThresholds } from '../oscillator/sweep.js';
+import {
+  recordRoughness,
+  refinementThresholds,
+  resolveKernel,
+  type SweepKernel,
+} from '../oscillator/sweep.js';
+import { WasmRotD } from '../oscillator/wasm/kernel.js';
 import { type GroundRecord, peakGroundAcceleration } from '../record/record.js';
 import type { SpectrumRecordInfo } from './spectrum.js';
 
@@ -42,6 +48,8 @@ export interface RotDOptions {
   method?: Method;
   /** Rotation step, degrees, dividing 180 into a whole number of steps; default 1. */
   angleStepDeg?: number;
+  /** Kernel: 'auto' (WebAssembly SIMD where the engine has it), 'wasm' or 'js' (same bits). */
+  kernel?: SweepKernel;
 }
 
 /**
@@ -169,6 +177,7 @@ function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOpt
     dampings,
     method,
     angleStepDeg,
+    kernel: options.kernel,
   };
 }
 
@@ -197,6 +206,8 @@ export interface RotDWork {
   dampings: Float64Array;
   method: Method;
   angleStepDeg: number;
+  /** The loop over angles: WebAssembly SIMD (assembly/rotd.ts) or TypeScript; 'auto' by default. */
+  kernel?: SweepKernel;
 }
 
 /** The RotD curves of checked work (see rotDSpectra), one per damping ratio. */
@@ -213,6 +224,7 @@ export function rotDCurves(work: RotDWork): RotDCurve[] {
   const quarter = Math.round(90 / angleStepDeg);
   const peaks = new Float64Array(angleCount);
   const thresholds = new Float64Array(angleCount);
+  const wasm = resolveKernel(work.kernel ?? 'auto') === 'wasm' ? new WasmRotD(a1, a2, cos, sin) : undefined;
 
   const curves: RotDCurve[] = [];
   for (let d = 0; d < dampings.length; d++) {
@@ -228,7 +240,7 @@ export function rotDCurves(work: RotDWork): RotDCurve[] {
       } else {
         const omega = (2 * Math.PI) / periodS;
         scale = omega * omega;
-        oscillatorPeaks(a1, a2, dtS, { periodS, damping, method }, cos, sin, peaks, thresholds);
+        oscillatorPeaks(a1, a2, dtS, { periodS, damping, method }, cos, sin, peaks, thresholds, wasm);
       }
       geomeanMS2[p] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
       peaks.sort();
@@ -290,6 +302,7 @@ function oscillatorPeaks(
   sin: Float64Array,
   peaks: Float64Array,
   thresholds: Float64Array,
+  wasm?: WasmRotD,
 ): void {
   const { periodS, damping, method } = oscillator;
   const durationS = (a1.length - 1) * dtS;
@@ -320,6 +333,10 @@ function oscillatorPeaks(
   const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: pga, jerkMS3: 0 });
   const R = rule.ratio;
   const offset = rule.displacementOffset;
+  if (wasm !== undefined) {
+    wasm.run([uu, uv, up0, up1, vu, vv, vp0, vp1], substeps, h, R, offset, peaks);
+    return;
+  }
   peaks.fill(0);
   thresholds.fill(0);
   let u1 = 0;

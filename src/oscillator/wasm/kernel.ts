@@ -78,6 +78,21 @@ interface SweepExports {
     symmetric: number,
     narrow: number,
   ): void;
+  rotdPeaks(
+    a1: number,
+    a2: number,
+    samples: number,
+    substeps: number,
+    h: number,
+    coefficients: number,
+    cos: number,
+    sin: number,
+    angles: number,
+    peaks: number,
+    thresholds: number,
+    ratio: number,
+    offset: number,
+  ): void;
 }
 
 let compiled: WebAssembly.Module | undefined;
@@ -175,5 +190,80 @@ export class WasmSweeper {
       const lane = (i >> 1) * PEAKS * 2 + (i & 1);
       for (let q = 0; q < PEAKS; q++) out[i * PEAKS + q] = view[p + lane + 2 * q];
     }
+  }
+}
+
+/**
+ * One instance of the WebAssembly kernel holding a pair of components and the rotation angles,
+ * for RotD (see oscillatorPeaks in spectrum/rotd.ts, whose twin is assembly/rotd.ts).
+ */
+export class WasmRotD {
+  private readonly exports: SweepExports;
+  private readonly samples: number;
+  private readonly angles: number;
+  private readonly lanes: number;
+  private readonly at: Record<'a1' | 'a2' | 'cos' | 'sin' | 'peaks' | 'thresholds' | 'coefficients', number>;
+  private readonly view: Float64Array;
+
+  constructor(a1: Float64Array, a2: Float64Array, cos: Float64Array, sin: Float64Array) {
+    const instance = new WebAssembly.Instance(sweepModule(), {});
+    this.exports = instance.exports as unknown as SweepExports;
+    this.samples = a1.length;
+    this.angles = cos.length;
+    this.lanes = cos.length + (cos.length % 2); // an even count; a padding angle has cos = sin = 0
+    let next = this.exports.heapBase();
+    const take = (values: number) => {
+      const at = next;
+      next += Math.ceil((values * 8) / 16) * 16;
+      return at;
+    };
+    this.at = {
+      coefficients: take(8),
+      cos: take(this.lanes),
+      sin: take(this.lanes),
+      peaks: take(this.lanes),
+      thresholds: take(this.lanes),
+      a1: take(a1.length),
+      a2: take(a2.length),
+    };
+    const memory = this.exports.memory;
+    const pages = Math.ceil(next / 65536) - memory.buffer.byteLength / 65536;
+    if (pages > 0) memory.grow(pages);
+    this.view = new Float64Array(memory.buffer);
+    this.view.set(a1, this.at.a1 / 8);
+    this.view.set(a2, this.at.a2 / 8);
+    this.view.fill(0, this.at.cos / 8, this.at.cos / 8 + 2 * this.lanes);
+    this.view.set(cos, this.at.cos / 8);
+    this.view.set(sin, this.at.sin / 8);
+  }
+
+  /** Peak |u(θ)| of one oscillator for every angle into `out` (length: the angle count). */
+  run(
+    coefficients: ArrayLike<number>,
+    substeps: number,
+    h: number,
+    ratio: number,
+    offset: number,
+    out: Float64Array,
+  ): void {
+    const { view, at } = this;
+    for (let i = 0; i < 8; i++) view[at.coefficients / 8 + i] = coefficients[i];
+    view.fill(0, at.peaks / 8, at.peaks / 8 + 2 * this.lanes);
+    this.exports.rotdPeaks(
+      at.a1,
+      at.a2,
+      this.samples,
+      substeps,
+      h,
+      at.coefficients,
+      at.cos,
+      at.sin,
+      this.lanes,
+      at.peaks,
+      at.thresholds,
+      ratio,
+      offset,
+    );
+    out.set(view.subarray(at.peaks / 8, at.peaks / 8 + this.angles));
   }
 }
