@@ -9,12 +9,11 @@ import { join } from 'node:path';
 import { loadRecord } from '../dist/cli/record-options.js';
 import { defaultPeriodsS, logSpaced } from '../dist/oscillator/grid.js';
 import { SweepPool } from '../dist/oscillator/parallel.js';
-import { substepCount } from '../dist/oscillator/recurrence.js';
 import { sweepOscillators } from '../dist/oscillator/sweep.js';
 import { writeFileAtomic } from '../dist/output/atomic.js';
 import { formatJson, spectrumToJson } from '../dist/output/spectrum-json.js';
 import { synthesizeRecord } from '../dist/record/synth.js';
-import { rotDSpectra } from '../dist/spectrum/rotd.js';
+import { rotDSpectraParallel } from '../dist/spectrum/rotd.js';
 import { assembleSpectrum } from '../dist/spectrum/spectrum.js';
 
 const REPEAT = Number(process.env.BENCH_REPEAT ?? 5);
@@ -81,12 +80,13 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
     const options = { ...grid, method, kernel };
     sweepOscillators(standard.accelMS2, standard.dtS, options); // warm-up (JIT, wasm tier-up)
     const one = await timed(() => sweepOscillators(standard.accelMS2, standard.dtS, options));
-    const steps = one.result.oscillatorSteps;
+    const steps = nominal;
+    const executed = one.result.oscillatorSteps;
     row('standard', `${method} ${kernel} 1 thread`, {
       ms: one.ms,
       steps,
       mps: mega(steps, one.ms),
-      note: `CPU ${one.cpuMs.toFixed(0)} ms: ${mega(steps, one.cpuMs)} M/s of CPU time`,
+      note: `executed ${executed} (${mega(executed, one.ms)} M/s); CPU ${one.cpuMs.toFixed(0)} ms`,
     });
     const pool = new SweepPool(cores);
     await pool.sweep(standard.accelMS2, standard.dtS, options); // warm-up
@@ -125,26 +125,32 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
   }
 }
 
-// RotD: two components, its own loop (one thread, one kernel: rotd.ts steps in TypeScript).
+// RotD: two components, 40 periods, 180 angles; the loop over angles in each kernel, on one
+// thread and with the periods dealt out over all cores. Steps count each angle's rotated
+// oscillator (nominal: periods × samples × angles).
 {
   const first = synthesizeRecord({ seed: 3001, dtS: 0.01, durationS: 79.99 });
   const second = synthesizeRecord({ seed: 3002, dtS: 0.01, durationS: 79.99 });
   const rotd = { periodsS: logSpaced(0.05, 10, QUICK ? 10 : 40), dampings: [0.05] };
   const n = first.accelMS2.length;
-  let steps = 0;
-  for (const periodS of rotd.periodsS) {
-    steps +=
-      2 *
-      (n - 1) *
-      substepCount('newmark-average', periodS, 0.01, { damping: 0.05, durationS: (n - 1) * 0.01 });
+  const nominalRotd = rotd.periodsS.length * n * 180;
+  for (const kernel of ['wasm', 'js']) {
+    for (const threads of [1, cores]) {
+      const options = { ...rotd, kernel, threads };
+      await rotDSpectraParallel(first, second, options); // warm-up
+      const run = await timed(() => rotDSpectraParallel(first, second, options), QUICK ? 1 : REPEAT);
+      row(
+        'RotD',
+        `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles, ${kernel} ${threads} thread${threads > 1 ? 's' : ''}`,
+        {
+          ms: run.ms,
+          steps: nominalRotd,
+          mps: mega(nominalRotd, run.ms),
+          note: `rotated oscillator-steps; CPU ${run.cpuMs.toFixed(0)} ms`,
+        },
+      );
+    }
   }
-  const run = await timed(() => rotDSpectra(first, second, rotd), QUICK ? 1 : REPEAT);
-  row('RotD', `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles`, {
-    ms: run.ms,
-    steps,
-    mps: mega(steps, run.ms),
-    note: `nominal ${2 * rotd.periodsS.length * n}`,
-  });
 }
 
 // A batch of 50 records (no batch command on this branch: the library sweep, one record after
@@ -153,40 +159,84 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
   const records = Array.from({ length: 50 }, (_, i) =>
     synthesizeRecord({ seed: 5000 + i, dtS: 0.005, durationS: 40 + (i % 7) }),
   );
-  const batch = { periodsS: defaultPeriodsS(), dampings: [0.05] };
-  let steps = 0;
-  let nominalBatch = 0;
-  const alone = await timed(
-    () => {
-      steps = 0;
-      nominalBatch = 0;
-      for (const r of records) {
-        steps += sweepOscillators(r.accelMS2, r.dtS, batch).oscillatorSteps;
-        nominalBatch += batch.periodsS.length * r.accelMS2.length;
-      }
-    },
-    QUICK ? 1 : REPEAT,
-  );
-  row('batch 50', '1 thread', {
-    ms: alone.ms,
-    steps,
-    mps: mega(steps, alone.ms),
-    note: `nominal ${nominalBatch}`,
-  });
-  const pool = new SweepPool(cores);
-  const pooled = await timed(
-    async () => {
-      for (const r of records) await pool.sweep(r.accelMS2, r.dtS, batch);
-    },
-    QUICK ? 1 : REPEAT,
-  );
-  await pool.close();
-  row('batch 50', `pool of ${cores} threads`, {
-    ms: pooled.ms,
-    steps,
-    mps: mega(steps, pooled.ms),
-    note: `×${(alone.ms / pooled.ms).toFixed(2)}; CPU ${pooled.cpuMs.toFixed(0)} ms, all threads`,
-  });
+  for (const kernel of ['wasm', 'js']) {
+    const batch = { periodsS: defaultPeriodsS(), dampings: [0.05], kernel };
+    let steps = 0;
+    let nominalBatch = 0;
+    const alone = await timed(
+      () => {
+        steps = 0;
+        nominalBatch = 0;
+        for (const r of records) {
+          steps += sweepOscillators(r.accelMS2, r.dtS, batch).oscillatorSteps;
+          nominalBatch += batch.periodsS.length * r.accelMS2.length;
+        }
+      },
+      QUICK ? 1 : REPEAT,
+    );
+    row('batch 50', `${kernel} 1 thread`, {
+      ms: alone.ms,
+      steps: nominalBatch,
+      mps: mega(nominalBatch, alone.ms),
+      note: `executed ${steps}`,
+    });
+    const pool = new SweepPool(cores);
+    const pooled = await timed(
+      async () => {
+        for (const r of records) await pool.sweep(r.accelMS2, r.dtS, batch);
+      },
+      QUICK ? 1 : REPEAT,
+    );
+    await pool.close();
+    row('batch 50', `${kernel} pool of ${cores} threads`, {
+      ms: pooled.ms,
+      steps: nominalBatch,
+      mps: mega(nominalBatch, pooled.ms),
+      note: `×${(alone.ms / pooled.ms).toFixed(2)}; CPU ${pooled.cpuMs.toFixed(0)} ms, all threads`,
+    });
+  }
+}
+
+// RotD and the batch through the CLI: the whole process's wall time and peak memory.
+{
+  const pair = [3001, 3002].map((seed) => synthesizeRecord({ seed, dtS: 0.01, durationS: 79.99 }));
+  const paths = pair.map((r, i) => join(folder, `pair-${i + 1}.csv`));
+  pair.forEach((r, i) => writeCsv(paths[i], r));
+  const rotdArgs = [cli, 'rotd', ...paths, '--units', 'g', '--periods', '0.05:10:40', '--damping', '5%'];
+  for (const threads of ['1', String(cores)]) {
+    const args = [...rotdArgs, '--threads', threads, '--out', join(folder, 'rotd.json')];
+    const runs = Array.from({ length: QUICK ? 1 : REPEAT }, () => childMs(args));
+    row('RotD CLI', `quakesweep rotd --threads ${threads}`, {
+      ms: median(runs),
+      note: `peak ${peakKb(args) ?? '?'} KB`,
+    });
+  }
+  for (let i = 0; i < 50; i++) {
+    writeCsv(
+      join(folder, `batch-${String(i).padStart(2, '0')}.csv`),
+      synthesizeRecord({ seed: 5000 + i, dtS: 0.005, durationS: 40 + (i % 7) }),
+    );
+  }
+  for (const jobs of ['1', String(cores)]) {
+    const args = [
+      cli,
+      'batch',
+      join(folder, 'batch-*.csv'),
+      '--units',
+      'g',
+      '--damping',
+      '5%',
+      '--jobs',
+      jobs,
+      '--out',
+      join(folder, `batch-out-${jobs}`),
+    ];
+    const runs = Array.from({ length: QUICK ? 1 : REPEAT }, () => childMs(args));
+    row('batch CLI', `quakesweep batch (50 records) --jobs ${jobs}`, {
+      ms: median(runs),
+      note: `peak ${peakKb(args) ?? '?'} KB (main process; workers are threads of it)`,
+    });
+  }
 }
 
 // Memory: a 2,000,000-sample record with the default grid, through the CLI.
@@ -206,9 +256,9 @@ rmSync(folder, { recursive: true, force: true });
 console.log(`quakesweep bench: medians of ${REPEAT}, ${cores} cores (shared machines make these noisy)`);
 console.log(`standard job nominal oscillator-steps (oscillators × samples): ${nominal}`);
 const pad = (text, width) => String(text).padEnd(width);
-console.log(`${pad('job', 16)}${pad('variant', 50)}${pad('ms', 9)}${pad('steps', 12)}${pad('M/s', 7)}note`);
+console.log(`${pad('job', 16)}${pad('variant', 66)}${pad('ms', 9)}${pad('steps', 12)}${pad('M/s', 7)}note`);
 for (const r of rows) {
   console.log(
-    `${pad(r.job, 16)}${pad(r.variant, 50)}${pad(r.ms.toFixed(0), 9)}${pad(r.steps ?? '', 12)}${pad(r.mps ?? '', 7)}${r.note ?? ''}`,
+    `${pad(r.job, 16)}${pad(r.variant, 66)}${pad(r.ms.toFixed(0), 9)}${pad(r.steps ?? '', 12)}${pad(r.mps ?? '', 7)}${r.note ?? ''}`,
   );
 }
