@@ -28,6 +28,8 @@ export interface SharedSweepJob {
   order: Int32Array;
   counter: Int32Array;
   results: Float64Array;
+  /** The calling thread's plan, sent along so that no worker plans the sweep again. */
+  plan: SweepPlan;
 }
 
 /**
@@ -133,6 +135,7 @@ export class SweepPool {
       order,
       counter: new Int32Array(new SharedArrayBuffer(4)),
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * count)),
+      plan,
     };
     const id = this.nextId++;
     const done = new Promise<void>((resolve, reject) => {
