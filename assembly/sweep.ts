@@ -124,11 +124,11 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
       f64x2.mul(vp10, pb),
     );
     // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as0 = f64x2.abs(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-    const m0 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u0), tu0), f64x2.gt(f64x2.abs(v0), tv0)),
-      f64x2.gt(as0, ts0),
-    );
+    const cs0 = f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0));
+    const hu0 = f64x2.gt(f64x2.abs(u0), tu0);
+    const hv0 = f64x2.gt(f64x2.abs(v0), tv0);
+    const hs0 = f64x2.gt(f64x2.abs(cs0), ts0);
+    const m0 = v128.or(v128.or(hu0, hv0), hs0);
     const uo1 = u1;
     const vo1 = v1;
     u1 = f64x2.add(
@@ -140,26 +140,18 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
       f64x2.mul(vp11, pb),
     );
     // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as1 = f64x2.abs(f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1)));
-    const m1 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u1), tu1), f64x2.gt(f64x2.abs(v1), tv1)),
-      f64x2.gt(as1, ts1),
-    );
+    const cs1 = f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1));
+    const hu1 = f64x2.gt(f64x2.abs(u1), tu1);
+    const hv1 = f64x2.gt(f64x2.abs(v1), tv1);
+    const hs1 = f64x2.gt(f64x2.abs(cs1), ts1);
+    const m1 = v128.or(v128.or(hu1, hv1), hs1);
     if (v128.any_true(v128.or(m0, m1))) {
-      if (i64x2.bitmask(m0) !== 0) {
-        const pav = f64x2.splat(pas);
-        const pbv = f64x2.splat(pbs);
-        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
-        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-        const ar00 = f64x2.sub(so0, pav);
-        const ar10 = f64x2.sub(sn0, pbv);
-        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
-        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+      if (v128.any_true(m0)) {
         const ratio = v128.load(coefficients, 160);
-        {
+        if (v128.any_true(hu0)) {
+          const hit = hu0;
           const end = f64x2.abs(u0);
-          const hit = f64x2.gt(end, tu0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 0), end);
             v128.store(peaks, peak, 0);
             const m0 = f64x2.mul(vo0, hv);
@@ -198,14 +190,18 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
             tu0 = v128.bitselect(threshold, tu0, hit);
           }
         }
-        {
+        if (v128.any_true(hv0)) {
+          const hit = hv0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
           const end = f64x2.abs(v0);
-          const hit = f64x2.gt(end, tv0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 16), end);
             v128.store(peaks, peak, 16);
-            const m0 = f64x2.mul(ar00, hv);
-            const m1 = f64x2.mul(ar10, hv);
+            const m0 = f64x2.mul(ar0, hv);
+            const m1 = f64x2.mul(ar1, hv);
             const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
@@ -218,8 +214,8 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
                 hermiteLane(
                   f64x2.extract_lane(vo0, 0),
                   f64x2.extract_lane(v0, 0),
-                  f64x2.extract_lane(ar00, 0),
-                  f64x2.extract_lane(ar10, 0),
+                  f64x2.extract_lane(ar0, 0),
+                  f64x2.extract_lane(ar1, 0),
                   h,
                   peaks + 16,
                 );
@@ -228,8 +224,8 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
                 hermiteLane(
                   f64x2.extract_lane(vo0, 1),
                   f64x2.extract_lane(v0, 1),
-                  f64x2.extract_lane(ar00, 1),
-                  f64x2.extract_lane(ar10, 1),
+                  f64x2.extract_lane(ar0, 1),
+                  f64x2.extract_lane(ar1, 1),
                   h,
                   peaks + 24,
                 );
@@ -240,15 +236,21 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
             tv0 = v128.bitselect(threshold, tv0, hit);
           }
         }
-        {
-          const end = f64x2.abs(sn0);
-          const hit = f64x2.gt(end, ts0);
-          if (v128.any_true(hit)) {
+        if (v128.any_true(hs0)) {
+          const hit = hs0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
+          const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar0), f64x2.mul(k0, vo0));
+          const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar1), f64x2.mul(k0, v0));
+          const end = f64x2.abs(sn);
+          {
             const peak = f64x2.max(v128.load(peaks, 32), end);
             v128.store(peaks, peak, 32);
-            const m0 = f64x2.mul(js00, hv);
-            const m1 = f64x2.mul(js10, hv);
-            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const m0 = f64x2.mul(js0, hv);
+            const m1 = f64x2.mul(js1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so, sn)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
               f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
@@ -258,20 +260,20 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
             if (need !== 0) {
               if (need & 1) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 0),
-                  f64x2.extract_lane(sn0, 0),
-                  f64x2.extract_lane(js00, 0),
-                  f64x2.extract_lane(js10, 0),
+                  f64x2.extract_lane(so, 0),
+                  f64x2.extract_lane(sn, 0),
+                  f64x2.extract_lane(js0, 0),
+                  f64x2.extract_lane(js1, 0),
                   h,
                   peaks + 32,
                 );
               }
               if (need & 2) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 1),
-                  f64x2.extract_lane(sn0, 1),
-                  f64x2.extract_lane(js00, 1),
-                  f64x2.extract_lane(js10, 1),
+                  f64x2.extract_lane(so, 1),
+                  f64x2.extract_lane(sn, 1),
+                  f64x2.extract_lane(js0, 1),
+                  f64x2.extract_lane(js1, 1),
                   h,
                   peaks + 40,
                 );
@@ -283,20 +285,12 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
           }
         }
       }
-      if (i64x2.bitmask(m1) !== 0) {
-        const pav = f64x2.splat(pas);
-        const pbv = f64x2.splat(pbs);
-        const so1 = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
-        const sn1 = f64x2.neg(f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1)));
-        const ar01 = f64x2.sub(so1, pav);
-        const ar11 = f64x2.sub(sn1, pbv);
-        const js01 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar01), f64x2.mul(k1, vo1));
-        const js11 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar11), f64x2.mul(k1, v1));
+      if (v128.any_true(m1)) {
         const ratio = v128.load(coefficients, 384);
-        {
+        if (v128.any_true(hu1)) {
+          const hit = hu1;
           const end = f64x2.abs(u1);
-          const hit = f64x2.gt(end, tu1);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 48), end);
             v128.store(peaks, peak, 48);
             const m0 = f64x2.mul(vo1, hv);
@@ -335,14 +329,18 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
             tu1 = v128.bitselect(threshold, tu1, hit);
           }
         }
-        {
+        if (v128.any_true(hv1)) {
+          const hit = hv1;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
+          const sn = f64x2.neg(cs1);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
           const end = f64x2.abs(v1);
-          const hit = f64x2.gt(end, tv1);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 64), end);
             v128.store(peaks, peak, 64);
-            const m0 = f64x2.mul(ar01, hv);
-            const m1 = f64x2.mul(ar11, hv);
+            const m0 = f64x2.mul(ar0, hv);
+            const m1 = f64x2.mul(ar1, hv);
             const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo1, v1)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
@@ -355,8 +353,8 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
                 hermiteLane(
                   f64x2.extract_lane(vo1, 0),
                   f64x2.extract_lane(v1, 0),
-                  f64x2.extract_lane(ar01, 0),
-                  f64x2.extract_lane(ar11, 0),
+                  f64x2.extract_lane(ar0, 0),
+                  f64x2.extract_lane(ar1, 0),
                   h,
                   peaks + 64,
                 );
@@ -365,8 +363,8 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
                 hermiteLane(
                   f64x2.extract_lane(vo1, 1),
                   f64x2.extract_lane(v1, 1),
-                  f64x2.extract_lane(ar01, 1),
-                  f64x2.extract_lane(ar11, 1),
+                  f64x2.extract_lane(ar0, 1),
+                  f64x2.extract_lane(ar1, 1),
                   h,
                   peaks + 72,
                 );
@@ -377,15 +375,21 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
             tv1 = v128.bitselect(threshold, tv1, hit);
           }
         }
-        {
-          const end = f64x2.abs(sn1);
-          const hit = f64x2.gt(end, ts1);
-          if (v128.any_true(hit)) {
+        if (v128.any_true(hs1)) {
+          const hit = hs1;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
+          const sn = f64x2.neg(cs1);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
+          const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar0), f64x2.mul(k1, vo1));
+          const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar1), f64x2.mul(k1, v1));
+          const end = f64x2.abs(sn);
+          {
             const peak = f64x2.max(v128.load(peaks, 80), end);
             v128.store(peaks, peak, 80);
-            const m0 = f64x2.mul(js01, hv);
-            const m1 = f64x2.mul(js11, hv);
-            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so1, sn1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const m0 = f64x2.mul(js0, hv);
+            const m1 = f64x2.mul(js1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so, sn)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
               f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
@@ -395,20 +399,20 @@ function sweepBlock(input: usize, steps: i32, h: f64, coefficients: usize, state
             if (need !== 0) {
               if (need & 1) {
                 hermiteLane(
-                  f64x2.extract_lane(so1, 0),
-                  f64x2.extract_lane(sn1, 0),
-                  f64x2.extract_lane(js01, 0),
-                  f64x2.extract_lane(js11, 0),
+                  f64x2.extract_lane(so, 0),
+                  f64x2.extract_lane(sn, 0),
+                  f64x2.extract_lane(js0, 0),
+                  f64x2.extract_lane(js1, 0),
                   h,
                   peaks + 80,
                 );
               }
               if (need & 2) {
                 hermiteLane(
-                  f64x2.extract_lane(so1, 1),
-                  f64x2.extract_lane(sn1, 1),
-                  f64x2.extract_lane(js01, 1),
-                  f64x2.extract_lane(js11, 1),
+                  f64x2.extract_lane(so, 1),
+                  f64x2.extract_lane(sn, 1),
+                  f64x2.extract_lane(js0, 1),
+                  f64x2.extract_lane(js1, 1),
                   h,
                   peaks + 88,
                 );
@@ -491,36 +495,28 @@ function sweepBlockSymmetric(
     u0 = f64x2.add(f64x2.add(f64x2.mul(uu0, uo0), f64x2.mul(uv0, vo0)), f64x2.mul(up10, sum));
     v0 = f64x2.add(f64x2.add(f64x2.mul(vu0, uo0), f64x2.mul(vv0, vo0)), f64x2.mul(vp10, sum));
     // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as0 = f64x2.abs(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-    const m0 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u0), tu0), f64x2.gt(f64x2.abs(v0), tv0)),
-      f64x2.gt(as0, ts0),
-    );
+    const cs0 = f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0));
+    const hu0 = f64x2.gt(f64x2.abs(u0), tu0);
+    const hv0 = f64x2.gt(f64x2.abs(v0), tv0);
+    const hs0 = f64x2.gt(f64x2.abs(cs0), ts0);
+    const m0 = v128.or(v128.or(hu0, hv0), hs0);
     const uo1 = u1;
     const vo1 = v1;
     u1 = f64x2.add(f64x2.add(f64x2.mul(uu1, uo1), f64x2.mul(uv1, vo1)), f64x2.mul(up11, sum));
     v1 = f64x2.add(f64x2.add(f64x2.mul(vu1, uo1), f64x2.mul(vv1, vo1)), f64x2.mul(vp11, sum));
     // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as1 = f64x2.abs(f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1)));
-    const m1 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u1), tu1), f64x2.gt(f64x2.abs(v1), tv1)),
-      f64x2.gt(as1, ts1),
-    );
+    const cs1 = f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1));
+    const hu1 = f64x2.gt(f64x2.abs(u1), tu1);
+    const hv1 = f64x2.gt(f64x2.abs(v1), tv1);
+    const hs1 = f64x2.gt(f64x2.abs(cs1), ts1);
+    const m1 = v128.or(v128.or(hu1, hv1), hs1);
     if (v128.any_true(v128.or(m0, m1))) {
-      if (i64x2.bitmask(m0) !== 0) {
-        const pav = f64x2.splat(pas);
-        const pbv = f64x2.splat(pbs);
-        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
-        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-        const ar00 = f64x2.sub(so0, pav);
-        const ar10 = f64x2.sub(sn0, pbv);
-        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
-        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+      if (v128.any_true(m0)) {
         const ratio = v128.load(coefficients, 160);
-        {
+        if (v128.any_true(hu0)) {
+          const hit = hu0;
           const end = f64x2.abs(u0);
-          const hit = f64x2.gt(end, tu0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 0), end);
             v128.store(peaks, peak, 0);
             const m0 = f64x2.mul(vo0, hv);
@@ -559,14 +555,18 @@ function sweepBlockSymmetric(
             tu0 = v128.bitselect(threshold, tu0, hit);
           }
         }
-        {
+        if (v128.any_true(hv0)) {
+          const hit = hv0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
           const end = f64x2.abs(v0);
-          const hit = f64x2.gt(end, tv0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 16), end);
             v128.store(peaks, peak, 16);
-            const m0 = f64x2.mul(ar00, hv);
-            const m1 = f64x2.mul(ar10, hv);
+            const m0 = f64x2.mul(ar0, hv);
+            const m1 = f64x2.mul(ar1, hv);
             const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
@@ -579,8 +579,8 @@ function sweepBlockSymmetric(
                 hermiteLane(
                   f64x2.extract_lane(vo0, 0),
                   f64x2.extract_lane(v0, 0),
-                  f64x2.extract_lane(ar00, 0),
-                  f64x2.extract_lane(ar10, 0),
+                  f64x2.extract_lane(ar0, 0),
+                  f64x2.extract_lane(ar1, 0),
                   h,
                   peaks + 16,
                 );
@@ -589,8 +589,8 @@ function sweepBlockSymmetric(
                 hermiteLane(
                   f64x2.extract_lane(vo0, 1),
                   f64x2.extract_lane(v0, 1),
-                  f64x2.extract_lane(ar00, 1),
-                  f64x2.extract_lane(ar10, 1),
+                  f64x2.extract_lane(ar0, 1),
+                  f64x2.extract_lane(ar1, 1),
                   h,
                   peaks + 24,
                 );
@@ -601,15 +601,21 @@ function sweepBlockSymmetric(
             tv0 = v128.bitselect(threshold, tv0, hit);
           }
         }
-        {
-          const end = f64x2.abs(sn0);
-          const hit = f64x2.gt(end, ts0);
-          if (v128.any_true(hit)) {
+        if (v128.any_true(hs0)) {
+          const hit = hs0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
+          const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar0), f64x2.mul(k0, vo0));
+          const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar1), f64x2.mul(k0, v0));
+          const end = f64x2.abs(sn);
+          {
             const peak = f64x2.max(v128.load(peaks, 32), end);
             v128.store(peaks, peak, 32);
-            const m0 = f64x2.mul(js00, hv);
-            const m1 = f64x2.mul(js10, hv);
-            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const m0 = f64x2.mul(js0, hv);
+            const m1 = f64x2.mul(js1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so, sn)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
               f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
@@ -619,20 +625,20 @@ function sweepBlockSymmetric(
             if (need !== 0) {
               if (need & 1) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 0),
-                  f64x2.extract_lane(sn0, 0),
-                  f64x2.extract_lane(js00, 0),
-                  f64x2.extract_lane(js10, 0),
+                  f64x2.extract_lane(so, 0),
+                  f64x2.extract_lane(sn, 0),
+                  f64x2.extract_lane(js0, 0),
+                  f64x2.extract_lane(js1, 0),
                   h,
                   peaks + 32,
                 );
               }
               if (need & 2) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 1),
-                  f64x2.extract_lane(sn0, 1),
-                  f64x2.extract_lane(js00, 1),
-                  f64x2.extract_lane(js10, 1),
+                  f64x2.extract_lane(so, 1),
+                  f64x2.extract_lane(sn, 1),
+                  f64x2.extract_lane(js0, 1),
+                  f64x2.extract_lane(js1, 1),
                   h,
                   peaks + 40,
                 );
@@ -644,20 +650,12 @@ function sweepBlockSymmetric(
           }
         }
       }
-      if (i64x2.bitmask(m1) !== 0) {
-        const pav = f64x2.splat(pas);
-        const pbv = f64x2.splat(pbs);
-        const so1 = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
-        const sn1 = f64x2.neg(f64x2.add(f64x2.mul(c1, v1), f64x2.mul(k1, u1)));
-        const ar01 = f64x2.sub(so1, pav);
-        const ar11 = f64x2.sub(sn1, pbv);
-        const js01 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar01), f64x2.mul(k1, vo1));
-        const js11 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar11), f64x2.mul(k1, v1));
+      if (v128.any_true(m1)) {
         const ratio = v128.load(coefficients, 384);
-        {
+        if (v128.any_true(hu1)) {
+          const hit = hu1;
           const end = f64x2.abs(u1);
-          const hit = f64x2.gt(end, tu1);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 48), end);
             v128.store(peaks, peak, 48);
             const m0 = f64x2.mul(vo1, hv);
@@ -696,14 +694,18 @@ function sweepBlockSymmetric(
             tu1 = v128.bitselect(threshold, tu1, hit);
           }
         }
-        {
+        if (v128.any_true(hv1)) {
+          const hit = hv1;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
+          const sn = f64x2.neg(cs1);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
           const end = f64x2.abs(v1);
-          const hit = f64x2.gt(end, tv1);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 64), end);
             v128.store(peaks, peak, 64);
-            const m0 = f64x2.mul(ar01, hv);
-            const m1 = f64x2.mul(ar11, hv);
+            const m0 = f64x2.mul(ar0, hv);
+            const m1 = f64x2.mul(ar1, hv);
             const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo1, v1)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
@@ -716,8 +718,8 @@ function sweepBlockSymmetric(
                 hermiteLane(
                   f64x2.extract_lane(vo1, 0),
                   f64x2.extract_lane(v1, 0),
-                  f64x2.extract_lane(ar01, 0),
-                  f64x2.extract_lane(ar11, 0),
+                  f64x2.extract_lane(ar0, 0),
+                  f64x2.extract_lane(ar1, 0),
                   h,
                   peaks + 64,
                 );
@@ -726,8 +728,8 @@ function sweepBlockSymmetric(
                 hermiteLane(
                   f64x2.extract_lane(vo1, 1),
                   f64x2.extract_lane(v1, 1),
-                  f64x2.extract_lane(ar01, 1),
-                  f64x2.extract_lane(ar11, 1),
+                  f64x2.extract_lane(ar0, 1),
+                  f64x2.extract_lane(ar1, 1),
                   h,
                   peaks + 72,
                 );
@@ -738,15 +740,21 @@ function sweepBlockSymmetric(
             tv1 = v128.bitselect(threshold, tv1, hit);
           }
         }
-        {
-          const end = f64x2.abs(sn1);
-          const hit = f64x2.gt(end, ts1);
-          if (v128.any_true(hit)) {
+        if (v128.any_true(hs1)) {
+          const hit = hs1;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c1, vo1), f64x2.mul(k1, uo1)));
+          const sn = f64x2.neg(cs1);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
+          const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar0), f64x2.mul(k1, vo1));
+          const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c1), ar1), f64x2.mul(k1, v1));
+          const end = f64x2.abs(sn);
+          {
             const peak = f64x2.max(v128.load(peaks, 80), end);
             v128.store(peaks, peak, 80);
-            const m0 = f64x2.mul(js01, hv);
-            const m1 = f64x2.mul(js11, hv);
-            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so1, sn1)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const m0 = f64x2.mul(js0, hv);
+            const m1 = f64x2.mul(js1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so, sn)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
               f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
@@ -756,20 +764,20 @@ function sweepBlockSymmetric(
             if (need !== 0) {
               if (need & 1) {
                 hermiteLane(
-                  f64x2.extract_lane(so1, 0),
-                  f64x2.extract_lane(sn1, 0),
-                  f64x2.extract_lane(js01, 0),
-                  f64x2.extract_lane(js11, 0),
+                  f64x2.extract_lane(so, 0),
+                  f64x2.extract_lane(sn, 0),
+                  f64x2.extract_lane(js0, 0),
+                  f64x2.extract_lane(js1, 0),
                   h,
                   peaks + 80,
                 );
               }
               if (need & 2) {
                 hermiteLane(
-                  f64x2.extract_lane(so1, 1),
-                  f64x2.extract_lane(sn1, 1),
-                  f64x2.extract_lane(js01, 1),
-                  f64x2.extract_lane(js11, 1),
+                  f64x2.extract_lane(so, 1),
+                  f64x2.extract_lane(sn, 1),
+                  f64x2.extract_lane(js0, 1),
+                  f64x2.extract_lane(js1, 1),
                   h,
                   peaks + 88,
                 );
@@ -844,26 +852,18 @@ function sweepBlockNarrow(
       f64x2.mul(vp10, pb),
     );
     // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as0 = f64x2.abs(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-    const m0 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u0), tu0), f64x2.gt(f64x2.abs(v0), tv0)),
-      f64x2.gt(as0, ts0),
-    );
+    const cs0 = f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0));
+    const hu0 = f64x2.gt(f64x2.abs(u0), tu0);
+    const hv0 = f64x2.gt(f64x2.abs(v0), tv0);
+    const hs0 = f64x2.gt(f64x2.abs(cs0), ts0);
+    const m0 = v128.or(v128.or(hu0, hv0), hs0);
     if (v128.any_true(m0)) {
-      if (i64x2.bitmask(m0) !== 0) {
-        const pav = f64x2.splat(pas);
-        const pbv = f64x2.splat(pbs);
-        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
-        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-        const ar00 = f64x2.sub(so0, pav);
-        const ar10 = f64x2.sub(sn0, pbv);
-        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
-        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+      if (v128.any_true(m0)) {
         const ratio = v128.load(coefficients, 160);
-        {
+        if (v128.any_true(hu0)) {
+          const hit = hu0;
           const end = f64x2.abs(u0);
-          const hit = f64x2.gt(end, tu0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 0), end);
             v128.store(peaks, peak, 0);
             const m0 = f64x2.mul(vo0, hv);
@@ -902,14 +902,18 @@ function sweepBlockNarrow(
             tu0 = v128.bitselect(threshold, tu0, hit);
           }
         }
-        {
+        if (v128.any_true(hv0)) {
+          const hit = hv0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
           const end = f64x2.abs(v0);
-          const hit = f64x2.gt(end, tv0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 16), end);
             v128.store(peaks, peak, 16);
-            const m0 = f64x2.mul(ar00, hv);
-            const m1 = f64x2.mul(ar10, hv);
+            const m0 = f64x2.mul(ar0, hv);
+            const m1 = f64x2.mul(ar1, hv);
             const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
@@ -922,8 +926,8 @@ function sweepBlockNarrow(
                 hermiteLane(
                   f64x2.extract_lane(vo0, 0),
                   f64x2.extract_lane(v0, 0),
-                  f64x2.extract_lane(ar00, 0),
-                  f64x2.extract_lane(ar10, 0),
+                  f64x2.extract_lane(ar0, 0),
+                  f64x2.extract_lane(ar1, 0),
                   h,
                   peaks + 16,
                 );
@@ -932,8 +936,8 @@ function sweepBlockNarrow(
                 hermiteLane(
                   f64x2.extract_lane(vo0, 1),
                   f64x2.extract_lane(v0, 1),
-                  f64x2.extract_lane(ar00, 1),
-                  f64x2.extract_lane(ar10, 1),
+                  f64x2.extract_lane(ar0, 1),
+                  f64x2.extract_lane(ar1, 1),
                   h,
                   peaks + 24,
                 );
@@ -944,15 +948,21 @@ function sweepBlockNarrow(
             tv0 = v128.bitselect(threshold, tv0, hit);
           }
         }
-        {
-          const end = f64x2.abs(sn0);
-          const hit = f64x2.gt(end, ts0);
-          if (v128.any_true(hit)) {
+        if (v128.any_true(hs0)) {
+          const hit = hs0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
+          const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar0), f64x2.mul(k0, vo0));
+          const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar1), f64x2.mul(k0, v0));
+          const end = f64x2.abs(sn);
+          {
             const peak = f64x2.max(v128.load(peaks, 32), end);
             v128.store(peaks, peak, 32);
-            const m0 = f64x2.mul(js00, hv);
-            const m1 = f64x2.mul(js10, hv);
-            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const m0 = f64x2.mul(js0, hv);
+            const m1 = f64x2.mul(js1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so, sn)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
               f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
@@ -962,20 +972,20 @@ function sweepBlockNarrow(
             if (need !== 0) {
               if (need & 1) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 0),
-                  f64x2.extract_lane(sn0, 0),
-                  f64x2.extract_lane(js00, 0),
-                  f64x2.extract_lane(js10, 0),
+                  f64x2.extract_lane(so, 0),
+                  f64x2.extract_lane(sn, 0),
+                  f64x2.extract_lane(js0, 0),
+                  f64x2.extract_lane(js1, 0),
                   h,
                   peaks + 32,
                 );
               }
               if (need & 2) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 1),
-                  f64x2.extract_lane(sn0, 1),
-                  f64x2.extract_lane(js00, 1),
-                  f64x2.extract_lane(js10, 1),
+                  f64x2.extract_lane(so, 1),
+                  f64x2.extract_lane(sn, 1),
+                  f64x2.extract_lane(js0, 1),
+                  f64x2.extract_lane(js1, 1),
                   h,
                   peaks + 40,
                 );
@@ -1040,26 +1050,18 @@ function sweepBlockSymmetricNarrow(
     u0 = f64x2.add(f64x2.add(f64x2.mul(uu0, uo0), f64x2.mul(uv0, vo0)), f64x2.mul(up10, sum));
     v0 = f64x2.add(f64x2.add(f64x2.mul(vu0, uo0), f64x2.mul(vv0, vo0)), f64x2.mul(vp10, sum));
     // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-    const as0 = f64x2.abs(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-    const m0 = v128.or(
-      v128.or(f64x2.gt(f64x2.abs(u0), tu0), f64x2.gt(f64x2.abs(v0), tv0)),
-      f64x2.gt(as0, ts0),
-    );
+    const cs0 = f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0));
+    const hu0 = f64x2.gt(f64x2.abs(u0), tu0);
+    const hv0 = f64x2.gt(f64x2.abs(v0), tv0);
+    const hs0 = f64x2.gt(f64x2.abs(cs0), ts0);
+    const m0 = v128.or(v128.or(hu0, hv0), hs0);
     if (v128.any_true(m0)) {
-      if (i64x2.bitmask(m0) !== 0) {
-        const pav = f64x2.splat(pas);
-        const pbv = f64x2.splat(pbs);
-        const so0 = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
-        const sn0 = f64x2.neg(f64x2.add(f64x2.mul(c0, v0), f64x2.mul(k0, u0)));
-        const ar00 = f64x2.sub(so0, pav);
-        const ar10 = f64x2.sub(sn0, pbv);
-        const js00 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar00), f64x2.mul(k0, vo0));
-        const js10 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar10), f64x2.mul(k0, v0));
+      if (v128.any_true(m0)) {
         const ratio = v128.load(coefficients, 160);
-        {
+        if (v128.any_true(hu0)) {
+          const hit = hu0;
           const end = f64x2.abs(u0);
-          const hit = f64x2.gt(end, tu0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 0), end);
             v128.store(peaks, peak, 0);
             const m0 = f64x2.mul(vo0, hv);
@@ -1098,14 +1100,18 @@ function sweepBlockSymmetricNarrow(
             tu0 = v128.bitselect(threshold, tu0, hit);
           }
         }
-        {
+        if (v128.any_true(hv0)) {
+          const hit = hv0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
           const end = f64x2.abs(v0);
-          const hit = f64x2.gt(end, tv0);
-          if (v128.any_true(hit)) {
+          {
             const peak = f64x2.max(v128.load(peaks, 16), end);
             v128.store(peaks, peak, 16);
-            const m0 = f64x2.mul(ar00, hv);
-            const m1 = f64x2.mul(ar10, hv);
+            const m0 = f64x2.mul(ar0, hv);
+            const m1 = f64x2.mul(ar1, hv);
             const ca = f64x2.add(f64x2.mul(six, f64x2.sub(vo0, v0)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
@@ -1118,8 +1124,8 @@ function sweepBlockSymmetricNarrow(
                 hermiteLane(
                   f64x2.extract_lane(vo0, 0),
                   f64x2.extract_lane(v0, 0),
-                  f64x2.extract_lane(ar00, 0),
-                  f64x2.extract_lane(ar10, 0),
+                  f64x2.extract_lane(ar0, 0),
+                  f64x2.extract_lane(ar1, 0),
                   h,
                   peaks + 16,
                 );
@@ -1128,8 +1134,8 @@ function sweepBlockSymmetricNarrow(
                 hermiteLane(
                   f64x2.extract_lane(vo0, 1),
                   f64x2.extract_lane(v0, 1),
-                  f64x2.extract_lane(ar00, 1),
-                  f64x2.extract_lane(ar10, 1),
+                  f64x2.extract_lane(ar0, 1),
+                  f64x2.extract_lane(ar1, 1),
                   h,
                   peaks + 24,
                 );
@@ -1140,15 +1146,21 @@ function sweepBlockSymmetricNarrow(
             tv0 = v128.bitselect(threshold, tv0, hit);
           }
         }
-        {
-          const end = f64x2.abs(sn0);
-          const hit = f64x2.gt(end, ts0);
-          if (v128.any_true(hit)) {
+        if (v128.any_true(hs0)) {
+          const hit = hs0;
+          const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+          const sn = f64x2.neg(cs0);
+          const ar0 = f64x2.sub(so, f64x2.splat(pas));
+          const ar1 = f64x2.sub(sn, f64x2.splat(pbs));
+          const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar0), f64x2.mul(k0, vo0));
+          const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar1), f64x2.mul(k0, v0));
+          const end = f64x2.abs(sn);
+          {
             const peak = f64x2.max(v128.load(peaks, 32), end);
             v128.store(peaks, peak, 32);
-            const m0 = f64x2.mul(js00, hv);
-            const m1 = f64x2.mul(js10, hv);
-            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so0, sn0)), f64x2.mul(three, f64x2.add(m0, m1)));
+            const m0 = f64x2.mul(js0, hv);
+            const m1 = f64x2.mul(js1, hv);
+            const ca = f64x2.add(f64x2.mul(six, f64x2.sub(so, sn)), f64x2.mul(three, f64x2.add(m0, m1)));
             const turns = v128.or(
               f64x2.le(f64x2.mul(m0, m1), zero),
               f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
@@ -1158,20 +1170,20 @@ function sweepBlockSymmetricNarrow(
             if (need !== 0) {
               if (need & 1) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 0),
-                  f64x2.extract_lane(sn0, 0),
-                  f64x2.extract_lane(js00, 0),
-                  f64x2.extract_lane(js10, 0),
+                  f64x2.extract_lane(so, 0),
+                  f64x2.extract_lane(sn, 0),
+                  f64x2.extract_lane(js0, 0),
+                  f64x2.extract_lane(js1, 0),
                   h,
                   peaks + 32,
                 );
               }
               if (need & 2) {
                 hermiteLane(
-                  f64x2.extract_lane(so0, 1),
-                  f64x2.extract_lane(sn0, 1),
-                  f64x2.extract_lane(js00, 1),
-                  f64x2.extract_lane(js10, 1),
+                  f64x2.extract_lane(so, 1),
+                  f64x2.extract_lane(sn, 1),
+                  f64x2.extract_lane(js0, 1),
+                  f64x2.extract_lane(js1, 1),
                   h,
                   peaks + 40,
                 );

@@ -46,11 +46,11 @@ const step = (symmetric, vectors) =>
       u${j} = ${update(symmetric, 'u', j)};
       v${j} = ${update(symmetric, 'v', j)};
       // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-      const as${j} = f64x2.abs(f64x2.add(f64x2.mul(c${j}, v${j}), f64x2.mul(k${j}, u${j})));
-      const m${j} = v128.or(
-        v128.or(f64x2.gt(f64x2.abs(u${j}), tu${j}), f64x2.gt(f64x2.abs(v${j}), tv${j})),
-        f64x2.gt(as${j}, ts${j}),
-      );`,
+      const cs${j} = f64x2.add(f64x2.mul(c${j}, v${j}), f64x2.mul(k${j}, u${j}));
+      const hu${j} = f64x2.gt(f64x2.abs(u${j}), tu${j});
+      const hv${j} = f64x2.gt(f64x2.abs(v${j}), tv${j});
+      const hs${j} = f64x2.gt(f64x2.abs(cs${j}), ts${j});
+      const m${j} = v128.or(v128.or(hu${j}, hv${j}), hs${j});`,
     '\n',
     vectors,
   );
@@ -65,10 +65,20 @@ const step = (symmetric, vectors) =>
 // the peaks are those of refinement on every passing step. Most passing steps are a quantity
 // climbing past its running peak, which need no Hermite.
 const quantities = (j) => [
-  { name: 'u', q0: `uo${j}`, q1: `u${j}`, d0: `vo${j}`, d1: `v${j}`, slot: 0, offset: 11, t: `tu${j}` },
-  { name: 'v', q0: `vo${j}`, q1: `v${j}`, d0: `ar0${j}`, d1: `ar1${j}`, slot: 1, offset: 12, t: `tv${j}` },
-  { name: 's', q0: `so${j}`, q1: `sn${j}`, d0: `js0${j}`, d1: `js1${j}`, slot: 2, offset: 13, t: `ts${j}` },
+  { q0: `uo${j}`, q1: `u${j}`, d0: `vo${j}`, d1: `v${j}`, slot: 0, offset: 11, t: `tu${j}`, hit: `hu${j}`, needs: '' },
+  { q0: `vo${j}`, q1: `v${j}`, d0: `ar0`, d1: `ar1`, slot: 1, offset: 12, t: `tv${j}`, hit: `hv${j}`, needs: accelerations(j) },
+  { q0: `so`, q1: `sn`, d0: `js0`, d1: `js1`, slot: 2, offset: 13, t: `ts${j}`, hit: `hs${j}`, needs: accelerations(j) + jerks(j) },
 ];
+// The absolute acceleration s = −(c v + k u) and the relative one (s − p) at both ends of the step.
+const accelerations = (j) => `
+            const so = f64x2.neg(f64x2.add(f64x2.mul(c${j}, vo${j}), f64x2.mul(k${j}, uo${j})));
+            const sn = f64x2.neg(cs${j});
+            const ar0 = f64x2.sub(so, f64x2.splat(pas));
+            const ar1 = f64x2.sub(sn, f64x2.splat(pbs));`;
+// ds/dt = −c·(s − p) − k·v at both ends.
+const jerks = (j) => `
+            const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar0), f64x2.mul(k${j}, vo${j}));
+            const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar1), f64x2.mul(k${j}, v${j}));`;
 const lane = (j, q, l) => `              if (need & ${1 << l}) {
                 hermiteLane(
                   f64x2.extract_lane(${q.q0}, ${l}),
@@ -81,22 +91,14 @@ const lane = (j, q, l) => `              if (need & ${1 << l}) {
               }`;
 const refine = (vectors) =>
   each(
-    (j) => `        if (i64x2.bitmask(m${j}) !== 0) {
-          const pav = f64x2.splat(pas);
-          const pbv = f64x2.splat(pbs);
-          const so${j} = f64x2.neg(f64x2.add(f64x2.mul(c${j}, vo${j}), f64x2.mul(k${j}, uo${j})));
-          const sn${j} = f64x2.neg(f64x2.add(f64x2.mul(c${j}, v${j}), f64x2.mul(k${j}, u${j})));
-          const ar0${j} = f64x2.sub(so${j}, pav);
-          const ar1${j} = f64x2.sub(sn${j}, pbv);
-          const js0${j} = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar0${j}), f64x2.mul(k${j}, vo${j}));
-          const js1${j} = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar1${j}), f64x2.mul(k${j}, v${j}));
+    (j) => `        if (v128.any_true(m${j})) {
           const ratio = v128.load(coefficients, ${(j * COEFFICIENT_COUNT + 10) * 16});
 ${quantities(j)
   .map(
-    (q) => `          {
+    (q) => `          if (v128.any_true(${q.hit})) {
+            const hit = ${q.hit};${q.needs}
             const end = f64x2.abs(${q.q1});
-            const hit = f64x2.gt(end, ${q.t});
-            if (v128.any_true(hit)) {
+            {
               const peak = f64x2.max(v128.load(peaks, ${(j * 3 + q.slot) * 16}), end);
               v128.store(peaks, peak, ${(j * 3 + q.slot) * 16});
               const m0 = f64x2.mul(${q.d0}, hv);
