@@ -301,17 +301,19 @@ export function composeSteps(s: StepCoefficients, count: number): StepCoefficien
  * steps × composed ≥ substeps. Peaks between executed steps are refined by cubic Hermite
  * interpolation, which needs MIN_STEPS_PER_PERIOD of them a period (and, for content near the
  * record's Nyquist frequency, the piecewise-exact method's record rule), so only the sub-steps
- * beyond that are composed.
+ * beyond that are composed. Steps per period asked for by the user (`stepsPerPeriod`) are
+ * executed, not composed: they ask for a finer search of the peaks too.
  */
 export function executionPlan(
   substeps: number,
   periodS: number,
   dtS: number,
   roughness: number,
+  stepsPerPeriod = 0,
 ): { steps: number; composed: number } {
   const hermite = Math.max(
     recordSubsteps('piecewise-exact', roughness),
-    Math.ceil((dtS * MIN_STEPS_PER_PERIOD) / periodS - 1e-9),
+    Math.ceil((dtS * Math.max(MIN_STEPS_PER_PERIOD, stepsPerPeriod)) / periodS - 1e-9),
   );
   const steps = Math.min(substeps, hermite);
   return { steps, composed: Math.ceil(substeps / steps) };

@@ -115,7 +115,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
         roughness,
         stepsPerPeriod: options.stepsPerPeriod,
       });
-      const run = executionPlan(substeps, periodS, dtS, roughness);
+      const run = executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod);
       oscillators.push({
         index: d * periodsS.length + p,
         periodS,

@@ -244,5 +244,7 @@ describe('composed sub-steps (composeSteps, executionPlan)', () => {
     expect(executionPlan(14, 0.01, 0.005, 0.1)).toEqual({ steps: 5, composed: 3 });
     // Fewer sub-steps than Hermite needs: nothing to compose.
     expect(executionPlan(3, 0.01, 0.005, 0.1)).toEqual({ steps: 3, composed: 1 });
+    // Steps per period asked for are executed: 400 a period at T = 0.05 s, Δt = 0.005 s is 40 a sample.
+    expect(executionPlan(40, 0.05, 0.005, 0.1, 400)).toEqual({ steps: 40, composed: 1 });
   });
 });
