@@ -299,9 +299,12 @@ export function composeSteps(s: StepCoefficients, count: number): StepCoefficien
  * How a sweep runs an oscillator that the rule gives `substeps` sub-steps per record step: as
  * `steps` executed steps per record step, each composing `composed` sub-steps (composeSteps), with
  * steps × composed ≥ substeps. Peaks between executed steps are refined by cubic Hermite
- * interpolation, which needs MIN_STEPS_PER_PERIOD of them a period (and, for content near the
- * record's Nyquist frequency, the piecewise-exact method's record rule), so only the sub-steps
- * beyond that are composed. Steps per period asked for by the user (`stepsPerPeriod`) are
+ * interpolation, which needs MIN_STEPS_PER_PERIOD of them a period and, for content near the
+ * record's Nyquist frequency, ⌈R²⌉ a record step (R the roughness; real records, R < 1, need
+ * one); only the sub-steps beyond that are composed. Measured against the exact method at 400
+ * steps a period (stochastic records at 0.02 and 0.005 s, sines of 5–24.5 Hz at 0.02 s), the
+ * worst errors were 0.24% (stochastic) and 0.41% (sines) for Newmark average, 0.26% and 0.24% for
+ * Newmark linear; with ⌈R²/2⌉ a step the sines reached 0.48%. Steps per period asked for by the user (`stepsPerPeriod`) are
  * executed, not composed: they ask for a finer search of the peaks too.
  */
 export function executionPlan(
@@ -312,7 +315,7 @@ export function executionPlan(
   stepsPerPeriod = 0,
 ): { steps: number; composed: number } {
   const hermite = Math.max(
-    recordSubsteps('piecewise-exact', roughness),
+    Math.max(1, Math.ceil(roughness * roughness - 1e-9)),
     Math.ceil((dtS * Math.max(MIN_STEPS_PER_PERIOD, stepsPerPeriod)) / periodS - 1e-9),
   );
   const steps = Math.min(substeps, hermite);
