@@ -101,7 +101,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const dampings = Float64Array.from(options.dampings);
   checkSweep(accelMS2, dtS, periodsS, dampings);
   const durationS = (accelMS2.length - 1) * dtS;
-  const roughness = recordRoughness(accelMS2);
+  const { roughness, bounds } = recordStatistics(accelMS2, dtS);
   const prewarp = options.prewarp ?? true;
   const oscillators: PlannedOscillator[] = [];
   for (let d = 0; d < dampings.length; d++) {
@@ -138,7 +138,6 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
     }
     groups.push(group);
   }
-  const bounds = groundBounds(accelMS2, dtS);
   return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups };
 }
 
@@ -380,6 +379,28 @@ export function recordRoughness(accelMS2: Float64Array): number {
   }
   if (sum === 0) return 0;
   return Math.sqrt(sumDifferences / (accelMS2.length - 1) / (sum / accelMS2.length));
+}
+
+/** recordRoughness and groundBounds in one pass over the record (a sweep plan needs both). */
+export function recordStatistics(
+  accelMS2: Float64Array,
+  dtS: number,
+): { roughness: number; bounds: GroundBounds } {
+  let sum = accelMS2[0] * accelMS2[0];
+  let sumDifferences = 0;
+  let pgaMS2 = Math.abs(accelMS2[0]);
+  let jump = 0;
+  for (let i = 1; i < accelMS2.length; i++) {
+    const a = accelMS2[i];
+    const difference = a - accelMS2[i - 1];
+    sum += a * a;
+    sumDifferences += difference * difference;
+    pgaMS2 = Math.max(pgaMS2, Math.abs(a));
+    jump = Math.max(jump, Math.abs(difference));
+  }
+  const roughness =
+    sum === 0 ? 0 : Math.sqrt(sumDifferences / (accelMS2.length - 1) / (sum / accelMS2.length));
+  return { roughness, bounds: { pgaMS2, jerkMS3: jump / dtS } };
 }
 
 /** Bounds on the ground motion that the refinement thresholds use. */

@@ -8,7 +8,12 @@ import {
   stepCoefficients,
   substepCount,
 } from '../../src/oscillator/recurrence.js';
-import { recordRoughness, sweepOscillators } from '../../src/oscillator/sweep.js';
+import {
+  groundBounds,
+  recordRoughness,
+  recordStatistics,
+  sweepOscillators,
+} from '../../src/oscillator/sweep.js';
 import { sineRecord, testRecord } from '../helpers/records.js';
 
 /**
@@ -51,6 +56,16 @@ function bruteForcePeaks(accel: Float64Array, dtS: number, periodS: number, zeta
   }
   return [pu, pv, ps];
 }
+
+describe('recordStatistics', () => {
+  // One pass for both: the same numbers as recordRoughness and groundBounds (their definitions).
+  it('equals recordRoughness and groundBounds', () => {
+    const record = testRecord(4, 0.01, 6);
+    const both = recordStatistics(record.accelMS2, record.dtS);
+    expect(both.roughness).toBe(recordRoughness(record.accelMS2));
+    expect(both.bounds).toEqual(groundBounds(record.accelMS2, record.dtS));
+  });
+});
 
 describe('sweepOscillators', () => {
   it('skips no peak that refinement on every step would find (threshold rule of sweep.ts)', () => {
