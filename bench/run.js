@@ -200,8 +200,8 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
 // RotD and the batch through the CLI: the whole process's wall time and peak memory.
 {
   const pair = [3001, 3002].map((seed) => synthesizeRecord({ seed, dtS: 0.01, durationS: 79.99 }));
-  const paths = pair.map((r, i) => join(folder, `pair-${i + 1}.csv`));
-  pair.forEach((r, i) => writeCsv(paths[i], r));
+  const paths = pair.map((_, i) => join(folder, `pair-${i + 1}.csv`));
+  for (const [i, r] of pair.entries()) writeCsv(paths[i], r);
   const rotdArgs = [cli, 'rotd', ...paths, '--units', 'g', '--periods', '0.05:10:40', '--damping', '5%'];
   for (const threads of ['1', String(cores)]) {
     const args = [...rotdArgs, '--threads', threads, '--out', join(folder, 'rotd.json')];

@@ -65,9 +65,39 @@ const step = (symmetric, vectors) =>
 // the peaks are those of refinement on every passing step. Most passing steps are a quantity
 // climbing past its running peak, which need no Hermite.
 const quantities = (j) => [
-  { q0: `uo${j}`, q1: `u${j}`, d0: `vo${j}`, d1: `v${j}`, slot: 0, offset: 11, t: `tu${j}`, hit: `hu${j}`, needs: '' },
-  { q0: `vo${j}`, q1: `v${j}`, d0: `ar0`, d1: `ar1`, slot: 1, offset: 12, t: `tv${j}`, hit: `hv${j}`, needs: accelerations(j) },
-  { q0: `so`, q1: `sn`, d0: `js0`, d1: `js1`, slot: 2, offset: 13, t: `ts${j}`, hit: `hs${j}`, needs: accelerations(j) + jerks(j) },
+  {
+    q0: `uo${j}`,
+    q1: `u${j}`,
+    d0: `vo${j}`,
+    d1: `v${j}`,
+    slot: 0,
+    offset: 11,
+    t: `tu${j}`,
+    hit: `hu${j}`,
+    needs: '',
+  },
+  {
+    q0: `vo${j}`,
+    q1: `v${j}`,
+    d0: `ar0`,
+    d1: `ar1`,
+    slot: 1,
+    offset: 12,
+    t: `tv${j}`,
+    hit: `hv${j}`,
+    needs: accelerations(j),
+  },
+  {
+    q0: `so`,
+    q1: `sn`,
+    d0: `js0`,
+    d1: `js1`,
+    slot: 2,
+    offset: 13,
+    t: `ts${j}`,
+    hit: `hs${j}`,
+    needs: accelerations(j) + jerks(j),
+  },
 ];
 // The absolute acceleration s = −(c v + k u) and the relative one (s − p) at both ends of the step.
 const accelerations = (j) => `
