@@ -23,9 +23,10 @@ export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
 
 /**
  * Oscillator-steps (periods × dampings × samples, each stepping 180 rotations) from which RotD is
- * dealt out over threads: a worker costs 30–50 ms to start, about 100,000 such steps.
+ * dealt out over threads: a worker costs 50–80 ms to start (module and kernel included), about
+ * 1,000,000 such steps of the WebAssembly loop.
  */
-export const ROTD_PARALLEL_MIN_STEPS = 200_000;
+export const ROTD_PARALLEL_MIN_STEPS = 1_000_000;
 
 export function registerRotD(program: Command): void {
   const command = program
