@@ -55,14 +55,18 @@ export function runClaimedGroups(job: SharedSweepJob, plan: SweepPlan): void {
   }
 }
 
-function workerUrl(): URL {
-  // Under a test runner this module runs from its TypeScript source; workers run the build.
-  return import.meta.url.endsWith('.ts')
-    ? new URL('../../dist/oscillator/parallel-worker.js', import.meta.url)
-    : new URL('./parallel-worker.js', import.meta.url);
+/**
+ * The worker script `file` beside the module at `moduleUrl` (in src/`folder`/): under a test runner
+ * modules run from their TypeScript source, and workers run the build.
+ */
+export function workerScript(moduleUrl: string, folder: string, file: string): URL {
+  return moduleUrl.endsWith('.ts')
+    ? new URL(`../../dist/${folder}/${file}`, moduleUrl)
+    : new URL(`./${file}`, moduleUrl);
 }
 
-function shared(values: Float64Array): Float64Array {
+/** `values` in a SharedArrayBuffer (itself when it already is), for threads to read. */
+export function shared(values: Float64Array): Float64Array {
   if (values.buffer instanceof SharedArrayBuffer) return values;
   const copy = new Float64Array(new SharedArrayBuffer(values.byteLength));
   copy.set(values);
@@ -89,7 +93,7 @@ export class SweepPool {
     }
     this.threads = threads;
     for (let i = 1; i < threads; i++) {
-      const worker = new Worker(workerUrl());
+      const worker = new Worker(workerScript(import.meta.url, 'oscillator', 'parallel-worker.js'));
       worker.on('message', (message: { id: number; error?: string }) => this.settle(message));
       worker.on('error', (error) => this.failAll(error));
       this.workers.push(worker);

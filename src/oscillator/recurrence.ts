@@ -296,6 +296,23 @@ export function composeSteps(s: StepCoefficients, count: number): StepCoefficien
 }
 
 /**
+ * The coefficients of one executed step of length `stepS` made of `composed` sub-steps of
+ * `method` (composeSteps), each pre-warped to the oscillator's exact poles unless `prewarp` is false.
+ */
+export function executedStepCoefficients(
+  method: Method,
+  omegaRadS: number,
+  damping: number,
+  stepS: number,
+  composed = 1,
+  prewarp = true,
+): StepCoefficients {
+  const substepS = stepS / composed;
+  const warped = prewarp ? prewarpedOscillator(method, omegaRadS, damping, substepS) : { omegaRadS, damping };
+  return composeSteps(stepCoefficients(method, warped.omegaRadS, warped.damping, substepS), composed);
+}
+
+/**
  * How a sweep runs an oscillator that the rule gives `substeps` sub-steps per record step: as
  * `steps` executed steps per record step, each composing `composed` sub-steps (composeSteps), with
  * steps × composed ≥ substeps. Peaks between executed steps are refined by cubic Hermite

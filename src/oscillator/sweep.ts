@@ -1,13 +1,6 @@
 import { inputError } from '../errors.js';
 import { COEFFICIENT_STRIDE, GROUP_WIDTH, PEAK_STRIDE, STATE_STRIDE, sweepBlock } from './kernel.js';
-import {
-  composeSteps,
-  executionPlan,
-  type Method,
-  prewarpedOscillator,
-  stepCoefficients,
-  substepCount,
-} from './recurrence.js';
+import { executedStepCoefficients, executionPlan, type Method, substepCount } from './recurrence.js';
 import { WASM_WIDTH, WasmSweeper, wasmSimdSupported } from './wasm/kernel.js';
 
 export interface SweepOptions {
@@ -341,12 +334,7 @@ export function packCoefficients(
   prewarp = true,
 ): void {
   const omega = (2 * Math.PI) / oscillator.periodS;
-  const composed = oscillator.composed ?? 1;
-  const substepS = stepS / composed;
-  const warped = prewarp
-    ? prewarpedOscillator(method, omega, oscillator.damping, substepS)
-    : { omegaRadS: omega, damping: oscillator.damping };
-  const s = composeSteps(stepCoefficients(method, warped.omegaRadS, warped.damping, substepS), composed);
+  const s = executedStepCoefficients(method, omega, oscillator.damping, stepS, oscillator.composed, prewarp);
   const o = slot * COEFFICIENT_STRIDE;
   target[o] = s.uu;
   target[o + 1] = s.uv;
@@ -371,17 +359,10 @@ export function packCoefficients(
  * frequency). The sub-step rule uses it (see recordSubsteps in recurrence.ts).
  */
 export function recordRoughness(accelMS2: Float64Array): number {
-  let sum = 0;
-  let sumDifferences = 0;
-  for (let i = 0; i < accelMS2.length; i++) {
-    sum += accelMS2[i] * accelMS2[i];
-    if (i > 0) sumDifferences += (accelMS2[i] - accelMS2[i - 1]) ** 2;
-  }
-  if (sum === 0) return 0;
-  return Math.sqrt(sumDifferences / (accelMS2.length - 1) / (sum / accelMS2.length));
+  return recordStatistics(accelMS2, 1).roughness;
 }
 
-/** recordRoughness and groundBounds in one pass over the record (a sweep plan needs both). */
+/** The record's roughness (recordRoughness) and bounds (groundBounds), in one pass over it. */
 export function recordStatistics(
   accelMS2: Float64Array,
   dtS: number,
@@ -412,13 +393,7 @@ export interface GroundBounds {
 }
 
 export function groundBounds(accelMS2: Float64Array, dtS: number): GroundBounds {
-  let pgaMS2 = Math.abs(accelMS2[0]);
-  let jump = 0;
-  for (let i = 1; i < accelMS2.length; i++) {
-    pgaMS2 = Math.max(pgaMS2, Math.abs(accelMS2[i]));
-    jump = Math.max(jump, Math.abs(accelMS2[i] - accelMS2[i - 1]));
-  }
-  return { pgaMS2, jerkMS3: jump / dtS };
+  return recordStatistics(accelMS2, dtS).bounds;
 }
 
 /**

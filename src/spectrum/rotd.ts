@@ -1,13 +1,12 @@
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { inputError, usageError } from '../errors.js';
+import { shared, workerScript } from '../oscillator/parallel.js';
 import { hermitePeak } from '../oscillator/peak.js';
 import {
-  composeSteps,
+  executedStepCoefficients,
   executionPlan,
   type Method,
-  prewarpedOscillator,
-  stepCoefficients,
   substepCount,
 } from '../oscillator/recurrence.js';
 import {
@@ -104,7 +103,9 @@ export async function rotDSpectraParallel(
   const others = shares.slice(1).map(
     ({ work: part }) =>
       new Promise<RotDCurve[]>((resolve, reject) => {
-        const worker = new Worker(rotdWorkerUrl(), { workerData: part });
+        const worker = new Worker(workerScript(import.meta.url, 'spectrum', 'rotd-worker.js'), {
+          workerData: part,
+        });
         worker.once('message', (message: { curves?: RotDCurve[]; error?: string }) => {
           void worker.terminate();
           if (message.curves) resolve(message.curves);
@@ -131,19 +132,6 @@ export async function rotDSpectraParallel(
     });
   });
   return finishRotD(first, second, work, curves);
-}
-
-function rotdWorkerUrl(): URL {
-  // Under a test runner this module runs from its TypeScript source; workers run the build.
-  return import.meta.url.endsWith('.ts')
-    ? new URL('../../dist/spectrum/rotd-worker.js', import.meta.url)
-    : new URL('./rotd-worker.js', import.meta.url);
-}
-
-function shared(values: Float64Array): Float64Array {
-  const copy = new Float64Array(new SharedArrayBuffer(values.byteLength));
-  copy.set(values);
-  return copy;
 }
 
 /** Check the pair and the grid, and pad the shorter component. */
@@ -318,11 +306,7 @@ function oscillatorPeaks(
   const substeps = run.steps;
   const h = dtS / substeps;
   const omega = (2 * Math.PI) / periodS;
-  const warped = prewarpedOscillator(method, omega, damping, h / run.composed);
-  const c = composeSteps(
-    stepCoefficients(method, warped.omegaRadS, warped.damping, h / run.composed),
-    run.composed,
-  );
+  const c = executedStepCoefficients(method, omega, damping, h, run.composed);
   const { uu, uv, up0, up1, vu, vv, vp0, vp1 } = c;
   const angles = peaks.length;
   const inverse = 1 / substeps;

@@ -36,7 +36,7 @@ import { addTargetOptions, applyTarget, loadTarget } from '../target-options.js'
 import { planInput } from './anchor.js';
 import { broadeningFromOptions, buildingFromOptions, floorAssumptions } from './floor.js';
 import { INFO_METHODS } from './info.js';
-import { ROTD_PARALLEL_MIN_STEPS } from './rotd.js';
+import { rotdThreads } from './rotd.js';
 import { addGridOptions, gridFromOptions, type SpectrumCliOptions } from './spectrum.js';
 
 export interface ReportCliOptions extends SpectrumCliOptions {
@@ -204,12 +204,12 @@ export async function runReport(
     const angleStepDeg = positiveNumber('--angle-step', options.angleStep ?? '1');
     // One damping ratio (5% where the grid has it): the rotation sweep costs about 180 single sweeps.
     const damping = grid.dampings.find((d) => Math.abs(d - 0.05) < 1e-12) ?? grid.dampings[0];
-    const steps = grid.periodsS.length * Math.max(processed.accelMS2.length, second.accelMS2.length);
+    const samples = Math.max(processed.accelMS2.length, second.accelMS2.length);
     const spectra = await rotDSpectraParallel(processed, second, {
       ...grid,
       dampings: [damping],
       angleStepDeg,
-      threads: steps >= ROTD_PARALLEL_MIN_STEPS ? undefined : 1,
+      threads: rotdThreads(grid.periodsS.length, 1, samples),
     });
     input.rotd = {
       spectra,

@@ -11,7 +11,13 @@ import { rotdFigure } from '../../plot/rotd-figure.js';
 import { type RotDSpectra, rotDSpectraParallel } from '../../spectrum/rotd.js';
 import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions, summaryRows } from './spectrum.js';
+import {
+  addGridOptions,
+  type GridCliOptions,
+  gridFromOptions,
+  parseThreads,
+  summaryRows,
+} from './spectrum.js';
 
 export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
@@ -27,6 +33,20 @@ export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
  * 1,000,000 such steps of the WebAssembly loop.
  */
 export const ROTD_PARALLEL_MIN_STEPS = 1_000_000;
+
+/**
+ * Threads for a RotD job of `periods` × `dampings` oscillators over `samples` samples: the
+ * --threads given, else all cores (undefined) for a large job and one for a small one.
+ */
+export function rotdThreads(
+  periods: number,
+  dampings: number,
+  samples: number,
+  text?: string,
+): number | undefined {
+  if (text !== undefined) return parseThreads(text);
+  return periods * dampings * samples >= ROTD_PARALLEL_MIN_STEPS ? undefined : 1;
+}
 
 export function registerRotD(program: Command): void {
   const command = program
@@ -56,14 +76,8 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
   const angleStepDeg = positiveNumber('--angle-step', options.angleStep ?? '1');
   const one = await loadRecord(first, options);
   const two = await loadRecord(second, options);
-  const steps =
-    grid.periodsS.length * grid.dampings.length * Math.max(one.accelMS2.length, two.accelMS2.length);
-  const threads =
-    options.threads !== undefined
-      ? wholeThreads(options.threads)
-      : steps >= ROTD_PARALLEL_MIN_STEPS
-        ? undefined
-        : 1;
+  const samples = Math.max(one.accelMS2.length, two.accelMS2.length);
+  const threads = rotdThreads(grid.periodsS.length, grid.dampings.length, samples, options.threads);
   const spectra = await rotDSpectraParallel(one, two, { ...grid, angleStepDeg, threads });
   const text =
     format === 'json'
@@ -172,12 +186,4 @@ export function rotdTable(spectra: RotDSpectra): string {
   }
   out.push(`(${spectra.periodsS.length} periods; --format json or csv for all of them)`);
   return `${out.join('\n')}\n`;
-}
-
-function wholeThreads(text: string): number {
-  const threads = Number(text);
-  if (!Number.isInteger(threads) || threads < 1 || threads > 256) {
-    throw usageError(`--threads must be a whole number from 1 to 256, got '${text}'`);
-  }
-  return threads;
 }

@@ -142,11 +142,16 @@ function sweepChoice(options: SpectrumCliOptions): { threads?: number; kernel: S
     throw usageError(`--kernel '${kernel}': use auto, wasm or js`);
   }
   if (options.threads === undefined) return { kernel };
-  const threads = Number(options.threads);
+  return { threads: parseThreads(options.threads), kernel };
+}
+
+/** The value of --threads: a whole number from 1 to 256. */
+export function parseThreads(text: string): number {
+  const threads = Number(text);
   if (!Number.isInteger(threads) || threads < 1 || threads > 256) {
-    throw usageError(`--threads must be a whole number from 1 to 256, got '${options.threads}'`);
+    throw usageError(`--threads must be a whole number from 1 to 256, got '${text}'`);
   }
-  return { threads, kernel };
+  return threads;
 }
 
 /** The spectrum of a record, its sweep split over threads when it is large. */
