@@ -1,34 +1,41 @@
 // Writes assembly/sweep.ts: the SIMD sweep kernel in AssemblyScript, the WebAssembly twin of
-// src/oscillator/kernel.ts (same recurrence, same operation order, same threshold test and
-// Hermite refinement). Four oscillators are stepped per pass as two f64x2 vectors whose
-// coefficients and states live in locals. Four rather than eight: with eight, a step somewhere
-// in the pass needs refinement most of the time (each lane does on about a fifth of its steps),
-// and sub-step counts shared by few oscillators leave more lanes idle; four measured faster.
-// Run `npm run generate` after editing this template; the output is committed and reviewed like
-// any other source file, and compiled by scripts/build-wasm.mjs at build time.
+// src/oscillator/kernel.ts (same recurrence, same two passes, same thresholds and Hermite
+// refinement). Four oscillators are stepped per pass as two f64x2 vectors whose coefficients and
+// states live in locals. Run `npm run generate` after editing this template; the output is
+// committed and reviewed like any other source file, and compiled by scripts/build-wasm.mjs at
+// build time.
+//
+// The two passes (the design is described in kernel.ts):
+//   1. scan: step the group over the record with no branch at all, keeping per block of
+//      `blockSteps` steps the state at the block's start and the largest |u|, |v| and |s| at the
+//      block's steps. The step is ~19 vector operations per two oscillators; unrolled twice.
+//   2. refine: from the record's sample peaks P, the thresholds P·r − d (refinementThresholds in
+//      sweep.ts); only the blocks whose largest value passes a threshold are stepped again, one
+//      vector at a time from the stored state, with the Hermite refinement on the steps that pass.
 import { writeFileSync } from 'node:fs';
 
 // Vectors per pass (two oscillators each); VECTORS=n in the environment tries another width.
 const VECTORS = Number(process.env.VECTORS ?? 2);
 const COEFFICIENT_COUNT = 14;
+/** Values (v128) per vector in a block's checkpoint: u and v at its start, its |u|, |v|, |s| maxima. */
+const CHECKPOINT = 5;
 const each = (fn, join = '\n', count = VECTORS) => Array.from({ length: count }, (_, j) => fn(j)).join(join);
-// The masks of all vectors or-ed as a balanced tree, for one any_true per step.
-const anyMask = (count) => {
-  let terms = Array.from({ length: count }, (_, j) => `m${j}`);
-  while (terms.length > 1) {
-    const next = [];
-    for (let i = 0; i < terms.length; i += 2) {
-      next.push(i + 1 < terms.length ? `v128.or(${terms[i]}, ${terms[i + 1]})` : terms[i]);
-    }
-    terms = next;
-  }
-  return terms[0];
-};
 const names = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1', 'c', 'k'];
-const stateNames = ['u', 'v', 'tu', 'tv', 'ts'];
 // Coefficients held in locals: all ten, or for a symmetric recurrence (up0 = up1, vp0 = vp1)
 // the eight that remain.
 const hotNames = (symmetric) => (symmetric ? names.filter((n) => n !== 'up0' && n !== 'vp0') : names);
+const loadCoefficients = (symmetric, vectors) =>
+  each(
+    (j) =>
+      hotNames(symmetric)
+        .map(
+          (n) =>
+            `  const ${n}${j} = v128.load(coefficients, ${(j * COEFFICIENT_COUNT + names.indexOf(n)) * 16});`,
+        )
+        .join('\n'),
+    '\n',
+    vectors,
+  );
 
 // The general update keeps the TypeScript kernel's order of operations, ((a + b) + c) + d, so the
 // two kernels give the same bits; the symmetric one adds its single forcing term last.
@@ -38,129 +45,169 @@ const update = (symmetric, q, j) => {
     ? `f64x2.add(${free}, f64x2.mul(${q}p1${j}, sum))`
     : `f64x2.add(f64x2.add(${free}, f64x2.mul(${q}p0${j}, pa)), f64x2.mul(${q}p1${j}, pb))`;
 };
-
-const step = (symmetric, vectors) =>
-  each(
-    (j) => `      const uo${j} = u${j};
+// One step of vector j: the new state, and cs = c·v + k·u, whose magnitude is |s| (s = −cs is the
+// absolute acceleration; its sign is only needed when refining).
+const advance = (symmetric, j) => `      const uo${j} = u${j};
       const vo${j} = v${j};
       u${j} = ${update(symmetric, 'u', j)};
       v${j} = ${update(symmetric, 'v', j)};
-      // |s| = |−(c v + k u)| = |c v + k u| exactly: the sign is only needed when refining.
-      const cs${j} = f64x2.add(f64x2.mul(c${j}, v${j}), f64x2.mul(k${j}, u${j}));
-      const hu${j} = f64x2.gt(f64x2.abs(u${j}), tu${j});
-      const hv${j} = f64x2.gt(f64x2.abs(v${j}), tv${j});
-      const hs${j} = f64x2.gt(f64x2.abs(cs${j}), ts${j});
-      const m${j} = v128.or(v128.or(hu${j}, hv${j}), hs${j});`,
-    '\n',
-    vectors,
-  );
+      const cs${j} = f64x2.add(f64x2.mul(c${j}, v${j}), f64x2.mul(k${j}, u${j}));`;
+// The input of step n: p at its start (pas) and end (pbs), as splats or their sum.
+const input = (symmetric, n) => `      const pbs = load<f64>(input + (<usize>(${n}) << 3));
+      ${symmetric ? 'const sum = f64x2.splat(pas + pbs);' : 'const pa = f64x2.splat(pas);\n      const pb = f64x2.splat(pbs);'}`;
 
-// The rare path of one vector, taken when a lane's new end passes a threshold. Per quantity
-// (u, v, s) and in vector form: the peak becomes max(peak, |new end|) and the threshold follows
-// it, as in kernel.ts; only lanes whose cubic Hermite H may turn inside the step go on to the
-// scalar refinement (hermiteLane). H' is the quadratic f(t) = m0(1 − t) + m1·t − ca·t(1 − t)
-// (ca as in the Hermite below), so with m0 and m1 of one sign f ≥ min(|m0|, |m1|) − |ca|/4 and
-// a root in (0, 1) needs m0·m1 ≤ 0 or |ca| ≥ 4·min(|m0|, |m1|); the test takes 3.5 for rounding
-// to spare, so it is a superset of the steps where the scalar refinement changes anything, and
-// the peaks are those of refinement on every passing step. Most passing steps are a quantity
-// climbing past its running peak, which need no Hermite.
-const quantities = (j) => [
-  {
-    q0: `uo${j}`,
-    q1: `u${j}`,
-    d0: `vo${j}`,
-    d1: `v${j}`,
-    slot: 0,
-    offset: 11,
-    t: `tu${j}`,
-    hit: `hu${j}`,
-    needs: '',
-  },
-  {
-    q0: `vo${j}`,
-    q1: `v${j}`,
-    d0: `ar0`,
-    d1: `ar1`,
-    slot: 1,
-    offset: 12,
-    t: `tv${j}`,
-    hit: `hv${j}`,
-    needs: accelerations(j),
-  },
-  {
-    q0: `so`,
-    q1: `sn`,
-    d0: `js0`,
-    d1: `js1`,
-    slot: 2,
-    offset: 13,
-    t: `ts${j}`,
-    hit: `hs${j}`,
-    needs: accelerations(j) + jerks(j),
-  },
+// Pass 1, one step of every vector: advance and fold |u|, |v|, |s| into the block's maxima. pmax
+// is one instruction (max, unlike f64x2.max, need not order NaNs and zeros: the values are finite
+// magnitudes), and the magnitude is an and with the mask held in a local.
+const scanStep = (symmetric, vectors, n) => `    {
+${input(symmetric, n)}
+${each(
+  (j) => `${advance(symmetric, j)}
+      mu${j} = f64x2.pmax(mu${j}, v128.and(u${j}, magnitude));
+      mv${j} = f64x2.pmax(mv${j}, v128.and(v${j}, magnitude));
+      ms${j} = f64x2.pmax(ms${j}, v128.and(cs${j}, magnitude));`,
+  '\n',
+  vectors,
+)}
+      pas = pbs;
+    }`;
+
+const scan = (name, symmetric, vectors) => `/**
+ * Pass 1 for ${vectors * 2} oscillators: step them over \`steps\` steps through the inputs input[0..steps]
+ * (f64 at byte address \`input\`), continuing from the state at \`state\` (u, v per vector), and for
+ * each block of \`blockSteps\` steps write its checkpoint (u and v at its start, the largest |u|,
+ * |v| and |s| at its steps) to \`checkpoints\`, one block after another.${
+   symmetric
+     ? `
+ * For recurrences whose two forcing coefficients are equal (up0 = up1 and vp0 = vp1, as for Newmark
+ * average acceleration, where both are −βh²/D and −γh/D in exact arithmetic): the forcing is
+ * up1·(p_n + p_{n+1}), two multiplications and two additions fewer per oscillator-step.`
+     : ''
+ }
+ */
+function ${name}(input: usize, steps: i32, blockSteps: i32, coefficients: usize, state: usize, checkpoints: usize): void {
+${loadCoefficients(symmetric, vectors)}
+  const magnitude = v128.load(MAGNITUDE);
+${each((j) => `  let u${j} = v128.load(state, ${j * 32});\n  let v${j} = v128.load(state, ${j * 32 + 16});`, '\n', vectors)}
+  let pas = load<f64>(input);
+  let out = checkpoints;
+  for (let first = 0; first < steps; first += blockSteps) {
+${each(
+  (j) => `    v128.store(out, u${j}, ${j * CHECKPOINT * 16});
+    v128.store(out, v${j}, ${j * CHECKPOINT * 16 + 16});
+    let mu${j} = f64x2.splat(0);
+    let mv${j} = f64x2.splat(0);
+    let ms${j} = f64x2.splat(0);`,
+  '\n',
+  vectors,
+)}
+    const last = min(first + blockSteps, steps);
+    let n = first + 1;
+    for (; n < last; n += 2) {
+${scanStep(symmetric, vectors, 'n')}
+${scanStep(symmetric, vectors, 'n + 1')}
+    }
+    if (n === last) {
+${scanStep(symmetric, vectors, 'n')}
+    }
+${each(
+  (j) => `    v128.store(out, mu${j}, ${j * CHECKPOINT * 16 + 32});
+    v128.store(out, mv${j}, ${j * CHECKPOINT * 16 + 48});
+    v128.store(out, ms${j}, ${j * CHECKPOINT * 16 + 64});`,
+  '\n',
+  vectors,
+)}
+    out += ${vectors * CHECKPOINT * 16};
+  }
+${each((j) => `  v128.store(state, u${j}, ${j * 32});\n  v128.store(state, v${j}, ${j * 32 + 16});`, '\n', vectors)}
+}`;
+
+// Pass 2, per quantity (u, v, s) of the one vector: on a step whose new end passes the threshold,
+// only lanes whose cubic Hermite H may turn inside the step go on to the scalar refinement
+// (hermiteLane). H' is the quadratic f(t) = m0(1 − t) + m1·t − ca·t(1 − t) (ca as in the Hermite
+// below), so with m0 and m1 of one sign f ≥ min(|m0|, |m1|) − |ca|/4 and a root in (0, 1) needs
+// m0·m1 ≤ 0 or |ca| ≥ 4·min(|m0|, |m1|); the test takes 3.5 for rounding to spare, so it is a
+// superset of the steps where the scalar refinement changes anything.
+const quantities = [
+  { q0: 'uo0', q1: 'u0', d0: 'vo0', d1: 'v0', slot: 0, hit: 'hitU', needs: '' },
+  { q0: 'vo0', q1: 'v0', d0: 'ar0', d1: 'ar1', slot: 1, hit: 'hitV', needs: 'accelerations' },
+  { q0: 'so', q1: 'sn', d0: 'js0', d1: 'js1', slot: 2, hit: 'hitS', needs: 'jerks' },
 ];
 // The absolute acceleration s = −(c v + k u) and the relative one (s − p) at both ends of the step.
-const accelerations = (j) => `
-            const so = f64x2.neg(f64x2.add(f64x2.mul(c${j}, vo${j}), f64x2.mul(k${j}, uo${j})));
-            const sn = f64x2.neg(cs${j});
+const accelerations = `
+            const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
+            const sn = f64x2.neg(cs0);
             const ar0 = f64x2.sub(so, f64x2.splat(pas));
             const ar1 = f64x2.sub(sn, f64x2.splat(pbs));`;
 // ds/dt = −c·(s − p) − k·v at both ends.
-const jerks = (j) => `
-            const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar0), f64x2.mul(k${j}, vo${j}));
-            const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c${j}), ar1), f64x2.mul(k${j}, v${j}));`;
-const lane = (j, q, l) => `              if (need & ${1 << l}) {
+const jerks = `${accelerations}
+            const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar0), f64x2.mul(k0, vo0));
+            const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar1), f64x2.mul(k0, v0));`;
+const lane = (q, l) => `              if (need & ${1 << l}) {
                 hermiteLane(
                   f64x2.extract_lane(${q.q0}, ${l}),
                   f64x2.extract_lane(${q.q1}, ${l}),
                   f64x2.extract_lane(${q.d0}, ${l}),
                   f64x2.extract_lane(${q.d1}, ${l}),
                   h,
-                  peaks + ${((j * 3 + q.slot) * 2 + l) * 8},
+                  peaks + ${(q.slot * 2 + l) * 8},
                 );
               }`;
-const refine = (vectors) =>
-  each(
-    (j) => `        if (v128.any_true(m${j})) {
-          const ratio = v128.load(coefficients, ${(j * COEFFICIENT_COUNT + 10) * 16});
-${quantities(j)
+
+const refine = (name, symmetric) => `/**
+ * Pass 2 for the two oscillators of one vector: step them over \`steps\` steps from the state at
+ * \`start\` (u, v: a block's checkpoint) and fold the Hermite peaks of the steps whose new end passes
+ * the thresholds at \`thresholds\` (|u|, |v|, |s|) into \`peaks\`. The step is pass 1's, so the
+ * states are the same bits.
+ */
+function ${name}(input: usize, steps: i32, h: f64, coefficients: usize, start: usize, thresholds: usize, peaks: usize): void {
+${loadCoefficients(symmetric, 1)}
+  const magnitude = v128.load(MAGNITUDE);
+  let u0 = v128.load(start, 0);
+  let v0 = v128.load(start, 16);
+  const tu = v128.load(thresholds, 0);
+  const tv = v128.load(thresholds, 16);
+  const ts = v128.load(thresholds, 32);
+  const hv = f64x2.splat(h);
+  const zero = f64x2.splat(0);
+  const three = f64x2.splat(3);
+  const six = f64x2.splat(6);
+  const bend = f64x2.splat(3.5);
+  let pas = load<f64>(input);
+  for (let n = 1; n <= steps; n++) {
+${input(symmetric, 'n')}
+${advance(symmetric, 0)}
+    const hitU = f64x2.gt(v128.and(u0, magnitude), tu);
+    const hitV = f64x2.gt(v128.and(v0, magnitude), tv);
+    const hitS = f64x2.gt(v128.and(cs0, magnitude), ts);
+    if (v128.any_true(v128.or(v128.or(hitU, hitV), hitS))) {
+${quantities
   .map(
-    (q) => `          if (v128.any_true(${q.hit})) {
-            const hit = ${q.hit};${q.needs}
-            const end = f64x2.abs(${q.q1});
-            {
-              const peak = f64x2.max(v128.load(peaks, ${(j * 3 + q.slot) * 16}), end);
-              v128.store(peaks, peak, ${(j * 3 + q.slot) * 16});
-              const m0 = f64x2.mul(${q.d0}, hv);
-              const m1 = f64x2.mul(${q.d1}, hv);
-              const ca = f64x2.add(
-                f64x2.mul(six, f64x2.sub(${q.q0}, ${q.q1})),
-                f64x2.mul(three, f64x2.add(m0, m1)),
-              );
-              const turns = v128.or(
-                f64x2.le(f64x2.mul(m0, m1), zero),
-                f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
-              );
-              const need = i64x2.bitmask(v128.and(hit, turns));
-              let refined = peak;
-              if (need !== 0) {
-${lane(j, q, 0)}
-${lane(j, q, 1)}
-                refined = v128.load(peaks, ${(j * 3 + q.slot) * 16});
-              }
-              const threshold = f64x2.sub(
-                f64x2.mul(refined, ratio),
-                v128.load(coefficients, ${(j * COEFFICIENT_COUNT + q.offset) * 16}),
-              );
-              ${q.t} = v128.bitselect(threshold, ${q.t}, hit);
+    (
+      q,
+    ) => `      if (v128.any_true(${q.hit})) {${q.needs === 'accelerations' ? accelerations : q.needs === 'jerks' ? jerks : ''}
+            const m0 = f64x2.mul(${q.d0}, hv);
+            const m1 = f64x2.mul(${q.d1}, hv);
+            const ca = f64x2.add(
+              f64x2.mul(six, f64x2.sub(${q.q0}, ${q.q1})),
+              f64x2.mul(three, f64x2.add(m0, m1)),
+            );
+            const turns = v128.or(
+              f64x2.le(f64x2.mul(m0, m1), zero),
+              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
+            );
+            const need = i64x2.bitmask(v128.and(${q.hit}, turns));
+            if (need !== 0) {
+${lane(q, 0)}
+${lane(q, 1)}
             }
-          }`,
+      }`,
   )
   .join('\n')}
-        }`,
-    '\n',
-    vectors,
-  );
+    }
+    pas = pbs;
+  }
+}`;
 
 const hermite = (target, q0, q1, d0, d1) => `{
     const m0 = (${d0}) * h;
@@ -191,52 +238,10 @@ const hermite = (target, q0, q1, d0, d1) => `{
     }
   }`;
 
-const kernel = (name, symmetric, vectors) => `/**
- * Step ${vectors * 2} oscillators over \`steps\` steps of length \`h\` through the ground accelerations
- * input[0..steps] (f64 at byte address \`input\`), continuing from \`state\` and updating \`peaks\`.${
-   symmetric
-     ? `
- * For recurrences whose two forcing coefficients are equal (up0 = up1 and vp0 = vp1, as for Newmark
- * average acceleration, where both are −βh²/D and −γh/D in exact arithmetic): the forcing is
- * up1·(p_n + p_{n+1}), two multiplications and two additions fewer per oscillator-step.`
-     : ''
- }
- */
-function ${name}(input: usize, steps: i32, h: f64, coefficients: usize, state: usize, peaks: usize): void {
-${each(
-  (j) =>
-    hotNames(symmetric)
-      .map(
-        (n) =>
-          `  const ${n}${j} = v128.load(coefficients, ${(j * COEFFICIENT_COUNT + names.indexOf(n)) * 16});`,
-      )
-      .join('\n'),
-  '\n',
-  vectors,
-)}
-${each((j) => stateNames.map((n, q) => `  let ${n}${j} = v128.load(state, ${(j * stateNames.length + q) * 16});`).join('\n'), '\n', vectors)}
-  const hv = f64x2.splat(h);
-  const zero = f64x2.splat(0);
-  const three = f64x2.splat(3);
-  const six = f64x2.splat(6);
-  const bend = f64x2.splat(3.5);
-  let pas = load<f64>(input);${symmetric ? '' : '\n  let pa = f64x2.splat(pas);'}
-  for (let n = 1; n <= steps; n++) {
-    const pbs = load<f64>(input + (<usize>n << 3));
-    ${symmetric ? 'const sum = f64x2.splat(pas + pbs);' : 'const pb = f64x2.splat(pbs);'}
-${step(symmetric, vectors)}
-    if (v128.any_true(${anyMask(vectors)})) {
-${refine(vectors)}
-    }
-    pas = pbs;${symmetric ? '' : '\n    pa = pb;'}
-  }
-${each((j) => stateNames.map((n, q) => `  v128.store(state, ${n}${j}, ${(j * stateNames.length + q) * 16});`).join('\n'), '\n', vectors)}
-}`;
-
 const source = `// Generated by scripts/generate-wasm-kernel.mjs; edit the generator, not this file.
 // The WebAssembly SIMD twin of src/oscillator/kernel.ts: see that file and sweep.ts for the
-// recurrence (recurrence.ts), the refinement thresholds and the cubic Hermite peak (peak.ts).
-// Compiled by scripts/build-wasm.mjs with \`asc --enable simd\`.
+// recurrence (recurrence.ts), the two passes, the refinement thresholds and the cubic Hermite
+// peak (peak.ts). Compiled by scripts/build-wasm.mjs with \`asc --enable simd\`.
 
 /** Oscillators per pass: ${VECTORS} vectors of two f64 lanes. */
 export const WIDTH: i32 = ${VECTORS * 2};
@@ -244,11 +249,17 @@ export const WIDTH: i32 = ${VECTORS * 2};
 /**
  * Layout of the packed arrays (all f64, vector-interleaved: quantity q of oscillator i is at
  * ((i >> 1) · count + q) · 2 + (i & 1)): coefficients ${COEFFICIENT_COUNT} per oscillator (uu, uv, up0, up1,
- * vu, vv, vp0, vp1, c, k, r, du, dv, ds), state 5 (u, v, tu, tv, ts), peaks 3 (|u|, |v|, |s|).
+ * vu, vv, vp0, vp1, c, k, r, du, dv, ds), peaks 3 (|u|, |v|, |s|). The state area holds u and v
+ * per vector, then the thresholds 3 per oscillator; a checkpoint ${CHECKPOINT} per oscillator (u and v at its
+ * block's start, the block's |u|, |v| and |s| maxima), block after block, vector after vector.
  */
 export const COEFFICIENTS: i32 = ${COEFFICIENT_COUNT};
-export const STATES: i32 = ${stateNames.length};
+export const STATES: i32 = 5;
 export const PEAKS: i32 = 3;
+export const CHECKPOINT: i32 = ${CHECKPOINT};
+
+/** The sign-clearing mask of |x| for both lanes, held in a local by the loops. */
+const MAGNITUDE = memory.data<i64>([i64.MAX_VALUE, i64.MAX_VALUE], 16);
 
 /** First free byte of linear memory: the caller lays out its arrays from here. */
 export function heapBase(): usize {
@@ -266,8 +277,8 @@ function hermiteAt(peak: f64, qa: f64, qb: f64, m0: f64, m1: f64, t: f64): f64 {
 }
 
 /**
- * The scalar end of the rare path: the cubic Hermite peak of |q| inside one step (q and its
- * derivative at both ends), folded into the peak at \`peak\` (the refinement of kernel.ts).
+ * The scalar end of pass 2: the cubic Hermite peak of |q| inside one step (q and its derivative
+ * at both ends), folded into the peak at \`peak\` (the refinement of kernel.ts).
  */
 function hermiteLane(qa0: f64, qb0: f64, d0: f64, d1: f64, h: f64, peak: usize): void {
   let p = load<f64>(peak);
@@ -275,27 +286,66 @@ function hermiteLane(qa0: f64, qb0: f64, d0: f64, d1: f64, h: f64, peak: usize):
   store<f64>(peak, p);
 }
 
-${kernel('sweepBlock', false, VECTORS)}
+${scan('scanBlocks', false, VECTORS)}
 
-${kernel('sweepBlockSymmetric', true, VECTORS)}
+${scan('scanBlocksSymmetric', true, VECTORS)}
 
-${kernel('sweepBlockNarrow', false, 1)}
+${scan('scanBlocksNarrow', false, 1)}
 
-${kernel('sweepBlockSymmetricNarrow', true, 1)}
+${scan('scanBlocksSymmetricNarrow', true, 1)}
 
-/** One block with the kernel for the recurrence (bit 0: symmetric) and pass width (bit 1: narrow). */
-function sweep(kind: i32, input: usize, steps: i32, h: f64, coefficients: usize, state: usize, peaks: usize): void {
-  if (kind === 0) sweepBlock(input, steps, h, coefficients, state, peaks);
-  else if (kind === 1) sweepBlockSymmetric(input, steps, h, coefficients, state, peaks);
-  else if (kind === 2) sweepBlockNarrow(input, steps, h, coefficients, state, peaks);
-  else sweepBlockSymmetricNarrow(input, steps, h, coefficients, state, peaks);
+${refine('refineVector', false)}
+
+${refine('refineVectorSymmetric', true)}
+
+/** Pass 1 over one stretch of inputs with the kernel for the recurrence and the pass width. */
+function scanStretch(
+  symmetric: i32,
+  vectors: i32,
+  input: usize,
+  steps: i32,
+  blockSteps: i32,
+  coefficients: usize,
+  state: usize,
+  checkpoints: usize,
+): void {
+  if (vectors === ${VECTORS}) {
+    if (symmetric) scanBlocksSymmetric(input, steps, blockSteps, coefficients, state, checkpoints);
+    else scanBlocks(input, steps, blockSteps, coefficients, state, checkpoints);
+  } else if (symmetric) scanBlocksSymmetricNarrow(input, steps, blockSteps, coefficients, state, checkpoints);
+  else scanBlocksNarrow(input, steps, blockSteps, coefficients, state, checkpoints);
 }
 
 /**
- * Step one packed group over a whole record of \`samples\` values at byte address \`record\`, from
- * the state given: directly over the samples when \`substeps\` is 1, otherwise over blocks of
- * \`blockSteps\` linearly interpolated sub-step inputs built in \`buffer\` (the arithmetic of runGroup
- * in sweep.ts). \`narrow\` steps only the first vector (two oscillators), for small groups.
+ * The input of global step index first + j, for j = 0..steps, into \`buffer\`: the record itself
+ * when there is one step per sample, otherwise its linear interpolation at \`substeps\` points per
+ * sample interval (the arithmetic of stepInputs in sweep.ts, so both passes see the same bits).
+ */
+function stepInputs(record: usize, substeps: i32, first: i32, steps: i32, buffer: usize): usize {
+  if (substeps === 1) return record + (<usize>first << 3);
+  const fraction = 1 / <f64>substeps;
+  let s = first / substeps;
+  let w = first - s * substeps;
+  for (let j = 0; j <= steps; j++) {
+    const a = load<f64>(record + (<usize>s << 3));
+    store<f64>(
+      buffer + (<usize>j << 3),
+      w === 0 ? a : a + (load<f64>(record + (<usize>s << 3), 8) - a) * (<f64>w * fraction),
+    );
+    if (++w === substeps) {
+      w = 0;
+      s++;
+    }
+  }
+  return buffer;
+}
+
+/**
+ * Step one packed group over a whole record of \`samples\` values at byte address \`record\` from
+ * rest and write its peaks: with \`substeps\` steps of \`h\` per sample interval (linearly
+ * interpolated inputs, built \`chunkSteps\` at a time in \`buffer\`), checkpoints every
+ * \`blockSteps\` steps (a power of two dividing \`chunkSteps\`) at \`checkpoints\`. \`narrow\` steps
+ * only the first vector (two oscillators), for small groups.
  */
 export function runGroup(
   record: usize,
@@ -306,43 +356,60 @@ export function runGroup(
   state: usize,
   peaks: usize,
   buffer: usize,
+  chunkSteps: i32,
   blockSteps: i32,
+  checkpoints: usize,
   symmetric: i32,
   narrow: i32,
 ): void {
-  const kind = (symmetric ? 1 : 0) | (narrow ? 2 : 0);
-  const intervals = samples - 1;
-  if (substeps === 1) {
-    // Blocks here too, so that the engine's optimizing tier takes over between calls.
-    for (let first = 0; first < intervals; first += blockSteps) {
-      const steps = min(blockSteps, intervals - first);
-      const input = record + (<usize>first << 3);
-      sweep(kind, input, steps, h, coefficients, state, peaks);
-    }
-    return;
+  const vectors = narrow ? 1 : ${VECTORS};
+  const total = (samples - 1) * substeps;
+  const blocks = (total + blockSteps - 1) / blockSteps;
+  const stride = <usize>(vectors * ${CHECKPOINT * 16});
+  memory.fill(state, 0, ${VECTORS * 32});
+  // Pass 1, in stretches of chunkSteps so that the engine's optimizing tier takes over between
+  // calls (and the interpolated inputs fit in the buffer).
+  for (let first = 0; first < total; first += chunkSteps) {
+    const steps = min(chunkSteps, total - first);
+    const input = stepInputs(record, substeps, first, steps, buffer);
+    const at = checkpoints + <usize>(first / blockSteps) * stride;
+    scanStretch(symmetric, vectors, input, steps, blockSteps, coefficients, state, at);
   }
-  const total = intervals * substeps;
-  const fraction = 1 / <f64>substeps;
-  let sample = 0;
-  let within = 0;
-  for (let first = 0; first < total; first += blockSteps) {
-    const steps = min(blockSteps, total - first);
-    let s = sample;
-    let w = within;
-    for (let j = 0; j <= steps; j++) {
-      const a = load<f64>(record + (<usize>s << 3));
-      store<f64>(
-        buffer + (<usize>j << 3),
-        w === 0 ? a : a + (load<f64>(record + (<usize>s << 3), 8) - a) * (<f64>w * fraction),
-      );
-      if (++w === substeps) {
-        w = 0;
-        s++;
+  // The sample peaks P, and the thresholds P·r − d.
+  const thresholds = state + ${VECTORS * 32};
+  for (let j = 0; j < vectors; j++) {
+    const ratio = v128.load(coefficients + <usize>((j * ${COEFFICIENT_COUNT} + 10) * 16));
+    for (let q = 0; q < 3; q++) {
+      let peak = f64x2.splat(0);
+      for (let b = 0; b < blocks; b++) {
+        peak = f64x2.pmax(peak, v128.load(checkpoints + <usize>b * stride + <usize>((j * ${CHECKPOINT} + 2 + q) * 16)));
       }
+      v128.store(peaks + <usize>((j * 3 + q) * 16), peak);
+      const offset = v128.load(coefficients + <usize>((j * ${COEFFICIENT_COUNT} + 11 + q) * 16));
+      v128.store(thresholds + <usize>((j * 3 + q) * 16), f64x2.sub(f64x2.mul(peak, ratio), offset));
     }
-    sample = (first + steps) / substeps;
-    within = first + steps - sample * substeps;
-    sweep(kind, buffer, steps, h, coefficients, state, peaks);
+  }
+  // Pass 2: the blocks where some lane's largest value passes its threshold, vector by vector.
+  for (let b = 0; b < blocks; b++) {
+    for (let j = 0; j < vectors; j++) {
+      const checkpoint = checkpoints + <usize>b * stride + <usize>(j * ${CHECKPOINT * 16});
+      const limits = thresholds + <usize>(j * 48);
+      const passes = v128.or(
+        v128.or(
+          f64x2.gt(v128.load(checkpoint, 32), v128.load(limits, 0)),
+          f64x2.gt(v128.load(checkpoint, 48), v128.load(limits, 16)),
+        ),
+        f64x2.gt(v128.load(checkpoint, 64), v128.load(limits, 32)),
+      );
+      if (!v128.any_true(passes)) continue;
+      const first = b * blockSteps;
+      const steps = min(blockSteps, total - first);
+      const input = stepInputs(record, substeps, first, steps, buffer);
+      const vector = coefficients + <usize>(j * ${COEFFICIENT_COUNT * 16});
+      const out = peaks + <usize>(j * 48);
+      if (symmetric) refineVectorSymmetric(input, steps, h, vector, checkpoint, limits, out);
+      else refineVector(input, steps, h, vector, checkpoint, limits, out);
+    }
   }
 }
 

@@ -1,5 +1,13 @@
 import { inputError } from '../errors.js';
-import { COEFFICIENT_STRIDE, GROUP_WIDTH, PEAK_STRIDE, STATE_STRIDE, sweepBlock } from './kernel.js';
+import {
+  CHECKPOINT_STRIDE,
+  COEFFICIENT_STRIDE,
+  GROUP_WIDTH,
+  PEAK_STRIDE,
+  refineBlock,
+  STATE_STRIDE,
+  scanBlocks,
+} from './kernel.js';
 import { executedStepCoefficients, executionPlan, type Method, substepCount } from './recurrence.js';
 import { WASM_WIDTH, WasmSweeper, wasmSimdSupported } from './wasm/kernel.js';
 
@@ -201,22 +209,30 @@ export function groupRunner(
     }
   };
   if (resolveKernel(kernel) === 'wasm') {
-    const sweeper = new WasmSweeper(accelMS2, BLOCK_STEPS);
+    const sweeper = new WasmSweeper(accelMS2, STRETCH_STEPS);
     return (group) => {
       // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),
       // unless sub-steps are composed.
       const symmetric = plan.method === 'newmark-average' && group.every((o) => o.composed === 1);
       const stepS = dtS / group[0].substeps;
       pack(group, stepS);
-      sweeper.run(packed, COEFFICIENT_STRIDE, group.length, group[0].substeps, stepS, symmetric, values);
+      const blockSteps = checkpointBlockSteps((accelMS2.length - 1) * group[0].substeps);
+      sweeper.run(
+        packed,
+        COEFFICIENT_STRIDE,
+        group.length,
+        group[0].substeps,
+        stepS,
+        blockSteps,
+        symmetric,
+        values,
+      );
       return values;
     };
   }
   warmKernel();
   const coefficients = new Float64Array(GROUP_WIDTH * COEFFICIENT_STRIDE);
-  const state = new Float64Array(GROUP_WIDTH * STATE_STRIDE);
-  const peaks = new Float64Array(GROUP_WIDTH * PEAK_STRIDE);
-  const buffer = new Float64Array(BLOCK_STEPS + 1);
+  const scratch = groupScratch();
   return (group) => {
     const substeps = group[0].substeps;
     const stepS = dtS / substeps;
@@ -227,10 +243,8 @@ export function groupRunner(
         const from = (first + Math.min(g, count - 1)) * COEFFICIENT_STRIDE;
         coefficients.set(packed.subarray(from, from + COEFFICIENT_STRIDE), g * COEFFICIENT_STRIDE);
       }
-      state.fill(0);
-      peaks.fill(0);
-      runGroup(accelMS2, substeps, stepS, coefficients, state, peaks, buffer);
-      values.set(peaks.subarray(0, count * PEAK_STRIDE), first * PEAK_STRIDE);
+      runGroup(accelMS2, substeps, stepS, coefficients, scratch);
+      values.set(scratch.peaks.subarray(0, count * PEAK_STRIDE), first * PEAK_STRIDE);
     }
     return values;
   };
@@ -257,8 +271,7 @@ function warmKernel(): void {
   }
   const bounds = groundBounds(chirp, dtS);
   const coefficients = new Float64Array(GROUP_WIDTH * COEFFICIENT_STRIDE);
-  const state = new Float64Array(GROUP_WIDTH * STATE_STRIDE);
-  const peaks = new Float64Array(GROUP_WIDTH * PEAK_STRIDE);
+  const scratch = groupScratch();
   const lanes = [
     { periodS: 0.3, damping: 0 },
     { periodS: 1, damping: 0.05 },
@@ -270,56 +283,123 @@ function warmKernel(): void {
       for (let g = 0; g < GROUP_WIDTH; g++) {
         packCoefficients(coefficients, g, lanes[(g + shift) % lanes.length], method, dtS, bounds);
       }
-      state.fill(0);
-      peaks.fill(0);
-      sweepBlock(chirp, n, dtS, coefficients, state, peaks);
+      // Every step refined, so that each lane takes every path of refineBlock.
+      runGroup(chirp, 1, dtS, coefficients, scratch, true);
     }
   }
 }
 
-/** Sub-steps per block: the interpolated input of a sub-stepped group is built a block at a time. */
-export const BLOCK_STEPS = 8192;
+/** Steps of pass 1 per call: the interpolated input of a sub-stepped group is built this many at a time. */
+export const STRETCH_STEPS = 8192;
+
+/** Checkpoint blocks a group's pass 1 keeps at most, unless its blocks would outgrow a stretch. */
+const MAX_BLOCKS = 16384;
 
 /**
- * Step one packed group over the whole record from rest: directly over the samples when there is
- * one step per sample, otherwise over blocks of linearly interpolated sub-step inputs.
+ * Steps per checkpoint block for a group that takes `totalSteps` steps: a power of two from 64 (a
+ * block's checkpoint costs a few stores; pass 2 steps whole blocks again) up to STRETCH_STEPS,
+ * doubled while the blocks would be more than MAX_BLOCKS, so that their memory stays bounded.
+ */
+export function checkpointBlockSteps(totalSteps: number): number {
+  let blockSteps = 64;
+  while (blockSteps < STRETCH_STEPS && Math.ceil(totalSteps / blockSteps) > MAX_BLOCKS) blockSteps *= 2;
+  return blockSteps;
+}
+
+/**
+ * The inputs of global steps first..first + steps of a group with `substeps` steps per sample
+ * interval: the record itself when there is one, otherwise its linear interpolation, written into
+ * `buffer`. Both passes take their inputs from here, so they see the same bits (the WebAssembly
+ * kernel's stepInputs is the same arithmetic).
+ */
+function stepInputs(
+  accelMS2: Float64Array,
+  substeps: number,
+  first: number,
+  steps: number,
+  buffer: Float64Array,
+): Float64Array {
+  if (substeps === 1) return accelMS2.subarray(first, first + steps + 1);
+  const fraction = 1 / substeps;
+  let s = Math.floor(first / substeps);
+  let w = first - s * substeps;
+  for (let j = 0; j <= steps; j++) {
+    buffer[j] = w === 0 ? accelMS2[s] : accelMS2[s] + (accelMS2[s + 1] - accelMS2[s]) * (w * fraction);
+    if (++w === substeps) {
+      w = 0;
+      s++;
+    }
+  }
+  return buffer;
+}
+
+/** Working arrays of the TypeScript kernel for one group; the checkpoints grow on demand. */
+interface GroupScratch {
+  state: Float64Array;
+  peaks: Float64Array;
+  thresholds: Float64Array;
+  buffer: Float64Array;
+  checkpoints: Float64Array;
+}
+
+function groupScratch(): GroupScratch {
+  return {
+    state: new Float64Array(GROUP_WIDTH * STATE_STRIDE),
+    peaks: new Float64Array(GROUP_WIDTH * PEAK_STRIDE),
+    thresholds: new Float64Array(GROUP_WIDTH * PEAK_STRIDE),
+    buffer: new Float64Array(STRETCH_STEPS + 1),
+    checkpoints: new Float64Array(0),
+  };
+}
+
+/**
+ * Step one packed group over the whole record from rest and leave its peaks in `scratch.peaks`
+ * (the two passes of kernel.ts). `everyBlock` refines every step of every block, for the warm-up.
  */
 function runGroup(
   accelMS2: Float64Array,
   substeps: number,
   stepS: number,
   coefficients: Float64Array,
-  state: Float64Array,
-  peaks: Float64Array,
-  buffer: Float64Array,
+  scratch: GroupScratch,
+  everyBlock = false,
 ): void {
-  const intervals = accelMS2.length - 1;
-  if (substeps === 1) {
-    for (let first = 0; first < intervals; first += BLOCK_STEPS) {
-      const steps = Math.min(BLOCK_STEPS, intervals - first);
-      sweepBlock(accelMS2.subarray(first, first + steps + 1), steps, stepS, coefficients, state, peaks);
-    }
-    return;
+  const total = (accelMS2.length - 1) * substeps;
+  const blockSteps = checkpointBlockSteps(total);
+  const blocks = Math.ceil(total / blockSteps);
+  const stride = GROUP_WIDTH * CHECKPOINT_STRIDE;
+  if (scratch.checkpoints.length < blocks * stride) scratch.checkpoints = new Float64Array(blocks * stride);
+  const { state, peaks, thresholds, buffer, checkpoints } = scratch;
+  state.fill(0);
+  for (let first = 0; first < total; first += STRETCH_STEPS) {
+    const steps = Math.min(STRETCH_STEPS, total - first);
+    const input = stepInputs(accelMS2, substeps, first, steps, buffer);
+    scanBlocks(input, steps, blockSteps, coefficients, state, checkpoints, (first / blockSteps) * stride);
   }
-  const total = intervals * substeps;
-  const fraction = 1 / substeps;
-  let sample = 0;
-  let within = 0;
-  for (let first = 0; first < total; first += BLOCK_STEPS) {
-    const steps = Math.min(BLOCK_STEPS, total - first);
-    // buffer[0] repeats the last value of the previous block; walk (sample, within) onwards.
-    let s = sample;
-    let w = within;
-    for (let j = 0; j <= steps; j++) {
-      buffer[j] = w === 0 ? accelMS2[s] : accelMS2[s] + (accelMS2[s + 1] - accelMS2[s]) * (w * fraction);
-      if (++w === substeps) {
-        w = 0;
-        s++;
+  for (let g = 0; g < GROUP_WIDTH; g++) {
+    for (let q = 0; q < PEAK_STRIDE; q++) {
+      let peak = 0;
+      for (let b = 0; b < blocks; b++)
+        peak = Math.max(peak, checkpoints[b * stride + g * CHECKPOINT_STRIDE + 2 + q]);
+      const o = g * COEFFICIENT_STRIDE;
+      peaks[g * PEAK_STRIDE + q] = peak;
+      thresholds[g * PEAK_STRIDE + q] = peak * coefficients[o + 10] - coefficients[o + 11 + q];
+    }
+  }
+  if (everyBlock) thresholds.fill(-1);
+  for (let b = 0; b < blocks; b++) {
+    let passes = everyBlock;
+    for (let g = 0; g < GROUP_WIDTH && !passes; g++) {
+      for (let q = 0; q < PEAK_STRIDE; q++) {
+        if (checkpoints[b * stride + g * CHECKPOINT_STRIDE + 2 + q] > thresholds[g * PEAK_STRIDE + q])
+          passes = true;
       }
     }
-    sample = Math.floor((first + steps) / substeps);
-    within = first + steps - sample * substeps;
-    sweepBlock(buffer, steps, stepS, coefficients, state, peaks);
+    if (!passes) continue;
+    const first = b * blockSteps;
+    const steps = Math.min(blockSteps, total - first);
+    const input = stepInputs(accelMS2, substeps, first, steps, buffer);
+    refineBlock(input, steps, stepS, coefficients, checkpoints, b * stride, thresholds, peaks);
   }
 }
 

@@ -9,6 +9,7 @@ import {
   substepCount,
 } from '../../src/oscillator/recurrence.js';
 import {
+  checkpointBlockSteps,
   groundBounds,
   recordRoughness,
   recordStatistics,
@@ -79,8 +80,15 @@ describe('sweepOscillators', () => {
     const record = testRecord(5, 0.02, 12);
     const periods = [0.01, 0.037, 0.12, 0.5, 2.2, 9];
     const dampings = [0, 0.05, 0.5];
-    for (const method of ['newmark-average', 'newmark-linear', 'piecewise-exact'] as const) {
-      const peaks = sweepOscillators(record.accelMS2, record.dtS, { periodsS: periods, dampings, method });
+    for (const [method, kernel] of [
+      ['newmark-average', 'wasm'],
+      ['newmark-linear', 'wasm'],
+      ['piecewise-exact', 'wasm'],
+      ['newmark-average', 'js'],
+      ['piecewise-exact', 'js'],
+    ] as const) {
+      const options = { periodsS: periods, dampings, method, kernel };
+      const peaks = sweepOscillators(record.accelMS2, record.dtS, options);
       dampings.forEach((zeta, d) => {
         periods.forEach((t, p) => {
           const i = d * periods.length + p;
@@ -90,6 +98,30 @@ describe('sweepOscillators', () => {
           expect(peaks.saMS2[i] / s).toBeCloseTo(1, 12);
         });
       });
+    }
+  });
+
+  it('keeps checkpoint blocks of 64 steps up to 16,384 blocks, then doubles them up to 8,192 steps', () => {
+    expect(checkpointBlockSteps(40_000)).toBe(64);
+    expect(checkpointBlockSteps(64 * 16_384)).toBe(64);
+    expect(checkpointBlockSteps(64 * 16_384 + 1)).toBe(128);
+    expect(checkpointBlockSteps(2e9)).toBe(8192);
+  });
+
+  it('skips no peak that refinement on every step would find when the blocks are longer', () => {
+    // T = 0.01 s on a 0.02 s record executes 20 steps a sample: 1.2 million steps in all, so the
+    // checkpoints are kept every 128 steps rather than 64.
+    const record = testRecord(9, 0.02, 1200);
+    const total = (record.accelMS2.length - 1) * 20;
+    expect(checkpointBlockSteps(total)).toBe(128);
+    const [u, v, s] = bruteForcePeaks(record.accelMS2, record.dtS, 0.01, 0.05, 'piecewise-exact');
+    for (const kernel of ['wasm', 'js'] as const) {
+      const options = { periodsS: [0.01], dampings: [0.05], method: 'piecewise-exact', kernel } as const;
+      const peaks = sweepOscillators(record.accelMS2, record.dtS, options);
+      expect(peaks.oscillatorSteps).toBe(total);
+      expect(peaks.sdM[0] / u).toBeCloseTo(1, 12);
+      expect(peaks.svMS[0] / v).toBeCloseTo(1, 12);
+      expect(peaks.saMS2[0] / s).toBeCloseTo(1, 12);
     }
   });
 

@@ -61,6 +61,8 @@ export const WASM_WIDTH = 4;
 const COEFFICIENTS = 14;
 const STATES = 5;
 const PEAKS = 3;
+/** Values per oscillator in a checkpoint of pass 1 (see assembly/sweep.ts). */
+const CHECKPOINT = 5;
 
 interface SweepExports {
   memory: WebAssembly.Memory;
@@ -74,7 +76,9 @@ interface SweepExports {
     state: number,
     peaks: number,
     buffer: number,
+    chunkSteps: number,
     blockSteps: number,
+    checkpoints: number,
     symmetric: number,
     narrow: number,
   ): void;
@@ -115,19 +119,21 @@ function sweepModule(): WebAssembly.Module {
 export class WasmSweeper {
   private readonly exports: SweepExports;
   private readonly samples: number;
-  private readonly blockSteps: number;
+  private readonly chunkSteps: number;
   private readonly coefficients: number;
   private readonly state: number;
   private readonly peaks: number;
   private readonly buffer: number;
   private readonly record: number;
-  private readonly view: Float64Array;
+  /** Pass 1's checkpoints, at the end of memory, which grows when a group needs more. */
+  private readonly checkpoints: number;
+  private view: Float64Array;
 
-  constructor(accelMS2: Float64Array, blockSteps: number) {
+  constructor(accelMS2: Float64Array, chunkSteps: number) {
     const instance = new WebAssembly.Instance(sweepModule(), {});
     this.exports = instance.exports as unknown as SweepExports;
     this.samples = accelMS2.length;
-    this.blockSteps = blockSteps;
+    this.chunkSteps = chunkSteps;
     const align = (bytes: number) => Math.ceil(bytes / 16) * 16;
     let next = this.exports.heapBase();
     const take = (bytes: number) => {
@@ -138,20 +144,29 @@ export class WasmSweeper {
     this.coefficients = take(WASM_WIDTH * COEFFICIENTS * 8);
     this.state = take(WASM_WIDTH * STATES * 8);
     this.peaks = take(WASM_WIDTH * PEAKS * 8);
-    this.buffer = take((blockSteps + 1) * 8);
+    this.buffer = take((chunkSteps + 1) * 8);
     // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
     this.record = take(accelMS2.length * 8 + 16);
-    const memory = this.exports.memory;
-    const pages = Math.ceil(next / 65536) - memory.buffer.byteLength / 65536;
-    if (pages > 0) memory.grow(pages);
-    this.view = new Float64Array(memory.buffer);
+    this.checkpoints = next;
+    this.view = this.reserve(0);
     this.view.set(accelMS2, this.record / 8);
+  }
+
+  /** Grow memory to hold `bytes` of checkpoints, and return a view of all of it. */
+  private reserve(bytes: number): Float64Array {
+    const memory = this.exports.memory;
+    const pages = Math.ceil((this.checkpoints + bytes) / 65536) - memory.buffer.byteLength / 65536;
+    if (pages > 0 || this.view === undefined) {
+      if (pages > 0) memory.grow(pages);
+      this.view = new Float64Array(memory.buffer);
+    }
+    return this.view;
   }
 
   /**
    * Step `count` (≤ WASM_WIDTH) oscillators from rest over the record with `substeps` sub-steps of
-   * `stepS`; `packed` holds their coefficients at COEFFICIENT_STRIDE `stride`, and their peaks
-   * are written to `out` at PEAK_STRIDE (3) per oscillator.
+   * `stepS` and checkpoints every `blockSteps` steps; `packed` holds their coefficients at
+   * COEFFICIENT_STRIDE `stride`, and their peaks are written to `out` at PEAK_STRIDE (3) per oscillator.
    */
   run(
     packed: Float64Array,
@@ -159,18 +174,18 @@ export class WasmSweeper {
     count: number,
     substeps: number,
     stepS: number,
+    blockSteps: number,
     symmetric: boolean,
     out: Float64Array,
   ) {
-    const view = this.view;
+    const blocks = Math.ceil(((this.samples - 1) * substeps) / blockSteps);
+    const view = this.reserve(blocks * WASM_WIDTH * CHECKPOINT * 8);
     const c = this.coefficients / 8;
     for (let i = 0; i < WASM_WIDTH; i++) {
       const from = Math.min(i, count - 1) * stride;
       const lane = (i >> 1) * COEFFICIENTS * 2 + (i & 1);
       for (let q = 0; q < COEFFICIENTS; q++) view[c + lane + 2 * q] = packed[from + q];
     }
-    view.fill(0, this.state / 8, this.state / 8 + WASM_WIDTH * STATES);
-    view.fill(0, this.peaks / 8, this.peaks / 8 + WASM_WIDTH * PEAKS);
     this.exports.runGroup(
       this.record,
       this.samples,
@@ -180,7 +195,9 @@ export class WasmSweeper {
       this.state,
       this.peaks,
       this.buffer,
-      this.blockSteps,
+      this.chunkSteps,
+      blockSteps,
+      this.checkpoints,
       symmetric ? 1 : 0,
       // A group of one or two oscillators fills one vector: step that one only.
       count <= 2 ? 1 : 0,
