@@ -2,6 +2,10 @@
 // thread's plan), it claims groups from the shared counter until none is left, and says so.
 import { parentPort } from 'node:worker_threads';
 import { runClaimedGroups, type SharedSweepJob } from './parallel.js';
+import { warmSweep } from './sweep.js';
+
+// Compile the kernels while the calling thread still reads or plans (messages wait meanwhile).
+warmSweep();
 
 parentPort?.on('message', ({ id, job }: { id: number; job: SharedSweepJob }) => {
   try {

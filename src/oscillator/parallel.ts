@@ -119,9 +119,16 @@ export class SweepPool {
     this.pending.clear();
   }
 
-  /** The peaks of sweepOscillators, bit for bit, computed by all the pool's threads. */
-  async sweep(accelMS2: Float64Array, dtS: number, options: SweepOptions): Promise<Peaks> {
-    const plan = planSweep(accelMS2, dtS, options);
+  /**
+   * The peaks of sweepOscillators, bit for bit, computed by all the pool's threads (`plan`, when
+   * given, is planSweep's for the same record and options).
+   */
+  async sweep(
+    accelMS2: Float64Array,
+    dtS: number,
+    options: SweepOptions,
+    plan: SweepPlan = planSweep(accelMS2, dtS, options),
+  ): Promise<Peaks> {
     const peaks = emptyPeaks(plan);
     const count = plan.periodsS.length * plan.dampings.length;
     // Costliest groups first, so that the last groups claimed are short ones.

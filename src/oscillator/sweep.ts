@@ -85,10 +85,15 @@ export const GROUP_SIZE = WASM_WIDTH;
  * (m/s², step dtS, linearly interpolated between samples, from rest) and return their peaks.
  * Oscillators with the same sub-step count are stepped four at a time in one pass (two f64x2
  * vectors in the WebAssembly SIMD kernel, four locals in the TypeScript one; both give the same numbers); see
- * recurrence.ts for the methods and the sub-step rule.
+ * recurrence.ts for the methods and the sub-step rule. `plan`, when given, is planSweep's for
+ * the same record and options (a caller that planned already need not plan again).
  */
-export function sweepOscillators(accelMS2: Float64Array, dtS: number, options: SweepOptions): Peaks {
-  const plan = planSweep(accelMS2, dtS, options);
+export function sweepOscillators(
+  accelMS2: Float64Array,
+  dtS: number,
+  options: SweepOptions,
+  plan: SweepPlan = planSweep(accelMS2, dtS, options),
+): Peaks {
   const peaks = emptyPeaks(plan);
   const runner = groupRunner(accelMS2, plan, options.kernel ?? 'auto');
   for (const group of plan.groups) storeGroup(peaks, group, runner(group), accelMS2.length);
@@ -248,6 +253,25 @@ export function groupRunner(
     }
     return values;
   };
+}
+
+/**
+ * Run `kernel` once over a short invented chirp with groups of every kind it has (one and two
+ * vectors, the symmetric and the general recurrence, sub-stepped and not), so that the engine
+ * compiles the code before a real sweep needs it. For a worker thread that waits for its first
+ * job: it costs a few milliseconds there, off the calling thread.
+ */
+export function warmSweep(kernel: SweepKernel = 'auto'): void {
+  const dtS = 0.01;
+  const chirp = new Float64Array(3001);
+  for (let i = 0; i < chirp.length; i++) {
+    const t = i * dtS;
+    chirp[i] = Math.sin(2 * Math.PI * (0.5 + 0.3 * t) * t) * Math.exp(-(((t - 10) / 6) ** 2));
+  }
+  // 0.03 s is composed (Newmark's 66 steps a period); 0.8 and 2 s step once a sample, in a wide
+  // group (four oscillators) and a narrow one (two).
+  sweepOscillators(chirp, dtS, { periodsS: [0.03, 0.8, 2], dampings: [0.02, 0.05, 0.1, 0.2], kernel });
+  sweepOscillators(chirp, dtS, { periodsS: [0.8, 2], dampings: [0.05], kernel });
 }
 
 let kernelWarm = false;

@@ -1,9 +1,25 @@
+import { createRequire } from 'node:module';
 import { pipeline } from 'node:stream/promises';
-import { CsvError, type Options as CsvOptions, parse } from 'csv-parse';
-import { parse as parseSync } from 'csv-parse/sync';
+import type { Options as CsvOptions } from 'csv-parse';
 import { inputError, usageError } from '../errors.js';
 import { ACCELERATION_UNITS, type AccelerationUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
 import { createRecord, type GroundRecord, peakGroundAcceleration } from './record.js';
+
+/**
+ * csv-parse, loaded on first use: a file of plain numeric lines never needs it (the line scanner
+ * splits those), and loading it cost a tenth of a whole `spectrum` run. Its CommonJS build, the
+ * one `require` can load synchronously from inside the scanner. Each of its CommonJS files has a
+ * CsvError class of its own (see isCsvError).
+ */
+let csvParse: typeof import('csv-parse') | undefined;
+let csvParseSync: typeof import('csv-parse/sync') | undefined;
+const requireHere = createRequire(import.meta.url);
+const csv = () => (csvParse ??= requireHere('csv-parse') as typeof import('csv-parse'));
+const csvSync = () => (csvParseSync ??= requireHere('csv-parse/sync') as typeof import('csv-parse/sync'));
+/** An error that csv-parse threw: only a loaded build can have, and each build has its own class. */
+const isCsvError = (error: unknown): error is InstanceType<typeof import('csv-parse').CsvError> =>
+  (csvParse !== undefined && error instanceof csvParse.CsvError) ||
+  (csvParseSync !== undefined && error instanceof csvParseSync.CsvError);
 
 /**
  * How the values are laid out in the file. `single`: one acceleration value a line. `table`: time
@@ -174,9 +190,13 @@ async function throughCsvParse(
     }
   }
   try {
-    await pipeline(all, parse(streamCsvOptions(separator, reader)), async (rows: AsyncIterable<unknown>) => {
-      for await (const _ of rows); // every row is taken in on_record; nothing comes out
-    });
+    await pipeline(
+      all,
+      csv().parse(streamCsvOptions(separator, reader)),
+      async (rows: AsyncIterable<unknown>) => {
+        for await (const _ of rows); // every row is taken in on_record; nothing comes out
+      },
+    );
   } catch (error) {
     throw asInputError(error, reader.options.source);
   }
@@ -260,17 +280,27 @@ const POWERS_OF_TEN = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
  * and the regular expression took half the time of reading a file.
  */
 function shortDecimal(text: string): number {
-  const length = text.length;
-  let i = 0;
-  let c = text.charCodeAt(0);
+  return decimalIn(text, 0, text.length);
+}
+
+/** A space or a tab. */
+const isBlank = (c: number) => c === 32 || c === 9;
+/** The end of a field of a numeric row: a comma, a space or a tab. */
+const isFieldEnd = (c: number) => c === 44 || c === 32 || c === 9;
+
+/** shortDecimal of text[from, to) (NaN for an empty range), without cutting the text out. */
+function decimalIn(text: string, from: number, to: number): number {
+  if (from >= to) return Number.NaN;
+  let i = from;
+  let c = text.charCodeAt(from);
   const negative = c === 45;
-  if (negative || c === 43) i = 1;
+  if (negative || c === 43) i++;
   let mantissa = 0;
   let digits = 0;
   let significant = 0;
   let decimals = 0;
   let point = false;
-  for (; i < length; i++) {
+  for (; i < to; i++) {
     c = text.charCodeAt(i);
     if (c >= 48 && c <= 57) {
       digits++;
@@ -285,13 +315,14 @@ function shortDecimal(text: string): number {
   }
   if (digits === 0 || significant > 15) return Number.NaN;
   let exponent = 0;
-  if (i < length) {
+  if (i < to) {
     if (c !== 101 && c !== 69) return Number.NaN; // not e or E (a D exponent goes the long way)
-    c = text.charCodeAt(++i);
+    if (++i === to) return Number.NaN;
+    c = text.charCodeAt(i);
     const negativeExponent = c === 45;
     if (negativeExponent || c === 43) i++;
-    if (i === length || length - i > 3) return Number.NaN; // no digits, or far outside 10^±22
-    for (; i < length; i++) {
+    if (i === to || to - i > 3) return Number.NaN; // no digits, or far outside 10^±22
+    for (; i < to; i++) {
       c = text.charCodeAt(i);
       if (c < 48 || c > 57) return Number.NaN;
       exponent = exponent * 10 + (c - 48);
@@ -457,8 +488,8 @@ class LineScanner {
         }
         cr = text.indexOf('\r', from);
       }
-      const line = text.slice(start, end);
-      this.take(this.pending === 0 ? line : this.unfinished(line));
+      if (this.pending === 0) this.takeRange(text, start, end);
+      else this.take(this.unfinished(text.slice(start, end)));
     }
     if (from < length) {
       this.pieces.push(from === 0 ? text : text.slice(from));
@@ -480,10 +511,21 @@ class LineScanner {
     return line;
   }
 
+  /** The line text[start, end): a numeric row read where it stands, any other line by take(). */
+  private takeRange(text: string, start: number, end: number): void {
+    const number = this.line;
+    if (end > start && number > this.skip && this.reader.numericRow(text, start, end, number)) {
+      this.line++;
+      return;
+    }
+    this.take(text.slice(start, end));
+  }
+
   private take(line: string): void {
     const number = this.line++;
     if (line.length > MAX_LINE_CHARACTERS) throw longLineError(this.reader.options.source, number);
     if (line.length === 0) return; // csv-parse's skip_empty_lines
+    if (number > this.skip && this.reader.numericRow(line, 0, line.length, number)) return;
     const fields = this.plainFields(line);
     if (number <= this.skip) {
       // Lines to skip are still read by csv-parse, as before, so that its limit on a record's
@@ -535,7 +577,7 @@ class LineScanner {
   /** csv-parse's fields for one line that is not plain; undefined for a comment or a line it skips. */
   private parsed(line: string, number: number): string[] | undefined {
     try {
-      return (parseSync(line, this.lineOptions) as string[][])[0];
+      return (csvSync().parse(line, this.lineOptions) as string[][])[0];
     } catch (error) {
       throw asInputError(error, this.reader.options.source, number);
     }
@@ -554,7 +596,7 @@ const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
 
 /** csv-parse's error as a one-line input error, at `line` if given, else at csv-parse's line. */
 function asInputError(error: unknown, file: string, line?: number): unknown {
-  if (!(error instanceof CsvError)) return error;
+  if (!isCsvError(error)) return error;
   const at = line ?? (typeof error.lines === 'number' ? error.lines : undefined);
   if (error.code === 'CSV_MAX_RECORD_SIZE') return longLineError(file, at);
   return inputError(`cannot read this line (${error.message.split('\n')[0]})`, { file, line: at });
@@ -600,6 +642,59 @@ class RecordReader {
       throw usageError('--column does not apply to the wrapped layout (values are read in row order)');
     if (options.column !== undefined && !(Number.isInteger(options.column) && options.column >= 1))
       throw usageError(`--column must be a whole number ≥ 1, got ${options.column}`);
+  }
+
+  /**
+   * A data line text[start, end) after the first, in a file separated by commas or by spaces and tabs, when it
+   * holds only short decimals (shortDecimal) in the file's number of columns and its time
+   * advances by the file's step: read as row() reads it, without cutting it into strings.
+   * Anything else (a comment, a word, a semicolon file, a wrong column count, a step that is not
+   * plainly uniform, a value out of range) returns false and goes to row(), which reads it or
+   * says what is wrong. Most lines of most files are read here.
+   */
+  numericRow(text: string, start: number, end: number, line: number): boolean {
+    if (this.columns === 0 || this.layout === 'wrapped' || this.separator === ';') return false;
+    if (end - start > MAX_LINE_CHARACTERS) return false;
+    const whitespace = this.separator === 'whitespace';
+    let i = start;
+    let column = 0;
+    let timeS = 0;
+    let value = 0;
+    // Every read is inside [start, end): reading past the text's end would throw the engine's
+    // optimized code away.
+    for (;;) {
+      while (i < end && isBlank(text.charCodeAt(i))) i++;
+      if (i === end && (whitespace || column === 0)) break;
+      const from = i;
+      while (i < end && !isFieldEnd(text.charCodeAt(i))) i++;
+      const number = decimalIn(text, from, i);
+      if (Number.isNaN(number)) return false;
+      column++;
+      if (column === 1) timeS = number;
+      if (column === this.valueColumn) value = number;
+      while (i < end && isBlank(text.charCodeAt(i))) i++;
+      if (i === end) break;
+      if (!whitespace) {
+        if (text.charCodeAt(i) !== 44) return false;
+        i++;
+      }
+    }
+    if (column !== this.columns) return false;
+    if (Math.abs(value) * ACCELERATION_UNITS[this.options.units] > MAX_ABS_ACCELERATION_MS2) return false;
+    if (column > 1) {
+      // time()'s checks where they pass at once: the time increases, by the mean step to 1e-6
+      // (the first data row went through row(), so there is at least one sample before).
+      const i = this.count;
+      if (!(timeS > this.timePreviousS)) return false;
+      if (i >= 2) {
+        const meanStepS = (this.timePreviousS - this.timeFirstS) / (i - 1);
+        if (!(Math.abs(timeS - this.timePreviousS - meanStepS) <= 1e-6 * meanStepS)) return false;
+      }
+      this.timePreviousS = timeS;
+    }
+    this.add(value, line);
+    this.lastDataLine = line;
+    return true;
   }
 
   /** One row's fields; `plain` when they come from a plain line, which has no control characters. */

@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { logSpaced } from '../../src/oscillator/grid.js';
 import { METHODS } from '../../src/oscillator/recurrence.js';
-import { type Peaks, resolveKernel, sweepOscillators } from '../../src/oscillator/sweep.js';
+import {
+  groupRunner,
+  type Peaks,
+  planSweep,
+  resolveKernel,
+  sweepOscillators,
+} from '../../src/oscillator/sweep.js';
 import { detectWasmSimd, wasmSimdSupported } from '../../src/oscillator/wasm/kernel.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
 
@@ -74,6 +80,25 @@ describe('WebAssembly SIMD kernel', () => {
     const js = sweepOscillators(record.accelMS2, record.dtS, { ...options, kernel: 'js' });
     const wasm = sweepOscillators(record.accelMS2, record.dtS, { ...options, kernel: 'wasm' });
     expect(worstRelative(js, wasm)).toBeLessThan(1e-12);
+  });
+
+  it('keeps two records apart when their sweeps take turns on the one instance of the kernel', () => {
+    // The WebAssembly kernel has one instance (and memory) per thread, shared by all sweeps; a
+    // sweep whose record another has replaced there must load its own again.
+    const [first, second] = [records[0], records[2]];
+    const options = { periodsS: [0.2, 1.3], dampings: [0.05], kernel: 'wasm' as const };
+    const planA = planSweep(first.accelMS2, first.dtS, options);
+    const planB = planSweep(second.accelMS2, second.dtS, options);
+    const runA = groupRunner(first.accelMS2, planA, 'wasm');
+    const runB = groupRunner(second.accelMS2, planB, 'wasm');
+    const alone = (record: typeof first) => sweepOscillators(record.accelMS2, record.dtS, options).sdM;
+    const a1 = Array.from(runA(planA.groups[0]));
+    const b1 = Array.from(runB(planB.groups[0]));
+    const a2 = Array.from(runA(planA.groups[0]));
+    expect(a2).toEqual(a1);
+    expect([a1[0], a1[3]]).toEqual(Array.from(alone(first)));
+    expect([b1[0], b1[3]]).toEqual(Array.from(alone(second)));
+    expect(b1[0]).not.toBe(a1[0]);
   });
 
   it('finds the closed-form peak of an undamped oscillator under a step of ground acceleration', () => {

@@ -1,10 +1,11 @@
 import { existsSync, statSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
 import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
-import { sweepOscillatorsParallel } from '../../oscillator/parallel.js';
+import { SweepPool } from '../../oscillator/parallel.js';
 import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
 import { planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
 import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
@@ -107,8 +108,30 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const axes = figureAxes(options);
   const target = loadTarget(options);
   const sweep = sweepChoice(options);
+  const pool = earlyPool(source, grid, sweep);
+  try {
+    await spectrumOf(source, options, { grid, lengthUnit, format, axes, target, sweep, pool });
+  } finally {
+    await pool?.close();
+  }
+}
+
+async function spectrumOf(
+  source: string,
+  options: SpectrumCliOptions,
+  job: {
+    grid: ReturnType<typeof gridFromOptions>;
+    lengthUnit: ReturnType<typeof parseLengthUnit>;
+    format: string;
+    axes: 'log' | 'linear';
+    target: ReturnType<typeof loadTarget>;
+    sweep: { threads?: number; kernel: SweepKernel };
+    pool: SweepPool | undefined;
+  },
+): Promise<void> {
+  const { grid, lengthUnit, format, axes, target, sweep, pool } = job;
   const processed = applyProcessing(await loadRecord(source, options), options);
-  const targeted = applyTarget(await sweepSpectrum(processed, grid, sweep), target, options);
+  const targeted = applyTarget(await sweepSpectrum(processed, grid, sweep, pool), target, options);
   const spectrum = targeted.spectrum;
   const record = targeted.record(processed);
   const protect = options.target === undefined ? [source] : [source, options.target];
@@ -131,10 +154,12 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
 }
 
 /**
- * Oscillator-steps from which a sweep is split over threads: starting a worker costs 30–50 ms,
- * about 15 million oscillator-steps of one core's work, so smaller sweeps stay on one thread.
+ * Oscillator-steps from which a sweep is split over threads. A worker costs 30–50 ms to start and
+ * runs its first job with cold code, so in a whole `spectrum` run two threads only caught up with
+ * one at about 80 million steps (measured on the benchmark's record with 400 periods; 200 were
+ * faster on one thread, 800 on two). Smaller sweeps stay on one thread.
  */
-export const PARALLEL_MIN_OSCILLATOR_STEPS = 30_000_000;
+export const PARALLEL_MIN_OSCILLATOR_STEPS = 80_000_000;
 
 function sweepChoice(options: SpectrumCliOptions): { threads?: number; kernel: SweepKernel } {
   const kernel = options.kernel ?? 'auto';
@@ -154,22 +179,44 @@ export function parseThreads(text: string): number {
   return threads;
 }
 
-/** The spectrum of a record, its sweep split over threads when it is large. */
+/**
+ * The threads of a sweep that is likely to be split (PARALLEL_MIN_OSCILLATOR_STEPS), started
+ * before the record is read so that they load and compile while it is; undefined otherwise. The
+ * record's length is guessed from the file's size (a generous 12 bytes a sample); a wrong guess
+ * costs only the other cores' time, and sweepSpectrum decides from the record itself.
+ */
+function earlyPool(
+  source: string,
+  grid: ReturnType<typeof gridFromOptions>,
+  choice: { threads?: number },
+): SweepPool | undefined {
+  const threads = choice.threads ?? availableParallelism();
+  if (threads === 1 || source === '-' || !existsSync(source)) return undefined;
+  const samples = statSync(source).size / 12;
+  const steps = samples * grid.periodsS.filter((t) => t > 0).length * grid.dampings.length;
+  return steps >= PARALLEL_MIN_OSCILLATOR_STEPS ? new SweepPool(threads) : undefined;
+}
+
+/** The spectrum of a record, its sweep split over threads (`pool`'s, when given) when it is large. */
 async function sweepSpectrum(
   record: GroundRecord,
   grid: ReturnType<typeof gridFromOptions>,
   choice: { threads?: number; kernel: SweepKernel },
+  pool?: SweepPool,
 ): Promise<Spectrum> {
   const options = { ...grid, kernel: choice.kernel };
   const plan = planSweep(record.accelMS2, record.dtS, options);
   let steps = 0;
   for (const group of plan.groups) steps += group.length * group[0].substeps * (record.accelMS2.length - 1);
-  const threads = choice.threads ?? (steps >= PARALLEL_MIN_OSCILLATOR_STEPS ? undefined : 1);
-  const peaks =
-    threads === 1
-      ? sweepOscillators(record.accelMS2, record.dtS, options)
-      : await sweepOscillatorsParallel(record.accelMS2, record.dtS, { ...options, threads });
-  return assembleSpectrum(record, peaks);
+  const threads = choice.threads ?? (steps >= PARALLEL_MIN_OSCILLATOR_STEPS ? availableParallelism() : 1);
+  if (threads === 1)
+    return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options, plan));
+  const sweeper = pool?.threads === threads ? pool : new SweepPool(threads);
+  try {
+    return assembleSpectrum(record, await sweeper.sweep(record.accelMS2, record.dtS, options, plan));
+  } finally {
+    if (sweeper !== pool) await sweeper.close();
+  }
 }
 
 function figureAxes(options: SpectrumCliOptions): 'log' | 'linear' {

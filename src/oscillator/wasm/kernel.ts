@@ -112,12 +112,23 @@ function sweepModule(): WebAssembly.Module {
 }
 
 /**
- * One instance of the WebAssembly kernel with a record loaded into its memory. Groups of up to
- * WASM_WIDTH oscillators are stepped by `run`, which takes their coefficients packed as sweep.ts packs
- * them (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator).
+ * The sweep's instance of the kernel in this thread, reused by every WasmSweeper: a new instance
+ * per record would map and unmap a fresh linear memory each time, which in a pool of threads
+ * costs every thread of the process (the mappings are the process's), and the memory would start
+ * cold. Its memory grows to the largest sweep so far and stays.
+ */
+let sweepInstance: { exports: SweepExports; holder?: WasmSweeper } | undefined;
+
+/**
+ * The WebAssembly kernel with a record loaded into its memory. Groups of up to WASM_WIDTH
+ * oscillators are stepped by `run`, which takes their coefficients packed as sweep.ts packs them
+ * (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator). All
+ * sweepers of a thread share one instance; each loads its record again when another has used it
+ * since.
  */
 export class WasmSweeper {
-  private readonly exports: SweepExports;
+  private readonly kernel: { exports: SweepExports; holder?: WasmSweeper };
+  private readonly accelMS2: Float64Array;
   private readonly samples: number;
   private readonly chunkSteps: number;
   private readonly coefficients: number;
@@ -125,17 +136,19 @@ export class WasmSweeper {
   private readonly peaks: number;
   private readonly buffer: number;
   private readonly record: number;
-  /** Pass 1's checkpoints, at the end of memory, which grows when a group needs more. */
+  /** Pass 1's checkpoints, at the end of the layout; memory grows when a group needs more. */
   private readonly checkpoints: number;
-  private view: Float64Array;
 
   constructor(accelMS2: Float64Array, chunkSteps: number) {
-    const instance = new WebAssembly.Instance(sweepModule(), {});
-    this.exports = instance.exports as unknown as SweepExports;
+    sweepInstance ??= {
+      exports: new WebAssembly.Instance(sweepModule(), {}).exports as unknown as SweepExports,
+    };
+    this.kernel = sweepInstance;
+    this.accelMS2 = accelMS2;
     this.samples = accelMS2.length;
     this.chunkSteps = chunkSteps;
     const align = (bytes: number) => Math.ceil(bytes / 16) * 16;
-    let next = this.exports.heapBase();
+    let next = this.kernel.exports.heapBase();
     const take = (bytes: number) => {
       const at = next;
       next += align(bytes);
@@ -148,19 +161,20 @@ export class WasmSweeper {
     // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
     this.record = take(accelMS2.length * 8 + 16);
     this.checkpoints = next;
-    this.view = this.reserve(0);
-    this.view.set(accelMS2, this.record / 8);
   }
 
-  /** Grow memory to hold `bytes` of checkpoints, and return a view of all of it. */
-  private reserve(bytes: number): Float64Array {
-    const memory = this.exports.memory;
+  /** The memory as f64, grown to hold `bytes` of checkpoints and holding this sweeper's record. */
+  private memory(bytes: number): Float64Array {
+    const memory = this.kernel.exports.memory;
     const pages = Math.ceil((this.checkpoints + bytes) / 65536) - memory.buffer.byteLength / 65536;
-    if (pages > 0 || this.view === undefined) {
-      if (pages > 0) memory.grow(pages);
-      this.view = new Float64Array(memory.buffer);
+    if (pages > 0) memory.grow(pages);
+    const view = new Float64Array(memory.buffer);
+    if (this.kernel.holder !== this) {
+      view.set(this.accelMS2, this.record / 8);
+      view.fill(0, (this.record + this.samples * 8) / 8, (this.record + this.samples * 8 + 16) / 8);
+      this.kernel.holder = this;
     }
-    return this.view;
+    return view;
   }
 
   /**
@@ -179,14 +193,14 @@ export class WasmSweeper {
     out: Float64Array,
   ) {
     const blocks = Math.ceil(((this.samples - 1) * substeps) / blockSteps);
-    const view = this.reserve(blocks * WASM_WIDTH * CHECKPOINT * 8);
+    const view = this.memory(blocks * WASM_WIDTH * CHECKPOINT * 8);
     const c = this.coefficients / 8;
     for (let i = 0; i < WASM_WIDTH; i++) {
       const from = Math.min(i, count - 1) * stride;
       const lane = (i >> 1) * COEFFICIENTS * 2 + (i & 1);
       for (let q = 0; q < COEFFICIENTS; q++) view[c + lane + 2 * q] = packed[from + q];
     }
-    this.exports.runGroup(
+    this.kernel.exports.runGroup(
       this.record,
       this.samples,
       substeps,
