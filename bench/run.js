@@ -13,11 +13,12 @@ import { sweepOscillators } from '../dist/oscillator/sweep.js';
 import { writeFileAtomic } from '../dist/output/atomic.js';
 import { formatJson, spectrumToJson } from '../dist/output/spectrum-json.js';
 import { synthesizeRecord } from '../dist/record/synth.js';
-import { rotDSpectraParallel } from '../dist/spectrum/rotd.js';
+import { RotDPool, rotDSpectra } from '../dist/spectrum/rotd.js';
 import { assembleSpectrum } from '../dist/spectrum/spectrum.js';
 
 const REPEAT = Number(process.env.BENCH_REPEAT ?? 5);
 const QUICK = process.env.BENCH_QUICK === '1';
+const POOL_WARM_JOBS = 8;
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-bench-'));
 const cli = new URL('../bin/quakesweep.js', import.meta.url).pathname;
 const cores = availableParallelism();
@@ -78,7 +79,8 @@ writeCsv(csv, standard);
 for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewise-exact']) {
   for (const kernel of ['wasm', 'js']) {
     const options = { ...grid, method, kernel };
-    sweepOscillators(standard.accelMS2, standard.dtS, options); // warm-up (JIT, wasm tier-up)
+    // Warm-up (JIT, wasm tier-up): the first runs of a process are slower.
+    for (let i = 0; i < 3; i++) sweepOscillators(standard.accelMS2, standard.dtS, options);
     const one = await timed(() => sweepOscillators(standard.accelMS2, standard.dtS, options));
     const steps = nominal;
     const executed = one.result.oscillatorSteps;
@@ -88,15 +90,19 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
       mps: mega(steps, one.ms),
       note: `executed ${executed} (${mega(executed, one.ms)} M/s); CPU ${one.cpuMs.toFixed(0)} ms`,
     });
+    // A pool's first jobs run slower (its threads' code is still cold; measured: the first
+    // jobs of a new pool took about 1.7 times as long as its later ones), so the steady figure
+    // is taken after POOL_WARM_JOBS jobs, and the first job of a new pool is shown beside it.
     const pool = new SweepPool(cores);
-    await pool.sweep(standard.accelMS2, standard.dtS, options); // warm-up
+    const first = await timed(() => pool.sweep(standard.accelMS2, standard.dtS, options), 1);
+    for (let i = 1; i < POOL_WARM_JOBS; i++) await pool.sweep(standard.accelMS2, standard.dtS, options);
     const all = await timed(() => pool.sweep(standard.accelMS2, standard.dtS, options));
     await pool.close();
     row('standard', `${method} ${kernel} ${cores} threads`, {
       ms: all.ms,
       steps,
       mps: mega(steps, all.ms),
-      note: `×${(one.ms / all.ms).toFixed(2)} (pool started); CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
+      note: `×${(one.ms / all.ms).toFixed(2)} after ${POOL_WARM_JOBS} jobs (first job ${first.ms.toFixed(0)} ms); CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
     });
   }
 }
@@ -135,21 +141,27 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
   const n = first.accelMS2.length;
   const nominalRotd = rotd.periodsS.length * n * 180;
   for (const kernel of ['wasm', 'js']) {
-    for (const threads of [1, cores]) {
-      const options = { ...rotd, kernel, threads };
-      await rotDSpectraParallel(first, second, options); // warm-up
-      const run = await timed(() => rotDSpectraParallel(first, second, options), QUICK ? 1 : REPEAT);
-      row(
-        'RotD',
-        `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles, ${kernel} ${threads} thread${threads > 1 ? 's' : ''}`,
-        {
-          ms: run.ms,
-          steps: nominalRotd,
-          mps: mega(nominalRotd, run.ms),
-          note: `rotated oscillator-steps; CPU ${run.cpuMs.toFixed(0)} ms`,
-        },
-      );
-    }
+    const options = { ...rotd, kernel };
+    for (let i = 0; i < 3; i++) rotDSpectra(first, second, options); // warm-up
+    const alone = await timed(() => rotDSpectra(first, second, options), QUICK ? 1 : REPEAT);
+    row('RotD', `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles, ${kernel} 1 thread`, {
+      ms: alone.ms,
+      steps: nominalRotd,
+      mps: mega(nominalRotd, alone.ms),
+      note: `rotated oscillator-steps; CPU ${alone.cpuMs.toFixed(0)} ms`,
+    });
+    // A pool kept for a suite of pairs, warmed as the standard job's pool is.
+    const pool = new RotDPool(cores);
+    const firstJob = await timed(() => pool.rotd(first, second, options), 1);
+    for (let i = 1; i < POOL_WARM_JOBS; i++) await pool.rotd(first, second, options);
+    const all = await timed(() => pool.rotd(first, second, options), QUICK ? 1 : REPEAT);
+    await pool.close();
+    row('RotD', `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles, ${kernel} ${cores} threads`, {
+      ms: all.ms,
+      steps: nominalRotd,
+      mps: mega(nominalRotd, all.ms),
+      note: `×${(alone.ms / all.ms).toFixed(2)} after ${POOL_WARM_JOBS} jobs (first job ${firstJob.ms.toFixed(0)} ms); CPU ${all.cpuMs.toFixed(0)} ms`,
+    });
   }
 }
 
@@ -163,6 +175,7 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
     const batch = { periodsS: defaultPeriodsS(), dampings: [0.05], kernel };
     let steps = 0;
     let nominalBatch = 0;
+    for (const r of records) sweepOscillators(r.accelMS2, r.dtS, batch); // warm-up
     const alone = await timed(
       () => {
         steps = 0;
@@ -180,15 +193,12 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
       mps: mega(nominalBatch, alone.ms),
       note: `executed ${steps}`,
     });
+    // The records dealt out whole to the pool's threads (SweepPool.sweepRecords).
     const pool = new SweepPool(cores);
-    const pooled = await timed(
-      async () => {
-        for (const r of records) await pool.sweep(r.accelMS2, r.dtS, batch);
-      },
-      QUICK ? 1 : REPEAT,
-    );
+    for (let i = 0; i < 3; i++) await pool.sweepRecords(records, batch); // warm-up
+    const pooled = await timed(() => pool.sweepRecords(records, batch), QUICK ? 1 : REPEAT);
     await pool.close();
-    row('batch 50', `${kernel} pool of ${cores} threads`, {
+    row('batch 50', `${kernel} pool of ${cores} threads, records dealt out whole`, {
       ms: pooled.ms,
       steps: nominalBatch,
       mps: mega(nominalBatch, pooled.ms),

@@ -56,7 +56,14 @@ export {
 } from './spectrum/design.js';
 export { readSpectrumTable, tableSpectrum } from './spectrum/design-table.js';
 export { broadenSpectrum, floorRecord, floorSpectrum } from './spectrum/floor.js';
-export { type RotDSpectra, rotDSpectra } from './spectrum/rotd.js';
+export {
+  type ParallelRotDOptions,
+  type RotDOptions,
+  RotDPool,
+  type RotDSpectra,
+  rotDSpectra,
+  rotDSpectraParallel,
+} from './spectrum/rotd.js';
 export { scaleToTarget } from './spectrum/scale.js';
 export {
   assembleSpectrum,

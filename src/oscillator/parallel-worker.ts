@@ -1,15 +1,22 @@
-// A sweep worker thread (see SweepPool in parallel.ts): for each job it is sent (with the calling
-// thread's plan), it claims groups from the shared counter until none is left, and says so.
+// A sweep worker thread (see SweepPool in parallel.ts): for each job it is sent (a record with the
+// calling thread's plan, or many records), it claims groups or whole records from the shared
+// counter until none is left, and says so.
 import { parentPort } from 'node:worker_threads';
-import { runClaimedGroups, type SharedSweepJob } from './parallel.js';
+import {
+  runClaimedGroups,
+  runClaimedRecords,
+  type SharedRecordsJob,
+  type SharedSweepJob,
+} from './parallel.js';
 import { warmSweep } from './sweep.js';
 
 // Compile the kernels while the calling thread still reads or plans (messages wait meanwhile).
 warmSweep();
 
-parentPort?.on('message', ({ id, job }: { id: number; job: SharedSweepJob }) => {
+parentPort?.on('message', ({ id, job }: { id: number; job: SharedSweepJob | SharedRecordsJob }) => {
   try {
-    runClaimedGroups(job, job.plan);
+    if ('kind' in job) runClaimedRecords(job);
+    else runClaimedGroups(job, job.plan);
     parentPort?.postMessage({ id });
   } catch (error) {
     parentPort?.postMessage({ id, error: error instanceof Error ? error.message : String(error) });

@@ -74,11 +74,12 @@ export function shared(values: Float64Array): Float64Array {
 }
 
 /**
- * Worker threads that sweep together with the calling thread. A pool can run many sweeps (one
- * record after another, each split over all its threads); close it when done so that the process
- * can exit.
+ * Worker threads that each run the jobs they are sent alongside the calling thread (the script
+ * `script` answers every `{ id, job }` message with `{ id }`, or `{ id, error }`). A job is
+ * shared memory and a claim counter: every thread, this one included, claims work from it until
+ * none is left. SweepPool and RotDPool (spectrum/rotd.ts) are teams with their own scripts.
  */
-export class SweepPool {
+export class ThreadTeam {
   readonly threads: number;
   private readonly workers: Worker[] = [];
   private nextId = 0;
@@ -87,13 +88,13 @@ export class SweepPool {
     { left: number; resolve: () => void; reject: (e: Error) => void }
   >();
 
-  constructor(threads = availableParallelism()) {
+  constructor(threads: number, script: URL) {
     if (!Number.isInteger(threads) || threads < 1) {
       throw inputError(`the thread count must be a whole number ≥ 1, got ${threads}`);
     }
     this.threads = threads;
     for (let i = 1; i < threads; i++) {
-      const worker = new Worker(workerScript(import.meta.url, 'oscillator', 'parallel-worker.js'));
+      const worker = new Worker(script);
       worker.on('message', (message: { id: number; error?: string }) => this.settle(message));
       worker.on('error', (error) => this.failAll(error));
       this.workers.push(worker);
@@ -105,7 +106,7 @@ export class SweepPool {
     if (entry === undefined) return;
     if (message.error !== undefined) {
       this.pending.delete(message.id);
-      entry.reject(new QuakesweepError('internal', `sweep worker: ${message.error}`));
+      entry.reject(new QuakesweepError('internal', `worker thread: ${message.error}`));
       return;
     }
     if (--entry.left === 0) {
@@ -117,6 +118,72 @@ export class SweepPool {
   private failAll(error: Error): void {
     for (const entry of this.pending.values()) entry.reject(error);
     this.pending.clear();
+  }
+
+  /** Send `job` to every worker, run `here` on this thread meanwhile, and wait for them all. */
+  async run(job: unknown, here: () => void): Promise<void> {
+    const id = this.nextId++;
+    const done = new Promise<void>((resolve, reject) => {
+      if (this.workers.length === 0) resolve();
+      else this.pending.set(id, { left: this.workers.length, resolve, reject });
+    });
+    for (const worker of this.workers) worker.postMessage({ id, job });
+    try {
+      here();
+    } finally {
+      await done;
+    }
+  }
+
+  /** Stop the worker threads. */
+  async close(): Promise<void> {
+    await Promise.all(this.workers.map((worker) => worker.terminate()));
+    this.workers.length = 0;
+  }
+}
+
+/**
+ * Records as the threads of a SweepPool share them for sweepRecords: each thread claims whole
+ * records from the counter and sweeps them alone (same options for all), writing their peaks
+ * (sdM, svMS, saMS2, count each) and executed steps into the shared results.
+ */
+export interface SharedRecordsJob {
+  kind: 'records';
+  records: { accelMS2: Float64Array; dtS: number }[];
+  options: SweepOptions;
+  counter: Int32Array;
+  results: Float64Array;
+  steps: Float64Array;
+}
+
+/** Claim records of the job one at a time and sweep each on this thread (see SharedRecordsJob). */
+export function runClaimedRecords(job: SharedRecordsJob): void {
+  const count = job.options.periodsS.length * job.options.dampings.length;
+  for (;;) {
+    const next = Atomics.add(job.counter, 0, 1);
+    if (next >= job.records.length) return;
+    const record = job.records[next];
+    const peaks = sweepOscillators(record.accelMS2, record.dtS, job.options);
+    const at = next * 3 * count;
+    job.results.set(peaks.sdM, at);
+    job.results.set(peaks.svMS, at + count);
+    job.results.set(peaks.saMS2, at + 2 * count);
+    job.steps[next] = peaks.oscillatorSteps;
+  }
+}
+
+/**
+ * Worker threads that sweep together with the calling thread. A pool can run many sweeps (one
+ * record after another, each split over all its threads, or many records at once, each on one
+ * thread); close it when done so that the process can exit.
+ */
+export class SweepPool {
+  readonly threads: number;
+  private readonly team: ThreadTeam;
+
+  constructor(threads = availableParallelism()) {
+    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'oscillator', 'parallel-worker.js'));
+    this.threads = threads;
   }
 
   /**
@@ -148,17 +215,7 @@ export class SweepPool {
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * count)),
       plan,
     };
-    const id = this.nextId++;
-    const done = new Promise<void>((resolve, reject) => {
-      if (this.workers.length === 0) resolve();
-      else this.pending.set(id, { left: this.workers.length, resolve, reject });
-    });
-    for (const worker of this.workers) worker.postMessage({ id, job });
-    try {
-      runClaimedGroups(job, plan);
-    } finally {
-      await done;
-    }
+    await this.team.run(job, () => runClaimedGroups(job, plan));
     for (let d = 0; d < plan.dampings.length; d++) {
       for (let p = 0; p < plan.periodsS.length; p++) {
         const index = d * plan.periodsS.length + p;
@@ -173,10 +230,47 @@ export class SweepPool {
     return peaks;
   }
 
+  /**
+   * sweepOscillators of each record with the same options, the records dealt out whole to the
+   * pool's threads (for many small records, where splitting each one would cost more in
+   * messages than it saves). The peaks are those of sweepOscillators, bit for bit, in the order
+   * of the records.
+   */
+  async sweepRecords(
+    records: readonly { accelMS2: Float64Array; dtS: number }[],
+    options: SweepOptions,
+  ): Promise<Peaks[]> {
+    if (records.length === 0) return [];
+    // Plan the first one here: it checks the options, so that a bad grid fails on this thread.
+    const first = planSweep(records[0].accelMS2, records[0].dtS, options);
+    const grid = { ...options, periodsS: first.periodsS, dampings: first.dampings };
+    const count = first.periodsS.length * first.dampings.length;
+    const job: SharedRecordsJob = {
+      kind: 'records',
+      records: records.map((r) => ({ accelMS2: shared(r.accelMS2), dtS: r.dtS })),
+      options: grid,
+      counter: new Int32Array(new SharedArrayBuffer(4)),
+      results: new Float64Array(new SharedArrayBuffer(8 * 3 * count * records.length)),
+      steps: new Float64Array(new SharedArrayBuffer(8 * records.length)),
+    };
+    await this.team.run(job, () => runClaimedRecords(job));
+    return records.map((_, i) => {
+      const at = i * 3 * count;
+      return {
+        method: first.method,
+        periodsS: first.periodsS,
+        dampings: first.dampings,
+        sdM: job.results.slice(at, at + count),
+        svMS: job.results.slice(at + count, at + 2 * count),
+        saMS2: job.results.slice(at + 2 * count, at + 3 * count),
+        oscillatorSteps: job.steps[i],
+      };
+    });
+  }
+
   /** Stop the worker threads. */
   async close(): Promise<void> {
-    await Promise.all(this.workers.map((worker) => worker.terminate()));
-    this.workers.length = 0;
+    await this.team.close();
   }
 }
 

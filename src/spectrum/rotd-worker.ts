@@ -1,10 +1,13 @@
-// A RotD worker thread (see rotDSpectraParallel in rotd.ts): computes the curves of the periods it
-// is given and sends them back.
-import { parentPort, workerData } from 'node:worker_threads';
-import { type RotDWork, rotDCurves } from './rotd.js';
+// A RotD worker thread (see RotDPool in rotd.ts): for each job it is sent, it claims (damping,
+// period) cells from the shared counter until none is left, and says so.
+import { parentPort } from 'node:worker_threads';
+import { runClaimedRotD, type SharedRotDJob } from './rotd.js';
 
-try {
-  parentPort?.postMessage({ curves: rotDCurves(workerData as RotDWork) });
-} catch (error) {
-  parentPort?.postMessage({ error: error instanceof Error ? error.message : String(error) });
-}
+parentPort?.on('message', ({ id, job }: { id: number; job: SharedRotDJob }) => {
+  try {
+    runClaimedRotD(job);
+    parentPort?.postMessage({ id });
+  } catch (error) {
+    parentPort?.postMessage({ id, error: error instanceof Error ? error.message : String(error) });
+  }
+});

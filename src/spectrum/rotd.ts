@@ -1,7 +1,6 @@
 import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
 import { inputError, usageError } from '../errors.js';
-import { shared, workerScript } from '../oscillator/parallel.js';
+import { shared, ThreadTeam, workerScript } from '../oscillator/parallel.js';
 import { hermitePeak } from '../oscillator/peak.js';
 import {
   executedStepCoefficients,
@@ -75,63 +74,98 @@ export interface ParallelRotDOptions extends RotDOptions {
 }
 
 /**
- * rotDSpectra with its periods dealt out over worker threads (every thread-th period to each, so
- * short and long periods mix); each period's curves are computed as on one thread, so the numbers
- * are the same bits.
+ * rotDSpectra on worker threads (a RotDPool of `threads`, started for the call and closed after):
+ * the threads claim (damping, period) cells from a shared counter, and each cell is computed as
+ * on one thread, so the numbers are the same bits.
  */
 export async function rotDSpectraParallel(
   first: GroundRecord,
   second: GroundRecord,
   options: ParallelRotDOptions,
 ): Promise<RotDSpectra> {
-  const work = prepareRotD(first, second, options);
-  const threads = Math.max(1, Math.min(options.threads ?? availableParallelism(), work.periodsS.length));
-  if (threads === 1) return finishRotD(first, second, work, rotDCurves(work));
-  const a1 = shared(work.a1);
-  const a2 = shared(work.a2);
-  const share = (t: number) => {
-    const indices = Array.from(
-      { length: Math.ceil((work.periodsS.length - t) / threads) },
-      (_, i) => t + i * threads,
-    );
-    return {
-      indices,
-      work: { ...work, a1, a2, periodsS: Float64Array.from(indices, (i) => work.periodsS[i]) },
+  const threads = Math.max(1, Math.min(options.threads ?? availableParallelism(), options.periodsS.length));
+  if (threads === 1) return rotDSpectra(first, second, options);
+  const pool = new RotDPool(threads);
+  try {
+    return await pool.rotd(first, second, options);
+  } finally {
+    await pool.close();
+  }
+}
+
+/**
+ * RotD work as the threads of a RotDPool share it: the components in shared memory, a counter
+ * handing out cells (damping-major: cell c is damping ⌊c / periods⌋, period c mod periods), and
+ * RotD50, RotD100 and the geometric mean of every cell, three values a cell.
+ */
+export interface SharedRotDJob {
+  work: RotDWork;
+  counter: Int32Array;
+  results: Float64Array;
+}
+
+/** Claim cells of the job one at a time and compute them on this thread (see SharedRotDJob). */
+export function runClaimedRotD(job: SharedRotDJob): void {
+  const { work } = job;
+  const context = rotDContext(work);
+  const out = new Float64Array(3);
+  const cells = work.dampings.length * work.periodsS.length;
+  for (;;) {
+    const next = Atomics.add(job.counter, 0, 1);
+    if (next >= cells) return;
+    const d = Math.floor(next / work.periodsS.length);
+    rotDCell(work, context, d, next - d * work.periodsS.length, out);
+    job.results.set(out, 3 * next);
+  }
+}
+
+/**
+ * Worker threads that compute RotD spectra together with the calling thread, for many pairs or
+ * large grids (starting a worker costs tens of milliseconds: keep a pool for a suite). Close it
+ * when done so that the process can exit.
+ */
+export class RotDPool {
+  readonly threads: number;
+  private readonly team: ThreadTeam;
+
+  constructor(threads = availableParallelism()) {
+    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'spectrum', 'rotd-worker.js'));
+    this.threads = threads;
+  }
+
+  /** rotDSpectra of the pair, bit for bit, computed by all the pool's threads. */
+  async rotd(first: GroundRecord, second: GroundRecord, options: RotDOptions): Promise<RotDSpectra> {
+    const work = prepareRotD(first, second, options);
+    checkAngleStep(work.angleStepDeg);
+    const periods = work.periodsS.length;
+    const job: SharedRotDJob = {
+      work: { ...work, a1: shared(work.a1), a2: shared(work.a2) },
+      counter: new Int32Array(new SharedArrayBuffer(4)),
+      results: new Float64Array(new SharedArrayBuffer(8 * 3 * work.dampings.length * periods)),
     };
-  };
-  const shares = Array.from({ length: threads }, (_, t) => share(t));
-  const others = shares.slice(1).map(
-    ({ work: part }) =>
-      new Promise<RotDCurve[]>((resolve, reject) => {
-        const worker = new Worker(workerScript(import.meta.url, 'spectrum', 'rotd-worker.js'), {
-          workerData: part,
-        });
-        worker.once('message', (message: { curves?: RotDCurve[]; error?: string }) => {
-          void worker.terminate();
-          if (message.curves) resolve(message.curves);
-          else reject(new Error(`a RotD worker failed: ${message.error}`));
-        });
-        worker.once('error', reject);
-      }),
-  );
-  const mine = rotDCurves(shares[0].work);
-  const parts = [mine, ...(await Promise.all(others))];
-  const curves: RotDCurve[] = Array.from(work.dampings, (damping) => ({
-    damping,
-    rotd50MS2: new Float64Array(work.periodsS.length),
-    rotd100MS2: new Float64Array(work.periodsS.length),
-    geomeanMS2: new Float64Array(work.periodsS.length),
-  }));
-  parts.forEach((part, t) => {
-    part.forEach((curve, d) => {
-      shares[t].indices.forEach((p, i) => {
-        curves[d].rotd50MS2[p] = curve.rotd50MS2[i];
-        curves[d].rotd100MS2[p] = curve.rotd100MS2[i];
-        curves[d].geomeanMS2[p] = curve.geomeanMS2[i];
-      });
+    await this.team.run(job, () => runClaimedRotD(job));
+    const curves = Array.from(work.dampings, (damping, d) => {
+      const curve: RotDCurve = {
+        damping,
+        rotd50MS2: new Float64Array(periods),
+        rotd100MS2: new Float64Array(periods),
+        geomeanMS2: new Float64Array(periods),
+      };
+      for (let p = 0; p < periods; p++) {
+        const at = 3 * (d * periods + p);
+        curve.rotd50MS2[p] = job.results[at];
+        curve.rotd100MS2[p] = job.results[at + 1];
+        curve.geomeanMS2[p] = job.results[at + 2];
+      }
+      return curve;
     });
-  });
-  return finishRotD(first, second, work, curves);
+    return finishRotD(first, second, work, curves);
+  }
+
+  /** Stop the worker threads. */
+  async close(): Promise<void> {
+    await this.team.close();
+  }
 }
 
 /** Check the pair and the grid, and pad the shorter component. */
@@ -198,48 +232,76 @@ export interface RotDWork {
   kernel?: SweepKernel;
 }
 
-/** The RotD curves of checked work (see rotDSpectra), one per damping ratio. */
-export function rotDCurves(work: RotDWork): RotDCurve[] {
-  const { a1, a2, dtS, periodsS, dampings, method, angleStepDeg } = work;
-  const angleCount = checkAngleStep(angleStepDeg);
+/** What one thread keeps to compute the cells of one work: the angles, scratch and the kernel. */
+interface RotDContext {
+  angleCount: number;
+  quarter: number;
+  cos: Float64Array;
+  sin: Float64Array;
+  peaks: Float64Array;
+  thresholds: Float64Array;
+  wasm: WasmRotD | undefined;
+}
+
+function rotDContext(work: RotDWork): RotDContext {
+  const angleCount = checkAngleStep(work.angleStepDeg);
   const cos = new Float64Array(angleCount);
   const sin = new Float64Array(angleCount);
   for (let k = 0; k < angleCount; k++) {
-    const degrees = k * angleStepDeg;
+    const degrees = k * work.angleStepDeg;
     cos[k] = degrees === 90 ? 0 : Math.cos((degrees * Math.PI) / 180);
     sin[k] = degrees === 0 ? 0 : degrees === 90 ? 1 : Math.sin((degrees * Math.PI) / 180);
   }
-  const quarter = Math.round(90 / angleStepDeg);
-  const peaks = new Float64Array(angleCount);
-  const thresholds = new Float64Array(angleCount);
-  const wasm = resolveKernel(work.kernel ?? 'auto') === 'wasm' ? new WasmRotD(a1, a2, cos, sin) : undefined;
+  const wasm =
+    resolveKernel(work.kernel ?? 'auto') === 'wasm' ? new WasmRotD(work.a1, work.a2, cos, sin) : undefined;
+  return {
+    angleCount,
+    quarter: Math.round(90 / work.angleStepDeg),
+    cos,
+    sin,
+    peaks: new Float64Array(angleCount),
+    thresholds: new Float64Array(angleCount),
+    wasm,
+  };
+}
 
-  const curves: RotDCurve[] = [];
-  for (let d = 0; d < dampings.length; d++) {
-    const damping = dampings[d];
-    const rotd50MS2 = new Float64Array(periodsS.length);
-    const rotd100MS2 = new Float64Array(periodsS.length);
-    const geomeanMS2 = new Float64Array(periodsS.length);
-    for (let p = 0; p < periodsS.length; p++) {
-      const periodS = periodsS[p];
-      let scale = 1;
-      if (periodS === 0) {
-        groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
-      } else {
-        const omega = (2 * Math.PI) / periodS;
-        scale = omega * omega;
-        oscillatorPeaks(a1, a2, dtS, { periodS, damping, method }, cos, sin, peaks, thresholds, wasm);
-      }
-      geomeanMS2[p] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
-      peaks.sort();
-      rotd100MS2[p] = scale * peaks[angleCount - 1];
-      const middle = angleCount >> 1;
-      rotd50MS2[p] =
-        scale * (angleCount % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
-    }
-    curves.push({ damping, rotd50MS2, rotd100MS2, geomeanMS2 });
+/** RotD50, RotD100 and the geometric mean (m/s²) of period p at damping d, into out[0..2]. */
+function rotDCell(work: RotDWork, context: RotDContext, d: number, p: number, out: Float64Array): void {
+  const { a1, a2, dtS, method } = work;
+  const { angleCount, quarter, cos, sin, peaks, thresholds, wasm } = context;
+  const damping = work.dampings[d];
+  const periodS = work.periodsS[p];
+  let scale = 1;
+  if (periodS === 0) {
+    groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
+  } else {
+    const omega = (2 * Math.PI) / periodS;
+    scale = omega * omega;
+    oscillatorPeaks(a1, a2, dtS, { periodS, damping, method }, cos, sin, peaks, thresholds, wasm);
   }
-  return curves;
+  out[2] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
+  peaks.sort();
+  out[1] = scale * peaks[angleCount - 1];
+  const middle = angleCount >> 1;
+  out[0] = scale * (angleCount % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
+}
+
+/** The RotD curves of checked work (see rotDSpectra), one per damping ratio. */
+export function rotDCurves(work: RotDWork): RotDCurve[] {
+  const context = rotDContext(work);
+  const out = new Float64Array(3);
+  return Array.from(work.dampings, (damping, d) => {
+    const rotd50MS2 = new Float64Array(work.periodsS.length);
+    const rotd100MS2 = new Float64Array(work.periodsS.length);
+    const geomeanMS2 = new Float64Array(work.periodsS.length);
+    for (let p = 0; p < work.periodsS.length; p++) {
+      rotDCell(work, context, d, p, out);
+      rotd50MS2[p] = out[0];
+      rotd100MS2[p] = out[1];
+      geomeanMS2[p] = out[2];
+    }
+    return { damping, rotd50MS2, rotd100MS2, geomeanMS2 };
+  });
 }
 
 /** Number of angles in [0°, 180°) for a step that divides 180° into whole steps, at most 1°. */

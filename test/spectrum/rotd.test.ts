@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Method } from '../../src/oscillator/recurrence.js';
 import { createRecord, type GroundRecord } from '../../src/record/record.js';
-import { rotDSpectra, rotDSpectraParallel } from '../../src/spectrum/rotd.js';
+import { RotDPool, rotDSpectra, rotDSpectraParallel } from '../../src/spectrum/rotd.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
 
 /** Invented test motions, m/s². */
@@ -114,6 +114,28 @@ describe('RotD50, RotD100 and geometric mean (Boore 2010)', () => {
 });
 
 describe('RotD over worker threads', () => {
+  it('gives the same bits from one pool for two pairs and both kernels, then closes', async () => {
+    const grid = { periodsS, dampings, method: 'piecewise-exact' as const };
+    const pool = new RotDPool(2);
+    try {
+      for (const [a, b, kernel] of [
+        [one, two, 'wasm'],
+        [two, one, 'js'],
+      ] as const) {
+        const alone = rotDSpectra(a, b, { ...grid, kernel });
+        const pooled = await pool.rotd(a, b, { ...grid, kernel });
+        pooled.curves.forEach((curve, d) => {
+          expect(Array.from(curve.rotd50MS2)).toEqual(Array.from(alone.curves[d].rotd50MS2));
+          expect(Array.from(curve.rotd100MS2)).toEqual(Array.from(alone.curves[d].rotd100MS2));
+          expect(Array.from(curve.geomeanMS2)).toEqual(Array.from(alone.curves[d].geomeanMS2));
+        });
+      }
+      await expect(pool.rotd(one, two, { ...grid, angleStepDeg: 0.7 })).rejects.toThrow(/angle step/);
+    } finally {
+      await pool.close();
+    }
+  });
+
   // Each period's curves are computed by one thread as rotDSpectra computes them, so dealing the
   // periods out over threads changes no bit (the order of the results is the grid's).
   it.each([2, 3])('gives the same bits on %s threads as on one', async (threads) => {
