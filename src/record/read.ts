@@ -4,6 +4,7 @@ import type { Options as CsvOptions } from 'csv-parse';
 import { inputError, usageError } from '../errors.js';
 import { ACCELERATION_UNITS, type AccelerationUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
 import { createRecord, type GroundRecord, peakGroundAcceleration } from './record.js';
+import { RowScanner } from './rows.js';
 
 /**
  * csv-parse, loaded on first use: a file of plain numeric lines never needs it (the line scanner
@@ -477,7 +478,21 @@ class LineScanner {
     }
     let lf = text.indexOf('\n', from);
     let cr = text.indexOf('\r', from);
+    let rows = true;
     while (lf !== -1 || cr !== -1) {
+      if (rows && this.pending === 0 && this.reader.readsRows) {
+        // Once the reader knows the layout, hand it the rest of the text: it reads the numeric
+        // rows it can in WebAssembly (once a text; the lines after any it does not read come here).
+        rows = false;
+        const { next, lines } = this.reader.rowsFrom(text, from, this.line);
+        if (lines > 0) {
+          this.line += lines;
+          from = next;
+          lf = text.indexOf('\n', from);
+          cr = text.indexOf('\r', from);
+          continue;
+        }
+      }
       const start = from;
       let end: number;
       if (cr === -1 || (lf !== -1 && lf < cr)) {
@@ -707,6 +722,44 @@ class RecordReader {
     this.values[this.count++] = value;
     this.lastDataLine = line;
     return true;
+  }
+
+  /** Whether numericRow (and rowsFrom) may read rows now. */
+  get readsRows(): boolean {
+    return this.numericRows;
+  }
+
+  /**
+   * numericRow over the lines of `text` from `from` (the start of line `line`) on, for as many as
+   * the WebAssembly row scanner reads (RowScanner, rows.ts): where it stopped and how many lines
+   * it read; none where it is not available.
+   */
+  rowsFrom(text: string, from: number, line: number): { next: number; lines: number } {
+    const scanner = this.numericRows ? RowScanner.get() : undefined;
+    let next = from;
+    let lines = 0;
+    while (scanner !== undefined) {
+      const scan = scanner.scan(text, next, {
+        columns: this.columns,
+        valueColumn: this.valueColumn,
+        whitespace: this.whitespace,
+        unitMS2: this.unitMS2,
+        limitMS2: MAX_ABS_ACCELERATION_MS2,
+        count: this.count,
+        timeFirstS: this.timeFirstS,
+        timePreviousS: this.timePreviousS,
+      });
+      if (scan.lines === 0) break;
+      while (this.count + scan.values.length > this.values.length) this.grow();
+      this.values.set(scan.values, this.count);
+      this.count += scan.values.length;
+      this.timePreviousS = scan.timePreviousS;
+      if (scan.lastRow >= 0) this.lastDataLine = line + lines + scan.lastRow;
+      lines += scan.lines;
+      next = scan.next;
+      if (scan.refused) break;
+    }
+    return { next, lines };
   }
 
   /** One row's fields; `plain` when they come from a plain line, which has no control characters. */
