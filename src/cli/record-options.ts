@@ -58,9 +58,10 @@ export function recordReadOptions(source: string, options: RecordCliOptions): Re
  */
 export async function loadRecord(source: string, options: RecordCliOptions): Promise<GroundRecord> {
   const readOptions = recordReadOptions(source, options);
-  // 1 MiB reads: a few round trips to the file system for a typical record instead of one per
-  // 64 KiB (each cost an idle wait), and still a stream for files of any size.
-  const stream = source === '-' ? process.stdin : createReadStream(source, { highWaterMark: 1 << 20 });
+  // 256 KiB reads: fewer round trips to the file system than 64 KiB (each an idle wait), and
+  // still a stream; 1 MiB reads left more large chunks for the collector (2,000,000 samples
+  // peaked at 224 MB against 165 MB).
+  const stream = source === '-' ? process.stdin : createReadStream(source, { highWaterMark: 1 << 18 });
   const record = await readRecordStream(stream, readOptions).catch((error: unknown) => {
     // Errors of reading (a folder, say) come without the path; give them the one the user typed.
     const errno = error as NodeJS.ErrnoException;

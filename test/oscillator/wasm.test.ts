@@ -10,6 +10,7 @@ import {
 } from '../../src/oscillator/sweep.js';
 import { detectWasmSimd, wasmSimdSupported } from '../../src/oscillator/wasm/kernel.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
+import { rotDSpectra } from '../../src/spectrum/rotd.js';
 
 // The TypeScript kernel (src/oscillator/kernel.ts) is the reference: the WebAssembly SIMD kernel
 // implements the same recurrence, threshold test and Hermite refinement, so the two must agree
@@ -99,6 +100,20 @@ describe('WebAssembly SIMD kernel', () => {
     expect([a1[0], a1[3]]).toEqual(Array.from(alone(first)));
     expect([b1[0], b1[3]]).toEqual(Array.from(alone(second)));
     expect(b1[0]).not.toBe(a1[0]);
+  });
+
+  it('gives the same peaks before and after RotD has used the instance, and RotD the same bits', () => {
+    // RotD's loop (assembly/rotd.ts) lays its components out in the same memory.
+    const options = { periodsS: [0.15, 2], dampings: [0.05], kernel: 'wasm' as const };
+    const [a, b] = [records[0], records[1]];
+    const second = synthesizeRecord({ seed: 16, dtS: a.dtS, durationS: 9.5 });
+    const before = sweepOscillators(a.accelMS2, a.dtS, options);
+    const rotd = rotDSpectra(a, second, options);
+    const after = sweepOscillators(a.accelMS2, a.dtS, options);
+    sweepOscillators(b.accelMS2, b.dtS, options);
+    const again = rotDSpectra(a, second, options);
+    expect(Array.from(after.sdM)).toEqual(Array.from(before.sdM));
+    expect(Array.from(again.curves[0].rotd50MS2)).toEqual(Array.from(rotd.curves[0].rotd50MS2));
   });
 
   it('finds the closed-form peak of an undamped oscillator under a step of ground acceleration', () => {

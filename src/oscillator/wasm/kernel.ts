@@ -117,7 +117,7 @@ function sweepModule(): WebAssembly.Module {
  * costs every thread of the process (the mappings are the process's), and the memory would start
  * cold. Its memory grows to the largest sweep so far and stays.
  */
-let sweepInstance: { exports: SweepExports; holder?: WasmSweeper } | undefined;
+let sweepInstance: { exports: SweepExports; holder?: unknown } | undefined;
 
 /**
  * The WebAssembly kernel with a record loaded into its memory. Groups of up to WASM_WIDTH
@@ -127,7 +127,7 @@ let sweepInstance: { exports: SweepExports; holder?: WasmSweeper } | undefined;
  * since.
  */
 export class WasmSweeper {
-  private readonly kernel: { exports: SweepExports; holder?: WasmSweeper };
+  private readonly kernel: { exports: SweepExports; holder?: unknown };
   private readonly accelMS2: Float64Array;
   private readonly samples: number;
   private readonly chunkSteps: number;
@@ -229,19 +229,26 @@ export class WasmSweeper {
  * for RotD (see oscillatorPeaks in spectrum/rotd.ts, whose twin is assembly/rotd.ts).
  */
 export class WasmRotD {
+  private readonly kernel: { exports: SweepExports; holder?: unknown };
   private readonly exports: SweepExports;
   private readonly samples: number;
   private readonly angles: number;
   private readonly lanes: number;
   private readonly at: Record<'a1' | 'a2' | 'cos' | 'sin' | 'peaks' | 'thresholds' | 'coefficients', number>;
-  private readonly view: Float64Array;
+  private readonly inputs: { a1: Float64Array; a2: Float64Array; cos: Float64Array; sin: Float64Array };
+  private view: Float64Array;
 
   constructor(a1: Float64Array, a2: Float64Array, cos: Float64Array, sin: Float64Array) {
-    const instance = new WebAssembly.Instance(sweepModule(), {});
-    this.exports = instance.exports as unknown as SweepExports;
+    // The thread's one instance, as WasmSweeper's (see sweepInstance).
+    sweepInstance ??= {
+      exports: new WebAssembly.Instance(sweepModule(), {}).exports as unknown as SweepExports,
+    };
+    this.kernel = sweepInstance;
+    this.exports = this.kernel.exports;
     this.samples = a1.length;
     this.angles = cos.length;
     this.lanes = cos.length + (cos.length % 2); // an even count; a padding angle has cos = sin = 0
+    this.inputs = { a1, a2, cos, sin };
     let next = this.exports.heapBase();
     const take = (values: number) => {
       const at = next;
@@ -260,12 +267,23 @@ export class WasmRotD {
     const memory = this.exports.memory;
     const pages = Math.ceil(next / 65536) - memory.buffer.byteLength / 65536;
     if (pages > 0) memory.grow(pages);
-    this.view = new Float64Array(memory.buffer);
-    this.view.set(a1, this.at.a1 / 8);
-    this.view.set(a2, this.at.a2 / 8);
-    this.view.fill(0, this.at.cos / 8, this.at.cos / 8 + 2 * this.lanes);
-    this.view.set(cos, this.at.cos / 8);
-    this.view.set(sin, this.at.sin / 8);
+    this.view = this.load();
+  }
+
+  /** The memory as f64, holding this loop's components and angles (loaded again if another used it). */
+  private load(): Float64Array {
+    if (this.kernel.holder === this && this.view.buffer === this.exports.memory.buffer) return this.view;
+    const view = new Float64Array(this.exports.memory.buffer);
+    if (this.kernel.holder !== this) {
+      const { a1, a2, cos, sin } = this.inputs;
+      view.set(a1, this.at.a1 / 8);
+      view.set(a2, this.at.a2 / 8);
+      view.fill(0, this.at.cos / 8, this.at.cos / 8 + 2 * this.lanes);
+      view.set(cos, this.at.cos / 8);
+      view.set(sin, this.at.sin / 8);
+      this.kernel.holder = this;
+    }
+    return view;
   }
 
   /** Peak |u(θ)| of one oscillator for every angle into `out` (length: the angle count). */
@@ -277,7 +295,9 @@ export class WasmRotD {
     offset: number,
     out: Float64Array,
   ): void {
-    const { view, at } = this;
+    const { at } = this;
+    const view = this.load();
+    this.view = view;
     for (let i = 0; i < 8; i++) view[at.coefficients / 8 + i] = coefficients[i];
     view.fill(0, at.peaks / 8, at.peaks / 8 + 2 * this.lanes);
     this.exports.rotdPeaks(
