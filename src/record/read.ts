@@ -61,17 +61,19 @@ const SNIFF_LINES = 100;
 /**
  * Read a record from a stream of text or bytes (a file, standard input). The first 64 KiB, and
  * at least 100 lines past --skip, choose the separator (lone `\r` line ends count as lines, and
- * the look stops early at a line too long to be read, so it never holds the whole of a file). Then a line scanner takes the decoded text chunk by chunk: it splits the plain
- * lines (digits, signs, points, exponent letters, separators, spaces and tabs) itself, exactly
- * as csv-parse would, and hands every other line (words, `#`, quotes, control characters, any
- * other character) to csv-parse, which stays the authority on them. The samples go into a
- * growing Float64Array, so memory holds the samples, one chunk of text and at most one
- * unfinished line, never a list of lines.
+ * the look stops early at a line too long to be read, so it never holds the whole of a file).
+ * Then a line scanner takes the decoded text chunk by chunk. Once the first data row has set the
+ * layout, runs of numeric rows go to the WebAssembly row scanner (rows.ts, the twin of
+ * RecordReader.numericRow); other plain lines (digits, letters, signs, points, separators,
+ * spaces and tabs, a few brackets) are split by the scanner itself, exactly as csv-parse would,
+ * and every other line (`#`, quotes, control characters, any other character) goes to csv-parse,
+ * which stays the authority on them. The samples go into a growing Float64Array, so memory holds
+ * the samples, one chunk of text and at most one unfinished line, never a list of lines.
  *
  * Why: csv-parse's stream interface took 200–330 ms to read a 40,000-line two-column file, most
- * of the whole `spectrum` job; the scanner and the short-decimal reading of parseNumber take
- * 23–39 ms (bench/read.js: medians on a 2-core machine shared with other work, the old reader
- * timed in the same runs; the fastest runs took 16 ms). A line is refused when it is longer than MAX_LINE_CHARACTERS as it
+ * of the whole `spectrum` job; the scanner took 23–39 ms, and with the row scanner 8 ms once the
+ * code is warm and about 30 ms in a fresh process (bench/read.js, medians on a 2-core machine
+ * shared with other work). A line is refused when it is longer than MAX_LINE_CHARACTERS as it
  * stands; csv-parse counted only what it kept of a line (no separators, leading spaces or comment).
  *
  * A file that begins with the UTF-16LE byte-order mark (bytes FF FE) is read as before, all
