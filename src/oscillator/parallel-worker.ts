@@ -8,10 +8,6 @@ import {
   type SharedRecordsJob,
   type SharedSweepJob,
 } from './parallel.js';
-import { warmSweep } from './sweep.js';
-
-// Compile the kernels while the calling thread still reads or plans (messages wait meanwhile).
-warmSweep();
 
 parentPort?.on('message', ({ id, job }: { id: number; job: SharedSweepJob | SharedRecordsJob }) => {
   try {

@@ -255,25 +255,6 @@ export function groupRunner(
   };
 }
 
-/**
- * Run `kernel` once over a short invented chirp with groups of every kind it has (one and two
- * vectors, the symmetric and the general recurrence, sub-stepped and not), so that the engine
- * compiles the code before a real sweep needs it. For a worker thread that waits for its first
- * job: it costs a few milliseconds there, off the calling thread.
- */
-export function warmSweep(kernel: SweepKernel = 'auto'): void {
-  const dtS = 0.01;
-  const chirp = new Float64Array(3001);
-  for (let i = 0; i < chirp.length; i++) {
-    const t = i * dtS;
-    chirp[i] = Math.sin(2 * Math.PI * (0.5 + 0.3 * t) * t) * Math.exp(-(((t - 10) / 6) ** 2));
-  }
-  // 0.03 s is composed (Newmark's 66 steps a period); 0.8 and 2 s step once a sample, in a wide
-  // group (four oscillators) and a narrow one (two).
-  sweepOscillators(chirp, dtS, { periodsS: [0.03, 0.8, 2], dampings: [0.02, 0.05, 0.1, 0.2], kernel });
-  sweepOscillators(chirp, dtS, { periodsS: [0.8, 2], dampings: [0.05], kernel });
-}
-
 let kernelWarm = false;
 
 /**

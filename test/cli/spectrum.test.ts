@@ -130,4 +130,36 @@ describe('quakesweep spectrum', () => {
       expect(json.spectra[0].psa_g[0]).toBeGreaterThan(0);
     }
   });
+
+  it('writes the same bytes on one thread, on two, and when threads started early go unused', () => {
+    // 60,000 lines of about 17 bytes (1.0 MB), which spectrum takes for about 85,000 samples (it
+    // guesses 12 bytes a sample before reading). 2,000 oscillators: 120 million steps, split over
+    // threads started before reading; 1,000: guessed at 85 million, so the threads are started,
+    // but 60 million steps stay on one thread. --threads 1 never starts them.
+    const big = join(folder, 'long.csv');
+    const lines = Array.from(
+      { length: 60_000 },
+      (_, i) => `${(i * 0.005).toFixed(3)},${(0.1 * Math.sin(i / 9) * Math.exp(-i / 20_000)).toFixed(6)}`,
+    );
+    writeFileSync(big, `${lines.join('\n')}\n`);
+    const spectrum = (...args: string[]) => {
+      const result = spawnSync(
+        process.execPath,
+        [bin, 'spectrum', big, '--units', 'g', '--format', 'json', ...args],
+        {
+          cwd: folder,
+          encoding: 'utf8',
+        },
+      );
+      expect(result.stderr).toBe('');
+      expect(result.status).toBe(0);
+      return result.stdout;
+    };
+    const split = ['--periods', '0.05:10:400', '--damping', '2%,5%,10%,20%,30%'];
+    const alone = spectrum(...split, '--threads', '1');
+    expect(spectrum(...split)).toBe(alone);
+    expect(spectrum(...split, '--threads', '2')).toBe(alone);
+    const unsplit = ['--periods', '0.05:10:200', '--damping', '2%,5%,10%,20%,30%'];
+    expect(spectrum(...unsplit)).toBe(spectrum(...unsplit, '--threads', '1'));
+  });
 });

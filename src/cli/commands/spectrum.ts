@@ -181,9 +181,10 @@ export function parseThreads(text: string): number {
 
 /**
  * The threads of a sweep that is likely to be split (PARALLEL_MIN_OSCILLATOR_STEPS), started
- * before the record is read so that they load and compile while it is; undefined otherwise. The
- * record's length is guessed from the file's size (a generous 12 bytes a sample); a wrong guess
- * costs only the other cores' time, and sweepSpectrum decides from the record itself.
+ * before the record is read so that they start and load their modules meanwhile; undefined
+ * otherwise. The record's length is guessed from the file's size at 12 bytes a sample (short
+ * lines, so the guess errs towards starting them); a wrong guess costs only the other cores'
+ * time, and sweepSpectrum decides from the record itself.
  */
 function earlyPool(
   source: string,
