@@ -2,7 +2,8 @@
 // continuous-time peak response to the linearly interpolated record, for T ≥ 0.01 s and
 // 0 ≤ ζ ≤ 0.5, on records as coarse as 0.02 s, for all three methods. The exact peaks come from
 // the piecewise-exact step (checked against ODEX in test/reference/odex.test.ts) with 400 steps
-// per period and Hermite refinement.
+// per period and Hermite refinement. Both kernels (WebAssembly SIMD and the TypeScript reference)
+// are held to the rule.
 import { describe, expect, it } from 'vitest';
 import { logSpaced } from '../../src/oscillator/grid.js';
 import { sweepOscillators } from '../../src/oscillator/sweep.js';
@@ -22,17 +23,21 @@ describe.each([
     method: 'piecewise-exact',
     stepsPerPeriod: 400,
   });
-  it.each(['newmark-average', 'newmark-linear', 'piecewise-exact'] as const)(
-    '%s keeps every peak within 0.5%',
-    (method) => {
-      const peaks = sweepOscillators(record.accelMS2, dtS, { periodsS: periods, dampings, method });
-      for (const key of ['sdM', 'svMS', 'saMS2'] as const) {
-        for (let i = 0; i < exact[key].length; i++) {
-          expect(Math.abs(peaks[key][i] / exact[key][i] - 1)).toBeLessThan(0.005);
-        }
+  it.each([
+    ['newmark-average', 'wasm'],
+    ['newmark-linear', 'wasm'],
+    ['piecewise-exact', 'wasm'],
+    ['newmark-average', 'js'],
+    ['newmark-linear', 'js'],
+    ['piecewise-exact', 'js'],
+  ] as const)('%s keeps every peak within 0.5% (%s kernel)', (method, kernel) => {
+    const peaks = sweepOscillators(record.accelMS2, dtS, { periodsS: periods, dampings, method, kernel });
+    for (const key of ['sdM', 'svMS', 'saMS2'] as const) {
+      for (let i = 0; i < exact[key].length; i++) {
+        expect(Math.abs(peaks[key][i] / exact[key][i] - 1)).toBeLessThan(0.005);
       }
-    },
-  );
+    }
+  });
   it('the textbook (not pre-warped) Newmark recurrences also keep it, with more sub-steps', () => {
     const peaks = sweepOscillators(record.accelMS2, dtS, {
       periodsS: periods,
@@ -59,8 +64,15 @@ describe('on sines up to the Nyquist frequency of a 0.02 s record', () => {
       method: 'piecewise-exact',
       stepsPerPeriod: 400,
     });
-    for (const method of ['newmark-average', 'newmark-linear', 'piecewise-exact'] as const) {
-      const peaks = sweepOscillators(accel, dtS, { periodsS: sinePeriods, dampings, method });
+    for (const [method, kernel] of [
+      ['newmark-average', 'wasm'],
+      ['newmark-linear', 'wasm'],
+      ['piecewise-exact', 'wasm'],
+      ['newmark-average', 'js'],
+      ['newmark-linear', 'js'],
+      ['piecewise-exact', 'js'],
+    ] as const) {
+      const peaks = sweepOscillators(accel, dtS, { periodsS: sinePeriods, dampings, method, kernel });
       for (const key of ['sdM', 'svMS', 'saMS2'] as const) {
         for (let i = 0; i < exact[key].length; i++) {
           expect(Math.abs(peaks[key][i] / exact[key][i] - 1)).toBeLessThan(0.005);
