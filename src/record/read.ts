@@ -674,12 +674,13 @@ class RecordReader {
   }
 
   /**
-   * A data line text[start, end) after the first, in a file separated by commas or by spaces and tabs, when it
-   * holds only short decimals (shortDecimal) in the file's number of columns and its time
-   * advances by the file's step: read as row() reads it, without cutting it into strings.
-   * Anything else (a comment, a word, a semicolon file, a wrong column count, a step that is not
-   * plainly uniform, a value out of range) returns false and goes to row(), which reads it or
-   * says what is wrong. Most lines of most files are read here.
+   * A data line text[start, end) after the first, in a file separated by commas or by spaces and
+   * tabs, when it holds only short decimals (shortDecimal) in the file's number of columns and
+   * its time advances by the file's step: read as row() reads it, without cutting it into
+   * strings. Anything else (a comment, a word, a semicolon file, a wrong column count, a step
+   * that is not plainly uniform, a value out of range) returns false and goes to row(), which
+   * reads it or says what is wrong. Runs of such lines go to the WebAssembly row scanner
+   * (rowsFrom), which reads exactly these; this reads the ones it leaves.
    */
   numericRow(text: string, start: number, end: number, line: number): boolean {
     if (!this.numericRows || end - start > MAX_LINE_CHARACTERS) return false;
