@@ -234,7 +234,8 @@ export class SweepPool {
    * sweepOscillators of each record with the same options, the records dealt out whole to the
    * pool's threads (for many small records, where splitting each one would cost more in
    * messages than it saves). The peaks are those of sweepOscillators, bit for bit, in the order
-   * of the records.
+   * of the records. Records not already in shared memory are copied there for the call: give a
+   * suite of long records a slice at a time.
    */
   async sweepRecords(
     records: readonly { accelMS2: Float64Array; dtS: number }[],
