@@ -1,5 +1,5 @@
 import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
+import { parentPort, Worker } from 'node:worker_threads';
 import { inputError, QuakesweepError } from '../errors.js';
 import {
   emptyPeaks,
@@ -140,6 +140,21 @@ export class ThreadTeam {
     await Promise.all(this.workers.map((worker) => worker.terminate()));
     this.workers.length = 0;
   }
+}
+
+/**
+ * The worker side of a ThreadTeam, for its script: run every job it is sent with `run` and answer
+ * `{ id }`, or `{ id, error }` when it throws.
+ */
+export function serveJobs<Job>(run: (job: Job) => void): void {
+  parentPort?.on('message', ({ id, job }: { id: number; job: Job }) => {
+    try {
+      run(job);
+      parentPort?.postMessage({ id });
+    } catch (error) {
+      parentPort?.postMessage({ id, error: error instanceof Error ? error.message : String(error) });
+    }
+  });
 }
 
 /**

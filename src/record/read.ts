@@ -512,7 +512,7 @@ class LineScanner {
         cr = text.indexOf('\r', from);
       }
       if (this.pending === 0) this.takeRange(text, start, end);
-      else this.take(this.unfinished(text.slice(start, end)));
+      else this.takeLine(this.unfinished(text.slice(start, end)));
     }
     if (from < length) {
       this.pieces.push(from === 0 ? text : text.slice(from));
@@ -523,7 +523,7 @@ class LineScanner {
 
   /** The end of the text: its last line, if it has no line break after it. */
   end(): void {
-    if (this.pending > 0) this.take(this.unfinished(''));
+    if (this.pending > 0) this.takeLine(this.unfinished(''));
   }
 
   private unfinished(last: string): string {
@@ -532,6 +532,11 @@ class LineScanner {
     this.pieces.length = 0;
     this.pending = 0;
     return line;
+  }
+
+  /** A whole line (one that was cut between texts): as takeRange reads it. */
+  private takeLine(line: string): void {
+    this.takeRange(line, 0, line.length);
   }
 
   /** The line text[start, end): a numeric row read where it stands, any other line by take(). */
@@ -548,7 +553,6 @@ class LineScanner {
     const number = this.line++;
     if (line.length > MAX_LINE_CHARACTERS) throw longLineError(this.reader.options.source, number);
     if (line.length === 0) return; // csv-parse's skip_empty_lines
-    if (number > this.skip && this.reader.numericRow(line, 0, line.length, number)) return;
     const fields = this.plainFields(line);
     if (number <= this.skip) {
       // Lines to skip are still read by csv-parse, as before, so that its limit on a record's

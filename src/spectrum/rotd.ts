@@ -136,7 +136,6 @@ export class RotDPool {
   /** rotDSpectra of the pair, bit for bit, computed by all the pool's threads. */
   async rotd(first: GroundRecord, second: GroundRecord, options: RotDOptions): Promise<RotDSpectra> {
     const work = prepareRotD(first, second, options);
-    checkAngleStep(work.angleStepDeg);
     const periods = work.periodsS.length;
     const job: SharedRotDJob = {
       work: { ...work, a1: shared(work.a1), a2: shared(work.a2) },

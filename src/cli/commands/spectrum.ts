@@ -110,46 +110,29 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const sweep = sweepChoice(options);
   const pool = earlyPool(source, grid, sweep);
   try {
-    await spectrumOf(source, options, { grid, lengthUnit, format, axes, target, sweep, pool });
+    const processed = applyProcessing(await loadRecord(source, options), options);
+    const targeted = applyTarget(await sweepSpectrum(processed, grid, sweep, pool), target, options);
+    const spectrum = targeted.spectrum;
+    const record = targeted.record(processed);
+    const protect = options.target === undefined ? [source] : [source, options.target];
+    if (options.out !== undefined) checkOutputPath(options.out, protect);
+    if (options.svg !== undefined) {
+      const overlays = targeted.overlay === undefined ? [] : [targeted.overlay];
+      await writeFigures(options.svg, record, spectrum, { axes, lengthUnit, overlays }, options, source);
+    }
+    const text =
+      format === 'json'
+        ? formatJson({ ...spectrumToJson(spectrum), ...targeted.json })
+        : format === 'csv'
+          ? targeted.csv(spectrumToCsv(spectrum, { lengthUnit }))
+          : targeted.table(summaryTable(spectrum, lengthUnit));
+    if (options.out !== undefined) {
+      writeFileAtomic(options.out, text, protect);
+    } else {
+      process.stdout.write(text);
+    }
   } finally {
     await pool?.close();
-  }
-}
-
-async function spectrumOf(
-  source: string,
-  options: SpectrumCliOptions,
-  job: {
-    grid: ReturnType<typeof gridFromOptions>;
-    lengthUnit: ReturnType<typeof parseLengthUnit>;
-    format: string;
-    axes: 'log' | 'linear';
-    target: ReturnType<typeof loadTarget>;
-    sweep: { threads?: number; kernel: SweepKernel };
-    pool: SweepPool | undefined;
-  },
-): Promise<void> {
-  const { grid, lengthUnit, format, axes, target, sweep, pool } = job;
-  const processed = applyProcessing(await loadRecord(source, options), options);
-  const targeted = applyTarget(await sweepSpectrum(processed, grid, sweep, pool), target, options);
-  const spectrum = targeted.spectrum;
-  const record = targeted.record(processed);
-  const protect = options.target === undefined ? [source] : [source, options.target];
-  if (options.out !== undefined) checkOutputPath(options.out, protect);
-  if (options.svg !== undefined) {
-    const overlays = targeted.overlay === undefined ? [] : [targeted.overlay];
-    await writeFigures(options.svg, record, spectrum, { axes, lengthUnit, overlays }, options, source);
-  }
-  const text =
-    format === 'json'
-      ? formatJson({ ...spectrumToJson(spectrum), ...targeted.json })
-      : format === 'csv'
-        ? targeted.csv(spectrumToCsv(spectrum, { lengthUnit }))
-        : targeted.table(summaryTable(spectrum, lengthUnit));
-  if (options.out !== undefined) {
-    writeFileAtomic(options.out, text, protect);
-  } else {
-    process.stdout.write(text);
   }
 }
 
