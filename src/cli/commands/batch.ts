@@ -16,6 +16,7 @@ import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
 import { CAUTION } from '../../caution.js';
 import { QuakesweepError, usageError } from '../../errors.js';
 import { writeFileAtomic } from '../../output/atomic.js';
+import { prepareOutputFolder } from '../../output/folder.js';
 import { formatJson } from '../../output/spectrum-json.js';
 import {
   addProcessingOptions,
@@ -28,7 +29,6 @@ import {
   type RecordCliOptions,
   recordReadOptions,
 } from '../record-options.js';
-import { prepareOutputFolder } from './report.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from './spectrum.js';
 
 export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
@@ -53,7 +53,7 @@ export function registerBatch(program: Command): void {
       '--out <dir>',
       'output folder: DIR/<record>/spectra.json and DIR/suite.json (created if its parent exists)',
     )
-    .option('--jobs <n>', 'worker threads (default: the number of cores)')
+    .option('--jobs <n>', 'threads, the main one included (default: the number of cores)')
     .option(
       '--shard <i/N|auto>',
       'process only the i-th (1-based) of N slices of the sorted files; auto reads Slurm or Kubernetes variables',

@@ -11,8 +11,8 @@ import {
 } from '../../batch/suite.js';
 import { inputError, usageError } from '../../errors.js';
 import { writeFileAtomic } from '../../output/atomic.js';
+import { prepareOutputFolder } from '../../output/folder.js';
 import { formatJson } from '../../output/spectrum-json.js';
-import { prepareOutputFolder } from './report.js';
 
 export function registerMerge(program: Command): void {
   program

@@ -1,5 +1,5 @@
-import { existsSync, mkdirSync, readFileSync, statSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { type AnchorageAnalysis, analyseAnchorage, type ElasticInput } from '../../anchorage/anchorage.js';
 import { anchorageToJson } from '../../anchorage/anchorage-json.js';
@@ -8,6 +8,7 @@ import { type Equipment, parseEquipment } from '../../anchorage/equipment.js';
 import { usageError } from '../../errors.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
+import { prepareOutputFolder } from '../../output/folder.js';
 import { spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
 import {
@@ -93,17 +94,6 @@ export function registerReport(program: Command): void {
         (cmd.parent as unknown as { rawArgs?: string[] } | null)?.rawArgs ?? process.argv.slice(2);
       await runReport(source, options, words);
     });
-}
-
-/** Make the output folder: it may exist (a folder), or be created when its parent exists. */
-export function prepareOutputFolder(out: string, option = '--out'): void {
-  const path = resolve(out);
-  if (existsSync(path)) {
-    if (!statSync(path).isDirectory()) throw usageError(`${option} ${out}: exists and is not a folder`);
-    return;
-  }
-  if (!existsSync(dirname(path))) throw usageError(`${option} ${out}: its parent folder does not exist`);
-  mkdirSync(path);
 }
 
 export async function runReport(
