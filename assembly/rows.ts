@@ -22,10 +22,19 @@ function isBlank(c: u32): bool {
   return c === 32 || c === 9;
 }
 
+function isFieldEnd(c: u32): bool {
+  return c === 44 || isBlank(c);
+}
+
+/** Where the last decimal() stopped: the byte after its number. */
+let decimalEnd: usize = 0;
+
 /**
- * shortDecimal (read.ts) of the bytes [from, to): a sign, digits with at most one point, an `e`
- * or `E` exponent of at most three digits, at most 15 significant digits and a scale within
- * 10^±22, read with one multiplication or division of exact numbers; NaN for anything else.
+ * shortDecimal (read.ts) of the number that starts at `from` and goes no further than `to`: a
+ * sign, digits with at most one point, an `e` or `E` exponent of at most three digits, at most 15
+ * significant digits and a scale within 10^±22, read with one multiplication or division of exact
+ * numbers; NaN for anything else. It stops at the first byte that cannot continue the number
+ * (decimalEnd), which the caller checks ends the field.
  */
 function decimal(from: usize, to: usize): f64 {
   if (from >= to) return NaN;
@@ -33,46 +42,55 @@ function decimal(from: usize, to: usize): f64 {
   let c = <u32>load<u8>(i);
   const negative = c === 45;
   if (negative || c === 43) i++;
-  let mantissa: f64 = 0;
-  let digits = 0;
+  // The digits as an integer: with at most 15 significant ones it is below 2⁵³, so it converts to
+  // f64 exactly, the same number read.ts accumulates in f64 (longer runs may wrap; they are
+  // refused below). A digit is significant from the first that is not 0, across the point.
+  let mantissa: u64 = 0;
   let significant = 0;
+  const integerStart = i;
+  let d: u32 = 0;
+  while (i < to && (d = <u32>load<u8>(i) - 48) < 10) {
+    significant += <i32>((mantissa | <u64>d) !== 0);
+    mantissa = mantissa * 10 + <u64>d;
+    i++;
+  }
+  let digits = <i32>(i - integerStart);
   let decimals = 0;
-  let point = false;
-  for (; i < to; i++) {
-    c = <u32>load<u8>(i);
-    if (c >= 48 && c <= 57) {
-      digits++;
-      if (point) decimals++;
-      if (significant > 0 || c !== 48) significant++;
-      mantissa = mantissa * 10 + <f64>(c - 48);
-    } else if (c === 46 && !point) {
-      point = true;
-    } else {
-      break;
+  if (i < to && load<u8>(i) === 46) {
+    const fractionStart = ++i;
+    while (i < to && (d = <u32>load<u8>(i) - 48) < 10) {
+      significant += <i32>((mantissa | <u64>d) !== 0);
+      mantissa = mantissa * 10 + <u64>d;
+      i++;
     }
+    decimals = <i32>(i - fractionStart);
+    digits += decimals;
   }
   if (digits === 0 || significant > 15) return NaN;
   let exponent = 0;
-  if (i < to) {
-    if (c !== 101 && c !== 69) return NaN;
+  if (i < to && (load<u8>(i) | 32) === 101) {
+    // e or E: a sign, then one to three digits.
     if (++i === to) return NaN;
     c = <u32>load<u8>(i);
     const negativeExponent = c === 45;
     if (negativeExponent || c === 43) i++;
-    if (i === to || to - i > 3) return NaN;
-    for (; i < to; i++) {
-      c = <u32>load<u8>(i);
-      if (c < 48 || c > 57) return NaN;
-      exponent = exponent * 10 + <i32>(c - 48);
+    const exponentStart = i;
+    while (i < to && (d = <u32>load<u8>(i) - 48) < 10) {
+      exponent = exponent * 10 + <i32>d;
+      i++;
     }
+    const exponentDigits = i - exponentStart;
+    if (exponentDigits === 0 || exponentDigits > 3) return NaN;
     if (negativeExponent) exponent = -exponent;
   }
+  decimalEnd = i;
   const scale = exponent - decimals;
   if (scale < -22 || scale > 22) return NaN;
+  const exact = <f64>mantissa;
   const magnitude =
     scale >= 0
-      ? mantissa * load<f64>(POWERS_OF_TEN + ((<usize>scale) << 3))
-      : mantissa / load<f64>(POWERS_OF_TEN + ((<usize>-scale) << 3));
+      ? exact * load<f64>(POWERS_OF_TEN + ((<usize>scale) << 3))
+      : exact / load<f64>(POWERS_OF_TEN + ((<usize>-scale) << 3));
   return negative ? -magnitude : magnitude;
 }
 
@@ -142,15 +160,12 @@ export function scanRows(
       for (;;) {
         while (i < stop && isBlank(<u32>load<u8>(i))) i++;
         if (i === stop && (whitespace !== 0 || column === 0)) break;
-        const from = i;
-        while (i < stop) {
-          const c = <u32>load<u8>(i);
-          if (c === 44 || isBlank(c)) break;
-          i++;
-        }
-        const number = decimal(from, i);
+        // The number reads as far as it goes; the field must end there (a comma, a blank or the
+        // line's end), which is the field numericRow splits off and reads whole.
+        const number = decimal(i, stop);
+        i = decimalEnd;
         // biome-ignore lint/suspicious/noSelfCompare: the NaN test (not a short decimal)
-        if (number !== number) {
+        if (number !== number || (i < stop && !isFieldEnd(<u32>load<u8>(i)))) {
           good = false;
           break;
         }
