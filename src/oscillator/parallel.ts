@@ -5,6 +5,7 @@ import {
   emptyPeaks,
   groupRunner,
   type Peaks,
+  plannedSteps,
   planSweep,
   type SweepOptions,
   type SweepPlan,
@@ -240,8 +241,7 @@ export class SweepPool {
         peaks.saMS2[index] = job.results[2 * count + index];
       }
     }
-    for (const group of plan.groups)
-      peaks.oscillatorSteps += group.length * group[0].substeps * (accelMS2.length - 1);
+    peaks.oscillatorSteps = plannedSteps(plan, accelMS2.length);
     return peaks;
   }
 

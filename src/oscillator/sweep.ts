@@ -183,7 +183,19 @@ export function storeGroup(
     peaks.svMS[index] = values[g * PEAK_STRIDE + 1];
     peaks.saMS2[index] = values[g * PEAK_STRIDE + 2];
   }
-  peaks.oscillatorSteps += group.length * group[0].substeps * (samples - 1);
+  peaks.oscillatorSteps += groupSteps(group, samples);
+}
+
+/** Oscillator-steps a planned group executes over a record of `samples` values. */
+export function groupSteps(group: PlannedOscillator[], samples: number): number {
+  return group.length * group[0].substeps * (samples - 1);
+}
+
+/** Oscillator-steps the whole plan executes over a record of `samples` values. */
+export function plannedSteps(plan: SweepPlan, samples: number): number {
+  let steps = 0;
+  for (const group of plan.groups) steps += groupSteps(group, samples);
+  return steps;
 }
 
 /** The kernel a sweep uses: WebAssembly SIMD where the engine has it, unless told otherwise. */

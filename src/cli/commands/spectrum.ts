@@ -7,7 +7,7 @@ import { usageError } from '../../errors.js';
 import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
 import { SweepPool } from '../../oscillator/parallel.js';
 import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
-import { planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
+import { plannedSteps, planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
 import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
 import { dampingLabel, spectrumToCsv } from '../../output/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
@@ -190,8 +190,7 @@ async function sweepSpectrum(
 ): Promise<Spectrum> {
   const options = { ...grid, kernel: choice.kernel };
   const plan = planSweep(record.accelMS2, record.dtS, options);
-  let steps = 0;
-  for (const group of plan.groups) steps += group.length * group[0].substeps * (record.accelMS2.length - 1);
+  const steps = plannedSteps(plan, record.accelMS2.length);
   const threads = choice.threads ?? (steps >= PARALLEL_MIN_OSCILLATOR_STEPS ? availableParallelism() : 1);
   if (threads === 1)
     return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options, plan));
