@@ -1,7 +1,7 @@
 import { Worker } from 'node:worker_threads';
 import { QuakesweepError } from '../errors.js';
 import { workerScript } from '../oscillator/parallel.js';
-import { processRecord, type RecordOutcome, type RecordTask } from './work.js';
+import { claimRecords, processRecord, type RecordOutcome, type RecordTask } from './work.js';
 
 /** What each batch worker thread is given: the tasks, and the counter from which records are claimed. */
 export interface BatchWorkerData {
@@ -36,15 +36,10 @@ export async function runTasks(
     outcomes[index] = outcome;
     onDone(outcome);
   };
-  if (jobs <= 1 || tasks.length <= 1) {
-    tasks.forEach((task, i) => {
-      finish(i, here(task));
-    });
-    return outcomes;
-  }
   const data: BatchWorkerData = { tasks, counter: new Int32Array(new SharedArrayBuffer(4)) };
   const script = workerScript(import.meta.url, 'batch', 'worker.js');
-  const workers = Array.from({ length: Math.min(jobs, tasks.length) - 1 }, () => {
+  const threads = Math.max(1, Math.min(jobs, tasks.length));
+  const workers = Array.from({ length: threads - 1 }, () => {
     const worker = new Worker(script, { workerData: data });
     return new Promise<void>((resolve, reject) => {
       let finished = false;
@@ -63,13 +58,7 @@ export async function runTasks(
   });
   // Settle them all even when one fails, so that no worker outlives the batch unawaited.
   const done = Promise.allSettled(workers);
-  for (;;) {
-    const index = Atomics.add(data.counter, 0, 1);
-    if (index >= tasks.length) break;
-    finish(index, here(tasks[index]));
-    // Let the workers' outcomes in (and the progress bar move) between this thread's records.
-    await new Promise((resolve) => setImmediate(resolve));
-  }
+  await claimRecords(tasks, data.counter, finish, here);
   for (const result of await done) if (result.status === 'rejected') throw result.reason;
   return outcomes;
 }

@@ -64,3 +64,22 @@ export function processRecord(task: RecordTask): RecordOutcome {
     return { ok: false, file, name, error: describeError(error, file) };
   }
 }
+
+/**
+ * Claim records from `counter` one at a time and run each on this thread, giving its outcome to
+ * `report`, until none is left (the main thread and every batch worker run this). The thread
+ * yields between records, so that the other threads' outcomes come in and the progress bar moves.
+ */
+export async function claimRecords(
+  tasks: readonly RecordTask[],
+  counter: Int32Array,
+  report: (index: number, outcome: RecordOutcome) => void,
+  here: (task: RecordTask) => RecordOutcome = processRecord,
+): Promise<void> {
+  for (;;) {
+    const index = Atomics.add(counter, 0, 1);
+    if (index >= tasks.length) return;
+    report(index, here(tasks[index]));
+    await new Promise((resolve) => setImmediate(resolve));
+  }
+}
