@@ -1,4 +1,15 @@
 #!/usr/bin/env node
-import { main } from '../dist/cli/main.js';
-
-process.exitCode = await main(process.argv.slice(2));
+'use strict';
+// The launcher: loads the CLI (see load-cli.js) and runs it with the command line.
+require('./load-cli.js')
+  .loadMain()
+  .then((main) => main(process.argv.slice(2)))
+  .then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (error) => {
+      process.stderr.write(`quakesweep: internal error: could not start: ${error?.message ?? error}\n`);
+      process.exitCode = 1;
+    },
+  );

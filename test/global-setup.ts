@@ -1,8 +1,8 @@
 import { execFileSync } from 'node:child_process';
 import { resolve } from 'node:path';
 
-// Build the WebAssembly kernel and dist/ once before any test file runs: the CLI tests spawn bin/quakesweep.js, which runs
-// the compiled code. (Building in each file's beforeAll would race between parallel workers.)
+// Build the WebAssembly kernel, dist/ and the CLI bundle once before any test file runs: the CLI tests spawn
+// bin/quakesweep.js, which runs the bundle. (Building in each file's beforeAll would race between parallel workers.)
 export default function setup(): void {
   const root = resolve(import.meta.dirname, '..');
   execFileSync(process.execPath, [resolve(root, 'scripts/build-wasm.mjs')], { cwd: root, stdio: 'inherit' });
@@ -10,4 +10,5 @@ export default function setup(): void {
     cwd: root,
     stdio: 'inherit',
   });
+  execFileSync(process.execPath, [resolve(root, 'scripts/build-cli.mjs')], { cwd: root, stdio: 'inherit' });
 }

@@ -6,5 +6,7 @@ import { claimRecords } from './work.js';
 
 const { tasks, counter } = workerData as BatchWorkerData;
 const post = (message: BatchWorkerMessage) => parentPort?.postMessage(message);
-await claimRecords(tasks, counter, (index, outcome) => post({ index, outcome }));
-post({ finished: true });
+// No top-level await: the CLI bundles this script as CommonJS (scripts/build-cli.mjs).
+void claimRecords(tasks, counter, (index, outcome) => post({ index, outcome })).then(() =>
+  post({ finished: true }),
+);

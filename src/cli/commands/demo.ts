@@ -6,13 +6,17 @@ import { cautionLines } from '../../caution.js';
 import { usageError } from '../../errors.js';
 import { registerReport } from './report.js';
 
-/** The package's records/ folder, found from this file (dist/cli/commands/demo.js) whatever the cwd. */
+/**
+ * The package's records/ folder whatever the cwd: the first records/ holding the demo records
+ * above this file (dist/cli/commands/demo.js, or the CLI bundle dist/cli/quakesweep.cjs).
+ */
 export function recordsFolder(): string {
   const here = dirname(fileURLToPath(import.meta.url));
-  const folder = resolve(here, '..', '..', '..', 'records');
-  if (!existsSync(join(folder, 'marrowby-h1.csv')))
-    throw usageError(`the demo records are missing from ${folder}`);
-  return folder;
+  for (const up of [2, 3]) {
+    const folder = resolve(here, ...Array(up).fill('..'), 'records');
+    if (existsSync(join(folder, 'marrowby-h1.csv'))) return folder;
+  }
+  throw usageError(`the demo records are missing from ${resolve(here, '..', '..', '..', 'records')}`);
 }
 
 /** A path as short as it can be said from the cwd (relative when it lies below it). */

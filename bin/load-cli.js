@@ -1,0 +1,37 @@
+'use strict';
+// Loads the CLI bundle (dist/cli/quakesweep.cjs, made by scripts/build-cli.mjs) with the V8 code
+// cache made beside it at build time. CommonJS (see bin/package.json): a CommonJS entry point
+// starts without Node's ES module loader, which is a few milliseconds of every run.
+const { existsSync, readFileSync } = require('node:fs');
+const { createRequire } = require('node:module');
+const { dirname, join } = require('node:path');
+const { Script } = require('node:vm');
+
+const BUNDLE = join(__dirname, '..', 'dist', 'cli', 'quakesweep.cjs');
+const CACHE = `${BUNDLE}.cache`;
+
+/**
+ * Compile and run the bundle; its exports are those of dist/cli/main.js. With `cache` (the
+ * default) the code cache is handed to V8, which refuses it if it was made by another Node
+ * version or for other source; the bundle is then compiled as usual. `script` can make a cache.
+ */
+function compileCli({ cache = true } = {}) {
+  const source = readFileSync(BUNDLE, 'utf8');
+  const cachedData = cache && existsSync(CACHE) ? readFileSync(CACHE) : undefined;
+  // The wrapper of a CommonJS module, on the bundle's first line so that line numbers hold.
+  const script = new Script(`(function (exports, require, module, __filename, __dirname) {${source}\n})`, {
+    filename: BUNDLE,
+    cachedData,
+  });
+  const module = { exports: {} };
+  script.runInThisContext()(module.exports, createRequire(BUNDLE), module, BUNDLE, dirname(BUNDLE));
+  return { exports: module.exports, script };
+}
+
+/** The CLI's main(argv): from the bundle when it was built, else from the compiled modules. */
+async function loadMain() {
+  if (existsSync(BUNDLE)) return compileCli().exports.main;
+  return (await import('../dist/cli/main.js')).main;
+}
+
+module.exports = { BUNDLE, CACHE, compileCli, loadMain };
