@@ -1,4 +1,4 @@
-import { createReadStream } from 'node:fs';
+import { closeSync, openSync, readSync } from 'node:fs';
 import type { Command } from 'commander';
 import { usageError } from '../errors.js';
 import { type ReadOptions, type RecordLayout, readRecordStream, unitWarnings } from '../record/read.js';
@@ -58,11 +58,8 @@ export function recordReadOptions(source: string, options: RecordCliOptions): Re
  */
 export async function loadRecord(source: string, options: RecordCliOptions): Promise<GroundRecord> {
   const readOptions = recordReadOptions(source, options);
-  // 256 KiB reads: fewer round trips to the file system than 64 KiB (each an idle wait), and
-  // still a stream; 1 MiB reads left more large chunks for the collector (2,000,000 samples
-  // peaked at 224 MB against 165 MB).
-  const stream = source === '-' ? process.stdin : createReadStream(source, { highWaterMark: 1 << 18 });
-  const record = await readRecordStream(stream, readOptions).catch((error: unknown) => {
+  const chunks = source === '-' ? process.stdin : fileChunks(source);
+  const record = await readRecordStream(chunks, readOptions).catch((error: unknown) => {
     // Errors of reading (a folder, say) come without the path; give them the one the user typed.
     const errno = error as NodeJS.ErrnoException;
     if (typeof errno?.code === 'string' && !errno.path) errno.path = source;
@@ -71,6 +68,27 @@ export async function loadRecord(source: string, options: RecordCliOptions): Pro
   for (const warning of unitWarnings(record))
     process.stderr.write(`quakesweep: warning: ${source}: ${warning}\n`);
   return record;
+}
+
+/**
+ * A file's bytes, 256 KiB at a time, read as they are asked for (the file is closed when the
+ * reader stops early). Plain reads rather than a file stream: the reader takes the chunks one
+ * after another and does nothing meanwhile, and the stream machinery (with node:fs/promises,
+ * which it loads) cost 2–3 ms of every run. 256 KiB: 1 MiB reads left more large chunks for the
+ * collector (2,000,000 samples peaked at 224 MB against 165 MB).
+ */
+async function* fileChunks(path: string): AsyncGenerator<Uint8Array> {
+  const fd = openSync(path, 'r');
+  try {
+    for (;;) {
+      const chunk = Buffer.allocUnsafe(1 << 18);
+      const length = readSync(fd, chunk, 0, chunk.length, null);
+      if (length === 0) return;
+      yield chunk.subarray(0, length);
+    }
+  } finally {
+    closeSync(fd);
+  }
 }
 
 export function positiveNumber(option: string, text: string): number {

@@ -72,10 +72,8 @@ export class RowScanner {
   }
 
   private constructor() {
-    const text = atob(ROWS_WASM_BASE64);
-    const bytes = new Uint8Array(text.length);
-    for (let i = 0; i < text.length; i++) bytes[i] = text.charCodeAt(i);
-    const instance = new WebAssembly.Instance(new WebAssembly.Module(bytes), {});
+    const module = new WebAssembly.Module(Buffer.from(ROWS_WASM_BASE64, 'base64'));
+    const instance = new WebAssembly.Instance(module, {});
     this.exports = instance.exports as unknown as RowsExports;
     this.text = this.exports.heapBase();
     this.values = this.text + TEXT_BYTES;
