@@ -10,6 +10,7 @@ import {
 } from './kernel.js';
 import { executedStepCoefficients, executionPlan, type Method, substepCount } from './recurrence.js';
 import { WASM_WIDTH, WasmSweeper, wasmSimdSupported } from './wasm/kernel.js';
+import { PLAN_INPUT, wasmAverageRows, wasmRecordSums } from './wasm/plan.js';
 
 export interface SweepOptions {
   /** Natural periods, s; T = 0 is a rigid oscillator. */
@@ -42,6 +43,8 @@ export interface Peaks {
   saMS2: Float64Array;
   /** Oscillator-steps actually executed (sub-steps included). */
   oscillatorSteps: number;
+  /** Peak |ground acceleration| of the record swept, m/s² (the SA of rigid oscillators). */
+  pgaMS2: number;
 }
 
 /** Which kernel steps the oscillators: the WebAssembly SIMD one, the TypeScript one, or the first where it runs. */
@@ -60,6 +63,8 @@ export interface PlannedOscillator {
   substeps: number;
   /** Sub-steps of the method composed into each executed step (1: none). */
   composed: number;
+  /** Its row of SweepPlan.coefficients; a group's rows follow one another. */
+  slot: number;
 }
 
 /** What every kernel and thread of a sweep shares: the grid, the method and the record's bounds. */
@@ -75,6 +80,12 @@ export interface SweepPlan {
   bounds: GroundBounds;
   /** Groups of at most GROUP_SIZE oscillators with the same sub-step count, in sub-step order. */
   groups: PlannedOscillator[][];
+  /**
+   * Every planned oscillator's executed-step coefficients and refinement thresholds, packed as
+   * packCoefficients packs them (COEFFICIENT_STRIDE a row, row `slot`), computed once here so
+   * that no thread of the sweep computes them again.
+   */
+  coefficients: Float64Array;
 }
 
 /** Oscillators per planned group: one pass of the WebAssembly kernel, two of the TypeScript one. */
@@ -128,6 +139,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
         damping: dampings[d],
         substeps: run.steps,
         composed: run.composed,
+        slot: 0,
       });
     }
   }
@@ -144,7 +156,33 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
     }
     groups.push(group);
   }
-  return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups };
+  for (let slot = 0; slot < oscillators.length; slot++) oscillators[slot].slot = slot;
+  const coefficients = planCoefficients(oscillators, method, dtS, bounds, prewarp);
+  return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups, coefficients };
+}
+
+/**
+ * packCoefficients of every planned oscillator, row `slot` each. Pre-warped Newmark average
+ * acceleration (the default) is computed by the plan's WebAssembly twin where it runs (the same
+ * numbers; see wasm/plan.ts), the rest here.
+ */
+function planCoefficients(
+  oscillators: PlannedOscillator[],
+  method: Method,
+  dtS: number,
+  bounds: GroundBounds,
+  prewarp: boolean,
+): Float64Array {
+  const rows = new Float64Array(oscillators.length * COEFFICIENT_STRIDE);
+  if (method === 'newmark-average' && prewarp) {
+    const inputs = new Float64Array(oscillators.length * PLAN_INPUT);
+    for (const o of oscillators) {
+      inputs.set([o.periodS, o.damping, dtS / o.substeps, o.composed], o.slot * PLAN_INPUT);
+    }
+    if (wasmAverageRows(inputs, oscillators.length, bounds, rows)) return rows;
+  }
+  for (const o of oscillators) packCoefficients(rows, o.slot, o, method, dtS / o.substeps, bounds, prewarp);
+  return rows;
 }
 
 /** Result arrays of a plan, with the rigid oscillators' SA (the PGA) filled in. */
@@ -158,6 +196,7 @@ export function emptyPeaks(plan: SweepPlan): Peaks {
     svMS: new Float64Array(count),
     saMS2: new Float64Array(count),
     oscillatorSteps: 0,
+    pgaMS2: plan.pgaMS2,
   };
   for (let d = 0; d < plan.dampings.length; d++) {
     for (let p = 0; p < plan.periodsS.length; p++) {
@@ -217,33 +256,24 @@ export function groupRunner(
   plan: SweepPlan,
   kernel: SweepKernel,
 ): (group: PlannedOscillator[]) => Float64Array {
-  const packed = new Float64Array(GROUP_SIZE * COEFFICIENT_STRIDE);
   const values = new Float64Array(GROUP_SIZE * PEAK_STRIDE);
   const dtS = plan.dtS;
-  const pack = (group: PlannedOscillator[], stepS: number) => {
-    for (let g = 0; g < group.length; g++) {
-      packCoefficients(packed, g, group[g], plan.method, stepS, plan.bounds, plan.prewarp);
-    }
-  };
+  const rows = (group: PlannedOscillator[]) =>
+    plan.coefficients.subarray(
+      group[0].slot * COEFFICIENT_STRIDE,
+      (group[0].slot + group.length) * COEFFICIENT_STRIDE,
+    );
   if (resolveKernel(kernel) === 'wasm') {
     const sweeper = new WasmSweeper(accelMS2, STRETCH_STEPS);
+    // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),
+    // unless sub-steps are composed.
+    const average = plan.method === 'newmark-average';
     return (group) => {
-      // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),
-      // unless sub-steps are composed.
-      const symmetric = plan.method === 'newmark-average' && group.every((o) => o.composed === 1);
-      const stepS = dtS / group[0].substeps;
-      pack(group, stepS);
-      const blockSteps = checkpointBlockSteps((accelMS2.length - 1) * group[0].substeps);
-      sweeper.run(
-        packed,
-        COEFFICIENT_STRIDE,
-        group.length,
-        group[0].substeps,
-        stepS,
-        blockSteps,
-        symmetric,
-        values,
-      );
+      const substeps = group[0].substeps;
+      let symmetric = average;
+      for (let g = 0; g < group.length; g++) if (group[g].composed !== 1) symmetric = false;
+      const blockSteps = checkpointBlockSteps((accelMS2.length - 1) * substeps);
+      sweeper.run(rows(group), group.length, substeps, dtS / substeps, blockSteps, symmetric, values);
       return values;
     };
   }
@@ -253,7 +283,7 @@ export function groupRunner(
   return (group) => {
     const substeps = group[0].substeps;
     const stepS = dtS / substeps;
-    pack(group, stepS);
+    const packed = rows(group);
     for (let first = 0; first < group.length; first += GROUP_WIDTH) {
       const count = Math.min(GROUP_WIDTH, group.length - first);
       for (let g = 0; g < GROUP_WIDTH; g++) {
@@ -464,6 +494,9 @@ export function recordStatistics(
   accelMS2: Float64Array,
   dtS: number,
 ): { roughness: number; bounds: GroundBounds } {
+  // The pass over the record in WebAssembly where it runs (the same sums; see wasm/plan.ts).
+  const sums = wasmRecordSums(accelMS2);
+  if (sums !== undefined) return statisticsFromSums(sums[0], sums[1], sums[2], sums[3], accelMS2.length, dtS);
   let sum = accelMS2[0] * accelMS2[0];
   let sumDifferences = 0;
   let pgaMS2 = Math.abs(accelMS2[0]);
@@ -476,8 +509,19 @@ export function recordStatistics(
     pgaMS2 = Math.max(pgaMS2, Math.abs(a));
     jump = Math.max(jump, Math.abs(difference));
   }
-  const roughness =
-    sum === 0 ? 0 : Math.sqrt(sumDifferences / (accelMS2.length - 1) / (sum / accelMS2.length));
+  return statisticsFromSums(sum, sumDifferences, pgaMS2, jump, accelMS2.length, dtS);
+}
+
+/** Roughness and bounds from the pass's Σa², Σ(Δa)², max |a| and max |Δa| over `samples` samples. */
+function statisticsFromSums(
+  sum: number,
+  sumDifferences: number,
+  pgaMS2: number,
+  jump: number,
+  samples: number,
+  dtS: number,
+): { roughness: number; bounds: GroundBounds } {
+  const roughness = sum === 0 ? 0 : Math.sqrt(sumDifferences / (samples - 1) / (sum / samples));
   return { roughness, bounds: { pgaMS2, jerkMS3: jump / dtS } };
 }
 

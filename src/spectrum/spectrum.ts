@@ -1,6 +1,6 @@
 import type { Method } from '../oscillator/recurrence.js';
 import { type Peaks, sweepOscillators } from '../oscillator/sweep.js';
-import { type GroundRecord, type ProcessingStep, peakGroundAcceleration } from '../record/record.js';
+import type { GroundRecord, ProcessingStep } from '../record/record.js';
 import { STANDARD_GRAVITY_MS2 } from '../units.js';
 
 /** The response spectra of one record at one damping ratio. All arrays are indexed by period. */
@@ -51,10 +51,13 @@ export function responseSpectrum(record: GroundRecord, options: SpectrumOptions)
   return assembleSpectrum(record, peaks);
 }
 
-/** Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). */
+/**
+ * Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). `peaks` is
+ * the sweep of `record` (its PGA is taken from the sweep).
+ */
 export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
   const n = peaks.periodsS.length;
-  const pgaMS2 = peakGroundAcceleration(record);
+  const pgaMS2 = peaks.pgaMS2;
   const curves: SpectrumCurve[] = [];
   for (let d = 0; d < peaks.dampings.length; d++) {
     const sdM = peaks.sdM.slice(d * n, (d + 1) * n);

@@ -136,6 +136,7 @@ export class WasmSweeper {
   private readonly record: number;
   /** Pass 1's checkpoints, at the end of the layout; memory grows when a group needs more. */
   private readonly checkpoints: number;
+  private view: Float64Array;
 
   constructor(accelMS2: Float64Array, chunkSteps: number) {
     sweepInstance ??= {
@@ -159,6 +160,7 @@ export class WasmSweeper {
     // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
     this.record = take(accelMS2.length * 8 + 16);
     this.checkpoints = next;
+    this.view = new Float64Array(this.kernel.exports.memory.buffer);
   }
 
   /** The memory as f64, grown to hold `bytes` of checkpoints and holding this sweeper's record. */
@@ -166,23 +168,24 @@ export class WasmSweeper {
     const memory = this.kernel.exports.memory;
     const pages = Math.ceil((this.checkpoints + bytes) / 65536) - memory.buffer.byteLength / 65536;
     if (pages > 0) memory.grow(pages);
-    const view = new Float64Array(memory.buffer);
+    // One view while the memory stays as it is (growing it replaces its buffer).
+    if (this.view.buffer !== memory.buffer) this.view = new Float64Array(memory.buffer);
     if (this.kernel.holder !== this) {
-      view.set(this.accelMS2, this.record / 8);
-      view.fill(0, (this.record + this.samples * 8) / 8, (this.record + this.samples * 8 + 16) / 8);
+      this.view.set(this.accelMS2, this.record / 8);
+      this.view.fill(0, (this.record + this.samples * 8) / 8, (this.record + this.samples * 8 + 16) / 8);
       this.kernel.holder = this;
     }
-    return view;
+    return this.view;
   }
 
   /**
    * Step `count` (≤ WASM_WIDTH) oscillators from rest over the record with `substeps` sub-steps of
-   * `stepS` and checkpoints every `blockSteps` steps; `packed` holds their coefficients at
-   * COEFFICIENT_STRIDE `stride`, and their peaks are written to `out` at PEAK_STRIDE (3) per oscillator.
+   * `stepS` and checkpoints every `blockSteps` steps; `packed` holds their coefficients, one row of
+   * COEFFICIENT_STRIDE after another, and their peaks are written to `out` at PEAK_STRIDE (3) per
+   * oscillator.
    */
   run(
     packed: Float64Array,
-    stride: number,
     count: number,
     substeps: number,
     stepS: number,
@@ -193,10 +196,12 @@ export class WasmSweeper {
     const blocks = Math.ceil(((this.samples - 1) * substeps) / blockSteps);
     const view = this.memory(blocks * WASM_WIDTH * CHECKPOINT * 8);
     const c = this.coefficients / 8;
+    // Lanes side by side (oscillators 0 and 1 in the first vector, 2 and 3 in the second); a
+    // short group repeats its last oscillator.
     for (let i = 0; i < WASM_WIDTH; i++) {
-      const from = Math.min(i, count - 1) * stride;
-      const lane = (i >> 1) * COEFFICIENTS * 2 + (i & 1);
-      for (let q = 0; q < COEFFICIENTS; q++) view[c + lane + 2 * q] = packed[from + q];
+      const from = Math.min(i, count - 1) * COEFFICIENTS;
+      const lane = c + (i >> 1) * COEFFICIENTS * 2 + (i & 1);
+      for (let q = 0; q < COEFFICIENTS; q++) view[lane + 2 * q] = packed[from + q];
     }
     this.kernel.exports.runGroup(
       this.record,
@@ -216,8 +221,8 @@ export class WasmSweeper {
     );
     const p = this.peaks / 8;
     for (let i = 0; i < count; i++) {
-      const lane = (i >> 1) * PEAKS * 2 + (i & 1);
-      for (let q = 0; q < PEAKS; q++) out[i * PEAKS + q] = view[p + lane + 2 * q];
+      const lane = p + (i >> 1) * PEAKS * 2 + (i & 1);
+      for (let q = 0; q < PEAKS; q++) out[i * PEAKS + q] = view[lane + 2 * q];
     }
   }
 }
