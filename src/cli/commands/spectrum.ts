@@ -1,4 +1,4 @@
-import { existsSync, statSync } from 'node:fs';
+import { closeSync, existsSync, fstatSync, openSync, readSync, statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
@@ -137,12 +137,13 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
 }
 
 /**
- * Oscillator-steps from which a sweep is split over threads. A worker costs 30–50 ms to start and
- * runs its first job with cold code, so in a whole `spectrum` run two threads only caught up with
- * one at about 80 million steps (measured on the benchmark's record with 400 periods; 200 were
- * faster on one thread, 800 on two). Smaller sweeps stay on one thread.
+ * Oscillator-steps from which a sweep is split over threads. A worker thread of the CLI takes
+ * about 23 ms to start and the first groups it and this thread step run cold, so in a whole
+ * `spectrum` run (medians of 11 on the benchmark's record, 40,000 samples, five dampings) two
+ * threads were slower below this (4 million steps: 92 ms against 85; 10 million: 99 against 94),
+ * level at 20 million (109 and 109) and faster above (40 million: 129 against 137).
  */
-export const PARALLEL_MIN_OSCILLATOR_STEPS = 80_000_000;
+export const PARALLEL_MIN_OSCILLATOR_STEPS = 20_000_000;
 
 function sweepChoice(options: SpectrumCliOptions): { threads?: number; kernel: SweepKernel } {
   const kernel = options.kernel ?? 'auto';
@@ -164,10 +165,11 @@ export function parseThreads(text: string): number {
 
 /**
  * The threads of a sweep that is likely to be split (PARALLEL_MIN_OSCILLATOR_STEPS), started
- * before the record is read so that they start and load their modules meanwhile; undefined
- * otherwise. The record's length is guessed from the file's size at 12 bytes a sample (short
- * lines, so the guess errs towards starting them); a wrong guess costs only the other cores'
- * time, and sweepSpectrum decides from the record itself.
+ * before the record is read so that they start meanwhile; undefined otherwise. The record's
+ * length is guessed from the file's size and the lines of its first 8 KiB (a sample a line in the
+ * single and table layouts; a wrapped file guesses short, and is split all the same when it is
+ * large, its threads joining later). A wrong guess costs the other core's time and, in this one,
+ * a few milliseconds of a short run; sweepSpectrum decides from the record itself.
  */
 function earlyPool(
   source: string,
@@ -175,10 +177,29 @@ function earlyPool(
   choice: { threads?: number },
 ): SweepPool | undefined {
   const threads = choice.threads ?? availableParallelism();
-  if (threads === 1 || source === '-' || !existsSync(source)) return undefined;
-  const samples = statSync(source).size / 12;
+  if (threads === 1 || source === '-') return undefined;
+  const samples = estimatedLines(source);
   const steps = samples * grid.periodsS.filter((t) => t > 0).length * grid.dampings.length;
   return steps >= PARALLEL_MIN_OSCILLATOR_STEPS ? new SweepPool(threads) : undefined;
+}
+
+/** Lines of a file, estimated from its size and the line ends of its first 8 KiB; 0 if it cannot be read. */
+function estimatedLines(path: string): number {
+  let fd: number | undefined;
+  try {
+    fd = openSync(path, 'r');
+    const size = fstatSync(fd).size;
+    const head = Buffer.allocUnsafe(Math.min(size, 1 << 13));
+    const length = readSync(fd, head, 0, head.length, 0);
+    let ends = 0;
+    for (let i = 0; i < length; i++) if (head[i] === 10) ends++;
+    if (ends === 0) for (let i = 0; i < length; i++) if (head[i] === 13) ends++; // lone CR line ends
+    return length === 0 ? 0 : (size * Math.max(ends, 1)) / length;
+  } catch {
+    return 0;
+  } finally {
+    if (fd !== undefined) closeSync(fd);
+  }
 }
 
 /** The spectrum of a record, its sweep split over threads (`pool`'s, when given) when it is large. */
