@@ -101,7 +101,7 @@ function decimal(from: usize, to: usize): f64 {
  * `valueColumn` with |value|·`unit` at most `limit`, and (with more than one column) a time that
  * increases by the mean step to 1e-6. Empty lines are skipped; lines end with `\n` or `\r\n`.
  * It stops before the first line that is anything else, before a line with no end in the text,
- * and before `capacity` values. The values go to `values`; `state` holds, in and out: [0] the
+ * and before `capacity` values. The values, times `unit` (m/s²), go to `values`; `state` holds, in and out: [0] the
  * samples read before (and after), [1] the first time, [2] the previous time; [3] the bytes read,
  * [4] the lines read, [5] the index among them of the last that held a row (−1 if none) and
  * [6] why it stopped (1: before a line it does not read; 0: at the end of the text or of the
@@ -198,7 +198,8 @@ export function scanRows(
         }
         timePrevious = time;
       }
-      store<f64>(values + ((<usize>written) << 3), value);
+      // In m/s², as numericRow stores it: the value times the unit's factor.
+      store<f64>(values + ((<usize>written) << 3), value * unit);
       written++;
       count++;
       lastRow = lines;

@@ -121,18 +121,25 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const { roughness, bounds } = recordStatistics(accelMS2, dtS);
   const prewarp = options.prewarp ?? true;
   const oscillators: PlannedOscillator[] = [];
+  const runOf = (periodS: number, damping: number) => {
+    const substeps = substepCount(method, periodS, dtS, {
+      damping,
+      durationS,
+      prewarp,
+      roughness,
+      stepsPerPeriod: options.stepsPerPeriod,
+    });
+    return executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod);
+  };
+  // Pre-warped, the rule does not depend on the damping: once a period.
+  const runs = prewarp
+    ? Array.from(periodsS, (periodS) => (periodS === 0 ? undefined : runOf(periodS, 0)))
+    : [];
   for (let d = 0; d < dampings.length; d++) {
     for (let p = 0; p < periodsS.length; p++) {
       const periodS = periodsS[p];
       if (periodS === 0) continue;
-      const substeps = substepCount(method, periodS, dtS, {
-        damping: dampings[d],
-        durationS,
-        prewarp,
-        roughness,
-        stepsPerPeriod: options.stepsPerPeriod,
-      });
-      const run = executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod);
+      const run = runs[p] ?? runOf(periodS, dampings[d]);
       oscillators.push({
         index: d * periodsS.length + p,
         periodS,
@@ -143,21 +150,32 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
       });
     }
   }
-  oscillators.sort((a, b) => a.substeps - b.substeps || a.index - b.index);
+  // In sub-step order, and in index order among equal counts (the order in which they were
+  // made): by bucket, since a comparison sort's thousands of calls ran cold in a fresh process.
+  const buckets = new Map<number, PlannedOscillator[]>();
+  for (const o of oscillators) {
+    const bucket = buckets.get(o.substeps);
+    if (bucket === undefined) buckets.set(o.substeps, [o]);
+    else bucket.push(o);
+  }
+  const ordered: PlannedOscillator[] = [];
+  for (const substeps of [...buckets.keys()].sort((a, b) => a - b)) {
+    for (const o of buckets.get(substeps) as PlannedOscillator[]) ordered.push(o);
+  }
   const groups: PlannedOscillator[][] = [];
-  for (let start = 0; start < oscillators.length; ) {
-    const group = [oscillators[start++]];
+  for (let start = 0; start < ordered.length; ) {
+    const group = [ordered[start++]];
     while (
       group.length < GROUP_SIZE &&
-      start < oscillators.length &&
-      oscillators[start].substeps === group[0].substeps
+      start < ordered.length &&
+      ordered[start].substeps === group[0].substeps
     ) {
-      group.push(oscillators[start++]);
+      group.push(ordered[start++]);
     }
     groups.push(group);
   }
-  for (let slot = 0; slot < oscillators.length; slot++) oscillators[slot].slot = slot;
-  const coefficients = planCoefficients(oscillators, method, dtS, bounds, prewarp);
+  for (let slot = 0; slot < ordered.length; slot++) ordered[slot].slot = slot;
+  const coefficients = planCoefficients(ordered, method, dtS, bounds, prewarp);
   return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups, coefficients };
 }
 
@@ -177,7 +195,11 @@ function planCoefficients(
   if (method === 'newmark-average' && prewarp) {
     const inputs = new Float64Array(oscillators.length * PLAN_INPUT);
     for (const o of oscillators) {
-      inputs.set([o.periodS, o.damping, dtS / o.substeps, o.composed], o.slot * PLAN_INPUT);
+      const at = o.slot * PLAN_INPUT;
+      inputs[at] = o.periodS;
+      inputs[at + 1] = o.damping;
+      inputs[at + 2] = dtS / o.substeps;
+      inputs[at + 3] = o.composed;
     }
     if (wasmAverageRows(inputs, oscillators.length, bounds, rows)) return rows;
   }

@@ -8,12 +8,14 @@ import { type RowLayout, RowScanner } from '../../src/record/rows.js';
 // before any other line, which the reader then reads itself. Whole files are checked against the
 // csv-parse-only reader in read-scanner.test.ts, which goes through this scanner too.
 
+// Values in m/s² (a factor of 1), so that the values read are the numbers written; the test of
+// the factor is below.
 const layout = (overrides: Partial<RowLayout> = {}): RowLayout => ({
   columns: 2,
   valueColumn: 2,
   whitespace: false,
-  unitMS2: 9.80665,
-  limitMS2: 9.80665e6,
+  unitMS2: 1,
+  limitMS2: 1e6,
   count: 1,
   timeFirstS: 0,
   timePreviousS: 0,
@@ -57,7 +59,7 @@ describe('the WebAssembly row scanner', () => {
     ['a lone carriage return', '0.01,1\n0.02,2\r0.03,3\n'],
     ['a time that does not increase', '0.01,1\n0.01,2\n'],
     ['a step that changes', '0.01,1\n0.035,2\n'],
-    ['a value above 10⁶ g', '0.01,1\n0.02,2e6\n'],
+    ['a value above the limit (10⁶ m/s² here)', '0.01,1\n0.02,2e6\n'],
     ['a line of blanks', '0.01,1\n   \n'],
   ])('stops before %s, after the rows before it', (_, text) => {
     // Two samples before, at −0.01 s and 0 s: the step is 0.01 s from the first row on.
@@ -65,6 +67,18 @@ describe('the WebAssembly row scanner', () => {
     expect(result.refused).toBe(true);
     expect(result.values).toEqual([1]);
     expect(result.next).toBe(text.indexOf('\n') + 1);
+  });
+
+  it("stores each value times the unit's factor, as numericRow does (m/s²)", () => {
+    const text = '0.01,1.5\n0.02,-0.3\n0.03,0.123456789\n';
+    expect(scan(text, { unitMS2: 9.80665, limitMS2: 9.80665e6 }).values).toEqual([
+      1.5 * 9.80665,
+      -0.3 * 9.80665,
+      0.123456789 * 9.80665,
+    ]);
+    // The limit applies to the value in m/s²: 2·10⁵ g passes 10⁶ m/s² only as 2·10⁵ m/s².
+    expect(scan('0.01,2e5\n', { unitMS2: 9.80665, limitMS2: 1e6 }).refused).toBe(true);
+    expect(scan('0.01,2e5\n', { unitMS2: 1, limitMS2: 1e6 }).refused).toBe(false);
   });
 
   it('stops, without refusing, at a line with no end yet and at a carriage return that ends the text', () => {
