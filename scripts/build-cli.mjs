@@ -57,6 +57,10 @@ const common = {
   define: { 'import.meta.url': '__bundleUrl' },
   banner: { js: "const __bundleUrl = require('node:url').pathToFileURL(__filename).href;" },
   plugins: [lazyChildProcess],
+  // Without blanks and comments (names kept): a smaller file to read and to scan for the functions
+  // the cache does not hold; 2 ms of a `spectrum` run (medians of 31, interleaved).
+  minifyWhitespace: true,
+  minifySyntax: true,
   logLevel: 'warning',
   legalComments: 'eof',
 };
