@@ -90,16 +90,32 @@ export class RowScanner {
    * end of what it was given).
    */
   scan(source: string, from: number, layout: RowLayout): RowScan & { refused: boolean } {
-    const memory = this.exports.memory.buffer;
     const piece = source.slice(from, from + TEXT_BYTES);
-    const { written } = this.encoder.encodeInto(piece, new Uint8Array(memory, this.text, TEXT_BYTES));
+    const { written } = this.encoder.encodeInto(piece, this.textView());
+    return this.run(from, written, layout);
+  }
+
+  /** scan() over UTF-8 bytes from byte `from` on: the scanner stops at the first byte outside ASCII. */
+  scanBytes(bytes: Uint8Array, from: number, layout: RowLayout): RowScan & { refused: boolean } {
+    const piece = bytes.subarray(from, from + TEXT_BYTES);
+    this.textView().set(piece);
+    return this.run(from, piece.length, layout);
+  }
+
+  private textView(): Uint8Array {
+    return new Uint8Array(this.exports.memory.buffer, this.text, TEXT_BYTES);
+  }
+
+  /** Scan the `length` bytes laid out at the text's place, which began at `from` in the source. */
+  private run(from: number, length: number, layout: RowLayout): RowScan & { refused: boolean } {
+    const memory = this.exports.memory.buffer;
     const state = new Float64Array(memory, this.state, 8);
     state[0] = layout.count;
     state[1] = layout.timeFirstS;
     state[2] = layout.timePreviousS;
     this.exports.scanRows(
       this.text,
-      written,
+      length,
       layout.columns,
       layout.valueColumn,
       layout.whitespace ? 1 : 0,
