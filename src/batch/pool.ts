@@ -1,6 +1,5 @@
-import { Worker } from 'node:worker_threads';
 import { QuakesweepError } from '../errors.js';
-import { workerScript } from '../oscillator/parallel.js';
+import { startWorker, workerScript } from '../oscillator/parallel.js';
 import { claimRecords, processRecord, type RecordOutcome, type RecordTask } from './work.js';
 
 /** What each batch worker thread is given: the tasks, and the counter from which records are claimed. */
@@ -40,7 +39,7 @@ export async function runTasks(
   const script = workerScript(import.meta.url, 'batch', 'worker.js');
   const threads = Math.max(1, Math.min(jobs, tasks.length));
   const workers = Array.from({ length: threads - 1 }, () => {
-    const worker = new Worker(script, { workerData: data });
+    const worker = startWorker(script, { workerData: data });
     return new Promise<void>((resolve, reject) => {
       let finished = false;
       worker.on('message', (message: BatchWorkerMessage) => {

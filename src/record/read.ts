@@ -536,15 +536,24 @@ class LineScanner {
    */
   pushBytes(bytes: Uint8Array, decode: (bytes: Uint8Array) => string): void {
     let from = 0;
+    // Before the reader knows the layout (lines to skip, a header, the first data row): a line at
+    // a time, for as many lines as the head that chose the separator, so that the rows after them
+    // in the first chunk go to the scanner too.
+    for (let lines = 0; !this.reader.readsRows && lines <= this.skip + SNIFF_LINES; lines++) {
+      const lineFeed = bytes.indexOf(10, from);
+      if (lineFeed === -1) break;
+      this.push(decode(bytes.subarray(from, lineFeed + 1)));
+      from = lineFeed + 1;
+    }
     if (this.pending > 0 || this.afterCarriageReturn) {
-      // The line cut between chunks (or the \n of a cut \r\n) ends at the first line feed: as text.
-      const lineFeed = bytes.indexOf(10);
+      // The line cut between chunks (or the \n of a cut \r\n) ends at the next line feed: as text.
+      const lineFeed = bytes.indexOf(10, from);
       if (lineFeed === -1) {
-        this.push(decode(bytes));
+        this.push(decode(from === 0 ? bytes : bytes.subarray(from)));
         return;
       }
+      this.push(decode(bytes.subarray(from, lineFeed + 1)));
       from = lineFeed + 1;
-      this.push(decode(bytes.subarray(0, from)));
     }
     if (this.started && !this.afterCarriageReturn && this.pending === 0 && this.reader.readsRows) {
       const { next, lines } = this.reader.rowsFromBytes(bytes, from, this.line);
