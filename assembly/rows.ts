@@ -214,3 +214,25 @@ export function scanRows(
   store<f64>(state, <f64>lastRow, 40);
   store<f64>(state, <f64>refused, 48);
 }
+
+/**
+ * createRecord's pass over the `n` samples at `samples` (src/record/record.ts): writes to `out` the
+ * peak |sample| before the first sample that is not finite, and that sample's index (−1 when all
+ * are finite). The same comparisons as the TypeScript loop, which ran unoptimized in a fresh
+ * process: 1–3 ms for a 40,000-sample record.
+ */
+export function samplePeak(samples: usize, n: i32, out: usize): void {
+  let peak: f64 = 0;
+  let bad = -1;
+  for (let i = 0; i < n; i++) {
+    const a = load<f64>(samples + ((<usize>i) << 3));
+    if (!isFinite<f64>(a)) {
+      bad = i;
+      break;
+    }
+    const magnitude = Math.abs(a);
+    if (magnitude > peak) peak = magnitude;
+  }
+  store<f64>(out, peak);
+  store<f64>(out, <f64>bad, 8);
+}

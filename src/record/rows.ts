@@ -20,6 +20,7 @@ interface RowsExports {
     capacity: number,
     state: number,
   ): void;
+  samplePeak(samples: number, count: number, out: number): void;
 }
 
 /** The reader's layout and running time check, as numericRow in read.ts sees them. */
@@ -81,6 +82,25 @@ export class RowScanner {
     const memory = this.exports.memory;
     const pages = Math.ceil((this.state + 64) / 65536) - memory.buffer.byteLength / 65536;
     if (pages > 0) memory.grow(pages);
+  }
+
+  /**
+   * createRecord's pass over the samples (assembly/rows.ts, samplePeak): the peak |sample| and
+   * the index of the first sample that is not finite (−1 when all are). In pieces of CAPACITY
+   * samples, through the memory the rows are read into.
+   */
+  samplePeak(samples: Float64Array): { peak: number; firstNotFinite: number } {
+    let peak = 0;
+    for (let from = 0; from < samples.length; from += CAPACITY) {
+      const piece = samples.subarray(from, from + CAPACITY);
+      const memory = this.exports.memory.buffer;
+      new Float64Array(memory, this.values, piece.length).set(piece);
+      this.exports.samplePeak(this.values, piece.length, this.state);
+      const out = new Float64Array(memory, this.state, 2);
+      if (out[0] > peak) peak = out[0];
+      if (out[1] >= 0) return { peak, firstNotFinite: from + out[1] };
+    }
+    return { peak, firstNotFinite: -1 };
   }
 
   /**

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readRecordText } from '../../src/record/read.js';
+import { createRecord } from '../../src/record/record.js';
 import { type RowLayout, RowScanner } from '../../src/record/rows.js';
 
 // The WebAssembly row scanner (assembly/rows.ts) reads runs of numeric rows for the reader; it
@@ -129,5 +130,63 @@ describe('the WebAssembly row scanner', () => {
       layout({ timePreviousS: 0, timeFirstS: 0, unitMS2: 9.80665 }),
     );
     expect(run?.values.length).toBe(4999);
+  });
+});
+
+describe("createRecord's pass over the samples in WebAssembly (samplePeak)", () => {
+  // The twin of the TypeScript loop in record.ts: the same peak (a maximum is exact) and the same
+  // first sample that is not finite, over pieces of the scanner's memory.
+  function reference(samples: Float64Array): { peak: number; firstNotFinite: number } {
+    let peak = 0;
+    for (let i = 0; i < samples.length; i++) {
+      if (!Number.isFinite(samples[i])) return { peak, firstNotFinite: i };
+      peak = Math.max(peak, Math.abs(samples[i]));
+    }
+    return { peak, firstNotFinite: -1 };
+  }
+  // A fixed pseudo-random sequence (a linear congruential generator, common practice).
+  let seed = 99;
+  const next = () => {
+    seed = (seed * 1103515245 + 12345) % 2 ** 31;
+    return seed / 2 ** 31;
+  };
+  const samples = (n: number) => Float64Array.from({ length: n }, () => (next() - 0.5) * 20);
+
+  it('gives the peak of finite samples, across pieces of 131,072 samples', () => {
+    const scanner = RowScanner.get();
+    if (scanner === undefined) throw new Error('no WebAssembly on this engine');
+    for (const n of [1, 4096, 131_071, 131_072, 131_073, 300_000]) {
+      const a = samples(n);
+      a[Math.floor(next() * n)] = -37.25; // the peak, anywhere
+      expect(scanner.samplePeak(a)).toEqual(reference(a));
+    }
+  });
+
+  it('finds the first sample that is not finite, and the peak before it', () => {
+    const scanner = RowScanner.get();
+    if (scanner === undefined) throw new Error('no WebAssembly on this engine');
+    for (const [at, bad] of [
+      [0, Number.NaN],
+      [17, Number.POSITIVE_INFINITY],
+      [131_072, Number.NEGATIVE_INFINITY],
+      [250_000, Number.NaN],
+    ] as const) {
+      const a = samples(300_000);
+      a[at] = bad;
+      a[at + 10] = Number.NaN; // a later one is not the first
+      expect(scanner.samplePeak(a)).toEqual(reference(a));
+    }
+  });
+
+  it('makes createRecord refuse such a sample with its number, whichever way the pass runs', () => {
+    for (const n of [100, 50_000]) {
+      const a = samples(n);
+      a[n - 3] = Number.NaN;
+      expect(() => createRecord({ name: 'x', dtS: 0.01, accelMS2: a })).toThrow(
+        `sample ${n - 2} is not a finite number (NaN)`,
+      );
+      a[n - 3] = 1;
+      expect(createRecord({ name: 'x', dtS: 0.01, accelMS2: a }).pgaMS2).toBe(reference(a).peak);
+    }
   });
 });
