@@ -247,7 +247,7 @@ export class SweepPool {
       order,
       counter: new Int32Array(new SharedArrayBuffer(4)),
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * count)),
-      plan: { ...plan, coefficients: shared(plan.coefficients) },
+      plan: plan.coefficients === undefined ? plan : { ...plan, coefficients: shared(plan.coefficients) },
     };
     await this.team.run(job, () => runClaimedGroups(job, plan));
     for (let d = 0; d < plan.dampings.length; d++) {

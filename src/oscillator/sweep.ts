@@ -82,10 +82,12 @@ export interface SweepPlan {
   groups: PlannedOscillator[][];
   /**
    * Every planned oscillator's executed-step coefficients and refinement thresholds, packed as
-   * packCoefficients packs them (COEFFICIENT_STRIDE a row, row `slot`), computed once here so
-   * that no thread of the sweep computes them again.
+   * packCoefficients packs them (COEFFICIENT_STRIDE a row, row `slot`), when the plan's
+   * WebAssembly twin computed them all at once (pre-warped Newmark average acceleration, the
+   * default); otherwise undefined, and each group's are computed by the thread that steps it,
+   * so that the matrix exponentials and Newton iterations of the other methods are shared out.
    */
-  coefficients: Float64Array;
+  coefficients?: Float64Array;
 }
 
 /** Oscillators per planned group: one pass of the WebAssembly kernel, two of the TypeScript one. */
@@ -180,9 +182,9 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
 }
 
 /**
- * packCoefficients of every planned oscillator, row `slot` each. Pre-warped Newmark average
- * acceleration (the default) is computed by the plan's WebAssembly twin where it runs (the same
- * numbers; see wasm/plan.ts), the rest here.
+ * packCoefficients of every planned oscillator, row `slot` each, for pre-warped Newmark average
+ * acceleration (the default), from the plan's WebAssembly twin (the same numbers; see
+ * wasm/plan.ts); undefined for the other methods, or where WebAssembly does not run.
  */
 function planCoefficients(
   oscillators: PlannedOscillator[],
@@ -190,21 +192,18 @@ function planCoefficients(
   dtS: number,
   bounds: GroundBounds,
   prewarp: boolean,
-): Float64Array {
+): Float64Array | undefined {
+  if (method !== 'newmark-average' || !prewarp) return undefined;
   const rows = new Float64Array(oscillators.length * COEFFICIENT_STRIDE);
-  if (method === 'newmark-average' && prewarp) {
-    const inputs = new Float64Array(oscillators.length * PLAN_INPUT);
-    for (const o of oscillators) {
-      const at = o.slot * PLAN_INPUT;
-      inputs[at] = o.periodS;
-      inputs[at + 1] = o.damping;
-      inputs[at + 2] = dtS / o.substeps;
-      inputs[at + 3] = o.composed;
-    }
-    if (wasmAverageRows(inputs, oscillators.length, bounds, rows)) return rows;
+  const inputs = new Float64Array(oscillators.length * PLAN_INPUT);
+  for (const o of oscillators) {
+    const at = o.slot * PLAN_INPUT;
+    inputs[at] = o.periodS;
+    inputs[at + 1] = o.damping;
+    inputs[at + 2] = dtS / o.substeps;
+    inputs[at + 3] = o.composed;
   }
-  for (const o of oscillators) packCoefficients(rows, o.slot, o, method, dtS / o.substeps, bounds, prewarp);
-  return rows;
+  return wasmAverageRows(inputs, oscillators.length, bounds, rows) ? rows : undefined;
 }
 
 /** Result arrays of a plan, with the rigid oscillators' SA (the PGA) filled in. */
@@ -280,11 +279,20 @@ export function groupRunner(
 ): (group: PlannedOscillator[]) => Float64Array {
   const values = new Float64Array(GROUP_SIZE * PEAK_STRIDE);
   const dtS = plan.dtS;
-  const rows = (group: PlannedOscillator[]) =>
-    plan.coefficients.subarray(
-      group[0].slot * COEFFICIENT_STRIDE,
-      (group[0].slot + group.length) * COEFFICIENT_STRIDE,
-    );
+  const planned = plan.coefficients;
+  const packed = new Float64Array(GROUP_SIZE * COEFFICIENT_STRIDE);
+  // The group's rows: the plan's, or packed here when the plan has none.
+  const rows = (group: PlannedOscillator[]) => {
+    if (planned !== undefined) {
+      const first = group[0].slot * COEFFICIENT_STRIDE;
+      return planned.subarray(first, first + group.length * COEFFICIENT_STRIDE);
+    }
+    const stepS = dtS / group[0].substeps;
+    for (let g = 0; g < group.length; g++) {
+      packCoefficients(packed, g, group[g], plan.method, stepS, plan.bounds, plan.prewarp);
+    }
+    return packed;
+  };
   if (resolveKernel(kernel) === 'wasm') {
     const sweeper = new WasmSweeper(accelMS2, STRETCH_STEPS);
     // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),

@@ -1,6 +1,6 @@
 import { inputError } from '../errors.js';
-import { RowScanner } from './rows.js';
 import type { AccelerationUnit } from '../units.js';
+import { RowScanner } from './rows.js';
 
 /** One processing operation that was applied to a record, as stated in every output that used it. */
 export interface ProcessingStep {

@@ -87,13 +87,23 @@ describe('the plan module (assembly/plan.ts)', () => {
       dampings: [0, 0.05, 0.3],
     });
     const { bounds } = recordStatistics(record.accelMS2, record.dtS);
-    const reference = new Float64Array(plan.coefficients.length);
+    const coefficients = plan.coefficients as Float64Array;
+    expect(coefficients).toBeInstanceOf(Float64Array);
+    const reference = new Float64Array(coefficients.length);
     for (const group of plan.groups) {
       for (const o of group) {
         packCoefficients(reference, o.slot, o, 'newmark-average', record.dtS / o.substeps, bounds, true);
       }
     }
     expect(plan.groups.flat().some((o) => o.composed > 1)).toBe(true);
-    expect([...plan.coefficients]).toEqual([...reference]);
+    expect([...coefficients]).toEqual([...reference]);
+  });
+
+  it("leaves the other methods' coefficients to the threads that step their groups", () => {
+    const record = synthesizeRecord({ seed: 4243, dtS: 0.01, durationS: 10 });
+    for (const method of ['newmark-linear', 'piecewise-exact'] as const) {
+      const plan = planSweep(record.accelMS2, record.dtS, { periodsS: [0.1, 1], dampings: [0.05], method });
+      expect(plan.coefficients).toBeUndefined();
+    }
   });
 });
