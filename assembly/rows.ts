@@ -226,7 +226,8 @@ export function samplePeak(samples: usize, n: i32, out: usize): void {
   let bad = -1;
   for (let i = 0; i < n; i++) {
     const a = load<f64>(samples + ((<usize>i) << 3));
-    if (!isFinite<f64>(a)) {
+    // a − a is 0 for every finite a, NaN for an infinity or NaN.
+    if (a - a !== 0) {
       bad = i;
       break;
     }
