@@ -525,8 +525,14 @@ export function recordStatistics(
   dtS: number,
 ): { roughness: number; bounds: GroundBounds } {
   // The pass over the record in WebAssembly where it runs (the same sums; see wasm/plan.ts).
-  const sums = wasmRecordSums(accelMS2);
-  if (sums !== undefined) return statisticsFromSums(sums[0], sums[1], sums[2], sums[3], accelMS2.length, dtS);
+  const [sum, sumDifferences, pgaMS2, jump] = wasmRecordSums(accelMS2) ?? recordSums(accelMS2);
+  const n = accelMS2.length;
+  const roughness = sum === 0 ? 0 : Math.sqrt(sumDifferences / (n - 1) / (sum / n));
+  return { roughness, bounds: { pgaMS2, jerkMS3: jump / dtS } };
+}
+
+/** Σa², Σ(Δa)², max |a| and max |Δa| over the record: recordStatistics' pass (assembly/plan.ts is its twin). */
+export function recordSums(accelMS2: ArrayLike<number>): [number, number, number, number] {
   let sum = accelMS2[0] * accelMS2[0];
   let sumDifferences = 0;
   let pgaMS2 = Math.abs(accelMS2[0]);
@@ -539,20 +545,7 @@ export function recordStatistics(
     pgaMS2 = Math.max(pgaMS2, Math.abs(a));
     jump = Math.max(jump, Math.abs(difference));
   }
-  return statisticsFromSums(sum, sumDifferences, pgaMS2, jump, accelMS2.length, dtS);
-}
-
-/** Roughness and bounds from the pass's Σa², Σ(Δa)², max |a| and max |Δa| over `samples` samples. */
-function statisticsFromSums(
-  sum: number,
-  sumDifferences: number,
-  pgaMS2: number,
-  jump: number,
-  samples: number,
-  dtS: number,
-): { roughness: number; bounds: GroundBounds } {
-  const roughness = sum === 0 ? 0 : Math.sqrt(sumDifferences / (samples - 1) / (sum / samples));
-  return { roughness, bounds: { pgaMS2, jerkMS3: jump / dtS } };
+  return [sum, sumDifferences, pgaMS2, jump];
 }
 
 /** Bounds on the ground motion that the refinement thresholds use. */

@@ -48,13 +48,14 @@ function space(exports: PlanExports, values: number): Float64Array {
  * Σa², Σ(Δa)², max |a| and max |Δa| of the record (recordStatistics' pass), or undefined where
  * WebAssembly does not run.
  */
-export function wasmRecordSums(accelMS2: Float64Array): Float64Array | undefined {
+export function wasmRecordSums(accelMS2: Float64Array): [number, number, number, number] | undefined {
   const exports = instance();
   if (exports === undefined) return undefined;
   const view = space(exports, accelMS2.length + 4);
   view.set(accelMS2);
   exports.recordSums(view.byteOffset, accelMS2.length, view.byteOffset + accelMS2.length * 8);
-  return view.slice(accelMS2.length);
+  const n = accelMS2.length;
+  return [view[n], view[n + 1], view[n + 2], view[n + 3]];
 }
 
 /**
