@@ -132,34 +132,45 @@ describe('quakesweep spectrum', () => {
   });
 
   it('writes the same bytes on one thread, on two, and when threads started early go unused', () => {
-    // 60,000 lines of about 17 bytes (1.0 MB), which spectrum takes for about 85,000 samples (it
-    // guesses 12 bytes a sample before reading). 2,000 oscillators: 120 million steps, split over
-    // threads started before reading; 1,000: guessed at 85 million, so the threads are started,
-    // but 60 million steps stay on one thread. --threads 1 never starts them.
+    // 20,000 samples: the first 700 lines short (about 12 bytes), the rest padded with blanks to 80
+    // bytes, so that spectrum, which guesses the record's length from the line ends of the file's
+    // first 8 KiB before reading it, guesses about 100,000 and starts its threads early. 2,000
+    // oscillators: 40 million steps, split over them; 750: 15 million, below the 20 million from
+    // which a sweep is split, so the threads started go unused. --threads 1 never starts them.
     const big = join(folder, 'long.csv');
-    const lines = Array.from(
-      { length: 60_000 },
-      (_, i) => `${(i * 0.005).toFixed(3)},${(0.1 * Math.sin(i / 9) * Math.exp(-i / 20_000)).toFixed(6)}`,
-    );
+    const lines = Array.from({ length: 20_000 }, (_, i) => {
+      const line = `${(i * 0.005).toFixed(3)},${(0.1 * Math.sin(i / 9) * Math.exp(-i / 8_000)).toFixed(6)}`;
+      return i < 700 ? line : line.padEnd(79);
+    });
     writeFileSync(big, `${lines.join('\n')}\n`);
-    const spectrum = (...args: string[]) => {
+    const spectrum = (source: string, args: string[]) => {
       const result = spawnSync(
         process.execPath,
-        [bin, 'spectrum', big, '--units', 'g', '--format', 'json', ...args],
-        {
-          cwd: folder,
-          encoding: 'utf8',
-        },
+        [bin, 'spectrum', source, '--units', 'g', '--format', 'json', '--name', 'long', ...args],
+        { cwd: folder, encoding: 'utf8' },
       );
       expect(result.stderr).toBe('');
       expect(result.status).toBe(0);
       return result.stdout;
     };
     const split = ['--periods', '0.05:10:400', '--damping', '2%,5%,10%,20%,30%'];
-    const alone = spectrum(...split, '--threads', '1');
-    expect(spectrum(...split)).toBe(alone);
-    expect(spectrum(...split, '--threads', '2')).toBe(alone);
-    const unsplit = ['--periods', '0.05:10:200', '--damping', '2%,5%,10%,20%,30%'];
-    expect(spectrum(...unsplit)).toBe(spectrum(...unsplit, '--threads', '1'));
+    const alone = spectrum(big, [...split, '--threads', '1']);
+    expect(spectrum(big, split)).toBe(alone);
+    expect(spectrum(big, [...split, '--threads', '2'])).toBe(alone);
+    const unsplit = ['--periods', '0.05:10:150', '--damping', '2%,5%,10%,20%,30%'];
+    expect(spectrum(big, unsplit)).toBe(spectrum(big, [...unsplit, '--threads', '1']));
+    // A pipe named as the record: read whole, and split over threads all the same.
+    const piped = spawnSync(
+      '/bin/sh',
+      [
+        '-c',
+        `cat long.csv | "${process.execPath}" "${bin}" spectrum /dev/stdin --units g --format json ${split.join(' ')}`,
+      ],
+      { cwd: folder, encoding: 'utf8' },
+    );
+    expect(piped.stderr).toBe('');
+    const fromPipe = JSON.parse(piped.stdout);
+    expect(fromPipe.spectra).toEqual(JSON.parse(alone).spectra);
+    expect(fromPipe.record.npts).toBe(20_000);
   });
 });

@@ -187,10 +187,15 @@ function earlyPool(
   return steps >= PARALLEL_MIN_OSCILLATOR_STEPS ? new SweepPool(threads) : undefined;
 }
 
-/** Lines of a file, estimated from its size and the line ends of its first 8 KiB; 0 if it cannot be read. */
+/**
+ * Lines of a file, estimated from its size and the line ends of its first 8 KiB; 0 if it cannot be
+ * read or is not a regular file (a named pipe is not opened here: that waits for a writer, and
+ * bytes read from it would be lost to the reader).
+ */
 function estimatedLines(path: string): number {
   let fd: number | undefined;
   try {
+    if (!statSync(path).isFile()) return 0;
     fd = openSync(path, 'r');
     const size = fstatSync(fd).size;
     const head = Buffer.allocUnsafe(Math.min(size, 1 << 13));
