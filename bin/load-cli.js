@@ -2,7 +2,7 @@
 // Loads the CLI bundle (dist/cli/quakesweep.cjs, made by scripts/build-cli.mjs) with the V8 code
 // cache made beside it at build time. CommonJS (see bin/package.json): a CommonJS entry point
 // starts without Node's ES module loader, which is a few milliseconds of every run.
-const { existsSync, readFileSync } = require('node:fs');
+const { existsSync, readFileSync, statSync } = require('node:fs');
 const { createRequire } = require('node:module');
 const { dirname, join } = require('node:path');
 const { Script } = require('node:vm');
@@ -28,9 +28,15 @@ function compileCli({ cache = true } = {}) {
   return { exports: module.exports, script };
 }
 
-/** The CLI's main(argv): from the bundle when it was built, else from the compiled modules. */
+/**
+ * The CLI's main(argv): from the bundle when it was built after the compiled modules it holds
+ * (a tsc run alone leaves it behind them), else from the compiled modules.
+ */
 async function loadMain() {
-  if (existsSync(BUNDLE)) return compileCli().exports.main;
+  const modules = join(__dirname, '..', 'dist', 'cli', 'main.js');
+  if (existsSync(BUNDLE) && !(statSync(modules).mtimeMs > statSync(BUNDLE).mtimeMs)) {
+    return compileCli().exports.main;
+  }
   return (await import('../dist/cli/main.js')).main;
 }
 
