@@ -15,15 +15,30 @@ export function expm(matrix: Float64Array, n: number): Float64Array {
   }
   const squarings = norm > 0.5 ? Math.ceil(Math.log2(norm / 0.5)) : 0;
   const scale = 2 ** -squarings;
-  const scaled = matrix.map((value) => value * scale);
+  const size = n * n;
+  const scaled = new Float64Array(size);
+  for (let i = 0; i < size; i++) scaled[i] = matrix[i] * scale;
 
-  let result = identity(n);
-  let term = identity(n);
+  // Four arrays for the whole series (a product is written into the spare one, then swapped):
+  // made anew for each term, they were most of the time of a sweep with the piecewise-exact
+  // method (a thousand exponentials took 40 ms).
+  let result: Float64Array = identity(n);
+  let term: Float64Array = identity(n);
+  let spare: Float64Array = new Float64Array(size);
   for (let k = 1; k <= 18; k++) {
-    term = multiply(term, scaled, n).map((value) => value / k);
-    for (let i = 0; i < n * n; i++) result[i] += term[i];
+    multiplyInto(spare, term, scaled, n);
+    for (let i = 0; i < size; i++) spare[i] = spare[i] / k;
+    const previous = term;
+    term = spare;
+    spare = previous;
+    for (let i = 0; i < size; i++) result[i] += term[i];
   }
-  for (let s = 0; s < squarings; s++) result = multiply(result, result, n);
+  for (let s = 0; s < squarings; s++) {
+    multiplyInto(spare, result, result, n);
+    const previous = result;
+    result = spare;
+    spare = previous;
+  }
   return result;
 }
 
@@ -33,8 +48,9 @@ function identity(n: number): Float64Array {
   return out;
 }
 
-function multiply(a: Float64Array, b: Float64Array, n: number): Float64Array {
-  const out = new Float64Array(n * n);
+/** out = a·b (n×n, row-major); `out` is neither `a` nor `b`. */
+function multiplyInto(out: Float64Array, a: Float64Array, b: Float64Array, n: number): void {
+  out.fill(0);
   for (let i = 0; i < n; i++) {
     for (let k = 0; k < n; k++) {
       const aik = a[i * n + k];
@@ -42,5 +58,4 @@ function multiply(a: Float64Array, b: Float64Array, n: number): Float64Array {
       for (let j = 0; j < n; j++) out[i * n + j] += aik * b[k * n + j];
     }
   }
-  return out;
 }
