@@ -8,8 +8,11 @@ import {
   type SharedSweepJob,
   serveJobs,
 } from './parallel.js';
+import { prepareWasmKernel } from './wasm/kernel.js';
 
 serveJobs((job: SharedSweepJob | SharedRecordsJob) => {
   if ('kind' in job) runClaimedRecords(job);
   else runClaimedGroups(job, job.plan);
 });
+// The kernel's instance is made while the first job is on its way.
+prepareWasmKernel();

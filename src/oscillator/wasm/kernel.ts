@@ -117,6 +117,22 @@ function sweepModule(): WebAssembly.Module {
  */
 let sweepInstance: { exports: SweepExports; holder?: unknown } | undefined;
 
+/** The thread's instance of the kernel, made on first use. */
+function kernelInstance(): { exports: SweepExports; holder?: unknown } {
+  sweepInstance ??= {
+    exports: new WebAssembly.Instance(sweepModule(), {}).exports as unknown as SweepExports,
+  };
+  return sweepInstance;
+}
+
+/**
+ * Make this thread's instance of the kernel now, where the engine has WebAssembly SIMD: a worker
+ * thread does it while it waits for its first job, so that the job starts without it.
+ */
+export function prepareWasmKernel(): void {
+  if (wasmSimdSupported()) kernelInstance();
+}
+
 /**
  * The WebAssembly kernel with a record loaded into its memory. Groups of up to WASM_WIDTH
  * oscillators are stepped by `run`, which takes their coefficients packed as sweep.ts packs them
@@ -139,10 +155,7 @@ export class WasmSweeper {
   private view: Float64Array;
 
   constructor(accelMS2: Float64Array, chunkSteps: number) {
-    sweepInstance ??= {
-      exports: new WebAssembly.Instance(sweepModule(), {}).exports as unknown as SweepExports,
-    };
-    this.kernel = sweepInstance;
+    this.kernel = kernelInstance();
     this.accelMS2 = accelMS2;
     this.samples = accelMS2.length;
     this.chunkSteps = chunkSteps;
@@ -243,10 +256,7 @@ export class WasmRotD {
 
   constructor(a1: Float64Array, a2: Float64Array, cos: Float64Array, sin: Float64Array) {
     // The thread's one instance, as WasmSweeper's (see sweepInstance).
-    sweepInstance ??= {
-      exports: new WebAssembly.Instance(sweepModule(), {}).exports as unknown as SweepExports,
-    };
-    this.kernel = sweepInstance;
+    this.kernel = kernelInstance();
     this.exports = this.kernel.exports;
     this.samples = a1.length;
     this.angles = cos.length;
