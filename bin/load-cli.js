@@ -12,12 +12,14 @@ const CACHE = `${BUNDLE}.cache`;
 
 /**
  * Compile and run the bundle; its exports are those of dist/cli/main.js. With `cache` (the
- * default) the code cache is handed to V8, which refuses it if it was made by another Node
- * version or for other source; the bundle is then compiled as usual. `script` can make a cache.
+ * default) the code cache is handed to V8 when it is at least as new as the bundle; V8 refuses it
+ * if it was made by another Node version or for a source of another length, and the bundle is
+ * then compiled as usual. `script` can make a cache.
  */
 function compileCli({ cache = true } = {}) {
   const source = readFileSync(BUNDLE, 'utf8');
-  const cachedData = cache && existsSync(CACHE) ? readFileSync(CACHE) : undefined;
+  const fresh = cache && existsSync(CACHE) && statSync(CACHE).mtimeMs >= statSync(BUNDLE).mtimeMs;
+  const cachedData = fresh ? readFileSync(CACHE) : undefined;
   // The wrapper of a CommonJS module, on the bundle's first line so that line numbers hold.
   const script = new Script(`(function (exports, require, module, __filename, __dirname) {${source}\n})`, {
     filename: BUNDLE,

@@ -9,8 +9,10 @@
 // function that run used. bin/load-cli.js loads it; without it the launcher runs dist/ as before.
 //
 // The cache holds V8's bytecode for this Node version and V8 flags; V8 checks both and the
-// source's hash, and a cache that does not fit is refused and the file compiled as usual (the
-// program's behaviour does not depend on it, only its start-up time).
+// source's length, and a cache that does not fit is refused and the file compiled as usual (the
+// program's behaviour does not depend on it, only its start-up time). Since V8 does not compare
+// the source itself, the old cache is removed before the bundle is written, and the launcher
+// takes a cache only if it is at least as new as the bundle.
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
@@ -64,6 +66,7 @@ const common = {
   logLevel: 'warning',
   legalComments: 'eof',
 };
+rmSync(CACHE, { force: true });
 await build({ ...common, entryPoints: [join(root, 'dist/cli/main.js')], outfile: BUNDLE });
 // The worker threads of the CLI's pools, bundled too: a worker of one CommonJS file is ready
 // sooner than one that loads the ES modules of dist/ (workerScript in parallel.ts picks these
