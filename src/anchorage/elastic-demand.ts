@@ -1,7 +1,7 @@
 import { inputError } from '../errors.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { sweepOscillators } from '../oscillator/sweep.js';
-import { type GroundRecord, peakGroundAcceleration } from '../record/record.js';
+import type { GroundRecord } from '../record/record.js';
 import { STANDARD_GRAVITY_MS2 } from '../units.js';
 
 /** A PSA value read for the component and how it was found (stated in every output). */
@@ -70,7 +70,7 @@ export function recordPsaForComponent(
 ): SpectralValue {
   if (periodS === 'rigid') {
     return {
-      psaG: peakGroundAcceleration(record) / STANDARD_GRAVITY_MS2,
+      psaG: record.pgaMS2 / STANDARD_GRAVITY_MS2,
       how: `PGA of ${record.name} (rigid component)`,
     };
   }

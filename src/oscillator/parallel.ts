@@ -185,8 +185,6 @@ export interface SharedRecordsJob {
   counter: Int32Array;
   results: Float64Array;
   steps: Float64Array;
-  /** Each record's PGA, m/s². */
-  pgas: Float64Array;
 }
 
 /** Claim records of the job one at a time and sweep each on this thread (see SharedRecordsJob). */
@@ -202,7 +200,6 @@ export function runClaimedRecords(job: SharedRecordsJob): void {
     job.results.set(peaks.svMS, at + count);
     job.results.set(peaks.saMS2, at + 2 * count);
     job.steps[next] = peaks.oscillatorSteps;
-    job.pgas[next] = peaks.pgaMS2;
   }
 }
 
@@ -286,7 +283,6 @@ export class SweepPool {
       counter: new Int32Array(new SharedArrayBuffer(4)),
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * count * records.length)),
       steps: new Float64Array(new SharedArrayBuffer(8 * records.length)),
-      pgas: new Float64Array(new SharedArrayBuffer(8 * records.length)),
     };
     await this.team.run(job, () => runClaimedRecords(job));
     return records.map((_, i) => {
@@ -299,7 +295,6 @@ export class SweepPool {
         svMS: job.results.slice(at + count, at + 2 * count),
         saMS2: job.results.slice(at + 2 * count, at + 3 * count),
         oscillatorSteps: job.steps[i],
-        pgaMS2: job.pgas[i],
       };
     });
   }

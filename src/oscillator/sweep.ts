@@ -43,8 +43,6 @@ export interface Peaks {
   saMS2: Float64Array;
   /** Oscillator-steps actually executed (sub-steps included). */
   oscillatorSteps: number;
-  /** Peak |ground acceleration| of the record swept, m/s² (the SA of rigid oscillators). */
-  pgaMS2: number;
 }
 
 /** Which kernel steps the oscillators: the WebAssembly SIMD one, the TypeScript one, or the first where it runs. */
@@ -217,7 +215,6 @@ export function emptyPeaks(plan: SweepPlan): Peaks {
     svMS: new Float64Array(count),
     saMS2: new Float64Array(count),
     oscillatorSteps: 0,
-    pgaMS2: plan.pgaMS2,
   };
   for (let d = 0; d < plan.dampings.length; d++) {
     for (let p = 0; p < plan.periodsS.length; p++) {

@@ -99,12 +99,8 @@ export function withProcessing(
   return createRecord({ ...record, accelMS2, dtS, processing: [...record.processing, step] });
 }
 
-/**
- * Peak absolute ground acceleration, m/s², of any samples (a GroundRecord has it as `pgaMS2`,
- * which this returns for one).
- */
-export function peakGroundAcceleration(record: Pick<GroundRecord, 'accelMS2'> & { pgaMS2?: number }): number {
-  if (record.pgaMS2 !== undefined) return record.pgaMS2;
+/** Peak absolute ground acceleration, m/s² (a GroundRecord carries it as `pgaMS2`). */
+export function peakGroundAcceleration(record: Pick<GroundRecord, 'accelMS2'>): number {
   let peak = 0;
   const a = record.accelMS2;
   for (let i = 0; i < a.length; i++) {

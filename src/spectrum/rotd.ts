@@ -15,7 +15,7 @@ import {
   type SweepKernel,
 } from '../oscillator/sweep.js';
 import { WasmRotD } from '../oscillator/wasm/kernel.js';
-import { type GroundRecord, peakGroundAcceleration } from '../record/record.js';
+import type { GroundRecord } from '../record/record.js';
 import type { SpectrumRecordInfo } from './spectrum.js';
 
 /** Two-component spectra of a pair of horizontal records at one damping ratio, m/s², by period. */
@@ -433,7 +433,7 @@ function recordInfo(record: GroundRecord): SpectrumRecordInfo {
     source: record.source,
     npts: record.accelMS2.length,
     dtS: record.dtS,
-    pgaMS2: peakGroundAcceleration(record),
+    pgaMS2: record.pgaMS2,
     processing: record.processing,
   };
 }

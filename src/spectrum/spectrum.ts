@@ -51,13 +51,10 @@ export function responseSpectrum(record: GroundRecord, options: SpectrumOptions)
   return assembleSpectrum(record, peaks);
 }
 
-/**
- * Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). `peaks` is
- * the sweep of `record` (its PGA is taken from the sweep).
- */
+/** Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). */
 export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
   const n = peaks.periodsS.length;
-  const pgaMS2 = peaks.pgaMS2;
+  const pgaMS2 = record.pgaMS2;
   const curves: SpectrumCurve[] = [];
   for (let d = 0; d < peaks.dampings.length; d++) {
     const sdM = peaks.sdM.slice(d * n, (d + 1) * n);
