@@ -7,14 +7,14 @@ import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { loadRecord } from '../dist/cli/record-options.js';
+import { formatJson, spectrumToJson } from '../dist/formats/spectrum-json.js';
 import { defaultPeriodsS, logSpaced } from '../dist/oscillator/grid.js';
-import { SweepPool } from '../dist/oscillator/parallel.js';
 import { sweepOscillators } from '../dist/oscillator/sweep.js';
 import { writeFileAtomic } from '../dist/output/atomic.js';
-import { formatJson, spectrumToJson } from '../dist/output/spectrum-json.js';
 import { synthesizeRecord } from '../dist/record/synth.js';
 import { RotDPool, rotDSpectra } from '../dist/spectrum/rotd.js';
 import { assembleSpectrum } from '../dist/spectrum/spectrum.js';
+import { SweepPool } from '../dist/threads/team.js';
 
 const REPEAT = Number(process.env.BENCH_REPEAT ?? 5);
 const QUICK = process.env.BENCH_QUICK === '1';

@@ -73,7 +73,7 @@ await build({ ...common, entryPoints: [join(root, 'dist/cli/main.js')], outfile:
 // when it is called from the bundle).
 await build({
   ...common,
-  entryPoints: ['oscillator/parallel-worker.js', 'spectrum/rotd-worker.js', 'batch/worker.js'].map((file) =>
+  entryPoints: ['threads/sweep-worker.js', 'threads/rotd-worker.js', 'threads/batch-worker.js'].map((file) =>
     join(root, 'dist', file),
   ),
   outdir: join(root, 'dist/cli/workers'),

@@ -6,10 +6,13 @@ export {
   type DemandChoice,
 } from './anchorage/anchorage.js';
 export { type Equipment, parseEquipment } from './anchorage/equipment.js';
-export { CAUTION, cautionLines } from './caution.js';
-export { type ErrorKind, inputError, isQuakesweepError, QuakesweepError, usageError } from './errors.js';
+export { CAUTION, cautionLines } from './base/caution.js';
+export { type ErrorKind, inputError, isQuakesweepError, QuakesweepError, usageError } from './base/errors.js';
+export * from './base/units.js';
+export { VERSION } from './base/version.js';
+export { spectrumToCsv } from './formats/spectrum-csv.js';
+export { formatJson, type SpectrumJson, spectrumToJson } from './formats/spectrum-json.js';
 export { defaultPeriodsS, logSpaced, parseDampings, parsePeriods } from './oscillator/grid.js';
-export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './oscillator/parallel.js';
 export { hermitePeak } from './oscillator/peak.js';
 export {
   METHOD_DESCRIPTIONS,
@@ -25,8 +28,6 @@ export {
 export { type Peaks, type SweepKernel, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
 export { wasmSimdSupported } from './oscillator/wasm/kernel.js';
 export { writeFileAtomic } from './output/atomic.js';
-export { spectrumToCsv } from './output/spectrum-csv.js';
-export { formatJson, type SpectrumJson, spectrumToJson } from './output/spectrum-json.js';
 export * from './plot/index.js';
 export { fourierAmplitudeSpectrum, konnoOhmachiSmooth, konnoOhmachiWeight } from './record/fourier.js';
 export { integrateRecord } from './record/integrate.js';
@@ -72,5 +73,4 @@ export {
   type SpectrumCurve,
   type SpectrumOptions,
 } from './spectrum/spectrum.js';
-export * from './units.js';
-export { VERSION } from './version.js';
+export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './threads/team.js';

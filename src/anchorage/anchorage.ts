@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 import { type AnchorRule, type BoltGroupResult, boltGroupForces } from './bolt-group.js';
 import {
   type CodeForce,

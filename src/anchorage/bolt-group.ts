@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 import { centroid } from './equipment.js';
 
 /**

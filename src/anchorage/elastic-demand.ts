@@ -1,8 +1,8 @@
-import { inputError } from '../errors.js';
+import { inputError } from '../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 
 /** A PSA value read for the component and how it was found (stated in every output). */
 export interface SpectralValue {

@@ -1,4 +1,4 @@
-import { inputError } from '../errors.js';
+import { inputError } from '../base/errors.js';
 import { MIN_PERIOD_S } from '../oscillator/grid.js';
 
 /** Unit systems an equipment file may use: forces and lengths together. */

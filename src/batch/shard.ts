@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 
 /** One shard of a batch: the `index`-th (1-based) of `count` slices of the sorted file list. */
 export interface Shard {

@@ -1,4 +1,4 @@
-import { CAUTION } from '../caution.js';
+import { CAUTION } from '../base/caution.js';
 import { compareText } from './glob.js';
 import type { Shard } from './shard.js';
 import { STATISTICS_METHOD, type SuiteCurve, suiteStatistics } from './statistics.js';

@@ -1,13 +1,13 @@
 import { mkdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { isQuakesweepError } from '../errors.js';
+import { isQuakesweepError } from '../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { writeFileAtomic } from '../output/atomic.js';
-import { formatJson, spectrumToJson } from '../output/spectrum-json.js';
 import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';
 import { type ReadOptions, readRecordText, unitWarnings } from '../record/read.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 
 /** What every record of a suite shares: how to read it, process it and sweep it (plain data, for workers). */
 export interface SuiteSettings {

@@ -1,6 +1,6 @@
 import { Command, CommanderError } from 'commander';
-import { isQuakesweepError } from '../errors.js';
-import { VERSION } from '../version.js';
+import { isQuakesweepError } from '../base/errors.js';
+import { VERSION } from '../base/version.js';
 
 type Register = (program: Command) => void;
 

@@ -1,5 +1,5 @@
 import type { Command } from 'commander';
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 import { BASELINE_NAMES } from '../record/baseline.js';
 import { type FilterSpec, MAX_FILTER_ORDER } from '../record/filter.js';
 import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';

@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { GroundRecord } from '../record/record.js';
 import { asce716Spectrum, coversPeriod, type DesignSpectrum, ec8Spectrum } from '../spectrum/design.js';
 import { readSpectrumTable, tableSpectrum } from '../spectrum/design-table.js';
@@ -14,7 +15,6 @@ import {
 } from '../spectrum/scale.js';
 import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
 import { parseDampingRatio, parseEc8Ground, parseEc8Type, parseTargetSpec } from '../spectrum/target.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 
 /** The options that choose a design spectrum (the `design` command). */
 export interface DesignCliOptions {

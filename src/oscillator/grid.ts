@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 
 /** The default period grid: T = 0 (rigid) and 120 log-spaced periods from 0.01 s to 10 s. */
 export function defaultPeriodsS(): Float64Array {

@@ -10,7 +10,7 @@ import {
   writeSync,
 } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
-import { inputError } from '../errors.js';
+import { inputError } from '../base/errors.js';
 
 /**
  * Check that `path` can take an output: its folder exists, it is not a folder itself, and it is

@@ -1,6 +1,6 @@
 import { existsSync, mkdirSync, statSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 
 /** Make the output folder: it may exist (a folder), or be created when its parent exists. */
 export function prepareOutputFolder(out: string, option = '--out'): void {

@@ -1,6 +1,6 @@
 import { scaleLinear, scaleLog } from 'd3-scale';
 import { line } from 'd3-shape';
-import { CAUTION } from '../caution.js';
+import { CAUTION } from '../base/caution.js';
 import {
   FRAME_COLOUR,
   GRID_COLOUR,

@@ -1,5 +1,5 @@
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 import type { PanelContext, Series } from './figure.js';
 import { lineChart } from './line-chart.js';
 import { TEXT_COLOUR } from './styles.js';

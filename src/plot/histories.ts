@@ -1,4 +1,4 @@
-import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
+import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { type PanelContext, type PanelSpec, renderFigure } from './figure.js';
 import { TEXT_COLOUR } from './styles.js';
 import { formatValue } from './text.js';

@@ -1,5 +1,5 @@
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 import type { Series } from './figure.js';
 import { lineChart } from './line-chart.js';
 import type { SeriesStyle } from './styles.js';

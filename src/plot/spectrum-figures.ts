@@ -1,5 +1,5 @@
+import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
 import type { AxisScale, Series } from './figure.js';
 import { lineChart } from './line-chart.js';
 import { overlayStyle } from './styles.js';

@@ -1,5 +1,5 @@
+import { LENGTH_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { LENGTH_UNITS, STANDARD_GRAVITY_MS2 } from '../units.js';
 import type { PanelContext } from './figure.js';
 import { lineChart } from './line-chart.js';
 import {

@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 
 /** Names of the baseline orders, 0 to 3. */
 export const BASELINE_NAMES = ['mean', 'linear', 'quadratic', 'cubic'] as const;

@@ -1,5 +1,5 @@
 import FFT from 'fft.js';
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 
 /** A one-sided Fourier amplitude spectrum of an acceleration history. */
 export interface FourierSpectrum {

@@ -1,5 +1,5 @@
-import { usageError } from '../errors.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
+import { usageError } from '../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { fourierAmplitudeSpectrum } from './fourier.js';
 import { cumulativeTrapezoid, integrateRecord, trapezoid } from './integrate.js';
 import type { GroundRecord } from './record.js';

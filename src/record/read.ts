@@ -2,8 +2,8 @@ import { isAscii } from 'node:buffer';
 import { createRequire } from 'node:module';
 import { pipeline } from 'node:stream/promises';
 import type { Options as CsvOptions } from 'csv-parse';
-import { inputError, usageError } from '../errors.js';
-import { ACCELERATION_UNITS, type AccelerationUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
+import { inputError, usageError } from '../base/errors.js';
+import { ACCELERATION_UNITS, type AccelerationUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { createRecord, type GroundRecord } from './record.js';
 import { type RowLayout, type RowScan, RowScanner } from './rows.js';
 

@@ -1,5 +1,5 @@
-import { inputError } from '../errors.js';
-import type { AccelerationUnit } from '../units.js';
+import { inputError } from '../base/errors.js';
+import type { AccelerationUnit } from '../base/units.js';
 import { RowScanner } from './rows.js';
 
 /** One processing operation that was applied to a record, as stated in every output that used it. */

@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 import { zeroPhaseFilter } from './filter.js';
 
 /** Half-width of the interpolation kernel, in input samples. */

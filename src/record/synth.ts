@@ -1,6 +1,6 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { stepCoefficients } from '../oscillator/recurrence.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 import { createRecord, type GroundRecord } from './record.js';
 
 /** Parameters of the stochastic ground-motion generator. Defaults describe a firm-soil site. */

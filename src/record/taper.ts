@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 
 /**
  * Multiply the first and last `fraction` of the samples by a half-cosine ramp from 0 to 1 (a

@@ -1,4 +1,4 @@
-import type { AnchorageJson } from '../anchorage/anchorage-json.js';
+import type { AnchorageJson } from '../formats/anchorage-json.js';
 import { type Cell, definitionTable, formatNumber, list, paragraph, table } from './html.js';
 
 /** One equipment item's anchorage, as the report shows it. */

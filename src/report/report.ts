@@ -1,10 +1,10 @@
-import { CAUTION } from '../caution.js';
+import { CAUTION } from '../base/caution.js';
+import type { LengthUnit } from '../base/units.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { ScaleResult } from '../spectrum/scale.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { LengthUnit } from '../units.js';
 import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
 import { definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';

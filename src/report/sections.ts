@@ -1,9 +1,9 @@
+import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
 import { type Cell, definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
 
 /** What the report says of the record as it was read (before processing). */

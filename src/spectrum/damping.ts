@@ -1,4 +1,4 @@
-import { inputError } from '../errors.js';
+import { inputError } from '../base/errors.js';
 import { ec8DampingCorrection } from './design.js';
 import type { Spectrum } from './spectrum.js';
 

@@ -1,4 +1,4 @@
-import { inputError } from '../errors.js';
+import { inputError } from '../base/errors.js';
 import { checkPeriod, type DesignSpectrum } from './design.js';
 
 /** A tabulated spectrum: periods (s, strictly increasing) and PSA (g, positive). */

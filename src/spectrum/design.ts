@@ -1,4 +1,4 @@
-import { inputError, usageError } from '../errors.js';
+import { inputError, usageError } from '../base/errors.js';
 
 /** Where a design spectrum comes from. */
 export type DesignCode = 'asce7-16' | 'ec8' | 'table';

@@ -1,4 +1,4 @@
-import { inputError } from '../errors.js';
+import { inputError } from '../base/errors.js';
 import {
   type Method,
   prewarpedOscillator,

@@ -1,6 +1,5 @@
 import { availableParallelism } from 'node:os';
-import { inputError, usageError } from '../errors.js';
-import { shared, ThreadTeam, workerScript } from '../oscillator/parallel.js';
+import { inputError, usageError } from '../base/errors.js';
 import { hermitePeak } from '../oscillator/peak.js';
 import {
   executedStepCoefficients,
@@ -16,6 +15,7 @@ import {
 } from '../oscillator/sweep.js';
 import { WasmRotD } from '../oscillator/wasm/kernel.js';
 import type { GroundRecord } from '../record/record.js';
+import { shared, ThreadTeam, workerScript } from '../threads/team.js';
 import type { SpectrumRecordInfo } from './spectrum.js';
 
 /** Two-component spectra of a pair of horizontal records at one damping ratio, m/s², by period. */
@@ -129,7 +129,7 @@ export class RotDPool {
   private readonly team: ThreadTeam;
 
   constructor(threads = availableParallelism()) {
-    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'spectrum', 'rotd-worker.js'));
+    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'threads', 'rotd-worker.js'));
     this.threads = threads;
   }
 

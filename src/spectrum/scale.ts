@@ -1,4 +1,4 @@
-import { inputError, usageError } from '../errors.js';
+import { inputError, usageError } from '../base/errors.js';
 import { type GroundRecord, type ProcessingStep, withProcessing } from '../record/record.js';
 import { coversPeriod, type DesignSpectrum } from './design.js';
 import type { Spectrum, SpectrumCurve } from './spectrum.js';

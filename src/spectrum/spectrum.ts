@@ -1,7 +1,7 @@
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { type Peaks, sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord, ProcessingStep } from '../record/record.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 
 /** The response spectra of one record at one damping ratio. All arrays are indexed by period. */
 export interface SpectrumCurve {

@@ -1,4 +1,4 @@
-import { usageError } from '../errors.js';
+import { usageError } from '../base/errors.js';
 import { asce716Spectrum, type DesignSpectrum, EC8_GROUNDS, type Ec8Ground, ec8Spectrum } from './design.js';
 
 /**

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { JSDOM } from 'jsdom';
 import { describe, expect, it } from 'vitest';
-import { CAUTION } from '../../src/caution.js';
+import { CAUTION } from '../../src/base/caution.js';
 import { runAnchor } from '../../src/cli/commands/anchor.js';
 import { runFloor } from '../../src/cli/commands/floor.js';
 import { anchorPlanSvg } from '../../src/plot/anchor-plan.js';

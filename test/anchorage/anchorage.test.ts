@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { analyseAnchorage } from '../../src/anchorage/anchorage.js';
-import { anchorageToJson } from '../../src/anchorage/anchorage-json.js';
 import { parseEquipment } from '../../src/anchorage/equipment.js';
-import { CAUTION } from '../../src/caution.js';
+import { CAUTION } from '../../src/base/caution.js';
+import { anchorageToJson } from '../../src/formats/anchorage-json.js';
 
 const generator = parseEquipment(readFileSync('records/equipment-generator.json', 'utf8'), 'gen');
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { psaAtPeriod, recordPsaForComponent } from '../../src/anchorage/elastic-demand.js';
+import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { createRecord } from '../../src/record/record.js';
-import { STANDARD_GRAVITY_MS2 } from '../../src/units.js';
 
 describe('psaAtPeriod', () => {
   it('log–log interpolation is exact for a power law PSA = 2·T^(−0.7) (closed form)', () => {

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseEquipment } from '../../src/anchorage/equipment.js';
-import { QuakesweepError } from '../../src/errors.js';
+import { QuakesweepError } from '../../src/base/errors.js';
 
 const base = {
   name: 'Generator G-1 (invented)',

@@ -2,13 +2,13 @@ import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'nod
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runTasks } from '../../src/batch/pool.js';
 import {
   processRecord,
   type RecordOutcome,
   type RecordTask,
   type SuiteSettings,
 } from '../../src/batch/work.js';
+import { runTasks } from '../../src/threads/batch-pool.js';
 
 // runTasks on several threads against one: the same outcomes in the same order, each reported once.
 // Records: invented decaying sines; one file is broken on purpose.

@@ -3,7 +3,7 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSy
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { CAUTION } from '../../src/caution.js';
+import { CAUTION } from '../../src/base/caution.js';
 
 // `quakesweep spectrum` end to end on an invented record (the built CLI, as a user runs it).
 const root = resolve(import.meta.dirname, '../..');

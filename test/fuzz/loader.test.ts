@@ -8,7 +8,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { isQuakesweepError } from '../../src/errors.js';
+import { isQuakesweepError } from '../../src/base/errors.js';
 import { readRecordStream, readRecordText, unitWarnings } from '../../src/record/read.js';
 import type { GroundRecord } from '../../src/record/record.js';
 import { FUZZ_SEED, report, runs } from './budget.js';

@@ -4,8 +4,8 @@
  * readable. Everything here is invented data.
  */
 import fc from 'fast-check';
+import type { AccelerationUnit } from '../../src/base/units.js';
 import type { ReadOptions, RecordLayout } from '../../src/record/read.js';
-import type { AccelerationUnit } from '../../src/units.js';
 
 /**
  * Metres per second squared in each unit, written out here rather than imported so the check does

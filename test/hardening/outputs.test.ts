@@ -16,7 +16,7 @@ import {
 } from 'node:fs';
 import { join, relative } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { formatJson } from '../../src/output/spectrum-json.js';
+import { formatJson } from '../../src/formats/spectrum-json.js';
 import { readRecordText } from '../../src/record/read.js';
 import { writeFixtures } from './fixtures.js';
 import { expectOneLineFailure, runMain } from './run-cli.js';

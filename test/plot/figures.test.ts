@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { CAUTION } from '../../src/caution.js';
+import { CAUTION } from '../../src/base/caution.js';
+import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { logSpaced } from '../../src/oscillator/grid.js';
 import { historiesFigure } from '../../src/plot/histories.js';
 import { lineChart } from '../../src/plot/line-chart.js';
@@ -8,7 +9,6 @@ import { tripartiteFigure } from '../../src/plot/tripartite.js';
 import { integrateRecord } from '../../src/record/integrate.js';
 import { createRecord } from '../../src/record/record.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
-import { STANDARD_GRAVITY_MS2 } from '../../src/units.js';
 import { axisFromTicks, handSpectrum, parseSvg, pathVertices } from './helpers.js';
 
 const figures = {

@@ -1,6 +1,6 @@
 import { JSDOM } from 'jsdom';
+import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import type { Spectrum } from '../../src/spectrum/spectrum.js';
-import { STANDARD_GRAVITY_MS2 } from '../../src/units.js';
 
 /** Parse SVG text as XML; jsdom's XML parser throws on anything that is not well formed. */
 export function parseSvg(text: string): Document {

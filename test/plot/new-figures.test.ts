@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { CAUTION } from '../../src/caution.js';
+import { CAUTION } from '../../src/base/caution.js';
+import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { historiesFigure } from '../../src/plot/histories.js';
 import { integrateRecord } from '../../src/record/integrate.js';
 import { createRecord } from '../../src/record/record.js';
-import { STANDARD_GRAVITY_MS2 } from '../../src/units.js';
 import { axisFromTicks, parseSvg, pathVertices } from './helpers.js';
 import { NASTY, newFigures } from './new-figures.js';
 

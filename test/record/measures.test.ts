@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { STANDARD_GRAVITY_MS2 as G } from '../../src/base/units.js';
 import {
   ariasIntensity,
   bracketedDuration,
@@ -9,7 +10,6 @@ import {
   significantDuration,
 } from '../../src/record/measures.js';
 import { createRecord } from '../../src/record/record.js';
-import { STANDARD_GRAVITY_MS2 as G } from '../../src/units.js';
 
 const dtS = 0.001;
 

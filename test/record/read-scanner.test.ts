@@ -11,7 +11,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { isQuakesweepError } from '../../src/errors.js';
+import { isQuakesweepError } from '../../src/base/errors.js';
 import {
   type ReadOptions,
   readRecordStream,

@@ -2,7 +2,7 @@ import { createReadStream, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { isQuakesweepError } from '../../src/errors.js';
+import { isQuakesweepError } from '../../src/base/errors.js';
 import {
   parseNumber,
   type ReadOptions,

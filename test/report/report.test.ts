@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CAUTION } from '../../src/caution.js';
+import { CAUTION } from '../../src/base/caution.js';
 import { runReport } from '../../src/cli/commands/report.js';
 import { runSpectrum } from '../../src/cli/commands/spectrum.js';
 import { escapeHtml } from '../../src/report/html.js';

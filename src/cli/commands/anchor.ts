@@ -8,15 +8,15 @@ import {
   type ElasticInput,
   parseDemandChoice,
 } from '../../anchorage/anchorage.js';
-import { anchorageToJson } from '../../anchorage/anchorage-json.js';
 import { parseAnchorRule } from '../../anchorage/bolt-group.js';
 import { psaAtPeriod, recordPsaForComponent } from '../../anchorage/elastic-demand.js';
 import { centroid, EQUIPMENT_UNITS, type Equipment, parseEquipment } from '../../anchorage/equipment.js';
-import { cautionLines } from '../../caution.js';
-import { inputError, usageError } from '../../errors.js';
+import { cautionLines } from '../../base/caution.js';
+import { inputError, usageError } from '../../base/errors.js';
+import { anchorageToJson } from '../../formats/anchorage-json.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
-import { formatJson } from '../../output/spectrum-json.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
 

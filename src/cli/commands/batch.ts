@@ -1,6 +1,8 @@
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
+import { CAUTION } from '../../base/caution.js';
+import { QuakesweepError, usageError } from '../../base/errors.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
 import { parseShard, type Shard, shardSlice } from '../../batch/shard.js';
@@ -13,11 +15,9 @@ import {
   suiteJson,
 } from '../../batch/suite.js';
 import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
-import { CAUTION } from '../../caution.js';
-import { QuakesweepError, usageError } from '../../errors.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { prepareOutputFolder } from '../../output/folder.js';
-import { formatJson } from '../../output/spectrum-json.js';
 import {
   addProcessingOptions,
   type ProcessingCliOptions,
@@ -100,7 +100,7 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
   const tasks = mine.map((file) => ({ file, name: names.get(file) as string, outDir: out, settings }));
   // The pool and the progress bar are loaded here, not at start-up, so other commands do not pay
   // for them.
-  const { runTasks } = await import('../../batch/pool.js');
+  const { runTasks } = await import('../../threads/batch-pool.js');
   const { SingleBar } = process.stderr.isTTY ? await import('cli-progress') : { SingleBar: undefined };
   const bar = SingleBar
     ? new SingleBar({

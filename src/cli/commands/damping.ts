@@ -1,16 +1,16 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION, cautionLines } from '../../caution.js';
-import { usageError } from '../../errors.js';
+import { CAUTION, cautionLines } from '../../base/caution.js';
+import { usageError } from '../../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
+import { dampingLabel } from '../../formats/spectrum-csv.js';
+import { formatJson, recordToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
-import { dampingLabel } from '../../output/spectrum-csv.js';
-import { formatJson, recordToJson } from '../../output/spectrum-json.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping, type DampingComparison } from '../../spectrum/damping.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
-import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions, summaryRows } from './spectrum.js';
 

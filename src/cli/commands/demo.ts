@@ -2,8 +2,8 @@ import { existsSync, readFileSync } from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
-import { cautionLines } from '../../caution.js';
-import { usageError } from '../../errors.js';
+import { cautionLines } from '../../base/caution.js';
+import { usageError } from '../../base/errors.js';
 import { registerReport } from './report.js';
 
 /**

@@ -1,11 +1,11 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION, cautionLines } from '../../caution.js';
-import { usageError } from '../../errors.js';
+import { CAUTION, cautionLines } from '../../base/caution.js';
+import { usageError } from '../../base/errors.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, parsePeriods } from '../../oscillator/grid.js';
 import { writeFileAtomic } from '../../output/atomic.js';
-import { formatJson } from '../../output/spectrum-json.js';
 import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../target-options.js';

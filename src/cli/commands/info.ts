@@ -1,11 +1,12 @@
 import { existsSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION, cautionLines } from '../../caution.js';
-import { usageError } from '../../errors.js';
+import { CAUTION, cautionLines } from '../../base/caution.js';
+import { usageError } from '../../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { logSpaced } from '../../oscillator/grid.js';
 import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
-import { formatJson } from '../../output/spectrum-json.js';
 import { fourierFigure } from '../../plot/fourier.js';
 import { historiesFigure } from '../../plot/histories.js';
 import { husidFigure } from '../../plot/husid.js';
@@ -19,7 +20,6 @@ import { type GroundMotionMeasures, groundMotionMeasures, husidCurve } from '../
 import { PROCESSING_ORDER } from '../../record/process.js';
 import type { GroundRecord } from '../../record/record.js';
 import { type PredominantPeriod, predominantPeriod } from '../../spectrum/predominant.js';
-import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
 

@@ -1,6 +1,7 @@
 import { existsSync, mkdirSync, readdirSync, readFileSync, realpathSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
+import { inputError, usageError } from '../../base/errors.js';
 import { sanitiseName } from '../../batch/names.js';
 import {
   SHARD_FORMAT,
@@ -9,10 +10,9 @@ import {
   type SuiteRecord,
   suiteJson,
 } from '../../batch/suite.js';
-import { inputError, usageError } from '../../errors.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { prepareOutputFolder } from '../../output/folder.js';
-import { formatJson } from '../../output/spectrum-json.js';
 
 export function registerMerge(program: Command): void {
   program

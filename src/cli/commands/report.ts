@@ -2,15 +2,17 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
 import { type AnchorageAnalysis, analyseAnchorage, type ElasticInput } from '../../anchorage/anchorage.js';
-import { anchorageToJson } from '../../anchorage/anchorage-json.js';
 import { psaAtPeriod, recordPsaForComponent } from '../../anchorage/elastic-demand.js';
 import { type Equipment, parseEquipment } from '../../anchorage/equipment.js';
-import { usageError } from '../../errors.js';
+import { usageError } from '../../base/errors.js';
+import { parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../base/units.js';
+import { VERSION } from '../../base/version.js';
+import { anchorageToJson } from '../../formats/anchorage-json.js';
+import { spectrumToCsv } from '../../formats/spectrum-csv.js';
+import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { prepareOutputFolder } from '../../output/folder.js';
-import { spectrumToCsv } from '../../output/spectrum-csv.js';
-import { formatJson, spectrumToJson } from '../../output/spectrum-json.js';
 import {
   anchorPlanSvg,
   dampingFigure,
@@ -29,8 +31,6 @@ import { compareDamping } from '../../spectrum/damping.js';
 import { type BuildingMode, floorSpectrum } from '../../spectrum/floor.js';
 import { rotDSpectraParallel } from '../../spectrum/rotd.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
-import { parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../units.js';
-import { VERSION } from '../../version.js';
 import { addProcessingOptions, applyProcessing } from '../processing-options.js';
 import { addRecordOptions, loadRecord, positiveNumber } from '../record-options.js';
 import { addTargetOptions, applyTarget, loadTarget } from '../target-options.js';

@@ -1,15 +1,15 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION, cautionLines } from '../../caution.js';
-import { usageError } from '../../errors.js';
+import { CAUTION, cautionLines } from '../../base/caution.js';
+import { usageError } from '../../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
+import { dampingLabel } from '../../formats/spectrum-csv.js';
+import { formatJson, recordToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
-import { dampingLabel } from '../../output/spectrum-csv.js';
-import { formatJson, recordToJson } from '../../output/spectrum-json.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { type RotDSpectra, rotDSpectraParallel } from '../../spectrum/rotd.js';
-import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
 import {
   addGridOptions,

@@ -1,9 +1,9 @@
 import type { Command } from 'commander';
-import { CAUTION } from '../../caution.js';
-import { usageError } from '../../errors.js';
+import { CAUTION } from '../../base/caution.js';
+import { usageError } from '../../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { type SynthOptions, synthesizeRecord } from '../../record/synth.js';
-import { STANDARD_GRAVITY_MS2 } from '../../units.js';
 
 interface SynthCliOptions {
   seed?: string;

@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { CAUTION } from '../../../src/caution.js';
+import { CAUTION } from '../../../src/base/caution.js';
 
 // Runs the compiled CLI (npm test builds first); the records are invented test motions.
 const BIN = join(import.meta.dirname, '../../../bin/quakesweep.js');

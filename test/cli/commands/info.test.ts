@@ -2,7 +2,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it, vi } from 'vitest';
-import { CAUTION } from '../../../src/caution.js';
+import { CAUTION } from '../../../src/base/caution.js';
 import { main } from '../../../src/cli/main.js';
 
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-info-'));

@@ -1,8 +1,9 @@
 // A RotD worker thread (see RotDPool in rotd.ts): for each job it is sent, it claims (damping,
 // period) cells from the shared counter until none is left, and says so.
-import { serveJobs } from '../oscillator/parallel.js';
+
 import { prepareWasmKernel } from '../oscillator/wasm/kernel.js';
-import { runClaimedRotD } from './rotd.js';
+import { runClaimedRotD } from '../spectrum/rotd.js';
+import { serveJobs } from './team.js';
 
 serveJobs(runClaimedRotD);
 // The kernel's instance is made while the first job is on its way.

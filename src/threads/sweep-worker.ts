@@ -1,14 +1,15 @@
 // A sweep worker thread (see SweepPool in parallel.ts): for each job it is sent (a record with the
 // calling thread's plan, or many records), it claims groups or whole records from the shared
 // counter until none is left, and says so.
+
+import { prepareWasmKernel } from '../oscillator/wasm/kernel.js';
 import {
   runClaimedGroups,
   runClaimedRecords,
   type SharedRecordsJob,
   type SharedSweepJob,
   serveJobs,
-} from './parallel.js';
-import { prepareWasmKernel } from './wasm/kernel.js';
+} from './team.js';
 
 serveJobs((job: SharedSweepJob | SharedRecordsJob) => {
   if ('kind' in job) runClaimedRecords(job);

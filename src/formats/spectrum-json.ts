@@ -1,7 +1,7 @@
-import { CAUTION } from '../caution.js';
+import { CAUTION } from '../base/caution.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { STANDARD_GRAVITY_MS2 } from '../units.js';
 import { assertFiniteResult } from './finite.js';
 
 /** The JSON contract of `quakesweep spectrum` (keys and units are relied on by scripts). */

@@ -1,6 +1,6 @@
-import { QuakesweepError } from '../errors.js';
-import { startWorker, workerScript } from '../oscillator/parallel.js';
-import { claimRecords, processRecord, type RecordOutcome, type RecordTask } from './work.js';
+import { QuakesweepError } from '../base/errors.js';
+import { claimRecords, processRecord, type RecordOutcome, type RecordTask } from '../batch/work.js';
+import { startWorker, workerScript } from './team.js';
 
 /** What each batch worker thread is given: the tasks, and the counter from which records are claimed. */
 export interface BatchWorkerData {
@@ -36,7 +36,7 @@ export async function runTasks(
     onDone(outcome);
   };
   const data: BatchWorkerData = { tasks, counter: new Int32Array(new SharedArrayBuffer(4)) };
-  const script = workerScript(import.meta.url, 'batch', 'worker.js');
+  const script = workerScript(import.meta.url, 'threads', 'batch-worker.js');
   const threads = Math.max(1, Math.min(jobs, tasks.length));
   const workers = Array.from({ length: threads - 1 }, () => {
     const worker = startWorker(script, { workerData: data });

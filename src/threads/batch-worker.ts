@@ -1,8 +1,8 @@
 // A batch worker thread (see runTasks in pool.ts): it claims records from the shared counter until
 // none is left, posting each one's outcome as it finishes it, then says it has finished and ends.
 import { parentPort, workerData } from 'node:worker_threads';
-import type { BatchWorkerData, BatchWorkerMessage } from './pool.js';
-import { claimRecords } from './work.js';
+import { claimRecords } from '../batch/work.js';
+import type { BatchWorkerData, BatchWorkerMessage } from './batch-pool.js';
 
 const { tasks, counter } = workerData as BatchWorkerData;
 const post = (message: BatchWorkerMessage) => parentPort?.postMessage(message);

@@ -1,6 +1,6 @@
-import { cautionLines } from '../caution.js';
+import { cautionLines } from '../base/caution.js';
+import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../units.js';
 import { assertFiniteResult } from './finite.js';
 
 export interface CsvOptions {

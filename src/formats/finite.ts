@@ -1,4 +1,4 @@
-import { inputError } from '../errors.js';
+import { inputError } from '../base/errors.js';
 
 /**
  * Refuse a result that holds a number that is not finite. JSON.stringify writes NaN and ±Infinity

@@ -1,6 +1,6 @@
-import { CAUTION } from '../caution.js';
-import { ANCHOR_RULE_TEXT, ANCHORAGE_SCOPE, type AnchorageAnalysis } from './anchorage.js';
-import { EQUIPMENT_UNITS } from './equipment.js';
+import { ANCHOR_RULE_TEXT, ANCHORAGE_SCOPE, type AnchorageAnalysis } from '../anchorage/anchorage.js';
+import { EQUIPMENT_UNITS } from '../anchorage/equipment.js';
+import { CAUTION } from '../base/caution.js';
 
 /** The JSON contract of `quakesweep anchor`: forces in the equipment's force unit, lengths in its length unit. */
 export function anchorageToJson(analysis: AnchorageAnalysis) {

@@ -1,6 +1,6 @@
 import { availableParallelism } from 'node:os';
 import { parentPort, Worker } from 'node:worker_threads';
-import { inputError, QuakesweepError } from '../errors.js';
+import { inputError, QuakesweepError } from '../base/errors.js';
 import {
   emptyPeaks,
   groupRunner,
@@ -10,7 +10,7 @@ import {
   type SweepOptions,
   type SweepPlan,
   sweepOscillators,
-} from './sweep.js';
+} from '../oscillator/sweep.js';
 
 export interface ParallelSweepOptions extends SweepOptions {
   /** Threads stepping oscillators, this one included; default all cores. 1 sweeps here alone. */
@@ -66,7 +66,7 @@ export function runClaimedGroups(job: SharedSweepJob, plan: SweepPlan): void {
 export function workerScript(moduleUrl: string, folder: string, file: string): URL {
   if (moduleUrl.endsWith('.ts')) return new URL(`../../dist/${folder}/${file}`, moduleUrl);
   if (moduleUrl.endsWith('.cjs')) return new URL(`./workers/${file.replace(/\.js$/, '.cjs')}`, moduleUrl);
-  return new URL(`./${file}`, moduleUrl);
+  return new URL(`../${folder}/${file}`, moduleUrl);
 }
 
 /**
@@ -213,7 +213,7 @@ export class SweepPool {
   private readonly team: ThreadTeam;
 
   constructor(threads = availableParallelism()) {
-    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'oscillator', 'parallel-worker.js'));
+    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'threads', 'sweep-worker.js'));
     this.threads = threads;
   }
 
