@@ -1,14 +1,10 @@
 import { execFileSync } from 'node:child_process';
 import { resolve } from 'node:path';
 
-// Build the WebAssembly kernel, dist/ and the CLI bundle once before any test file runs: the CLI tests spawn
-// bin/quakesweep.js, which runs the bundle. (Building in each file's beforeAll would race between parallel workers.)
+// `npm run build` once before any test file runs: the CLI tests spawn bin/quakesweep.js and the
+// worker threads run dist/, so both must be built from the sources under test. This is the one
+// build of `npm test` (building in each file's beforeAll would race between parallel workers).
 export default function setup(): void {
   const root = resolve(import.meta.dirname, '..');
-  execFileSync(process.execPath, [resolve(root, 'scripts/build-wasm.mjs')], { cwd: root, stdio: 'inherit' });
-  execFileSync(process.execPath, [resolve(root, 'node_modules/typescript/bin/tsc'), '-p', 'tsconfig.json'], {
-    cwd: root,
-    stdio: 'inherit',
-  });
-  execFileSync(process.execPath, [resolve(root, 'scripts/build-cli.mjs')], { cwd: root, stdio: 'inherit' });
+  execFileSync('npm', ['run', '--silent', 'build'], { cwd: root, stdio: 'inherit' });
 }
