@@ -7,7 +7,7 @@
  *     GOLDEN_UPDATE=1 npx vitest run test/golden
  *
  * and say in the commit which outputs changed and why (common practice: approval testing).
- * The temporary folder's path is written as <TMP> and the demo's wall time as <time>, so that the
+ * The temporary folder's path is written as <TMP>, the working folder's as <CWD> and the demo's wall time as <time>, so that the
  * copies do not depend on where and how fast the test ran.
  */
 import {
@@ -127,11 +127,13 @@ function collect(dir: string, into: Map<string, string> = new Map(), base = dir)
   return into;
 }
 
-/** The folder as <TMP>, and the one timing a command prints (the demo's "written in 0.8 s") as <time>. */
+/** The folder as <TMP>, the working folder (the report's "run from") as <CWD>, and the one timing a command prints (the demo's "written in 0.8 s") as <time>. */
 const anonymise = (text: string) =>
   text
     .split(root)
     .join('<TMP>')
+    .split(process.cwd())
+    .join('<CWD>')
     .replace(/written in \d+(\.\d+)? s/g, 'written in <time> s');
 
 beforeAll(async () => {
