@@ -1,26 +1,44 @@
-// Writes assembly/sweep.ts: the SIMD sweep kernel in AssemblyScript, the WebAssembly twin of
-// src/oscillator/kernel.ts (same recurrence, same two passes, same thresholds and Hermite
-// refinement). Four oscillators are stepped per pass as two f64x2 vectors whose coefficients and
-// states live in locals. Run `npm run generate` after editing this template; the output is
-// committed and reviewed like any other source file, and compiled by scripts/build-wasm.mjs at
-// build time.
+// Writes assembly/sweep.ts: the SIMD sweep kernel in AssemblyScript, which gives the peaks of
+// the TypeScript kernel (src/oscillator/kernels/reference.ts: same recurrence, same thresholds and
+// Hermite refinement). Four oscillators are stepped per pass as two f64x2 vectors whose
+// coefficients and states live in locals. The memory layout comes from src/oscillator/layout.ts
+// (through dist/, so run tsc first). `npm run generate` writes the file, formatted by Biome; it
+// is committed and reviewed like any other source file, compiled by scripts/build-wasm.mjs at
+// build time, and test/scripts/generate-wasm-kernel.test.ts checks that it is this script's output.
 //
-// The two passes (the design is described in kernel.ts):
+// The two passes:
 //   1. scan: step the group over the record with no branch at all, keeping per block of
 //      `blockSteps` steps the state at the block's start and the largest |u|, |v| and |s| at the
 //      block's steps. The step is ~19 vector operations per two oscillators; unrolled twice.
 //   2. refine: from the record's sample peaks P, the thresholds P·r − d (refinementThresholds in
-//      sweep.ts); only the blocks whose largest value passes a threshold are stepped again, one
+//      peak.ts); only the blocks whose largest value passes a threshold are stepped again, one
 //      vector at a time from the stored state, with the Hermite refinement on the steps that pass.
+//      The peaks are those of refining every step whose end passes P·r − d, whatever the block
+//      size: the blocks only spare the steps that cannot pass.
+import { spawnSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import {
+  CHECKPOINT_MAXIMA,
+  CHECKPOINT_STRIDE,
+  COEFFICIENT,
+  COEFFICIENT_STRIDE,
+  GROUP_WIDTH,
+  PEAK_STRIDE,
+  STATE_STRIDE,
+} from '../dist/oscillator/layout.js';
 
-// Vectors per pass (two oscillators each); VECTORS=n in the environment tries another width.
-const VECTORS = Number(process.env.VECTORS ?? 2);
-const COEFFICIENT_COUNT = 14;
-/** Values (v128) per vector in a block's checkpoint: u and v at its start, its |u|, |v|, |s| maxima. */
-const CHECKPOINT = 5;
+/** Vectors per pass, two oscillators each. */
+const VECTORS = GROUP_WIDTH / 2;
+/** Bytes per vector of a checkpoint, of the peaks (and thresholds), and of the state's u and v. */
+const CHECKPOINT_BYTES = CHECKPOINT_STRIDE * 16;
+const PEAK_BYTES = PEAK_STRIDE * 16;
+const STATE_BYTES = (STATE_STRIDE - PEAK_STRIDE) * 16;
+/** Byte offset of quantity q (0: |u|, 1: |v|, 2: |s|) among a checkpoint's maxima. */
+const maximum = (q) => (CHECKPOINT_MAXIMA + q) * 16;
 const each = (fn, join = '\n', count = VECTORS) => Array.from({ length: count }, (_, j) => fn(j)).join(join);
 const names = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1', 'c', 'k'];
+const coefficient = (j, name) => (j * COEFFICIENT_STRIDE + COEFFICIENT[name]) * 16;
 // Coefficients held in locals: all ten, or for a symmetric recurrence (up0 = up1, vp0 = vp1)
 // the eight that remain.
 const hotNames = (symmetric) => (symmetric ? names.filter((n) => n !== 'up0' && n !== 'vp0') : names);
@@ -28,10 +46,7 @@ const loadCoefficients = (symmetric, vectors) =>
   each(
     (j) =>
       hotNames(symmetric)
-        .map(
-          (n) =>
-            `  const ${n}${j} = v128.load(coefficients, ${(j * COEFFICIENT_COUNT + names.indexOf(n)) * 16});`,
-        )
+        .map((n) => `  const ${n}${j} = v128.load(coefficients, ${coefficient(j, n)});`)
         .join('\n'),
     '\n',
     vectors,
@@ -88,13 +103,13 @@ const scan = (name, symmetric, vectors) => `/**
 function ${name}(input: usize, steps: i32, blockSteps: i32, coefficients: usize, state: usize, checkpoints: usize): void {
 ${loadCoefficients(symmetric, vectors)}
   const magnitude = v128.load(MAGNITUDE);
-${each((j) => `  let u${j} = v128.load(state, ${j * 32});\n  let v${j} = v128.load(state, ${j * 32 + 16});`, '\n', vectors)}
+${each((j) => `  let u${j} = v128.load(state, ${j * STATE_BYTES});\n  let v${j} = v128.load(state, ${j * STATE_BYTES + 16});`, '\n', vectors)}
   let pas = load<f64>(input);
   let out = checkpoints;
   for (let first = 0; first < steps; first += blockSteps) {
 ${each(
-  (j) => `    v128.store(out, u${j}, ${j * CHECKPOINT * 16});
-    v128.store(out, v${j}, ${j * CHECKPOINT * 16 + 16});
+  (j) => `    v128.store(out, u${j}, ${j * CHECKPOINT_BYTES});
+    v128.store(out, v${j}, ${j * CHECKPOINT_BYTES + 16});
     let mu${j} = f64x2.splat(0);
     let mv${j} = f64x2.splat(0);
     let ms${j} = f64x2.splat(0);`,
@@ -111,15 +126,15 @@ ${scanStep(symmetric, vectors, 'n + 1')}
 ${scanStep(symmetric, vectors, 'n')}
     }
 ${each(
-  (j) => `    v128.store(out, mu${j}, ${j * CHECKPOINT * 16 + 32});
-    v128.store(out, mv${j}, ${j * CHECKPOINT * 16 + 48});
-    v128.store(out, ms${j}, ${j * CHECKPOINT * 16 + 64});`,
+  (j) => `    v128.store(out, mu${j}, ${j * CHECKPOINT_BYTES + maximum(0)});
+    v128.store(out, mv${j}, ${j * CHECKPOINT_BYTES + maximum(1)});
+    v128.store(out, ms${j}, ${j * CHECKPOINT_BYTES + maximum(2)});`,
   '\n',
   vectors,
 )}
-    out += ${vectors * CHECKPOINT * 16};
+    out += ${vectors * CHECKPOINT_BYTES};
   }
-${each((j) => `  v128.store(state, u${j}, ${j * 32});\n  v128.store(state, v${j}, ${j * 32 + 16});`, '\n', vectors)}
+${each((j) => `  v128.store(state, u${j}, ${j * STATE_BYTES});\n  v128.store(state, v${j}, ${j * STATE_BYTES + 16});`, '\n', vectors)}
 }`;
 
 // Pass 2, per quantity (u, v, s) of the one vector: on a step whose new end passes the threshold,
@@ -239,24 +254,14 @@ const hermite = (target, q0, q1, d0, d1) => `{
   }`;
 
 const source = `// Generated by scripts/generate-wasm-kernel.mjs; edit the generator, not this file.
-// The WebAssembly SIMD twin of src/oscillator/kernel.ts: see that file and sweep.ts for the
-// recurrence (recurrence.ts), the two passes, the refinement thresholds and the cubic Hermite
-// peak (peak.ts). Compiled by scripts/build-wasm.mjs with \`asc --enable simd\`.
-
-/** Oscillators per pass: ${VECTORS} vectors of two f64 lanes. */
-export const WIDTH: i32 = ${VECTORS * 2};
-
-/**
- * Layout of the packed arrays (all f64, vector-interleaved: quantity q of oscillator i is at
- * ((i >> 1) · count + q) · 2 + (i & 1)): coefficients ${COEFFICIENT_COUNT} per oscillator (uu, uv, up0, up1,
- * vu, vv, vp0, vp1, c, k, r, du, dv, ds), peaks 3 (|u|, |v|, |s|). The state area holds u and v
- * per vector, then the thresholds 3 per oscillator; a checkpoint ${CHECKPOINT} per oscillator (u and v at its
- * block's start, the block's |u|, |v| and |s| maxima), block after block, vector after vector.
- */
-export const COEFFICIENTS: i32 = ${COEFFICIENT_COUNT};
-export const STATES: i32 = 5;
-export const PEAKS: i32 = 3;
-export const CHECKPOINT: i32 = ${CHECKPOINT};
+// The WebAssembly SIMD sweep kernel, whose peaks are those of src/oscillator/kernels/reference.ts:
+// see that file for the recurrence (recurrence.ts), the two passes, the refinement thresholds
+// (peak.ts) and the cubic Hermite peak. Compiled by scripts/build-wasm.mjs with \`asc --enable simd\`.
+//
+// The packed arrays have the layout of src/oscillator/layout.ts (all f64), vector-interleaved:
+// value q of oscillator i of a group is at ((i >> 1) · stride + q) · 2 + (i & 1). The state area
+// holds u and v per vector, then its three thresholds; the checkpoints follow one another, block
+// after block, vector after vector.
 
 /** The sign-clearing mask of |x| for both lanes, held in a local by the loops. */
 const MAGNITUDE = memory.data<i64>([i64.MAX_VALUE, i64.MAX_VALUE], 16);
@@ -278,7 +283,7 @@ function hermiteAt(peak: f64, qa: f64, qb: f64, m0: f64, m1: f64, t: f64): f64 {
 
 /**
  * The scalar end of pass 2: the cubic Hermite peak of |q| inside one step (q and its derivative
- * at both ends), folded into the peak at \`peak\` (the refinement of kernel.ts).
+ * at both ends), folded into the peak at \`peak\` (hermiteFold in reference.ts).
  */
 function hermiteLane(qa0: f64, qb0: f64, d0: f64, d1: f64, h: f64, peak: usize): void {
   let p = load<f64>(peak);
@@ -319,7 +324,7 @@ function scanStretch(
 /**
  * The input of global step index first + j, for j = 0..steps, into \`buffer\`: the record itself
  * when there is one step per sample, otherwise its linear interpolation at \`substeps\` points per
- * sample interval (the arithmetic of stepInputs in sweep.ts, so both passes see the same bits).
+ * sample interval (the arithmetic of reference.ts, so both passes see the same bits).
  */
 function stepInputs(record: usize, substeps: i32, first: i32, steps: i32, buffer: usize): usize {
   if (substeps === 1) return record + (<usize>first << 3);
@@ -365,8 +370,8 @@ export function runGroup(
   const vectors = narrow ? 1 : ${VECTORS};
   const total = (samples - 1) * substeps;
   const blocks = (total + blockSteps - 1) / blockSteps;
-  const stride = <usize>(vectors * ${CHECKPOINT * 16});
-  memory.fill(state, 0, ${VECTORS * 32});
+  const stride = <usize>(vectors * ${CHECKPOINT_BYTES});
+  memory.fill(state, 0, ${VECTORS * STATE_BYTES});
   // Pass 1, in stretches of chunkSteps so that the engine's optimizing tier takes over between
   // calls (and the interpolated inputs fit in the buffer).
   for (let first = 0; first < total; first += chunkSteps) {
@@ -376,37 +381,37 @@ export function runGroup(
     scanStretch(symmetric, vectors, input, steps, blockSteps, coefficients, state, at);
   }
   // The sample peaks P, and the thresholds P·r − d.
-  const thresholds = state + ${VECTORS * 32};
+  const thresholds = state + ${VECTORS * STATE_BYTES};
   for (let j = 0; j < vectors; j++) {
-    const ratio = v128.load(coefficients + <usize>((j * ${COEFFICIENT_COUNT} + 10) * 16));
-    for (let q = 0; q < 3; q++) {
+    const ratio = v128.load(coefficients + <usize>((j * ${COEFFICIENT_STRIDE} + ${COEFFICIENT.ratio}) * 16));
+    for (let q = 0; q < ${PEAK_STRIDE}; q++) {
       let peak = f64x2.splat(0);
       for (let b = 0; b < blocks; b++) {
-        peak = f64x2.pmax(peak, v128.load(checkpoints + <usize>b * stride + <usize>((j * ${CHECKPOINT} + 2 + q) * 16)));
+        peak = f64x2.pmax(peak, v128.load(checkpoints + <usize>b * stride + <usize>((j * ${CHECKPOINT_STRIDE} + ${CHECKPOINT_MAXIMA} + q) * 16)));
       }
-      v128.store(peaks + <usize>((j * 3 + q) * 16), peak);
-      const offset = v128.load(coefficients + <usize>((j * ${COEFFICIENT_COUNT} + 11 + q) * 16));
-      v128.store(thresholds + <usize>((j * 3 + q) * 16), f64x2.sub(f64x2.mul(peak, ratio), offset));
+      v128.store(peaks + <usize>((j * ${PEAK_STRIDE} + q) * 16), peak);
+      const offset = v128.load(coefficients + <usize>((j * ${COEFFICIENT_STRIDE} + ${COEFFICIENT.du} + q) * 16));
+      v128.store(thresholds + <usize>((j * ${PEAK_STRIDE} + q) * 16), f64x2.sub(f64x2.mul(peak, ratio), offset));
     }
   }
   // Pass 2: the blocks where some lane's largest value passes its threshold, vector by vector.
   for (let b = 0; b < blocks; b++) {
     for (let j = 0; j < vectors; j++) {
-      const checkpoint = checkpoints + <usize>b * stride + <usize>(j * ${CHECKPOINT * 16});
-      const limits = thresholds + <usize>(j * 48);
+      const checkpoint = checkpoints + <usize>b * stride + <usize>(j * ${CHECKPOINT_BYTES});
+      const limits = thresholds + <usize>(j * ${PEAK_BYTES});
       const passes = v128.or(
         v128.or(
-          f64x2.gt(v128.load(checkpoint, 32), v128.load(limits, 0)),
-          f64x2.gt(v128.load(checkpoint, 48), v128.load(limits, 16)),
+          f64x2.gt(v128.load(checkpoint, ${maximum(0)}), v128.load(limits, 0)),
+          f64x2.gt(v128.load(checkpoint, ${maximum(1)}), v128.load(limits, 16)),
         ),
-        f64x2.gt(v128.load(checkpoint, 64), v128.load(limits, 32)),
+        f64x2.gt(v128.load(checkpoint, ${maximum(2)}), v128.load(limits, 32)),
       );
       if (!v128.any_true(passes)) continue;
       const first = b * blockSteps;
       const steps = min(blockSteps, total - first);
       const input = stepInputs(record, substeps, first, steps, buffer);
-      const vector = coefficients + <usize>(j * ${COEFFICIENT_COUNT * 16});
-      const out = peaks + <usize>(j * 48);
+      const vector = coefficients + <usize>(j * ${COEFFICIENT_STRIDE * 16});
+      const out = peaks + <usize>(j * ${PEAK_BYTES});
       if (symmetric) refineVectorSymmetric(input, steps, h, vector, checkpoint, limits, out);
       else refineVector(input, steps, h, vector, checkpoint, limits, out);
     }
@@ -417,4 +422,17 @@ export function runGroup(
 export { rotdPeaks } from './rotd';
 `;
 
-writeFileSync(new URL('../assembly/sweep.ts', import.meta.url), source);
+/** assembly/sweep.ts as this script writes it: the source above, formatted by Biome. */
+export function wasmKernelSource() {
+  const biome = fileURLToPath(new URL('../node_modules/.bin/biome', import.meta.url));
+  const run = spawnSync(biome, ['format', '--stdin-file-path=assembly/sweep.ts'], {
+    input: source,
+    encoding: 'utf8',
+  });
+  if (run.status !== 0) throw new Error(`generate-wasm-kernel: biome format failed: ${run.stderr}`);
+  return run.stdout;
+}
+
+if (process.argv[1] === fileURLToPath(import.meta.url)) {
+  writeFileSync(new URL('../assembly/sweep.ts', import.meta.url), wasmKernelSource());
+}
