@@ -24,8 +24,8 @@ export {
   prewarpedOscillator,
   type StepCoefficients,
   stepCoefficients,
-  substepCount,
 } from './oscillator/recurrence.js';
+export { substepCount } from './oscillator/substeps.js';
 export { type Peaks, type SweepKernel, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
 export { writeFileAtomic } from './output/atomic.js';
 export * from './plot/index.js';

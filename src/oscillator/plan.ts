@@ -2,13 +2,14 @@ import { inputError } from '../base/errors.js';
 import { COEFFICIENT as C, COEFFICIENT_STRIDE, GROUP_WIDTH } from './layout.js';
 import { refinementThresholds } from './peak.js';
 import { type GroundBounds, recordStatistics } from './record-statistics.js';
-import { executedStepCoefficients, executionPlan, type Method, substepCount } from './recurrence.js';
+import { executedStepCoefficients, type Method } from './recurrence.js';
+import { executionPlan, substepCount } from './substeps.js';
 import type { SweepOptions } from './sweep.js';
 
 /**
  * One oscillator of a planned sweep: its index in the result arrays, the steps the kernel executes
  * per record step, and the method's sub-steps composed into each (see executionPlan in
- * recurrence.ts).
+ * substeps.ts).
  */
 export interface PlannedOscillator {
   index: number;

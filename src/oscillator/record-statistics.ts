@@ -34,7 +34,7 @@ export function recordStatistics(
 /**
  * How much of the record's content sits near its Nyquist frequency: R = RMS(Δa)/RMS(a), which is
  * 2 sin(Ωdt/2) for a sine of circular frequency Ω (0 for a constant, 2 at the Nyquist
- * frequency). The sub-step rule uses it (see recordSubsteps in recurrence.ts).
+ * frequency). The sub-step rule uses it (see recordSubsteps in substeps.ts).
  */
 export function recordRoughness(accelMS2: Float64Array): number {
   return recordStatistics(accelMS2, 1).roughness;

@@ -15,7 +15,7 @@ export interface SweepOptions {
    * prewarpedOscillator in recurrence.ts). False runs the textbook recurrences, sub-stepped more.
    */
   prewarp?: boolean;
-  /** Least steps per natural period (raises the rule of recurrence.ts, never lowers it). */
+  /** Least steps per natural period (raises the rule of substeps.ts, never lowers it). */
   stepsPerPeriod?: number;
   /** Kernel: 'auto' (WebAssembly SIMD where the engine has it, else TypeScript), 'wasm' or 'js'. */
   kernel?: SweepKernel;
@@ -44,7 +44,7 @@ export type SweepKernel = 'auto' | 'wasm' | 'js';
  * (m/s², step dtS, linearly interpolated between samples, from rest) and return their peaks.
  * Oscillators with the same sub-step count are stepped in groups (four at a time, as two f64x2
  * vectors, in the WebAssembly SIMD kernel; one at a time in the TypeScript one; both give the
- * same numbers); see recurrence.ts for the methods and the sub-step rule. `plan`, when given, is
+ * same numbers); see recurrence.ts for the methods and substeps.ts for the sub-step rule. `plan`, when given, is
  * planSweep's for the same record and options (a caller that planned already need not plan again).
  */
 export function sweepOscillators(

@@ -3,12 +3,8 @@ import { resolveKernel } from '../oscillator/group-runner.js';
 import { WasmRotD } from '../oscillator/kernels/wasm-rotd.js';
 import { hermitePeak, refinementThresholds } from '../oscillator/peak.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
-import {
-  executedStepCoefficients,
-  executionPlan,
-  type Method,
-  substepCount,
-} from '../oscillator/recurrence.js';
+import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
+import { executionPlan, substepCount } from '../oscillator/substeps.js';
 import type { SweepKernel } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
 import type { SpectrumRecordInfo } from './spectrum.js';
@@ -264,7 +260,7 @@ function oscillatorPeaks(
   const durationS = (a1.length - 1) * dtS;
   const roughness = Math.max(recordRoughness(a1), recordRoughness(a2));
   // The sweep's execution plan: the method's sub-steps, composed down to the steps that the
-  // Hermite refinement needs (executionPlan in recurrence.ts), so PSA here is the sweep's PSA.
+  // Hermite refinement needs (executionPlan in substeps.ts), so PSA here is the sweep's PSA.
   const run = executionPlan(
     substepCount(method, periodS, dtS, { damping, durationS, roughness }),
     periodS,

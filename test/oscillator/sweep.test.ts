@@ -4,12 +4,11 @@ import { hermitePeak } from '../../src/oscillator/peak.js';
 import { recordRoughness } from '../../src/oscillator/record-statistics.js';
 import {
   composeSteps,
-  executionPlan,
   type Method,
   prewarpedOscillator,
   stepCoefficients,
-  substepCount,
 } from '../../src/oscillator/recurrence.js';
+import { executionPlan, substepCount } from '../../src/oscillator/substeps.js';
 import { sweepOscillators } from '../../src/oscillator/sweep.js';
 import { sineRecord, testRecord } from '../helpers/records.js';
 
