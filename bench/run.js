@@ -12,9 +12,10 @@ import { defaultPeriodsS, logSpaced } from '../dist/oscillator/grid.js';
 import { sweepOscillators } from '../dist/oscillator/sweep.js';
 import { writeFileAtomic } from '../dist/output/atomic.js';
 import { synthesizeRecord } from '../dist/record/synth.js';
-import { RotDPool, rotDSpectra } from '../dist/spectrum/rotd.js';
+import { rotDSpectra } from '../dist/spectrum/rotd.js';
 import { assembleSpectrum } from '../dist/spectrum/spectrum.js';
-import { SweepPool } from '../dist/threads/team.js';
+import { RotDPool } from '../dist/threads/rotd-pool.js';
+import { SweepPool } from '../dist/threads/sweep-pool.js';
 
 const REPEAT = Number(process.env.BENCH_REPEAT ?? 5);
 const QUICK = process.env.BENCH_QUICK === '1';

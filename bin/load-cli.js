@@ -1,7 +1,7 @@
 'use strict';
 // Loads the CLI bundle (dist/cli/quakesweep.cjs, made by scripts/build-cli.mjs) with the V8 code
 // cache made beside it at build time. CommonJS (see bin/package.json): a CommonJS entry point
-// starts without Node's ES module loader, which is a few milliseconds of every run.
+// starts without Node's ES module loader.
 const { existsSync, readFileSync, statSync } = require('node:fs');
 const { createRequire } = require('node:module');
 const { dirname, join } = require('node:path');
@@ -12,9 +12,9 @@ const CACHE = `${BUNDLE}.cache`;
 
 /**
  * Compile and run the bundle; its exports are those of dist/cli/main.js. With `cache` (the
- * default) the code cache is handed to V8 when it is at least as new as the bundle; V8 refuses it
- * if it was made by another Node version or for a source of another length, and the bundle is
- * then compiled as usual. `script` can make a cache.
+ * default) the code cache is handed to V8 when it is at least as new as the bundle (V8 compares
+ * no more than the Node version, its flags and the source's length); V8 refuses a cache that does
+ * not fit, and the bundle is then compiled as usual. `script` can make a cache.
  */
 function compileCli({ cache = true } = {}) {
   const source = readFileSync(BUNDLE, 'utf8');
@@ -30,16 +30,4 @@ function compileCli({ cache = true } = {}) {
   return { exports: module.exports, script };
 }
 
-/**
- * The CLI's main(argv): from the bundle when it was built after the compiled modules it holds
- * (a tsc run alone leaves it behind them), else from the compiled modules.
- */
-async function loadMain() {
-  const modules = join(__dirname, '..', 'dist', 'cli', 'main.js');
-  if (existsSync(BUNDLE) && !(statSync(modules).mtimeMs > statSync(BUNDLE).mtimeMs)) {
-    return compileCli().exports.main;
-  }
-  return (await import('../dist/cli/main.js')).main;
-}
-
-module.exports = { BUNDLE, CACHE, compileCli, loadMain };
+module.exports = { BUNDLE, CACHE, compileCli };

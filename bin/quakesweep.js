@@ -1,9 +1,8 @@
 #!/usr/bin/env node
 'use strict';
-// The launcher: loads the CLI (see load-cli.js) and runs it with the command line.
-require('./load-cli.js')
-  .loadMain()
-  .then((main) => main(process.argv.slice(2)))
+// The launcher: runs the CLI bundle (see load-cli.js) with the command line.
+Promise.resolve()
+  .then(() => require('./load-cli.js').compileCli().exports.main(process.argv.slice(2)))
   .then(
     (code) => {
       process.exitCode = code;

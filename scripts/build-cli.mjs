@@ -1,12 +1,12 @@
 // Bundles the command-line program into one CommonJS file, dist/cli/quakesweep.cjs, and makes
 // V8's code cache for it, dist/cli/quakesweep.cjs.cache. Runs after tsc in `npm run build`; the
-// bundle is made from tsc's output (dist/cli/main.js), so it holds the same code.
+// bundle is made from tsc's output (dist/cli/main.js), so it holds the same code, and it is the
+// only way the launcher (bin/load-cli.js) runs the program.
 //
 // Why: a fresh Node 20 process that ran the CLI from dist/ resolved and compiled about forty ES
-// modules and commander before the command began (about 30 ms of a 170 ms `spectrum` run of the
-// benchmark's standard job; the sweep itself takes about 50 ms). One file loaded with a code cache
-// made after a run of the command skips the module resolution and the compilation of every
-// function that run used. bin/load-cli.js loads it; without it the launcher runs dist/ as before.
+// modules and commander before the command began. One file loaded with a code cache made after a
+// run of the command skips the module resolution and the compilation of every function that run
+// used.
 //
 // The cache holds V8's bytecode for this Node version and V8 flags; V8 checks both and the
 // source's length, and a cache that does not fit is refused and the file compiled as usual (the
@@ -25,8 +25,8 @@ const { BUNDLE, CACHE, compileCli } = require('../bin/load-cli.js');
 
 /**
  * commander requires node:child_process when it loads, for subcommands that are programs of their
- * own, which quakesweep has none of; loading it (with net and dgram) cost 2 ms of every run. In
- * the bundle commander gets it on first use instead.
+ * own, which quakesweep has none of; loading it loads net and dgram too. In the bundle commander
+ * gets it on first use instead.
  */
 const lazyChildProcess = {
   name: 'lazy-child-process',
@@ -60,7 +60,7 @@ const common = {
   banner: { js: "const __bundleUrl = require('node:url').pathToFileURL(__filename).href;" },
   plugins: [lazyChildProcess],
   // Without blanks and comments (names kept): a smaller file to read and to scan for the functions
-  // the cache does not hold; 2 ms of a `spectrum` run (medians of 31, interleaved).
+  // the cache does not hold.
   minifyWhitespace: true,
   minifySyntax: true,
   logLevel: 'warning',
@@ -69,7 +69,7 @@ const common = {
 rmSync(CACHE, { force: true });
 await build({ ...common, entryPoints: [join(root, 'dist/cli/main.js')], outfile: BUNDLE });
 // The worker threads of the CLI's pools, bundled too: a worker of one CommonJS file is ready
-// sooner than one that loads the ES modules of dist/ (workerScript in parallel.ts picks these
+// sooner than one that loads the ES modules of dist/ (workerScript in threads/team.ts picks these
 // when it is called from the bundle).
 await build({
   ...common,

@@ -1,9 +1,9 @@
 // Compiles the WebAssembly modules (AssemblyScript) at build time: the SIMD sweep kernel
-// (assembly/sweep.ts, with RotD's loop), the record reader's row scanner (assembly/rows.ts, no
-// SIMD) and the sweep plan's arithmetic (assembly/plan.ts, no SIMD). Each gives build/<name>.wasm and its text form build/<name>.wat for review, and a
-// TypeScript file holding the same bytes as base64 (src/oscillator/wasm/binary.ts,
-// src/record/rows-binary.ts, src/oscillator/wasm/plan-binary.ts), so that the library loads them without reading a file (none of
-// these is committed; see .gitignore). Runs before tsc in `npm run build`.
+// (assembly/sweep.ts, with RotD's loop) and the record reader's row scanner (assembly/rows.ts, no
+// SIMD). Each gives build/<name>.wasm and its text form build/<name>.wat for review, and a
+// TypeScript file holding the same bytes as base64 (src/oscillator/kernels/wasm-binary.ts,
+// src/record/rows-binary.ts), so that the library loads them without reading a file (neither is
+// committed; see .gitignore). Runs before tsc in `npm run build`.
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import asc from 'assemblyscript/asc';
 
@@ -43,8 +43,7 @@ await build(
   'assembly/sweep.ts',
   'sweep',
   ['--enable', 'simd'],
-  'src/oscillator/wasm/binary.ts',
+  'src/oscillator/kernels/wasm-binary.ts',
   'SWEEP_WASM_BASE64',
 );
 await build('assembly/rows.ts', 'rows', [], 'src/record/rows-binary.ts', 'ROWS_WASM_BASE64');
-await build('assembly/plan.ts', 'plan', [], 'src/oscillator/wasm/plan-binary.ts', 'PLAN_WASM_BASE64');

@@ -1,262 +1,51 @@
-// Writes assembly/sweep.ts: the SIMD sweep kernel in AssemblyScript, the WebAssembly twin of
-// src/oscillator/kernel.ts (same recurrence, same two passes, same thresholds and Hermite
-// refinement). Four oscillators are stepped per pass as two f64x2 vectors whose coefficients and
-// states live in locals. Run `npm run generate` after editing this template; the output is
-// committed and reviewed like any other source file, and compiled by scripts/build-wasm.mjs at
-// build time.
+// Writes assembly/sweep.ts: the SIMD sweep kernel in AssemblyScript, which gives the peaks of
+// the TypeScript kernel (src/oscillator/kernels/reference.ts: same recurrence, same thresholds and
+// Hermite refinement). Four oscillators are stepped per pass as two f64x2 vectors whose
+// coefficients and states live in locals; the loops' templates are in wasm-kernel-loops.mjs. The
+// memory layout comes from src/oscillator/layout.ts (through dist/, so run tsc first).
+// `npm run generate` writes the file, formatted by Biome; it is committed and reviewed like any
+// other source file, compiled by scripts/build-wasm.mjs at build time, and
+// test/scripts/generate-wasm-kernel.test.ts checks that it is this script's output.
 //
-// The two passes (the design is described in kernel.ts):
+// The two passes:
 //   1. scan: step the group over the record with no branch at all, keeping per block of
 //      `blockSteps` steps the state at the block's start and the largest |u|, |v| and |s| at the
 //      block's steps. The step is ~19 vector operations per two oscillators; unrolled twice.
 //   2. refine: from the record's sample peaks P, the thresholds P·r − d (refinementThresholds in
-//      sweep.ts); only the blocks whose largest value passes a threshold are stepped again, one
+//      peak.ts); only the blocks whose largest value passes a threshold are stepped again, one
 //      vector at a time from the stored state, with the Hermite refinement on the steps that pass.
+//      The peaks are those of refining every step whose end passes P·r − d, whatever the block
+//      size: the blocks only spare the steps that cannot pass.
+import { spawnSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
-
-// Vectors per pass (two oscillators each); VECTORS=n in the environment tries another width.
-const VECTORS = Number(process.env.VECTORS ?? 2);
-const COEFFICIENT_COUNT = 14;
-/** Values (v128) per vector in a block's checkpoint: u and v at its start, its |u|, |v|, |s| maxima. */
-const CHECKPOINT = 5;
-const each = (fn, join = '\n', count = VECTORS) => Array.from({ length: count }, (_, j) => fn(j)).join(join);
-const names = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1', 'c', 'k'];
-// Coefficients held in locals: all ten, or for a symmetric recurrence (up0 = up1, vp0 = vp1)
-// the eight that remain.
-const hotNames = (symmetric) => (symmetric ? names.filter((n) => n !== 'up0' && n !== 'vp0') : names);
-const loadCoefficients = (symmetric, vectors) =>
-  each(
-    (j) =>
-      hotNames(symmetric)
-        .map(
-          (n) =>
-            `  const ${n}${j} = v128.load(coefficients, ${(j * COEFFICIENT_COUNT + names.indexOf(n)) * 16});`,
-        )
-        .join('\n'),
-    '\n',
-    vectors,
-  );
-
-// The general update keeps the TypeScript kernel's order of operations, ((a + b) + c) + d, so the
-// two kernels give the same bits; the symmetric one adds its single forcing term last.
-const update = (symmetric, q, j) => {
-  const free = `f64x2.add(f64x2.mul(${q}u${j}, uo${j}), f64x2.mul(${q}v${j}, vo${j}))`;
-  return symmetric
-    ? `f64x2.add(${free}, f64x2.mul(${q}p1${j}, sum))`
-    : `f64x2.add(f64x2.add(${free}, f64x2.mul(${q}p0${j}, pa)), f64x2.mul(${q}p1${j}, pb))`;
-};
-// One step of vector j: the new state, and cs = c·v + k·u, whose magnitude is |s| (s = −cs is the
-// absolute acceleration; its sign is only needed when refining).
-const advance = (symmetric, j) => `      const uo${j} = u${j};
-      const vo${j} = v${j};
-      u${j} = ${update(symmetric, 'u', j)};
-      v${j} = ${update(symmetric, 'v', j)};
-      const cs${j} = f64x2.add(f64x2.mul(c${j}, v${j}), f64x2.mul(k${j}, u${j}));`;
-// The input of step n: p at its start (pas) and end (pbs), as splats or their sum.
-const input = (symmetric, n) => `      const pbs = load<f64>(input + (<usize>(${n}) << 3));
-      ${symmetric ? 'const sum = f64x2.splat(pas + pbs);' : 'const pa = f64x2.splat(pas);\n      const pb = f64x2.splat(pbs);'}`;
-
-// Pass 1, one step of every vector: advance and fold |u|, |v|, |s| into the block's maxima. pmax
-// is one instruction (max, unlike f64x2.max, need not order NaNs and zeros: the values are finite
-// magnitudes), and the magnitude is an and with the mask held in a local.
-const scanStep = (symmetric, vectors, n) => `    {
-${input(symmetric, n)}
-${each(
-  (j) => `${advance(symmetric, j)}
-      mu${j} = f64x2.pmax(mu${j}, v128.and(u${j}, magnitude));
-      mv${j} = f64x2.pmax(mv${j}, v128.and(v${j}, magnitude));
-      ms${j} = f64x2.pmax(ms${j}, v128.and(cs${j}, magnitude));`,
-  '\n',
-  vectors,
-)}
-      pas = pbs;
-    }`;
-
-const scan = (name, symmetric, vectors) => `/**
- * Pass 1 for ${vectors * 2} oscillators: step them over \`steps\` steps through the inputs input[0..steps]
- * (f64 at byte address \`input\`), continuing from the state at \`state\` (u, v per vector), and for
- * each block of \`blockSteps\` steps write its checkpoint (u and v at its start, the largest |u|,
- * |v| and |s| at its steps) to \`checkpoints\`, one block after another.${
-   symmetric
-     ? `
- * For recurrences whose two forcing coefficients are equal (up0 = up1 and vp0 = vp1, as for Newmark
- * average acceleration, where both are −βh²/D and −γh/D in exact arithmetic): the forcing is
- * up1·(p_n + p_{n+1}), two multiplications and two additions fewer per oscillator-step.`
-     : ''
- }
- */
-function ${name}(input: usize, steps: i32, blockSteps: i32, coefficients: usize, state: usize, checkpoints: usize): void {
-${loadCoefficients(symmetric, vectors)}
-  const magnitude = v128.load(MAGNITUDE);
-${each((j) => `  let u${j} = v128.load(state, ${j * 32});\n  let v${j} = v128.load(state, ${j * 32 + 16});`, '\n', vectors)}
-  let pas = load<f64>(input);
-  let out = checkpoints;
-  for (let first = 0; first < steps; first += blockSteps) {
-${each(
-  (j) => `    v128.store(out, u${j}, ${j * CHECKPOINT * 16});
-    v128.store(out, v${j}, ${j * CHECKPOINT * 16 + 16});
-    let mu${j} = f64x2.splat(0);
-    let mv${j} = f64x2.splat(0);
-    let ms${j} = f64x2.splat(0);`,
-  '\n',
-  vectors,
-)}
-    const last = min(first + blockSteps, steps);
-    let n = first + 1;
-    for (; n < last; n += 2) {
-${scanStep(symmetric, vectors, 'n')}
-${scanStep(symmetric, vectors, 'n + 1')}
-    }
-    if (n === last) {
-${scanStep(symmetric, vectors, 'n')}
-    }
-${each(
-  (j) => `    v128.store(out, mu${j}, ${j * CHECKPOINT * 16 + 32});
-    v128.store(out, mv${j}, ${j * CHECKPOINT * 16 + 48});
-    v128.store(out, ms${j}, ${j * CHECKPOINT * 16 + 64});`,
-  '\n',
-  vectors,
-)}
-    out += ${vectors * CHECKPOINT * 16};
-  }
-${each((j) => `  v128.store(state, u${j}, ${j * 32});\n  v128.store(state, v${j}, ${j * 32 + 16});`, '\n', vectors)}
-}`;
-
-// Pass 2, per quantity (u, v, s) of the one vector: on a step whose new end passes the threshold,
-// only lanes whose cubic Hermite H may turn inside the step go on to the scalar refinement
-// (hermiteLane). H' is the quadratic f(t) = m0(1 − t) + m1·t − ca·t(1 − t) (ca as in the Hermite
-// below), so with m0 and m1 of one sign f ≥ min(|m0|, |m1|) − |ca|/4 and a root in (0, 1) needs
-// m0·m1 ≤ 0 or |ca| ≥ 4·min(|m0|, |m1|); the test takes 3.5 for rounding to spare, so it is a
-// superset of the steps where the scalar refinement changes anything.
-const quantities = [
-  { q0: 'uo0', q1: 'u0', d0: 'vo0', d1: 'v0', slot: 0, hit: 'hitU', needs: '' },
-  { q0: 'vo0', q1: 'v0', d0: 'ar0', d1: 'ar1', slot: 1, hit: 'hitV', needs: 'accelerations' },
-  { q0: 'so', q1: 'sn', d0: 'js0', d1: 'js1', slot: 2, hit: 'hitS', needs: 'jerks' },
-];
-// The absolute acceleration s = −(c v + k u) and the relative one (s − p) at both ends of the step.
-const accelerations = `
-            const so = f64x2.neg(f64x2.add(f64x2.mul(c0, vo0), f64x2.mul(k0, uo0)));
-            const sn = f64x2.neg(cs0);
-            const ar0 = f64x2.sub(so, f64x2.splat(pas));
-            const ar1 = f64x2.sub(sn, f64x2.splat(pbs));`;
-// ds/dt = −c·(s − p) − k·v at both ends.
-const jerks = `${accelerations}
-            const js0 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar0), f64x2.mul(k0, vo0));
-            const js1 = f64x2.sub(f64x2.mul(f64x2.neg(c0), ar1), f64x2.mul(k0, v0));`;
-const lane = (q, l) => `              if (need & ${1 << l}) {
-                hermiteLane(
-                  f64x2.extract_lane(${q.q0}, ${l}),
-                  f64x2.extract_lane(${q.q1}, ${l}),
-                  f64x2.extract_lane(${q.d0}, ${l}),
-                  f64x2.extract_lane(${q.d1}, ${l}),
-                  h,
-                  peaks + ${(q.slot * 2 + l) * 8},
-                );
-              }`;
-
-const refine = (name, symmetric) => `/**
- * Pass 2 for the two oscillators of one vector: step them over \`steps\` steps from the state at
- * \`start\` (u, v: a block's checkpoint) and fold the Hermite peaks of the steps whose new end passes
- * the thresholds at \`thresholds\` (|u|, |v|, |s|) into \`peaks\`. The step is pass 1's, so the
- * states are the same bits.
- */
-function ${name}(input: usize, steps: i32, h: f64, coefficients: usize, start: usize, thresholds: usize, peaks: usize): void {
-${loadCoefficients(symmetric, 1)}
-  const magnitude = v128.load(MAGNITUDE);
-  let u0 = v128.load(start, 0);
-  let v0 = v128.load(start, 16);
-  const tu = v128.load(thresholds, 0);
-  const tv = v128.load(thresholds, 16);
-  const ts = v128.load(thresholds, 32);
-  const hv = f64x2.splat(h);
-  const zero = f64x2.splat(0);
-  const three = f64x2.splat(3);
-  const six = f64x2.splat(6);
-  const bend = f64x2.splat(3.5);
-  let pas = load<f64>(input);
-  for (let n = 1; n <= steps; n++) {
-${input(symmetric, 'n')}
-${advance(symmetric, 0)}
-    const hitU = f64x2.gt(v128.and(u0, magnitude), tu);
-    const hitV = f64x2.gt(v128.and(v0, magnitude), tv);
-    const hitS = f64x2.gt(v128.and(cs0, magnitude), ts);
-    if (v128.any_true(v128.or(v128.or(hitU, hitV), hitS))) {
-${quantities
-  .map(
-    (
-      q,
-    ) => `      if (v128.any_true(${q.hit})) {${q.needs === 'accelerations' ? accelerations : q.needs === 'jerks' ? jerks : ''}
-            const m0 = f64x2.mul(${q.d0}, hv);
-            const m1 = f64x2.mul(${q.d1}, hv);
-            const ca = f64x2.add(
-              f64x2.mul(six, f64x2.sub(${q.q0}, ${q.q1})),
-              f64x2.mul(three, f64x2.add(m0, m1)),
-            );
-            const turns = v128.or(
-              f64x2.le(f64x2.mul(m0, m1), zero),
-              f64x2.ge(f64x2.abs(ca), f64x2.mul(bend, f64x2.min(f64x2.abs(m0), f64x2.abs(m1)))),
-            );
-            const need = i64x2.bitmask(v128.and(${q.hit}, turns));
-            if (need !== 0) {
-${lane(q, 0)}
-${lane(q, 1)}
-            }
-      }`,
-  )
-  .join('\n')}
-    }
-    pas = pbs;
-  }
-}`;
-
-const hermite = (target, q0, q1, d0, d1) => `{
-    const m0 = (${d0}) * h;
-    const m1 = (${d1}) * h;
-    const qa = ${q0};
-    const qb = ${q1};
-    const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
-    const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-    // H'(t) = ca t² + cb t + m0 with H'(0) = m0 and H'(1) = m1. Where m0 and m1 have the same
-    // sign, H' has a root in (0, 1) only if its vertex −cb/(2ca) lies there and it bends back
-    // towards zero (ca·m0 > 0); otherwise the roots the formula below would find are outside
-    // (0, 1) (or at its ends, where H is the end value already counted), and the square root
-    // and divisions are skipped. Exact in real arithmetic; the kernels agree to rounding.
-    if (!(m0 * m1 > 0) || (ca * m0 > 0 && ca * cb < 0 && Math.abs(cb) < 2 * Math.abs(ca))) {
-    if (Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0))) {
-      const disc = cb * cb - 4 * ca * m0;
-      if (disc >= 0) {
-        const root = Math.sqrt(disc);
-        const qq = -0.5 * (cb + (cb >= 0 ? root : -root));
-        const ta = qq / ca;
-        const tb = qq !== 0 ? m0 / qq : -1;
-        ${target} = hermiteAt(${target}, qa, qb, m0, m1, ta);
-        ${target} = hermiteAt(${target}, qa, qb, m0, m1, tb);
-      }
-    } else if (cb !== 0) {
-      ${target} = hermiteAt(${target}, qa, qb, m0, m1, -m0 / cb);
-    }
-    }
-  }`;
+import { fileURLToPath } from 'node:url';
+import {
+  CHECKPOINT_MAXIMA,
+  CHECKPOINT_STRIDE,
+  COEFFICIENT,
+  COEFFICIENT_STRIDE,
+  PEAK_STRIDE,
+} from '../dist/oscillator/layout.js';
+import {
+  CHECKPOINT_BYTES,
+  hermite,
+  maximum,
+  PEAK_BYTES,
+  refine,
+  STATE_BYTES,
+  scan,
+  VECTORS,
+} from './wasm-kernel-loops.mjs';
 
 const source = `// Generated by scripts/generate-wasm-kernel.mjs; edit the generator, not this file.
-// The WebAssembly SIMD twin of src/oscillator/kernel.ts: see that file and sweep.ts for the
-// recurrence (recurrence.ts), the two passes, the refinement thresholds and the cubic Hermite
-// peak (peak.ts). Compiled by scripts/build-wasm.mjs with \`asc --enable simd\`.
-
-/** Oscillators per pass: ${VECTORS} vectors of two f64 lanes. */
-export const WIDTH: i32 = ${VECTORS * 2};
-
-/**
- * Layout of the packed arrays (all f64, vector-interleaved: quantity q of oscillator i is at
- * ((i >> 1) · count + q) · 2 + (i & 1)): coefficients ${COEFFICIENT_COUNT} per oscillator (uu, uv, up0, up1,
- * vu, vv, vp0, vp1, c, k, r, du, dv, ds), peaks 3 (|u|, |v|, |s|). The state area holds u and v
- * per vector, then the thresholds 3 per oscillator; a checkpoint ${CHECKPOINT} per oscillator (u and v at its
- * block's start, the block's |u|, |v| and |s| maxima), block after block, vector after vector.
- */
-export const COEFFICIENTS: i32 = ${COEFFICIENT_COUNT};
-export const STATES: i32 = 5;
-export const PEAKS: i32 = 3;
-export const CHECKPOINT: i32 = ${CHECKPOINT};
+// The WebAssembly SIMD sweep kernel, whose peaks are those of src/oscillator/kernels/reference.ts:
+// see that file for the recurrence (recurrence.ts), the two passes, the refinement thresholds
+// (peak.ts) and the cubic Hermite peak. Compiled by scripts/build-wasm.mjs with \`asc --enable simd\`.
+//
+// The packed arrays have the layout of src/oscillator/layout.ts (all f64), vector-interleaved:
+// value q of oscillator i of a group is at ((i >> 1) · stride + q) · 2 + (i & 1). The state area
+// holds u and v per vector, then its three thresholds; the checkpoints follow one another, block
+// after block, vector after vector.
 
 /** The sign-clearing mask of |x| for both lanes, held in a local by the loops. */
 const MAGNITUDE = memory.data<i64>([i64.MAX_VALUE, i64.MAX_VALUE], 16);
@@ -278,7 +67,7 @@ function hermiteAt(peak: f64, qa: f64, qb: f64, m0: f64, m1: f64, t: f64): f64 {
 
 /**
  * The scalar end of pass 2: the cubic Hermite peak of |q| inside one step (q and its derivative
- * at both ends), folded into the peak at \`peak\` (the refinement of kernel.ts).
+ * at both ends), folded into the peak at \`peak\` (hermiteFold in reference.ts).
  */
 function hermiteLane(qa0: f64, qb0: f64, d0: f64, d1: f64, h: f64, peak: usize): void {
   let p = load<f64>(peak);
@@ -319,7 +108,7 @@ function scanStretch(
 /**
  * The input of global step index first + j, for j = 0..steps, into \`buffer\`: the record itself
  * when there is one step per sample, otherwise its linear interpolation at \`substeps\` points per
- * sample interval (the arithmetic of stepInputs in sweep.ts, so both passes see the same bits).
+ * sample interval (the arithmetic of reference.ts, so both passes see the same bits).
  */
 function stepInputs(record: usize, substeps: i32, first: i32, steps: i32, buffer: usize): usize {
   if (substeps === 1) return record + (<usize>first << 3);
@@ -365,8 +154,8 @@ export function runGroup(
   const vectors = narrow ? 1 : ${VECTORS};
   const total = (samples - 1) * substeps;
   const blocks = (total + blockSteps - 1) / blockSteps;
-  const stride = <usize>(vectors * ${CHECKPOINT * 16});
-  memory.fill(state, 0, ${VECTORS * 32});
+  const stride = <usize>(vectors * ${CHECKPOINT_BYTES});
+  memory.fill(state, 0, ${VECTORS * STATE_BYTES});
   // Pass 1, in stretches of chunkSteps so that the engine's optimizing tier takes over between
   // calls (and the interpolated inputs fit in the buffer).
   for (let first = 0; first < total; first += chunkSteps) {
@@ -376,37 +165,37 @@ export function runGroup(
     scanStretch(symmetric, vectors, input, steps, blockSteps, coefficients, state, at);
   }
   // The sample peaks P, and the thresholds P·r − d.
-  const thresholds = state + ${VECTORS * 32};
+  const thresholds = state + ${VECTORS * STATE_BYTES};
   for (let j = 0; j < vectors; j++) {
-    const ratio = v128.load(coefficients + <usize>((j * ${COEFFICIENT_COUNT} + 10) * 16));
-    for (let q = 0; q < 3; q++) {
+    const ratio = v128.load(coefficients + <usize>((j * ${COEFFICIENT_STRIDE} + ${COEFFICIENT.ratio}) * 16));
+    for (let q = 0; q < ${PEAK_STRIDE}; q++) {
       let peak = f64x2.splat(0);
       for (let b = 0; b < blocks; b++) {
-        peak = f64x2.pmax(peak, v128.load(checkpoints + <usize>b * stride + <usize>((j * ${CHECKPOINT} + 2 + q) * 16)));
+        peak = f64x2.pmax(peak, v128.load(checkpoints + <usize>b * stride + <usize>((j * ${CHECKPOINT_STRIDE} + ${CHECKPOINT_MAXIMA} + q) * 16)));
       }
-      v128.store(peaks + <usize>((j * 3 + q) * 16), peak);
-      const offset = v128.load(coefficients + <usize>((j * ${COEFFICIENT_COUNT} + 11 + q) * 16));
-      v128.store(thresholds + <usize>((j * 3 + q) * 16), f64x2.sub(f64x2.mul(peak, ratio), offset));
+      v128.store(peaks + <usize>((j * ${PEAK_STRIDE} + q) * 16), peak);
+      const offset = v128.load(coefficients + <usize>((j * ${COEFFICIENT_STRIDE} + ${COEFFICIENT.du} + q) * 16));
+      v128.store(thresholds + <usize>((j * ${PEAK_STRIDE} + q) * 16), f64x2.sub(f64x2.mul(peak, ratio), offset));
     }
   }
   // Pass 2: the blocks where some lane's largest value passes its threshold, vector by vector.
   for (let b = 0; b < blocks; b++) {
     for (let j = 0; j < vectors; j++) {
-      const checkpoint = checkpoints + <usize>b * stride + <usize>(j * ${CHECKPOINT * 16});
-      const limits = thresholds + <usize>(j * 48);
+      const checkpoint = checkpoints + <usize>b * stride + <usize>(j * ${CHECKPOINT_BYTES});
+      const limits = thresholds + <usize>(j * ${PEAK_BYTES});
       const passes = v128.or(
         v128.or(
-          f64x2.gt(v128.load(checkpoint, 32), v128.load(limits, 0)),
-          f64x2.gt(v128.load(checkpoint, 48), v128.load(limits, 16)),
+          f64x2.gt(v128.load(checkpoint, ${maximum(0)}), v128.load(limits, 0)),
+          f64x2.gt(v128.load(checkpoint, ${maximum(1)}), v128.load(limits, 16)),
         ),
-        f64x2.gt(v128.load(checkpoint, 64), v128.load(limits, 32)),
+        f64x2.gt(v128.load(checkpoint, ${maximum(2)}), v128.load(limits, 32)),
       );
       if (!v128.any_true(passes)) continue;
       const first = b * blockSteps;
       const steps = min(blockSteps, total - first);
       const input = stepInputs(record, substeps, first, steps, buffer);
-      const vector = coefficients + <usize>(j * ${COEFFICIENT_COUNT * 16});
-      const out = peaks + <usize>(j * 48);
+      const vector = coefficients + <usize>(j * ${COEFFICIENT_STRIDE * 16});
+      const out = peaks + <usize>(j * ${PEAK_BYTES});
       if (symmetric) refineVectorSymmetric(input, steps, h, vector, checkpoint, limits, out);
       else refineVector(input, steps, h, vector, checkpoint, limits, out);
     }
@@ -417,4 +206,17 @@ export function runGroup(
 export { rotdPeaks } from './rotd';
 `;
 
-writeFileSync(new URL('../assembly/sweep.ts', import.meta.url), source);
+/** assembly/sweep.ts as this script writes it: the source above, formatted by Biome. */
+export function wasmKernelSource() {
+  const biome = fileURLToPath(new URL('../node_modules/.bin/biome', import.meta.url));
+  const run = spawnSync(biome, ['format', '--stdin-file-path=assembly/sweep.ts'], {
+    input: source,
+    encoding: 'utf8',
+  });
+  if (run.status !== 0) throw new Error(`generate-wasm-kernel: biome format failed: ${run.stderr}`);
+  return run.stdout;
+}
+
+if (process.argv[1] === fileURLToPath(import.meta.url)) {
+  writeFileSync(new URL('../assembly/sweep.ts', import.meta.url), wasmKernelSource());
+}

@@ -13,6 +13,7 @@ export { VERSION } from './base/version.js';
 export { spectrumToCsv } from './formats/spectrum-csv.js';
 export { formatJson, type SpectrumJson, spectrumToJson } from './formats/spectrum-json.js';
 export { defaultPeriodsS, logSpaced, parseDampings, parsePeriods } from './oscillator/grid.js';
+export { wasmSimdSupported } from './oscillator/kernels/wasm.js';
 export { hermitePeak } from './oscillator/peak.js';
 export {
   METHOD_DESCRIPTIONS,
@@ -23,10 +24,9 @@ export {
   prewarpedOscillator,
   type StepCoefficients,
   stepCoefficients,
-  substepCount,
 } from './oscillator/recurrence.js';
+export { substepCount } from './oscillator/substeps.js';
 export { type Peaks, type SweepKernel, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
-export { wasmSimdSupported } from './oscillator/wasm/kernel.js';
 export { writeFileAtomic } from './output/atomic.js';
 export * from './plot/index.js';
 export { fourierAmplitudeSpectrum, konnoOhmachiSmooth, konnoOhmachiWeight } from './record/fourier.js';
@@ -57,14 +57,7 @@ export {
 } from './spectrum/design.js';
 export { readSpectrumTable, tableSpectrum } from './spectrum/design-table.js';
 export { broadenSpectrum, floorRecord, floorSpectrum } from './spectrum/floor.js';
-export {
-  type ParallelRotDOptions,
-  type RotDOptions,
-  RotDPool,
-  type RotDSpectra,
-  rotDSpectra,
-  rotDSpectraParallel,
-} from './spectrum/rotd.js';
+export { type RotDOptions, type RotDSpectra, rotDSpectra } from './spectrum/rotd.js';
 export { scaleToTarget } from './spectrum/scale.js';
 export {
   assembleSpectrum,
@@ -73,4 +66,5 @@ export {
   type SpectrumCurve,
   type SpectrumOptions,
 } from './spectrum/spectrum.js';
-export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './threads/team.js';
+export { type ParallelRotDOptions, RotDPool, rotDSpectraParallel } from './threads/rotd-pool.js';
+export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './threads/sweep-pool.js';

@@ -20,8 +20,7 @@ export function expm(matrix: Float64Array, n: number): Float64Array {
   for (let i = 0; i < size; i++) scaled[i] = matrix[i] * scale;
 
   // Four arrays for the whole series (a product is written into the spare one, then swapped):
-  // made anew for each term, they were most of the time of a sweep with the piecewise-exact
-  // method (a thousand exponentials took 40 ms).
+  // arrays made anew for each term would be most of the time of a piecewise-exact sweep's plan.
   let result: Float64Array = identity(n);
   let term: Float64Array = identity(n);
   let spare: Float64Array = new Float64Array(size);

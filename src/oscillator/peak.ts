@@ -1,3 +1,5 @@
+import type { GroundBounds } from './record-statistics.js';
+
 /**
  * Peak of |q(t)| over one step, from the values and slopes at its two ends, by cubic Hermite
  * interpolation (common practice; the cubic is exact when q is a cubic in t, and its error is
@@ -35,4 +37,26 @@ function hermiteAbs(q0: number, q1: number, m0: number, m1: number, t: number): 
   return Math.abs(
     (2 * t3 - 3 * t2 + 1) * q0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * q1 + (t3 - t2) * m1,
   );
+}
+
+/**
+ * When to refine a peak between steps. Near its peak P* at t*, a quantity q falls off no faster
+ * than ½|q''|(t − t*)² (Taylor's theorem), so both ends of the step holding P* are above
+ * P* − ½h²·max|q''|. Bounding |q''| at the peak from the equation of motion (with a_rel = ü):
+ *   u'' = a_rel = −a_g − ω²u           → |u''| ≤ PGA + ω²P
+ *   v'' = ȧ_rel = −ȧ_g − 2ζωa_rel − ω²v → |v''| ≤ J + ω²P      (a_rel = 0 at a peak of v)
+ *   s'' (s = absolute acceleration)     → |s''| ≤ 2ζωJ + ω²(P + PGA)
+ * where J is the record's peak jerk. A step whose new end is below P·r − d (r = 1 − ½(ωh)²·m,
+ * d = ½h²·m·(bound's ground term), m = 1.1 a margin for the variation of q'' over the step)
+ * cannot hold a peak higher than the running one P, so only the others are examined.
+ */
+export function refinementThresholds(omegaRadS: number, cRadS: number, stepS: number, bounds: GroundBounds) {
+  const margin = 1.1;
+  const half = 0.5 * margin * stepS * stepS;
+  return {
+    ratio: 1 - half * omegaRadS * omegaRadS,
+    displacementOffset: half * bounds.pgaMS2,
+    velocityOffset: half * bounds.jerkMS3,
+    accelerationOffset: half * (cRadS * bounds.jerkMS3 + omegaRadS * omegaRadS * bounds.pgaMS2),
+  };
 }

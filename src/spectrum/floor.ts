@@ -1,11 +1,7 @@
 import { inputError } from '../base/errors.js';
-import {
-  type Method,
-  prewarpedOscillator,
-  stepCoefficients,
-  substepCount,
-} from '../oscillator/recurrence.js';
-import { recordRoughness } from '../oscillator/sweep.js';
+import { recordRoughness } from '../oscillator/record-statistics.js';
+import { type Method, prewarpedOscillator, stepCoefficients } from '../oscillator/recurrence.js';
+import { substepCount } from '../oscillator/substeps.js';
 import { type GroundRecord, withProcessing } from '../record/record.js';
 import { responseSpectrum, type Spectrum, type SpectrumCurve, type SpectrumOptions } from './spectrum.js';
 

@@ -1,21 +1,12 @@
-import { availableParallelism } from 'node:os';
 import { inputError, usageError } from '../base/errors.js';
-import { hermitePeak } from '../oscillator/peak.js';
-import {
-  executedStepCoefficients,
-  executionPlan,
-  type Method,
-  substepCount,
-} from '../oscillator/recurrence.js';
-import {
-  recordRoughness,
-  refinementThresholds,
-  resolveKernel,
-  type SweepKernel,
-} from '../oscillator/sweep.js';
-import { WasmRotD } from '../oscillator/wasm/kernel.js';
+import { resolveKernel } from '../oscillator/group-runner.js';
+import { WasmRotD } from '../oscillator/kernels/wasm-rotd.js';
+import { hermitePeak, refinementThresholds } from '../oscillator/peak.js';
+import { recordRoughness } from '../oscillator/record-statistics.js';
+import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
+import { executionPlan, substepCount } from '../oscillator/substeps.js';
+import type { SweepKernel } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
-import { shared, ThreadTeam, workerScript } from '../threads/team.js';
 import type { SpectrumRecordInfo } from './spectrum.js';
 
 /** Two-component spectra of a pair of horizontal records at one damping ratio, m/s², by period. */
@@ -68,107 +59,8 @@ export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: 
   return finishRotD(first, second, work, rotDCurves(work));
 }
 
-export interface ParallelRotDOptions extends RotDOptions {
-  /** Threads, this one included; default all cores. 1 computes here alone. */
-  threads?: number;
-}
-
-/**
- * rotDSpectra on worker threads (a RotDPool of `threads`, started for the call and closed after):
- * the threads claim (damping, period) cells from a shared counter, and each cell is computed as
- * on one thread, so the numbers are the same bits.
- */
-export async function rotDSpectraParallel(
-  first: GroundRecord,
-  second: GroundRecord,
-  options: ParallelRotDOptions,
-): Promise<RotDSpectra> {
-  const threads = Math.max(1, Math.min(options.threads ?? availableParallelism(), options.periodsS.length));
-  if (threads === 1) return rotDSpectra(first, second, options);
-  const pool = new RotDPool(threads);
-  try {
-    return await pool.rotd(first, second, options);
-  } finally {
-    await pool.close();
-  }
-}
-
-/**
- * RotD work as the threads of a RotDPool share it: the components in shared memory, a counter
- * handing out cells (damping-major: cell c is damping ⌊c / periods⌋, period c mod periods), and
- * RotD50, RotD100 and the geometric mean of every cell, three values a cell.
- */
-export interface SharedRotDJob {
-  work: RotDWork;
-  counter: Int32Array;
-  results: Float64Array;
-}
-
-/** Claim cells of the job one at a time and compute them on this thread (see SharedRotDJob). */
-export function runClaimedRotD(job: SharedRotDJob): void {
-  const { work } = job;
-  const context = rotDContext(work);
-  const out = new Float64Array(3);
-  const cells = work.dampings.length * work.periodsS.length;
-  for (;;) {
-    const next = Atomics.add(job.counter, 0, 1);
-    if (next >= cells) return;
-    const d = Math.floor(next / work.periodsS.length);
-    rotDCell(work, context, d, next - d * work.periodsS.length, out);
-    job.results.set(out, 3 * next);
-  }
-}
-
-/**
- * Worker threads that compute RotD spectra together with the calling thread, for many pairs or
- * large grids (starting a worker costs tens of milliseconds: keep a pool for a suite). Close it
- * when done so that the process can exit.
- */
-export class RotDPool {
-  readonly threads: number;
-  private readonly team: ThreadTeam;
-
-  constructor(threads = availableParallelism()) {
-    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'threads', 'rotd-worker.js'));
-    this.threads = threads;
-  }
-
-  /** rotDSpectra of the pair, bit for bit, computed by all the pool's threads. */
-  async rotd(first: GroundRecord, second: GroundRecord, options: RotDOptions): Promise<RotDSpectra> {
-    const work = prepareRotD(first, second, options);
-    const periods = work.periodsS.length;
-    const job: SharedRotDJob = {
-      work: { ...work, a1: shared(work.a1), a2: shared(work.a2) },
-      counter: new Int32Array(new SharedArrayBuffer(4)),
-      results: new Float64Array(new SharedArrayBuffer(8 * 3 * work.dampings.length * periods)),
-    };
-    await this.team.run(job, () => runClaimedRotD(job));
-    const curves = Array.from(work.dampings, (damping, d) => {
-      const curve: RotDCurve = {
-        damping,
-        rotd50MS2: new Float64Array(periods),
-        rotd100MS2: new Float64Array(periods),
-        geomeanMS2: new Float64Array(periods),
-      };
-      for (let p = 0; p < periods; p++) {
-        const at = 3 * (d * periods + p);
-        curve.rotd50MS2[p] = job.results[at];
-        curve.rotd100MS2[p] = job.results[at + 1];
-        curve.geomeanMS2[p] = job.results[at + 2];
-      }
-      return curve;
-    });
-    return finishRotD(first, second, work, curves);
-  }
-
-  /** Stop the worker threads. */
-  async close(): Promise<void> {
-    await this.team.close();
-  }
-}
-
 /** Check the pair and the grid, and pad the shorter component. */
-function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDWork {
+export function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDWork {
   const method = options.method ?? 'newmark-average';
   const periodsS = Float64Array.from(options.periodsS);
   const dampings = Float64Array.from(options.dampings);
@@ -202,7 +94,8 @@ function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOpt
   };
 }
 
-function finishRotD(
+/** The spectra of the pair from its curves. */
+export function finishRotD(
   first: GroundRecord,
   second: GroundRecord,
   work: RotDWork,
@@ -262,6 +155,16 @@ function rotDContext(work: RotDWork): RotDContext {
     thresholds: new Float64Array(angleCount),
     wasm,
   };
+}
+
+/**
+ * RotD cells of checked work computed on this thread, for the threads of a RotDPool: the
+ * function writes RotD50, RotD100 and the geometric mean (m/s²) of period p at damping d into
+ * out[0..2].
+ */
+export function rotDCellRunner(work: RotDWork): (d: number, p: number, out: Float64Array) => void {
+  const context = rotDContext(work);
+  return (d, p, out) => rotDCell(work, context, d, p, out);
 }
 
 /** RotD50, RotD100 and the geometric mean (m/s²) of period p at damping d, into out[0..2]. */
@@ -357,7 +260,7 @@ function oscillatorPeaks(
   const durationS = (a1.length - 1) * dtS;
   const roughness = Math.max(recordRoughness(a1), recordRoughness(a2));
   // The sweep's execution plan: the method's sub-steps, composed down to the steps that the
-  // Hermite refinement needs (executionPlan in recurrence.ts), so PSA here is the sweep's PSA.
+  // Hermite refinement needs (executionPlan in substeps.ts), so PSA here is the sweep's PSA.
   const run = executionPlan(
     substepCount(method, periodS, dtS, { damping, durationS, roughness }),
     periodS,

@@ -1,4 +1,4 @@
-// A batch worker thread (see runTasks in pool.ts): it claims records from the shared counter until
+// A batch worker thread (see runTasks in batch-pool.ts): it claims records from the shared counter until
 // none is left, posting each one's outcome as it finishes it, then says it has finished and ends.
 import { parentPort, workerData } from 'node:worker_threads';
 import { claimRecords } from '../batch/work.js';

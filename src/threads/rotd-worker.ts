@@ -1,8 +1,8 @@
-// A RotD worker thread (see RotDPool in rotd.ts): for each job it is sent, it claims (damping,
+// A RotD worker thread (see RotDPool in rotd-pool.ts): for each job it is sent, it claims (damping,
 // period) cells from the shared counter until none is left, and says so.
 
-import { prepareWasmKernel } from '../oscillator/wasm/kernel.js';
-import { runClaimedRotD } from '../spectrum/rotd.js';
+import { prepareWasmKernel } from '../oscillator/kernels/wasm.js';
+import { runClaimedRotD } from './rotd-pool.js';
 import { serveJobs } from './team.js';
 
 serveJobs(runClaimedRotD);

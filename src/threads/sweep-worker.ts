@@ -1,15 +1,15 @@
-// A sweep worker thread (see SweepPool in parallel.ts): for each job it is sent (a record with the
-// calling thread's plan, or many records), it claims groups or whole records from the shared
+// A sweep worker thread (see SweepPool in sweep-pool.ts): for each job it is sent (a record with
+// the calling thread's plan, or many records), it claims groups or whole records from the shared
 // counter until none is left, and says so.
 
-import { prepareWasmKernel } from '../oscillator/wasm/kernel.js';
+import { prepareWasmKernel } from '../oscillator/kernels/wasm.js';
 import {
   runClaimedGroups,
   runClaimedRecords,
   type SharedRecordsJob,
   type SharedSweepJob,
-  serveJobs,
-} from './team.js';
+} from './sweep-pool.js';
+import { serveJobs } from './team.js';
 
 serveJobs((job: SharedSweepJob | SharedRecordsJob) => {
   if ('kind' in job) runClaimedRecords(job);

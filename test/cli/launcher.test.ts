@@ -3,9 +3,10 @@ import { createRequire } from 'node:module';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
-// The launcher runs the CLI bundle with the V8 code cache made at build time (bin/load-cli.js,
-// scripts/build-cli.mjs): the cache must fit the bundle and this Node, or every run would compile
-// the bundle from scratch (the program would still work, only start slower).
+// The launcher runs the CLI bundle, its only way to run the program, with the V8 code cache made
+// at build time (bin/load-cli.js, scripts/build-cli.mjs): the cache must fit the bundle and this
+// Node, or every run would compile the bundle from scratch (the program would still work, only
+// start slower).
 const root = resolve(import.meta.dirname, '../..');
 const launcher = createRequire(import.meta.url)(join(root, 'bin', 'load-cli.js')) as {
   compileCli(options?: { cache?: boolean }): {

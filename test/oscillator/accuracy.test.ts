@@ -51,7 +51,7 @@ describe.each([
 
 // Sines up to the Nyquist frequency of a 0.02 s record (25 Hz), where the record's own content,
 // not the oscillator's period, decides how finely the excitation must be stepped (see
-// recordSubsteps in recurrence.ts). The exact peaks are again the exact method at 400 steps a period.
+// recordSubsteps in substeps.ts). The exact peaks are again the exact method at 400 steps a period.
 describe('on sines up to the Nyquist frequency of a 0.02 s record', () => {
   const dtS = 0.02;
   const sinePeriods = logSpaced(0.01, 10, 21);

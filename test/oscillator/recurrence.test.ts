@@ -1,14 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import {
   composeSteps,
-  executionPlan,
   newmarkCoefficients,
   piecewiseExactCoefficients,
   prewarpedOscillator,
   type StepCoefficients,
   stepCoefficients,
-  substepCount,
 } from '../../src/oscillator/recurrence.js';
+import { executionPlan, substepCount } from '../../src/oscillator/substeps.js';
 
 /** Free vibration from (u0, v0): u at each of `steps` steps. */
 function freeVibration(c: StepCoefficients, u0: number, v0: number, steps: number): Float64Array {

@@ -1,20 +1,15 @@
 import { describe, expect, it } from 'vitest';
+import { checkpointBlockSteps } from '../../src/oscillator/kernels/wasm.js';
 import { hermitePeak } from '../../src/oscillator/peak.js';
+import { recordRoughness } from '../../src/oscillator/record-statistics.js';
 import {
   composeSteps,
-  executionPlan,
   type Method,
   prewarpedOscillator,
   stepCoefficients,
-  substepCount,
 } from '../../src/oscillator/recurrence.js';
-import {
-  checkpointBlockSteps,
-  groundBounds,
-  recordRoughness,
-  recordStatistics,
-  sweepOscillators,
-} from '../../src/oscillator/sweep.js';
+import { executionPlan, substepCount } from '../../src/oscillator/substeps.js';
+import { sweepOscillators } from '../../src/oscillator/sweep.js';
 import { sineRecord, testRecord } from '../helpers/records.js';
 
 /**
@@ -58,23 +53,6 @@ function bruteForcePeaks(accel: Float64Array, dtS: number, periodS: number, zeta
   return [pu, pv, ps];
 }
 
-describe('recordStatistics', () => {
-  // Closed forms: Δa_n of a sampled sine is 2 sin(Ωdt/2)·cos(Ω(n + ½)dt), so over whole cycles
-  // RMS(Δa)/RMS(a) = 2 sin(Ωdt/2); a constant has R = 0. PGA and the peak jerk max|Δa|/dt by hand.
-  it('gives R = 2 sin(Ωdt/2) for a sine, 0 for a constant, and the peak and jerk by hand', () => {
-    const dtS = 0.01;
-    const omega = 2 * Math.PI * 5; // 20 samples a cycle, 50 whole cycles
-    const sine = Float64Array.from({ length: 1001 }, (_, i) => Math.sin(omega * i * dtS));
-    expect(recordStatistics(sine, dtS).roughness).toBeCloseTo(2 * Math.sin((omega * dtS) / 2), 3);
-    expect(recordRoughness(new Float64Array(50).fill(0.3))).toBe(0);
-    expect(recordStatistics(Float64Array.from([0, 1, -2, 0.5]), 0.1).bounds).toEqual({
-      pgaMS2: 2,
-      jerkMS3: 30,
-    });
-    expect(groundBounds(Float64Array.from([0, 1, -2, 0.5]), 0.1)).toEqual({ pgaMS2: 2, jerkMS3: 30 });
-  });
-});
-
 describe('sweepOscillators', () => {
   it('skips no peak that refinement on every step would find (threshold rule of sweep.ts)', () => {
     const record = testRecord(5, 0.02, 12);
@@ -99,13 +77,6 @@ describe('sweepOscillators', () => {
         });
       });
     }
-  });
-
-  it('keeps checkpoint blocks of 64 steps up to 16,384 blocks, then doubles them up to 8,192 steps', () => {
-    expect(checkpointBlockSteps(40_000)).toBe(64);
-    expect(checkpointBlockSteps(64 * 16_384)).toBe(64);
-    expect(checkpointBlockSteps(64 * 16_384 + 1)).toBe(128);
-    expect(checkpointBlockSteps(2e9)).toBe(8192);
   });
 
   it('skips no peak that refinement on every step would find when the blocks are longer', () => {

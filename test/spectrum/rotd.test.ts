@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import type { Method } from '../../src/oscillator/recurrence.js';
 import { createRecord, type GroundRecord } from '../../src/record/record.js';
-import { RotDPool, rotDSpectra, rotDSpectraParallel } from '../../src/spectrum/rotd.js';
+import { rotDSpectra } from '../../src/spectrum/rotd.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
+import { RotDPool, rotDSpectraParallel } from '../../src/threads/rotd-pool.js';
 
 /** Invented test motions, m/s². */
 function component(name: string, f1: number, f2: number, phase: number, count = 800): GroundRecord {

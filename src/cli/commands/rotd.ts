@@ -9,7 +9,8 @@ import { formatJson, recordToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
-import { type RotDSpectra, rotDSpectraParallel } from '../../spectrum/rotd.js';
+import type { RotDSpectra } from '../../spectrum/rotd.js';
+import { rotDSpectraParallel } from '../../threads/rotd-pool.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
 import {
   addGridOptions,

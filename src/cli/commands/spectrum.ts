@@ -8,14 +8,15 @@ import { LENGTH_UNITS, type LengthUnit, parseLengthUnit, STANDARD_GRAVITY_MS2 } 
 import { dampingLabel, spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
+import { plannedSteps, planSweep } from '../../oscillator/plan.js';
 import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
-import { plannedSteps, planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
+import { type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
 import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
 import type { PsaOverlay } from '../../plot/index.js';
 import { integrateRecord } from '../../record/integrate.js';
 import type { GroundRecord } from '../../record/record.js';
 import { assembleSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
-import { SweepPool } from '../../threads/team.js';
+import { SweepPool } from '../../threads/sweep-pool.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
 import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../target-options.js';

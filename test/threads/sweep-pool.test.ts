@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { logSpaced } from '../../src/oscillator/grid.js';
 import { type Peaks, sweepOscillators } from '../../src/oscillator/sweep.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
-import { SweepPool, sweepOscillatorsParallel } from '../../src/threads/team.js';
+import { SweepPool, sweepOscillatorsParallel } from '../../src/threads/sweep-pool.js';
 
 // The worker threads run the built library (dist/), as the CLI does; `npm test` (and `npm ci`,
 // through `prepare`) builds it first.

@@ -1,18 +1,18 @@
 import { describe, expect, it } from 'vitest';
-import { logSpaced } from '../../src/oscillator/grid.js';
-import { METHODS } from '../../src/oscillator/recurrence.js';
+import { logSpaced } from '../../../src/oscillator/grid.js';
+import { groupRunner, resolveKernel } from '../../../src/oscillator/group-runner.js';
 import {
-  groupRunner,
-  type Peaks,
-  planSweep,
-  resolveKernel,
-  sweepOscillators,
-} from '../../src/oscillator/sweep.js';
-import { detectWasmSimd, wasmSimdSupported } from '../../src/oscillator/wasm/kernel.js';
-import { synthesizeRecord } from '../../src/record/synth.js';
-import { rotDSpectra } from '../../src/spectrum/rotd.js';
+  checkpointBlockSteps,
+  detectWasmSimd,
+  wasmSimdSupported,
+} from '../../../src/oscillator/kernels/wasm.js';
+import { planSweep } from '../../../src/oscillator/plan.js';
+import { METHODS } from '../../../src/oscillator/recurrence.js';
+import { type Peaks, sweepOscillators } from '../../../src/oscillator/sweep.js';
+import { synthesizeRecord } from '../../../src/record/synth.js';
+import { rotDSpectra } from '../../../src/spectrum/rotd.js';
 
-// The TypeScript kernel (src/oscillator/kernel.ts) is the reference: the WebAssembly SIMD kernel
+// The TypeScript kernel (src/oscillator/kernels/reference.ts) is the reference: the WebAssembly SIMD kernel
 // implements the same recurrence, threshold test and Hermite refinement, so the two must agree
 // to rounding (1e-12 relative, the tolerance the project sets for the two kernels).
 function worstRelative(a: Peaks, b: Peaks): number {
@@ -51,6 +51,13 @@ describe('WebAssembly SIMD kernel', () => {
         throw new Error('no WebAssembly');
       }),
     ).toBe(false);
+  });
+
+  it('keeps checkpoint blocks of 64 steps up to 16,384 blocks, then doubles them up to 8,192 steps', () => {
+    expect(checkpointBlockSteps(40_000)).toBe(64);
+    expect(checkpointBlockSteps(64 * 16_384)).toBe(64);
+    expect(checkpointBlockSteps(64 * 16_384 + 1)).toBe(128);
+    expect(checkpointBlockSteps(2e9)).toBe(8192);
   });
 
   it('falls back to the TypeScript kernel where SIMD is missing, and refuses a forced wasm there', () => {

@@ -1,0 +1,148 @@
+import { inputError } from '../base/errors.js';
+import { COEFFICIENT as C, COEFFICIENT_STRIDE, GROUP_WIDTH } from './layout.js';
+import { refinementThresholds } from './peak.js';
+import { type GroundBounds, recordStatistics } from './record-statistics.js';
+import { executedStepCoefficients, type Method } from './recurrence.js';
+import { executionPlan, substepCount } from './substeps.js';
+import type { SweepOptions } from './sweep.js';
+
+/**
+ * One oscillator of a planned sweep: its index in the result arrays, the steps the kernel executes
+ * per record step, and the method's sub-steps composed into each (see executionPlan in
+ * substeps.ts).
+ */
+export interface PlannedOscillator {
+  index: number;
+  periodS: number;
+  damping: number;
+  /** Steps executed per record step (the kernel's sub-steps). */
+  substeps: number;
+  /** Sub-steps of the method composed into each executed step (1: none). */
+  composed: number;
+}
+
+/** What every kernel and thread of a sweep shares: the grid, the method and the record's bounds. */
+export interface SweepPlan {
+  method: Method;
+  prewarp: boolean;
+  /** Time step of the record, s. */
+  dtS: number;
+  periodsS: Float64Array;
+  dampings: Float64Array;
+  /** Peak |ground acceleration|, the SA of rigid oscillators. */
+  pgaMS2: number;
+  bounds: GroundBounds;
+  /**
+   * Groups of at most GROUP_WIDTH oscillators with the same sub-step count, in sub-step order;
+   * each thread packs the coefficients of the groups it steps.
+   */
+  groups: PlannedOscillator[][];
+}
+
+/** Check the sweep and group its oscillators by sub-step count (rigid ones are not stepped). */
+export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOptions): SweepPlan {
+  const method = options.method ?? 'newmark-average';
+  const periodsS = Float64Array.from(options.periodsS);
+  const dampings = Float64Array.from(options.dampings);
+  checkSweep(accelMS2, dtS, periodsS, dampings);
+  const durationS = (accelMS2.length - 1) * dtS;
+  const { roughness, bounds } = recordStatistics(accelMS2, dtS);
+  const prewarp = options.prewarp ?? true;
+  const runOf = (periodS: number, damping: number) => {
+    const substeps = substepCount(method, periodS, dtS, {
+      damping,
+      durationS,
+      prewarp,
+      roughness,
+      stepsPerPeriod: options.stepsPerPeriod,
+    });
+    return executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod);
+  };
+  // Pre-warped, the rule does not depend on the damping: once a period.
+  const runs = prewarp
+    ? Array.from(periodsS, (periodS) => (periodS === 0 ? undefined : runOf(periodS, 0)))
+    : [];
+  // In sub-step order, and in index order among equal counts: by bucket, which needs no
+  // comparison function.
+  const buckets = new Map<number, PlannedOscillator[]>();
+  for (let d = 0; d < dampings.length; d++) {
+    for (let p = 0; p < periodsS.length; p++) {
+      const periodS = periodsS[p];
+      if (periodS === 0) continue;
+      const run = runs[p] ?? runOf(periodS, dampings[d]);
+      const index = d * periodsS.length + p;
+      const planned = { index, periodS, damping: dampings[d], substeps: run.steps, composed: run.composed };
+      const bucket = buckets.get(run.steps);
+      if (bucket === undefined) buckets.set(run.steps, [planned]);
+      else bucket.push(planned);
+    }
+  }
+  const groups: PlannedOscillator[][] = [];
+  for (const substeps of [...buckets.keys()].sort((a, b) => a - b)) {
+    const bucket = buckets.get(substeps) as PlannedOscillator[];
+    for (let start = 0; start < bucket.length; start += GROUP_WIDTH) {
+      groups.push(bucket.slice(start, start + GROUP_WIDTH));
+    }
+  }
+  return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups };
+}
+
+/** Oscillator-steps a planned group executes over a record of `samples` values. */
+export function groupSteps(group: PlannedOscillator[], samples: number): number {
+  return group.length * group[0].substeps * (samples - 1);
+}
+
+/** Oscillator-steps the whole plan executes over a record of `samples` values. */
+export function plannedSteps(plan: SweepPlan, samples: number): number {
+  let steps = 0;
+  for (const group of plan.groups) steps += groupSteps(group, samples);
+  return steps;
+}
+
+/** Write one oscillator's row of coefficients (layout.ts) into slot `slot` of the packed array. */
+export function packCoefficients(
+  target: Float64Array,
+  slot: number,
+  oscillator: { periodS: number; damping: number; composed?: number },
+  method: Method,
+  stepS: number,
+  bounds: GroundBounds,
+  prewarp = true,
+): void {
+  const omega = (2 * Math.PI) / oscillator.periodS;
+  const s = executedStepCoefficients(method, omega, oscillator.damping, stepS, oscillator.composed, prewarp);
+  const o = slot * COEFFICIENT_STRIDE;
+  target[o + C.uu] = s.uu;
+  target[o + C.uv] = s.uv;
+  target[o + C.up0] = s.up0;
+  target[o + C.up1] = s.up1;
+  target[o + C.vu] = s.vu;
+  target[o + C.vv] = s.vv;
+  target[o + C.vp0] = s.vp0;
+  target[o + C.vp1] = s.vp1;
+  target[o + C.c] = 2 * oscillator.damping * omega;
+  target[o + C.k] = omega * omega;
+  const t = refinementThresholds(omega, 2 * oscillator.damping * omega, stepS, bounds);
+  target[o + C.ratio] = t.ratio;
+  target[o + C.du] = t.displacementOffset;
+  target[o + C.dv] = t.velocityOffset;
+  target[o + C.ds] = t.accelerationOffset;
+}
+
+function checkSweep(
+  accelMS2: Float64Array,
+  dtS: number,
+  periodsS: Float64Array,
+  dampings: Float64Array,
+): void {
+  if (!(dtS > 0) || !Number.isFinite(dtS)) throw inputError(`the time step must be positive, got ${dtS}`);
+  if (accelMS2.length < 2) throw inputError('a sweep needs a record of at least 2 samples');
+  if (periodsS.length === 0) throw inputError('the period grid is empty');
+  if (dampings.length === 0) throw inputError('the damping list is empty');
+  for (const t of periodsS) {
+    if (!(t >= 0) || !Number.isFinite(t)) throw inputError(`periods must be finite and ≥ 0 s, got ${t}`);
+  }
+  for (const z of dampings) {
+    if (!(z >= 0) || !Number.isFinite(z)) throw inputError(`damping ratios must be finite and ≥ 0, got ${z}`);
+  }
+}
