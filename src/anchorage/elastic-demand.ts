@@ -1,9 +1,9 @@
 import { inputError } from '../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Method } from '../oscillator/recurrence.js';
-import { sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
 import { interpolateSpectrum } from '../spectrum/interpolate.js';
+import { responseSpectrum } from '../spectrum/spectrum.js';
 
 /** A PSA value read for the component and how it was found (stated in every output). */
 export interface SpectralValue {
@@ -41,8 +41,8 @@ export function psaAtPeriod(
 }
 
 /**
- * The PSA of one record for the component itself: the oscillator at the component's period and
- * damping is run over the record (no interpolation); PGA for a rigid component.
+ * The PSA of one record for the component itself: the response spectrum at the component's period
+ * and damping alone (no interpolation); the record's PGA for a rigid component.
  */
 export function recordPsaForComponent(
   record: GroundRecord,
@@ -56,14 +56,9 @@ export function recordPsaForComponent(
       how: `PGA of ${record.name} (rigid component)`,
     };
   }
-  const peaks = sweepOscillators(record.accelMS2, record.dtS, {
-    periodsS: [periodS],
-    dampings: [damping],
-    method,
-  });
-  const omega = (2 * Math.PI) / periodS;
+  const spectrum = responseSpectrum(record, { periodsS: [periodS], dampings: [damping], method });
   return {
-    psaG: (omega * omega * peaks.sdM[0]) / STANDARD_GRAVITY_MS2,
+    psaG: spectrum.curves[0].psaMS2[0] / STANDARD_GRAVITY_MS2,
     how: `PSA = ω²·SD of ${record.name} at T = ${periodS} s, ζ = ${damping}, computed for the component`,
   };
 }
