@@ -1,7 +1,8 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
-import { type PanelContext, type PanelSpec, renderFigure, type Series } from './figure.js';
+import { renderFigure } from './figure.js';
+import type { PanelContext, PanelSpec, Series } from './panel.js';
 import { seriesStyle, TEXT_COLOUR } from './styles.js';
 import { formatValue, percentLabel } from './text.js';
 

@@ -1,7 +1,7 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { PanelContext, Series } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { PanelContext, Series } from './panel.js';
 import { TEXT_COLOUR } from './styles.js';
 import { formatValue, percentLabel } from './text.js';
 

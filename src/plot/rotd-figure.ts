@@ -1,7 +1,7 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
-import type { Series } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { Series } from './panel.js';
 import type { SeriesStyle } from './styles.js';
 import { formatValue, percentLabel } from './text.js';
 

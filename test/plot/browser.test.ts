@@ -1,9 +1,9 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { logSpaced } from '../../src/oscillator/grid.js';
-import { historiesFigure } from '../../src/plot/histories.js';
-import { psaFigure, psvFigure, sdFigure } from '../../src/plot/spectrum-figures.js';
-import { tripartiteFigure } from '../../src/plot/tripartite.js';
+import { historiesFigure } from '../../src/plot/histories-figure.js';
+import { psaFigure, psvFigure, sdFigure } from '../../src/plot/spectrum-figure.js';
+import { tripartiteFigure } from '../../src/plot/tripartite-figure.js';
 import { integrateRecord } from '../../src/record/integrate.js';
 import { createRecord } from '../../src/record/record.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';

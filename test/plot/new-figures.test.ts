@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
-import { historiesFigure } from '../../src/plot/histories.js';
+import { historiesFigure } from '../../src/plot/histories-figure.js';
 import { integrateRecord } from '../../src/record/integrate.js';
 import { createRecord } from '../../src/record/record.js';
 import { axisFromTicks, parseSvg, pathVertices } from './helpers.js';

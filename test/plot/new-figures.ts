@@ -1,11 +1,11 @@
 import { logSpaced } from '../../src/oscillator/grid.js';
-import { anchorPlanSvg } from '../../src/plot/anchor-plan.js';
+import { anchorPlanSvg } from '../../src/plot/anchor-plan-figure.js';
 import { dampingFigure } from '../../src/plot/damping-figure.js';
 import { designFigure } from '../../src/plot/design-figure.js';
 import { floorFigure } from '../../src/plot/floor-figure.js';
-import { fourierFigure } from '../../src/plot/fourier.js';
-import { historiesFigure } from '../../src/plot/histories.js';
-import { husidFigure } from '../../src/plot/husid.js';
+import { fourierFigure } from '../../src/plot/fourier-figure.js';
+import { historiesFigure } from '../../src/plot/histories-figure.js';
+import { husidFigure } from '../../src/plot/husid-figure.js';
 import { rotdFigure } from '../../src/plot/rotd-figure.js';
 import { fourierAmplitudeSpectrum } from '../../src/record/fourier.js';
 import { integrateRecord } from '../../src/record/integrate.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { decimatedIndices } from '../../src/plot/figure.js';
+import { decimatedIndices } from '../../src/plot/panel.js';
 import { wrapText } from '../../src/plot/text.js';
 import { formatLogValue, logTicks } from '../../src/plot/ticks.js';
 

@@ -1,13 +1,8 @@
 import { LENGTH_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { PanelContext } from './figure.js';
 import { lineChart } from './line-chart.js';
-import {
-  overlaySeries,
-  type PsaFigureOptions,
-  spectrumSubtitle,
-  zeroPeriodNote,
-} from './spectrum-figures.js';
+import type { PanelContext } from './panel.js';
+import { overlaySeries, type PsaFigureOptions, spectrumSubtitle, zeroPeriodNote } from './spectrum-figure.js';
 import { formatValue } from './text.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
 

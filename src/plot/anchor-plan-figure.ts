@@ -1,6 +1,6 @@
 import { scaleLinear } from 'd3-scale';
-import { cautionHeightPx, drawCaution, FIGURE_TEXT, FIGURE_WIDTH_PX } from './figure.js';
-import { FRAME_COLOUR, GRID_COLOUR, TEXT_COLOUR } from './styles.js';
+import { cautionHeightPx, drawCaution } from './footer.js';
+import { FIGURE_TEXT, FIGURE_WIDTH_PX, FRAME_COLOUR, GRID_COLOUR, TEXT_COLOUR } from './styles.js';
 import { createSvgDocument } from './svg.js';
 import { wrapText } from './text.js';
 import { linearTicks, textWidthPx } from './ticks.js';

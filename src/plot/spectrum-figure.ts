@@ -1,7 +1,7 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { AxisScale, Series } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { AxisScale, Series } from './panel.js';
 import { overlayStyle } from './styles.js';
 import { formatValue, percentLabel } from './text.js';
 
