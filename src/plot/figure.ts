@@ -1,12 +1,11 @@
-import { cautionHeightPx, drawCaution } from './footer.js';
+import { drawFooter, layoutFooter } from './footer.js';
+import { layoutHeader, startPage } from './header.js';
 import { layoutPanel } from './layout.js';
 import { drawLegend, legendLayout } from './legend.js';
 import { drawPanel, type PanelSpec } from './panel.js';
-import { FIGURE_TEXT, FIGURE_WIDTH_PX, TEXT_COLOUR } from './styles.js';
-import { createSvgDocument } from './svg.js';
-import { wrapText } from './text.js';
+import { FIGURE_TEXT, FIGURE_WIDTH_PX } from './styles.js';
 
-const { titlePx, subtitlePx, tickPx, axisTitlePx, notePx, sidePx } = FIGURE_TEXT;
+const { tickPx, axisTitlePx, sidePx } = FIGURE_TEXT;
 const RIGHT_MARGIN_PX = 18;
 
 export interface FigureSpec {
@@ -31,17 +30,11 @@ export function renderFigure(spec: FigureSpec): string {
   const yLabelWidth = Math.max(...layouts.map((l) => l.yLabelWidthPx), 20);
   const plotLeft = sidePx + axisTitlePx + 8 + yLabelWidth + 7;
   const plotWidth = widthPx - plotLeft - (spec.rightMarginPx ?? RIGHT_MARGIN_PX);
-  const textWidth = widthPx - 2 * sidePx;
-
-  const titleLines = wrapText(spec.title, textWidth, titlePx);
-  const subtitleLines = (spec.subtitle ?? []).flatMap((s) => wrapText(s, textWidth, subtitlePx));
+  const header = layoutHeader(spec.title, spec.subtitle, widthPx);
   const legendEntries = layouts.flatMap((l) => l.series.filter((s) => s.series.legend !== false));
   const legendRows = legendLayout(legendEntries, spec.legendTitle, plotWidth);
-  const noteLines = (spec.notes ?? []).flatMap((n) => wrapText(n, textWidth, notePx));
 
-  let y = 10;
-  const titleTop = y;
-  y += titleLines.length * (titlePx + 4) + subtitleLines.length * (subtitlePx + 3) + 10;
+  let y = header.bottom + 10;
   const panelTops: number[] = [];
   for (const layout of layouts) {
     y += layout.spec.gapAbovePx ?? 0;
@@ -50,45 +43,14 @@ export function renderFigure(spec: FigureSpec): string {
   }
   const legendTop = y;
   if (legendRows.length > 0) y += legendRows.length * 16 + 6;
-  const notesTop = y;
-  y += noteLines.length * (notePx + 3);
-  const footerTop = y + 6;
-  y = footerTop + cautionHeightPx(widthPx);
-  const heightPx = Math.ceil(y);
+  const footer = layoutFooter(spec.notes, widthPx, y);
 
-  const doc = createSvgDocument(widthPx, heightPx);
-  doc.element(doc.root, 'title').textContent = spec.title;
-  doc.element(doc.root, 'rect', { width: widthPx, height: heightPx, fill: '#ffffff' });
-  const header = doc.element(doc.root, 'g', { class: 'header', fill: TEXT_COLOUR });
-  let line = titleTop;
-  for (const text of titleLines) {
-    line += titlePx + 2;
-    doc.text(header, text, {
-      x: sidePx,
-      y: line,
-      'font-size': titlePx,
-      'font-weight': 'bold',
-      class: 'title',
-    });
-    line += 2;
-  }
-  for (const text of subtitleLines) {
-    line += subtitlePx + 3;
-    doc.text(header, text, { x: sidePx, y: line - 1, 'font-size': subtitlePx, class: 'subtitle' });
-  }
+  const doc = startPage(header, widthPx, Math.ceil(footer.bottom));
   layouts.forEach((layout, i) => {
-    drawPanel(
-      doc,
-      layout,
-      { left: plotLeft, top: panelTops[i], width: plotWidth, height: layout.spec.heightPx },
-      i,
-    );
+    const plot = { left: plotLeft, top: panelTops[i], width: plotWidth, height: layout.spec.heightPx };
+    drawPanel(doc, layout, plot, i);
   });
   drawLegend(doc, legendRows, plotLeft, legendTop);
-  const notes = doc.element(doc.root, 'g', { class: 'notes', fill: TEXT_COLOUR, 'font-size': notePx });
-  noteLines.forEach((text, i) => {
-    doc.text(notes, text, { x: sidePx, y: notesTop + (i + 1) * (notePx + 3) - 2 });
-  });
-  drawCaution(doc, footerTop, widthPx);
+  drawFooter(doc, footer);
   return doc.serialize();
 }
