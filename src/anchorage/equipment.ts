@@ -139,13 +139,7 @@ export function parseEquipment(text: string, file: string): Equipment {
   const cgGiven = object['cg_plan'] !== undefined && object['cg_plan'] !== null;
   if (cgGiven) {
     const point = object['cg_plan'];
-    if (
-      !Array.isArray(point) ||
-      point.length !== 2 ||
-      !point.every((v) => typeof v === 'number' && Number.isFinite(v))
-    ) {
-      fail('cg_plan', `must be [x, y] in ${system.length}`);
-    }
+    if (!isPoint(point)) fail('cg_plan', `must be [x, y] in ${system.length}`);
     cgPlan = [(point as number[])[0], (point as number[])[1]];
   } else {
     cgPlan = centroid(anchors);
@@ -208,15 +202,20 @@ function readPoints(value: unknown, fail: (message: string) => never): [number, 
   if (!Array.isArray(value)) return fail('must be a list of [x, y] anchor positions');
   if (value.length < 2) return fail(`needs at least 2 anchors, got ${value.length}`);
   return value.map((point, i) => {
-    if (
-      !Array.isArray(point) ||
-      point.length !== 2 ||
-      !point.every((v) => typeof v === 'number' && Number.isFinite(v))
-    ) {
+    if (!isPoint(point)) {
       return fail(`anchor ${i + 1} must be [x, y] with two numbers, got ${JSON.stringify(point)}`);
     }
     return [point[0], point[1]] as [number, number];
   });
+}
+
+/** Whether a JSON value is a plan point [x, y] of two finite numbers. */
+function isPoint(value: unknown): value is [number, number] {
+  return (
+    Array.isArray(value) &&
+    value.length === 2 &&
+    value.every((v) => typeof v === 'number' && Number.isFinite(v))
+  );
 }
 
 /** Refuse repeated anchors and patterns on one line (they cannot resist overturning across it). */

@@ -1,9 +1,10 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
-import { type PanelContext, type PanelSpec, renderFigure, type Series } from './figure.js';
+import { renderFigure } from './figure.js';
+import type { PanelContext, PanelSpec, Series } from './panel.js';
 import { seriesStyle, TEXT_COLOUR } from './styles.js';
-import { formatValue, percentLabel } from './text.js';
+import { methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
 
 export interface DampingFigureInput {
   record: SpectrumRecordInfo;
@@ -122,19 +123,15 @@ export function dampingFigure(input: DampingFigureInput): string {
     },
   ];
   const subtitle = [
-    `Record: ${record.name} (${record.source}); ${record.npts} samples at Δt = ${record.dtS} s; PGA = ${formatValue(record.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
+    recordLine('Record', record),
     ...record.processing.map((step) => `Processed: ${step.description}`),
-    `Method: ${input.methodDescription}; damping ζ = ${comparison.curves.map((c) => percentLabel(c.damping)).join(', ')}`,
+    methodLine(input.methodDescription, comparison.curves),
   ];
   const notes = [
     `Bottom: the record's PSA at each damping ratio divided by its PSA at ${percentLabel(comparison.referenceDamping)}, period by period. Thin horizontal lines, in the colour of their damping ratio and dashed by source: the published ratios for that damping, labelled at the right.`,
     'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
   ];
-  if (Array.from(periods).includes(0)) {
-    notes.push(
-      'T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there every ratio is 1).',
-    );
-  }
+  if (Array.from(periods).includes(0)) notes.push(zeroPeriodNote(' (there every ratio is 1)'));
   return renderFigure({
     title: 'Damping comparison: PSA and its ratio to 5% damping',
     subtitle,

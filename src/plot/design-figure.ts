@@ -1,7 +1,7 @@
 import type { DesignSpectrum } from '../spectrum/design.js';
 import { lineChart } from './line-chart.js';
 import { overlayStyle } from './styles.js';
-import { formatValue } from './text.js';
+import { formatValue, zeroPeriodNote } from './text.js';
 
 const CODE_LABELS: Readonly<Record<DesignSpectrum['code'], string>> = {
   'asce7-16': 'ASCE/SEI 7-16 design spectrum',
@@ -25,11 +25,7 @@ export function designFigure(input: DesignFigureInput): string {
   const { spectrum } = input;
   const notes: string[] = [];
   const zero = Array.from(input.periodsS).indexOf(0);
-  if (zero >= 0) {
-    notes.push(
-      `T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there PSA = ${formatValue(input.psaG[zero])} g).`,
-    );
-  }
+  if (zero >= 0) notes.push(zeroPeriodNote(` (there PSA = ${formatValue(input.psaG[zero])} g)`));
   notes.push(
     'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',
   );

@@ -1,9 +1,9 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { PanelContext, Series } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { PanelContext, Series } from './panel.js';
 import { TEXT_COLOUR } from './styles.js';
-import { formatValue, percentLabel } from './text.js';
+import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
 
 export interface FloorFigureInput {
   /** The ground record's spectrum. */
@@ -56,10 +56,10 @@ export function floorFigure(input: FloorFigureInput): string {
   const b = input.building;
   const r = ground.record;
   const subtitle = [
-    `Ground record: ${r.name} (${r.source}); ${r.npts} samples at Δt = ${r.dtS} s; PGA = ${formatValue(r.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
+    recordLine('Ground record', r),
     ...r.processing.map((step) => `Processed: ${step.description}`),
     `Building, one mode: T_b = ${b.periodS} s, ζ_b = ${percentLabel(b.damping)}, Γφ = ${b.modalFactor}; floor PGA = ${formatValue(floor.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
-    `Method: ${input.methodDescription}; component damping ζ = ${floor.curves.map((c) => percentLabel(c.damping)).join(', ')}`,
+    methodLine(input.methodDescription, floor.curves, 'component damping'),
   ];
   const notes = [
     "Floor absolute acceleration a_g + Γφ·q'' of the building's fundamental mode; higher modes, soil–structure interaction, nonlinear building response and the equipment's feedback on the floor are not represented.",
@@ -68,9 +68,7 @@ export function floorFigure(input: FloorFigureInput): string {
       : 'Peaks not broadened.',
   ];
   if (Array.from(floor.periodsS).includes(0)) {
-    notes.push(
-      'T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there PSA is the peak acceleration, the floor and ground PGA given above).',
-    );
+    notes.push(zeroPeriodNote(' (there PSA is the peak acceleration, the floor and ground PGA given above)'));
   }
   return lineChart({
     title: 'Floor response spectrum against the ground spectrum, PSA',

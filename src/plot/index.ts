@@ -1,27 +1,25 @@
-export { type AnchorPlanInput, anchorPlanSvg } from './anchor-plan.js';
+export { type AnchorPlanInput, anchorPlanSvg } from './anchor-plan-figure.js';
 export { type DampingFigureInput, dampingFigure } from './damping-figure.js';
 export { type DesignFigureInput, designFigure } from './design-figure.js';
-export {
-  type AxisScale,
-  type AxisSpec,
-  decimatedIndices,
-  FIGURE_WIDTH_PX,
-  type FigureSpec,
-  type PanelContext,
-  type PanelSpec,
-  renderFigure,
-  type Series,
-} from './figure.js';
+export { type FigureSpec, renderFigure } from './figure.js';
 export { type FloorFigureInput, floorFigure } from './floor-figure.js';
-export { type FourierFigureInput, fourierFigure } from './fourier.js';
+export { type FourierFigureInput, fourierFigure } from './fourier-figure.js';
 export {
   type HistoriesFigureInput,
   type HistoriesFigureOptions,
   historiesFigure,
   peakIndex,
-} from './histories.js';
-export { type HusidFigureInput, husidFigure } from './husid.js';
+} from './histories-figure.js';
+export { type HusidFigureInput, husidFigure } from './husid-figure.js';
 export { type LineChartOptions, lineChart } from './line-chart.js';
+export {
+  type AxisScale,
+  type AxisSpec,
+  decimatedIndices,
+  type PanelContext,
+  type PanelSpec,
+  type Series,
+} from './panel.js';
 export { type RotDFigureInput, rotdFigure } from './rotd-figure.js';
 export {
   type PsaFigureOptions,
@@ -31,6 +29,6 @@ export {
   type SpectrumFigureOptions,
   sdFigure,
   spectrumSubtitle,
-} from './spectrum-figures.js';
-export { overlayStyle, type SeriesStyle, seriesStyle } from './styles.js';
-export { tripartiteFigure } from './tripartite.js';
+} from './spectrum-figure.js';
+export { FIGURE_WIDTH_PX, overlayStyle, type SeriesStyle, seriesStyle } from './styles.js';
+export { tripartiteFigure } from './tripartite-figure.js';

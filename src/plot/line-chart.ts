@@ -1,4 +1,5 @@
-import { type AxisScale, type PanelContext, renderFigure, type Series } from './figure.js';
+import { renderFigure } from './figure.js';
+import type { AxisScale, PanelContext, Series } from './panel.js';
 
 export interface LineChartOptions {
   x: { title: string; scale?: AxisScale; domain?: readonly [number, number] };

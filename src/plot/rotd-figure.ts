@@ -1,9 +1,9 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
-import type { Series } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { Series } from './panel.js';
 import type { SeriesStyle } from './styles.js';
-import { formatValue, percentLabel } from './text.js';
+import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
 
 export interface RotDFigureInput {
   spectra: RotDSpectra;
@@ -38,15 +38,10 @@ export function rotdFigure(input: RotDFigureInput): string {
       });
     }
   });
-  const subtitle: string[] = spectra.records.map(
-    (r, i) =>
-      `Component ${i + 1}: ${r.name} (${r.source}); ${r.npts} samples at Δt = ${r.dtS} s; PGA = ${formatValue(r.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
-  );
+  const subtitle = spectra.records.map((r, i) => recordLine(`Component ${i + 1}`, r));
   for (const [i, r] of spectra.records.entries())
     for (const step of r.processing) subtitle.push(`Component ${i + 1} processed: ${step.description}`);
-  subtitle.push(
-    `Method: ${input.methodDescription}; damping ζ = ${spectra.curves.map((c) => percentLabel(c.damping)).join(', ')}`,
-  );
+  subtitle.push(methodLine(input.methodDescription, spectra.curves));
   const notes = [
     `PSA(θ) = ω² max|u₁ cos θ + u₂ sin θ| over ${180 / spectra.angleStepDeg} angles 0 ≤ θ < 180° in steps of ${spectra.angleStepDeg}°; RotD50 is the median over the angles, RotD100 the largest (Boore 2010); geometric mean √(PSA₁·PSA₂) of the components as recorded.`,
   ];
@@ -58,8 +53,9 @@ export function rotdFigure(input: RotDFigureInput): string {
   const zero = Array.from(spectra.periodsS).indexOf(0);
   if (zero >= 0) {
     const c = spectra.curves[0];
+    const there = (values: Float64Array) => formatValue(values[zero] / STANDARD_GRAVITY_MS2);
     notes.push(
-      `T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off (there RotD50 = ${formatValue(c.rotd50MS2[zero] / STANDARD_GRAVITY_MS2)} g, RotD100 = ${formatValue(c.rotd100MS2[zero] / STANDARD_GRAVITY_MS2)} g).`,
+      zeroPeriodNote(` (there RotD50 = ${there(c.rotd50MS2)} g, RotD100 = ${there(c.rotd100MS2)} g)`),
     );
   }
   return lineChart({

@@ -37,3 +37,17 @@ export const GRID_COLOUR = '#d9d9d9';
 export const MINOR_GRID_COLOUR = '#eeeeee';
 export const FRAME_COLOUR = '#333333';
 export const TEXT_COLOUR = '#111111';
+
+/** Width of every figure: 640 px, 169 mm at 96 px to the inch, the text width of an A4 or letter page. */
+export const FIGURE_WIDTH_PX = 640;
+
+/** Font sizes and side margin shared by every figure, px. */
+export const FIGURE_TEXT = {
+  titlePx: 13,
+  subtitlePx: 10,
+  tickPx: 10,
+  axisTitlePx: 10.5,
+  notePx: 8.5,
+  footerPx: 8,
+  sidePx: 14,
+} as const;

@@ -1,8 +1,8 @@
 import { createRequire } from 'node:module';
 import type { JSDOM as JsdomClass } from 'jsdom';
 
-// jsdom takes about half a second to load: load it with the first figure, not at start-up, so
-// commands that draw nothing do not pay for it.
+// jsdom is large: it is loaded with the first figure, not at start-up, so that commands that draw
+// nothing do not load it (the CLI bundle keeps it external for the same reason).
 const require = createRequire(import.meta.url);
 let JSDOM: typeof JsdomClass | undefined;
 

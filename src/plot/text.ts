@@ -1,3 +1,6 @@
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
+
 /** Rough width of running text: 0.5 em a character, a little over the average of common sans-serif faces. */
 function proseWidthPx(text: string, fontSizePx: number): number {
   return text.length * fontSizePx * 0.5;
@@ -32,4 +35,19 @@ export function formatValue(value: number): string {
   const text =
     magnitude >= 1e-3 && magnitude < 1e5 ? String(Number(value.toPrecision(4))) : value.toExponential(3);
   return text.replace('-', '−');
+}
+
+/** The subtitle line that names a record: its name and file, samples, step and PGA. */
+export function recordLine(label: string, r: SpectrumRecordInfo): string {
+  return `${label}: ${r.name} (${r.source}); ${r.npts} samples at Δt = ${r.dtS} s; PGA = ${formatValue(r.pgaMS2 / STANDARD_GRAVITY_MS2)} g`;
+}
+
+/** The subtitle line that states the method and the damping ratios drawn. */
+export function methodLine(method: string, curves: readonly { damping: number }[], what = 'damping'): string {
+  return `Method: ${method}; ${what} ζ = ${curves.map((c) => percentLabel(c.damping)).join(', ')}`;
+}
+
+/** The note that T = 0, held by the period grid, is left off a logarithmic axis; `there` gives its value. */
+export function zeroPeriodNote(there: string): string {
+  return `T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off${there}.`;
 }

@@ -1,5 +1,6 @@
 import { inputError } from '../base/errors.js';
 import { checkPeriod, type DesignSpectrum } from './design.js';
+import { interpolateSpectrum } from './interpolate.js';
 
 /** A tabulated spectrum: periods (s, strictly increasing) and PSA (g, positive). */
 export interface SpectrumTable {
@@ -56,10 +57,8 @@ export function readSpectrumTable(text: string, source: string): SpectrumTable {
 }
 
 /**
- * A design spectrum from a table, interpolated linearly in log T and log PSA between rows
- * (straight lines on the log–log plot where spectra are drawn; common practice). Between a T = 0
- * first row and the next, where log T is undefined, it is interpolated linearly in T. Outside the
- * table it is not extrapolated: evaluation there is an error.
+ * A design spectrum from a table, read by interpolateSpectrum (log–log between rows, linear in T
+ * after a T = 0 first row). Outside the table it is not extrapolated: evaluation there is an error.
  */
 export function tableSpectrum(table: SpectrumTable, source: string): DesignSpectrum {
   const { periodsS, psaG } = table;
@@ -74,20 +73,7 @@ export function tableSpectrum(table: SpectrumTable, source: string): DesignSpect
     tabulatedPeriodsS: periodsS,
     psaG(periodS: number): number {
       checkPeriod(this, periodS);
-      let lo = 0;
-      let hi = last;
-      while (hi - lo > 1) {
-        const mid = (lo + hi) >> 1;
-        if (periodsS[mid] <= periodS) lo = mid;
-        else hi = mid;
-      }
-      const t0 = periodsS[lo];
-      const t1 = periodsS[hi];
-      if (periodS === t0) return psaG[lo];
-      if (periodS === t1) return psaG[hi];
-      if (t0 === 0) return psaG[lo] + ((psaG[hi] - psaG[lo]) * periodS) / t1;
-      const fraction = Math.log(periodS / t0) / Math.log(t1 / t0);
-      return Math.exp(Math.log(psaG[lo]) + fraction * Math.log(psaG[hi] / psaG[lo]));
+      return interpolateSpectrum(periodsS, psaG, periodS)?.value ?? Number.NaN;
     },
   };
 }

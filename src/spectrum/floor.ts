@@ -3,6 +3,7 @@ import { recordRoughness } from '../oscillator/record-statistics.js';
 import { type Method, prewarpedOscillator, stepCoefficients } from '../oscillator/recurrence.js';
 import { substepCount } from '../oscillator/substeps.js';
 import { type GroundRecord, withProcessing } from '../record/record.js';
+import { interpolateSpectrum } from './interpolate.js';
 import { responseSpectrum, type Spectrum, type SpectrumCurve, type SpectrumOptions } from './spectrum.js';
 
 /** A building idealised by its fundamental mode, as seen from one floor. */
@@ -121,31 +122,16 @@ export function broadenCurve(
     for (let j = 0; j < n; j++) {
       if (periodsS[j] >= low && periodsS[j] <= high && values[j] > peak) peak = values[j];
     }
-    peak = Math.max(
-      peak,
-      interpolateLogLog(periodsS, values, low),
-      interpolateLogLog(periodsS, values, high),
-    );
+    peak = Math.max(peak, valueAt(periodsS, values, low), valueAt(periodsS, values, high));
     out[i] = peak;
   }
   return out;
 }
 
-/** Log–log interpolation on the positive part of a grid; −∞ outside it (so it never wins a max). */
-function interpolateLogLog(periodsS: ArrayLike<number>, values: ArrayLike<number>, t: number): number {
-  const n = periodsS.length;
-  for (let j = 1; j < n; j++) {
-    const t0 = periodsS[j - 1];
-    const t1 = periodsS[j];
-    if (t0 > 0 && t >= t0 && t <= t1) {
-      const v0 = values[j - 1];
-      const v1 = values[j];
-      if (!(v0 > 0) || !(v1 > 0)) return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
-      const f = Math.log(t / t0) / Math.log(t1 / t0);
-      return Math.exp(Math.log(v0) + f * Math.log(v1 / v0));
-    }
-  }
-  return -Infinity;
+/** The spectrum at a window's end, on the positive part of the grid; −∞ elsewhere (so it never wins a max). */
+function valueAt(periodsS: ArrayLike<number>, values: ArrayLike<number>, t: number): number {
+  const found = interpolateSpectrum(periodsS, values, t);
+  return found && periodsS[found.lo] > 0 ? found.value : Number.NEGATIVE_INFINITY;
 }
 
 /**

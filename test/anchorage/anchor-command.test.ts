@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
 import { runAnchor } from '../../src/cli/commands/anchor.js';
 import { runFloor } from '../../src/cli/commands/floor.js';
-import { anchorPlanSvg } from '../../src/plot/anchor-plan.js';
+import { anchorPlanSvg } from '../../src/plot/anchor-plan-figure.js';
 
 describe('floor → anchor --spectrum (the floor JSON is the spectrum contract plus the building)', () => {
   it('round-trips, and the anchor JSON keeps the caution first', async () => {

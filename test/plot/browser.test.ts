@@ -1,43 +1,29 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { logSpaced } from '../../src/oscillator/grid.js';
-import { historiesFigure } from '../../src/plot/histories.js';
-import { psaFigure, psvFigure, sdFigure } from '../../src/plot/spectrum-figures.js';
-import { tripartiteFigure } from '../../src/plot/tripartite.js';
-import { integrateRecord } from '../../src/record/integrate.js';
-import { createRecord } from '../../src/record/record.js';
-import { responseSpectrum } from '../../src/spectrum/spectrum.js';
+import { inlineSvg } from '../../src/report/inline-svg.js';
 import { launchChromium } from '../helpers/chromium.js';
-import { newFigures } from './new-figures.js';
+import { EVERY_FIGURE } from './every-figure.js';
 
-// An invented record: two decaying sines, 15 s at 100 samples a second.
-const record = createRecord({
-  name: 'invented <yard> & "east" record',
-  dtS: 0.01,
-  accelMS2: Float64Array.from({ length: 1500 }, (_, i) => {
-    const t = i * 0.01;
-    return Math.exp(-t / 4) * (2 * Math.sin(2 * Math.PI * 1.2 * t) + 0.8 * Math.sin(2 * Math.PI * 6 * t));
-  }),
-});
-const spectrum = responseSpectrum(record, {
-  periodsS: [0, ...logSpaced(0.02, 5, 50)],
-  dampings: [0.02, 0.05, 0.1],
-});
-const figures: Record<string, string> = {
-  psa: psaFigure(spectrum),
-  sd: sdFigure(spectrum, { lengthUnit: 'cm' }),
-  psv: psvFigure(spectrum, { axes: 'linear' }),
-  tripartite: tripartiteFigure(spectrum, { lengthUnit: 'cm' }),
-  histories: historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: 'cm' }),
-  ...Object.fromEntries(Object.entries(newFigures()).map(([name, figure]) => [name, figure.svg])),
-};
+// Every kind of figure on one page, inlined as the report inlines them (ids prefixed per figure),
+// opened once in headless Chromium; each figure is then checked where it stands on that page.
+const figures = Object.entries(EVERY_FIGURE).map(([name, draw]) => ({ name, svg: draw().svg }));
+const PAGE = `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>every figure</title>
+<style>body { margin: 0 } svg { display: block }</style></head><body>
+${figures.map(({ name, svg }) => `<div data-figure="${name}">${inlineSvg(svg, name)}</div>`).join('\n')}
+</body></html>`;
 
 let browser: Browser;
 let page: Page;
+const consoleErrors: string[] = [];
 
 beforeAll(async () => {
   browser = await launchChromium();
-  page = await browser.newPage();
+  page = await browser.newPage({ viewport: { width: 640, height: 800 } });
+  page.on('console', (message) => {
+    if (message.type() === 'error') consoleErrors.push(message.text());
+  });
+  page.on('pageerror', (error) => consoleErrors.push(error.message));
+  await page.setContent(PAGE);
 });
 
 afterAll(async () => {
@@ -50,19 +36,21 @@ function declaredSize(svg: string): { width: number; height: number } {
   return { width, height };
 }
 
-describe('figures in headless Chromium', () => {
-  for (const [name, svg] of Object.entries(figures)) {
-    it(`${name}: renders a non-blank picture of the declared size, text inside the page`, async () => {
+describe('every figure on one page in headless Chromium', () => {
+  it('the page holds every figure once and logs no error', async () => {
+    expect(await page.locator('div[data-figure] > svg').count()).toBe(figures.length);
+    expect(consoleErrors).toEqual([]);
+  });
+
+  for (const { name, svg } of figures) {
+    it(`${name}: renders a non-blank picture of the declared size, text inside the figure`, async () => {
       const size = declaredSize(svg);
       expect(size.width).toBe(640);
-      await page.setViewportSize(size);
-      await page.setContent(
-        `<!doctype html><body style="margin:0">${svg.replace(/^<\?xml[^>]*>/, '')}</body>`,
-      );
-      const box = await page.locator('svg').first().boundingBox();
+      const figure = page.locator(`div[data-figure="${name}"] > svg`);
+      const box = await figure.boundingBox();
       expect(box?.width).toBe(size.width);
       expect(box?.height).toBe(size.height);
-      const png = await page.screenshot({ clip: { x: 0, y: 0, ...size } });
+      const png = await figure.screenshot();
       // Decode the screenshot in the page and count pixels that are not white.
       const counts = await page.evaluate(async (base64) => {
         const image = new Image();
@@ -90,18 +78,17 @@ describe('figures in headless Chromium', () => {
       // The curves are drawn in colour; a design spectrum alone is drawn black, as design overlays are.
       if (name !== 'design') expect(counts.coloured).toBeGreaterThan(200);
 
-      // Every text lies inside the page, and tick labels of one axis do not overlap (as laid out by the browser).
-      const layout = await page.evaluate(() => {
-        const svgElement = document.querySelector('svg')!;
-        const page = svgElement.getBoundingClientRect();
+      // Every text lies inside its figure, and tick labels of one axis do not overlap (as laid out by the browser).
+      const layout = await figure.evaluate((svgElement) => {
+        const frame = svgElement.getBoundingClientRect();
         const outside = [...svgElement.querySelectorAll('text')]
           .map((t) => ({ text: t.textContent, r: t.getBoundingClientRect() }))
           .filter(
             ({ r }) =>
-              r.left < page.left - 0.5 ||
-              r.right > page.right + 0.5 ||
-              r.top < page.top - 0.5 ||
-              r.bottom > page.bottom + 0.5,
+              r.left < frame.left - 0.5 ||
+              r.right > frame.right + 0.5 ||
+              r.top < frame.top - 0.5 ||
+              r.bottom > frame.bottom + 0.5,
           )
           .map(({ text }) => text);
         const overlapping: string[] = [];
@@ -118,10 +105,15 @@ describe('figures in headless Chromium', () => {
                 overlapping.push(`${boxes[i].text}/${boxes[j].text}`);
             }
         }
-        return { outside, overlapping };
+        return { outside, overlapping, texts: svgElement.querySelectorAll('text').length };
       });
+      expect(layout.texts).toBeGreaterThan(0);
       expect(layout.outside).toEqual([]);
       expect(layout.overlapping).toEqual([]);
     });
   }
+
+  it('decoding the screenshots logged no error either', () => {
+    expect(consoleErrors).toEqual([]);
+  });
 });

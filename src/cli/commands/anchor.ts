@@ -17,7 +17,7 @@ import { anchorageToJson } from '../../formats/anchorage-json.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { writeFileAtomic } from '../../output/atomic.js';
-import { anchorPlanSvg } from '../../plot/anchor-plan.js';
+import { anchorPlanSvg } from '../../plot/anchor-plan-figure.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
 
 export interface AnchorCliOptions extends RecordCliOptions {

@@ -7,9 +7,9 @@ import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { logSpaced } from '../../oscillator/grid.js';
 import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
-import { fourierFigure } from '../../plot/fourier.js';
-import { historiesFigure } from '../../plot/histories.js';
-import { husidFigure } from '../../plot/husid.js';
+import { fourierFigure } from '../../plot/fourier-figure.js';
+import { historiesFigure } from '../../plot/histories-figure.js';
+import { husidFigure } from '../../plot/husid-figure.js';
 import {
   fourierAmplitudeSpectrum,
   KONNO_OHMACHI_DEFAULT_B,

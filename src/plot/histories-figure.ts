@@ -1,5 +1,6 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import { type PanelContext, type PanelSpec, renderFigure } from './figure.js';
+import { renderFigure } from './figure.js';
+import type { PanelContext, PanelSpec } from './panel.js';
 import { TEXT_COLOUR } from './styles.js';
 import { formatValue } from './text.js';
 

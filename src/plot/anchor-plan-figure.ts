@@ -1,8 +1,7 @@
 import { scaleLinear } from 'd3-scale';
-import { cautionHeightPx, drawCaution, FIGURE_TEXT, FIGURE_WIDTH_PX } from './figure.js';
-import { FRAME_COLOUR, GRID_COLOUR, TEXT_COLOUR } from './styles.js';
-import { createSvgDocument } from './svg.js';
-import { wrapText } from './text.js';
+import { drawFooter, layoutFooter } from './footer.js';
+import { layoutHeader, startPage } from './header.js';
+import { FIGURE_TEXT, FIGURE_WIDTH_PX, FRAME_COLOUR, GRID_COLOUR, TEXT_COLOUR } from './styles.js';
 import { linearTicks, textWidthPx } from './ticks.js';
 
 /** What the plan view needs (plain values in the user's units; no dependency on anchorage types). */
@@ -35,11 +34,8 @@ const MASS = '#111111';
  */
 export function anchorPlanSvg(input: AnchorPlanInput): string {
   const widthPx = FIGURE_WIDTH_PX;
-  const { titlePx, subtitlePx, tickPx, axisTitlePx, notePx, sidePx } = FIGURE_TEXT;
-  const textWidth = widthPx - 2 * sidePx;
-  const titleLines = wrapText(input.title, textWidth, titlePx);
-  const subtitleLines = (input.subtitle ?? []).flatMap((s) => wrapText(s, textWidth, subtitlePx));
-  const noteLines = (input.notes ?? []).flatMap((n) => wrapText(n, textWidth, notePx));
+  const { tickPx, axisTitlePx, sidePx } = FIGURE_TEXT;
+  const header = layoutHeader(input.title, input.subtitle, widthPx);
 
   const xs = [...input.anchors.map((a) => a.x), input.cgPlan[0], input.centroid[0]];
   const ys = [...input.anchors.map((a) => a.y), input.cgPlan[1], input.centroid[1]];
@@ -50,36 +46,10 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const midY = (minY + maxY) / 2;
   const plotSize = 400;
   const plotLeft = (widthPx - plotSize) / 2;
-  let y = 10 + titleLines.length * (titlePx + 4) + subtitleLines.length * (subtitlePx + 3) + 16;
-  const plotTop = y;
-  y += plotSize + tickPx + 8 + axisTitlePx + 16;
-  const legendTop = y;
-  y += 20;
-  const notesTop = y;
-  y += noteLines.length * (notePx + 3);
-  const footerTop = y + 6;
-  const heightPx = Math.ceil(footerTop + cautionHeightPx(widthPx));
-
-  const doc = createSvgDocument(widthPx, heightPx);
-  doc.element(doc.root, 'title').textContent = input.title;
-  doc.element(doc.root, 'rect', { width: widthPx, height: heightPx, fill: '#ffffff' });
-  const header = doc.element(doc.root, 'g', { class: 'header', fill: TEXT_COLOUR });
-  let line = 10;
-  for (const text of titleLines) {
-    line += titlePx + 2;
-    doc.text(header, text, {
-      x: sidePx,
-      y: line,
-      'font-size': titlePx,
-      'font-weight': 'bold',
-      class: 'title',
-    });
-    line += 2;
-  }
-  for (const text of subtitleLines) {
-    line += subtitlePx + 3;
-    doc.text(header, text, { x: sidePx, y: line - 1, 'font-size': subtitlePx, class: 'subtitle' });
-  }
+  const plotTop = header.bottom + 16;
+  const legendTop = plotTop + plotSize + tickPx + 8 + axisTitlePx + 16;
+  const footer = layoutFooter(input.notes, widthPx, legendTop + 20);
+  const doc = startPage(header, widthPx, Math.ceil(footer.bottom));
 
   const px = scaleLinear()
     .domain([midX - half, midX + half])
@@ -248,11 +218,7 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     'anchor centroid',
   );
 
-  const notes = doc.element(doc.root, 'g', { class: 'notes', fill: TEXT_COLOUR, 'font-size': notePx });
-  noteLines.forEach((text, i) => {
-    doc.text(notes, text, { x: sidePx, y: notesTop + (i + 1) * (notePx + 3) - 2 });
-  });
-  drawCaution(doc, footerTop, widthPx);
+  drawFooter(doc, footer);
   return doc.serialize();
 }
 

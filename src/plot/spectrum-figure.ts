@@ -1,9 +1,9 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { AxisScale, Series } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { AxisScale, Series } from './panel.js';
 import { overlayStyle } from './styles.js';
-import { formatValue, percentLabel } from './text.js';
+import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
 
 export interface SpectrumFigureOptions {
   /** 'log' (default) for log–log axes, 'linear' for linear ones. */
@@ -27,23 +27,14 @@ export interface PsaFigureOptions extends SpectrumFigureOptions {
 
 /** The lines that say where a spectrum comes from: record, processing, method and damping. */
 export function spectrumSubtitle(spectrum: Spectrum, methodDescription?: string): string[] {
-  const r = spectrum.record;
-  const lines = [
-    `Record: ${r.name} (${r.source}); ${r.npts} samples at Δt = ${r.dtS} s; PGA = ${formatValue(r.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
-  ];
-  for (const step of r.processing) lines.push(`Processed: ${step.description}`);
-  lines.push(
-    `Method: ${methodDescription ?? spectrum.method}; damping ζ = ${spectrum.curves.map((c) => percentLabel(c.damping)).join(', ')}`,
-  );
-  return lines;
+  const processing = spectrum.record.processing.map((step) => `Processed: ${step.description}`);
+  const method = methodLine(methodDescription ?? spectrum.method, spectrum.curves);
+  return [recordLine('Record', spectrum.record), ...processing, method];
 }
 
 /** The note that T = 0 is left off a log period axis, when the grid holds it. */
-export function zeroPeriodNote(spectrum: Spectrum, axes: AxisScale, value?: string): string[] {
-  if (axes !== 'log' || !Array.from(spectrum.periodsS).includes(0)) return [];
-  return [
-    `T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off${value ?? ''}.`,
-  ];
+export function spectrumZeroNote(spectrum: Spectrum, axes: AxisScale, there: string): string[] {
+  return axes === 'log' && Array.from(spectrum.periodsS).includes(0) ? [zeroPeriodNote(there)] : [];
 }
 
 function dampingSeries(spectrum: Spectrum, pick: (index: number) => Float64Array, scale: number): Series[] {
@@ -86,7 +77,7 @@ export function psaFigure(spectrum: Spectrum, options: PsaFigureOptions = {}): s
     ],
     notes: [
       'PSA = ω²·SD with ω = 2π/T; at T = 0, PSA is the peak ground acceleration.',
-      ...zeroPeriodNote(spectrum, axes, ` (there PSA = PGA = ${formatValue(pgaG)} g)`),
+      ...spectrumZeroNote(spectrum, axes, ` (there PSA = PGA = ${formatValue(pgaG)} g)`),
     ],
   });
 }
@@ -105,7 +96,7 @@ export function sdFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {}
     series: dampingSeries(spectrum, (i) => spectrum.curves[i].sdM, 1 / LENGTH_UNITS[unit]),
     notes: [
       'SD is the peak displacement of the oscillator relative to the ground.',
-      ...zeroPeriodNote(spectrum, axes, ' (there SD = 0)'),
+      ...spectrumZeroNote(spectrum, axes, ' (there SD = 0)'),
     ],
   });
 }
@@ -122,6 +113,6 @@ export function psvFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {
     axes,
     legendTitle: 'Damping:',
     series: dampingSeries(spectrum, (i) => spectrum.curves[i].psvMS, 1 / LENGTH_UNITS[unit]),
-    notes: ['PSV = ω·SD with ω = 2π/T.', ...zeroPeriodNote(spectrum, axes, ' (there PSV = 0)')],
+    notes: ['PSV = ω·SD with ω = 2π/T.', ...spectrumZeroNote(spectrum, axes, ' (there PSV = 0)')],
   });
 }

@@ -1,13 +1,13 @@
 import { LENGTH_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { PanelContext } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { PanelContext } from './panel.js';
 import {
   overlaySeries,
   type PsaFigureOptions,
   spectrumSubtitle,
-  zeroPeriodNote,
-} from './spectrum-figures.js';
+  spectrumZeroNote,
+} from './spectrum-figure.js';
 import { formatValue } from './text.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
 
@@ -61,7 +61,7 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
     underlay,
     notes: [
       `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
-      ...zeroPeriodNote(
+      ...spectrumZeroNote(
         spectrum,
         'log',
         ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`,

@@ -1,5 +1,5 @@
-import type { Series } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { Series } from './panel.js';
 import { niceCeil125, niceFloor125 } from './ticks.js';
 
 export interface FourierFigureInput {

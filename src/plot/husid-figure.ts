@@ -1,5 +1,5 @@
-import type { PanelContext } from './figure.js';
 import { lineChart } from './line-chart.js';
+import type { PanelContext } from './panel.js';
 import { TEXT_COLOUR } from './styles.js';
 
 export interface HusidFigureInput {

@@ -1,0 +1,100 @@
+import { scaleLinear, scaleLog } from 'd3-scale';
+import type { AxisScale, PanelSpec, Series } from './panel.js';
+import { FIGURE_TEXT, type SeriesStyle, seriesStyle } from './styles.js';
+import { type AxisTicks, linearTicks, logTicks, niceCeil125, niceFloor125, textWidthPx } from './ticks.js';
+
+const { tickPx } = FIGURE_TEXT;
+
+/** A panel with its styles, scales and domains settled, before anything is drawn. */
+export interface PanelLayout {
+  spec: PanelSpec;
+  series: { series: Series; style: SeriesStyle }[];
+  xScale: AxisScale;
+  yScale: AxisScale;
+  xDomain: [number, number];
+  yDomain: [number, number];
+  yLabelWidthPx: number;
+}
+
+/**
+ * Settle a panel: each series' style, and the axis domains (the data's extent unless fixed; a log
+ * y axis widened to 1-2-5 values, a linear one made nice, symmetric about zero where asked for).
+ */
+export function layoutPanel(spec: PanelSpec): PanelLayout {
+  const xScale = spec.x.scale ?? 'log';
+  const yScale = spec.y.scale ?? 'log';
+  const series = spec.series.map((s, i) => ({ series: s, style: { ...seriesStyle(i), ...s.style } }));
+  const xDomain = spec.x.domain
+    ? ([...spec.x.domain] as [number, number])
+    : dataDomain(spec.series, 'x', xScale, yScale);
+  let yDomain = spec.y.domain
+    ? ([...spec.y.domain] as [number, number])
+    : dataDomain(spec.series, 'y', xScale, yScale);
+  if (!spec.y.domain) {
+    if (yScale === 'log') yDomain = [niceFloor125(yDomain[0]), niceCeil125(yDomain[1])];
+    else if (spec.y.symmetric) {
+      const m = Math.max(Math.abs(yDomain[0]), Math.abs(yDomain[1])) * 1.08 || 1;
+      yDomain = scaleLinear().domain([-m, m]).nice().domain() as [number, number];
+    } else {
+      yDomain = scaleLinear()
+        .domain([Math.min(0, yDomain[0]), yDomain[1] * 1.04 || 1])
+        .nice()
+        .domain() as [number, number];
+    }
+  }
+  const ticks = axisTicks(yScale, yDomain, spec.heightPx, 'y');
+  const yLabelWidthPx = Math.max(0, ...ticks.labels.map((l) => textWidthPx(l.text, tickPx)));
+  return { spec, series, xScale, yScale, xDomain, yDomain, yLabelWidthPx };
+}
+
+/** The extent of the drawable points of all series along one coordinate. */
+function dataDomain(
+  series: readonly Series[],
+  axis: 'x' | 'y',
+  xScale: AxisScale,
+  yScale: AxisScale,
+): [number, number] {
+  const scale = axis === 'x' ? xScale : yScale;
+  let low = Number.POSITIVE_INFINITY;
+  let high = Number.NEGATIVE_INFINITY;
+  for (const s of series) {
+    for (let i = 0; i < s.x.length; i++) {
+      if (!drawable(s.x[i], s.y[i], xScale, yScale)) continue;
+      const v = axis === 'x' ? s.x[i] : s.y[i];
+      low = Math.min(low, v);
+      high = Math.max(high, v);
+    }
+  }
+  if (!Number.isFinite(low)) return scale === 'log' ? [0.1, 1] : [0, 1];
+  if (low === high) return scale === 'log' ? [low / 3, high * 3] : [low - 1, high + 1];
+  return [low, high];
+}
+
+/** Whether a point can be drawn: finite, and positive on a log axis. */
+export function drawable(x: number, y: number, xScale: AxisScale, yScale: AxisScale): boolean {
+  if (!Number.isFinite(x) || !Number.isFinite(y)) return false;
+  if (xScale === 'log' && x <= 0) return false;
+  if (yScale === 'log' && y <= 0) return false;
+  return true;
+}
+
+/** A d3 scale of the kind asked for. */
+export function makeScale(kind: AxisScale, domain: readonly [number, number], range: [number, number]) {
+  const scale = kind === 'log' ? scaleLog() : scaleLinear();
+  return scale.domain(domain).range(range);
+}
+
+/** The ticks of one axis `lengthPx` long: log decades or linear steps whose labels do not collide. */
+export function axisTicks(
+  kind: AxisScale,
+  domain: readonly [number, number],
+  lengthPx: number,
+  axis: 'x' | 'y',
+): AxisTicks {
+  const range: [number, number] = axis === 'x' ? [0, lengthPx] : [lengthPx, 0];
+  const scale = makeScale(kind, domain, range);
+  const extent = (text: string) => (axis === 'x' ? textWidthPx(text, tickPx) : tickPx * 1.3);
+  return kind === 'log'
+    ? logTicks(domain, (v) => scale(v), extent)
+    : linearTicks(domain, (v) => scale(v), extent, lengthPx);
+}
