@@ -5,7 +5,7 @@ import { MAX_LINE_CHARACTERS, type Separator } from './separator.js';
 
 /**
  * csv-parse's synchronous build, loaded on first use: a file of plain lines never needs it, and
- * loading it cost a tenth of a whole `spectrum` run.
+ * loading it is a sizeable part of a short run.
  */
 let csvParseSync: typeof import('csv-parse/sync') | undefined;
 const requireHere = createRequire(import.meta.url);

@@ -89,6 +89,7 @@ export class LineSplitter {
       if (this.pending === 0) this.take(text.slice(start, end));
       else this.take(this.unfinished(text.slice(start, end)));
     }
+    if (offers > 0) this.reader.textDone();
     if (from < length) {
       this.pieces.push(from === 0 ? text : text.slice(from));
       this.pending += length - from;

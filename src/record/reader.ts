@@ -100,12 +100,16 @@ export class RecordReader {
       if (run.lastRow >= 0) this.lastDataLine = line + lines + run.lastRow;
       lines += run.lines;
       next = run.next;
-      // It stops before a line it does not read, or at the end of the text in its memory: then
-      // the text from there on is copied in.
+      // It stopped before a line it does not read, or at the end of its memory's text: copy on.
       if (run.refused || (run.lines === 0 && fresh)) break;
       fresh = true;
     }
     return { next, lines };
+  }
+
+  /** The end of a text given to rowsFrom: the scanner lets go of it. */
+  textDone(): void {
+    this.scanner?.release();
   }
 
   /** One row's fields; `plain` when they come from a plain line, which has no control characters. */

@@ -125,6 +125,11 @@ export class RowScanner {
     };
   }
 
+  /** Let go of the text laid out, so that it is not kept alive after the reading. */
+  release(): void {
+    this.laid = undefined;
+  }
+
   /**
    * Lay out source[from, from + TEXT_BYTES) one byte a character, so that offsets in memory are
    * offsets in the text: ASCII as itself, any other character as 0x80, which the scanner refuses.

@@ -388,6 +388,7 @@ describe('the fast path over a long text', () => {
         scanned += run?.values.length ?? 0;
         return run;
       },
+      release: () => scanner.release(),
     } as unknown as RowScanner;
     readRecordTextUsing(text, { ...options, source: SOURCE }, counting);
     expect(scanned).toBeGreaterThan(0.99 * 60_000);
