@@ -1,4 +1,4 @@
-import { csvFields, longLineError, plainFields } from './fields.js';
+import { lineFields, longLineError } from './fields.js';
 import type { RecordReader } from './reader.js';
 import { MAX_LINE_CHARACTERS } from './separator.js';
 
@@ -6,10 +6,10 @@ import { MAX_LINE_CHARACTERS } from './separator.js';
 const MAX_MISSES = 16;
 
 /**
- * Splits decoded text into lines and hands them to the reader, line by line, numbered as
- * csv-parse numbers them (1-based, each `\r\n`, `\n` or lone `\r` one break). Once the reader
+ * Splits decoded text into lines and hands them to the reader, line by line, numbered from 1
+ * ( each `\r\n`, `\n` or lone `\r` one break). Once the reader
  * knows the layout, runs of numeric rows go to its row scanner (RecordReader.rowsFrom), and each
- * line it does not read is split here (plainFields, else csv-parse) and given to row(). Holds at
+ * line it does not read is split here (lineFields) and given to row(). Holds at
  * most one unfinished line, refused once it is longer than MAX_LINE_CHARACTERS.
  */
 export class LineSplitter {
@@ -37,8 +37,7 @@ export class LineSplitter {
     if (length === 0) return;
     let from = 0;
     if (!this.started) {
-      // The byte-order mark is removed at the start of the text only, as csv-parse's bom option
-      // removes it at the start of a stream.
+      // One byte-order mark is removed, at the start of the text only; any other is a character.
       this.started = true;
       if (text.charCodeAt(0) === 0xfeff) from = 1;
     }
@@ -114,20 +113,9 @@ export class LineSplitter {
     const number = this.line++;
     const { source } = this.reader.options;
     if (line.length > MAX_LINE_CHARACTERS) throw longLineError(source, number);
-    if (line.length === 0) return; // csv-parse's skip_empty_lines
-    const separator = this.reader.separator;
-    const fields = plainFields(line, separator);
-    if (number <= this.skip) {
-      // Lines to skip are still read by csv-parse, so that its limit on a line's size (in
-      // bytes) holds there too; a plain line is far inside it.
-      if (fields === undefined) csvFields(line, separator, source, number);
-      return;
-    }
-    if (fields !== undefined) {
-      if (fields.length > 0) this.reader.row(fields, number, true);
-      return;
-    }
-    const parsed = csvFields(line, separator, source, number);
-    if (parsed !== undefined) this.reader.row(parsed, number, false);
+    if (line.length === 0) return;
+    const fields = lineFields(line, this.reader.separator, source, number);
+    // Lines to skip are split too, so that the limit on a line's size in bytes holds there.
+    if (number > this.skip && fields.length > 0) this.reader.row(fields, number);
   }
 }

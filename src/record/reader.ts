@@ -112,14 +112,12 @@ export class RecordReader {
     this.scanner?.release();
   }
 
-  /** One row's fields; `plain` when they come from a plain line, which has no control characters. */
-  row(rawFields: string[], line: number, plain: boolean): void {
+  /** One row's fields. */
+  row(rawFields: string[], line: number): void {
     const fields = this.separator === 'whitespace' ? rawFields.filter((f) => f !== '') : rawFields;
     if (fields.length === 0 || (fields.length === 1 && fields[0] === '')) return;
-    if (fields[0].startsWith('#')) return;
-    if (!plain)
-      for (const field of fields)
-        if (BINARY.test(field)) throw this.error('binary data, not a text record', line);
+    for (const field of fields)
+      if (BINARY.test(field)) throw this.error('binary data, not a text record', line);
     if (this.layout === 'wrapped') {
       for (let i = 0; i < fields.length; i++) this.add(this.number(fields[i], line, i + 1), line);
       this.lastDataLine = line;

@@ -252,7 +252,7 @@ describe('line numbers in error messages', () => {
 });
 
 describe('byte-order marks, UTF-16LE, skipped lines', () => {
-  it('removes one byte-order mark at the start only, as csv-parse does', async () => {
+  it('removes one byte-order mark, at the start only', async () => {
     for (const text of [
       '\ufeff0 1\n0.5 2\n',
       '\ufeff\ufeff0 1\n0.5 2\n',
@@ -272,9 +272,9 @@ describe('byte-order marks, UTF-16LE, skipped lines', () => {
     expect(await fromChunks(chunked(bytes, [1, 2, 3, 7]), { units: 'm/s2' })).toEqual(expected);
   });
 
-  it('still has csv-parse read a skipped line that is not plain, so its size limit holds there', async () => {
-    // 400,000 characters of three bytes each: over csv-parse's limit of 1,000,000 (it counts
-    // bytes while it reads a field), within the splitter's 1,000,000 characters.
+  it('holds skipped lines to the limit in bytes too', async () => {
+    // 400,000 characters of three bytes each: over the limit of 1,000,000 bytes of fields
+    // (fields.ts), within the splitter's 1,000,000 characters.
     const text = `${'€'.repeat(400_000)}\n0,1\n0.1,2\n`;
     const expected = await agree(text, { units: 'g', skip: 1 });
     expect(expected).toMatchObject({ line: 1, error: LONG_LINE.replace('%d', '1') });
@@ -295,7 +295,7 @@ describe('lines longer than 1,000,000 characters', () => {
     ['a comment', `0,1\n# ${'x'.repeat(MAX)}\n0.1,2\n`, 2],
     ['spaces', `0 1\n${' '.repeat(MAX + 1)}\n0.1 2\n`, 2],
     ['separators', `0,1\n0.1,2${','.repeat(MAX)}\n`, 2],
-  ])('refuses %s longer than the limit, though csv-parse does not count it', async (_, text, line) => {
+  ])('refuses %s longer than the limit, though the limit in bytes does not count it', async (_, text, line) => {
     const options = { units: 'g' as const };
     const refused = { error: LONG_LINE.replace('%d', String(line)), kind: 'input', line };
     expect(await outcome(() => readRecordText(text, { ...options, source: SOURCE }))).toEqual(refused);
