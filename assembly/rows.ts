@@ -1,16 +1,17 @@
-// The record reader's numeric rows in WebAssembly: the twin of RecordReader.numericRow in
-// src/record/read.ts (same fields, same short-decimal reading, same checks), run over many lines
-// of ASCII text at once. Reading rows in TypeScript cost about a microsecond a line in a fresh
-// process, before the engine had optimized the code; this runs at full speed from the first line.
-// Written by hand; compiled by scripts/build-wasm.mjs (no SIMD).
+// The record reader's fast path for numeric rows (src/record/rows.ts): it reads, over many lines of
+// ASCII text at once, exactly the rows the TypeScript reader (src/record/reader.ts) would take
+// without a word, with the same short-decimal reading as parseNumber (src/record/number.ts), and
+// stops before any other line. TypeScript runs unoptimized for the first tens of thousands of rows
+// in a fresh process; this runs at full speed from the first line. Written by hand; compiled by
+// scripts/build-wasm.mjs (no SIMD).
 
-/** 10⁰ to 10²², every one exact in binary64 (5²² < 2⁵³), as POWERS_OF_TEN in read.ts. */
+/** 10⁰ to 10²², every one exact in binary64 (5²² < 2⁵³), as POWERS_OF_TEN in number.ts. */
 const POWERS_OF_TEN = memory.data<f64>([
   1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19,
   1e20, 1e21, 1e22,
 ]);
 
-/** Longest line read here (MAX_LINE_CHARACTERS in read.ts). */
+/** Longest line read here (MAX_LINE_CHARACTERS in separator.ts). */
 const MAX_LINE: usize = 1_000_000;
 
 /** First free byte of linear memory: the caller lays out its arrays from here. */
@@ -30,7 +31,7 @@ function isFieldEnd(c: u32): bool {
 let decimalEnd: usize = 0;
 
 /**
- * shortDecimal (read.ts) of the number that starts at `from` and goes no further than `to`: a
+ * shortDecimal (number.ts) of the number that starts at `from` and goes no further than `to`: a
  * sign, digits with at most one point, an `e` or `E` exponent of at most three digits, at most 15
  * significant digits and a scale within 10^±22, read with one multiplication or division of exact
  * numbers; NaN for anything else. It stops at the first byte that cannot continue the number
@@ -43,7 +44,7 @@ function decimal(from: usize, to: usize): f64 {
   const negative = c === 45;
   if (negative || c === 43) i++;
   // The digits as an integer: with at most 15 significant ones it is below 2⁵³, so it converts to
-  // f64 exactly, the same number read.ts accumulates in f64 (longer runs may wrap; they are
+  // f64 exactly, the same number number.ts accumulates in f64 (longer runs may wrap; they are
   // refused below). A digit is significant from the first that is not 0, across the point.
   let mantissa: u64 = 0;
   let significant = 0;
@@ -96,7 +97,7 @@ function decimal(from: usize, to: usize): f64 {
 
 /**
  * Read the rows of the `length` bytes at `text`, line after line from its start, while each is a
- * row numericRow would read: `columns` fields of short decimals separated by commas (or, when
+ * row the reader would take: `columns` fields of short decimals separated by commas (or, when
  * `whitespace`, by runs of spaces and tabs), blanks around them, the value in column
  * `valueColumn` with |value|·`unit` at most `limit`, and (with more than one column) a time that
  * increases by the mean step to 1e-6. Empty lines are skipped; lines end with `\n` or `\r\n`.
@@ -161,7 +162,7 @@ export function scanRows(
         while (i < stop && isBlank(<u32>load<u8>(i))) i++;
         if (i === stop && (whitespace !== 0 || column === 0)) break;
         // The number reads as far as it goes; the field must end there (a comma, a blank or the
-        // line's end), which is the field numericRow splits off and reads whole.
+        // line's end), which is the field the reader splits off and reads whole.
         const number = decimal(i, stop);
         i = decimalEnd;
         // biome-ignore lint/suspicious/noSelfCompare: the NaN test (not a short decimal)
@@ -198,7 +199,7 @@ export function scanRows(
         }
         timePrevious = time;
       }
-      // In m/s², as numericRow stores it: the value times the unit's factor.
+      // In m/s², as the reader stores it: the value times the unit's factor.
       store<f64>(values + ((<usize>written) << 3), value * unit);
       written++;
       count++;
@@ -213,27 +214,4 @@ export function scanRows(
   store<f64>(state, <f64>lines, 32);
   store<f64>(state, <f64>lastRow, 40);
   store<f64>(state, <f64>refused, 48);
-}
-
-/**
- * createRecord's pass over the `n` samples at `samples` (src/record/record.ts): writes to `out` the
- * peak |sample| before the first sample that is not finite, and that sample's index (−1 when all
- * are finite). The same comparisons as the TypeScript loop, which ran unoptimized in a fresh
- * process: 1–3 ms for a 40,000-sample record.
- */
-export function samplePeak(samples: usize, n: i32, out: usize): void {
-  let peak: f64 = 0;
-  let bad = -1;
-  for (let i = 0; i < n; i++) {
-    const a = load<f64>(samples + ((<usize>i) << 3));
-    // a − a is 0 for every finite a, NaN for an infinity or NaN.
-    if (a - a !== 0) {
-      bad = i;
-      break;
-    }
-    const magnitude = Math.abs(a);
-    if (magnitude > peak) peak = magnitude;
-  }
-  store<f64>(out, peak);
-  store<f64>(out, <f64>bad, 8);
 }

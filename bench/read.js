@@ -2,9 +2,9 @@
 // loadRecord from each compiled tree given (default: ./dist) on a 40,000-line two-column file,
 // `time_s,accel_g` then lines like `12.3450,1.23456789e-02`. The runs of the trees are
 // interleaved and each figure is the median of REPEAT runs, so that a shared, noisy machine
-// disturbs them alike. Where a tree has the csv-parse-only reader, it is timed too. Nothing here
-// is a test: speed is measured here and never asserted in the test suite.
-import { createReadStream, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+// disturbs them alike. Nothing here is a test: speed is measured here and never asserted in the
+// test suite.
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -43,14 +43,6 @@ for (const root of roots) {
     times: [],
     cpu: [],
   });
-  const read = await import(new URL('record/read.js', base).href);
-  if (typeof read.readRecordStreamCsvOnly === 'function')
-    variants.push({
-      name: `${root} csv-parse only`,
-      run: () => read.readRecordStreamCsvOnly(createReadStream(file), { source: file, units: 'g' }),
-      times: [],
-      cpu: [],
-    });
 }
 
 for (const variant of variants) await variant.run(); // warm up each once

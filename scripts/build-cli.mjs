@@ -50,10 +50,9 @@ const common = {
   platform: 'node',
   format: 'cjs',
   target: 'node20',
-  // jsdom (large, loaded with the first figure) and csv-parse (loaded for lines the scanner does
-  // not read) stay in node_modules and are required where they were. d3-scale and d3-shape are
+  // jsdom (large, loaded with the first figure) stays in node_modules and is required where it was. d3-scale and d3-shape are
   // ES modules only, which Node 20 cannot require: they go into the bundle.
-  external: ['jsdom', 'csv-parse', 'csv-parse/sync'],
+  external: ['jsdom'],
   // Every module of a bundle sees the bundle's own URL: the paths the code finds from it
   // (workerScript, recordsFolder) are written to hold from there as well.
   define: { 'import.meta.url': '__bundleUrl' },

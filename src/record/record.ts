@@ -1,6 +1,5 @@
 import { inputError } from '../base/errors.js';
 import type { AccelerationUnit } from '../base/units.js';
-import { RowScanner } from './rows.js';
 
 /** One processing operation that was applied to a record, as stated in every output that used it. */
 export interface ProcessingStep {
@@ -52,10 +51,12 @@ export function createRecord(fields: RecordFields): GroundRecord {
   if (accelMS2.length < 2) {
     throw inputError(`a record needs at least 2 samples, got ${accelMS2.length}`, { file: source });
   }
-  const { peak: pgaMS2, firstNotFinite } = samplePeak(accelMS2);
-  if (firstNotFinite >= 0) {
-    const a = accelMS2[firstNotFinite];
-    throw inputError(`sample ${firstNotFinite + 1} is not a finite number (${a})`, { file: source });
+  let pgaMS2 = 0;
+  for (let i = 0; i < accelMS2.length; i++) {
+    const a = accelMS2[i];
+    if (!Number.isFinite(a))
+      throw inputError(`sample ${i + 1} is not a finite number (${a})`, { file: source });
+    if (Math.abs(a) > pgaMS2) pgaMS2 = Math.abs(a);
   }
   return {
     name,
@@ -66,27 +67,6 @@ export function createRecord(fields: RecordFields): GroundRecord {
     processing: fields.processing ?? [],
     pgaMS2,
   };
-}
-
-/** Samples from which the check of createRecord runs in WebAssembly (RowScanner.samplePeak). */
-const LONG_RECORD = 4096;
-
-/**
- * The peak |sample| and the index of the first sample that is not finite (−1 when all are), in
- * one pass: in WebAssembly for a long record (where the engine has it), since this pass ran
- * unoptimized in a fresh process, 1–3 ms for 40,000 samples; the same comparisons here otherwise.
- */
-export function samplePeak(accelMS2: Float64Array): { peak: number; firstNotFinite: number } {
-  const scanner = accelMS2.length >= LONG_RECORD ? RowScanner.get() : undefined;
-  if (scanner !== undefined) return scanner.samplePeak(accelMS2);
-  let peak = 0;
-  for (let i = 0; i < accelMS2.length; i++) {
-    const a = accelMS2[i];
-    if (!Number.isFinite(a)) return { peak, firstNotFinite: i };
-    const magnitude = Math.abs(a);
-    if (magnitude > peak) peak = magnitude;
-  }
-  return { peak, firstNotFinite: -1 };
 }
 
 /** A copy of `record` with new samples (and step) and one more processing step on its list. */

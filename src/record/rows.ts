@@ -1,6 +1,6 @@
 import { ROWS_WASM_BASE64 } from './rows-binary.js';
 
-/** Characters of text handed to the WebAssembly row scanner at a time. */
+/** Characters of text laid out in the WebAssembly row scanner's memory at a time. */
 const TEXT_BYTES = 1 << 18;
 /** Rows it may read at a time: a row takes at least two bytes (a digit and a line end). */
 const CAPACITY = TEXT_BYTES / 2;
@@ -20,10 +20,9 @@ interface RowsExports {
     capacity: number,
     state: number,
   ): void;
-  samplePeak(samples: number, count: number, out: number): void;
 }
 
-/** The reader's layout and running time check, as numericRow in read.ts sees them. */
+/** The reader's layout and running time check, as RecordReader.rowsFrom hands them over. */
 export interface RowLayout {
   columns: number;
   valueColumn: number;
@@ -37,7 +36,7 @@ export interface RowLayout {
   timePreviousS: number;
 }
 
-/** What one scan read: up to `next` in the text, `lines` lines, `rows` values in `values`. */
+/** What one scan read: up to `next` in the text, `lines` lines, their values in `values`. */
 export interface RowScan {
   next: number;
   lines: number;
@@ -45,13 +44,15 @@ export interface RowScan {
   lastRow: number;
   values: Float64Array;
   timePreviousS: number;
+  /** Whether it stopped before a line it does not read (rather than at the end of the text laid out). */
+  refused: boolean;
 }
 
 /**
- * The WebAssembly twin of RecordReader.numericRow (assembly/rows.ts), for runs of many rows: a
- * fresh process reads them at full speed from the first line, where the TypeScript loop ran
- * unoptimized for the first tens of thousands. One instance per thread, made on first use;
- * undefined where the engine has no WebAssembly (the reader then reads every row itself).
+ * The record reader's fast path for runs of numeric rows (assembly/rows.ts): a fresh process
+ * reads them at full speed from the first line, where TypeScript runs unoptimized for the first
+ * tens of thousands. One instance per thread, made on first use; undefined where the engine has
+ * no WebAssembly (the reader then reads every row itself).
  */
 export class RowScanner {
   private static instance: RowScanner | null | undefined;
@@ -59,7 +60,10 @@ export class RowScanner {
   private readonly text: number;
   private readonly values: number;
   private readonly state: number;
-  private readonly encoder = new TextEncoder();
+  /** The text laid out in memory: `laidFrom` to `laidFrom + laidLength` of `laid`, one byte a character. */
+  private laid: string | undefined;
+  private laidFrom = 0;
+  private laidLength = 0;
 
   static get(): RowScanner | undefined {
     if (RowScanner.instance === undefined) {
@@ -85,57 +89,23 @@ export class RowScanner {
   }
 
   /**
-   * createRecord's pass over the samples (assembly/rows.ts, samplePeak): the peak |sample| and
-   * the index of the first sample that is not finite (−1 when all are). In pieces of CAPACITY
-   * samples, through the memory the rows are read into.
+   * Read the rows of `source` from character `from` on, while its lines are rows the scanner
+   * reads. With `copy`, up to TEXT_BYTES characters from `from` are laid out in memory first;
+   * without, only text already laid out is read, and undefined is returned when `from` is outside it.
    */
-  samplePeak(samples: Float64Array): { peak: number; firstNotFinite: number } {
-    let peak = 0;
-    for (let from = 0; from < samples.length; from += CAPACITY) {
-      const piece = samples.subarray(from, from + CAPACITY);
-      const memory = this.exports.memory.buffer;
-      new Float64Array(memory, this.values, piece.length).set(piece);
-      this.exports.samplePeak(this.values, piece.length, this.state);
-      const out = new Float64Array(memory, this.state, 2);
-      if (out[0] > peak) peak = out[0];
-      if (out[1] >= 0) return { peak, firstNotFinite: from + out[1] };
-    }
-    return { peak, firstNotFinite: -1 };
-  }
-
-  /**
-   * Read rows of `source` from character `from` on, at most TEXT_BYTES characters of it, while
-   * its lines are rows numericRow would read (ASCII only, so characters and bytes are the same
-   * count). `refused` tells whether it stopped before a line it does not read (rather than at the
-   * end of what it was given).
-   */
-  scan(source: string, from: number, layout: RowLayout): RowScan & { refused: boolean } {
-    const piece = source.slice(from, from + TEXT_BYTES);
-    const { written } = this.encoder.encodeInto(piece, this.textView());
-    return this.run(from, written, layout);
-  }
-
-  /** scan() over UTF-8 bytes from byte `from` on: the scanner stops at the first byte outside ASCII. */
-  scanBytes(bytes: Uint8Array, from: number, layout: RowLayout): RowScan & { refused: boolean } {
-    const piece = bytes.subarray(from, from + TEXT_BYTES);
-    this.textView().set(piece);
-    return this.run(from, piece.length, layout);
-  }
-
-  private textView(): Uint8Array {
-    return new Uint8Array(this.exports.memory.buffer, this.text, TEXT_BYTES);
-  }
-
-  /** Scan the `length` bytes laid out at the text's place, which began at `from` in the source. */
-  private run(from: number, length: number, layout: RowLayout): RowScan & { refused: boolean } {
+  scan(source: string, from: number, layout: RowLayout, copy: boolean): RowScan | undefined {
+    if (copy) this.layOut(source, from);
+    else if (source !== this.laid || from < this.laidFrom || from >= this.laidFrom + this.laidLength)
+      return undefined;
+    const offset = from - this.laidFrom;
     const memory = this.exports.memory.buffer;
     const state = new Float64Array(memory, this.state, 8);
     state[0] = layout.count;
     state[1] = layout.timeFirstS;
     state[2] = layout.timePreviousS;
     this.exports.scanRows(
-      this.text,
-      length,
+      this.text + offset,
+      this.laidLength - offset,
       layout.columns,
       layout.valueColumn,
       layout.whitespace ? 1 : 0,
@@ -145,14 +115,32 @@ export class RowScanner {
       CAPACITY,
       this.state,
     );
-    const rows = state[0] - layout.count;
     return {
       next: from + state[3],
       lines: state[4],
       lastRow: state[5],
-      values: new Float64Array(memory, this.values, rows),
+      values: new Float64Array(memory, this.values, state[0] - layout.count),
       timePreviousS: state[2],
       refused: state[6] === 1,
     };
+  }
+
+  /** Let go of the text laid out, so that it is not kept alive after the reading. */
+  release(): void {
+    this.laid = undefined;
+  }
+
+  /**
+   * Lay out source[from, from + TEXT_BYTES) one byte a character, so that offsets in memory are
+   * offsets in the text: ASCII as itself, any other character as 0x80, which the scanner refuses.
+   */
+  private layOut(source: string, from: number): void {
+    const piece = source.slice(from, from + TEXT_BYTES);
+    const bytes = Buffer.from(this.exports.memory.buffer, this.text, TEXT_BYTES);
+    bytes.write(piece, 0, 'latin1');
+    for (const match of piece.matchAll(/[\u0080-\uffff]/g)) bytes[match.index] = 0x80;
+    this.laid = source;
+    this.laidFrom = from;
+    this.laidLength = piece.length;
   }
 }

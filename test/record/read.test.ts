@@ -3,13 +3,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { isQuakesweepError } from '../../src/base/errors.js';
-import {
-  parseNumber,
-  type ReadOptions,
-  readRecordStream,
-  readRecordText,
-  unitWarnings,
-} from '../../src/record/read.js';
+import { parseNumber } from '../../src/record/number.js';
+import { type ReadOptions, readRecordStream, readRecordText, unitWarnings } from '../../src/record/read.js';
 import { createRecord } from '../../src/record/record.js';
 
 // Every record in these tests is invented for the test.

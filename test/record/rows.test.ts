@@ -1,13 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { readRecordText } from '../../src/record/read.js';
-import { createRecord } from '../../src/record/record.js';
 import { type RowLayout, RowScanner } from '../../src/record/rows.js';
 
 // The WebAssembly row scanner (assembly/rows.ts) reads runs of numeric rows for the reader; it
-// must read exactly the rows RecordReader.numericRow reads, with the values Number() gives
-// (ECMAScript's correctly rounded decimal conversion is the oracle for the digits), and stop
-// before any other line, which the reader then reads itself. Whole files are checked against the
-// csv-parse-only reader in read-scanner.test.ts, which goes through this scanner too.
+// must read them with the values Number() gives (ECMAScript's correctly rounded decimal
+// conversion is the oracle for the digits), and stop before any other line, which the reader
+// then reads itself. Whole files are checked against the TypeScript reader alone in
+// lines.test.ts, on every input of its property tests.
 
 // Values in m/s² (a factor of 1), so that the values read are the numbers written; the test of
 // the factor is below.
@@ -26,7 +25,8 @@ const layout = (overrides: Partial<RowLayout> = {}): RowLayout => ({
 function scan(text: string, overrides: Partial<RowLayout> = {}) {
   const scanner = RowScanner.get();
   if (scanner === undefined) throw new Error('no WebAssembly on this engine');
-  const result = scanner.scan(text, 0, layout(overrides));
+  const result = scanner.scan(text, 0, layout(overrides), true);
+  if (result === undefined) throw new Error('a scan that copies the text always reads');
   return { ...result, values: Array.from(result.values) };
 }
 
@@ -70,7 +70,7 @@ describe('the WebAssembly row scanner', () => {
     expect(result.next).toBe(text.indexOf('\n') + 1);
   });
 
-  it("stores each value times the unit's factor, as numericRow does (m/s²)", () => {
+  it("stores each value times the unit's factor (m/s²)", () => {
     const text = '0.01,1.5\n0.02,-0.3\n0.03,0.123456789\n';
     expect(scan(text, { unitMS2: 9.80665, limitMS2: 9.80665e6 }).values).toEqual([
       1.5 * 9.80665,
@@ -128,65 +128,34 @@ describe('the WebAssembly row scanner', () => {
       text,
       after,
       layout({ timePreviousS: 0, timeFirstS: 0, unitMS2: 9.80665 }),
+      true,
     );
     expect(run?.values.length).toBe(4999);
   });
 });
 
-describe("createRecord's pass over the samples in WebAssembly (samplePeak)", () => {
-  // The twin of the TypeScript loop in record.ts: the same peak (a maximum is exact) and the same
-  // first sample that is not finite, over pieces of the scanner's memory.
-  function reference(samples: Float64Array): { peak: number; firstNotFinite: number } {
-    let peak = 0;
-    for (let i = 0; i < samples.length; i++) {
-      if (!Number.isFinite(samples[i])) return { peak, firstNotFinite: i };
-      peak = Math.max(peak, Math.abs(samples[i]));
-    }
-    return { peak, firstNotFinite: -1 };
-  }
-  // A fixed pseudo-random sequence (a linear congruential generator, common practice).
-  let seed = 99;
-  const next = () => {
-    seed = (seed * 1103515245 + 12345) % 2 ** 31;
-    return seed / 2 ** 31;
-  };
-  const samples = (n: number) => Float64Array.from({ length: n }, () => (next() - 0.5) * 20);
-
-  it('gives the peak of finite samples, across pieces of 131,072 samples', () => {
+describe('the text the scanner holds', () => {
+  it('reads on in the text it copied, one byte a character, past characters outside ASCII', () => {
     const scanner = RowScanner.get();
     if (scanner === undefined) throw new Error('no WebAssembly on this engine');
-    for (const n of [1, 4096, 131_071, 131_072, 131_073, 300_000]) {
-      const a = samples(n);
-      a[Math.floor(next() * n)] = -37.25; // the peak, anywhere
-      expect(scanner.samplePeak(a)).toEqual(reference(a));
-    }
+    // Line 2 has two characters outside ASCII (é, and 😀 as two UTF-16 units); after it, the
+    // rows are found at their character offsets in the text without copying it again.
+    const text = '0.01,1\n# é 😀\n0.02,2\n0.03,3\n';
+    const first = scanner.scan(text, 0, layout(), true);
+    expect(first).toMatchObject({ lines: 1, refused: true, next: 7 });
+    const after = text.indexOf('0.02');
+    const second = scanner.scan(text, after, layout({ count: 2, timeFirstS: 0, timePreviousS: 0.01 }), false);
+    expect(second && Array.from(second.values)).toEqual([2, 3]);
+    expect(second).toMatchObject({ next: text.length, lines: 2, refused: false });
   });
 
-  it('finds the first sample that is not finite, and the peak before it', () => {
+  it('reads nothing without copying when the text or the place is not the one it holds', () => {
     const scanner = RowScanner.get();
     if (scanner === undefined) throw new Error('no WebAssembly on this engine');
-    for (const [at, bad] of [
-      [0, Number.NaN],
-      [17, Number.POSITIVE_INFINITY],
-      [131_072, Number.NEGATIVE_INFINITY],
-      [250_000, Number.NaN],
-    ] as const) {
-      const a = samples(300_000);
-      a[at] = bad;
-      a[at + 10] = Number.NaN; // a later one is not the first
-      expect(scanner.samplePeak(a)).toEqual(reference(a));
-    }
-  });
-
-  it('makes createRecord refuse such a sample with its number, whichever way the pass runs', () => {
-    for (const n of [100, 50_000]) {
-      const a = samples(n);
-      a[n - 3] = Number.NaN;
-      expect(() => createRecord({ name: 'x', dtS: 0.01, accelMS2: a })).toThrow(
-        `sample ${n - 2} is not a finite number (NaN)`,
-      );
-      a[n - 3] = 1;
-      expect(createRecord({ name: 'x', dtS: 0.01, accelMS2: a }).pgaMS2).toBe(reference(a).peak);
-    }
+    const text = '0.01,1\n0.02,2\n';
+    scanner.scan(text, 0, layout(), true);
+    expect(scanner.scan(`${text} `, 0, layout(), false)).toBeUndefined(); // another string
+    expect(scanner.scan(text, text.length, layout(), false)).toBeUndefined(); // past its end
+    expect(scanner.scan(text, 7, layout({ timePreviousS: 0.01 }), false)?.values[0]).toBe(2);
   });
 });

@@ -1,13 +1,9 @@
 /**
- * The line scanner of the record reader against the reader it replaced. The oracle is
- * `readRecordStreamCsvOnly` in src/record/read.ts: the previous reader kept as it was, every line
- * through csv-parse's stream interface (internal, not exported from src/index.ts). Unless a
- * check says otherwise its source is that oracle's output, that is csv-parse's own output: the
- * same samples, the same step and the same error message with the same line number.
- *
- * One rule is new and checked against its own statement instead: a line longer than 1,000,000
- * characters is refused where it stands, where csv-parse counted only what it kept of a line
- * (no separators, no leading spaces, no comment).
+ * The line splitter and the row scanner (the reader's fast path) against the TypeScript reader
+ * alone. The oracle is readRecordTextUsing with no scanner: every line split by the line splitter
+ * and read by RecordReader.row. The fast path, the stream reader and every way of cutting a
+ * stream into chunks must give the same samples, the same step and the same error message with
+ * the same line number. Where a check names values or lines of its own, they were counted by hand.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -15,10 +11,11 @@ import { isQuakesweepError } from '../../src/base/errors.js';
 import {
   type ReadOptions,
   readRecordStream,
-  readRecordStreamCsvOnly,
   readRecordText,
+  readRecordTextUsing,
 } from '../../src/record/read.js';
 import type { GroundRecord } from '../../src/record/record.js';
+import { RowScanner } from '../../src/record/rows.js';
 import { FUZZ_SEED, runs } from '../fuzz/budget.js';
 import { chunked, mutatedRecord, streamOf, wellFormedRecord } from '../fuzz/records.js';
 
@@ -40,10 +37,9 @@ async function outcome(read: () => Promise<GroundRecord> | GroundRecord): Promis
 
 const bytesOf = (text: string) => new Uint8Array(Buffer.from(text, 'utf8'));
 
-/** The oracle on the whole file in one chunk. */
-function old(input: string | Uint8Array, options: Omit<ReadOptions, 'source'>): Promise<Outcome> {
-  const bytes = typeof input === 'string' ? bytesOf(input) : input;
-  return outcome(() => readRecordStreamCsvOnly(streamOf([bytes]), { ...options, source: SOURCE }));
+/** The oracle: the TypeScript reader alone, on the whole text. */
+function alone(text: string, options: Omit<ReadOptions, 'source'>): Promise<Outcome> {
+  return outcome(() => readRecordTextUsing(text, { ...options, source: SOURCE }, undefined));
 }
 
 function fromChunks(chunks: (string | Uint8Array)[], options: Omit<ReadOptions, 'source'>) {
@@ -61,11 +57,14 @@ function pieces(text: string, size: number): Uint8Array[] {
   return out;
 }
 
-/** The new reader three ways (whole text, bytes cut at `cuts`, one chunk) and the oracle; all must agree. */
+/** The reader with its fast path three ways (whole text, bytes cut at `cuts`, one chunk) and the oracle; all must agree. */
 async function agree(text: string, options: Omit<ReadOptions, 'source'>, cuts: number[] = []) {
-  const expected = await old(text, options);
+  const expected = await alone(text, options);
   expect(await outcome(() => readRecordText(text, { ...options, source: SOURCE }))).toEqual(expected);
   expect(await fromChunks(chunked(bytesOf(text), cuts), options)).toEqual(expected);
+  expect(
+    await outcome(() => readRecordStream(streamOf([bytesOf(text)]), { ...options, source: SOURCE })),
+  ).toEqual(expected);
   return expected;
 }
 
@@ -130,7 +129,7 @@ const soupText = (s: { lines: string[]; ends: string[]; trailing: boolean; bom: 
   (s.bom ? '\ufeff' : '') +
   s.lines.map((line, i) => line + (i < s.lines.length - 1 || s.trailing ? s.ends[i] : '')).join('');
 
-describe('the scanner against the csv-parse-only reader (property)', () => {
+describe('the fast path and the stream reader against the TypeScript reader (property)', () => {
   it('gives the same samples, step and error on well-formed files, whatever the chunks', async () => {
     await fc.assert(
       fc.asyncProperty(wellFormedRecord, fc.array(fc.nat(), { maxLength: 8 }), async (written, cuts) => {
@@ -163,9 +162,7 @@ describe('the scanner against the csv-parse-only reader (property)', () => {
     );
   });
 
-  it('gives the same when a line of over 1,000,000 counted characters starts a line', async () => {
-    // Characters csv-parse counts (not separators, spaces or a comment), and two more than the
-    // limit, so that csv-parse refuses the line too.
+  it('gives the same when a line of over 1,000,000 characters starts a line', async () => {
     await fc.assert(
       fc.asyncProperty(
         wellFormedRecord,
@@ -203,13 +200,13 @@ describe('chunk boundaries', () => {
   it.each(files)(
     '%s: the same in pieces of 1, 2, 3 and 7 bytes, cut inside every \\r\\n, and as strings',
     async (_, text, options) => {
-      const expected = await old(text, options);
+      const expected = await alone(text, options);
       for (const size of [1, 2, 3, 7]) {
         expect(await fromChunks(pieces(text, size), options)).toEqual(expected);
         const strings: string[] = [];
         for (let i = 0; i < text.length; i += size) strings.push(text.slice(i, i + size)); // cuts 😀 in two
         expect(await fromChunks(strings, options)).toEqual(
-          await old(text.replace('😀', '\ufffd\ufffd'), options),
+          await alone(text.replace('😀', '\ufffd\ufffd'), options),
         );
       }
       // Cut between the two halves of every \r\n.
@@ -224,16 +221,16 @@ describe('chunk boundaries', () => {
   );
 
   it('reads the files above as expected (counted by hand)', async () => {
-    expect(await old(files[0][1], files[0][2])).toMatchObject({
+    expect(await alone(files[0][1], files[0][2])).toMatchObject({
       samples: [1.5, -0.25, 3, 4].map((g) => g * 9.80665),
     });
-    expect(await old(files[3][1], files[3][2])).toMatchObject({ line: 7 });
-    expect(await old(files[4][1], files[4][2])).toMatchObject({ line: 3 });
+    expect(await alone(files[3][1], files[3][2])).toMatchObject({ line: 7 });
+    expect(await alone(files[4][1], files[4][2])).toMatchObject({ line: 3 });
   });
 });
 
 describe('line numbers in error messages', () => {
-  // Each file has its bad value on the line given, counted by hand; the oracle must agree.
+  // Each file has its bad value on the line given, counted by hand.
   it.each([
     ['LF', '0,1\n0.1,2\n0.2,x\n', 3],
     ['CRLF', '0,1\r\n0.1,2\r\n0.2,x\r\n', 3],
@@ -255,7 +252,7 @@ describe('line numbers in error messages', () => {
 });
 
 describe('byte-order marks, UTF-16LE, skipped lines', () => {
-  it('removes one byte-order mark at the start only, as csv-parse does', async () => {
+  it('removes one byte-order mark, at the start only', async () => {
     for (const text of [
       '\ufeff0 1\n0.5 2\n',
       '\ufeff\ufeff0 1\n0.5 2\n',
@@ -268,17 +265,16 @@ describe('byte-order marks, UTF-16LE, skipped lines', () => {
       await agree(text, { units: 'g' }, [1, 2, 3, 4]);
   });
 
-  it('reads a UTF-16LE file (bytes FF FE first) as before', async () => {
+  it('reads a UTF-16LE file (bytes FF FE first)', async () => {
     const bytes = new Uint8Array(Buffer.from('\ufefftime\ta\r\n0\t1\r\n0.5\t2\r\n1.0\t3\r\n', 'utf16le'));
-    const expected = await old(bytes, { units: 'm/s2' });
-    expect(expected).toEqual({ samples: [1, 2, 3], dtS: 0.5 }); // the values written
+    const expected = { samples: [1, 2, 3], dtS: 0.5 }; // the values written
     expect(await fromChunks([bytes], { units: 'm/s2' })).toEqual(expected);
     expect(await fromChunks(chunked(bytes, [1, 2, 3, 7]), { units: 'm/s2' })).toEqual(expected);
   });
 
-  it('still has csv-parse read a skipped line that is not plain, so its size limit holds there', async () => {
-    // 400,000 characters of three bytes each: over csv-parse's limit of 1,000,000 (it counts
-    // bytes while it reads a field), within the scanner's 1,000,000 characters.
+  it('holds skipped lines to the limit in bytes too', async () => {
+    // 400,000 characters of three bytes each: over the limit of 1,000,000 bytes of fields
+    // (fields.ts), within the splitter's 1,000,000 characters.
     const text = `${'€'.repeat(400_000)}\n0,1\n0.1,2\n`;
     const expected = await agree(text, { units: 'g', skip: 1 });
     expect(expected).toMatchObject({ line: 1, error: LONG_LINE.replace('%d', '1') });
@@ -288,8 +284,8 @@ describe('byte-order marks, UTF-16LE, skipped lines', () => {
   });
 });
 
-describe('lines longer than 1,000,000 characters (the rule of the reader)', () => {
-  it('refuses a data line of 1,000,001 digits at its line, as the csv-parse-only reader did', async () => {
+describe('lines longer than 1,000,000 characters', () => {
+  it('refuses a data line of 1,000,001 digits at its line', async () => {
     const text = `0,1\r\n0.1,2\r\n0.2,${'3'.repeat(MAX + 1)}9\r\n0.3,4\r\n`;
     const expected = await agree(text, { units: 'g' }, [65536, 131072]);
     expect(expected).toMatchObject({ error: LONG_LINE.replace('%d', '3'), line: 3 });
@@ -299,12 +295,11 @@ describe('lines longer than 1,000,000 characters (the rule of the reader)', () =
     ['a comment', `0,1\n# ${'x'.repeat(MAX)}\n0.1,2\n`, 2],
     ['spaces', `0 1\n${' '.repeat(MAX + 1)}\n0.1 2\n`, 2],
     ['separators', `0,1\n0.1,2${','.repeat(MAX)}\n`, 2],
-  ])('refuses %s longer than the limit, which csv-parse did not count', async (_, text, line) => {
+  ])('refuses %s longer than the limit, though the limit in bytes does not count it', async (_, text, line) => {
     const options = { units: 'g' as const };
     const refused = { error: LONG_LINE.replace('%d', String(line)), kind: 'input', line };
     expect(await outcome(() => readRecordText(text, { ...options, source: SOURCE }))).toEqual(refused);
     expect(await fromChunks(pieces(text, 65536), options)).toEqual(refused);
-    expect(await old(text, options)).not.toEqual(refused); // the change, shown on the csv-parse-only reader
   });
 
   it('refuses a line that never ends once it passes the limit, without reading on', async () => {
@@ -342,5 +337,60 @@ describe('lines longer than 1,000,000 characters (the rule of the reader)', () =
     const result = await outcome(() => readRecordStream(endless(), { units: 'g', source: SOURCE }));
     expect(result).toMatchObject({ line: 3 });
     expect(pulled).toBeLessThanOrEqual(Math.ceil(MAX / 65536) + 1); // closed form, as above
+  });
+});
+
+describe('the fast path over a long text', () => {
+  it('reads the rows between odd lines anywhere in 60,000 lines, across the pieces it copies', async () => {
+    // A fixed pseudo-random sequence (a linear congruential generator, common practice) places
+    // lines the fast path does not read (comments with and without letters outside ASCII, a
+    // Fortran exponent, 16 significant digits, blank lines, spaces) among plain rows.
+    let seed = 4242;
+    const next = () => {
+      seed = (seed * 1103515245 + 12345) % 2 ** 31;
+      return seed / 2 ** 31;
+    };
+    const lines = ['time_s,accel_g'];
+    const expected: number[] = [];
+    for (let k = 0; k < 60_000; k++) {
+      const t = (k * 0.005).toFixed(4);
+      const odd = next();
+      let value = ((k % 97) - 48) / 7;
+      if (odd < 0.002) lines.push('# a comment');
+      else if (odd < 0.004) lines.push('# séisme inventé');
+      else if (odd < 0.006) lines.push('');
+      let row = `${t},${value.toFixed(6)}`;
+      if (odd > 0.998) {
+        row = `${t},${(value * 10).toFixed(5)}D-01`; // the same value, written as Fortran does
+      } else if (odd > 0.996) {
+        row = `${t},${value.toFixed(15)}`; // 16 or 17 significant digits: the long way
+        value = Number(value.toFixed(15));
+      } else if (odd > 0.994) {
+        row = ` ${t} , ${value.toFixed(6)} `;
+      }
+      if (odd <= 0.996) value = Number(value.toFixed(6));
+      lines.push(row);
+      expected.push(odd > 0.998 ? Number(`${((((k % 97) - 48) / 7) * 10).toFixed(5)}e-01`) : value);
+    }
+    const text = `${lines.join('\n')}\n`;
+    expect(text.length).toBeGreaterThan(3 * 2 ** 18); // more than three of the scanner's pieces
+    const options = { units: 'm/s2' as const };
+    const read = await agree(text, options, [65536, 65537, 300_001]);
+    expect(read).toMatchObject({ samples: expected });
+    expect(await fromChunks(pieces(text, 65536), options)).toEqual(read);
+    // The fast path read the rows after each odd line, not only those before the first.
+    const scanner = RowScanner.get();
+    if (scanner === undefined) throw new Error('no WebAssembly on this engine');
+    let scanned = 0;
+    const counting = {
+      scan: (...args: Parameters<RowScanner['scan']>) => {
+        const run = scanner.scan(...args);
+        scanned += run?.values.length ?? 0;
+        return run;
+      },
+      release: () => scanner.release(),
+    } as unknown as RowScanner;
+    readRecordTextUsing(text, { ...options, source: SOURCE }, counting);
+    expect(scanned).toBeGreaterThan(0.99 * 60_000);
   });
 });

@@ -6,7 +6,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { parseNumber } from '../../src/record/read.js';
+import { parseNumber } from '../../src/record/number.js';
 import { FUZZ_SEED, runs } from '../fuzz/budget.js';
 
 /** A decimal as people print it: sign, digits, a point somewhere or none, an exponent or none. */

@@ -1,0 +1,61 @@
+import { inputError } from '../base/errors.js';
+import { MAX_LINE_CHARACTERS, type Separator } from './separator.js';
+
+/** The separators of the whitespace separator: each space and each tab. */
+const BLANK = /[ \t]/;
+
+/**
+ * The fields of one line (no line break in it): the line up to a `#` (a comment), split at each
+ * separator (each space or tab for the whitespace separator) and, for `,` and `;`, each field
+ * trimmed of white space (String.prototype.trim); none for a line with nothing but a comment or
+ * white space. No quotes: a `"` is part of a field. These are the fields csv-parse gives with
+ * the options the reader once used (delimiter, trim, comment '#', quote false, skip_empty_lines,
+ * max_record_size 1,000,000), its limit on a line's size included (sizeLimit); the tests compare
+ * the two. `file` and `line` place the error.
+ */
+export function lineFields(text: string, separator: Separator, file: string, line: number): string[] {
+  const hash = text.indexOf('#');
+  const kept = hash === -1 ? text : text.slice(0, hash);
+  const trimmed = separator !== 'whitespace';
+  const spans = trimmed ? kept.split(separator) : kept.split(BLANK);
+  // A character is at most 3 bytes of UTF-8, so only a line this long can pass the limit in bytes.
+  if (text.length * 3 > MAX_LINE_CHARACTERS) sizeLimit(spans, trimmed, file, line);
+  const fields = trimmed ? spans.map((span) => span.trim()) : spans;
+  return fields.length === 1 && fields[0] === '' ? [] : fields;
+}
+
+/**
+ * csv-parse's limit on a line's size, as it counts: before each byte of a field it appends, the
+ * characters of the fields before (as kept) and the UTF-8 bytes of this one so far must not pass
+ * MAX_LINE_CHARACTERS. Leading white space is not appended, trailing white space is (and trimmed
+ * from the field once it ends); separators and the comment are not counted.
+ */
+function sizeLimit(spans: string[], trimmed: boolean, file: string, line: number): void {
+  let before = 0;
+  for (const span of spans) {
+    const appended = trimmed ? span.trimStart() : span;
+    const bytes = Buffer.byteLength(appended, 'utf8');
+    if (span.length > 0 && before + Math.max(0, bytes - 1) > MAX_LINE_CHARACTERS)
+      throw longLineError(file, line);
+    before += trimmed ? appended.trimEnd().length : appended.length;
+  }
+}
+
+export function longLineError(file: string, line: number | undefined) {
+  return inputError(`a line longer than ${MAX_LINE_CHARACTERS} characters: is this a text record?`, {
+    file,
+    line,
+  });
+}
+
+/** A field as shown in a message: quoted, cut short, with unprintable characters escaped. */
+export function quote(text: string): string {
+  const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
+  // Line and paragraph separators and the byte-order mark are escaped too, so the message stays one visible line.
+  return `'${short.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
+    const code = c.charCodeAt(0);
+    return code <= 0xff
+      ? `\\x${code.toString(16).padStart(2, '0')}`
+      : `\\u${code.toString(16).padStart(4, '0')}`;
+  })}'`;
+}

@@ -1,0 +1,121 @@
+import { lineFields, longLineError } from './fields.js';
+import type { RecordReader } from './reader.js';
+import { MAX_LINE_CHARACTERS } from './separator.js';
+
+/** Offers of a text to the row scanner that may read nothing before it is offered no more of it. */
+const MAX_MISSES = 16;
+
+/**
+ * Splits decoded text into lines and hands them to the reader, line by line, numbered from 1
+ * ( each `\r\n`, `\n` or lone `\r` one break). Once the reader
+ * knows the layout, runs of numeric rows go to its row scanner (RecordReader.rowsFrom), and each
+ * line it does not read is split here (lineFields) and given to row(). Holds at
+ * most one unfinished line, refused once it is longer than MAX_LINE_CHARACTERS.
+ */
+export class LineSplitter {
+  private readonly reader: RecordReader;
+  private readonly skip: number;
+  /**
+   * The unfinished line, in pieces, and their length. The array is emptied in place, never
+   * replaced: a new empty array has another shape, which would throw push()'s optimized code away.
+   */
+  private readonly pieces: string[] = [];
+  private pending = 0;
+  /** Number of the line being read. */
+  private line = 1;
+  /** The last text ended with `\r`: a `\n` first in the next one is the second half of `\r\n`. */
+  private afterCarriageReturn = false;
+  private started = false;
+
+  constructor(reader: RecordReader) {
+    this.reader = reader;
+    this.skip = reader.options.skip ?? 0;
+  }
+
+  push(text: string): void {
+    const length = text.length;
+    if (length === 0) return;
+    let from = 0;
+    if (!this.started) {
+      // One byte-order mark is removed, at the start of the text only; any other is a character.
+      this.started = true;
+      if (text.charCodeAt(0) === 0xfeff) from = 1;
+    }
+    if (this.afterCarriageReturn) {
+      this.afterCarriageReturn = false;
+      if (text.charCodeAt(from) === 10) from++;
+    }
+    let lf = text.indexOf('\n', from);
+    let cr = text.indexOf('\r', from);
+    // The scanner is offered the text at its first whole line, and again after each line it did
+    // not read; only the first offer copies text into its memory (the later ones read what is
+    // there), and after MAX_MISSES offers in a row that read nothing, no more of this text is offered.
+    let offers = 0;
+    let misses = 0;
+    let scanned = false;
+    while (lf !== -1 || cr !== -1) {
+      if (!scanned && misses < MAX_MISSES && this.pending === 0 && this.reader.readsRows) {
+        const { next, lines } = this.reader.rowsFrom(text, from, this.line, offers++ === 0);
+        if (lines > 0) {
+          misses = 0;
+          scanned = true;
+          this.line += lines;
+          from = next;
+          // The next line break after the rows read (found again only when it is behind them).
+          if (lf !== -1 && lf < from) lf = text.indexOf('\n', from);
+          if (cr !== -1 && cr < from) cr = text.indexOf('\r', from);
+          continue;
+        }
+        misses++;
+      }
+      scanned = false;
+      const start = from;
+      let end: number;
+      if (cr === -1 || (lf !== -1 && lf < cr)) {
+        end = lf;
+        from = lf + 1;
+        lf = text.indexOf('\n', from);
+      } else {
+        end = cr;
+        from = cr + 1;
+        if (from === length) this.afterCarriageReturn = true;
+        else if (text.charCodeAt(from) === 10) {
+          from++;
+          lf = text.indexOf('\n', from);
+        }
+        cr = text.indexOf('\r', from);
+      }
+      if (this.pending === 0) this.take(text.slice(start, end));
+      else this.take(this.unfinished(text.slice(start, end)));
+    }
+    if (offers > 0) this.reader.textDone();
+    if (from < length) {
+      this.pieces.push(from === 0 ? text : text.slice(from));
+      this.pending += length - from;
+      if (this.pending > MAX_LINE_CHARACTERS) throw longLineError(this.reader.options.source, this.line);
+    }
+  }
+
+  /** The end of the text: its last line, if it has no line break after it. */
+  end(): void {
+    if (this.pending > 0) this.take(this.unfinished(''));
+  }
+
+  private unfinished(last: string): string {
+    this.pieces.push(last);
+    const line = this.pieces.join('');
+    this.pieces.length = 0;
+    this.pending = 0;
+    return line;
+  }
+
+  private take(line: string): void {
+    const number = this.line++;
+    const { source } = this.reader.options;
+    if (line.length > MAX_LINE_CHARACTERS) throw longLineError(source, number);
+    if (line.length === 0) return;
+    const fields = lineFields(line, this.reader.separator, source, number);
+    // Lines to skip are split too, so that the limit on a line's size in bytes holds there.
+    if (number > this.skip && fields.length > 0) this.reader.row(fields, number);
+  }
+}

@@ -1,0 +1,36 @@
+/** How the fields of a line are separated; `whitespace` is runs of spaces and tabs. */
+export type Separator = ',' | ';' | 'whitespace';
+
+/** Longest line read, in characters as it stands; a longer one is refused where it is. */
+export const MAX_LINE_CHARACTERS = 1_000_000;
+
+/**
+ * Choose the separator from the first line that holds only numbers and separators (so a header
+ * written in words cannot mislead it): a semicolon if it has one, else tabs and spaces if it
+ * has a tab, else a comma, else runs of spaces. When `partial`, the text is cut mid-stream and
+ * its last line is not looked at. The look stops before a line longer than MAX_LINE_CHARACTERS,
+ * which is refused where it stands (a stream's head stops there too).
+ */
+export function sniffSeparator(text: string, skip: number, partial = false): Separator {
+  let lines = text.split(/\r\n|\n|\r/, skip + 2000);
+  const long = lines.findIndex(
+    (l, i) => l.length - (i === 0 && l.charCodeAt(0) === 0xfeff ? 1 : 0) > MAX_LINE_CHARACTERS,
+  );
+  if (long !== -1) lines = lines.slice(0, long);
+  else if (partial) lines.pop();
+  let firstText: string | undefined;
+  for (const raw of lines.slice(skip)) {
+    const line = raw.replace(/^\ufeff/, '').trim();
+    if (line === '' || line.startsWith('#')) continue;
+    if (/^[0-9eEdD+\-.,;\s]+$/.test(line) && /\d/.test(line)) return separatorOf(line);
+    firstText ??= line;
+  }
+  return firstText === undefined ? ',' : separatorOf(firstText);
+}
+
+function separatorOf(line: string): Separator {
+  if (line.includes(';')) return ';';
+  if (line.includes('\t')) return 'whitespace';
+  if (line.includes(',')) return ',';
+  return 'whitespace';
+}
