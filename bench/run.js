@@ -10,7 +10,7 @@ import { loadRecord } from '../dist/cli/record-options.js';
 import { formatJson, spectrumToJson } from '../dist/formats/spectrum-json.js';
 import { defaultPeriodsS, logSpaced } from '../dist/oscillator/grid.js';
 import { sweepOscillators } from '../dist/oscillator/sweep.js';
-import { writeFileAtomic } from '../dist/output/atomic.js';
+import { writeFileAtomic } from '../dist/output/output-set.js';
 import { synthesizeRecord } from '../dist/record/synth.js';
 import { RotDPool, rotDSpectra } from '../dist/spectrum/rotd.js';
 import { assembleSpectrum } from '../dist/spectrum/spectrum.js';

@@ -27,7 +27,7 @@ export {
 } from './oscillator/recurrence.js';
 export { type Peaks, type SweepKernel, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
 export { wasmSimdSupported } from './oscillator/wasm/kernel.js';
-export { writeFileAtomic } from './output/atomic.js';
+export { OutputSet, writeFileAtomic } from './output/output-set.js';
 export * from './plot/index.js';
 export { fourierAmplitudeSpectrum, konnoOhmachiSmooth, konnoOhmachiWeight } from './record/fourier.js';
 export { integrateRecord } from './record/integrate.js';

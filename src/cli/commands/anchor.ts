@@ -1,5 +1,4 @@
-import { mkdirSync, readFileSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import {
   ANCHORAGE_SCOPE,
@@ -16,7 +15,7 @@ import { inputError, usageError } from '../../base/errors.js';
 import { anchorageToJson } from '../../formats/anchorage-json.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
 
@@ -114,12 +113,10 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   analysis.assumptions.push(...notes);
   const text = format === 'json' ? formatJson(anchorageToJson(analysis)) : anchorTable(analysis);
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
-  if (options.out !== undefined) writeFileAtomic(options.out, text, inputs);
-  else process.stdout.write(text);
-  if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
-    writeFileAtomic(join(options.svg, 'anchor-plan.svg'), anchorPlanSvg(planInput(analysis)), inputs);
-  }
+  const outputs = new OutputSet(inputs);
+  if (options.svg !== undefined)
+    outputs.folder(options.svg, [['anchor-plan.svg', anchorPlanSvg(planInput(analysis))]], '--svg');
+  outputs.text(options.out, text).write();
 }
 
 function refuseGroundOnFloor(equipment: Equipment, demand: string, notes: string[]): void {

@@ -16,8 +16,7 @@ import {
 } from '../../batch/suite.js';
 import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
 import { formatJson } from '../../formats/spectrum-json.js';
-import { writeFileAtomic } from '../../output/atomic.js';
-import { prepareOutputFolder } from '../../output/folder.js';
+import { OutputSet } from '../../output/output-set.js';
 import {
   addProcessingOptions,
   type ProcessingCliOptions,
@@ -95,7 +94,7 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
   if (all.length === 0) throw usageError(`no file matches ${unmatched.join(', ')}`);
   const names = assignNames(all);
   const mine = shard === null ? all : shardSlice(all, shard);
-  prepareOutputFolder(out);
+  new OutputSet(all).folder(out).write();
 
   const tasks = mine.map((file) => ({ file, name: names.get(file) as string, outDir: out, settings }));
   // The pool and the progress bar are loaded here, not at start-up, so other commands do not pay
@@ -129,8 +128,9 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
       failed.push({ file: outcome.file, error: outcome.error });
     }
   }
+  const outputs = new OutputSet(all);
   if (shard === null) {
-    writeFileAtomic(join(out, 'suite.json'), formatJson(suiteJson(records, failed, settings)), all);
+    outputs.file(join(out, 'suite.json'), formatJson(suiteJson(records, failed, settings)));
   } else {
     const summary: ShardJson = {
       caution: CAUTION,
@@ -141,8 +141,9 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
       records,
       failed,
     };
-    writeFileAtomic(join(out, shardFileName(shard)), formatJson(summary), all);
+    outputs.file(join(out, shardFileName(shard)), formatJson(summary));
   }
+  outputs.write();
   const what = shard === null ? 'suite.json' : shardFileName(shard);
   process.stderr.write(
     `quakesweep: ${records.length} of ${records.length + failed.length} records done; ${join(out, what)}\n`,

@@ -1,5 +1,3 @@
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
@@ -7,7 +5,7 @@ import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { dampingLabel } from '../../formats/spectrum-csv.js';
 import { formatJson, recordToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping, type DampingComparison } from '../../spectrum/damping.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
@@ -60,17 +58,16 @@ export async function runDamping(source: string, options: DampingCliOptions): Pr
       : format === 'csv'
         ? dampingToCsv(spectrum, comparison)
         : dampingTable(spectrum, comparison, added);
+  const outputs = new OutputSet([source]);
   if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
     const figure = dampingFigure({
       record: spectrum.record,
       methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
       comparison,
     });
-    writeFileAtomic(join(options.svg, 'damping.svg'), figure, [source]);
+    outputs.folder(options.svg, [['damping.svg', figure]], '--svg');
   }
-  if (options.out !== undefined) writeFileAtomic(options.out, text, [source]);
-  else process.stdout.write(text);
+  outputs.text(options.out, text).write();
 }
 
 const SOURCES = {

@@ -1,11 +1,9 @@
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, parsePeriods } from '../../oscillator/grid.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../target-options.js';
@@ -46,15 +44,10 @@ export function runDesign(options: DesignCommandOptions): void {
         ? designToCsv(spectrum, periodsS, psaG)
         : designTable(spectrum, periodsS, psaG);
   const inputs = options.table === undefined ? [] : [options.table];
-  if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
-    writeFileAtomic(join(options.svg, 'design.svg'), designFigure({ spectrum, periodsS, psaG }), inputs);
-  }
-  if (options.out !== undefined) {
-    writeFileAtomic(options.out, text, inputs);
-  } else {
-    process.stdout.write(text);
-  }
+  const outputs = new OutputSet(inputs);
+  if (options.svg !== undefined)
+    outputs.folder(options.svg, [['design.svg', designFigure({ spectrum, periodsS, psaG })]], '--svg');
+  outputs.text(options.out, text).write();
 }
 
 /** The periods asked for, each checked against the spectrum's range; or the default grid within it. */

@@ -1,5 +1,3 @@
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
@@ -8,7 +6,7 @@ import { dampingLabel, spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { MIN_PERIOD_S, parseDampings } from '../../oscillator/grid.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { type BuildingMode, type FloorSpectra, floorSpectrum } from '../../spectrum/floor.js';
 import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
@@ -150,8 +148,8 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
   } else {
     text = floorTable(result.spectrum, groundSpectrum, building, assumptions);
   }
+  const outputs = new OutputSet([source]);
   if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
     const figure = floorFigure({
       ground: groundSpectrum,
       floor: result.spectrum,
@@ -160,10 +158,9 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
       building,
       methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
     });
-    writeFileAtomic(join(options.svg, 'floor.svg'), figure, [source]);
+    outputs.folder(options.svg, [['floor.svg', figure]], '--svg');
   }
-  if (options.out !== undefined) writeFileAtomic(options.out, text, [source]);
-  else process.stdout.write(text);
+  outputs.text(options.out, text).write();
 }
 
 function floorTable(

@@ -1,12 +1,10 @@
-import { existsSync, mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { logSpaced } from '../../oscillator/grid.js';
-import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { fourierFigure } from '../../plot/fourier.js';
 import { historiesFigure } from '../../plot/histories.js';
 import { husidFigure } from '../../plot/husid.js';
@@ -75,15 +73,9 @@ export async function runInfo(source: string, options: InfoCliOptions): Promise<
   const predominant = predominantPeriod(record);
   const json = infoToJson(record, measures, predominant);
   const text = format === 'json' ? formatJson(json) : infoTable(json);
-  // Check every output before writing any, so a refusal leaves nothing behind.
-  if (options.out !== undefined) checkOutputPath(options.out, [source]);
-  if (options.svg !== undefined) {
-    if (existsSync(options.svg))
-      for (const name of ['husid.svg', 'fourier.svg']) checkOutputPath(join(options.svg, name), [source]);
-    writeFigures(options.svg, record, measures, smoothing, [source]);
-  }
-  if (options.out !== undefined) writeFileAtomic(options.out, text, [source]);
-  else process.stdout.write(text);
+  const outputs = new OutputSet([source]);
+  if (options.svg !== undefined) outputs.folder(options.svg, figures(record, measures, smoothing), '--svg');
+  outputs.text(options.out, text).write();
 }
 
 function parseSmoothing(text: string): number | null {
@@ -189,41 +181,30 @@ function fixed(value: number, digits: number): string {
   return value.toFixed(digits);
 }
 
-/** histories.svg, husid.svg and fourier.svg, each written atomically. */
-function writeFigures(
-  folder: string,
+/** histories.svg, husid.svg and fourier.svg, by file name. */
+function figures(
   record: GroundRecord,
   m: GroundMotionMeasures,
   smoothingB: number | null,
-  protect: string[],
-): void {
-  mkdirSync(folder, { recursive: true });
+): [string, string][] {
   const about = { name: record.name, source: record.source, processing: record.processing };
-  writeFileAtomic(
-    join(folder, 'histories.svg'),
-    historiesFigure(
-      {
-        ...about,
-        dtS: record.dtS,
-        ...integrateRecord(record),
-        integrationDescription: INFO_METHODS.integration,
-      },
-      { lengthUnit: 'm' },
-    ),
-    protect,
-  );
-  writeFileAtomic(
-    join(folder, 'husid.svg'),
-    husidFigure({
+  const histories = historiesFigure(
+    {
       ...about,
       dtS: record.dtS,
-      husid: husidCurve(record.accelMS2, record.dtS),
-      t5S: m.t5S,
-      t75S: m.t75S,
-      t95S: m.t95S,
-    }),
-    protect,
+      ...integrateRecord(record),
+      integrationDescription: INFO_METHODS.integration,
+    },
+    { lengthUnit: 'm' },
   );
+  const husid = husidFigure({
+    ...about,
+    dtS: record.dtS,
+    husid: husidCurve(record.accelMS2, record.dtS),
+    t5S: m.t5S,
+    t75S: m.t75S,
+    t95S: m.t95S,
+  });
   const fas = fourierAmplitudeSpectrum(record.accelMS2, record.dtS);
   let smoothed: { smoothedHz?: Float64Array; smoothedMS?: Float64Array; smoothingLabel?: string } = {};
   if (smoothingB !== null) {
@@ -240,15 +221,16 @@ function writeFigures(
       smoothingLabel: `Konno–Ohmachi 1998, b = ${smoothingB}`,
     };
   }
-  writeFileAtomic(
-    join(folder, 'fourier.svg'),
-    fourierFigure({
-      ...about,
-      frequenciesHz: fas.frequenciesHz,
-      amplitudeMS: fas.amplitudeMS,
-      ...smoothed,
-      methodDescription: `FFT of ${fas.transformLength} points (zero-padded), amplitude = Δt·|DFT|`,
-    }),
-    protect,
-  );
+  const fourier = fourierFigure({
+    ...about,
+    frequenciesHz: fas.frequenciesHz,
+    amplitudeMS: fas.amplitudeMS,
+    ...smoothed,
+    methodDescription: `FFT of ${fas.transformLength} points (zero-padded), amplitude = Δt·|DFT|`,
+  });
+  return [
+    ['histories.svg', histories],
+    ['husid.svg', husid],
+    ['fourier.svg', fourier],
+  ];
 }

@@ -11,8 +11,7 @@ import { anchorageToJson } from '../../formats/anchorage-json.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../../oscillator/recurrence.js';
-import { writeFileAtomic } from '../../output/atomic.js';
-import { prepareOutputFolder } from '../../output/folder.js';
+import { checkFolder, OutputSet } from '../../output/output-set.js';
 import {
   anchorPlanSvg,
   dampingFigure,
@@ -117,7 +116,7 @@ export async function runReport(
     options,
   );
   const broadeningFraction = broadeningFromOptions(options.broaden);
-  prepareOutputFolder(out);
+  checkFolder({ path: out, option: '--out' });
 
   const raw = await loadRecord(source, options);
   const processed = applyProcessing(raw, options);
@@ -249,7 +248,7 @@ export async function runReport(
   for (const f of figures) files.set(f.file, f.svg);
   input.files = [...files.keys()];
   files.set('report.html', renderReport(input));
-  for (const [name, text] of files) writeFileAtomic(join(out, name), text, inputs);
+  new OutputSet(inputs).folder(out, files).write();
   return join(out, 'report.html');
 }
 

@@ -1,5 +1,3 @@
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
 import { CAUTION, cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
@@ -7,7 +5,7 @@ import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { dampingLabel } from '../../formats/spectrum-csv.js';
 import { formatJson, recordToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { type RotDSpectra, rotDSpectraParallel } from '../../spectrum/rotd.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
@@ -85,13 +83,12 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
       : format === 'csv'
         ? rotdToCsv(spectra)
         : rotdTable(spectra);
+  const outputs = new OutputSet([first, second]);
   if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
     const figure = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] });
-    writeFileAtomic(join(options.svg, 'rotd.svg'), figure, [first, second]);
+    outputs.folder(options.svg, [['rotd.svg', figure]], '--svg');
   }
-  if (options.out !== undefined) writeFileAtomic(options.out, text, [first, second]);
-  else process.stdout.write(text);
+  outputs.text(options.out, text).write();
 }
 
 const toG = (values: Float64Array) => Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);

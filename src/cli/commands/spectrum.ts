@@ -1,6 +1,5 @@
-import { closeSync, existsSync, fstatSync, openSync, readSync, statSync } from 'node:fs';
+import { closeSync, fstatSync, openSync, readSync, statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
-import { join } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
@@ -10,7 +9,7 @@ import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
 import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
 import { plannedSteps, planSweep, type SweepKernel, sweepOscillators } from '../../oscillator/sweep.js';
-import { checkOutputPath, writeFileAtomic } from '../../output/atomic.js';
+import { checkFolder, OutputSet } from '../../output/output-set.js';
 import type { PsaOverlay } from '../../plot/index.js';
 import { integrateRecord } from '../../record/integrate.js';
 import type { GroundRecord } from '../../record/record.js';
@@ -87,7 +86,10 @@ export function registerSpectrum(program: Command): void {
       'length unit for CSV, figures and the terminal summary: m, cm, mm, in, ft',
       'm',
     )
-    .option('--svg <dir>', 'also write psa.svg, sd.svg, psv.svg and tripartite.svg into this existing folder')
+    .option(
+      '--svg <dir>',
+      'also write psa.svg, sd.svg, psv.svg and tripartite.svg into this folder (created if its parent exists)',
+    )
     .option('--axes <axes>', 'axes of the PSA, SD and PSV figures: log or linear', 'log')
     .option(
       '--histories',
@@ -118,11 +120,11 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
     const targeted = applyTarget(swept, target, options);
     const spectrum = targeted.spectrum;
     const record = targeted.record(processed);
-    const protect = options.target === undefined ? [source] : [source, options.target];
-    if (options.out !== undefined) checkOutputPath(options.out, protect);
+    const outputs = new OutputSet(options.target === undefined ? [source] : [source, options.target]);
     if (options.svg !== undefined) {
       const overlays = targeted.overlay === undefined ? [] : [targeted.overlay];
-      await writeFigures(options.svg, record, spectrum, { axes, lengthUnit, overlays }, options, source);
+      const figure = { axes, lengthUnit, overlays };
+      outputs.folder(options.svg, await figures(record, spectrum, figure, options.histories), '--svg');
     }
     const text =
       format === 'json'
@@ -130,11 +132,7 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
         : format === 'csv'
           ? targeted.csv(spectrumToCsv(spectrum, { lengthUnit }))
           : targeted.table(summaryTable(spectrum, lengthUnit));
-    if (options.out !== undefined) {
-      writeFileAtomic(options.out, text, protect);
-    } else {
-      process.stdout.write(text);
-    }
+    outputs.text(options.out, text).write();
   } finally {
     await (closing ?? pool?.close());
   }
@@ -236,21 +234,17 @@ function figureAxes(options: SpectrumCliOptions): 'log' | 'linear' {
   const axes = options.axes ?? 'log';
   if (axes !== 'log' && axes !== 'linear') throw usageError(`--axes '${axes}': use log or linear`);
   if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
-  if (options.svg !== undefined && !(existsSync(options.svg) && statSync(options.svg).isDirectory())) {
-    throw usageError(`--svg ${options.svg}: no such folder (create it first)`);
-  }
+  if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
   return axes;
 }
 
-/** Write the figures into `folder`, each file atomically (the figure modules load only here). */
-async function writeFigures(
-  folder: string,
+/** The figures of --svg, by file name (the figure modules load only here). */
+async function figures(
   record: GroundRecord,
   spectrum: Spectrum,
   figure: { axes: 'log' | 'linear'; lengthUnit: LengthUnit; overlays: PsaOverlay[] },
-  options: SpectrumCliOptions,
-  source: string,
-): Promise<void> {
+  histories: boolean | undefined,
+): Promise<[string, string][]> {
   const { historiesFigure, psaFigure, psvFigure, sdFigure, tripartiteFigure } = await import(
     '../../plot/index.js'
   );
@@ -261,15 +255,13 @@ async function writeFigures(
     ['psv.svg', psvFigure(spectrum, shared)],
     ['tripartite.svg', tripartiteFigure(spectrum, shared)],
   ];
-  if (options.histories) {
+  if (histories) {
     files.push([
       'histories.svg',
       historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: figure.lengthUnit }),
     ]);
   }
-  // Every figure is checked before any is written, so a refused one leaves none behind.
-  for (const [name] of files) checkOutputPath(join(folder, name), [source]);
-  for (const [name, text] of files) writeFileAtomic(join(folder, name), text, [source]);
+  return files;
 }
 
 /** A short table for the terminal: the caution first, then peaks at a few periods. */
