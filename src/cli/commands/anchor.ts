@@ -1,18 +1,13 @@
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import {
-  ANCHORAGE_SCOPE,
-  type AnchorageAnalysis,
-  analyseAnchorage,
-  type ElasticInput,
-  parseDemandChoice,
-} from '../../anchorage/anchorage.js';
+import { analyseAnchorage, type ElasticInput, parseDemandChoice } from '../../anchorage/anchorage.js';
 import { parseAnchorRule } from '../../anchorage/bolt-group.js';
 import { psaAtPeriod, recordPsaForComponent } from '../../anchorage/elastic-demand.js';
-import { centroid, EQUIPMENT_UNITS, type Equipment, parseEquipment } from '../../anchorage/equipment.js';
-import { cautionLines } from '../../base/caution.js';
+import { EQUIPMENT_UNITS, type Equipment, parseEquipment } from '../../anchorage/equipment.js';
 import { inputError, usageError } from '../../base/errors.js';
 import { anchorageToJson } from '../../formats/anchorage-json.js';
+import { anchorPlanInput } from '../../formats/anchorage-plan.js';
+import { anchorTable } from '../../formats/anchorage-table.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { OutputSet } from '../../output/output-set.js';
@@ -115,7 +110,7 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
   const outputs = new OutputSet(inputs);
   if (options.svg !== undefined)
-    outputs.folder(options.svg, [['anchor-plan.svg', anchorPlanSvg(planInput(analysis))]], '--svg');
+    outputs.folder(options.svg, [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]], '--svg');
   outputs.text(options.out, text).write();
 }
 
@@ -191,113 +186,4 @@ export function readSpectrumFile(file: string, equipment: Equipment): SpectrumFi
       `${broadening ? `, peaks broadened ±${broadening['fraction']}` : ', not broadened'}; this tool does not check that Γφ belongs to the floor at z.`
     : '';
   return { value, isFloor, floorNote };
-}
-
-export function planInput(analysis: AnchorageAnalysis) {
-  const e = analysis.equipment;
-  const system = EQUIPMENT_UNITS[e.units];
-  const l = (m: number) => m / system.mPerLength;
-  const a = analysis.anchors;
-  return {
-    title: `${e.name}: anchor plan and worst tensions`,
-    forceUnit: system.force,
-    lengthUnit: system.length,
-    anchors: a.perAnchor.map((p) => ({ x: l(p.x), y: l(p.y), tension: p.tension / system.kNPerForce })),
-    governingAnchor: a.governingAnchor,
-    directionDeg: a.maxTensionDirectionDeg,
-    cgPlan: [l(e.cgPlanM[0]), l(e.cgPlanM[1])] as [number, number],
-    centroid: centroid(e.anchorsM).map(l) as [number, number],
-    subtitle: [
-      `Horizontal force for the anchors ${(analysis.horizontalForAnchorsKN / system.kNPerForce).toPrecision(4)} ${system.force} ` +
-        `(${analysis.governing === 'code' ? 'ASCE 7-16 §13.3.1 code force' : 'record elastic demand'}) at h_cg = ${Number(l(e.cgHeightM).toPrecision(4))} ${system.length}; W_p = ${(e.weightKN / system.kNPerForce).toPrecision(4)} ${system.force}`,
-      `Method: rigid base, elastic bolt group, anchor rule ${a.rule}${a.rule === 'projected' ? ' (T_i = M·d_i/Σd_j² − D/n, neutral axis perpendicular to the shaking)' : ' (general elastic solution, moment equilibrium about both plan axes)'}`,
-    ],
-    notes: [
-      'Each anchor shows its own worst tension over every direction of shaking (0–360°), not the tensions of one direction; the arrow is the direction of the horizontal force on the equipment that gives the governing anchor its worst tension, degrees counter-clockwise from +x.',
-      'Demands only: anchor capacities (steel, concrete breakout, pull-out, edge distances, embedment) are not checked.',
-    ],
-  };
-}
-
-/** The terminal report: the caution first, then scope, forces, anchors and assumptions. */
-export function anchorTable(analysis: AnchorageAnalysis): string {
-  const e = analysis.equipment;
-  const system = EQUIPMENT_UNITS[e.units];
-  const f = (kN: number) => (kN / system.kNPerForce).toPrecision(4);
-  const l = (m: number) => Number((m / system.mPerLength).toPrecision(4)).toString();
-  const unit = system.force;
-  const out: string[] = [];
-  for (const line of cautionLines(92)) out.push(`! ${line}`);
-  out.push('');
-  out.push(...wrapText(ANCHORAGE_SCOPE, 92, 'scope     ', '          '));
-  out.push('');
-  out.push(`equipment ${e.name} (${e.units}: ${unit}, ${system.length})`);
-  out.push(
-    `          W_p ${f(e.weightKN)} ${unit}, h_cg ${l(e.cgHeightM)} ${system.length}, ${e.anchorsM.length} anchors, ` +
-      `T ${e.periodS === 'rigid' ? 'rigid' : `${e.periodS} s`}, ζ ${e.damping}, z ${l(e.zM)} / h ${l(e.hM)} ${system.length}`,
-  );
-  out.push(`          a_p ${e.ap}, R_p ${e.rp}, I_p ${e.ip}, S_DS ${e.sds} g, Ω₀ ${e.omega0 ?? 'not given'}`);
-  out.push('');
-  const c = analysis.code;
-  out.push('horizontal');
-  out.push(
-    `  F_p code (ASCE 7-16 Eq. 13.3-1)   ${f(c.fpFormula).padStart(10)} ${unit}   bounds ${f(c.fpMin)} to ${f(c.fpMax)} ${unit}`,
-  );
-  out.push(
-    `  F_p code, bounded                ${f(c.fp).padStart(10)} ${unit}   (${c.bound}; z/h = ${c.heightRatio.toFixed(3)})`,
-  );
-  if (e.omega0 !== null)
-    out.push(`  Ω₀·F_p                           ${f(analysis.codeForAnchorsKN).padStart(10)} ${unit}`);
-  if (analysis.elasticKN !== null && analysis.elastic !== null) {
-    out.push(
-      `  record elastic PSA·W_p           ${f(analysis.elasticKN).padStart(10)} ${unit}   (PSA ${analysis.elastic.psaG.toPrecision(4)} g)`,
-    );
-  } else {
-    out.push('  record elastic PSA·W_p                  —      (no ground motion used)');
-  }
-  out.push(
-    `  for the anchors (--demand ${analysis.demand})   ${f(analysis.horizontalForAnchorsKN).padStart(10)} ${unit}   governing: ${analysis.governing}`,
-  );
-  out.push(`vertical  E_v = ±0.2 S_DS W_p = ${f(analysis.verticalKN)} ${unit}`);
-  out.push('');
-  const a = analysis.anchors;
-  out.push(
-    `anchors (rule ${a.rule}${a.rule === 'projected' ? '; --anchor-rule biaxial for the general elastic solution' : '; --anchor-rule projected, the default, is more conservative'})`,
-  );
-  out.push('  worst over every direction of shaking; direction of the force, ° counter-clockwise from +x');
-  out.push(
-    `  ${'#'.padStart(3)} ${`x ${system.length}`.padStart(9)} ${`y ${system.length}`.padStart(9)} ${`tension ${unit}`.padStart(13)} ${'at °'.padStart(7)} ${`shear ${unit}`.padStart(11)} ${'at °'.padStart(7)}`,
-  );
-  a.perAnchor.forEach((p, i) => {
-    out.push(
-      `  ${String(i + 1).padStart(3)} ${l(p.x).padStart(9)} ${l(p.y).padStart(9)} ${f(p.tension).padStart(13)} ${p.tensionDirectionDeg.toFixed(1).padStart(7)} ${f(p.shear).padStart(11)} ${p.shearDirectionDeg.toFixed(1).padStart(7)}${i === a.governingAnchor ? '  governs' : ''}`,
-    );
-  });
-  out.push(
-    `  max tension ${f(a.maxTension)} ${unit} at ${a.maxTensionDirectionDeg.toFixed(1)}° (anchor ${a.governingAnchor + 1}); max shear ${f(a.maxShear)} ${unit}`,
-  );
-  if (a.maxTension === 0)
-    out.push('  no anchor goes into tension: the counteracting dead load exceeds the overturning.');
-  out.push('');
-  out.push('method and assumptions');
-  for (const line of analysis.assumptions) out.push(...wrapText(line, 92, '  - ', '    '));
-  return `${out.join('\n')}\n`;
-}
-
-/** Wrap a paragraph at `width` columns, the first line after `first`, the others after `rest`. */
-export function wrapText(text: string, width: number, first: string, rest: string): string[] {
-  const lines: string[] = [];
-  let line = first;
-  let fresh = true;
-  for (const word of text.split(' ')) {
-    if (!fresh && line.length + 1 + word.length > width) {
-      lines.push(line);
-      line = rest + word;
-    } else {
-      line = fresh ? line + word : `${line} ${word}`;
-    }
-    fresh = false;
-  }
-  lines.push(line);
-  return lines;
 }

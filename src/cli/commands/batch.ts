@@ -6,6 +6,8 @@ import { QuakesweepError, usageError } from '../../base/errors.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
 import { parseShard, type Shard, shardSlice } from '../../batch/shard.js';
+import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import {
   SHARD_FORMAT,
   type ShardJson,
@@ -13,9 +15,7 @@ import {
   type SuiteRecord,
   shardFileName,
   suiteJson,
-} from '../../batch/suite.js';
-import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
-import { formatJson } from '../../formats/spectrum-json.js';
+} from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
 import {
   addProcessingOptions,

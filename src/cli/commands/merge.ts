@@ -3,14 +3,14 @@ import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { inputError, usageError } from '../../base/errors.js';
 import { sanitiseName } from '../../batch/names.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import {
   SHARD_FORMAT,
   type ShardJson,
   type SuiteFailure,
   type SuiteRecord,
   suiteJson,
-} from '../../batch/suite.js';
-import { formatJson } from '../../formats/spectrum-json.js';
+} from '../../formats/suite.js';
 import { checkFolder, OutputSet } from '../../output/output-set.js';
 
 export function registerMerge(program: Command): void {

@@ -8,6 +8,9 @@ import { usageError } from '../../base/errors.js';
 import { parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { VERSION } from '../../base/version.js';
 import { anchorageToJson } from '../../formats/anchorage-json.js';
+import { anchorPlanInput } from '../../formats/anchorage-plan.js';
+import { floorAssumptions } from '../../formats/floor.js';
+import { INFO_METHODS } from '../../formats/info.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../../oscillator/recurrence.js';
@@ -33,9 +36,7 @@ import { responseSpectrum } from '../../spectrum/spectrum.js';
 import { addProcessingOptions, applyProcessing } from '../processing-options.js';
 import { addRecordOptions, loadRecord, positiveNumber } from '../record-options.js';
 import { addTargetOptions, applyTarget, loadTarget } from '../target-options.js';
-import { planInput } from './anchor.js';
-import { broadeningFromOptions, buildingFromOptions, floorAssumptions } from './floor.js';
-import { INFO_METHODS } from './info.js';
+import { broadeningFromOptions, buildingFromOptions } from './floor.js';
 import { rotdThreads } from './rotd.js';
 import { addGridOptions, gridFromOptions, type SpectrumCliOptions } from './spectrum.js';
 
@@ -224,7 +225,7 @@ export async function runReport(
       {
         file: `anchor-plan-${n}.svg`,
         caption: `Anchor plan of equipment ${n} with the worst tensions`,
-        svg: anchorPlanSvg(planInput(analysis)),
+        svg: anchorPlanSvg(anchorPlanInput(analysis)),
       },
     ];
     if (demand.floor !== undefined) {
