@@ -68,7 +68,10 @@ export {
 export { scaleToTarget } from './spectrum/scale.js';
 export {
   assembleSpectrum,
+  PARALLEL_MIN_OSCILLATOR_STEPS,
+  type ParallelSpectrumOptions,
   responseSpectrum,
+  responseSpectrumParallel,
   type Spectrum,
   type SpectrumCurve,
   type SpectrumOptions,
