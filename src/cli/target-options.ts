@@ -1,20 +1,18 @@
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import { usageError } from '../base/errors.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import type { GroundRecord } from '../record/record.js';
-import { asce716Spectrum, coversPeriod, type DesignSpectrum, ec8Spectrum } from '../spectrum/design.js';
+import { asce716Spectrum, type DesignSpectrum, ec8Spectrum } from '../spectrum/design.js';
 import { readSpectrumTable, tableSpectrum } from '../spectrum/design-table.js';
+import { parseScaleRange } from '../spectrum/scale.js';
+import type { Spectrum } from '../spectrum/spectrum.js';
 import {
-  parseScaleRange,
-  type ScaleResult,
-  scaleRecord,
-  scaleSpectrum,
-  scaleStep,
-  scaleToTarget,
-} from '../spectrum/scale.js';
-import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
-import { parseDampingRatio, parseEc8Ground, parseEc8Type, parseTargetSpec } from '../spectrum/target.js';
+  fitTarget,
+  parseDampingRatio,
+  parseEc8Ground,
+  parseEc8Type,
+  parseTargetSpec,
+  type TargetFit,
+} from '../spectrum/target.js';
 
 /** The options that choose a design spectrum (the `design` command). */
 export interface DesignCliOptions {
@@ -129,119 +127,13 @@ export function loadTarget(options: TargetCliOptions): DesignSpectrum | undefine
   return spec.kind === 'code' ? spec.spectrum : loadTableSpectrum(spec.path);
 }
 
-/** What a target adds to the outputs of `spectrum`. */
-export interface TargetOutcome {
-  /** The spectrum to write: scaled with --apply-scale, as it was otherwise. */
-  spectrum: Spectrum;
-  /** Extra keys for the JSON document. */
-  json: { [key: string]: unknown };
-  /** Add the target column and the scaling lines to the CSV text. */
-  csv(text: string): string;
-  /** Add the target and scaling lines to the terminal summary. */
-  table(text: string): string;
-  /** The target as a curve for the PSA and four-way figures (periods it covers only). */
-  overlay?: { label: string; periodsS: number[]; psaG: number[] };
-  /** The record as downstream outputs should see it: scaled with --apply-scale. */
-  record(record: GroundRecord): GroundRecord;
-}
-
-const NO_TARGET: Omit<TargetOutcome, 'spectrum'> = {
-  json: {},
-  csv: (text) => text,
-  table: (text) => text,
-  record: (record) => record,
-};
-
-/** Fit the target to the spectrum (and scale it with --apply-scale). */
+/** Fit the target to the spectrum (--scale-range), scaling it with --apply-scale; no target, no fit. */
 export function applyTarget(
   spectrum: Spectrum,
   target: DesignSpectrum | undefined,
   options: TargetCliOptions,
-): TargetOutcome {
-  if (target === undefined) return { spectrum, ...NO_TARGET };
-  const curve = targetCurve(spectrum, target);
-  const recordPsaG = curve.psaMS2.map((value) => value / STANDARD_GRAVITY_MS2);
+): { fit?: TargetFit; spectrum: Spectrum } {
+  if (target === undefined) return { spectrum };
   const rangeS = options.scaleRange === undefined ? undefined : parseScaleRange(options.scaleRange);
-  const scaling = scaleToTarget(spectrum.periodsS, recordPsaG, target, { rangeS });
-  const applied = options.applyScale === true;
-  const out = applied ? scaleSpectrum(spectrum, scaling.factor, scaleStep(scaling, target)) : spectrum;
-  const targetG = Array.from(spectrum.periodsS, (t) => (coversPeriod(target, t) ? target.psaG(t) : null));
-  return {
-    spectrum: out,
-    json: {
-      target: {
-        code: target.code,
-        description: target.description,
-        parameters: target.parameters,
-        damping: target.damping ?? null,
-        psa_g: targetG,
-      },
-      scaling: {
-        factor: scaling.factor,
-        range_s: scaling.rangeS,
-        period_count: scaling.periodCount,
-        mean_ratio: scaling.meanRatio,
-        min_ratio: scaling.minRatio,
-        max_ratio: scaling.maxRatio,
-        criterion: scaling.criterion,
-        damping: curve.damping,
-        applied,
-      },
-    },
-    csv: (text) => csvWithTarget(text, target, targetG, scaling, applied),
-    table: (text) => `${text}\n${scalingLines(target, scaling, curve.damping, applied).join('\n')}\n`,
-    overlay: {
-      label: `target: ${target.description.split(': ')[0]}`,
-      periodsS: Array.from(spectrum.periodsS).filter((_, i) => targetG[i] !== null),
-      psaG: targetG.filter((value): value is number => value !== null),
-    },
-    record: (record) => (applied ? scaleRecord(record, scaling.factor, scaleStep(scaling, target)) : record),
-  };
-}
-
-/**
- * The record curve compared with the target: the one at the target's damping (5% for ASCE 7, ξ
- * for Eurocode 8); for a table, which states none, the 5% curve, or the only curve.
- */
-function targetCurve(spectrum: Spectrum, target: DesignSpectrum): SpectrumCurve {
-  const wanted = target.damping ?? (spectrum.curves.length === 1 ? spectrum.curves[0].damping : 0.05);
-  const curve = spectrum.curves.find((c) => Math.abs(c.damping - wanted) < 1e-12);
-  if (curve === undefined) {
-    throw usageError(
-      `the target is for ${Number((100 * wanted).toPrecision(6))}% damping: include it in --damping`,
-    );
-  }
-  return curve;
-}
-
-function scalingLines(target: DesignSpectrum, s: ScaleResult, damping: number, applied: boolean): string[] {
-  const f = (value: number) => value.toPrecision(4);
-  return [
-    `target  ${target.description}`,
-    `scale   × ${f(s.factor)} to match it at ${Number((100 * damping).toPrecision(6))}% over ${s.rangeS[0]}–${s.rangeS[1]} s (${s.periodCount} periods)${applied ? ', applied to every number above' : ', not applied (--apply-scale)'}`,
-    `        after scaling, record/target: mean ${f(s.meanRatio)}, min ${f(s.minRatio)}, max ${f(s.maxRatio)}`,
-    `        criterion: ${s.criterion}`,
-  ];
-}
-
-function csvWithTarget(
-  text: string,
-  target: DesignSpectrum,
-  targetG: (number | null)[],
-  s: ScaleResult,
-  applied: boolean,
-): string {
-  const lines = text.replace(/\n$/, '').split('\n');
-  const header = lines.findIndex((line) => !line.startsWith('#'));
-  const notes = [
-    `# target: ${target.description.replace(/[\r\n]+/g, ' ')}`,
-    `# scaling: factor ${s.factor} over ${s.rangeS[0]}-${s.rangeS[1]} s (${s.periodCount} periods); record/target after scaling mean ${s.meanRatio} min ${s.minRatio} max ${s.maxRatio}; ${applied ? 'applied' : 'not applied'}`,
-    `# scaling criterion: ${s.criterion}`,
-  ];
-  const body = lines.slice(header).map((line, i) => {
-    if (i === 0) return `${line},target_psa_g`;
-    const value = targetG[i - 1];
-    return `${line},${value === null || value === undefined ? '' : String(value)}`;
-  });
-  return `${[...lines.slice(0, header), ...notes, ...body].join('\n')}\n`;
+  return fitTarget(spectrum, target, { rangeS, apply: options.applyScale === true });
 }

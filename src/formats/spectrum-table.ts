@@ -2,10 +2,12 @@ import { cautionLines } from '../base/caution.js';
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
+import type { TargetFit } from '../spectrum/target.js';
 import { dampingLabel } from './spectrum-csv.js';
+import { targetTableLines } from './target.js';
 
 /** A short table for the terminal: the caution first, then peaks at a few periods. */
-export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit): string {
+export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit, target?: TargetFit): string {
   const out: string[] = [];
   for (const line of cautionLines(92)) out.push(`! ${line}`);
   out.push('');
@@ -42,6 +44,7 @@ export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit): string
     );
   }
   out.push(`(${spectrum.periodsS.length} periods; --format json or csv for all of them)`);
+  if (target !== undefined) out.push('', ...targetTableLines(target));
   return `${out.join('\n')}\n`;
 }
 

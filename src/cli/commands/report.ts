@@ -13,6 +13,7 @@ import { floorAssumptions } from '../../formats/floor.js';
 import { INFO_METHODS } from '../../formats/info.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
+import { targetToJson } from '../../formats/target.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../../oscillator/recurrence.js';
 import { checkFolder, OutputSet } from '../../output/output-set.js';
 import {
@@ -28,11 +29,12 @@ import {
 import { integrateRecord } from '../../record/integrate.js';
 import { groundMotionMeasures } from '../../record/measures.js';
 import type { GroundRecord } from '../../record/record.js';
-import { type ReportFigure, type ReportInput, type ReportTarget, renderReport } from '../../report/report.js';
+import { type ReportFigure, type ReportInput, renderReport } from '../../report/report.js';
 import { compareDamping } from '../../spectrum/damping.js';
 import { type BuildingMode, floorSpectrum } from '../../spectrum/floor.js';
 import { rotDSpectraParallel } from '../../spectrum/rotd.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
+import { targetOverlay, targetRecord } from '../../spectrum/target.js';
 import { addProcessingOptions, applyProcessing } from '../processing-options.js';
 import { addRecordOptions, loadRecord, positiveNumber } from '../record-options.js';
 import { addTargetOptions, applyTarget, loadTarget } from '../target-options.js';
@@ -121,19 +123,18 @@ export async function runReport(
 
   const raw = await loadRecord(source, options);
   const processed = applyProcessing(raw, options);
-  const targeted = applyTarget(responseSpectrum(processed, grid), target, options);
-  const spectrum = targeted.spectrum;
-  const record = targeted.record(processed);
+  const { fit, spectrum } = applyTarget(responseSpectrum(processed, grid), target, options);
+  const record = targetRecord(processed, fit);
   const inputs = [source, ...(options.pair ? [options.pair] : []), ...equipment.map((e) => e.file)];
   const files = new Map<string, string>();
-  files.set('spectra.json', formatJson({ ...spectrumToJson(spectrum), ...targeted.json }));
-  files.set('spectra.csv', targeted.csv(spectrumToCsv(spectrum, { lengthUnit })));
+  files.set('spectra.json', formatJson({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }));
+  files.set('spectra.csv', spectrumToCsv(spectrum, { lengthUnit, target: fit }));
 
   const shared = {
     axes: axes as 'log' | 'linear',
     lengthUnit,
     methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
-    overlays: targeted.overlay === undefined ? [] : [targeted.overlay],
+    overlays: fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)],
   };
   const spectrumFigures: ReportFigure[] = [
     { file: 'psa.svg', caption: 'Pseudo-acceleration spectra PSA', svg: psaFigure(spectrum, shared) },
@@ -164,7 +165,7 @@ export async function runReport(
     measures: groundMotionMeasures(record),
     lengthUnit,
     spectrumFigures,
-    target: reportTarget(targeted.json),
+    target: fit,
     anchorage: [],
     methods: methodStatements(spectrum.method),
     version: VERSION,
@@ -251,25 +252,6 @@ export async function runReport(
   files.set('report.html', renderReport(input));
   new OutputSet(inputs).folder(out, files).write();
   return join(out, 'report.html');
-}
-
-function reportTarget(json: { [key: string]: unknown }): ReportTarget | undefined {
-  const t = json['target'] as { description: string; psa_g: (number | null)[] } | undefined;
-  const s = json['scaling'] as Record<string, unknown> | undefined;
-  if (t === undefined || s === undefined) return undefined;
-  return {
-    description: t.description,
-    psaG: t.psa_g,
-    factor: s['factor'] as number,
-    rangeS: s['range_s'] as [number, number],
-    periodCount: s['period_count'] as number,
-    meanRatio: s['mean_ratio'] as number,
-    minRatio: s['min_ratio'] as number,
-    maxRatio: s['max_ratio'] as number,
-    criterion: s['criterion'] as string,
-    damping: s['damping'] as number,
-    applied: s['applied'] as boolean,
-  };
 }
 
 /** The building mode, when any equipment is above the base and the options describe one. */

@@ -4,6 +4,7 @@ import { type LengthUnit, parseLengthUnit } from '../../base/units.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { summaryTable } from '../../formats/spectrum-table.js';
+import { targetToJson } from '../../formats/target.js';
 import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
 import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
 import type { SweepKernel } from '../../oscillator/sweep.js';
@@ -12,6 +13,7 @@ import type { PsaOverlay } from '../../plot/index.js';
 import { integrateRecord } from '../../record/integrate.js';
 import type { GroundRecord } from '../../record/record.js';
 import { responseSpectrumParallel, type Spectrum } from '../../spectrum/spectrum.js';
+import { targetOverlay, targetRecord } from '../../spectrum/target.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
 import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../target-options.js';
@@ -109,21 +111,20 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const sweep = sweepChoice(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
-  const targeted = applyTarget(swept, target, options);
-  const spectrum = targeted.spectrum;
-  const record = targeted.record(processed);
+  const { fit, spectrum } = applyTarget(swept, target, options);
+  const record = targetRecord(processed, fit);
   const outputs = new OutputSet(options.target === undefined ? [source] : [source, options.target]);
   if (options.svg !== undefined) {
-    const overlays = targeted.overlay === undefined ? [] : [targeted.overlay];
+    const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
     const figure = { axes, lengthUnit, overlays };
     outputs.folder(options.svg, await figures(record, spectrum, figure, options.histories), '--svg');
   }
   const text =
     format === 'json'
-      ? formatJson({ ...spectrumToJson(spectrum), ...targeted.json })
+      ? formatJson({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) })
       : format === 'csv'
-        ? targeted.csv(spectrumToCsv(spectrum, { lengthUnit }))
-        : targeted.table(summaryTable(spectrum, lengthUnit));
+        ? spectrumToCsv(spectrum, { lengthUnit, target: fit })
+        : summaryTable(spectrum, lengthUnit, fit);
   outputs.text(options.out, text).write();
 }
 
