@@ -6,7 +6,7 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { loadRecord } from '../dist/cli/record-options.js';
+import { loadRecord } from '../dist/cli/options/record.js';
 import { formatJson, spectrumToJson } from '../dist/formats/spectrum-json.js';
 import { defaultPeriodsS, logSpaced } from '../dist/oscillator/grid.js';
 import { sweepOscillators } from '../dist/oscillator/sweep.js';

@@ -47,6 +47,8 @@ export {
   peakGroundAcceleration,
 } from './record/record.js';
 export { type SynthOptions, synthesizeRecord } from './record/synth.js';
+export { assembleReport, type ReportRequest } from './report/assemble.js';
+export { type ReportInput, renderReport } from './report/report.js';
 export { compareDamping, newmarkHallFactors } from './spectrum/damping.js';
 export {
   asce716Spectrum,
@@ -72,8 +74,10 @@ export {
   type ParallelSpectrumOptions,
   responseSpectrum,
   responseSpectrumParallel,
+  rotdThreads,
   type Spectrum,
   type SpectrumCurve,
   type SpectrumOptions,
 } from './spectrum/spectrum.js';
+export { fitTarget, type TargetFit, targetOverlay, targetRecord } from './spectrum/target.js';
 export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './threads/team.js';

@@ -102,6 +102,18 @@ export async function responseSpectrumParallel(
   }
 }
 
+/**
+ * Oscillator-steps (periods × dampings × samples, each stepping every rotation) from which RotD
+ * is dealt out over threads: a worker costs about as much to start as 1,000,000 such steps of the
+ * WebAssembly loop.
+ */
+export const ROTD_PARALLEL_MIN_STEPS = 1_000_000;
+
+/** Threads for a RotD job: all cores (undefined) from ROTD_PARALLEL_MIN_STEPS, else this one alone. */
+export function rotdThreads(periods: number, dampings: number, samples: number): number | undefined {
+  return periods * dampings * samples >= ROTD_PARALLEL_MIN_STEPS ? undefined : 1;
+}
+
 /** Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). */
 export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
   const n = peaks.periodsS.length;

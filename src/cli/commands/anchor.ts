@@ -12,7 +12,8 @@ import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { OutputSet } from '../../output/output-set.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan.js';
-import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
+import { outputFormat } from '../options/format.js';
+import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
 export interface AnchorCliOptions extends RecordCliOptions {
   equipment?: string;
@@ -67,8 +68,7 @@ export function registerAnchor(program: Command): void {
 
 export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   if (options.equipment === undefined) throw usageError('--equipment <file> is required');
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'table'].includes(format)) throw usageError(`--format '${format}': use json or table`);
+  const format = outputFormat(options, ['json', 'table'], 'json or table');
   const records = options.record ?? [];
   if (records.length > 0 && options.spectrum !== undefined) {
     throw usageError('give --record or --spectrum, not both');

@@ -17,18 +17,18 @@ import {
   suiteJson,
 } from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import {
   addProcessingOptions,
   type ProcessingCliOptions,
   processingPlanFromOptions,
-} from '../processing-options.js';
+} from '../options/processing.js';
 import {
   addRecordOptions,
   positiveInteger,
   type RecordCliOptions,
   recordReadOptions,
-} from '../record-options.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions } from './spectrum.js';
+} from '../options/record.js';
 
 export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
   out?: string;

@@ -1,5 +1,4 @@
 import type { Command } from 'commander';
-import { usageError } from '../../base/errors.js';
 import { dampingTable, dampingToCsv, dampingToJson } from '../../formats/damping.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
@@ -7,8 +6,9 @@ import { OutputSet } from '../../output/output-set.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping } from '../../spectrum/damping.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
-import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions } from './spectrum.js';
+import { outputFormat } from '../options/format.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
 export interface DampingCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
@@ -42,8 +42,7 @@ export function registerDamping(program: Command): void {
 }
 
 export async function runDamping(source: string, options: DampingCliOptions): Promise<void> {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   const grid = gridFromOptions(options);
   const added = !Array.from(grid.dampings).some((d) => Math.abs(d - REFERENCE_DAMPING) < 1e-12);
   const dampings = added ? Float64Array.from([...grid.dampings, REFERENCE_DAMPING]).sort() : grid.dampings;

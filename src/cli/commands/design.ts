@@ -1,12 +1,12 @@
 import type { Command } from 'commander';
-import { usageError } from '../../base/errors.js';
 import { designTable, designToCsv, designToJson } from '../../formats/design.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, parsePeriods } from '../../oscillator/grid.js';
 import { OutputSet } from '../../output/output-set.js';
 import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
-import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../target-options.js';
+import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../options/design.js';
+import { outputFormat } from '../options/format.js';
 
 export interface DesignCommandOptions extends DesignCliOptions {
   periods?: string;
@@ -32,8 +32,7 @@ export function registerDesign(program: Command): void {
 }
 
 export function runDesign(options: DesignCommandOptions): void {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   const spectrum = designFromOptions(options);
   const periodsS = designPeriods(spectrum, options.periods);
   const psaG = designPsaG(spectrum, periodsS);

@@ -1,18 +1,20 @@
 import type { Command } from 'commander';
-import { usageError } from '../../base/errors.js';
 import { floorAssumptions, floorTable, floorToJson } from '../../formats/floor.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson } from '../../formats/spectrum-json.js';
-import { MIN_PERIOD_S, parseDampings } from '../../oscillator/grid.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { OutputSet } from '../../output/output-set.js';
 import { floorFigure } from '../../plot/floor-figure.js';
-import { type BuildingMode, floorSpectrum } from '../../spectrum/floor.js';
+import { floorSpectrum } from '../../spectrum/floor.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
-import { addRecordOptions, loadRecord } from '../record-options.js';
-import { addGridOptions, gridFromOptions, type SpectrumCliOptions } from './spectrum.js';
+import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
+import { outputFormat } from '../options/format.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
-export interface FloorCliOptions extends SpectrumCliOptions {
+export interface FloorCliOptions extends RecordCliOptions, GridCliOptions, BuildingCliOptions {
+  format?: string;
+  out?: string;
   buildingPeriod?: string;
   buildingDamping?: string;
   modalFactor?: string;
@@ -43,44 +45,11 @@ export function registerFloor(program: Command): void {
     });
 }
 
-export function buildingFromOptions(options: FloorCliOptions): BuildingMode {
-  if (options.buildingPeriod === undefined) throw usageError('--building-period <seconds> is required');
-  if (options.modalFactor === undefined)
-    throw usageError(
-      '--modal-factor <Γφ> is required (1 is the base of a rigid building; about 1.3 to 1.6 at the roof of a regular one)',
-    );
-  const periodS = Number(options.buildingPeriod);
-  if (!(periodS >= MIN_PERIOD_S) || !Number.isFinite(periodS)) {
-    throw usageError(
-      `--building-period must be a number of seconds ≥ ${MIN_PERIOD_S}, got '${options.buildingPeriod}'`,
-    );
-  }
-  const modalFactor = Number(options.modalFactor);
-  if (options.modalFactor.trim() === '' || !Number.isFinite(modalFactor)) {
-    throw usageError(`--modal-factor must be a number, got '${options.modalFactor}'`);
-  }
-  const dampings = parseDampings(options.buildingDamping ?? '5%');
-  if (dampings.length !== 1 || !(dampings[0] < 1))
-    throw usageError('--building-damping takes one ratio below 1');
-  return { periodS, damping: dampings[0], modalFactor };
-}
-
-/** `--broaden [b]`: null when absent, 0.15 when given bare, else the fraction 0 ≤ b < 1. */
-export function broadeningFromOptions(value: string | boolean | undefined): number | null {
-  if (value === undefined || value === false) return null;
-  if (value === true) return 0.15;
-  const b = Number(value);
-  if (value.trim() === '' || !(b >= 0) || !(b < 1))
-    throw usageError(`--broaden must be a fraction 0 ≤ b < 1, got '${value}'`);
-  return b;
-}
-
 export async function runFloor(source: string, options: FloorCliOptions): Promise<void> {
   const grid = gridFromOptions(options);
   const building = { ...buildingFromOptions(options), method: grid.method };
   const broadening = broadeningFromOptions(options.broaden);
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   const ground = await loadRecord(source, options);
   const result = floorSpectrum(ground, building, grid, broadening);
   const groundSpectrum = responseSpectrum(ground, grid);

@@ -1,5 +1,4 @@
 import type { Command } from 'commander';
-import { usageError } from '../../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { INFO_METHODS, infoTable, infoToJson } from '../../formats/info.js';
 import { formatJson } from '../../formats/spectrum-json.js';
@@ -17,8 +16,9 @@ import { integrateRecord } from '../../record/integrate.js';
 import { type GroundMotionMeasures, groundMotionMeasures, husidCurve } from '../../record/measures.js';
 import type { GroundRecord } from '../../record/record.js';
 import { predominantPeriod } from '../../spectrum/predominant.js';
-import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
-import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
+import { outputFormat } from '../options/format.js';
+import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
+import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
 
 export interface InfoCliOptions extends RecordCliOptions, ProcessingCliOptions {
   format?: string;
@@ -51,8 +51,7 @@ export function registerInfo(program: Command): void {
 }
 
 export async function runInfo(source: string, options: InfoCliOptions): Promise<void> {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'table'].includes(format)) throw usageError(`--format '${format}': use table or json`);
+  const format = outputFormat(options, ['json', 'table'], 'table or json');
   const thresholdG = positiveNumber('--bracket-threshold', options.bracketThreshold ?? '0.05');
   const smoothing = parseSmoothing(options.smoothing ?? String(KONNO_OHMACHI_DEFAULT_B));
   const record = applyProcessing(await loadRecord(source, options), options);

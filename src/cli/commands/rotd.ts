@@ -6,8 +6,11 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { OutputSet } from '../../output/output-set.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { rotDSpectraParallel } from '../../spectrum/rotd.js';
-import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions, parseThreads } from './spectrum.js';
+import { rotdThreads } from '../../spectrum/spectrum.js';
+import { outputFormat } from '../options/format.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
+import { parseThreads } from '../options/threads.js';
 
 export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
@@ -15,27 +18,6 @@ export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
   angleStep?: string;
   svg?: string;
   threads?: string;
-}
-
-/**
- * Oscillator-steps (periods × dampings × samples, each stepping 180 rotations) from which RotD is
- * dealt out over threads: a worker costs 50–80 ms to start (module and kernel included), about
- * 1,000,000 such steps of the WebAssembly loop.
- */
-export const ROTD_PARALLEL_MIN_STEPS = 1_000_000;
-
-/**
- * Threads for a RotD job of `periods` × `dampings` oscillators over `samples` samples: the
- * --threads given, else all cores (undefined) for a large job and one for a small one.
- */
-export function rotdThreads(
-  periods: number,
-  dampings: number,
-  samples: number,
-  text?: string,
-): number | undefined {
-  if (text !== undefined) return parseThreads(text);
-  return periods * dampings * samples >= ROTD_PARALLEL_MIN_STEPS ? undefined : 1;
 }
 
 export function registerRotD(program: Command): void {
@@ -58,8 +40,7 @@ export function registerRotD(program: Command): void {
 }
 
 export async function runRotD(first: string, second: string, options: RotDCliOptions): Promise<void> {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   if (first === '-' && second === '-')
     throw usageError('only one of the two components can be standard input');
   const grid = gridFromOptions(options);
@@ -67,7 +48,10 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
   const one = await loadRecord(first, options);
   const two = await loadRecord(second, options);
   const samples = Math.max(one.accelMS2.length, two.accelMS2.length);
-  const threads = rotdThreads(grid.periodsS.length, grid.dampings.length, samples, options.threads);
+  const threads =
+    options.threads === undefined
+      ? rotdThreads(grid.periodsS.length, grid.dampings.length, samples)
+      : parseThreads(options.threads);
   const spectra = await rotDSpectraParallel(one, two, { ...grid, angleStepDeg, threads });
   const text =
     format === 'json'

@@ -5,8 +5,7 @@ import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { summaryTable } from '../../formats/spectrum-table.js';
 import { targetToJson } from '../../formats/target.js';
-import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
-import { METHOD_DESCRIPTIONS, parseMethod } from '../../oscillator/recurrence.js';
+import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import type { SweepKernel } from '../../oscillator/sweep.js';
 import { checkFolder, OutputSet } from '../../output/output-set.js';
 import type { PsaOverlay } from '../../plot/index.js';
@@ -14,16 +13,12 @@ import { integrateRecord } from '../../record/integrate.js';
 import type { GroundRecord } from '../../record/record.js';
 import { responseSpectrumParallel, type Spectrum } from '../../spectrum/spectrum.js';
 import { targetOverlay, targetRecord } from '../../spectrum/target.js';
-import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../processing-options.js';
-import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
-import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../target-options.js';
-
-export interface GridCliOptions {
-  periods?: string;
-  damping?: string;
-  method?: string;
-  force?: boolean;
-}
+import { outputFormat } from '../options/format.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
+import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
+import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../options/target.js';
+import { parseThreads } from '../options/threads.js';
 
 export interface SpectrumCliOptions
   extends RecordCliOptions,
@@ -38,34 +33,6 @@ export interface SpectrumCliOptions
   histories?: boolean;
   threads?: string;
   kernel?: string;
-}
-
-/** Add --periods, --damping, --method and --force. */
-export function addGridOptions(command: Command): Command {
-  return command
-    .option(
-      '--periods <grid>',
-      'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01:10:120)',
-    )
-    .option('--damping <list>', 'damping ratios as fractions or percentages, e.g. 0.02,5%', '5%')
-    .option('--method <method>', 'newmark-average, newmark-linear or piecewise-exact', 'newmark-average')
-    .option('--force', `allow more than ${thousands(MAX_OSCILLATORS)} oscillators`);
-}
-
-/** 1000000 → "1,000,000" (toLocaleString would load the locale data: 25 ms of every start-up). */
-function thousands(value: number): string {
-  return String(value).replace(/\B(?=(\d{3})+(?!\d))/g, ',');
-}
-
-export function gridFromOptions(options: GridCliOptions) {
-  const periodsS = options.periods === undefined ? defaultPeriodsS() : parsePeriods(options.periods);
-  const dampings = parseDampings(options.damping ?? '5%');
-  const method = parseMethod(options.method ?? 'newmark-average');
-  const count = periodsS.length * dampings.length;
-  if (count > MAX_OSCILLATORS && !options.force) {
-    throw usageError(`${count} oscillators is more than ${MAX_OSCILLATORS}; add --force if you mean it`);
-  }
-  return { periodsS, dampings, method };
 }
 
 export function registerSpectrum(program: Command): void {
@@ -104,8 +71,7 @@ export function registerSpectrum(program: Command): void {
 export async function runSpectrum(source: string, options: SpectrumCliOptions): Promise<void> {
   const grid = gridFromOptions(options);
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   const axes = figureAxes(options);
   const target = loadTarget(options);
   const sweep = sweepChoice(options);
@@ -134,15 +100,6 @@ function sweepChoice(options: SpectrumCliOptions): { threads: number | 'auto'; k
     throw usageError(`--kernel '${kernel}': use auto, wasm or js`);
   }
   return { threads: options.threads === undefined ? 'auto' : parseThreads(options.threads), kernel };
-}
-
-/** The value of --threads: a whole number from 1 to 256. */
-export function parseThreads(text: string): number {
-  const threads = Number(text);
-  if (!Number.isInteger(threads) || threads < 1 || threads > 256) {
-    throw usageError(`--threads must be a whole number from 1 to 256, got '${text}'`);
-  }
-  return threads;
 }
 
 function figureAxes(options: SpectrumCliOptions): 'log' | 'linear' {

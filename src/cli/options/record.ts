@@ -1,9 +1,9 @@
 import { closeSync, openSync, readSync } from 'node:fs';
 import type { Command } from 'commander';
-import { usageError } from '../base/errors.js';
-import { parseAccelerationUnit } from '../base/units.js';
-import { type ReadOptions, type RecordLayout, readRecordStream, unitWarnings } from '../record/read.js';
-import type { GroundRecord } from '../record/record.js';
+import { usageError } from '../../base/errors.js';
+import { parseAccelerationUnit } from '../../base/units.js';
+import { type ReadOptions, type RecordLayout, readRecordStream, unitWarnings } from '../../record/read.js';
+import type { GroundRecord } from '../../record/record.js';
 
 /** Options of every command that reads a record (values as commander hands them over). */
 export interface RecordCliOptions {
