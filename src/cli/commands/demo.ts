@@ -1,10 +1,19 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { Command } from 'commander';
+import type { Command } from 'commander';
+import { parseEquipment } from '../../anchorage/equipment.js';
 import { cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
-import { registerReport } from './report.js';
+import { checkFolder, OutputSet } from '../../output/output-set.js';
+import { assembleReport } from '../../report/assemble.js';
+import type { DesignSpectrum } from '../../spectrum/design.js';
+import { broadeningFromOptions, buildingFromOptions } from '../options/building.js';
+import { generationTime } from '../options/generation-time.js';
+import { gridFromOptions } from '../options/grid.js';
+import { applyProcessing } from '../options/processing.js';
+import { loadRecord } from '../options/record.js';
+import { loadTarget } from '../options/target.js';
 
 /**
  * The package's records/ folder whatever the cwd: the first records/ holding the demo records
@@ -82,12 +91,42 @@ export function registerDemo(program: Command): void {
 }
 
 export async function runDemo(out: string): Promise<void> {
-  const args = demoReportArguments(recordsFolder(), out);
+  const records = recordsFolder();
+  const args = demoReportArguments(records, out);
   const started = Date.now();
-  // A program of its own, so that the report records exactly the report command it ran.
-  const program = new Command('quakesweep').exitOverride();
-  registerReport(program);
-  await program.parseAsync(args, { from: 'user' });
+  checkFolder({ path: out, option: '--out' });
+  const file = (name: string) => shown(join(records, name));
+  const processing = { baseline: 'linear', taper: '5%', filter: 'bandpass:0.1-25' };
+  const read = await loadRecord(file('marrowby-h1.csv'), {
+    units: 'g',
+    name: 'Marrowby Flats H1 (invented)',
+  });
+  const second = await loadRecord(file('marrowby-h2.csv'), { units: 'g' });
+  const equipment = ['equipment-generator.json', 'equipment-cabinet-floor4.json'].map((name) => ({
+    file: file(name),
+    value: parseEquipment(readFileSync(file(name), 'utf8'), file(name)),
+  }));
+  const at = (option: string) => args[args.indexOf(option) + 1];
+  const files = await assembleReport({
+    read,
+    processed: applyProcessing(read, processing),
+    grid: gridFromOptions({ damping: at('--damping') }),
+    target: { spectrum: loadTarget({ target: at('--target') }) as DesignSpectrum },
+    pair: { record: applyProcessing(second, processing), angleStepDeg: 1 },
+    equipment,
+    building: buildingFromOptions({
+      buildingPeriod: at('--building-period'),
+      modalFactor: at('--modal-factor'),
+    }),
+    broadening: broadeningFromOptions(true),
+    title: at('--title'),
+    notes: args.filter((_, i) => args[i - 1] === '--note'),
+    // The report states the report command that makes the same report.
+    commandLine: args,
+    workingDirectory: process.cwd(),
+    generatedAt: generationTime(),
+  });
+  new OutputSet([read.source, second.source, ...equipment.map((e) => e.file)]).folder(out, files).write();
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   const spectra = JSON.parse(readFileSync(join(out, 'spectra.json'), 'utf8'));
   const lines = cautionLines(92).map((line) => `! ${line}`);

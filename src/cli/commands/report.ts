@@ -9,6 +9,7 @@ import { assembleReport, type ReportRequest } from '../../report/assemble.js';
 import type { BuildingMode } from '../../spectrum/floor.js';
 import { parseScaleRange } from '../../spectrum/scale.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
+import { generationTime } from '../options/generation-time.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
@@ -138,11 +139,4 @@ function needsBuilding(equipment: Equipment[], options: ReportCliOptions): Build
   if (!equipment.some((e) => e.zM > 0))
     throw usageError('--building-period and --modal-factor apply to equipment above the base (z > 0)');
   return buildingFromOptions(options);
-}
-
-/** Now, or the time SOURCE_DATE_EPOCH names (seconds since 1970) for a fully reproducible report. */
-export function generationTime(): string {
-  const epoch = process.env['SOURCE_DATE_EPOCH'];
-  if (epoch !== undefined && /^\d+$/.test(epoch)) return new Date(Number(epoch) * 1000).toISOString();
-  return new Date().toISOString();
 }
