@@ -60,3 +60,14 @@ export interface ShardJson {
 export function shardFileName(shard: Shard): string {
   return `shard-${shard.index}-of-${shard.count}.json`;
 }
+
+/** DIR/shard-i-of-N.json of one shard's run. */
+export function shardJson(
+  shard: Shard,
+  allFiles: string[],
+  settings: SuiteSettings,
+  records: SuiteRecord[],
+  failed: SuiteFailure[],
+): ShardJson {
+  return { caution: CAUTION, format: SHARD_FORMAT, shard, all_files: allFiles, settings, records, failed };
+}

@@ -1,7 +1,6 @@
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION } from '../../base/caution.js';
 import { QuakesweepError, usageError } from '../../base/errors.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
@@ -9,11 +8,10 @@ import { parseShard, type Shard, shardSlice } from '../../batch/shard.js';
 import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import {
-  SHARD_FORMAT,
-  type ShardJson,
   type SuiteFailure,
   type SuiteRecord,
   shardFileName,
+  shardJson,
   suiteJson,
 } from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
@@ -132,16 +130,10 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
   if (shard === null) {
     outputs.file(join(out, 'suite.json'), formatJson(suiteJson(records, failed, settings)));
   } else {
-    const summary: ShardJson = {
-      caution: CAUTION,
-      format: SHARD_FORMAT,
-      shard,
-      all_files: all,
-      settings,
-      records,
-      failed,
-    };
-    outputs.file(join(out, shardFileName(shard)), formatJson(summary));
+    outputs.file(
+      join(out, shardFileName(shard)),
+      formatJson(shardJson(shard, all, settings, records, failed)),
+    );
   }
   outputs.write();
   const what = shard === null ? 'suite.json' : shardFileName(shard);
