@@ -29,9 +29,6 @@ export interface ReportFigure {
   svg: string;
 }
 
-/** The target comparison of a report: the fit of spectrum/target.ts. */
-export type ReportTarget = TargetFit;
-
 /** Everything one report shows. The function that renders it does no I/O. */
 export interface ReportInput {
   title: string;
@@ -42,7 +39,8 @@ export interface ReportInput {
   measures: GroundMotionMeasures;
   lengthUnit: LengthUnit;
   spectrumFigures: ReportFigure[];
-  target?: ReportTarget;
+  /** The fit of the record to a target spectrum, when there is one. */
+  target?: TargetFit;
   damping?: { comparison: DampingComparison; figure: ReportFigure };
   rotd?: { spectra: RotDSpectra; figure: ReportFigure };
   anchorage: { item: ReportAnchorage; figures: ReportFigure[] }[];
