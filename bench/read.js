@@ -36,7 +36,7 @@ const median = (values) => {
 const variants = [];
 for (const root of roots) {
   const base = pathToFileURL(`${resolve(root)}/`);
-  const { loadRecord } = await import(new URL('cli/record-options.js', base).href);
+  const { loadRecord } = await import(new URL('cli/options/record.js', base).href);
   variants.push({
     name: `${root} loadRecord`,
     run: () => loadRecord(file, { units: 'g' }),

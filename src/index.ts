@@ -27,7 +27,7 @@ export {
 } from './oscillator/recurrence.js';
 export { substepCount } from './oscillator/substeps.js';
 export { type Peaks, type SweepKernel, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
-export { writeFileAtomic } from './output/atomic.js';
+export { OutputSet, writeFileAtomic } from './output/output-set.js';
 export * from './plot/index.js';
 export { fourierAmplitudeSpectrum, konnoOhmachiSmooth, konnoOhmachiWeight } from './record/fourier.js';
 export { integrateRecord } from './record/integrate.js';
@@ -47,6 +47,8 @@ export {
   peakGroundAcceleration,
 } from './record/record.js';
 export { type SynthOptions, synthesizeRecord } from './record/synth.js';
+export { assembleReport, type ReportRequest } from './report/assemble.js';
+export { type ReportInput, renderReport } from './report/report.js';
 export { compareDamping, newmarkHallFactors } from './spectrum/damping.js';
 export {
   asce716Spectrum,
@@ -61,10 +63,15 @@ export { type RotDOptions, type RotDSpectra, rotDSpectra } from './spectrum/rotd
 export { scaleToTarget } from './spectrum/scale.js';
 export {
   assembleSpectrum,
+  PARALLEL_MIN_OSCILLATOR_STEPS,
+  type ParallelSpectrumOptions,
   responseSpectrum,
+  responseSpectrumParallel,
+  rotdThreads,
   type Spectrum,
   type SpectrumCurve,
   type SpectrumOptions,
 } from './spectrum/spectrum.js';
+export { fitTarget, type TargetFit, targetOverlay, targetRecord } from './spectrum/target.js';
 export { type ParallelRotDOptions, RotDPool, rotDSpectraParallel } from './threads/rotd-pool.js';
 export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './threads/sweep-pool.js';

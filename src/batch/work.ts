@@ -1,10 +1,10 @@
-import { mkdirSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { isQuakesweepError } from '../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
 import type { Method } from '../oscillator/recurrence.js';
-import { writeFileAtomic } from '../output/atomic.js';
+import { OutputSet } from '../output/output-set.js';
 import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';
 import { type ReadOptions, readRecordText, unitWarnings } from '../record/read.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
@@ -55,9 +55,11 @@ export function processRecord(task: RecordTask): RecordOutcome {
       settings.plan,
     );
     const spectrum = responseSpectrum(record, settings);
-    const folder = join(task.outDir, name);
-    mkdirSync(folder, { recursive: true });
-    writeFileAtomic(join(folder, 'spectra.json'), formatJson(spectrumToJson(spectrum)), [file]);
+    const spectra = formatJson(spectrumToJson(spectrum));
+    new OutputSet([file])
+      .folder(task.outDir)
+      .folder(join(task.outDir, name), [['spectra.json', spectra]])
+      .write();
     const psaG = spectrum.curves.map((curve) => Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2));
     return { ok: true, file, name, psaG, warnings: unitWarnings(record) };
   } catch (error) {

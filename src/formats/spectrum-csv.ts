@@ -1,11 +1,15 @@
 import { cautionLines } from '../base/caution.js';
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
+import type { TargetFit } from '../spectrum/target.js';
 import { assertFiniteResult } from './finite.js';
+import { targetCsvNotes } from './target.js';
 
 export interface CsvOptions {
   /** Unit for SD, PSV and SV (PSV and SV in that unit per second). Default m. */
   lengthUnit?: LengthUnit;
+  /** A fitted target: its notes, and its PSA in a last column (empty where it does not reach). */
+  target?: TargetFit;
 }
 
 /** Percent label of a damping ratio, e.g. 0.05 → "5%". */
@@ -30,11 +34,14 @@ export function spectrumToCsv(spectrum: Spectrum, options: CsvOptions = {}): str
   );
   lines.push(`# method: ${spectrum.method}`);
   for (const step of spectrum.record.processing) lines.push(`# processing: ${oneLine(step.description)}`);
+  const target = options.target;
+  if (target !== undefined) lines.push(...targetCsvNotes(target));
   const header = ['period_s'];
   for (const curve of spectrum.curves) {
     const d = dampingLabel(curve.damping);
     header.push(`sd_${unit}@${d}`, `psv_${unit}_s@${d}`, `psa_g@${d}`, `sv_${unit}_s@${d}`, `sa_g@${d}`);
   }
+  if (target !== undefined) header.push('target_psa_g');
   lines.push(header.join(','));
   for (let p = 0; p < spectrum.periodsS.length; p++) {
     const row = [String(spectrum.periodsS[p])];
@@ -47,6 +54,7 @@ export function spectrumToCsv(spectrum: Spectrum, options: CsvOptions = {}): str
         String(curve.saMS2[p] / STANDARD_GRAVITY_MS2),
       );
     }
+    if (target !== undefined) row.push(target.psaG[p] === null ? '' : String(target.psaG[p]));
     lines.push(row.join(','));
   }
   return `${lines.join('\n')}\n`;

@@ -3,8 +3,8 @@ import type { LengthUnit } from '../base/units.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
-import type { ScaleResult } from '../spectrum/scale.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
+import type { TargetFit } from '../spectrum/target.js';
 import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
 import { definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';
@@ -29,15 +29,6 @@ export interface ReportFigure {
   svg: string;
 }
 
-/** The target comparison, as `quakesweep spectrum --target` writes it in its JSON. */
-export interface ReportTarget extends ScaleResult {
-  description: string;
-  damping: number;
-  applied: boolean;
-  /** Target PSA at the grid periods (null where the target does not cover the period). */
-  psaG: (number | null)[];
-}
-
 /** Everything one report shows. The function that renders it does no I/O. */
 export interface ReportInput {
   title: string;
@@ -48,7 +39,8 @@ export interface ReportInput {
   measures: GroundMotionMeasures;
   lengthUnit: LengthUnit;
   spectrumFigures: ReportFigure[];
-  target?: ReportTarget;
+  /** The fit of the record to a target spectrum, when there is one. */
+  target?: TargetFit;
   damping?: { comparison: DampingComparison; figure: ReportFigure };
   rotd?: { spectra: RotDSpectra; figure: ReportFigure };
   anchorage: { item: ReportAnchorage; figures: ReportFigure[] }[];

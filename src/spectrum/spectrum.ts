@@ -1,6 +1,8 @@
+import { availableParallelism } from 'node:os';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { plannedSteps, planSweep } from '../oscillator/plan.js';
 import type { Method } from '../oscillator/recurrence.js';
-import { type Peaks, sweepOscillators } from '../oscillator/sweep.js';
+import { type Peaks, type SweepKernel, sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord, ProcessingStep } from '../record/record.js';
 
 /** The response spectra of one record at one damping ratio. All arrays are indexed by period. */
@@ -49,6 +51,62 @@ export interface SpectrumOptions {
 export function responseSpectrum(record: GroundRecord, options: SpectrumOptions): Spectrum {
   const peaks = sweepOscillators(record.accelMS2, record.dtS, options);
   return assembleSpectrum(record, peaks);
+}
+
+/**
+ * Oscillator-steps (sub-steps included) from which `threads: 'auto'` splits a sweep over all
+ * cores. Below it, starting the worker threads and running their first groups cold costs more
+ * than the second core saves in a whole run; measured on `quakesweep spectrum` runs of a
+ * 40,000-sample record (the numbers are in the commit history).
+ */
+export const PARALLEL_MIN_OSCILLATOR_STEPS = 20_000_000;
+
+export interface ParallelSpectrumOptions extends SpectrumOptions {
+  kernel?: SweepKernel;
+  /**
+   * Threads, this one included: a number, or 'auto' (the default): all cores for a sweep of at
+   * least PARALLEL_MIN_OSCILLATOR_STEPS oscillator-steps, this thread alone below.
+   */
+  threads?: 'auto' | number;
+}
+
+/**
+ * responseSpectrum, its sweep split over threads as `threads` says; the numbers are the same bits
+ * whatever the threads (SweepPool).
+ */
+export async function responseSpectrumParallel(
+  record: GroundRecord,
+  options: ParallelSpectrumOptions,
+): Promise<Spectrum> {
+  const plan = planSweep(record.accelMS2, record.dtS, options);
+  const threads =
+    options.threads === undefined || options.threads === 'auto'
+      ? plannedSteps(plan, record.accelMS2.length) >= PARALLEL_MIN_OSCILLATOR_STEPS
+        ? availableParallelism()
+        : 1
+      : options.threads;
+  if (threads === 1)
+    return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options, plan));
+  // The thread modules load only for a split sweep.
+  const { SweepPool } = await import('../threads/sweep-pool.js');
+  const pool = new SweepPool(threads);
+  try {
+    return assembleSpectrum(record, await pool.sweep(record.accelMS2, record.dtS, options, plan));
+  } finally {
+    await pool.close();
+  }
+}
+
+/**
+ * Oscillator-steps (periods × dampings × samples, each stepping every rotation) from which RotD
+ * is dealt out over threads: a worker costs about as much to start as 1,000,000 such steps of the
+ * WebAssembly loop.
+ */
+export const ROTD_PARALLEL_MIN_STEPS = 1_000_000;
+
+/** Threads for a RotD job: all cores (undefined) from ROTD_PARALLEL_MIN_STEPS, else this one alone. */
+export function rotdThreads(periods: number, dampings: number, samples: number): number | undefined {
+  return periods * dampings * samples >= ROTD_PARALLEL_MIN_STEPS ? undefined : 1;
 }
 
 /** Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). */

@@ -1,5 +1,16 @@
 import { usageError } from '../base/errors.js';
-import { asce716Spectrum, type DesignSpectrum, EC8_GROUNDS, type Ec8Ground, ec8Spectrum } from './design.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import type { GroundRecord } from '../record/record.js';
+import {
+  asce716Spectrum,
+  coversPeriod,
+  type DesignSpectrum,
+  EC8_GROUNDS,
+  type Ec8Ground,
+  ec8Spectrum,
+} from './design.js';
+import { type ScaleResult, scaleRecord, scaleSpectrum, scaleStep, scaleToTarget } from './scale.js';
+import type { Spectrum, SpectrumCurve } from './spectrum.js';
 
 /**
  * A target spectrum as written on the command line: a code spectrum, already built, or the path
@@ -101,4 +112,72 @@ function numberField(spec: string, fields: { [key: string]: string }, key: strin
   const value = Number(text);
   if (!Number.isFinite(value)) throw usageError(`target '${spec}': ${key}=${text} is not a number`);
   return value;
+}
+
+/** A record's spectrum fitted to a target spectrum (scaleToTarget), as data for the outputs. */
+export interface TargetFit extends ScaleResult {
+  target: DesignSpectrum;
+  description: string;
+  /** The damping ratio of the record curve compared with the target. */
+  damping: number;
+  /** Whether the factor was applied to the spectrum (and to the record, by targetRecord). */
+  applied: boolean;
+  /** Target PSA, g, at the spectrum's periods (null where the target does not cover the period). */
+  psaG: (number | null)[];
+}
+
+/**
+ * Fit `target` to the spectrum's curve at the target's damping over `rangeS` (default: every grid
+ * period above 0 it covers); with `apply`, the spectrum comes back scaled by the factor.
+ */
+export function fitTarget(
+  spectrum: Spectrum,
+  target: DesignSpectrum,
+  options: { rangeS?: [number, number]; apply?: boolean } = {},
+): { fit: TargetFit; spectrum: Spectrum } {
+  const curve = targetCurve(spectrum, target);
+  const recordPsaG = curve.psaMS2.map((value) => value / STANDARD_GRAVITY_MS2);
+  const scaling = scaleToTarget(spectrum.periodsS, recordPsaG, target, { rangeS: options.rangeS });
+  const applied = options.apply === true;
+  const fit: TargetFit = {
+    ...scaling,
+    target,
+    description: target.description,
+    damping: curve.damping,
+    applied,
+    psaG: Array.from(spectrum.periodsS, (t) => (coversPeriod(target, t) ? target.psaG(t) : null)),
+  };
+  return { fit, spectrum: applied ? scaleSpectrum(spectrum, fit.factor, scaleStep(fit, target)) : spectrum };
+}
+
+/** The record as the outputs of a fit see it: scaled when the fit was applied. */
+export function targetRecord(record: GroundRecord, fit: TargetFit | undefined): GroundRecord {
+  return fit?.applied ? scaleRecord(record, fit.factor, scaleStep(fit, fit.target)) : record;
+}
+
+/** The target as a curve for the PSA figures: the periods it covers only, PSA in g. */
+export function targetOverlay(
+  periodsS: Float64Array,
+  fit: TargetFit,
+): { label: string; periodsS: number[]; psaG: number[] } {
+  return {
+    label: `target: ${fit.description.split(': ')[0]}`,
+    periodsS: Array.from(periodsS).filter((_, i) => fit.psaG[i] !== null),
+    psaG: fit.psaG.filter((value): value is number => value !== null),
+  };
+}
+
+/**
+ * The record curve compared with the target: the one at the target's damping (5% for ASCE 7, ξ
+ * for Eurocode 8); for a table, which states none, the 5% curve, or the only curve.
+ */
+function targetCurve(spectrum: Spectrum, target: DesignSpectrum): SpectrumCurve {
+  const wanted = target.damping ?? (spectrum.curves.length === 1 ? spectrum.curves[0].damping : 0.05);
+  const curve = spectrum.curves.find((c) => Math.abs(c.damping - wanted) < 1e-12);
+  if (curve === undefined) {
+    throw usageError(
+      `the target is for ${Number((100 * wanted).toPrecision(6))}% damping: include it in --damping`,
+    );
+  }
+  return curve;
 }

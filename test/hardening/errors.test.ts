@@ -44,7 +44,7 @@ const CASES: Record<string, [string[], RegExp][]> = {
     [['spectrum', f.h1, '--units', 'g', '--axes', 'polar'], /--axes/],
     [['spectrum', f.h1, '--units', 'g', '--method', 'euler'], /method/],
     [['spectrum', f.h1, '--units', 'g', '--length-unit', 'cubit'], /length unit/],
-    [['spectrum', f.h1, '--units', 'g', '--svg', missing], /no such folder/],
+    [['spectrum', f.h1, '--units', 'g', '--svg', join(missing, 'figs')], /parent folder does not exist/],
     [['spectrum', f.h1, '--units', 'g', '--histories'], /--svg/],
     [['spectrum', f.h1, '--units', 'g', '--column', '0'], /--column/],
     [['spectrum', f.h1, '--units', 'g', '--column', '7'], /--column/],

@@ -120,6 +120,55 @@ describe('output paths that cannot be written', () => {
   });
 });
 
+describe('every output of a command is checked before any is written', () => {
+  it('floor, damping and rotd with --out naming the input write no figure', async () => {
+    for (const command of [
+      ['damping', f.h1, '--units', 'g'],
+      ['rotd', f.h2, f.h1, '--units', 'g'],
+      ['floor', f.h1, '--units', 'g', '--building-period', '0.4', '--modal-factor', '1.3'],
+    ]) {
+      const dir = folderWith(`input-as-out-${command[0]}`);
+      const line = expectOneLineFailure(
+        await runMain([...command, '--periods', '0,0.1,1', '--svg', dir, '--out', f.h1]),
+      );
+      expect(line).toContain('refusing to overwrite the input');
+      expect(readdirSync(dir)).toEqual([]);
+      expect(readFileSync(f.h1).equals(original)).toBe(true);
+    }
+  });
+
+  it('design --out at the path of its own figure is refused, and nothing is written', async () => {
+    const dir = join(f.dir, 'design-figs');
+    const args = ['design', '--code', 'asce7-16', '--sds', '1', '--sd1', '0.6', '--tl', '8'];
+    const line = expectOneLineFailure(
+      await runMain([...args, '--svg', dir, '--out', join(dir, 'design.svg')]),
+    );
+    expect(line).toContain(`cannot write ${join(dir, 'design.svg')} twice`);
+    expect(existsSync(dir)).toBe(false);
+  });
+
+  it('spectrum --svg creates a missing folder whose parent exists, as the other commands do', async () => {
+    const dir = join(f.dir, 'spectrum-new-figs');
+    const result = await runMain(['spectrum', f.h1, '--units', 'g', '--periods', '0,0.1,1', '--svg', dir]);
+    expect(result.code).toBe(0);
+    expect(readdirSync(dir).sort()).toEqual(['psa.svg', 'psv.svg', 'sd.svg', 'tripartite.svg']);
+  });
+
+  it('every command refuses --svg whose parent folder is missing, in the same words', async () => {
+    const missing = join(f.dir, 'no-parent', 'figs');
+    for (const command of [
+      ['spectrum', f.h1, '--units', 'g'],
+      ['info', f.h1, '--units', 'g'],
+      ['damping', f.h1, '--units', 'g'],
+      ['design', '--code', 'asce7-16', '--sds', '1', '--sd1', '0.6', '--tl', '8'],
+    ]) {
+      const line = expectOneLineFailure(await runMain([...command, '--svg', missing]));
+      expect(line).toBe(`quakesweep: --svg ${missing}: its parent folder does not exist`);
+    }
+    expect(existsSync(join(f.dir, 'no-parent'))).toBe(false);
+  });
+});
+
 describe('never silently wrong', () => {
   it('refuses a sample above 10^6 g, naming the file and line (no Infinity or null downstream)', async () => {
     const file = join(f.dir, 'huge.txt');

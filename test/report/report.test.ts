@@ -104,7 +104,7 @@ describe('the HTML report', () => {
     expect(requests).toEqual([]);
     const banner = page.locator('#caution');
     await expect(banner.isVisible()).resolves.toBe(true);
-    expect(await banner.innerText()).toContain(CAUTION);
+    expect(await banner.textContent()).toContain(CAUTION);
     const bannerTop = (await banner.boundingBox())?.y ?? Infinity;
     const firstSection = (await page.locator('section').first().boundingBox())?.y ?? 0;
     expect(bannerTop).toBeLessThan(firstSection);

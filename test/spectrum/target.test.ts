@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { parseTargetSpec } from '../../src/spectrum/target.js';
+import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
+import { asce716Spectrum } from '../../src/spectrum/design.js';
+import type { Spectrum } from '../../src/spectrum/spectrum.js';
+import { fitTarget, parseTargetSpec } from '../../src/spectrum/target.js';
 
 describe('parseTargetSpec', () => {
   it('reads an ASCE 7-16 target', () => {
@@ -30,5 +33,37 @@ describe('parseTargetSpec', () => {
     expect(() => parseTargetSpec('ec8:type=3,ground=C,ag=0.25')).toThrow(/1 or 2/);
     expect(() => parseTargetSpec('ec8:type=1,ground=S1,ag=0.25')).toThrow(/special studies/);
     expect(() => parseTargetSpec('ec8:type=1,ground=C,ag=0.25,damping=5')).toThrow(/percentage/);
+  });
+});
+
+describe('fitTarget', () => {
+  // A spectrum at exactly twice the ASCE 7-16 target (S_DS 1.0 g, S_D1 0.6 g, T_L 8 s, §11.4.6)
+  // at 5%: the least-squares factor in ln PSA is 1/2 by construction, and every ratio is 1 after it.
+  const target = asce716Spectrum({ sdsG: 1, sd1G: 0.6, tlS: 8 });
+  const periodsS = Float64Array.from([0, 0.2, 0.5, 1, 2, 20]);
+  const psaMS2 = periodsS.map((t) => (t > 10 ? 1 : 2 * target.psaG(t) * STANDARD_GRAVITY_MS2));
+  const zeros = () => new Float64Array(periodsS.length);
+  const spectrum: Spectrum = {
+    record: { name: 'r', source: 'r', npts: 10, dtS: 0.01, pgaMS2: psaMS2[0], processing: [] },
+    method: 'newmark-average',
+    periodsS,
+    curves: [{ damping: 0.05, sdM: zeros(), psvMS: zeros(), psaMS2, svMS: zeros(), saMS2: zeros() }],
+    oscillatorSteps: 0,
+  };
+
+  it('returns the fit as data, the target PSA null where it does not reach', () => {
+    const { fit, spectrum: same } = fitTarget(spectrum, target, { rangeS: [0.2, 2] });
+    expect(fit.factor).toBeCloseTo(0.5, 12);
+    expect(fit.meanRatio).toBeCloseTo(1, 12);
+    expect(fit.applied).toBe(false);
+    expect(same).toBe(spectrum);
+    expect(fit.psaG[3]).toBeCloseTo(0.6, 12); // S_D1/T at 1 s
+    expect(fit.psaG[5]).toBeCloseTo((0.6 * 8) / 400, 12); // S_D1 T_L/T² at 20 s (Eq. 11.4-8)
+  });
+
+  it('scales the spectrum by the factor with apply', () => {
+    const { fit, spectrum: scaled } = fitTarget(spectrum, target, { rangeS: [0.2, 2], apply: true });
+    expect(fit.applied).toBe(true);
+    expect(scaled.curves[0].psaMS2[3]).toBeCloseTo(psaMS2[3] / 2, 9);
   });
 });

@@ -1,35 +1,32 @@
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION } from '../../base/caution.js';
 import { QuakesweepError, usageError } from '../../base/errors.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
 import { parseShard, type Shard, shardSlice } from '../../batch/shard.js';
+import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import {
-  SHARD_FORMAT,
-  type ShardJson,
   type SuiteFailure,
   type SuiteRecord,
   shardFileName,
+  shardJson,
   suiteJson,
-} from '../../batch/suite.js';
-import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
-import { formatJson } from '../../formats/spectrum-json.js';
-import { writeFileAtomic } from '../../output/atomic.js';
-import { prepareOutputFolder } from '../../output/folder.js';
+} from '../../formats/suite.js';
+import { OutputSet } from '../../output/output-set.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import {
   addProcessingOptions,
   type ProcessingCliOptions,
   processingPlanFromOptions,
-} from '../processing-options.js';
+} from '../options/processing.js';
 import {
   addRecordOptions,
   positiveInteger,
   type RecordCliOptions,
   recordReadOptions,
-} from '../record-options.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions } from './spectrum.js';
+} from '../options/record.js';
 
 export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
   out?: string;
@@ -95,7 +92,7 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
   if (all.length === 0) throw usageError(`no file matches ${unmatched.join(', ')}`);
   const names = assignNames(all);
   const mine = shard === null ? all : shardSlice(all, shard);
-  prepareOutputFolder(out);
+  new OutputSet(all).folder(out).write();
 
   const tasks = mine.map((file) => ({ file, name: names.get(file) as string, outDir: out, settings }));
   // The pool and the progress bar are loaded here, not at start-up, so other commands do not pay
@@ -129,20 +126,16 @@ export async function runBatch(args: string[], options: BatchCliOptions): Promis
       failed.push({ file: outcome.file, error: outcome.error });
     }
   }
+  const outputs = new OutputSet(all);
   if (shard === null) {
-    writeFileAtomic(join(out, 'suite.json'), formatJson(suiteJson(records, failed, settings)), all);
+    outputs.file(join(out, 'suite.json'), formatJson(suiteJson(records, failed, settings)));
   } else {
-    const summary: ShardJson = {
-      caution: CAUTION,
-      format: SHARD_FORMAT,
-      shard,
-      all_files: all,
-      settings,
-      records,
-      failed,
-    };
-    writeFileAtomic(join(out, shardFileName(shard)), formatJson(summary), all);
+    outputs.file(
+      join(out, shardFileName(shard)),
+      formatJson(shardJson(shard, all, settings, records, failed)),
+    );
   }
+  outputs.write();
   const what = shard === null ? 'suite.json' : shardFileName(shard);
   process.stderr.write(
     `quakesweep: ${records.length} of ${records.length + failed.length} records done; ${join(out, what)}\n`,

@@ -1,18 +1,14 @@
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION, cautionLines } from '../../base/caution.js';
-import { usageError } from '../../base/errors.js';
-import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
-import { dampingLabel } from '../../formats/spectrum-csv.js';
-import { formatJson, recordToJson } from '../../formats/spectrum-json.js';
+import { dampingTable, dampingToCsv, dampingToJson } from '../../formats/damping.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
-import { compareDamping, type DampingComparison } from '../../spectrum/damping.js';
-import { responseSpectrum, type Spectrum } from '../../spectrum/spectrum.js';
-import { addRecordOptions, loadRecord, type RecordCliOptions } from '../record-options.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions, summaryRows } from './spectrum.js';
+import { compareDamping } from '../../spectrum/damping.js';
+import { responseSpectrum } from '../../spectrum/spectrum.js';
+import { outputFormat } from '../options/format.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
 export interface DampingCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
@@ -46,8 +42,7 @@ export function registerDamping(program: Command): void {
 }
 
 export async function runDamping(source: string, options: DampingCliOptions): Promise<void> {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   const grid = gridFromOptions(options);
   const added = !Array.from(grid.dampings).some((d) => Math.abs(d - REFERENCE_DAMPING) < 1e-12);
   const dampings = added ? Float64Array.from([...grid.dampings, REFERENCE_DAMPING]).sort() : grid.dampings;
@@ -60,118 +55,14 @@ export async function runDamping(source: string, options: DampingCliOptions): Pr
       : format === 'csv'
         ? dampingToCsv(spectrum, comparison)
         : dampingTable(spectrum, comparison, added);
+  const outputs = new OutputSet([source]);
   if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
     const figure = dampingFigure({
       record: spectrum.record,
       methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
       comparison,
     });
-    writeFileAtomic(join(options.svg, 'damping.svg'), figure, [source]);
+    outputs.folder(options.svg, [['damping.svg', figure]], '--svg');
   }
-  if (options.out !== undefined) writeFileAtomic(options.out, text, [source]);
-  else process.stdout.write(text);
-}
-
-const SOURCES = {
-  ec8_eta: 'EN 1998-1:2004 §3.2.2.2, Eq. 3.6: η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent; ratio η(ξ)/η(5%)',
-  newmark_hall_1982:
-    'Newmark and Hall (1982), median amplification factors 3.21 − 0.68 ln ξ (acceleration), 2.31 − 0.41 ln ξ (velocity), 1.82 − 0.27 ln ξ (displacement), ξ in percent; ratio at ξ to at 5% (coefficients from memory)',
-};
-
-const nullable = (value: number | null) => (value === null || Number.isNaN(value) ? null : value);
-
-export function dampingToJson(spectrum: Spectrum, comparison: DampingComparison, added: boolean) {
-  return {
-    caution: CAUTION,
-    record: recordToJson(spectrum.record),
-    method: spectrum.method,
-    method_description: METHOD_DESCRIPTIONS[spectrum.method],
-    reference_damping: comparison.referenceDamping,
-    reference_added: added,
-    published_sources: SOURCES,
-    periods_s: Array.from(comparison.periodsS),
-    spectra: comparison.curves.map((curve) => ({
-      damping: curve.damping,
-      psa_g: Array.from(curve.psaMS2, (value) => value / STANDARD_GRAVITY_MS2),
-      ratio_to_reference: Array.from(curve.ratio, nullable),
-      geometric_mean_ratio: nullable(curve.geometricMeanRatio),
-      published: {
-        ec8_eta_ratio: curve.published.ec8Eta,
-        newmark_hall_1982_ratio: {
-          acceleration: curve.published.newmarkHall.acceleration,
-          velocity: curve.published.newmarkHall.velocity,
-          displacement: curve.published.newmarkHall.displacement,
-        },
-      },
-    })),
-  };
-}
-
-export function dampingToCsv(spectrum: Spectrum, comparison: DampingComparison): string {
-  const lines = cautionLines().map((line) => `# ${line}`);
-  lines.push(`# record: ${spectrum.record.name.replace(/[\r\n]+/g, ' ')}; method: ${spectrum.method}`);
-  lines.push(`# reference damping: ${dampingLabel(comparison.referenceDamping)}`);
-  for (const curve of comparison.curves) {
-    const nh = curve.published.newmarkHall;
-    lines.push(
-      `# published ratio at ${dampingLabel(curve.damping)}: EC8 eta ${curve.published.ec8Eta}; Newmark-Hall acceleration ${nh.acceleration ?? ''} velocity ${nh.velocity ?? ''} displacement ${nh.displacement ?? ''}`,
-    );
-  }
-  const header = ['period_s'];
-  for (const curve of comparison.curves) header.push(`psa_g@${dampingLabel(curve.damping)}`);
-  for (const curve of comparison.curves) header.push(`ratio@${dampingLabel(curve.damping)}`);
-  lines.push(header.join(','));
-  for (let p = 0; p < comparison.periodsS.length; p++) {
-    const row = [String(comparison.periodsS[p])];
-    for (const curve of comparison.curves) row.push(String(curve.psaMS2[p] / STANDARD_GRAVITY_MS2));
-    for (const curve of comparison.curves)
-      row.push(Number.isNaN(curve.ratio[p]) ? '' : String(curve.ratio[p]));
-    lines.push(row.join(','));
-  }
-  return `${lines.join('\n')}\n`;
-}
-
-export function dampingTable(spectrum: Spectrum, comparison: DampingComparison, added: boolean): string {
-  const out = cautionLines(92).map((line) => `! ${line}`);
-  const r = spectrum.record;
-  out.push('', `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dtS} s`);
-  out.push(`method  ${METHOD_DESCRIPTIONS[spectrum.method]}`);
-  out.push(`ratios  PSA(ξ)/PSA(5%)${added ? ' (5% added as the reference)' : ''}`, '');
-  const f = (value: number | null) => (value === null || Number.isNaN(value) ? '-' : value.toFixed(3));
-  out.push(
-    `${'ξ'.padStart(7)} ${'record'.padStart(8)} ${'EC8 η'.padStart(8)} ${'NH acc'.padStart(8)} ${'NH vel'.padStart(8)} ${'NH disp'.padStart(8)}`,
-  );
-  for (const curve of comparison.curves) {
-    const nh = curve.published.newmarkHall;
-    out.push(
-      [
-        dampingLabel(curve.damping).padStart(7),
-        f(curve.geometricMeanRatio).padStart(8),
-        f(curve.published.ec8Eta).padStart(8),
-        f(nh.acceleration).padStart(8),
-        f(nh.velocity).padStart(8),
-        f(nh.displacement).padStart(8),
-      ].join(' '),
-    );
-  }
-  out.push('(record: geometric mean of the ratio over the periods above 0 s)', '');
-  const header = ['T (s)'.padStart(8)];
-  for (const curve of comparison.curves) {
-    const d = dampingLabel(curve.damping);
-    header.push(`PSA g @${d}`.padStart(13), `ratio @${d}`.padStart(12));
-  }
-  out.push(header.join(' '));
-  for (const p of summaryRows(comparison.periodsS)) {
-    const row = [Number(comparison.periodsS[p].toPrecision(3)).toString().padStart(8)];
-    for (const curve of comparison.curves) {
-      row.push(
-        (curve.psaMS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(13),
-        f(curve.ratio[p]).padStart(12),
-      );
-    }
-    out.push(row.join(' '));
-  }
-  out.push(`(${comparison.periodsS.length} periods; --format json or csv for all of them)`);
-  return `${out.join('\n')}\n`;
+  outputs.text(options.out, text).write();
 }

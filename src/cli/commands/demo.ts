@@ -1,75 +1,18 @@
-import { existsSync, readFileSync } from 'node:fs';
-import { dirname, join, relative, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import { Command } from 'commander';
+import { readFileSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import type { Command } from 'commander';
+import { parseEquipment } from '../../anchorage/equipment.js';
 import { cautionLines } from '../../base/caution.js';
-import { usageError } from '../../base/errors.js';
-import { registerReport } from './report.js';
-
-/**
- * The package's records/ folder whatever the cwd: the first records/ holding the demo records
- * above this file (dist/cli/commands/demo.js, or the CLI bundle dist/cli/quakesweep.cjs).
- */
-export function recordsFolder(): string {
-  const here = dirname(fileURLToPath(import.meta.url));
-  for (const up of [2, 3]) {
-    const folder = resolve(here, ...Array(up).fill('..'), 'records');
-    if (existsSync(join(folder, 'marrowby-h1.csv'))) return folder;
-  }
-  throw usageError(`the demo records are missing from ${resolve(here, '..', '..', '..', 'records')}`);
-}
-
-/** A path as short as it can be said from the cwd (relative when it lies below it). */
-function shown(path: string): string {
-  const r = relative(process.cwd(), path);
-  return r !== '' && !r.startsWith('..') ? r : path;
-}
-
-/**
- * The arguments of `quakesweep report` for the invented Marrowby Flats scenario (records/README.md):
- * H1 processed, four dampings, an invented ASCE 7-16 site, RotD of H1 and H2, the invented generator
- * on grade and the invented cabinet on level 4 of an invented one-mode building.
- */
-export function demoReportArguments(records: string, out: string): string[] {
-  const file = (name: string) => shown(join(records, name));
-  return [
-    'report',
-    file('marrowby-h1.csv'),
-    '--units',
-    'g',
-    '--name',
-    'Marrowby Flats H1 (invented)',
-    '--baseline',
-    'linear',
-    '--taper',
-    '5%',
-    '--filter',
-    'bandpass:0.1-25',
-    '--damping',
-    '2%,5%,10%,20%',
-    '--target',
-    'asce7-16:sds=1.0,sd1=0.6,tl=8',
-    '--pair',
-    file('marrowby-h2.csv'),
-    '--equipment',
-    file('equipment-generator.json'),
-    '--equipment',
-    file('equipment-cabinet-floor4.json'),
-    '--building-period',
-    '0.8',
-    '--modal-factor',
-    '1.3',
-    '--broaden',
-    '--note',
-    'Everything in this report is invented for demonstration: the Marrowby Flats site, the Corrin Ridge scenario event, the records (written by quakesweep synth), the building and the equipment. The ASCE 7-16 site values S_DS = 1.0 g, S_D1 = 0.6 g, T_L = 8 s are invented too. Nothing here may be used for design.',
-    '--note',
-    'Equipment: the invented standby generator G-1 on grade, and the invented cabinet EC-4 on level 4 of an invented building idealised by one mode (T_b = 0.8 s, ζ_b = 5%, Γφ = 1.3, floor spectrum peaks broadened ±15%).',
-    '--title',
-    'Marrowby Flats pumping station (invented scenario): record H1',
-    '--out',
-    out,
-  ];
-}
+import { checkFolder, OutputSet } from '../../output/output-set.js';
+import { assembleReport } from '../../report/assemble.js';
+import type { DesignSpectrum } from '../../spectrum/design.js';
+import { broadeningFromOptions, buildingFromOptions } from '../options/building.js';
+import { demoReportArguments, recordsFolder, shown } from '../options/demo-scenario.js';
+import { generationTime } from '../options/generation-time.js';
+import { gridFromOptions } from '../options/grid.js';
+import { applyProcessing } from '../options/processing.js';
+import { loadRecord } from '../options/record.js';
+import { loadTarget } from '../options/target.js';
 
 export function registerDemo(program: Command): void {
   program
@@ -82,12 +25,42 @@ export function registerDemo(program: Command): void {
 }
 
 export async function runDemo(out: string): Promise<void> {
-  const args = demoReportArguments(recordsFolder(), out);
+  const records = recordsFolder();
+  const args = demoReportArguments(records, out);
   const started = Date.now();
-  // A program of its own, so that the report records exactly the report command it ran.
-  const program = new Command('quakesweep').exitOverride();
-  registerReport(program);
-  await program.parseAsync(args, { from: 'user' });
+  checkFolder({ path: out, option: '--out' });
+  const file = (name: string) => shown(join(records, name));
+  const processing = { baseline: 'linear', taper: '5%', filter: 'bandpass:0.1-25' };
+  const read = await loadRecord(file('marrowby-h1.csv'), {
+    units: 'g',
+    name: 'Marrowby Flats H1 (invented)',
+  });
+  const second = await loadRecord(file('marrowby-h2.csv'), { units: 'g' });
+  const equipment = ['equipment-generator.json', 'equipment-cabinet-floor4.json'].map((name) => ({
+    file: file(name),
+    value: parseEquipment(readFileSync(file(name), 'utf8'), file(name)),
+  }));
+  const at = (option: string) => args[args.indexOf(option) + 1];
+  const files = await assembleReport({
+    read,
+    processed: applyProcessing(read, processing),
+    grid: gridFromOptions({ damping: at('--damping') }),
+    target: { spectrum: loadTarget({ target: at('--target') }) as DesignSpectrum },
+    pair: { record: applyProcessing(second, processing), angleStepDeg: 1 },
+    equipment,
+    building: buildingFromOptions({
+      buildingPeriod: at('--building-period'),
+      modalFactor: at('--modal-factor'),
+    }),
+    broadening: broadeningFromOptions(true),
+    title: at('--title'),
+    notes: args.filter((_, i) => args[i - 1] === '--note'),
+    // The report states the report command that makes the same report.
+    commandLine: args,
+    workingDirectory: process.cwd(),
+    generatedAt: generationTime(),
+  });
+  new OutputSet([read.source, second.source, ...equipment.map((e) => e.file)]).folder(out, files).write();
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   const spectra = JSON.parse(readFileSync(join(out, 'spectra.json'), 'utf8'));
   const lines = cautionLines(92).map((line) => `! ${line}`);

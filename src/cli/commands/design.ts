@@ -1,14 +1,12 @@
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION, cautionLines } from '../../base/caution.js';
-import { usageError } from '../../base/errors.js';
+import { designTable, designToCsv, designToJson } from '../../formats/design.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, parsePeriods } from '../../oscillator/grid.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
-import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../target-options.js';
+import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../options/design.js';
+import { outputFormat } from '../options/format.js';
 
 export interface DesignCommandOptions extends DesignCliOptions {
   periods?: string;
@@ -34,8 +32,7 @@ export function registerDesign(program: Command): void {
 }
 
 export function runDesign(options: DesignCommandOptions): void {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   const spectrum = designFromOptions(options);
   const periodsS = designPeriods(spectrum, options.periods);
   const psaG = designPsaG(spectrum, periodsS);
@@ -46,15 +43,10 @@ export function runDesign(options: DesignCommandOptions): void {
         ? designToCsv(spectrum, periodsS, psaG)
         : designTable(spectrum, periodsS, psaG);
   const inputs = options.table === undefined ? [] : [options.table];
-  if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
-    writeFileAtomic(join(options.svg, 'design.svg'), designFigure({ spectrum, periodsS, psaG }), inputs);
-  }
-  if (options.out !== undefined) {
-    writeFileAtomic(options.out, text, inputs);
-  } else {
-    process.stdout.write(text);
-  }
+  const outputs = new OutputSet(inputs);
+  if (options.svg !== undefined)
+    outputs.folder(options.svg, [['design.svg', designFigure({ spectrum, periodsS, psaG })]], '--svg');
+  outputs.text(options.out, text).write();
 }
 
 /** The periods asked for, each checked against the spectrum's range; or the default grid within it. */
@@ -66,36 +58,4 @@ export function designPeriods(spectrum: DesignSpectrum, text: string | undefined
   }
   if (spectrum.tabulatedPeriodsS !== undefined) return spectrum.tabulatedPeriodsS;
   return defaultPeriodsS().filter((t) => coversPeriod(spectrum, t));
-}
-
-export function designToJson(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array) {
-  return {
-    caution: CAUTION,
-    code: spectrum.code,
-    description: spectrum.description,
-    parameters: spectrum.parameters,
-    damping: spectrum.damping ?? null,
-    periods_s: Array.from(periodsS),
-    psa_g: Array.from(psaG),
-  };
-}
-
-/** The caution and the description on `#` lines, then `period_s,psa_g` (readable again by --table). */
-export function designToCsv(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array): string {
-  const lines = cautionLines().map((line) => `# ${line}`);
-  lines.push(`# spectrum: ${spectrum.description.replace(/[\r\n]+/g, ' ')}`);
-  lines.push('period_s,psa_g');
-  for (let i = 0; i < periodsS.length; i++) lines.push(`${periodsS[i]},${psaG[i]}`);
-  return `${lines.join('\n')}\n`;
-}
-
-export function designTable(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array): string {
-  const out = cautionLines(92).map((line) => `! ${line}`);
-  out.push('', spectrum.description, '', `${'T (s)'.padStart(10)} ${'PSA (g)'.padStart(12)}`);
-  for (let i = 0; i < periodsS.length; i++) {
-    out.push(
-      `${Number(periodsS[i].toPrecision(4)).toString().padStart(10)} ${psaG[i].toPrecision(5).padStart(12)}`,
-    );
-  }
-  return `${out.join('\n')}\n`;
 }

@@ -1,18 +1,17 @@
-import { existsSync, mkdirSync, readdirSync, readFileSync, realpathSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync, realpathSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { inputError, usageError } from '../../base/errors.js';
 import { sanitiseName } from '../../batch/names.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import {
   SHARD_FORMAT,
   type ShardJson,
   type SuiteFailure,
   type SuiteRecord,
   suiteJson,
-} from '../../batch/suite.js';
-import { formatJson } from '../../formats/spectrum-json.js';
-import { writeFileAtomic } from '../../output/atomic.js';
-import { prepareOutputFolder } from '../../output/folder.js';
+} from '../../formats/suite.js';
+import { checkFolder, OutputSet } from '../../output/output-set.js';
 
 export function registerMerge(program: Command): void {
   program
@@ -72,25 +71,25 @@ export function runMerge(dirs: string[], out: string): void {
   if (missing.length > 0)
     throw usageError(`shard${missing.length > 1 ? 's' : ''} ${missing.join(', ')} of ${count} missing`);
 
-  prepareOutputFolder(out);
+  checkFolder({ path: out, option: '--out' });
+  const outputs = new OutputSet().folder(out);
   const records: SuiteRecord[] = [];
   const failed: SuiteFailure[] = [];
   for (const { dir, file, json } of shards) {
-    const sameFolder = realpathSync(dir) === realpathSync(resolve(out));
+    const sameFolder = existsSync(out) && realpathSync(dir) === realpathSync(resolve(out));
     for (const record of json.records) {
       if (typeof record.name !== 'string' || sanitiseName(record.name) !== record.name) {
         throw inputError(`record name ${JSON.stringify(record.name)} is not a safe folder name`, { file });
       }
       records.push(record);
       if (!sameFolder) {
-        const from = join(dir, record.name, 'spectra.json');
-        mkdirSync(join(out, record.name), { recursive: true });
-        writeFileAtomic(join(out, record.name, 'spectra.json'), readFileSync(from));
+        const spectra = readFileSync(join(dir, record.name, 'spectra.json'));
+        outputs.folder(join(out, record.name), [['spectra.json', spectra]]);
       }
     }
     failed.push(...json.failed);
   }
-  writeFileAtomic(join(out, 'suite.json'), formatJson(suiteJson(records, failed, first.settings)));
+  outputs.file(join(out, 'suite.json'), formatJson(suiteJson(records, failed, first.settings))).write();
   process.stderr.write(
     `quakesweep: merged ${count} shards: ${records.length} records, ${failed.length} failed; ${join(out, 'suite.json')}\n`,
   );

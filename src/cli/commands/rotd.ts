@@ -1,24 +1,16 @@
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
-import { CAUTION, cautionLines } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
-import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
-import { dampingLabel } from '../../formats/spectrum-csv.js';
-import { formatJson, recordToJson } from '../../formats/spectrum-json.js';
+import { rotdTable, rotdToCsv, rotdToJson } from '../../formats/rotd.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
-import type { RotDSpectra } from '../../spectrum/rotd.js';
+import { rotdThreads } from '../../spectrum/spectrum.js';
 import { rotDSpectraParallel } from '../../threads/rotd-pool.js';
-import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../record-options.js';
-import {
-  addGridOptions,
-  type GridCliOptions,
-  gridFromOptions,
-  parseThreads,
-  summaryRows,
-} from './spectrum.js';
+import { outputFormat } from '../options/format.js';
+import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
+import { parseThreads } from '../options/threads.js';
 
 export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
   format?: string;
@@ -26,27 +18,6 @@ export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
   angleStep?: string;
   svg?: string;
   threads?: string;
-}
-
-/**
- * Oscillator-steps (periods × dampings × samples, each stepping 180 rotations) from which RotD is
- * dealt out over threads: a worker costs 50–80 ms to start (module and kernel included), about
- * 1,000,000 such steps of the WebAssembly loop.
- */
-export const ROTD_PARALLEL_MIN_STEPS = 1_000_000;
-
-/**
- * Threads for a RotD job of `periods` × `dampings` oscillators over `samples` samples: the
- * --threads given, else all cores (undefined) for a large job and one for a small one.
- */
-export function rotdThreads(
-  periods: number,
-  dampings: number,
-  samples: number,
-  text?: string,
-): number | undefined {
-  if (text !== undefined) return parseThreads(text);
-  return periods * dampings * samples >= ROTD_PARALLEL_MIN_STEPS ? undefined : 1;
 }
 
 export function registerRotD(program: Command): void {
@@ -69,8 +40,7 @@ export function registerRotD(program: Command): void {
 }
 
 export async function runRotD(first: string, second: string, options: RotDCliOptions): Promise<void> {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!['json', 'csv', 'table'].includes(format)) throw usageError(`--format '${format}': use json or csv`);
+  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
   if (first === '-' && second === '-')
     throw usageError('only one of the two components can be standard input');
   const grid = gridFromOptions(options);
@@ -78,7 +48,10 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
   const one = await loadRecord(first, options);
   const two = await loadRecord(second, options);
   const samples = Math.max(one.accelMS2.length, two.accelMS2.length);
-  const threads = rotdThreads(grid.periodsS.length, grid.dampings.length, samples, options.threads);
+  const threads =
+    options.threads === undefined
+      ? rotdThreads(grid.periodsS.length, grid.dampings.length, samples)
+      : parseThreads(options.threads);
   const spectra = await rotDSpectraParallel(one, two, { ...grid, angleStepDeg, threads });
   const text =
     format === 'json'
@@ -86,105 +59,10 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
       : format === 'csv'
         ? rotdToCsv(spectra)
         : rotdTable(spectra);
+  const outputs = new OutputSet([first, second]);
   if (options.svg !== undefined) {
-    mkdirSync(options.svg, { recursive: true });
     const figure = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] });
-    writeFileAtomic(join(options.svg, 'rotd.svg'), figure, [first, second]);
+    outputs.folder(options.svg, [['rotd.svg', figure]], '--svg');
   }
-  if (options.out !== undefined) writeFileAtomic(options.out, text, [first, second]);
-  else process.stdout.write(text);
-}
-
-const toG = (values: Float64Array) => Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
-
-function notes(spectra: RotDSpectra): string[] {
-  const out = [
-    `PSA(θ) = ω² max|u₁ cos θ + u₂ sin θ| over ${180 / spectra.angleStepDeg} angles 0 ≤ θ < 180° in steps of ${spectra.angleStepDeg}°; RotD50 is the median over angles, RotD100 the largest (Boore 2010); geometric mean √(PSA₁ PSA₂) of the components as recorded`,
-  ];
-  if (spectra.paddedSamples > 0) {
-    out.push(`the shorter component was padded with ${spectra.paddedSamples} zero samples (ground at rest)`);
-  }
-  return out;
-}
-
-export function rotdToJson(spectra: RotDSpectra) {
-  return {
-    caution: CAUTION,
-    records: spectra.records.map(recordToJson),
-    method: spectra.method,
-    method_description: METHOD_DESCRIPTIONS[spectra.method],
-    angle_step_deg: spectra.angleStepDeg,
-    padded_samples: spectra.paddedSamples,
-    notes: notes(spectra),
-    periods_s: Array.from(spectra.periodsS),
-    spectra: spectra.curves.map((curve) => ({
-      damping: curve.damping,
-      rotd50_g: toG(curve.rotd50MS2),
-      rotd100_g: toG(curve.rotd100MS2),
-      geomean_g: toG(curve.geomeanMS2),
-    })),
-  };
-}
-
-export function rotdToCsv(spectra: RotDSpectra): string {
-  const lines = cautionLines().map((line) => `# ${line}`);
-  for (const record of spectra.records) {
-    lines.push(`# record: ${record.name.replace(/[\r\n]+/g, ' ')}; npts ${record.npts}; dt ${record.dtS} s`);
-  }
-  lines.push(`# method: ${spectra.method}`);
-  for (const note of notes(spectra)) lines.push(`# ${note}`);
-  const header = ['period_s'];
-  for (const curve of spectra.curves) {
-    const d = dampingLabel(curve.damping);
-    header.push(`rotd50_g@${d}`, `rotd100_g@${d}`, `geomean_g@${d}`);
-  }
-  lines.push(header.join(','));
-  for (let p = 0; p < spectra.periodsS.length; p++) {
-    const row = [String(spectra.periodsS[p])];
-    for (const curve of spectra.curves) {
-      row.push(
-        String(curve.rotd50MS2[p] / STANDARD_GRAVITY_MS2),
-        String(curve.rotd100MS2[p] / STANDARD_GRAVITY_MS2),
-        String(curve.geomeanMS2[p] / STANDARD_GRAVITY_MS2),
-      );
-    }
-    lines.push(row.join(','));
-  }
-  return `${lines.join('\n')}\n`;
-}
-
-export function rotdTable(spectra: RotDSpectra): string {
-  const out = cautionLines(92).map((line) => `! ${line}`);
-  out.push('');
-  for (const r of spectra.records) {
-    out.push(
-      `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dtS} s, PGA ${(r.pgaMS2 / STANDARD_GRAVITY_MS2).toFixed(4)} g`,
-    );
-  }
-  out.push(`method  ${METHOD_DESCRIPTIONS[spectra.method]}`);
-  for (const note of notes(spectra)) out.push(`note    ${note}`);
-  out.push('');
-  const header = ['T (s)'.padStart(8)];
-  for (const curve of spectra.curves) {
-    const d = dampingLabel(curve.damping);
-    header.push(
-      `RotD50 g @${d}`.padStart(15),
-      `RotD100 g @${d}`.padStart(16),
-      `geomean g @${d}`.padStart(16),
-    );
-  }
-  out.push(header.join(' '));
-  for (const p of summaryRows(spectra.periodsS)) {
-    const row = [Number(spectra.periodsS[p].toPrecision(3)).toString().padStart(8)];
-    for (const curve of spectra.curves) {
-      row.push(
-        (curve.rotd50MS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(15),
-        (curve.rotd100MS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(16),
-        (curve.geomeanMS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(16),
-      );
-    }
-    out.push(row.join(' '));
-  }
-  out.push(`(${spectra.periodsS.length} periods; --format json or csv for all of them)`);
-  return `${out.join('\n')}\n`;
+  outputs.text(options.out, text).write();
 }

@@ -2,7 +2,7 @@ import type { Command } from 'commander';
 import { CAUTION } from '../../base/caution.js';
 import { usageError } from '../../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
-import { writeFileAtomic } from '../../output/atomic.js';
+import { OutputSet } from '../../output/output-set.js';
 import { type SynthOptions, synthesizeRecord } from '../../record/synth.js';
 
 interface SynthCliOptions {
@@ -42,8 +42,7 @@ export function registerSynth(program: Command): void {
         name: options.name,
       };
       const text = synthText(synth);
-      if (options.out === undefined) process.stdout.write(text);
-      else writeFileAtomic(options.out, text);
+      new OutputSet().text(options.out, text).write();
     });
 }
 

@@ -5,7 +5,7 @@ import {
   parseResample,
   parseTaper,
   processingPlanFromOptions,
-} from '../../src/cli/processing-options.js';
+} from '../../../src/cli/options/processing.js';
 
 describe('processing options', () => {
   it('--baseline by name or order', () => {

@@ -1,8 +1,8 @@
 import { CAUTION } from '../base/caution.js';
-import { compareText } from './glob.js';
-import type { Shard } from './shard.js';
-import { STATISTICS_METHOD, type SuiteCurve, suiteStatistics } from './statistics.js';
-import type { SuiteSettings } from './work.js';
+import { compareText } from '../batch/glob.js';
+import type { Shard } from '../batch/shard.js';
+import { STATISTICS_METHOD, type SuiteCurve, suiteStatistics } from '../batch/statistics.js';
+import type { SuiteSettings } from '../batch/work.js';
 
 /** A record of the suite that was swept, with its PSA in g (per damping, per period). */
 export interface SuiteRecord {
@@ -59,4 +59,15 @@ export interface ShardJson {
 
 export function shardFileName(shard: Shard): string {
   return `shard-${shard.index}-of-${shard.count}.json`;
+}
+
+/** DIR/shard-i-of-N.json of one shard's run. */
+export function shardJson(
+  shard: Shard,
+  allFiles: string[],
+  settings: SuiteSettings,
+  records: SuiteRecord[],
+  failed: SuiteFailure[],
+): ShardJson {
+  return { caution: CAUTION, format: SHARD_FORMAT, shard, all_files: allFiles, settings, records, failed };
 }

@@ -1,9 +1,9 @@
 import type { Command } from 'commander';
-import { usageError } from '../base/errors.js';
-import { BASELINE_NAMES } from '../record/baseline.js';
-import { type FilterSpec, MAX_FILTER_ORDER } from '../record/filter.js';
-import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';
-import type { GroundRecord } from '../record/record.js';
+import { usageError } from '../../base/errors.js';
+import { BASELINE_NAMES } from '../../record/baseline.js';
+import { type FilterSpec, MAX_FILTER_ORDER } from '../../record/filter.js';
+import { applyProcessingPlan, type ProcessingPlan } from '../../record/process.js';
+import type { GroundRecord } from '../../record/record.js';
 
 /** Processing options as commander hands them over. */
 export interface ProcessingCliOptions {

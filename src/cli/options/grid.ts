@@ -1,0 +1,40 @@
+import type { Command } from 'commander';
+import { usageError } from '../../base/errors.js';
+import { defaultPeriodsS, MAX_OSCILLATORS, parseDampings, parsePeriods } from '../../oscillator/grid.js';
+import { parseMethod } from '../../oscillator/recurrence.js';
+
+export interface GridCliOptions {
+  periods?: string;
+  damping?: string;
+  method?: string;
+  force?: boolean;
+}
+
+/** Add --periods, --damping, --method and --force. */
+export function addGridOptions(command: Command): Command {
+  return command
+    .option(
+      '--periods <grid>',
+      'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01:10:120)',
+    )
+    .option('--damping <list>', 'damping ratios as fractions or percentages, e.g. 0.02,5%', '5%')
+    .option('--method <method>', 'newmark-average, newmark-linear or piecewise-exact', 'newmark-average')
+    .option('--force', `allow more than ${thousands(MAX_OSCILLATORS)} oscillators`);
+}
+
+/** 1000000 → "1,000,000" (toLocaleString would load the locale data at every start-up). */
+function thousands(value: number): string {
+  return String(value).replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+}
+
+/** The grid the options name; more than MAX_OSCILLATORS oscillators needs --force. */
+export function gridFromOptions(options: GridCliOptions) {
+  const periodsS = options.periods === undefined ? defaultPeriodsS() : parsePeriods(options.periods);
+  const dampings = parseDampings(options.damping ?? '5%');
+  const method = parseMethod(options.method ?? 'newmark-average');
+  const count = periodsS.length * dampings.length;
+  if (count > MAX_OSCILLATORS && !options.force) {
+    throw usageError(`${count} oscillators is more than ${MAX_OSCILLATORS}; add --force if you mean it`);
+  }
+  return { periodsS, dampings, method };
+}

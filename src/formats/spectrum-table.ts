@@ -1,0 +1,69 @@
+import { cautionLines } from '../base/caution.js';
+import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
+import type { Spectrum } from '../spectrum/spectrum.js';
+import type { TargetFit } from '../spectrum/target.js';
+import { dampingLabel } from './spectrum-csv.js';
+import { targetTableLines } from './target.js';
+
+/** A short table for the terminal: the caution first, then peaks at a few periods. */
+export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit, target?: TargetFit): string {
+  const out: string[] = [];
+  for (const line of cautionLines(92)) out.push(`! ${line}`);
+  out.push('');
+  const r = spectrum.record;
+  out.push(
+    `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dtS} s, PGA ${(r.pgaMS2 / STANDARD_GRAVITY_MS2).toFixed(4)} g`,
+  );
+  for (const step of r.processing) out.push(`        processed: ${step.description}`);
+  out.push(`method  ${METHOD_DESCRIPTIONS[spectrum.method]}`);
+  out.push('');
+  const perLength = 1 / LENGTH_UNITS[lengthUnit];
+  const header = ['T (s)'.padStart(8)];
+  for (const curve of spectrum.curves) {
+    const d = dampingLabel(curve.damping);
+    header.push(`SD ${lengthUnit} @${d}`.padStart(14), `PSA g @${d}`.padStart(12));
+  }
+  out.push(header.join(' '));
+  for (const p of summaryRows(spectrum.periodsS)) {
+    const row = [formatPeriod(spectrum.periodsS[p]).padStart(8)];
+    for (const curve of spectrum.curves) {
+      row.push(
+        (curve.sdM[p] * perLength).toPrecision(4).padStart(14),
+        (curve.psaMS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(12),
+      );
+    }
+    out.push(row.join(' '));
+  }
+  out.push('');
+  for (const curve of spectrum.curves) {
+    let peak = 0;
+    for (let p = 1; p < curve.psaMS2.length; p++) if (curve.psaMS2[p] > curve.psaMS2[peak]) peak = p;
+    out.push(
+      `peak PSA at ${dampingLabel(curve.damping)}: ${(curve.psaMS2[peak] / STANDARD_GRAVITY_MS2).toPrecision(4)} g at T = ${formatPeriod(spectrum.periodsS[peak])} s`,
+    );
+  }
+  out.push(`(${spectrum.periodsS.length} periods; --format json or csv for all of them)`);
+  if (target !== undefined) out.push('', ...targetTableLines(target));
+  return `${out.join('\n')}\n`;
+}
+
+/** Indices of the grid nearest to a set of round periods, for the summary. */
+export function summaryRows(periodsS: Float64Array): number[] {
+  if (periodsS.length <= 16) return Array.from(periodsS, (_, i) => i);
+  const targets = [0, 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5, 10];
+  const rows = new Set<number>();
+  for (const target of targets) {
+    if (target < periodsS[0] || target > periodsS[periodsS.length - 1]) continue;
+    let best = 0;
+    for (let i = 1; i < periodsS.length; i++) {
+      if (Math.abs(periodsS[i] - target) < Math.abs(periodsS[best] - target)) best = i;
+    }
+    rows.add(best);
+  }
+  return [...rows].sort((a, b) => a - b);
+}
+
+function formatPeriod(t: number): string {
+  return t === 0 ? '0' : Number(t.toPrecision(3)).toString();
+}

@@ -1,0 +1,218 @@
+import { analyseAnchorage } from '../anchorage/anchorage.js';
+import type { Equipment } from '../anchorage/equipment.js';
+import type { LengthUnit } from '../base/units.js';
+import { VERSION } from '../base/version.js';
+import { anchorageToJson } from '../formats/anchorage-json.js';
+import { anchorPlanInput } from '../formats/anchorage-plan.js';
+import { INFO_METHODS } from '../formats/info.js';
+import { spectrumToCsv } from '../formats/spectrum-csv.js';
+import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
+import { targetToJson } from '../formats/target.js';
+import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
+import {
+  anchorPlanSvg,
+  dampingFigure,
+  historiesFigure,
+  psaFigure,
+  psvFigure,
+  rotdFigure,
+  sdFigure,
+  tripartiteFigure,
+} from '../plot/index.js';
+import { integrateRecord } from '../record/integrate.js';
+import { groundMotionMeasures } from '../record/measures.js';
+import type { GroundRecord } from '../record/record.js';
+import { compareDamping } from '../spectrum/damping.js';
+import type { DesignSpectrum } from '../spectrum/design.js';
+import type { BuildingMode } from '../spectrum/floor.js';
+import { responseSpectrum, rotdThreads } from '../spectrum/spectrum.js';
+import { fitTarget, targetOverlay, targetRecord } from '../spectrum/target.js';
+import { rotDSpectraParallel } from '../threads/rotd-pool.js';
+import { equipmentDemand } from './equipment-demand.js';
+import { type ReportFigure, type ReportInput, renderReport } from './report.js';
+
+/** What a report is made of: records already read and processed, and the choices of its sections. */
+export interface ReportRequest {
+  /** The record as read (its facts are shown as read). */
+  read: GroundRecord;
+  /** The same record processed: the spectra are of this one. */
+  processed: GroundRecord;
+  grid: { periodsS: Float64Array; dampings: Float64Array; method: Method };
+  /** A target spectrum to fit (over `scaleRangeS`), the fit applied to every output with `applyScale`. */
+  target?: { spectrum: DesignSpectrum; rangeS?: [number, number]; apply?: boolean };
+  lengthUnit?: LengthUnit;
+  axes?: 'log' | 'linear';
+  /** The second horizontal component, processed alike: adds RotD50 and RotD100. */
+  pair?: { record: GroundRecord; angleStepDeg: number };
+  /** Equipment for anchorage demands, each with the file it was read from. */
+  equipment?: { file: string; value: Equipment }[];
+  /** The one-mode building of equipment above the base, and the floor spectrum's peak broadening. */
+  building?: BuildingMode | null;
+  broadening?: number | null;
+  title?: string;
+  notes?: string[];
+  /** The command line, folder and time the report states (the caller's: the library reads none). */
+  commandLine?: string[];
+  workingDirectory?: string;
+  generatedAt: string;
+}
+
+/**
+ * A whole report from library calls: the spectra (fitted to the target), the damping comparison,
+ * RotD, the anchorage demands and every figure, as files by name in the order they are listed,
+ * report.html last.
+ */
+export async function assembleReport(request: ReportRequest): Promise<Map<string, string>> {
+  const { processed, grid } = request;
+  const lengthUnit = request.lengthUnit ?? 'm';
+  const swept = responseSpectrum(processed, grid);
+  const { fit, spectrum } =
+    request.target === undefined
+      ? { fit: undefined, spectrum: swept }
+      : fitTarget(swept, request.target.spectrum, request.target);
+  const record = targetRecord(processed, fit);
+  const files = new Map<string, string>();
+  files.set('spectra.json', formatJson({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }));
+  files.set('spectra.csv', spectrumToCsv(spectrum, { lengthUnit, target: fit }));
+  const input: ReportInput = {
+    title: request.title ?? `Response spectra of ${record.name}`,
+    notes: request.notes ?? [],
+    read: {
+      name: request.read.name,
+      source: request.read.source,
+      dtS: request.read.dtS,
+      npts: request.read.accelMS2.length,
+      unitsRead: request.read.unitsRead,
+    },
+    spectrum,
+    measures: groundMotionMeasures(record),
+    lengthUnit,
+    spectrumFigures: spectrumFigures(record, spectrum, {
+      axes: request.axes ?? 'log',
+      lengthUnit,
+      methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
+      overlays: fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)],
+    }),
+    target: fit,
+    anchorage: [],
+    methods: methodStatements(spectrum.method),
+    version: VERSION,
+    commandLine: request.commandLine ?? [],
+    workingDirectory: request.workingDirectory ?? '',
+    generatedAt: request.generatedAt,
+    files: [],
+  };
+  if (spectrum.curves.length > 1 && spectrum.curves.some((c) => Math.abs(c.damping - 0.05) < 1e-12)) {
+    const comparison = compareDamping(spectrum);
+    const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
+    input.damping = {
+      comparison,
+      figure: {
+        file: 'damping.svg',
+        caption: 'PSA at each damping ratio relative to 5%',
+        svg: dampingFigure({ record: spectrum.record, methodDescription, comparison }),
+      },
+    };
+  }
+  if (request.pair !== undefined) {
+    const second = request.pair.record;
+    // One damping ratio (5% where the grid has it): the rotation sweep costs about 180 single sweeps.
+    const damping = grid.dampings.find((d) => Math.abs(d - 0.05) < 1e-12) ?? grid.dampings[0];
+    const samples = Math.max(processed.accelMS2.length, second.accelMS2.length);
+    const spectra = await rotDSpectraParallel(processed, second, {
+      ...grid,
+      dampings: [damping],
+      angleStepDeg: request.pair.angleStepDeg,
+      threads: rotdThreads(grid.periodsS.length, 1, samples),
+    });
+    input.rotd = {
+      spectra,
+      figure: {
+        file: 'rotd.svg',
+        caption: 'RotD50, RotD100 and geometric mean',
+        svg: rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] }),
+      },
+    };
+    input.methods.push(
+      `RotD spectra: at ζ = ${damping * 100}% only; both components processed alike and unscaled (a target scaling is not applied to them).`,
+    );
+  }
+  (request.equipment ?? []).forEach(({ file, value }, i) => {
+    const n = i + 1;
+    const building = request.building ?? null;
+    const demand = equipmentDemand(
+      value,
+      record,
+      building,
+      request.broadening ?? null,
+      grid.periodsS,
+      grid.method,
+    );
+    const analysis = analyseAnchorage(value, {
+      elastic: demand.elastic,
+      demand: demand.elastic === null ? 'code' : 'max',
+    });
+    analysis.assumptions.push(...demand.notes);
+    const figures: ReportFigure[] = [
+      {
+        file: `anchor-plan-${n}.svg`,
+        caption: `Anchor plan of equipment ${n} with the worst tensions`,
+        svg: anchorPlanSvg(anchorPlanInput(analysis)),
+      },
+    ];
+    if (demand.floor !== undefined) {
+      figures.unshift({
+        file: `floor-${n}.svg`,
+        caption: `Floor spectrum for equipment ${n}, with the ground PSA`,
+        svg: demand.floor,
+      });
+    }
+    const json = anchorageToJson(analysis);
+    files.set(`anchorage-${n}.json`, formatJson(json));
+    input.anchorage.push({ item: { json, file, motion: demand.motion }, figures });
+  });
+  const figures = [
+    ...input.spectrumFigures,
+    ...(input.damping ? [input.damping.figure] : []),
+    ...(input.rotd ? [input.rotd.figure] : []),
+    ...input.anchorage.flatMap((a) => a.figures),
+  ];
+  for (const f of figures) files.set(f.file, f.svg);
+  input.files = [...files.keys()];
+  files.set('report.html', renderReport(input));
+  return files;
+}
+
+function spectrumFigures(
+  record: GroundRecord,
+  spectrum: ReturnType<typeof responseSpectrum>,
+  shared: Parameters<typeof psaFigure>[1] & { lengthUnit: LengthUnit },
+): ReportFigure[] {
+  return [
+    { file: 'psa.svg', caption: 'Pseudo-acceleration spectra PSA', svg: psaFigure(spectrum, shared) },
+    { file: 'sd.svg', caption: 'Relative displacement spectra SD', svg: sdFigure(spectrum, shared) },
+    { file: 'psv.svg', caption: 'Pseudo-velocity spectra PSV', svg: psvFigure(spectrum, shared) },
+    {
+      file: 'tripartite.svg',
+      caption: 'Four-way (tripartite) plot of the same spectra',
+      svg: tripartiteFigure(spectrum, shared),
+    },
+    {
+      file: 'histories.svg',
+      caption: 'Ground acceleration, velocity and displacement of the processed record',
+      svg: historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: shared.lengthUnit }),
+    },
+  ];
+}
+
+/** The method statements of a report: the oscillators, the spectra and the record measures. */
+export function methodStatements(method: Method): string[] {
+  return [
+    `Oscillators: ${METHOD_DESCRIPTIONS[method]}; ground acceleration linear between samples; sub-steps where Δt is long against the period, and each peak refined by cubic Hermite interpolation between steps.`,
+    'Spectra: SD is the peak relative displacement; PSV = ωSD and PSA = ω²SD with ω = 2π/T; SV is the peak relative velocity and SA the peak absolute acceleration; at T = 0, PSA = PGA.',
+    ...Object.entries(INFO_METHODS)
+      .slice(0, 6)
+      .map(([key, text]) => `${key[0].toUpperCase()}${key.slice(1).replace(/_/g, ' ')}: ${text}.`),
+    'Units: SI inside the program (m, s, m/s², kN); g = 9.80665 m/s² at the edges.',
+  ];
+}

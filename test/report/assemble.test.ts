@@ -1,0 +1,50 @@
+/** A report from library calls alone (no CLI, no files): what a library user gets. */
+import { describe, expect, it } from 'vitest';
+import { CAUTION } from '../../src/base/caution.js';
+import { formatJson, spectrumToJson } from '../../src/formats/spectrum-json.js';
+import { synthesizeRecord } from '../../src/record/synth.js';
+import { assembleReport } from '../../src/report/assemble.js';
+import { asce716Spectrum } from '../../src/spectrum/design.js';
+import { responseSpectrum } from '../../src/spectrum/spectrum.js';
+
+const record = synthesizeRecord({ seed: 3, dtS: 0.01, durationS: 10, name: 'invented test record' });
+const grid = {
+  periodsS: Float64Array.from([0, 0.1, 0.3, 1, 3]),
+  dampings: Float64Array.from([0.02, 0.05]),
+  method: 'newmark-average' as const,
+};
+
+describe('assembleReport', () => {
+  it('gives the spectra, the figures and report.html, the spectra those of responseSpectrum', async () => {
+    const files = await assembleReport({
+      read: record,
+      processed: record,
+      grid,
+      generatedAt: '2026-01-01T00:00:00Z',
+    });
+    expect([...files.keys()]).toEqual([
+      'spectra.json',
+      'spectra.csv',
+      'psa.svg',
+      'sd.svg',
+      'psv.svg',
+      'tripartite.svg',
+      'histories.svg',
+      'damping.svg',
+      'report.html',
+    ]);
+    expect(files.get('spectra.json')).toBe(formatJson(spectrumToJson(responseSpectrum(record, grid))));
+    const html = files.get('report.html') ?? '';
+    expect(html).toContain(CAUTION);
+    expect(html).toContain('2026-01-01T00:00:00Z');
+  });
+
+  it('fits a target and applies it when asked, in the JSON it writes', async () => {
+    const target = { spectrum: asce716Spectrum({ sdsG: 1, sd1G: 0.6, tlS: 8 }), apply: true };
+    const files = await assembleReport({ read: record, processed: record, grid, target, generatedAt: 'now' });
+    const json = JSON.parse(files.get('spectra.json') ?? '{}');
+    expect(json.scaling.applied).toBe(true);
+    const unscaled = responseSpectrum(record, grid).curves[1].psaMS2[3] / 9.80665; // standard g
+    expect(json.spectra[1].psa_g[3]).toBeCloseTo(unscaled * json.scaling.factor, 9);
+  });
+});
