@@ -146,3 +146,22 @@ function checkSweep(
     if (!(z >= 0) || !Number.isFinite(z)) throw inputError(`damping ratios must be finite and ≥ 0, got ${z}`);
   }
 }
+
+/**
+ * Oscillator-steps (sub-steps included) from which `threads: 'auto'` splits a sweep over all
+ * cores. Below it, starting the worker threads and running their first groups cold costs more
+ * than the second core saves in a whole run; measured on `quakesweep spectrum` runs of a
+ * 40,000-sample record (the numbers are in the commit history).
+ */
+export const PARALLEL_MIN_OSCILLATOR_STEPS = 20_000_000;
+
+/** The threads a sweep runs on: `threads` itself, or for 'auto' (and unset) the rule above. */
+export function sweepThreads(
+  plan: SweepPlan,
+  samples: number,
+  threads: 'auto' | number | undefined,
+  cores: number,
+): number {
+  if (typeof threads === 'number') return threads;
+  return plannedSteps(plan, samples) >= PARALLEL_MIN_OSCILLATOR_STEPS ? cores : 1;
+}

@@ -1,6 +1,6 @@
 import { availableParallelism } from 'node:os';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import { plannedSteps, planSweep } from '../oscillator/plan.js';
+import { planSweep, sweepThreads } from '../oscillator/plan.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { type Peaks, type SweepKernel, sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord, ProcessingStep } from '../record/record.js';
@@ -53,13 +53,7 @@ export function responseSpectrum(record: GroundRecord, options: SpectrumOptions)
   return assembleSpectrum(record, peaks);
 }
 
-/**
- * Oscillator-steps (sub-steps included) from which `threads: 'auto'` splits a sweep over all
- * cores. Below it, starting the worker threads and running their first groups cold costs more
- * than the second core saves in a whole run; measured on `quakesweep spectrum` runs of a
- * 40,000-sample record (the numbers are in the commit history).
- */
-export const PARALLEL_MIN_OSCILLATOR_STEPS = 20_000_000;
+export { PARALLEL_MIN_OSCILLATOR_STEPS } from '../oscillator/plan.js';
 
 export interface ParallelSpectrumOptions extends SpectrumOptions {
   kernel?: SweepKernel;
@@ -79,12 +73,7 @@ export async function responseSpectrumParallel(
   options: ParallelSpectrumOptions,
 ): Promise<Spectrum> {
   const plan = planSweep(record.accelMS2, record.dtS, options);
-  const threads =
-    options.threads === undefined || options.threads === 'auto'
-      ? plannedSteps(plan, record.accelMS2.length) >= PARALLEL_MIN_OSCILLATOR_STEPS
-        ? availableParallelism()
-        : 1
-      : options.threads;
+  const threads = sweepThreads(plan, record.accelMS2.length, options.threads, availableParallelism());
   if (threads === 1)
     return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options, plan));
   // The thread modules load only for a split sweep.

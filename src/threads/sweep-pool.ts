@@ -1,13 +1,16 @@
 import { availableParallelism } from 'node:os';
 import { groupRunner } from '../oscillator/group-runner.js';
 import { PEAK_STRIDE } from '../oscillator/layout.js';
-import { plannedSteps, planSweep, type SweepPlan } from '../oscillator/plan.js';
+import { plannedSteps, planSweep, type SweepPlan, sweepThreads } from '../oscillator/plan.js';
 import { emptyPeaks, type Peaks, type SweepOptions, sweepOscillators } from '../oscillator/sweep.js';
 import { shared, ThreadTeam, workerScript } from './team.js';
 
 export interface ParallelSweepOptions extends SweepOptions {
-  /** Threads stepping oscillators, this one included; default all cores. 1 sweeps here alone. */
-  threads?: number;
+  /**
+   * Threads stepping oscillators, this one included: a number (1 sweeps here alone), or 'auto'
+   * (the default): all cores from PARALLEL_MIN_OSCILLATOR_STEPS oscillator-steps, one below.
+   */
+  threads?: 'auto' | number;
 }
 
 /**
@@ -192,11 +195,12 @@ export async function sweepOscillatorsParallel(
   dtS: number,
   options: ParallelSweepOptions,
 ): Promise<Peaks> {
-  const threads = options.threads ?? availableParallelism();
-  if (threads === 1) return sweepOscillators(accelMS2, dtS, options);
+  const plan = planSweep(accelMS2, dtS, options);
+  const threads = sweepThreads(plan, accelMS2.length, options.threads, availableParallelism());
+  if (threads === 1) return sweepOscillators(accelMS2, dtS, options, plan);
   const pool = new SweepPool(threads);
   try {
-    return await pool.sweep(accelMS2, dtS, options);
+    return await pool.sweep(accelMS2, dtS, options, plan);
   } finally {
     await pool.close();
   }

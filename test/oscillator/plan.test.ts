@@ -1,0 +1,43 @@
+import { describe, expect, it } from 'vitest';
+import {
+  PARALLEL_MIN_OSCILLATOR_STEPS,
+  plannedSteps,
+  planSweep,
+  sweepThreads,
+} from '../../src/oscillator/plan.js';
+import { synthesizeRecord } from '../../src/record/synth.js';
+
+// 10,001 samples: 2,400 oscillators make 24 million oscillator-steps, above the rule's 20 million.
+const record = synthesizeRecord({ seed: 5, dtS: 0.01, durationS: 100 });
+
+describe('plannedSteps', () => {
+  it('counts at least one step a sample for every oscillator (sub-steps only add)', () => {
+    const plan = planSweep(record.accelMS2, record.dtS, { periodsS: [0.1, 1, 3], dampings: [0.02, 0.05] });
+    expect(plannedSteps(plan, record.accelMS2.length)).toBeGreaterThanOrEqual(
+      6 * (record.accelMS2.length - 1),
+    );
+  });
+});
+
+describe('sweepThreads: the one thread rule of the CLI and the library', () => {
+  const small = planSweep(record.accelMS2, record.dtS, { periodsS: [0.5, 1], dampings: [0.05] });
+  const many = Array.from({ length: 400 }, (_, i) => 0.05 + i * 0.025);
+  const large = planSweep(record.accelMS2, record.dtS, {
+    periodsS: many,
+    dampings: [0, 0.02, 0.05, 0.1, 0.2, 0.3],
+  });
+
+  it('keeps a small sweep on this thread and splits a large one over every core', () => {
+    expect(plannedSteps(small, record.accelMS2.length)).toBeLessThan(PARALLEL_MIN_OSCILLATOR_STEPS);
+    expect(plannedSteps(large, record.accelMS2.length)).toBeGreaterThanOrEqual(PARALLEL_MIN_OSCILLATOR_STEPS);
+    for (const threads of ['auto', undefined] as const) {
+      expect(sweepThreads(small, record.accelMS2.length, threads, 8)).toBe(1);
+      expect(sweepThreads(large, record.accelMS2.length, threads, 8)).toBe(8);
+    }
+  });
+
+  it('takes a number of threads as given', () => {
+    expect(sweepThreads(small, record.accelMS2.length, 3, 8)).toBe(3);
+    expect(sweepThreads(large, record.accelMS2.length, 1, 8)).toBe(1);
+  });
+});
