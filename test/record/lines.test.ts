@@ -295,12 +295,15 @@ describe('lines longer than 1,000,000 characters', () => {
     ['a comment', `0,1\n# ${'x'.repeat(MAX)}\n0.1,2\n`, 2],
     ['spaces', `0 1\n${' '.repeat(MAX + 1)}\n0.1 2\n`, 2],
     ['separators', `0,1\n0.1,2${','.repeat(MAX)}\n`, 2],
-  ])('refuses %s longer than the limit, though the limit in bytes does not count it', async (_, text, line) => {
-    const options = { units: 'g' as const };
-    const refused = { error: LONG_LINE.replace('%d', String(line)), kind: 'input', line };
-    expect(await outcome(() => readRecordText(text, { ...options, source: SOURCE }))).toEqual(refused);
-    expect(await fromChunks(pieces(text, 65536), options)).toEqual(refused);
-  });
+  ])(
+    'refuses %s longer than the limit, though the limit in bytes does not count it',
+    async (_, text, line) => {
+      const options = { units: 'g' as const };
+      const refused = { error: LONG_LINE.replace('%d', String(line)), kind: 'input', line };
+      expect(await outcome(() => readRecordText(text, { ...options, source: SOURCE }))).toEqual(refused);
+      expect(await fromChunks(pieces(text, 65536), options)).toEqual(refused);
+    },
+  );
 
   it('refuses a line that never ends once it passes the limit, without reading on', async () => {
     for (const [before, line] of [
