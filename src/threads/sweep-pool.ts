@@ -1,8 +1,13 @@
 import { availableParallelism } from 'node:os';
 import { groupRunner } from '../oscillator/group-runner.js';
-import { PEAK_STRIDE } from '../oscillator/layout.js';
 import { plannedSteps, planSweep, type SweepPlan } from '../oscillator/plan.js';
-import { emptyPeaks, type Peaks, type SweepOptions, sweepOscillators } from '../oscillator/sweep.js';
+import {
+  emptyPeaks,
+  type Peaks,
+  type SweepOptions,
+  storeGroup,
+  sweepOscillators,
+} from '../oscillator/sweep.js';
 import { shared, ThreadTeam, workerScript } from './team.js';
 
 export interface ParallelSweepOptions extends SweepOptions {
@@ -13,7 +18,7 @@ export interface ParallelSweepOptions extends SweepOptions {
 /**
  * A job as the threads share it: the record, the order in which groups are claimed, a counter
  * that hands out the next group (Atomics.add, so every group runs exactly once), and the result
- * arrays sdM, svMS, saMS2 one after the other. All buffers are SharedArrayBuffers.
+ * arrays. All buffers are SharedArrayBuffers.
  */
 export interface SharedSweepJob {
   accelMS2: Float64Array;
@@ -21,7 +26,7 @@ export interface SharedSweepJob {
   options: SweepOptions;
   order: Int32Array;
   counter: Int32Array;
-  results: Float64Array;
+  peaks: Pick<Peaks, 'sdM' | 'svMS' | 'saMS2'>;
   /** The calling thread's plan, sent along so that no worker plans the sweep again. */
   plan: SweepPlan;
 }
@@ -32,20 +37,13 @@ export interface SharedSweepJob {
  * its own coefficients and the record, so which thread steps a group changes no bit.
  */
 export function runClaimedGroups(job: SharedSweepJob, plan: SweepPlan): void {
-  const count = plan.periodsS.length * plan.dampings.length;
   let runner: ReturnType<typeof groupRunner> | undefined;
   for (;;) {
     const next = Atomics.add(job.counter, 0, 1);
     if (next >= job.order.length) return;
     runner ??= groupRunner(job.accelMS2, plan, job.options.kernel ?? 'auto');
     const group = plan.groups[job.order[next]];
-    const values = runner(group);
-    for (let g = 0; g < group.length; g++) {
-      const index = group[g].index;
-      job.results[index] = values[PEAK_STRIDE * g];
-      job.results[count + index] = values[PEAK_STRIDE * g + 1];
-      job.results[2 * count + index] = values[PEAK_STRIDE * g + 2];
-    }
+    storeGroup(job.peaks, group, runner(group));
   }
 }
 
@@ -104,34 +102,23 @@ export class SweepPool {
     plan: SweepPlan = planSweep(accelMS2, dtS, options),
   ): Promise<Peaks> {
     const peaks = emptyPeaks(plan);
-    const count = plan.periodsS.length * plan.dampings.length;
     // Costliest groups first, so that the last groups claimed are short ones.
     const costs = plan.groups.map((group) => group.length * group[0].substeps);
     const order = new Int32Array(new SharedArrayBuffer(4 * plan.groups.length));
-    Array.from(plan.groups, (_, i) => i)
-      .sort((a, b) => costs[b] - costs[a] || a - b)
-      .forEach((group, i) => {
-        order[i] = group;
-      });
+    order.set(Array.from(plan.groups, (_, i) => i).sort((a, b) => costs[b] - costs[a] || a - b));
     const job: SharedSweepJob = {
       accelMS2: shared(accelMS2),
       dtS,
       options: { ...options, periodsS: plan.periodsS, dampings: plan.dampings },
       order,
       counter: new Int32Array(new SharedArrayBuffer(4)),
-      results: new Float64Array(new SharedArrayBuffer(8 * 3 * count)),
+      peaks: { sdM: shared(peaks.sdM), svMS: shared(peaks.svMS), saMS2: shared(peaks.saMS2) },
       plan,
     };
     await this.team.run(job, () => runClaimedGroups(job, plan));
-    for (let d = 0; d < plan.dampings.length; d++) {
-      for (let p = 0; p < plan.periodsS.length; p++) {
-        const index = d * plan.periodsS.length + p;
-        if (plan.periodsS[p] === 0) continue;
-        peaks.sdM[index] = job.results[index];
-        peaks.svMS[index] = job.results[count + index];
-        peaks.saMS2[index] = job.results[2 * count + index];
-      }
-    }
+    peaks.sdM.set(job.peaks.sdM);
+    peaks.svMS.set(job.peaks.svMS);
+    peaks.saMS2.set(job.peaks.saMS2);
     peaks.oscillatorSteps = plannedSteps(plan, accelMS2.length);
     return peaks;
   }

@@ -73,7 +73,6 @@ let compiled: WebAssembly.Module | undefined;
 
 function sweepModule(): WebAssembly.Module {
   if (compiled === undefined) {
-    // Buffer's decoder: a loop over atob's characters ran cold, then was compiled, in every thread.
     compiled = new WebAssembly.Module(Buffer.from(SWEEP_WASM_BASE64, 'base64'));
   }
   return compiled;
