@@ -68,13 +68,9 @@ export function runClaimedRotD(job: SharedRotDJob): void {
  * large grids (starting a worker is costly next to a small job: keep a pool for a suite). Close it
  * when done so that the process can exit.
  */
-export class RotDPool {
-  readonly threads: number;
-  private readonly team: ThreadTeam;
-
+export class RotDPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
-    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'threads', 'rotd-worker.js'));
-    this.threads = threads;
+    super(threads, workerScript(import.meta.url, 'threads', 'rotd-worker.js'));
   }
 
   /** rotDSpectra of the pair, bit for bit, computed by all the pool's threads. */
@@ -86,7 +82,7 @@ export class RotDPool {
       counter: new Int32Array(new SharedArrayBuffer(4)),
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * work.dampings.length * periods)),
     };
-    await this.team.run(job, () => runClaimedRotD(job));
+    await this.run(job, () => runClaimedRotD(job));
     const curves = Array.from(work.dampings, (damping, d) => {
       const curve: RotDCurve = {
         damping,
@@ -103,10 +99,5 @@ export class RotDPool {
       return curve;
     });
     return finishRotD(first, second, work, curves);
-  }
-
-  /** Stop the worker threads. */
-  async close(): Promise<void> {
-    await this.team.close();
   }
 }

@@ -82,13 +82,9 @@ export function runClaimedRecords(job: SharedRecordsJob): void {
  * record after another, each split over all its threads, or many records at once, each on one
  * thread); close it when done so that the process can exit.
  */
-export class SweepPool {
-  readonly threads: number;
-  private readonly team: ThreadTeam;
-
+export class SweepPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
-    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'threads', 'sweep-worker.js'));
-    this.threads = threads;
+    super(threads, workerScript(import.meta.url, 'threads', 'sweep-worker.js'));
   }
 
   /**
@@ -115,7 +111,7 @@ export class SweepPool {
       peaks: { sdM: shared(peaks.sdM), svMS: shared(peaks.svMS), saMS2: shared(peaks.saMS2) },
       plan,
     };
-    await this.team.run(job, () => runClaimedGroups(job, plan));
+    await this.run(job, () => runClaimedGroups(job, plan));
     peaks.sdM.set(job.peaks.sdM);
     peaks.svMS.set(job.peaks.svMS);
     peaks.saMS2.set(job.peaks.saMS2);
@@ -147,7 +143,7 @@ export class SweepPool {
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * count * records.length)),
       steps: new Float64Array(new SharedArrayBuffer(8 * records.length)),
     };
-    await this.team.run(job, () => runClaimedRecords(job));
+    await this.run(job, () => runClaimedRecords(job));
     return records.map((_, i) => {
       const at = i * 3 * count;
       return {
@@ -160,11 +156,6 @@ export class SweepPool {
         oscillatorSteps: job.steps[i],
       };
     });
-  }
-
-  /** Stop the worker threads. */
-  async close(): Promise<void> {
-    await this.team.close();
   }
 }
 
