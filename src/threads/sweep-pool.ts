@@ -4,6 +4,7 @@ import { plannedSteps, planSweep, type SweepPlan } from '../oscillator/plan.js';
 import {
   emptyPeaks,
   type Peaks,
+  type SweepKernel,
   type SweepOptions,
   storeGroup,
   sweepOscillators,
@@ -16,14 +17,13 @@ export interface ParallelSweepOptions extends SweepOptions {
 }
 
 /**
- * A job as the threads share it: the record, the order in which groups are claimed, a counter
- * that hands out the next group (Atomics.add, so every group runs exactly once), and the result
- * arrays. All buffers are SharedArrayBuffers.
+ * A job as the threads share it: the record, the kernel, the order in which groups are claimed, a
+ * counter that hands out the next group (Atomics.add, so every group runs exactly once), and the
+ * result arrays. All buffers are SharedArrayBuffers.
  */
 export interface SharedSweepJob {
   accelMS2: Float64Array;
-  dtS: number;
-  options: SweepOptions;
+  kernel: SweepKernel;
   order: Int32Array;
   counter: Int32Array;
   peaks: Pick<Peaks, 'sdM' | 'svMS' | 'saMS2'>;
@@ -36,13 +36,13 @@ export interface SharedSweepJob {
  * kernel and write their peaks into the shared results. Each oscillator's peaks depend only on
  * its own coefficients and the record, so which thread steps a group changes no bit.
  */
-export function runClaimedGroups(job: SharedSweepJob, plan: SweepPlan): void {
+export function runClaimedGroups(job: SharedSweepJob): void {
   let runner: ReturnType<typeof groupRunner> | undefined;
   for (;;) {
     const next = Atomics.add(job.counter, 0, 1);
     if (next >= job.order.length) return;
-    runner ??= groupRunner(job.accelMS2, plan, job.options.kernel ?? 'auto');
-    const group = plan.groups[job.order[next]];
+    runner ??= groupRunner(job.accelMS2, job.plan, job.kernel);
+    const group = job.plan.groups[job.order[next]];
     storeGroup(job.peaks, group, runner(group));
   }
 }
@@ -104,14 +104,13 @@ export class SweepPool extends ThreadTeam {
     order.set(Array.from(plan.groups, (_, i) => i).sort((a, b) => costs[b] - costs[a] || a - b));
     const job: SharedSweepJob = {
       accelMS2: shared(accelMS2),
-      dtS,
-      options: { ...options, periodsS: plan.periodsS, dampings: plan.dampings },
+      kernel: options.kernel ?? 'auto',
       order,
       counter: new Int32Array(new SharedArrayBuffer(4)),
       peaks: { sdM: shared(peaks.sdM), svMS: shared(peaks.svMS), saMS2: shared(peaks.saMS2) },
       plan,
     };
-    await this.run(job, () => runClaimedGroups(job, plan));
+    await this.run(job, () => runClaimedGroups(job));
     peaks.sdM.set(job.peaks.sdM);
     peaks.svMS.set(job.peaks.svMS);
     peaks.saMS2.set(job.peaks.saMS2);
@@ -160,10 +159,9 @@ export class SweepPool extends ThreadTeam {
 }
 
 /**
- * sweepOscillators split over `threads` threads (default: all cores): worker threads and this
- * one claim groups of oscillators from a shared counter, the record being shared once through a
- * SharedArrayBuffer. The peaks are the same, bit for bit, as those of sweepOscillators with the
- * same kernel. Starting workers costs more than a small sweep: use it for large sweeps only.
+ * sweepOscillators on a SweepPool of `threads` (default: all cores), started for the call and
+ * closed after: the same peaks, bit for bit. Starting workers costs more than a small sweep: use
+ * it for large sweeps only.
  */
 export async function sweepOscillatorsParallel(
   accelMS2: Float64Array,
