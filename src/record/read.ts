@@ -134,7 +134,7 @@ class StreamText {
 
   decode(chunk: string | Uint8Array): string {
     if (typeof chunk === 'string') return this.flush() + wellFormed(chunk); // bytes cut short before a string are a bad character
-    let bytes = toBuffer(chunk);
+    let bytes = Buffer.from(chunk.buffer, chunk.byteOffset, chunk.byteLength);
     if (this.decoder === undefined) {
       this.held.push(bytes);
       bytes = Buffer.concat(this.held);
@@ -160,10 +160,6 @@ class StreamText {
     this.decoder = new TextDecoder(utf16 ? 'utf-16le' : 'utf-8', { ignoreBOM: true });
     this.ascii = !utf16;
   }
-}
-
-function toBuffer(chunk: Uint8Array): Buffer {
-  return Buffer.isBuffer(chunk) ? chunk : Buffer.from(chunk.buffer, chunk.byteOffset, chunk.byteLength);
 }
 
 /**
