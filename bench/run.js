@@ -49,8 +49,20 @@ async function timed(fn, repeat = REPEAT) {
   return { ms: median(times), cpuMs: median(cpu), result };
 }
 const mega = (steps, ms) => (steps / ms / 1e3).toFixed(0);
+/** One line of the table; with `steps`, its rate in million steps per second beside it. */
 function row(job, variant, fields) {
-  rows.push({ job, variant, ...fields });
+  rows.push({ job, variant, ...fields, mps: fields.steps && mega(fields.steps, fields.ms) });
+}
+/**
+ * A new pool's first job, then its median after POOL_WARM_JOBS jobs: a pool's first jobs run
+ * slower, its threads' code being still cold. The pool is closed after.
+ */
+async function pooled(pool, job, repeat = REPEAT) {
+  const first = await timed(job, 1);
+  for (let i = 1; i < POOL_WARM_JOBS; i++) await job();
+  const all = await timed(job, repeat);
+  await pool.close();
+  return { all, note: `after ${POOL_WARM_JOBS} jobs (first job ${first.ms.toFixed(0)} ms)` };
 }
 function writeCsv(path, record) {
   const lines = ['time_s,accel_g'];
@@ -85,28 +97,19 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
     // Warm-up (JIT, wasm tier-up): the first runs of a process are slower.
     for (let i = 0; i < 3; i++) sweepOscillators(standard.accelMS2, standard.dtS, options);
     const one = await timed(() => sweepOscillators(standard.accelMS2, standard.dtS, options));
-    const steps = nominal;
     const executed = one.result.oscillatorSteps;
     if (method === 'newmark-average') kernelOneMs[kernel] = one.ms;
     row('standard', `${method} ${kernel} 1 thread`, {
       ms: one.ms,
-      steps,
-      mps: mega(steps, one.ms),
+      steps: nominal,
       note: `executed ${executed} (${mega(executed, one.ms)} M/s); CPU ${one.cpuMs.toFixed(0)} ms`,
     });
-    // A pool's first jobs run slower (its threads' code is still cold; measured: the first
-    // jobs of a new pool took about 1.7 times as long as its later ones), so the steady figure
-    // is taken after POOL_WARM_JOBS jobs, and the first job of a new pool is shown beside it.
     const pool = new SweepPool(cores);
-    const first = await timed(() => pool.sweep(standard.accelMS2, standard.dtS, options), 1);
-    for (let i = 1; i < POOL_WARM_JOBS; i++) await pool.sweep(standard.accelMS2, standard.dtS, options);
-    const all = await timed(() => pool.sweep(standard.accelMS2, standard.dtS, options));
-    await pool.close();
+    const { all, note } = await pooled(pool, () => pool.sweep(standard.accelMS2, standard.dtS, options));
     row('standard', `${method} ${kernel} ${cores} threads`, {
       ms: all.ms,
-      steps,
-      mps: mega(steps, all.ms),
-      note: `×${(one.ms / all.ms).toFixed(2)} after ${POOL_WARM_JOBS} jobs (first job ${first.ms.toFixed(0)} ms); CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
+      steps: nominal,
+      note: `×${(one.ms / all.ms).toFixed(2)} ${note}; CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
     });
   }
 }
@@ -138,7 +141,7 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
   const startup = median(startups);
   variants.forEach((extra, v) => {
     const ms = median(runs[v]);
-    // Issue 8's whole-job target: at most 1.5 × the kernel's own time (one thread) + Node's start-up.
+    // The whole-job target: at most 1.5 × the kernel's own time (one thread) + Node's start-up.
     const kernel = extra.includes('js') ? 'js' : 'wasm';
     const ratio = `; (CLI − start-up) / ${kernel} kernel ${((ms - startup) / kernelOneMs[kernel]).toFixed(2)}${extra.length === 0 ? ' (target ≤ 1.5)' : ''}`;
     row('standard CLI', `quakesweep spectrum ${extra.join(' ') || '(defaults)'}`, {
@@ -151,9 +154,8 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
 // RotD: two components, 40 periods, 180 angles; the loop over angles in each kernel, on one
 // thread and with the periods dealt out over all cores. Steps count each angle's rotated
 // oscillator (nominal: periods × samples × angles).
+const [first, second] = [3001, 3002].map((seed) => synthesizeRecord({ seed, dtS: 0.01, durationS: 79.99 }));
 {
-  const first = synthesizeRecord({ seed: 3001, dtS: 0.01, durationS: 79.99 });
-  const second = synthesizeRecord({ seed: 3002, dtS: 0.01, durationS: 79.99 });
   const rotd = { periodsS: logSpaced(0.05, 10, QUICK ? 10 : 40), dampings: [0.05] };
   const n = first.accelMS2.length;
   const nominalRotd = rotd.periodsS.length * n * 180;
@@ -161,74 +163,68 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
     const options = { ...rotd, kernel };
     for (let i = 0; i < 3; i++) rotDSpectra(first, second, options); // warm-up
     const alone = await timed(() => rotDSpectra(first, second, options), QUICK ? 1 : REPEAT);
-    row('RotD', `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles, ${kernel} 1 thread`, {
+    const job = `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles, ${kernel}`;
+    row('RotD', `${job} 1 thread`, {
       ms: alone.ms,
       steps: nominalRotd,
-      mps: mega(nominalRotd, alone.ms),
       note: `rotated oscillator-steps; CPU ${alone.cpuMs.toFixed(0)} ms`,
     });
-    // A pool kept for a suite of pairs, warmed as the standard job's pool is.
+    // A pool kept for a suite of pairs.
     const pool = new RotDPool(cores);
-    const firstJob = await timed(() => pool.rotd(first, second, options), 1);
-    for (let i = 1; i < POOL_WARM_JOBS; i++) await pool.rotd(first, second, options);
-    const all = await timed(() => pool.rotd(first, second, options), QUICK ? 1 : REPEAT);
-    await pool.close();
-    row('RotD', `2 × ${n} samples, ${rotd.periodsS.length} periods, 180 angles, ${kernel} ${cores} threads`, {
+    const { all, note } = await pooled(pool, () => pool.rotd(first, second, options), QUICK ? 1 : REPEAT);
+    row('RotD', `${job} ${cores} threads`, {
       ms: all.ms,
       steps: nominalRotd,
-      mps: mega(nominalRotd, all.ms),
-      note: `×${(alone.ms / all.ms).toFixed(2)} after ${POOL_WARM_JOBS} jobs (first job ${firstJob.ms.toFixed(0)} ms); CPU ${all.cpuMs.toFixed(0)} ms`,
+      note: `×${(alone.ms / all.ms).toFixed(2)} ${note}; CPU ${all.cpuMs.toFixed(0)} ms`,
     });
   }
 }
 
 // A batch of 50 records in the library: the sweep alone, one record after another, and in a pool
 // of all cores (the batch command, which also reads and writes every record, is timed below).
-{
-  const records = Array.from({ length: 50 }, (_, i) =>
-    synthesizeRecord({ seed: 5000 + i, dtS: 0.005, durationS: 40 + (i % 7) }),
+const records = Array.from({ length: 50 }, (_, i) =>
+  synthesizeRecord({ seed: 5000 + i, dtS: 0.005, durationS: 40 + (i % 7) }),
+);
+for (const kernel of ['wasm', 'js']) {
+  const batch = { periodsS: defaultPeriodsS(), dampings: [0.05], kernel };
+  let steps = 0;
+  let nominalBatch = 0;
+  for (const r of records) sweepOscillators(r.accelMS2, r.dtS, batch); // warm-up
+  const alone = await timed(
+    () => {
+      steps = 0;
+      nominalBatch = 0;
+      for (const r of records) {
+        steps += sweepOscillators(r.accelMS2, r.dtS, batch).oscillatorSteps;
+        nominalBatch += batch.periodsS.length * r.accelMS2.length;
+      }
+    },
+    QUICK ? 1 : REPEAT,
   );
-  for (const kernel of ['wasm', 'js']) {
-    const batch = { periodsS: defaultPeriodsS(), dampings: [0.05], kernel };
-    let steps = 0;
-    let nominalBatch = 0;
-    for (const r of records) sweepOscillators(r.accelMS2, r.dtS, batch); // warm-up
-    const alone = await timed(
-      () => {
-        steps = 0;
-        nominalBatch = 0;
-        for (const r of records) {
-          steps += sweepOscillators(r.accelMS2, r.dtS, batch).oscillatorSteps;
-          nominalBatch += batch.periodsS.length * r.accelMS2.length;
-        }
-      },
-      QUICK ? 1 : REPEAT,
-    );
-    row('batch 50', `${kernel} 1 thread`, {
-      ms: alone.ms,
-      steps: nominalBatch,
-      mps: mega(nominalBatch, alone.ms),
-      note: `executed ${steps}`,
-    });
-    // The records dealt out whole to the pool's threads (SweepPool.sweepRecords).
-    const pool = new SweepPool(cores);
-    for (let i = 0; i < 3; i++) await pool.sweepRecords(records, batch); // warm-up
-    const pooled = await timed(() => pool.sweepRecords(records, batch), QUICK ? 1 : REPEAT);
-    await pool.close();
-    row('batch 50', `${kernel} pool of ${cores} threads, records dealt out whole`, {
-      ms: pooled.ms,
-      steps: nominalBatch,
-      mps: mega(nominalBatch, pooled.ms),
-      note: `×${(alone.ms / pooled.ms).toFixed(2)}; CPU ${pooled.cpuMs.toFixed(0)} ms, all threads`,
-    });
-  }
+  row('batch 50', `${kernel} 1 thread`, {
+    ms: alone.ms,
+    steps: nominalBatch,
+    note: `executed ${steps}`,
+  });
+  // The records dealt out whole to the pool's threads (SweepPool.sweepRecords).
+  const pool = new SweepPool(cores);
+  for (let i = 0; i < 3; i++) await pool.sweepRecords(records, batch); // warm-up
+  const dealt = await timed(() => pool.sweepRecords(records, batch), QUICK ? 1 : REPEAT);
+  await pool.close();
+  row('batch 50', `${kernel} pool of ${cores} threads, records dealt out whole`, {
+    ms: dealt.ms,
+    steps: nominalBatch,
+    note: `×${(alone.ms / dealt.ms).toFixed(2)}; CPU ${dealt.cpuMs.toFixed(0)} ms, all threads`,
+  });
 }
 
 // RotD and the batch through the CLI: the whole process's wall time and peak memory.
 {
-  const pair = [3001, 3002].map((seed) => synthesizeRecord({ seed, dtS: 0.01, durationS: 79.99 }));
-  const paths = pair.map((_, i) => join(folder, `pair-${i + 1}.csv`));
-  for (const [i, r] of pair.entries()) writeCsv(paths[i], r);
+  const paths = [first, second].map((record, i) => {
+    const path = join(folder, `pair-${i + 1}.csv`);
+    writeCsv(path, record);
+    return path;
+  });
   const rotdArgs = [cli, 'rotd', ...paths, '--units', 'g', '--periods', '0.05:10:40', '--damping', '5%'];
   for (const threads of ['1', String(cores)]) {
     const args = [...rotdArgs, '--threads', threads, '--out', join(folder, 'rotd.json')];
@@ -238,26 +234,11 @@ for (const method of QUICK ? ['newmark-average'] : ['newmark-average', 'piecewis
       note: `peak ${peakKb(args) ?? '?'} KB`,
     });
   }
-  for (let i = 0; i < 50; i++) {
-    writeCsv(
-      join(folder, `batch-${String(i).padStart(2, '0')}.csv`),
-      synthesizeRecord({ seed: 5000 + i, dtS: 0.005, durationS: 40 + (i % 7) }),
-    );
-  }
+  for (const [i, r] of records.entries())
+    writeCsv(join(folder, `batch-${String(i).padStart(2, '0')}.csv`), r);
+  const batchArgs = [cli, 'batch', join(folder, 'batch-*.csv'), '--units', 'g', '--damping', '5%'];
   for (const jobs of ['1', String(cores)]) {
-    const args = [
-      cli,
-      'batch',
-      join(folder, 'batch-*.csv'),
-      '--units',
-      'g',
-      '--damping',
-      '5%',
-      '--jobs',
-      jobs,
-      '--out',
-      join(folder, `batch-out-${jobs}`),
-    ];
+    const args = [...batchArgs, '--jobs', jobs, '--out', join(folder, `batch-out-${jobs}`)];
     const runs = Array.from({ length: QUICK ? 1 : REPEAT }, () => childMs(args));
     row('batch CLI', `quakesweep batch (50 records) --jobs ${jobs}`, {
       ms: median(runs),

@@ -1,12 +1,9 @@
 // Bundles the command-line program into one CommonJS file, dist/cli/quakesweep.cjs, and makes
 // V8's code cache for it, dist/cli/quakesweep.cjs.cache. Runs after tsc in `npm run build`; the
 // bundle is made from tsc's output (dist/cli/main.js), so it holds the same code, and it is the
-// only way the launcher (bin/load-cli.js) runs the program.
-//
-// Why: a fresh Node 20 process that ran the CLI from dist/ resolved and compiled about forty ES
-// modules and commander before the command began. One file loaded with a code cache made after a
-// run of the command skips the module resolution and the compilation of every function that run
-// used.
+// only way the launcher (bin/load-cli.js) runs the program. Why: one file loaded with a code cache
+// made after a run of the command skips resolving some forty ES modules and compiling every
+// function that run used.
 //
 // The cache holds V8's bytecode for this Node version and V8 flags; V8 checks both and the
 // source's length, and a cache that does not fit is refused and the file compiled as usual (the

@@ -19,8 +19,7 @@ export function expm(matrix: Float64Array, n: number): Float64Array {
   const scaled = new Float64Array(size);
   for (let i = 0; i < size; i++) scaled[i] = matrix[i] * scale;
 
-  // Four arrays for the whole series (a product is written into the spare one, then swapped):
-  // arrays made anew for each term would be most of the time of a piecewise-exact sweep's plan.
+  // No array made per term: each product is written into the spare one, then swapped.
   let result: Float64Array = identity(n);
   let term: Float64Array = identity(n);
   let spare: Float64Array = new Float64Array(size);

@@ -27,32 +27,23 @@ export function groupRunner(
 ): (group: PlannedOscillator[]) => Float64Array {
   const values = new Float64Array(GROUP_WIDTH * PEAK_STRIDE);
   const packed = new Float64Array(GROUP_WIDTH * COEFFICIENT_STRIDE);
-  const pack = (group: PlannedOscillator[], stepS: number) => {
-    for (let g = 0; g < group.length; g++) {
-      packCoefficients(packed, g, group[g], plan.method, stepS, plan.bounds, plan.prewarp);
-    }
-  };
-  if (resolveKernel(kernel) === 'wasm') {
-    const sweeper = new WasmSweeper(accelMS2);
-    // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),
-    // unless sub-steps are composed.
-    const average = plan.method === 'newmark-average';
-    return (group) => {
-      const substeps = group[0].substeps;
-      const stepS = plan.dtS / substeps;
-      pack(group, stepS);
-      const symmetric = average && group.every((o) => o.composed === 1);
-      sweeper.run(packed, group.length, substeps, stepS, symmetric, values);
-      return values;
-    };
-  }
+  const sweeper = resolveKernel(kernel) === 'wasm' ? new WasmSweeper(accelMS2) : undefined;
   return (group) => {
     const substeps = group[0].substeps;
     const stepS = plan.dtS / substeps;
-    pack(group, stepS);
     for (let g = 0; g < group.length; g++) {
-      const row = packed.subarray(g * COEFFICIENT_STRIDE, (g + 1) * COEFFICIENT_STRIDE);
-      referencePeaks(accelMS2, substeps, stepS, row, values, g * PEAK_STRIDE);
+      packCoefficients(packed, g, group[g], plan.method, stepS, plan.bounds, plan.prewarp);
+    }
+    if (sweeper !== undefined) {
+      // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),
+      // unless sub-steps are composed.
+      const symmetric = plan.method === 'newmark-average' && group.every((o) => o.composed === 1);
+      sweeper.run(packed, group.length, substeps, stepS, symmetric, values);
+    } else {
+      for (let g = 0; g < group.length; g++) {
+        const row = packed.subarray(g * COEFFICIENT_STRIDE, (g + 1) * COEFFICIENT_STRIDE);
+        referencePeaks(accelMS2, substeps, stepS, row, values, g * PEAK_STRIDE);
+      }
     }
     return values;
   };

@@ -87,15 +87,10 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups };
 }
 
-/** Oscillator-steps a planned group executes over a record of `samples` values. */
-export function groupSteps(group: PlannedOscillator[], samples: number): number {
-  return group.length * group[0].substeps * (samples - 1);
-}
-
 /** Oscillator-steps the whole plan executes over a record of `samples` values. */
 export function plannedSteps(plan: SweepPlan, samples: number): number {
   let steps = 0;
-  for (const group of plan.groups) steps += groupSteps(group, samples);
+  for (const group of plan.groups) steps += group.length * group[0].substeps * (samples - 1);
   return steps;
 }
 

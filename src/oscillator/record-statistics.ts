@@ -39,7 +39,3 @@ export function recordStatistics(
 export function recordRoughness(accelMS2: Float64Array): number {
   return recordStatistics(accelMS2, 1).roughness;
 }
-
-export function groundBounds(accelMS2: Float64Array, dtS: number): GroundBounds {
-  return recordStatistics(accelMS2, dtS).bounds;
-}

@@ -58,8 +58,8 @@ export function stepCoefficients(
 /**
  * Newmark-β (Newmark 1959; Chopra, Dynamics of Structures, §5.4) with equilibrium enforced at
  * every step, so the relative acceleration a_n = −p_n − 2ζωv_n − ω²u_n is not carried as state.
- * The step is linear in (u_n, v_n, p_n, p_{n+1}); its coefficients are read off by stepping the
- * four unit vectors. The denominator 1 + γ·2ζωh + βω²h² is positive for every ζ ≥ 0.
+ * The step is linear in (u_n, v_n, p_n, p_{n+1}), so its coefficients are read off (readOff).
+ * The denominator 1 + γ·2ζωh + βω²h² is positive for every ζ ≥ 0.
  */
 export function newmarkCoefficients(
   omegaRadS: number,
@@ -80,6 +80,11 @@ export function newmarkCoefficients(
     const v1 = v + h * ((1 - gamma) * a0 + gamma * a1);
     return [u1, v1];
   };
+  return readOff(step);
+}
+
+/** The coefficients of a step that is linear in (u, v, p0, p1), read off by stepping the four unit vectors. */
+function readOff(step: (u: number, v: number, p0: number, p1: number) => [number, number]): StepCoefficients {
   const [uu, vu] = step(1, 0, 0, 0);
   const [uv, vv] = step(0, 1, 0, 0);
   const [up0, vp0] = step(0, 0, 1, 0);
@@ -177,13 +182,13 @@ export function prewarpedOscillator(
 /**
  * The map of `count` consecutive steps of `s` under an input that varies linearly from p0 to p1
  * over all of them (sub-step j runs from p0 + (p1 − p0)·j/count to p0 + (p1 − p0)·(j + 1)/count),
- * as one step in the same form. It is the sub-stepped recurrence itself, read off by stepping the
- * four unit vectors, so a composed step gives the numbers of the sub-steps (to rounding) for the
- * cost of one; only the values between its ends are not visited.
+ * as one step in the same form. It is the sub-stepped recurrence itself, read off (readOff), so
+ * a composed step gives the numbers of the sub-steps (to rounding) for the cost of one; only the
+ * values between its ends are not visited.
  */
 export function composeSteps(s: StepCoefficients, count: number): StepCoefficients {
   if (count === 1) return s;
-  const run = (u0: number, v0: number, p0: number, p1: number): [number, number] => {
+  return readOff((u0, v0, p0, p1) => {
     let u = u0;
     let v = v0;
     for (let j = 0; j < count; j++) {
@@ -194,12 +199,7 @@ export function composeSteps(s: StepCoefficients, count: number): StepCoefficien
       u = un;
     }
     return [u, v];
-  };
-  const [uu, vu] = run(1, 0, 0, 0);
-  const [uv, vv] = run(0, 1, 0, 0);
-  const [up0, vp0] = run(0, 0, 1, 0);
-  const [up1, vp1] = run(0, 0, 0, 1);
-  return { uu, uv, up0, up1, vu, vv, vp0, vp1 };
+  });
 }
 
 /**

@@ -100,11 +100,11 @@ export function substepCount(method: Method, periodS: number, dtS: number, conte
  * steps × composed ≥ substeps. Peaks between executed steps are refined by cubic Hermite
  * interpolation, which needs MIN_STEPS_PER_PERIOD of them a period and, for content near the
  * record's Nyquist frequency, ⌈R²⌉ a record step (R the roughness; real records, R < 1, need
- * one); only the sub-steps beyond that are composed. Measured against the exact method at 400
- * steps a period (stochastic records at 0.02 and 0.005 s, sines of 5–24.5 Hz at 0.02 s), the
- * worst errors were 0.24% (stochastic) and 0.41% (sines) for Newmark average, 0.26% and 0.24% for
- * Newmark linear; with ⌈R²/2⌉ a step the sines reached 0.48%. Steps per period asked for by the user (`stepsPerPeriod`) are
- * executed, not composed: they ask for a finer search of the peaks too.
+ * one); only the sub-steps beyond that are composed. Against the exact method at 400 steps a
+ * period (stochastic records at 0.02 and 0.005 s, sines of 5–24.5 Hz at 0.02 s), the worst errors
+ * were 0.24% (stochastic) and 0.41% (sines) for Newmark average, 0.26% and 0.24% for Newmark
+ * linear; with ⌈R²/2⌉ a step the sines reached 0.48%. Steps per period asked for by the user
+ * (`stepsPerPeriod`) are executed, not composed: they ask for a finer search of the peaks too.
  */
 export function executionPlan(
   substeps: number,

@@ -1,6 +1,6 @@
 import { groupRunner } from './group-runner.js';
 import { PEAK_STRIDE } from './layout.js';
-import { groupSteps, type PlannedOscillator, planSweep, type SweepPlan } from './plan.js';
+import { type PlannedOscillator, plannedSteps, planSweep, type SweepPlan } from './plan.js';
 import type { Method } from './recurrence.js';
 
 export interface SweepOptions {
@@ -55,7 +55,8 @@ export function sweepOscillators(
 ): Peaks {
   const peaks = emptyPeaks(plan);
   const runner = groupRunner(accelMS2, plan, options.kernel ?? 'auto');
-  for (const group of plan.groups) storeGroup(peaks, group, runner(group), accelMS2.length);
+  for (const group of plan.groups) storeGroup(peaks, group, runner(group));
+  peaks.oscillatorSteps = plannedSteps(plan, accelMS2.length);
   return peaks;
 }
 
@@ -79,16 +80,16 @@ export function emptyPeaks(plan: SweepPlan): Peaks {
   return peaks;
 }
 
-/**
- * Copy one group's peaks (PEAK_STRIDE per oscillator) into the result arrays and count the
- * oscillator-steps it executed over a record of `samples` values.
- */
-function storeGroup(peaks: Peaks, group: PlannedOscillator[], values: Float64Array, samples: number): void {
+/** Copy one group's peaks (PEAK_STRIDE per oscillator, as a group runner gives them) into the result arrays. */
+export function storeGroup(
+  peaks: Pick<Peaks, 'sdM' | 'svMS' | 'saMS2'>,
+  group: PlannedOscillator[],
+  values: Float64Array,
+): void {
   for (let g = 0; g < group.length; g++) {
     const index = group[g].index;
     peaks.sdM[index] = values[g * PEAK_STRIDE];
     peaks.svMS[index] = values[g * PEAK_STRIDE + 1];
     peaks.saMS2[index] = values[g * PEAK_STRIDE + 2];
   }
-  peaks.oscillatorSteps += groupSteps(group, samples);
 }

@@ -8,10 +8,9 @@ const BLANK = /[ \t]/;
  * The fields of one line (no line break in it): the line up to a `#` (a comment), split at each
  * separator (each space or tab for the whitespace separator) and, for `,` and `;`, each field
  * trimmed of white space (String.prototype.trim); none for a line with nothing but a comment or
- * white space. No quotes: a `"` is part of a field. These are the fields csv-parse gives with
- * the options the reader once used (delimiter, trim, comment '#', quote false, skip_empty_lines,
- * max_record_size 1,000,000), its limit on a line's size included (sizeLimit); the tests compare
- * the two. `file` and `line` place the error.
+ * white space. No quotes: a `"` is part of a field. The tests check these against csv-parse
+ * (delimiter, trim, comment '#', quote false, skip_empty_lines, max_record_size 1,000,000), its
+ * limit on a line's size included (sizeLimit). `file` and `line` place the error.
  */
 export function lineFields(text: string, separator: Separator, file: string, line: number): string[] {
   const hash = text.indexOf('#');

@@ -128,28 +128,6 @@ export function runSections(sections: readonly Biquad[], values: Float64Array): 
   }
 }
 
-/** Complex response of the cascade at `frequencyHz`: magnitude and phase, rad (one pass). */
-export function sectionsResponse(
-  sections: readonly Biquad[],
-  frequencyHz: number,
-  dtS: number,
-): { magnitude: number; phaseRad: number } {
-  const w = 2 * Math.PI * frequencyHz * dtS;
-  let re = 1;
-  let im = 0;
-  for (const { b0, b1, b2, a1, a2 } of sections) {
-    const nr = b0 + b1 * Math.cos(w) + b2 * Math.cos(2 * w);
-    const ni = -b1 * Math.sin(w) - b2 * Math.sin(2 * w);
-    const dr = 1 + a1 * Math.cos(w) + a2 * Math.cos(2 * w);
-    const di = -a1 * Math.sin(w) - a2 * Math.sin(2 * w);
-    const d2 = dr * dr + di * di;
-    const hr = (nr * dr + ni * di) / d2;
-    const hi = (ni * dr - nr * di) / d2;
-    [re, im] = [re * hr - im * hi, re * hi + im * hr];
-  }
-  return { magnitude: Math.hypot(re, im), phaseRad: Math.atan2(im, re) };
-}
-
 /** Length of the zero pad at each end, s: 1.5·n/f_c for the lowest corner (see the module comment). */
 export function padDurationS(spec: FilterSpec): number {
   const lowest = spec.kind === 'lowpass' ? spec.highCornerHz! : spec.lowCornerHz!;

@@ -6,11 +6,10 @@ import { MAX_LINE_CHARACTERS } from './separator.js';
 const MAX_MISSES = 16;
 
 /**
- * Splits decoded text into lines and hands them to the reader, line by line, numbered from 1
- * ( each `\r\n`, `\n` or lone `\r` one break). Once the reader
- * knows the layout, runs of numeric rows go to its row scanner (RecordReader.rowsFrom), and each
- * line it does not read is split here (lineFields) and given to row(). Holds at
- * most one unfinished line, refused once it is longer than MAX_LINE_CHARACTERS.
+ * Splits decoded text into lines (each `\r\n`, `\n` or lone `\r` one break, numbered from 1) and
+ * hands them to the reader. Once the reader knows the layout, runs of numeric rows go to its row
+ * scanner (RecordReader.rowsFrom), and each line it does not read is split here (lineFields) and
+ * given to row(). Holds at most one unfinished line, refused once longer than MAX_LINE_CHARACTERS.
  */
 export class LineSplitter {
   private readonly reader: RecordReader;

@@ -70,7 +70,6 @@ export async function readRecordStream(
   const reader = new RecordReader(options, RowScanner.get());
   const chunks = input[Symbol.asyncIterator]();
   const decoder = new StreamText();
-  const head: string[] = [];
   let headText = '';
   let ended = false;
   const skip = options.skip ?? 0;
@@ -87,20 +86,15 @@ export async function readRecordStream(
         break;
       }
       const text = decoder.decode(next.value);
-      head.push(text);
       headText += text;
       headLines += lineBreaks(text, skip + SNIFF_LINES - headLines);
       const last = Math.max(text.lastIndexOf('\n'), text.lastIndexOf('\r'));
       unfinished = last === -1 ? unfinished + text.length : text.length - 1 - last;
     }
-    if (ended) {
-      const rest = decoder.flush();
-      head.push(rest);
-      headText += rest;
-    }
+    if (ended) headText += decoder.flush();
     reader.separator = sniffSeparator(headText, skip, !ended);
     const lines = new LineSplitter(reader);
-    for (const text of head.splice(0)) lines.push(text);
+    lines.push(headText);
     while (!ended) {
       const next = await chunks.next();
       if (next.done) ended = true;
@@ -140,7 +134,7 @@ class StreamText {
 
   decode(chunk: string | Uint8Array): string {
     if (typeof chunk === 'string') return this.flush() + wellFormed(chunk); // bytes cut short before a string are a bad character
-    let bytes = toBuffer(chunk);
+    let bytes = Buffer.from(chunk.buffer, chunk.byteOffset, chunk.byteLength);
     if (this.decoder === undefined) {
       this.held.push(bytes);
       bytes = Buffer.concat(this.held);
@@ -166,10 +160,6 @@ class StreamText {
     this.decoder = new TextDecoder(utf16 ? 'utf-16le' : 'utf-8', { ignoreBOM: true });
     this.ascii = !utf16;
   }
-}
-
-function toBuffer(chunk: Uint8Array): Buffer {
-  return Buffer.isBuffer(chunk) ? chunk : Buffer.from(chunk.buffer, chunk.byteOffset, chunk.byteLength);
 }
 
 /**

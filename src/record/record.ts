@@ -89,8 +89,3 @@ export function peakGroundAcceleration(record: Pick<GroundRecord, 'accelMS2'>): 
   }
   return peak;
 }
-
-/** Duration covered by the samples, s. */
-export function recordDurationS(record: Pick<GroundRecord, 'accelMS2' | 'dtS'>): number {
-  return (record.accelMS2.length - 1) * record.dtS;
-}

@@ -18,11 +18,8 @@ export type BatchWorkerMessage = { index: number; outcome: RecordOutcome } | { f
  * be handed work: this thread starts on the first records at once while the `jobs − 1` worker
  * threads start, and the workers post each outcome as they finish it. With one job the tasks run
  * here, one after another. `here` runs a task on this thread (processRecord; tests slow it down to
- * see the workers take their share).
- *
- * Why not a general pool: handing tasks out from here, one message per task, made each worker
- * wait for this thread between tasks, and this thread did none of the work; the suite ran no
- * faster on two threads than on one.
+ * see the workers take their share). Claiming, rather than handing tasks out from here one
+ * message at a time, keeps workers from waiting on this thread and lets this thread work too.
  */
 export async function runTasks(
   tasks: readonly RecordTask[],

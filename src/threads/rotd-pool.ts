@@ -3,7 +3,6 @@ import type { GroundRecord } from '../record/record.js';
 import {
   finishRotD,
   prepareRotD,
-  type RotDCurve,
   type RotDOptions,
   type RotDSpectra,
   type RotDWork,
@@ -40,7 +39,7 @@ export async function rotDSpectraParallel(
 /**
  * RotD work as the threads of a RotDPool share it: the components in shared memory, a counter
  * handing out cells (damping-major: cell c is damping ⌊c / periods⌋, period c mod periods), and
- * RotD50, RotD100 and the geometric mean of every cell, three values a cell.
+ * for each damping in turn its RotD50, RotD100 and geometric-mean curves, one after the other.
  */
 export interface SharedRotDJob {
   work: RotDWork;
@@ -53,13 +52,14 @@ export function runClaimedRotD(job: SharedRotDJob): void {
   const { work } = job;
   const cell = rotDCellRunner(work);
   const out = new Float64Array(3);
-  const cells = work.dampings.length * work.periodsS.length;
+  const periods = work.periodsS.length;
   for (;;) {
     const next = Atomics.add(job.counter, 0, 1);
-    if (next >= cells) return;
-    const d = Math.floor(next / work.periodsS.length);
-    cell(d, next - d * work.periodsS.length, out);
-    job.results.set(out, 3 * next);
+    if (next >= work.dampings.length * periods) return;
+    const d = Math.floor(next / periods);
+    const p = next - d * periods;
+    cell(d, p, out);
+    for (let q = 0; q < 3; q++) job.results[(3 * d + q) * periods + p] = out[q];
   }
 }
 
@@ -68,13 +68,9 @@ export function runClaimedRotD(job: SharedRotDJob): void {
  * large grids (starting a worker is costly next to a small job: keep a pool for a suite). Close it
  * when done so that the process can exit.
  */
-export class RotDPool {
-  readonly threads: number;
-  private readonly team: ThreadTeam;
-
+export class RotDPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
-    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'threads', 'rotd-worker.js'));
-    this.threads = threads;
+    super(threads, workerScript(import.meta.url, 'threads', 'rotd-worker.js'));
   }
 
   /** rotDSpectra of the pair, bit for bit, computed by all the pool's threads. */
@@ -86,27 +82,15 @@ export class RotDPool {
       counter: new Int32Array(new SharedArrayBuffer(4)),
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * work.dampings.length * periods)),
     };
-    await this.team.run(job, () => runClaimedRotD(job));
-    const curves = Array.from(work.dampings, (damping, d) => {
-      const curve: RotDCurve = {
-        damping,
-        rotd50MS2: new Float64Array(periods),
-        rotd100MS2: new Float64Array(periods),
-        geomeanMS2: new Float64Array(periods),
-      };
-      for (let p = 0; p < periods; p++) {
-        const at = 3 * (d * periods + p);
-        curve.rotd50MS2[p] = job.results[at];
-        curve.rotd100MS2[p] = job.results[at + 1];
-        curve.geomeanMS2[p] = job.results[at + 2];
-      }
-      return curve;
-    });
+    await this.run(job, () => runClaimedRotD(job));
+    const curve = (d: number, q: number) =>
+      job.results.slice((3 * d + q) * periods, (3 * d + q + 1) * periods);
+    const curves = Array.from(work.dampings, (damping, d) => ({
+      damping,
+      rotd50MS2: curve(d, 0),
+      rotd100MS2: curve(d, 1),
+      geomeanMS2: curve(d, 2),
+    }));
     return finishRotD(first, second, work, curves);
-  }
-
-  /** Stop the worker threads. */
-  async close(): Promise<void> {
-    await this.team.close();
   }
 }

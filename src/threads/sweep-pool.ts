@@ -1,8 +1,14 @@
 import { availableParallelism } from 'node:os';
 import { groupRunner } from '../oscillator/group-runner.js';
-import { PEAK_STRIDE } from '../oscillator/layout.js';
 import { plannedSteps, planSweep, type SweepPlan, sweepThreads } from '../oscillator/plan.js';
-import { emptyPeaks, type Peaks, type SweepOptions, sweepOscillators } from '../oscillator/sweep.js';
+import {
+  emptyPeaks,
+  type Peaks,
+  type SweepKernel,
+  type SweepOptions,
+  storeGroup,
+  sweepOscillators,
+} from '../oscillator/sweep.js';
 import { shared, ThreadTeam, workerScript } from './team.js';
 
 export interface ParallelSweepOptions extends SweepOptions {
@@ -14,17 +20,16 @@ export interface ParallelSweepOptions extends SweepOptions {
 }
 
 /**
- * A job as the threads share it: the record, the order in which groups are claimed, a counter
- * that hands out the next group (Atomics.add, so every group runs exactly once), and the result
- * arrays sdM, svMS, saMS2 one after the other. All buffers are SharedArrayBuffers.
+ * A job as the threads share it: the record, the kernel, the order in which groups are claimed, a
+ * counter that hands out the next group (Atomics.add, so every group runs exactly once), and the
+ * result arrays. All buffers are SharedArrayBuffers.
  */
 export interface SharedSweepJob {
   accelMS2: Float64Array;
-  dtS: number;
-  options: SweepOptions;
+  kernel: SweepKernel;
   order: Int32Array;
   counter: Int32Array;
-  results: Float64Array;
+  peaks: Pick<Peaks, 'sdM' | 'svMS' | 'saMS2'>;
   /** The calling thread's plan, sent along so that no worker plans the sweep again. */
   plan: SweepPlan;
 }
@@ -34,21 +39,14 @@ export interface SharedSweepJob {
  * kernel and write their peaks into the shared results. Each oscillator's peaks depend only on
  * its own coefficients and the record, so which thread steps a group changes no bit.
  */
-export function runClaimedGroups(job: SharedSweepJob, plan: SweepPlan): void {
-  const count = plan.periodsS.length * plan.dampings.length;
+export function runClaimedGroups(job: SharedSweepJob): void {
   let runner: ReturnType<typeof groupRunner> | undefined;
   for (;;) {
     const next = Atomics.add(job.counter, 0, 1);
     if (next >= job.order.length) return;
-    runner ??= groupRunner(job.accelMS2, plan, job.options.kernel ?? 'auto');
-    const group = plan.groups[job.order[next]];
-    const values = runner(group);
-    for (let g = 0; g < group.length; g++) {
-      const index = group[g].index;
-      job.results[index] = values[PEAK_STRIDE * g];
-      job.results[count + index] = values[PEAK_STRIDE * g + 1];
-      job.results[2 * count + index] = values[PEAK_STRIDE * g + 2];
-    }
+    runner ??= groupRunner(job.accelMS2, job.plan, job.kernel);
+    const group = job.plan.groups[job.order[next]];
+    storeGroup(job.peaks, group, runner(group));
   }
 }
 
@@ -87,13 +85,9 @@ export function runClaimedRecords(job: SharedRecordsJob): void {
  * record after another, each split over all its threads, or many records at once, each on one
  * thread); close it when done so that the process can exit.
  */
-export class SweepPool {
-  readonly threads: number;
-  private readonly team: ThreadTeam;
-
+export class SweepPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
-    this.team = new ThreadTeam(threads, workerScript(import.meta.url, 'threads', 'sweep-worker.js'));
-    this.threads = threads;
+    super(threads, workerScript(import.meta.url, 'threads', 'sweep-worker.js'));
   }
 
   /**
@@ -107,34 +101,22 @@ export class SweepPool {
     plan: SweepPlan = planSweep(accelMS2, dtS, options),
   ): Promise<Peaks> {
     const peaks = emptyPeaks(plan);
-    const count = plan.periodsS.length * plan.dampings.length;
     // Costliest groups first, so that the last groups claimed are short ones.
     const costs = plan.groups.map((group) => group.length * group[0].substeps);
     const order = new Int32Array(new SharedArrayBuffer(4 * plan.groups.length));
-    Array.from(plan.groups, (_, i) => i)
-      .sort((a, b) => costs[b] - costs[a] || a - b)
-      .forEach((group, i) => {
-        order[i] = group;
-      });
+    order.set(Array.from(plan.groups, (_, i) => i).sort((a, b) => costs[b] - costs[a] || a - b));
     const job: SharedSweepJob = {
       accelMS2: shared(accelMS2),
-      dtS,
-      options: { ...options, periodsS: plan.periodsS, dampings: plan.dampings },
+      kernel: options.kernel ?? 'auto',
       order,
       counter: new Int32Array(new SharedArrayBuffer(4)),
-      results: new Float64Array(new SharedArrayBuffer(8 * 3 * count)),
+      peaks: { sdM: shared(peaks.sdM), svMS: shared(peaks.svMS), saMS2: shared(peaks.saMS2) },
       plan,
     };
-    await this.team.run(job, () => runClaimedGroups(job, plan));
-    for (let d = 0; d < plan.dampings.length; d++) {
-      for (let p = 0; p < plan.periodsS.length; p++) {
-        const index = d * plan.periodsS.length + p;
-        if (plan.periodsS[p] === 0) continue;
-        peaks.sdM[index] = job.results[index];
-        peaks.svMS[index] = job.results[count + index];
-        peaks.saMS2[index] = job.results[2 * count + index];
-      }
-    }
+    await this.run(job, () => runClaimedGroups(job));
+    peaks.sdM.set(job.peaks.sdM);
+    peaks.svMS.set(job.peaks.svMS);
+    peaks.saMS2.set(job.peaks.saMS2);
     peaks.oscillatorSteps = plannedSteps(plan, accelMS2.length);
     return peaks;
   }
@@ -163,7 +145,7 @@ export class SweepPool {
       results: new Float64Array(new SharedArrayBuffer(8 * 3 * count * records.length)),
       steps: new Float64Array(new SharedArrayBuffer(8 * records.length)),
     };
-    await this.team.run(job, () => runClaimedRecords(job));
+    await this.run(job, () => runClaimedRecords(job));
     return records.map((_, i) => {
       const at = i * 3 * count;
       return {
@@ -177,18 +159,12 @@ export class SweepPool {
       };
     });
   }
-
-  /** Stop the worker threads. */
-  async close(): Promise<void> {
-    await this.team.close();
-  }
 }
 
 /**
- * sweepOscillators split over `threads` threads (default: all cores): worker threads and this
- * one claim groups of oscillators from a shared counter, the record being shared once through a
- * SharedArrayBuffer. The peaks are the same, bit for bit, as those of sweepOscillators with the
- * same kernel. Starting workers costs more than a small sweep: use it for large sweeps only.
+ * sweepOscillators on a SweepPool of `threads` (default: all cores), started for the call and
+ * closed after: the same peaks, bit for bit. Starting workers costs more than a small sweep: use
+ * it for large sweeps only.
  */
 export async function sweepOscillatorsParallel(
   accelMS2: Float64Array,

@@ -13,7 +13,7 @@ import { serveJobs } from './team.js';
 
 serveJobs((job: SharedSweepJob | SharedRecordsJob) => {
   if ('kind' in job) runClaimedRecords(job);
-  else runClaimedGroups(job, job.plan);
+  else runClaimedGroups(job);
 });
 // The kernel's instance is made while the first job is on its way.
 prepareWasmKernel();

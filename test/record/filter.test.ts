@@ -1,13 +1,31 @@
 import { describe, expect, it } from 'vitest';
 import {
+  type Biquad,
   butterworthSections,
   checkFilter,
   filterSections,
-  sectionsResponse,
   zeroPhaseFilter,
 } from '../../src/record/filter.js';
 
 const dtS = 0.005; // 200 samples/s, Nyquist 100 Hz
+
+/** |H(e^{iω})| of the cascade, one pass: each section's numerator over its denominator at z = e^{iω}, ω = 2πfΔt. */
+function sectionsResponse(sections: readonly Biquad[], frequencyHz: number) {
+  const w = 2 * Math.PI * frequencyHz * dtS;
+  let magnitude = 1;
+  for (const { b0, b1, b2, a1, a2 } of sections) {
+    const numerator = Math.hypot(
+      b0 + b1 * Math.cos(w) + b2 * Math.cos(2 * w),
+      b1 * Math.sin(w) + b2 * Math.sin(2 * w),
+    );
+    const denominator = Math.hypot(
+      1 + a1 * Math.cos(w) + a2 * Math.cos(2 * w),
+      a1 * Math.sin(w) + a2 * Math.sin(2 * w),
+    );
+    magnitude *= numerator / denominator;
+  }
+  return { magnitude };
+}
 
 /** Butterworth (1930): |H(f)| = 1/√(1 + (f/f_c)^{2n}) of the analog prototype, one pass. */
 const analog = (f: number, fc: number, n: number, kind: 'lowpass' | 'highpass') =>
@@ -27,10 +45,10 @@ describe('butterworthSections (bilinear transform with prewarping)', () => {
         const sections = butterworthSections(kind, order, fc, dtS);
         expect(sections.length).toBe(Math.ceil(order / 2));
         for (const f of [0.01, 0.05, 0.1, 0.2, 0.5, 1, 5, 10, 20, 50, 90]) {
-          expect(sectionsResponse(sections, f, dtS).magnitude).toBeCloseTo(warped(f, fc, order, kind), 10);
+          expect(sectionsResponse(sections, f).magnitude).toBeCloseTo(warped(f, fc, order, kind), 10);
         }
         // −3 dB (1/√2) at the corner, one pass.
-        expect(sectionsResponse(sections, fc, dtS).magnitude).toBeCloseTo(Math.SQRT1_2, 10);
+        expect(sectionsResponse(sections, fc).magnitude).toBeCloseTo(Math.SQRT1_2, 10);
       });
     }
   }
@@ -38,7 +56,7 @@ describe('butterworthSections (bilinear transform with prewarping)', () => {
   it('matches the analog prototype well below the Nyquist frequency (Butterworth 1930)', () => {
     const sections = butterworthSections('lowpass', 4, 2, dtS);
     for (const f of [0.5, 1, 2, 3, 4]) {
-      const digital = sectionsResponse(sections, f, dtS).magnitude;
+      const digital = sectionsResponse(sections, f).magnitude;
       expect(Math.abs(digital - analog(f, 2, 4, 'lowpass'))).toBeLessThan(2e-3);
     }
   });

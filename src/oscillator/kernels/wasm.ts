@@ -69,16 +69,6 @@ export interface KernelExports {
   ): void;
 }
 
-let compiled: WebAssembly.Module | undefined;
-
-function sweepModule(): WebAssembly.Module {
-  if (compiled === undefined) {
-    // Buffer's decoder: a loop over atob's characters ran cold, then was compiled, in every thread.
-    compiled = new WebAssembly.Module(Buffer.from(SWEEP_WASM_BASE64, 'base64'));
-  }
-  return compiled;
-}
-
 /**
  * The sweep's instance of the kernel in this thread, reused by every WasmSweeper: a new instance
  * per record would map and unmap a fresh linear memory each time, which in a pool of threads
@@ -93,11 +83,12 @@ export interface KernelInstance {
   holder?: unknown;
 }
 
-/** The thread's instance of the kernel, made on first use. */
+/** The thread's instance of the kernel, made (and its module compiled) on first use. */
 export function kernelInstance(): KernelInstance {
-  sweepInstance ??= {
-    exports: new WebAssembly.Instance(sweepModule(), {}).exports as unknown as KernelExports,
-  };
+  if (sweepInstance === undefined) {
+    const module = new WebAssembly.Module(Buffer.from(SWEEP_WASM_BASE64, 'base64'));
+    sweepInstance = { exports: new WebAssembly.Instance(module, {}).exports as unknown as KernelExports };
+  }
   return sweepInstance;
 }
 

@@ -2,12 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { referencePeaks } from '../../../src/oscillator/kernels/reference.js';
 import { COEFFICIENT_STRIDE, PEAK_STRIDE } from '../../../src/oscillator/layout.js';
 import { packCoefficients } from '../../../src/oscillator/plan.js';
-import { groundBounds } from '../../../src/oscillator/record-statistics.js';
+import { recordStatistics } from '../../../src/oscillator/record-statistics.js';
 
 /** Peaks |u|, |v|, |s| of one oscillator from rest, by the reference kernel with one step a sample. */
 function peaksOf(accelMS2: Float64Array, dtS: number, periodS: number, method: 'piecewise-exact') {
   const row = new Float64Array(COEFFICIENT_STRIDE);
-  packCoefficients(row, 0, { periodS, damping: 0 }, method, dtS, groundBounds(accelMS2, dtS));
+  packCoefficients(row, 0, { periodS, damping: 0 }, method, dtS, recordStatistics(accelMS2, dtS).bounds);
   const peaks = new Float64Array(PEAK_STRIDE);
   referencePeaks(accelMS2, 1, dtS, row, peaks, 0);
   return peaks;
