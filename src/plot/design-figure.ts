@@ -37,7 +37,6 @@ export function designFigure(input: DesignFigureInput): string {
     subtitle: [`Spectrum: ${spectrum.description}`, `Damping: ${damping}`],
     x: { title: 'Period T (s)' },
     y: { title: 'Pseudo-acceleration PSA (g)' },
-    axes: 'log',
     series: [
       {
         label: CODE_LABELS[spectrum.code],

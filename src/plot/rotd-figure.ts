@@ -63,7 +63,6 @@ export function rotdFigure(input: RotDFigureInput): string {
     subtitle,
     x: { title: 'Period T (s)' },
     y: { title: 'Pseudo-acceleration PSA (g)' },
-    axes: 'log',
     series,
     notes,
   });

@@ -38,6 +38,9 @@ export const MINOR_GRID_COLOUR = '#eeeeee';
 export const FRAME_COLOUR = '#333333';
 export const TEXT_COLOUR = '#111111';
 
+/** A white outline under a label, so it stays legible over grid lines and curves. */
+export const HALO = { stroke: '#ffffff', 'stroke-width': 2.5, 'paint-order': 'stroke' } as const;
+
 /** Width of every figure: 640 px, 169 mm at 96 px to the inch, the text width of an A4 or letter page. */
 export const FIGURE_WIDTH_PX = 640;
 

@@ -3,6 +3,7 @@ import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
 import {
+  dampingSeries,
   overlaySeries,
   type PsaFigureOptions,
   spectrumSubtitle,
@@ -41,11 +42,7 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
   const perLength = 1 / LENGTH_UNITS[unit];
   const gInUnit = STANDARD_GRAVITY_MS2 * perLength;
   const series = [
-    ...spectrum.curves.map((curve) => ({
-      label: `ζ = ${Number((curve.damping * 100).toPrecision(6))}%`,
-      x: spectrum.periodsS,
-      y: curve.psvMS.map((v) => v * perLength),
-    })),
+    ...dampingSeries(spectrum, (i) => spectrum.curves[i].psvMS, perLength),
     ...overlaySeries(options.overlays, (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI)),
   ];
   const underlay = (context: PanelContext) => drawDiagonals(context, unit, gInUnit, series);
@@ -54,7 +51,6 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
     subtitle: spectrumSubtitle(spectrum, options.methodDescription),
     x: { title: 'Period T (s)' },
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
-    axes: 'log',
     heightPx: 430,
     legendTitle: 'Damping:',
     series,
