@@ -227,15 +227,7 @@ function checkPattern(anchors: [number, number][], fail: (message: string) => ne
       }
     }
   }
-  const [cx, cy] = centroid(anchors);
-  let ixx = 0;
-  let iyy = 0;
-  let ixy = 0;
-  for (const [x, y] of anchors) {
-    ixx += (x - cx) ** 2;
-    iyy += (y - cy) ** 2;
-    ixy += (x - cx) * (y - cy);
-  }
+  const { ixx, iyy, ixy } = secondMoments(anchors);
   const det = ixx * iyy - ixy * ixy;
   if (!(det > 1e-12 * (ixx + iyy) ** 2)) {
     fail(
@@ -254,4 +246,22 @@ export function centroid(points: readonly (readonly [number, number])[]): [numbe
     y += py;
   }
   return [x / points.length, y / points.length];
+}
+
+/** The anchors' offsets r_i from the centroid and the pattern's second moments Σx², Σy², Σxy, Σ|r|². */
+export function secondMoments(points: readonly (readonly [number, number])[]) {
+  const [cx, cy] = centroid(points);
+  const rx = points.map((p) => p[0] - cx);
+  const ry = points.map((p) => p[1] - cy);
+  let ixx = 0;
+  let iyy = 0;
+  let ixy = 0;
+  let polar = 0;
+  for (let i = 0; i < points.length; i++) {
+    ixx += rx[i] * rx[i];
+    iyy += ry[i] * ry[i];
+    ixy += rx[i] * ry[i];
+    polar += rx[i] * rx[i] + ry[i] * ry[i];
+  }
+  return { cx, cy, rx, ry, ixx, iyy, ixy, polar };
 }
