@@ -2,7 +2,7 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext, Series } from './panel.js';
-import { HALO, TEXT_COLOUR } from './styles.js';
+import { DAMPING_DASHES, HALO, TEXT_COLOUR } from './styles.js';
 import {
   formatValue,
   methodLine,
@@ -25,8 +25,6 @@ export interface FloorFigureInput {
   methodDescription: string;
 }
 
-const DASHES = ['none', '7 3', '2 2.5', '9 3 2 3'];
-
 /**
  * The in-structure (floor) PSA spectrum against the ground spectrum it came from, and the floor
  * spectrum before peak broadening when it was broadened; log–log, with the building period marked.
@@ -38,7 +36,7 @@ export function floorFigure(input: FloorFigureInput): string {
   const suffix = (damping: number) => (many ? `, ζ = ${percentLabel(damping)}` : '');
   const series: Series[] = [];
   floor.curves.forEach((curve, d) => {
-    const dash = DASHES[d % DASHES.length];
+    const dash = DAMPING_DASHES[d % DAMPING_DASHES.length];
     series.push({
       label: `${broadened ? 'floor, broadened' : 'floor'}${suffix(curve.damping)}`,
       x: floor.periodsS,
