@@ -171,7 +171,6 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   doc.element(marks, 'path', { class: 'centroid', ...centroidMark(kx, ky) });
   doc.element(marks, 'path', { class: 'centre-of-mass', ...massMark(gx, gy, 7) });
 
-  // Legend of the marks.
   const legend = doc.element(doc.root, 'g', { class: 'legend', 'font-size': tickPx, fill: TEXT_COLOUR });
   const ly = legendTop + 6;
   let lx = sidePx;
