@@ -135,15 +135,9 @@ export function parseEquipment(text: string, file: string): Equipment {
   const anchors = readPoints(object['anchors'], (message) => fail('anchors', message));
   checkPattern(anchors, (message) => fail('anchors', message));
 
-  let cgPlan: [number, number];
   const cgGiven = object['cg_plan'] !== undefined && object['cg_plan'] !== null;
-  if (cgGiven) {
-    const point = object['cg_plan'];
-    if (!isPoint(point)) fail('cg_plan', `must be [x, y] in ${system.length}`);
-    cgPlan = [(point as number[])[0], (point as number[])[1]];
-  } else {
-    cgPlan = centroid(anchors);
-  }
+  if (cgGiven && !isPoint(object['cg_plan'])) fail('cg_plan', `must be [x, y] in ${system.length}`);
+  const cgPlan = cgGiven ? (object['cg_plan'] as [number, number]) : centroid(anchors);
 
   const periodRaw = object['period_s'];
   let periodS: number | 'rigid';
@@ -171,10 +165,10 @@ export function parseEquipment(text: string, file: string): Equipment {
   const rp = number('rp', (v) => v > 0, 'a positive response modification factor R_p');
   const ip = number('ip', (v) => v > 0, 'a positive importance factor I_p');
   const sds = number('sds', (v) => v > 0, 'a positive S_DS in g');
-  let omega0: number | null = null;
-  if (object['omega0'] !== undefined && object['omega0'] !== null) {
-    omega0 = number('omega0', (v) => v >= 1, 'null or an overstrength factor Ω₀ ≥ 1');
-  }
+  const omega0 =
+    object['omega0'] === undefined || object['omega0'] === null
+      ? null
+      : number('omega0', (v) => v >= 1, 'null or an overstrength factor Ω₀ ≥ 1');
   if (object['notes'] !== undefined && typeof object['notes'] !== 'string') fail('notes', 'must be a string');
 
   return {
