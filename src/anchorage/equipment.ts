@@ -139,16 +139,11 @@ export function parseEquipment(text: string, file: string): Equipment {
   if (cgGiven && !isPoint(object['cg_plan'])) fail('cg_plan', `must be [x, y] in ${system.length}`);
   const cgPlan = cgGiven ? (object['cg_plan'] as [number, number]) : centroid(anchors);
 
-  const periodRaw = object['period_s'];
-  let periodS: number | 'rigid';
-  if (periodRaw === 'rigid') periodS = 'rigid';
-  else if (typeof periodRaw === 'number' && Number.isFinite(periodRaw) && periodRaw >= MIN_PERIOD_S)
-    periodS = periodRaw;
-  else
-    periodS = fail(
-      'period_s',
-      `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodRaw)}`,
-    );
+  const periodS = object['period_s'];
+  const isPeriod = typeof periodS === 'number' && Number.isFinite(periodS) && periodS >= MIN_PERIOD_S;
+  if (periodS !== 'rigid' && !isPeriod) {
+    fail('period_s', `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodS)}`);
+  }
 
   const damping = number(
     'damping',
@@ -179,7 +174,7 @@ export function parseEquipment(text: string, file: string): Equipment {
     anchorsM: anchors.map(([x, y]) => [x * m, y * m]),
     cgPlanM: [cgPlan[0] * m, cgPlan[1] * m],
     cgPlanGiven: cgGiven,
-    periodS,
+    periodS: periodS as number | 'rigid',
     damping,
     zM: z * m,
     hM: h * m,
