@@ -1,6 +1,6 @@
-import { scaleLinear } from 'd3-scale';
 import { drawFooter, layoutFooter } from './footer.js';
 import { layoutHeader, startPage } from './header.js';
+import { makeScale } from './layout.js';
 import { FIGURE_TEXT, FIGURE_WIDTH_PX, FRAME_COLOUR, GRID_COLOUR, HALO, TEXT_COLOUR } from './styles.js';
 import { linearTicks, textWidthPx } from './ticks.js';
 
@@ -51,12 +51,8 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const footer = layoutFooter(input.notes, widthPx, legendTop + 20);
   const doc = startPage(header, widthPx, Math.ceil(footer.bottom));
 
-  const px = scaleLinear()
-    .domain([midX - half, midX + half])
-    .range([plotLeft, plotLeft + plotSize]);
-  const py = scaleLinear()
-    .domain([midY - half, midY + half])
-    .range([plotTop + plotSize, plotTop]);
+  const px = makeScale('linear', [midX - half, midX + half], [plotLeft, plotLeft + plotSize]);
+  const py = makeScale('linear', [midY - half, midY + half], [plotTop + plotSize, plotTop]);
   const panel = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': 0 });
   const extent = (text: string) => textWidthPx(text, tickPx);
   const xTicks = linearTicks(px.domain() as [number, number], (v) => px(v), extent, plotSize);
