@@ -9,6 +9,7 @@ import {
   spectrumSubtitle,
   spectrumZeroNote,
 } from './spectrum-figure.js';
+import { formatCoordinate } from './svg.js';
 import { formatValue } from './text.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
 
@@ -130,7 +131,7 @@ function drawDiagonals(
         'data-unit': family.unit,
       });
       doc.element(item, 'path', {
-        d: `M${round(ax)},${round(ay)}L${round(bx)},${round(by)}`,
+        d: `M${formatCoordinate(ax)},${formatCoordinate(ay)}L${formatCoordinate(bx)},${formatCoordinate(by)}`,
         stroke: DIAGONAL_COLOUR,
         'stroke-width': 0.7,
       });
@@ -144,7 +145,7 @@ function drawDiagonals(
         x: 0,
         y: 0,
         dy: '0.35em',
-        transform: `translate(${round(cx)},${round(cy)}) rotate(${round(angle)})`,
+        transform: `translate(${formatCoordinate(cx)},${formatCoordinate(cy)}) rotate(${formatCoordinate(angle)})`,
         'text-anchor': 'middle',
         'font-size': DIAGONAL_PX,
         fill: DIAGONAL_TEXT,
@@ -189,8 +190,4 @@ function chooseSpot(
     if (score === 0) break;
   }
   return best;
-}
-
-function round(value: number): number {
-  return Math.round(value * 100) / 100;
 }
