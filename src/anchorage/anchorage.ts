@@ -71,10 +71,8 @@ export function analyseAnchorage(
   const omega0 = equipment.omega0 ?? 1;
   const codeForAnchorsKN = omega0 * code.fp;
   const elasticKN = elastic === null ? null : elastic.psaG * equipment.weightKN;
-  let governing: 'code' | 'record';
-  if (demand === 'code') governing = 'code';
-  else if (demand === 'record') governing = 'record';
-  else governing = elasticKN !== null && elasticKN > codeForAnchorsKN ? 'record' : 'code';
+  const governing =
+    demand !== 'max' ? demand : elasticKN !== null && elasticKN > codeForAnchorsKN ? 'record' : 'code';
   const horizontalForAnchorsKN = governing === 'code' ? codeForAnchorsKN : (elasticKN as number);
   const deadLoadFactor = counteractingDeadLoadFactor(equipment.sds);
   const anchors = boltGroupForces({

@@ -1,15 +1,7 @@
 import { usageError } from '../base/errors.js';
-import { centroid } from './equipment.js';
+import { secondMoments } from './equipment.js';
 
-/**
- * How overturning is shared among the anchors.
- * - 'projected': T_i = M·d_i/Σd_j² − D/n, d_i the distance of anchor i from the neutral axis
- *   through the centroid perpendicular to the direction of shaking (the rule commonly written for
- *   equipment anchorage; common practice). Conservative off the pattern's principal axes.
- * - 'biaxial': the general elastic solution, moment equilibrium about both plan axes,
- *   T_i = −M (I⁻¹u)·r_i − D/n; the neutral axis then need not be perpendicular to u.
- * Both agree along a principal axis of the pattern.
- */
+/** How overturning is shared among the anchors: 'projected' or 'biaxial' (both set out at boltGroupForces). */
 export type AnchorRule = 'projected' | 'biaxial';
 
 export const ANCHOR_RULES: readonly AnchorRule[] = ['projected', 'biaxial'];
@@ -70,17 +62,11 @@ export function boltGroupAtDirection(
   directionDeg: number,
 ): { tension: number[]; shear: number[] } {
   const k = coefficients(input);
-  const { n, L, F } = k;
-  const c = Math.cos((directionDeg * Math.PI) / 180);
-  const s = Math.sin((directionDeg * Math.PI) / 180);
-  const tension: number[] = [];
-  const shear: number[] = [];
-  for (let i = 0; i < n; i++) {
-    tension.push(Math.max(0, k.tension(i, c, s)));
-    const [l11, l12, l21, l22] = L[i];
-    shear.push(Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s));
-  }
-  return { tension, shear };
+  const [c, s] = unitVector(directionDeg);
+  return {
+    tension: Array.from({ length: k.n }, (_, i) => Math.max(0, k.tension(i, c, s))),
+    shear: Array.from({ length: k.n }, (_, i) => k.shear(i, c, s)),
+  };
 }
 
 /**
@@ -114,7 +100,7 @@ export function boltGroupAtDirection(
  */
 export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
   const k = coefficients(input);
-  const { n, A, B, L, F, D } = k;
+  const { n, A, B, L } = k;
   const rule = input.rule ?? 'projected';
   const step = input.stepDeg ?? 1;
   const directions: number[] = [];
@@ -137,26 +123,22 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     shear: -Infinity,
     shearDirectionDeg: 0,
   }));
-  const tolerance = 1e-12 * (Math.abs(F) * (input.cgHeight + 1) + Math.abs(D) + 1);
+  const tolerance =
+    1e-12 * (Math.abs(input.horizontalForce) * (input.cgHeight + 1) + Math.abs(input.deadLoad) + 1);
+  // Larger by more than the tolerance, or as large in a smaller direction (so ties resolve alike everywhere).
+  const worse = (value: number, worst: number, deg: number, worstDeg: number) =>
+    value > worst + tolerance || (Math.abs(value - worst) <= tolerance && deg < worstDeg);
   for (const deg of directions) {
-    const c = Math.cos((deg * Math.PI) / 180);
-    const s = Math.sin((deg * Math.PI) / 180);
+    const [c, s] = unitVector(deg);
     for (let i = 0; i < n; i++) {
-      const tension = k.tension(i, c, s);
       const a = perAnchor[i];
-      if (
-        tension > a.tension + tolerance ||
-        (Math.abs(tension - a.tension) <= tolerance && deg < a.tensionDirectionDeg)
-      ) {
+      const tension = k.tension(i, c, s);
+      if (worse(tension, a.tension, deg, a.tensionDirectionDeg)) {
         a.tension = tension;
         a.tensionDirectionDeg = deg;
       }
-      const [l11, l12, l21, l22] = L[i];
-      const shear = Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s);
-      if (
-        shear > a.shear + tolerance ||
-        (Math.abs(shear - a.shear) <= tolerance && deg < a.shearDirectionDeg)
-      ) {
+      const shear = k.shear(i, c, s);
+      if (worse(shear, a.shear, deg, a.shearDirectionDeg)) {
         a.shear = shear;
         a.shearDirectionDeg = deg;
       }
@@ -223,6 +205,11 @@ function worstShearDirectionDeg([a, b, c, d]: [number, number, number, number]):
   return normalizeDeg((0.5 * Math.atan2(2 * q, p - r) * 180) / Math.PI);
 }
 
+/** The unit vector (cos θ, sin θ) of a direction θ in degrees. */
+function unitVector(deg: number): [number, number] {
+  return [Math.cos((deg * Math.PI) / 180), Math.sin((deg * Math.PI) / 180)];
+}
+
 function normalizeDeg(deg: number): number {
   const value = ((deg % 360) + 360) % 360;
   return value >= 360 - 1e-12 ? 0 : value;
@@ -230,19 +217,7 @@ function normalizeDeg(deg: number): number {
 
 function coefficients(input: BoltGroupInput) {
   const n = input.anchors.length;
-  const [cx, cy] = centroid(input.anchors);
-  const rx = input.anchors.map((p) => p[0] - cx);
-  const ry = input.anchors.map((p) => p[1] - cy);
-  let ixx = 0;
-  let iyy = 0;
-  let ixy = 0;
-  let polar = 0;
-  for (let i = 0; i < n; i++) {
-    ixx += rx[i] * rx[i];
-    iyy += ry[i] * ry[i];
-    ixy += rx[i] * ry[i];
-    polar += rx[i] * rx[i] + ry[i] * ry[i];
-  }
+  const { cx, cy, rx, ry, ixx, iyy, ixy, polar } = secondMoments(input.anchors);
   const det = ixx * iyy - ixy * ixy;
   // I⁻¹ = [[iyy, −ixy], [−ixy, ixx]] / det
   const inv = (vx: number, vy: number): [number, number] => [
@@ -283,7 +258,11 @@ function coefficients(input: BoltGroupInput) {
           const sumD2 = ixx * c * c + 2 * ixy * c * s + iyy * s * s;
           return (moment * -(rx[i] * c + ry[i] * s)) / sumD2 - C[i];
         };
-  const tensionAtDeg = (i: number, deg: number) =>
-    tension(i, Math.cos((deg * Math.PI) / 180), Math.sin((deg * Math.PI) / 180));
-  return { n, A, B, C, L, F, D, tension, tensionAtDeg };
+  const tensionAtDeg = (i: number, deg: number) => tension(i, ...unitVector(deg));
+  /** Shear of anchor i for the force along (c, s): |F·L_i·u|. */
+  const shear = (i: number, c: number, s: number) => {
+    const [l11, l12, l21, l22] = L[i];
+    return Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s);
+  };
+  return { n, A, B, L, tension, tensionAtDeg, shear };
 }

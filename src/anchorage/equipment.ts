@@ -135,26 +135,15 @@ export function parseEquipment(text: string, file: string): Equipment {
   const anchors = readPoints(object['anchors'], (message) => fail('anchors', message));
   checkPattern(anchors, (message) => fail('anchors', message));
 
-  let cgPlan: [number, number];
   const cgGiven = object['cg_plan'] !== undefined && object['cg_plan'] !== null;
-  if (cgGiven) {
-    const point = object['cg_plan'];
-    if (!isPoint(point)) fail('cg_plan', `must be [x, y] in ${system.length}`);
-    cgPlan = [(point as number[])[0], (point as number[])[1]];
-  } else {
-    cgPlan = centroid(anchors);
-  }
+  if (cgGiven && !isPoint(object['cg_plan'])) fail('cg_plan', `must be [x, y] in ${system.length}`);
+  const cgPlan = cgGiven ? (object['cg_plan'] as [number, number]) : centroid(anchors);
 
-  const periodRaw = object['period_s'];
-  let periodS: number | 'rigid';
-  if (periodRaw === 'rigid') periodS = 'rigid';
-  else if (typeof periodRaw === 'number' && Number.isFinite(periodRaw) && periodRaw >= MIN_PERIOD_S)
-    periodS = periodRaw;
-  else
-    periodS = fail(
-      'period_s',
-      `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodRaw)}`,
-    );
+  const periodS = object['period_s'];
+  const isPeriod = typeof periodS === 'number' && Number.isFinite(periodS) && periodS >= MIN_PERIOD_S;
+  if (periodS !== 'rigid' && !isPeriod) {
+    fail('period_s', `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodS)}`);
+  }
 
   const damping = number(
     'damping',
@@ -171,10 +160,10 @@ export function parseEquipment(text: string, file: string): Equipment {
   const rp = number('rp', (v) => v > 0, 'a positive response modification factor R_p');
   const ip = number('ip', (v) => v > 0, 'a positive importance factor I_p');
   const sds = number('sds', (v) => v > 0, 'a positive S_DS in g');
-  let omega0: number | null = null;
-  if (object['omega0'] !== undefined && object['omega0'] !== null) {
-    omega0 = number('omega0', (v) => v >= 1, 'null or an overstrength factor Ω₀ ≥ 1');
-  }
+  const omega0 =
+    object['omega0'] === undefined || object['omega0'] === null
+      ? null
+      : number('omega0', (v) => v >= 1, 'null or an overstrength factor Ω₀ ≥ 1');
   if (object['notes'] !== undefined && typeof object['notes'] !== 'string') fail('notes', 'must be a string');
 
   return {
@@ -185,7 +174,7 @@ export function parseEquipment(text: string, file: string): Equipment {
     anchorsM: anchors.map(([x, y]) => [x * m, y * m]),
     cgPlanM: [cgPlan[0] * m, cgPlan[1] * m],
     cgPlanGiven: cgGiven,
-    periodS,
+    periodS: periodS as number | 'rigid',
     damping,
     zM: z * m,
     hM: h * m,
@@ -227,15 +216,7 @@ function checkPattern(anchors: [number, number][], fail: (message: string) => ne
       }
     }
   }
-  const [cx, cy] = centroid(anchors);
-  let ixx = 0;
-  let iyy = 0;
-  let ixy = 0;
-  for (const [x, y] of anchors) {
-    ixx += (x - cx) ** 2;
-    iyy += (y - cy) ** 2;
-    ixy += (x - cx) * (y - cy);
-  }
+  const { ixx, iyy, ixy } = secondMoments(anchors);
   const det = ixx * iyy - ixy * ixy;
   if (!(det > 1e-12 * (ixx + iyy) ** 2)) {
     fail(
@@ -254,4 +235,22 @@ export function centroid(points: readonly (readonly [number, number])[]): [numbe
     y += py;
   }
   return [x / points.length, y / points.length];
+}
+
+/** The anchors' offsets r_i from the centroid and the pattern's second moments Σx², Σy², Σxy, Σ|r|². */
+export function secondMoments(points: readonly (readonly [number, number])[]) {
+  const [cx, cy] = centroid(points);
+  const rx = points.map((p) => p[0] - cx);
+  const ry = points.map((p) => p[1] - cy);
+  let ixx = 0;
+  let iyy = 0;
+  let ixy = 0;
+  let polar = 0;
+  for (let i = 0; i < points.length; i++) {
+    ixx += rx[i] * rx[i];
+    iyy += ry[i] * ry[i];
+    ixy += rx[i] * ry[i];
+    polar += rx[i] * rx[i] + ry[i] * ry[i];
+  }
+  return { cx, cy, rx, ry, ixx, iyy, ixy, polar };
 }

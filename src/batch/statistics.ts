@@ -1,3 +1,5 @@
+import { compareText } from './glob.js';
+
 /** One record's PSA, g, per damping ratio (outer) and period (inner). */
 export interface RecordPsa {
   name: string;
@@ -31,7 +33,7 @@ export function suiteStatistics(
   dampings: readonly number[],
   periodCount: number,
 ): SuiteCurve[] {
-  const sorted = [...records].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+  const sorted = [...records].sort((a, b) => compareText(a.name, b.name));
   const n = sorted.length;
   return dampings.map((damping, d) => {
     const curve: SuiteCurve = { damping, mean_psa_g: [], median_psa_g: [], p16_psa_g: [], p84_psa_g: [] };
@@ -47,27 +49,18 @@ export function suiteStatistics(
         else positive = false;
       }
       curve.mean_psa_g.push(sum / n);
-      if (!positive) {
-        curve.median_psa_g.push(null);
-        curve.p16_psa_g.push(null);
-        curve.p84_psa_g.push(null);
-        continue;
-      }
       const m = logSum / n;
-      curve.median_psa_g.push(Math.exp(m));
-      if (n < 2) {
-        curve.p16_psa_g.push(null);
-        curve.p84_psa_g.push(null);
-        continue;
-      }
+      curve.median_psa_g.push(positive ? Math.exp(m) : null);
       let squares = 0;
-      for (const record of sorted) {
-        const deviation = Math.log(record.psaG[d][p]) - m;
-        squares += deviation * deviation;
+      if (positive && n >= 2) {
+        for (const record of sorted) {
+          const deviation = Math.log(record.psaG[d][p]) - m;
+          squares += deviation * deviation;
+        }
       }
-      const s = Math.sqrt(squares / (n - 1));
-      curve.p16_psa_g.push(Math.exp(m - s));
-      curve.p84_psa_g.push(Math.exp(m + s));
+      const s = positive && n >= 2 ? Math.sqrt(squares / (n - 1)) : null;
+      curve.p16_psa_g.push(s === null ? null : Math.exp(m - s));
+      curve.p84_psa_g.push(s === null ? null : Math.exp(m + s));
     }
     return curve;
   });

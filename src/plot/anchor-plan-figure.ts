@@ -1,7 +1,7 @@
-import { scaleLinear } from 'd3-scale';
 import { drawFooter, layoutFooter } from './footer.js';
 import { layoutHeader, startPage } from './header.js';
-import { FIGURE_TEXT, FIGURE_WIDTH_PX, FRAME_COLOUR, GRID_COLOUR, TEXT_COLOUR } from './styles.js';
+import { makeScale } from './layout.js';
+import { FIGURE_TEXT, FIGURE_WIDTH_PX, FRAME_COLOUR, GRID_COLOUR, HALO, TEXT_COLOUR } from './styles.js';
 import { linearTicks, textWidthPx } from './ticks.js';
 
 /** What the plan view needs (plain values in the user's units; no dependency on anchorage types). */
@@ -51,12 +51,8 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const footer = layoutFooter(input.notes, widthPx, legendTop + 20);
   const doc = startPage(header, widthPx, Math.ceil(footer.bottom));
 
-  const px = scaleLinear()
-    .domain([midX - half, midX + half])
-    .range([plotLeft, plotLeft + plotSize]);
-  const py = scaleLinear()
-    .domain([midY - half, midY + half])
-    .range([plotTop + plotSize, plotTop]);
+  const px = makeScale('linear', [midX - half, midX + half], [plotLeft, plotLeft + plotSize]);
+  const py = makeScale('linear', [midY - half, midY + half], [plotTop + plotSize, plotTop]);
   const panel = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': 0 });
   const extent = (text: string) => textWidthPx(text, tickPx);
   const xTicks = linearTicks(px.domain() as [number, number], (v) => px(v), extent, plotSize);
@@ -133,9 +129,7 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     'text-anchor': ux >= 0 ? 'start' : 'end',
     'font-size': 9.5,
     fill: GOVERNING,
-    stroke: '#ffffff',
-    'stroke-width': 2.5,
-    'paint-order': 'stroke',
+    ...HALO,
   });
 
   const maxTension = Math.max(...input.anchors.map((p) => p.tension), 0);
@@ -166,28 +160,13 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
       'text-anchor': 'middle',
       'font-size': 9.5,
       fill: TEXT_COLOUR,
-      stroke: '#ffffff',
-      'stroke-width': 2.5,
-      'paint-order': 'stroke',
+      ...HALO,
     });
   });
-  const cross = (x: number, yy: number, size: number) =>
-    `M${x - size},${yy}H${x + size}M${x},${yy - size}V${yy + size}`;
   const [kx, ky] = [px(input.centroid[0]), py(input.centroid[1])];
-  doc.element(marks, 'path', {
-    class: 'centroid',
-    d: `M${kx - 4},${ky - 4}L${kx + 4},${ky + 4}M${kx - 4},${ky + 4}L${kx + 4},${ky - 4}`,
-    stroke: '#555555',
-    'stroke-width': 1.2,
-  });
-  doc.element(marks, 'path', {
-    class: 'centre-of-mass',
-    d: cross(gx, gy, 7),
-    stroke: MASS,
-    'stroke-width': 2,
-  });
+  doc.element(marks, 'path', { class: 'centroid', ...centroidMark(kx, ky) });
+  doc.element(marks, 'path', { class: 'centre-of-mass', ...massMark(gx, gy, 7) });
 
-  // Legend of the marks.
   const legend = doc.element(doc.root, 'g', { class: 'legend', 'font-size': tickPx, fill: TEXT_COLOUR });
   const ly = legendTop + 6;
   let lx = sidePx;
@@ -196,30 +175,29 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     doc.text(legend, text, { x: lx + 16, y: ly + tickPx * 0.35 });
     lx += 16 + textWidthPx(text, tickPx) + 14;
   };
-  item(
-    (x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: ANCHOR, 'fill-opacity': 0.85 }),
-    'anchor (larger: more tension)',
-  );
-  item(
-    (x) => doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill: GOVERNING, 'fill-opacity': 0.85 }),
-    'governing anchor',
-  );
-  item(
-    (x) => doc.element(legend, 'path', { d: cross(x, ly, 6), stroke: MASS, 'stroke-width': 2 }),
-    'centre of mass',
-  );
-  item(
-    (x) =>
-      doc.element(legend, 'path', {
-        d: `M${x - 4},${ly - 4}L${x + 4},${ly + 4}M${x - 4},${ly + 4}L${x + 4},${ly - 4}`,
-        stroke: '#555555',
-        'stroke-width': 1.2,
-      }),
-    'anchor centroid',
-  );
+  const dot = (fill: string) => (x: number) =>
+    doc.element(legend, 'circle', { cx: x, cy: ly, r: 5, fill, 'fill-opacity': 0.85 });
+  item(dot(ANCHOR), 'anchor (larger: more tension)');
+  item(dot(GOVERNING), 'governing anchor');
+  item((x) => doc.element(legend, 'path', massMark(x, ly, 6)), 'centre of mass');
+  item((x) => doc.element(legend, 'path', centroidMark(x, ly)), 'anchor centroid');
 
   drawFooter(doc, footer);
   return doc.serialize();
+}
+
+/** The centre of mass: a plus sign `size` px from its centre to each end. */
+function massMark(x: number, y: number, size: number) {
+  return { d: `M${x - size},${y}H${x + size}M${x},${y - size}V${y + size}`, stroke: MASS, 'stroke-width': 2 };
+}
+
+/** The anchors' centroid: a small grey cross. */
+function centroidMark(x: number, y: number) {
+  return {
+    d: `M${x - 4},${y - 4}L${x + 4},${y + 4}M${x - 4},${y + 4}L${x + 4},${y - 4}`,
+    stroke: '#555555',
+    'stroke-width': 1.2,
+  };
 }
 
 function format(value: number): string {

@@ -4,7 +4,7 @@ import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
 import { renderFigure } from './figure.js';
 import type { PanelContext, PanelSpec, Series } from './panel.js';
 import { seriesStyle, TEXT_COLOUR } from './styles.js';
-import { methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
+import { methodLine, percentLabel, processingLines, recordLine, zeroPeriodNotes } from './text.js';
 
 export interface DampingFigureInput {
   record: SpectrumRecordInfo;
@@ -13,22 +13,24 @@ export interface DampingFigureInput {
   comparison: DampingComparison;
 }
 
-/** Line styles of the published ratios: one per source, grey, so the data curves keep the colours. */
-const REFERENCE_STYLES = {
-  ec8: { color: '#444444', dash: 'none', widthPx: 0.9 },
-  acceleration: { color: '#444444', dash: '6 3', widthPx: 0.9 },
-  velocity: { color: '#444444', dash: '2 2', widthPx: 0.9 },
-  displacement: { color: '#444444', dash: '8 2 2 2', widthPx: 0.9 },
+/**
+ * The published ratios, one dash pattern per source: its line's label at the right end of the line
+ * and its sample in the legend, grey there so the data curves keep the colours.
+ */
+const REFERENCES = {
+  ec8: { dash: 'none', label: 'EC8 η', legend: 'EC8 η ratio' },
+  acceleration: { dash: '6 3', label: 'NH acc.', legend: 'Newmark–Hall acc.' },
+  velocity: { dash: '2 2', label: 'NH vel.', legend: 'Newmark–Hall vel.' },
+  displacement: { dash: '8 2 2 2', label: 'NH disp.', legend: 'Newmark–Hall disp.' },
 } as const;
 
-const REFERENCE_LABELS = {
-  ec8: 'EC8 η',
-  acceleration: 'NH acc.',
-  velocity: 'NH vel.',
-  displacement: 'NH disp.',
-} as const;
+type ReferenceKind = keyof typeof REFERENCES;
 
-type ReferenceKind = keyof typeof REFERENCE_STYLES;
+const referenceStyle = (kind: ReferenceKind, color = '#444444') => ({
+  color,
+  dash: REFERENCES[kind].dash,
+  widthPx: 0.9,
+});
 
 /**
  * The record's PSA at each damping ratio (top) and its ratio to the reference damping's PSA period
@@ -45,19 +47,18 @@ export function dampingFigure(input: DampingFigureInput): string {
   const colourOf = (damping: number) =>
     seriesStyle(comparison.curves.findIndex((c) => c.damping === damping)).color;
   const others = comparison.curves.filter((c) => Math.abs(c.damping - comparison.referenceDamping) > 1e-12);
-  const psaSeries: Series[] = comparison.curves.map((curve, i) => ({
-    label: `ζ = ${percentLabel(curve.damping)}`,
-    x: periods,
-    y: Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
-    style: seriesStyle(i),
-  }));
-  const ratioSeries: Series[] = comparison.curves.map((curve, i) => ({
-    label: `ζ = ${percentLabel(curve.damping)}`,
-    x: periods,
-    y: curve.ratio,
-    style: seriesStyle(i),
-    legend: false,
-  }));
+  const curveSeries = (y: (curve: (typeof comparison.curves)[number]) => ArrayLike<number>, legend = true) =>
+    comparison.curves.map(
+      (curve, i): Series => ({
+        label: `ζ = ${percentLabel(curve.damping)}`,
+        x: periods,
+        y: y(curve),
+        style: seriesStyle(i),
+        legend,
+      }),
+    );
+  const psaSeries = curveSeries((curve) => Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2));
+  const ratioSeries = curveSeries((curve) => curve.ratio, false);
   const references: { kind: ReferenceKind; damping: number; value: number }[] = [];
   for (const curve of others) {
     const nh = curve.published.newmarkHall;
@@ -67,28 +68,28 @@ export function dampingFigure(input: DampingFigureInput): string {
       if (value !== null) references.push({ kind, damping: curve.damping, value });
     }
   }
-  const seen = new Set<ReferenceKind>();
   // Each published line in the colour of its damping ratio; the legend shows the dash of each source.
-  const referenceSeries: Series[] = references.map((r) => {
-    seen.add(r.kind);
-    return {
-      label: LEGEND_LABELS[r.kind],
+  const referenceSeries = references.map(
+    (r): Series => ({
+      label: REFERENCES[r.kind].legend,
       x: [tLow, tHigh],
       y: [r.value, r.value],
-      style: { ...REFERENCE_STYLES[r.kind], color: colourOf(r.damping) },
+      style: referenceStyle(r.kind, colourOf(r.damping)),
       legend: false,
       kind: 'reference',
-    };
-  });
-  const legendSamples: Series[] = (Object.keys(REFERENCE_STYLES) as ReferenceKind[])
-    .filter((kind) => seen.has(kind))
-    .map((kind) => ({
-      label: LEGEND_LABELS[kind],
-      x: [],
-      y: [],
-      style: REFERENCE_STYLES[kind],
-      kind: 'legend-only',
-    }));
+    }),
+  );
+  const legendSamples = (Object.keys(REFERENCES) as ReferenceKind[])
+    .filter((kind) => references.some((r) => r.kind === kind))
+    .map(
+      (kind): Series => ({
+        label: REFERENCES[kind].legend,
+        x: [],
+        y: [],
+        style: referenceStyle(kind),
+        kind: 'legend-only',
+      }),
+    );
   let low = 1;
   let high = 1;
   for (const s of [...ratioSeries, ...referenceSeries]) {
@@ -124,14 +125,14 @@ export function dampingFigure(input: DampingFigureInput): string {
   ];
   const subtitle = [
     recordLine('Record', record),
-    ...record.processing.map((step) => `Processed: ${step.description}`),
+    ...processingLines(record.processing),
     methodLine(input.methodDescription, comparison.curves),
   ];
   const notes = [
     `Bottom: the record's PSA at each damping ratio divided by its PSA at ${percentLabel(comparison.referenceDamping)}, period by period. Thin horizontal lines, in the colour of their damping ratio and dashed by source: the published ratios for that damping, labelled at the right.`,
     'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
+    ...zeroPeriodNotes(periods, ' (there every ratio is 1)'),
   ];
-  if (Array.from(periods).includes(0)) notes.push(zeroPeriodNote(' (there every ratio is 1)'));
   return renderFigure({
     title: 'Damping comparison: PSA and its ratio to 5% damping',
     subtitle,
@@ -141,13 +142,6 @@ export function dampingFigure(input: DampingFigureInput): string {
     notes,
   });
 }
-
-const LEGEND_LABELS: Readonly<Record<ReferenceKind, string>> = {
-  ec8: 'EC8 η ratio',
-  acceleration: 'Newmark–Hall acc.',
-  velocity: 'Newmark–Hall vel.',
-  displacement: 'Newmark–Hall disp.',
-};
 
 const LABEL_PX = 8.5;
 
@@ -162,7 +156,7 @@ function labelReferences(
     .map((r) => ({
       ...r,
       at: y(r.value),
-      text: `${percentLabel(r.damping)}: ${REFERENCE_LABELS[r.kind]} ${r.value.toFixed(2)}`,
+      text: `${percentLabel(r.damping)}: ${REFERENCES[r.kind].label} ${r.value.toFixed(2)}`,
     }))
     .sort((a, b) => a.at - b.at);
   const gap = LABEL_PX + 1.5;

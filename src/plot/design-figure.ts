@@ -1,7 +1,7 @@
 import type { DesignSpectrum } from '../spectrum/design.js';
 import { lineChart } from './line-chart.js';
 import { overlayStyle } from './styles.js';
-import { formatValue, zeroPeriodNote } from './text.js';
+import { formatValue, percentLabel, zeroPeriodNote } from './text.js';
 
 const CODE_LABELS: Readonly<Record<DesignSpectrum['code'], string>> = {
   'asce7-16': 'ASCE/SEI 7-16 design spectrum',
@@ -30,21 +30,18 @@ export function designFigure(input: DesignFigureInput): string {
     'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',
   );
   const drawn = densified(input);
-  const damping =
-    spectrum.damping === undefined ? 'not stated' : `${Number((spectrum.damping * 100).toPrecision(6))}%`;
+  const damping = spectrum.damping === undefined ? 'not stated' : percentLabel(spectrum.damping);
   return lineChart({
     title: 'Design spectrum, pseudo-acceleration PSA',
     subtitle: [`Spectrum: ${spectrum.description}`, `Damping: ${damping}`],
     x: { title: 'Period T (s)' },
     y: { title: 'Pseudo-acceleration PSA (g)' },
-    axes: 'log',
     series: [
       {
         label: CODE_LABELS[spectrum.code],
         x: drawn.periodsS,
         y: drawn.psaG,
         style: overlayStyle(0),
-        kind: 'curve',
       },
     ],
     notes,

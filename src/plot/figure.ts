@@ -15,7 +15,6 @@ export interface FigureSpec {
   legendTitle?: string;
   /** Lines of small print above the caution (method notes, what is left off the plot). */
   notes?: readonly string[];
-  widthPx?: number;
   /** Room right of the plots, px, e.g. for labels at the right end of lines; default 18. */
   rightMarginPx?: number;
 }
@@ -25,7 +24,7 @@ export interface FigureSpec {
  * standing caution as the footer. Returns standalone SVG text.
  */
 export function renderFigure(spec: FigureSpec): string {
-  const widthPx = spec.widthPx ?? FIGURE_WIDTH_PX;
+  const widthPx = FIGURE_WIDTH_PX;
   const layouts = spec.panels.map(layoutPanel);
   const yLabelWidth = Math.max(...layouts.map((l) => l.yLabelWidthPx), 20);
   const plotLeft = sidePx + axisTitlePx + 8 + yLabelWidth + 7;

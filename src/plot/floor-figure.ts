@@ -2,8 +2,15 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext, Series } from './panel.js';
-import { TEXT_COLOUR } from './styles.js';
-import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
+import { DAMPING_DASHES, HALO, TEXT_COLOUR } from './styles.js';
+import {
+  formatValue,
+  methodLine,
+  percentLabel,
+  processingLines,
+  recordLine,
+  zeroPeriodNotes,
+} from './text.js';
 
 export interface FloorFigureInput {
   /** The ground record's spectrum. */
@@ -18,8 +25,6 @@ export interface FloorFigureInput {
   methodDescription: string;
 }
 
-const DASHES = ['none', '7 3', '2 2.5', '9 3 2 3'];
-
 /**
  * The in-structure (floor) PSA spectrum against the ground spectrum it came from, and the floor
  * spectrum before peak broadening when it was broadened; log–log, with the building period marked.
@@ -31,7 +36,7 @@ export function floorFigure(input: FloorFigureInput): string {
   const suffix = (damping: number) => (many ? `, ζ = ${percentLabel(damping)}` : '');
   const series: Series[] = [];
   floor.curves.forEach((curve, d) => {
-    const dash = DASHES[d % DASHES.length];
+    const dash = DAMPING_DASHES[d % DAMPING_DASHES.length];
     series.push({
       label: `${broadened ? 'floor, broadened' : 'floor'}${suffix(curve.damping)}`,
       x: floor.periodsS,
@@ -57,7 +62,7 @@ export function floorFigure(input: FloorFigureInput): string {
   const r = ground.record;
   const subtitle = [
     recordLine('Ground record', r),
-    ...r.processing.map((step) => `Processed: ${step.description}`),
+    ...processingLines(r.processing),
     `Building, one mode: T_b = ${b.periodS} s, ζ_b = ${percentLabel(b.damping)}, Γφ = ${b.modalFactor}; floor PGA = ${formatValue(floor.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g`,
     methodLine(input.methodDescription, floor.curves, 'component damping'),
   ];
@@ -66,16 +71,16 @@ export function floorFigure(input: FloorFigureInput): string {
     broadened
       ? `Peaks broadened: the value at T is the largest over [T(1−b), T/(1−b)], b = ${input.broadening} (US NRC Regulatory Guide 1.122, from memory).`
       : 'Peaks not broadened.',
+    ...zeroPeriodNotes(
+      floor.periodsS,
+      ' (there PSA is the peak acceleration, the floor and ground PGA given above)',
+    ),
   ];
-  if (Array.from(floor.periodsS).includes(0)) {
-    notes.push(zeroPeriodNote(' (there PSA is the peak acceleration, the floor and ground PGA given above)'));
-  }
   return lineChart({
     title: 'Floor response spectrum against the ground spectrum, PSA',
     subtitle,
     x: { title: 'Period T (s)' },
     y: { title: 'Pseudo-acceleration PSA (g)' },
-    axes: 'log',
     series,
     notes,
     underlay: (context) => markBuildingPeriod(context, b.periodS),
@@ -101,8 +106,6 @@ function markBuildingPeriod(context: PanelContext, periodS: number): void {
     y: plot.top + 12,
     'font-size': 9,
     fill: TEXT_COLOUR,
-    stroke: '#ffffff',
-    'stroke-width': 2.5,
-    'paint-order': 'stroke',
+    ...HALO,
   });
 }

@@ -1,5 +1,6 @@
 import { lineChart } from './line-chart.js';
 import type { Series } from './panel.js';
+import { processingLines, recordNameLine } from './text.js';
 import { niceCeil125, niceFloor125 } from './ticks.js';
 
 export interface FourierFigureInput {
@@ -48,11 +49,10 @@ export function fourierFigure(input: FourierFigureInput): string {
       style: { color: '#0072B2', dash: 'none', widthPx: 1.8 },
     });
   }
-  const source = input.source !== undefined && input.source !== input.name ? ` (${input.source})` : '';
-  const subtitle = [`Record: ${input.name}${source}`];
-  const processing = input.processing ?? [];
-  if (processing.length === 0) subtitle.push('Processed: nothing (as read)');
-  for (const step of processing) subtitle.push(`Processed: ${step.description}`);
+  const subtitle = [
+    recordNameLine(input.name, input.source),
+    ...processingLines(input.processing, 'Processed: nothing (as read)'),
+  ];
   if (input.methodDescription !== undefined) subtitle.push(`Method: ${input.methodDescription}`);
   return lineChart({
     title: 'Fourier amplitude spectrum of the ground acceleration',
@@ -62,7 +62,6 @@ export function fourierFigure(input: FourierFigureInput): string {
       title: 'Fourier amplitude (m/s)',
       domain: [niceFloor125(peak * 10 ** -AMPLITUDE_DECADES), niceCeil125(peak * 1.2)],
     },
-    axes: 'log',
     heightPx: 320,
     series,
     notes: [

@@ -2,7 +2,7 @@ import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/uni
 import { renderFigure } from './figure.js';
 import type { PanelContext, PanelSpec } from './panel.js';
 import { TEXT_COLOUR } from './styles.js';
-import { formatValue } from './text.js';
+import { formatValue, processingLines, recordNameLine } from './text.js';
 
 export interface HistoriesFigureInput {
   /** The record's name, for the title line. */
@@ -81,12 +81,11 @@ export function historiesFigure(input: HistoriesFigureInput, options: HistoriesF
     xLabels: i === rows.length - 1,
     overlay: (context) => markPeak(context, timesS, row.values, row.unit),
   }));
-  const source = input.source !== undefined && input.source !== input.name ? ` (${input.source})` : '';
-  const subtitle = [`Record: ${input.name}${source}; ${n} samples at Δt = ${input.dtS} s`];
-  for (const step of input.processing ?? []) subtitle.push(`Processed: ${step.description}`);
-  subtitle.push(
+  const subtitle = [
+    `${recordNameLine(input.name, input.source)}; ${n} samples at Δt = ${input.dtS} s`,
+    ...processingLines(input.processing),
     `Method: ${input.integrationDescription ?? 'velocity and displacement by the trapezoidal rule from rest (v = u = 0 at t = 0)'}`,
-  );
+  ];
   return renderFigure({
     title: 'Ground acceleration, velocity and displacement',
     subtitle,
@@ -105,17 +104,10 @@ export function historiesFigure(input: HistoriesFigureInput, options: HistoriesF
 function markPeak(context: PanelContext, timesS: Float64Array, values: Float64Array, unit: string): void {
   const { doc, group, x, y, plot } = context;
   const i = peakIndex(values);
-  const px = x(timesS[i]);
-  const py = y(values[i]);
   const mark = doc.element(group, 'g', { class: 'peak', 'data-value': values[i], 'data-time': timesS[i] });
-  doc.element(mark, 'circle', {
-    cx: px,
-    cy: py,
-    r: 3.2,
-    fill: 'none',
-    stroke: TEXT_COLOUR,
-    'stroke-width': 1.2,
-  });
+  const ring = (cx: number, cy: number) =>
+    doc.element(mark, 'circle', { cx, cy, r: 3.2, fill: 'none', stroke: TEXT_COLOUR, 'stroke-width': 1.2 });
+  ring(x(timesS[i]), y(values[i]));
   const text = `peak ${formatValue(values[i])} ${unit} at t = ${formatValue(timesS[i])} s`;
   // Above the frame, right-aligned, where no curve can run under it; the marker sits on the curve.
   const right = plot.left + plot.width;
@@ -126,14 +118,7 @@ function markPeak(context: PanelContext, timesS: Float64Array, values: Float64Ar
     'font-size': 9.5,
     fill: TEXT_COLOUR,
   });
-  doc.element(mark, 'circle', {
-    cx: right - 4,
-    cy: plot.top - 7.5,
-    r: 3.2,
-    fill: 'none',
-    stroke: TEXT_COLOUR,
-    'stroke-width': 1.2,
-  });
+  ring(right - 4, plot.top - 7.5);
 }
 
 /** Index of the largest absolute value (the first one, if it repeats). */

@@ -1,6 +1,7 @@
 import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
-import { TEXT_COLOUR } from './styles.js';
+import { HALO, TEXT_COLOUR } from './styles.js';
+import { processingLines, recordNameLine } from './text.js';
 
 export interface HusidFigureInput {
   /** The record's name and where it came from. */
@@ -24,12 +25,11 @@ export function husidFigure(input: HusidFigureInput): string {
   const n = input.husid.length;
   const timesS = Float64Array.from({ length: n }, (_, i) => i * input.dtS);
   const durationS = n > 1 ? timesS[n - 1] : input.dtS;
-  const source = input.source !== undefined && input.source !== input.name ? ` (${input.source})` : '';
-  const subtitle = [`Record: ${input.name}${source}; ${n} samples at Δt = ${input.dtS} s`];
-  const processing = input.processing ?? [];
-  if (processing.length === 0) subtitle.push('Processed: nothing (as read)');
-  for (const step of processing) subtitle.push(`Processed: ${step.description}`);
-  subtitle.push('Method: I(t) = ∫₀ᵗ a² dt / ∫₀ᵀ a² dt by the trapezoidal rule (Husid 1969; Arias 1970)');
+  const subtitle = [
+    `${recordNameLine(input.name, input.source)}; ${n} samples at Δt = ${input.dtS} s`,
+    ...processingLines(input.processing, 'Processed: nothing (as read)'),
+    'Method: I(t) = ∫₀ᵗ a² dt / ∫₀ᵀ a² dt by the trapezoidal rule (Husid 1969; Arias 1970)',
+  ];
   const levels: [number, number][] = [
     [0.05, input.t5S],
     [0.75, input.t75S],
@@ -77,9 +77,7 @@ function markLevels(context: PanelContext, levels: readonly [number, number][]):
       y: py + (level > 0.5 ? 12 : -5),
       'font-size': 9,
       fill: TEXT_COLOUR,
-      stroke: '#ffffff',
-      'stroke-width': 2.5,
-      'paint-order': 'stroke',
+      ...HALO,
     });
   }
 }

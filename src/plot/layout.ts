@@ -1,5 +1,5 @@
 import { scaleLinear, scaleLog } from 'd3-scale';
-import type { AxisScale, PanelSpec, Series } from './panel.js';
+import type { AxisScale, AxisSpec, PanelSpec, Series } from './panel.js';
 import { FIGURE_TEXT, type SeriesStyle, seriesStyle } from './styles.js';
 import { type AxisTicks, linearTicks, logTicks, niceCeil125, niceFloor125, textWidthPx } from './ticks.js';
 
@@ -11,8 +11,8 @@ export interface PanelLayout {
   series: { series: Series; style: SeriesStyle }[];
   xScale: AxisScale;
   yScale: AxisScale;
-  xDomain: [number, number];
-  yDomain: [number, number];
+  xDomain: readonly [number, number];
+  yDomain: readonly [number, number];
   yLabelWidthPx: number;
 }
 
@@ -24,27 +24,19 @@ export function layoutPanel(spec: PanelSpec): PanelLayout {
   const xScale = spec.x.scale ?? 'log';
   const yScale = spec.y.scale ?? 'log';
   const series = spec.series.map((s, i) => ({ series: s, style: { ...seriesStyle(i), ...s.style } }));
-  const xDomain = spec.x.domain
-    ? ([...spec.x.domain] as [number, number])
-    : dataDomain(spec.series, 'x', xScale, yScale);
-  let yDomain = spec.y.domain
-    ? ([...spec.y.domain] as [number, number])
-    : dataDomain(spec.series, 'y', xScale, yScale);
-  if (!spec.y.domain) {
-    if (yScale === 'log') yDomain = [niceFloor125(yDomain[0]), niceCeil125(yDomain[1])];
-    else if (spec.y.symmetric) {
-      const m = Math.max(Math.abs(yDomain[0]), Math.abs(yDomain[1])) * 1.08 || 1;
-      yDomain = scaleLinear().domain([-m, m]).nice().domain() as [number, number];
-    } else {
-      yDomain = scaleLinear()
-        .domain([Math.min(0, yDomain[0]), yDomain[1] * 1.04 || 1])
-        .nice()
-        .domain() as [number, number];
-    }
-  }
+  const xDomain = spec.x.domain ?? dataDomain(spec.series, 'x', xScale, yScale);
+  const yDomain = spec.y.domain ?? yAxisDomain(dataDomain(spec.series, 'y', xScale, yScale), yScale, spec.y);
   const ticks = axisTicks(yScale, yDomain, spec.heightPx, 'y');
   const yLabelWidthPx = Math.max(0, ...ticks.labels.map((l) => textWidthPx(l.text, tickPx)));
   return { spec, series, xScale, yScale, xDomain, yDomain, yLabelWidthPx };
+}
+
+/** A y axis over the data's extent: widened to 1-2-5 values (log), made nice from 0 or about 0 (linear). */
+function yAxisDomain([low, high]: [number, number], scale: AxisScale, axis: AxisSpec): [number, number] {
+  if (scale === 'log') return [niceFloor125(low), niceCeil125(high)];
+  const m = Math.max(Math.abs(low), Math.abs(high)) * 1.08 || 1;
+  const extent = axis.symmetric ? [-m, m] : [Math.min(0, low), high * 1.04 || 1];
+  return scaleLinear().domain(extent).nice().domain() as [number, number];
 }
 
 /** The extent of the drawable points of all series along one coordinate. */

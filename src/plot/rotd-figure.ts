@@ -2,7 +2,7 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import { lineChart } from './line-chart.js';
 import type { Series } from './panel.js';
-import type { SeriesStyle } from './styles.js';
+import { DAMPING_DASHES, type SeriesStyle } from './styles.js';
 import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
 
 export interface RotDFigureInput {
@@ -17,7 +17,6 @@ const MEASURES = [
   { key: 'rotd50MS2', label: 'RotD50', color: '#0072B2' },
   { key: 'geomeanMS2', label: 'geometric mean', color: '#009E73' },
 ] as const;
-const DASHES = ['none', '7 3', '2 2.5', '9 3 2 3'];
 
 /**
  * RotD50, RotD100 (Boore 2010) and the geometric mean of the two components as recorded, PSA (g)
@@ -29,7 +28,11 @@ export function rotdFigure(input: RotDFigureInput): string {
   const series: Series[] = [];
   spectra.curves.forEach((curve, d) => {
     for (const measure of MEASURES) {
-      const style: SeriesStyle = { color: measure.color, dash: DASHES[d % DASHES.length], widthPx: 1.6 };
+      const style: SeriesStyle = {
+        color: measure.color,
+        dash: DAMPING_DASHES[d % DAMPING_DASHES.length],
+        widthPx: 1.6,
+      };
       series.push({
         label: many ? `${measure.label}, ζ = ${percentLabel(curve.damping)}` : measure.label,
         x: spectra.periodsS,
@@ -63,7 +66,6 @@ export function rotdFigure(input: RotDFigureInput): string {
     subtitle,
     x: { title: 'Period T (s)' },
     y: { title: 'Pseudo-acceleration PSA (g)' },
-    axes: 'log',
     series,
     notes,
   });

@@ -3,7 +3,14 @@ import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { AxisScale, Series } from './panel.js';
 import { overlayStyle } from './styles.js';
-import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
+import {
+  formatValue,
+  methodLine,
+  percentLabel,
+  processingLines,
+  recordLine,
+  zeroPeriodNotes,
+} from './text.js';
 
 export interface SpectrumFigureOptions {
   /** 'log' (default) for log–log axes, 'linear' for linear ones. */
@@ -27,17 +34,21 @@ export interface PsaFigureOptions extends SpectrumFigureOptions {
 
 /** The lines that say where a spectrum comes from: record, processing, method and damping. */
 export function spectrumSubtitle(spectrum: Spectrum, methodDescription?: string): string[] {
-  const processing = spectrum.record.processing.map((step) => `Processed: ${step.description}`);
   const method = methodLine(methodDescription ?? spectrum.method, spectrum.curves);
-  return [recordLine('Record', spectrum.record), ...processing, method];
+  return [recordLine('Record', spectrum.record), ...processingLines(spectrum.record.processing), method];
 }
 
 /** The note that T = 0 is left off a log period axis, when the grid holds it. */
 export function spectrumZeroNote(spectrum: Spectrum, axes: AxisScale, there: string): string[] {
-  return axes === 'log' && Array.from(spectrum.periodsS).includes(0) ? [zeroPeriodNote(there)] : [];
+  return axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, there) : [];
 }
 
-function dampingSeries(spectrum: Spectrum, pick: (index: number) => Float64Array, scale: number): Series[] {
+/** One curve per damping ratio: the values `pick` gives for curve i, times `scale`. */
+export function dampingSeries(
+  spectrum: Spectrum,
+  pick: (index: number) => Float64Array,
+  scale: number,
+): Series[] {
   return spectrum.curves.map((curve, i) => ({
     label: `ζ = ${percentLabel(curve.damping)}`,
     x: spectrum.periodsS,

@@ -15,6 +15,9 @@ export interface SeriesStyle {
 const COLOURS = ['#0072B2', '#D55E00', '#009E73', '#CC79A7', '#E69F00', '#56B4E9', '#000000'];
 const DASHES = ['none', '7 3', '2 2.5', '9 3 2 3', '4 2 1 2 1 2', '12 3', '1 4'];
 
+/** Dash patterns by damping ratio, for figures that give the colour to something else. */
+export const DAMPING_DASHES = DASHES.slice(0, 4);
+
 /** The style of the `index`-th data curve; patterns repeat after seven curves. */
 export function seriesStyle(index: number): SeriesStyle {
   return {
@@ -37,6 +40,9 @@ export const GRID_COLOUR = '#d9d9d9';
 export const MINOR_GRID_COLOUR = '#eeeeee';
 export const FRAME_COLOUR = '#333333';
 export const TEXT_COLOUR = '#111111';
+
+/** A white outline under a label, so it stays legible over grid lines and curves. */
+export const HALO = { stroke: '#ffffff', 'stroke-width': 2.5, 'paint-order': 'stroke' } as const;
 
 /** Width of every figure: 640 px, 169 mm at 96 px to the inch, the text width of an A4 or letter page. */
 export const FIGURE_WIDTH_PX = 640;

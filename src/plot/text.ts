@@ -51,3 +51,22 @@ export function methodLine(method: string, curves: readonly { damping: number }[
 export function zeroPeriodNote(there: string): string {
   return `T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off${there}.`;
 }
+
+/** The zero-period note as a list: one note when `periodsS` holds T = 0, none otherwise. */
+export function zeroPeriodNotes(periodsS: ArrayLike<number>, there: string): string[] {
+  return Array.from(periodsS).includes(0) ? [zeroPeriodNote(there)] : [];
+}
+
+/** One subtitle line per processing step; `none` stands alone when there were none (if given). */
+export function processingLines(
+  processing: readonly { description: string }[] = [],
+  none?: string,
+): string[] {
+  if (processing.length === 0 && none !== undefined) return [none];
+  return processing.map((step) => `Processed: ${step.description}`);
+}
+
+/** "Record: name (source)", the source left out when it is missing or the same as the name. */
+export function recordNameLine(name: string, source: string | undefined): string {
+  return `Record: ${name}${source !== undefined && source !== name ? ` (${source})` : ''}`;
+}

@@ -12,29 +12,15 @@ export function textWidthPx(text: string, fontSizePx: number): number {
   return text.length * fontSizePx * 0.6;
 }
 
-const SUPERSCRIPT: Readonly<Record<string, string>> = {
-  '-': '⁻',
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-};
+const SUPERSCRIPT_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 
 /** A tick value for a log axis: plain decimals from 0.001 to 10 000, powers of ten beyond. */
 export function formatLogValue(value: number): string {
   const exponent = Math.floor(Math.log10(value) + 1e-9);
   if (exponent >= -3 && exponent <= 4) return String(Number(value.toPrecision(6)));
   const mantissa = Number((value / 10 ** exponent).toPrecision(3));
-  const power = `10${String(exponent)
-    .split('')
-    .map((c) => SUPERSCRIPT[c])
-    .join('')}`;
+  const superscript = (c: string) => (c === '-' ? '⁻' : SUPERSCRIPT_DIGITS[Number(c)]);
+  const power = `10${String(exponent).split('').map(superscript).join('')}`;
   return mantissa === 1 ? power : `${mantissa}×${power}`;
 }
 
@@ -126,8 +112,7 @@ function leadingDigit(value: number): number {
 /** The 1-2-5 value at or below `value` (> 0). */
 export function niceFloor125(value: number): number {
   const decade = 10 ** Math.floor(Math.log10(value) + 1e-12);
-  const steps = [5, 2, 1];
-  for (const s of steps) if (s * decade <= value * (1 + 1e-12)) return s * decade;
+  for (const s of [5, 2, 1]) if (s * decade <= value * (1 + 1e-12)) return s * decade;
   return decade;
 }
 

@@ -3,11 +3,13 @@ import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
 import {
+  dampingSeries,
   overlaySeries,
   type PsaFigureOptions,
   spectrumSubtitle,
   spectrumZeroNote,
 } from './spectrum-figure.js';
+import { formatCoordinate } from './svg.js';
 import { formatValue } from './text.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
 
@@ -41,11 +43,7 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
   const perLength = 1 / LENGTH_UNITS[unit];
   const gInUnit = STANDARD_GRAVITY_MS2 * perLength;
   const series = [
-    ...spectrum.curves.map((curve) => ({
-      label: `ζ = ${Number((curve.damping * 100).toPrecision(6))}%`,
-      x: spectrum.periodsS,
-      y: curve.psvMS.map((v) => v * perLength),
-    })),
+    ...dampingSeries(spectrum, (i) => spectrum.curves[i].psvMS, perLength),
     ...overlaySeries(options.overlays, (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI)),
   ];
   const underlay = (context: PanelContext) => drawDiagonals(context, unit, gInUnit, series);
@@ -54,7 +52,6 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
     subtitle: spectrumSubtitle(spectrum, options.methodDescription),
     x: { title: 'Period T (s)' },
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
-    axes: 'log',
     heightPx: 430,
     legendTitle: 'Damping:',
     series,
@@ -134,7 +131,7 @@ function drawDiagonals(
         'data-unit': family.unit,
       });
       doc.element(item, 'path', {
-        d: `M${round(ax)},${round(ay)}L${round(bx)},${round(by)}`,
+        d: `M${formatCoordinate(ax)},${formatCoordinate(ay)}L${formatCoordinate(bx)},${formatCoordinate(by)}`,
         stroke: DIAGONAL_COLOUR,
         'stroke-width': 0.7,
       });
@@ -148,7 +145,7 @@ function drawDiagonals(
         x: 0,
         y: 0,
         dy: '0.35em',
-        transform: `translate(${round(cx)},${round(cy)}) rotate(${round(angle)})`,
+        transform: `translate(${formatCoordinate(cx)},${formatCoordinate(cy)}) rotate(${formatCoordinate(angle)})`,
         'text-anchor': 'middle',
         'font-size': DIAGONAL_PX,
         fill: DIAGONAL_TEXT,
@@ -193,8 +190,4 @@ function chooseSpot(
     if (score === 0) break;
   }
   return best;
-}
-
-function round(value: number): number {
-  return Math.round(value * 100) / 100;
 }

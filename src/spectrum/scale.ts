@@ -109,7 +109,7 @@ export function scaleStep(result: ScaleResult, target: DesignSpectrum): Processi
   };
 }
 
-/** The record with every sample multiplied by `step.parameters.factor`, the step on its list. */
+/** The record with every sample multiplied by `factor`, the step on its list. */
 export function scaleRecord(record: GroundRecord, factor: number, step: ProcessingStep): GroundRecord {
   return withProcessing(
     record,
