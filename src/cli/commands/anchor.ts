@@ -10,21 +10,17 @@ import { anchorPlanInput } from '../../formats/anchorage-plan.js';
 import { anchorTable } from '../../formats/anchorage-table.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
-import { OutputSet } from '../../output/output-set.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan-figure.js';
-import { outputFormat } from '../options/format.js';
+import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 import { readSpectrumFile } from '../options/spectrum-file.js';
 
-export interface AnchorCliOptions extends RecordCliOptions {
+export interface AnchorCliOptions extends RecordCliOptions, OutputCliOptions {
   equipment?: string;
   record: string[];
   spectrum?: string;
   demand?: string;
   method?: string;
-  format?: string;
-  out?: string;
-  svg?: string;
   anchorRule?: string;
 }
 
@@ -58,13 +54,13 @@ export function registerAnchor(program: Command): void {
       'projected',
     );
   addRecordOptions(command);
-  command
-    .option('--format <format>', 'json or table (default: table on the terminal, json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
-    .option('--svg <dir>', 'also write the anchor plan view, DIR/anchor-plan.svg')
-    .action(async (options: AnchorCliOptions) => {
-      await runAnchor(options);
-    });
+  addOutputOptions(
+    command,
+    'json or table (default: table on the terminal, json with --out)',
+    'also write the anchor plan view, DIR/anchor-plan.svg',
+  ).action(async (options: AnchorCliOptions) => {
+    await runAnchor(options);
+  });
 }
 
 export async function runAnchor(options: AnchorCliOptions): Promise<void> {
@@ -109,10 +105,7 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   analysis.assumptions.push(...notes);
   const text = format === 'json' ? formatJson(anchorageToJson(analysis)) : anchorTable(analysis);
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
-  const outputs = new OutputSet(inputs);
-  if (options.svg !== undefined)
-    outputs.folder(options.svg, [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]], '--svg');
-  outputs.text(options.out, text).write();
+  writeProduct(inputs, options, text, () => [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]]);
 }
 
 function refuseGroundOnFloor(equipment: Equipment, demand: string, notes: string[]): void {

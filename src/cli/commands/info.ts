@@ -3,7 +3,6 @@ import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { INFO_METHODS, infoTable, infoToJson } from '../../formats/info.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { logSpaced } from '../../oscillator/grid.js';
-import { OutputSet } from '../../output/output-set.js';
 import { fourierFigure } from '../../plot/fourier-figure.js';
 import { historiesFigure } from '../../plot/histories-figure.js';
 import { husidFigure } from '../../plot/husid-figure.js';
@@ -16,14 +15,11 @@ import { integrateRecord } from '../../record/integrate.js';
 import { type GroundMotionMeasures, groundMotionMeasures, husidCurve } from '../../record/measures.js';
 import type { GroundRecord } from '../../record/record.js';
 import { predominantPeriod } from '../../spectrum/predominant.js';
-import { outputFormat } from '../options/format.js';
+import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
 
-export interface InfoCliOptions extends RecordCliOptions, ProcessingCliOptions {
-  format?: string;
-  out?: string;
-  svg?: string;
+export interface InfoCliOptions extends RecordCliOptions, ProcessingCliOptions, OutputCliOptions {
   bracketThreshold?: string;
   smoothing?: string;
 }
@@ -35,9 +31,7 @@ export function registerInfo(program: Command): void {
     .argument('<record>', 'record file, or - for standard input');
   addRecordOptions(command);
   addProcessingOptions(command);
-  command
-    .option('--format <format>', 'table or json (default: table on the terminal, json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
+  addOutputOptions(command, 'table or json (default: table on the terminal, json with --out)')
     .option('--svg <folder>', 'also draw histories.svg, husid.svg and fourier.svg into this folder')
     .option('--bracket-threshold <g>', 'threshold of the bracketed duration, g', '0.05')
     .option(
@@ -59,9 +53,7 @@ export async function runInfo(source: string, options: InfoCliOptions): Promise<
   const predominant = predominantPeriod(record);
   const json = infoToJson(record, measures, predominant);
   const text = format === 'json' ? formatJson(json) : infoTable(json);
-  const outputs = new OutputSet([source]);
-  if (options.svg !== undefined) outputs.folder(options.svg, figures(record, measures, smoothing), '--svg');
-  outputs.text(options.out, text).write();
+  writeProduct([source], options, text, () => figures(record, measures, smoothing));
 }
 
 function parseSmoothing(text: string): number | null {

@@ -9,6 +9,7 @@ import { assembleReport, type ReportRequest } from '../../report/assemble.js';
 import type { BuildingMode } from '../../spectrum/floor.js';
 import { parseScaleRange } from '../../spectrum/scale.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
+import { figureAxes } from '../options/format.js';
 import { generationTime } from '../options/generation-time.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
@@ -88,8 +89,7 @@ export async function runReport(
   if (out === undefined) throw usageError('--out <dir> is required');
   const grid = gridFromOptions(options);
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
-  const axes = options.axes ?? 'log';
-  if (axes !== 'log' && axes !== 'linear') throw usageError(`--axes '${axes}': use log or linear`);
+  const axes = figureAxes(options.axes);
   const target = loadTarget(options);
   const equipment = (options.equipment ?? []).map((file) => ({
     file,
