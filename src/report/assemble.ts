@@ -29,7 +29,7 @@ export interface ReportRequest {
   /** The same record processed: the spectra are of this one. */
   processed: GroundRecord;
   grid: { periodsS: Float64Array; dampings: Float64Array; method: Method };
-  /** A target spectrum to fit (over `scaleRangeS`), the fit applied to every output with `applyScale`. */
+  /** A target spectrum to fit (over `rangeS`), the fit applied to every output with `apply`. */
   target?: { spectrum: DesignSpectrum; rangeS?: [number, number]; apply?: boolean };
   lengthUnit?: LengthUnit;
   axes?: 'log' | 'linear';

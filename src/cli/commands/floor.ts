@@ -15,9 +15,7 @@ export interface FloorCliOptions
   extends RecordCliOptions,
     GridCliOptions,
     BuildingCliOptions,
-    OutputCliOptions {
-  broaden?: string | boolean;
-}
+    OutputCliOptions {}
 
 export function registerFloor(program: Command): void {
   const command = program

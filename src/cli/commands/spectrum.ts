@@ -20,7 +20,12 @@ import {
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
-import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../options/target.js';
+import {
+  addTargetOptions,
+  applyTarget,
+  type TargetCliOptions,
+  targetFromOptions,
+} from '../options/target.js';
 import { parseThreads } from '../options/threads.js';
 
 export interface SpectrumCliOptions
@@ -74,11 +79,11 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const axes = figureAxes(options.axes);
   if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
   if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
-  const target = loadTarget(options);
+  const target = targetFromOptions(options);
   const sweep = sweepChoice(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
-  const { fit, spectrum } = applyTarget(swept, target, options);
+  const { fit, spectrum } = applyTarget(swept, target);
   let figures: [string, string][] = [];
   if (options.svg !== undefined) {
     // The figure modules load only for --svg.
