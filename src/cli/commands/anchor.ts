@@ -1,9 +1,8 @@
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { analyseAnchorage, type ElasticInput, parseDemandChoice } from '../../anchorage/anchorage.js';
+import { analyseAnchorage, parseDemandChoice } from '../../anchorage/anchorage.js';
 import { parseAnchorRule } from '../../anchorage/bolt-group.js';
-import { recordPsaForComponent } from '../../anchorage/elastic-demand.js';
-import { EQUIPMENT_UNITS, type Equipment, parseEquipment } from '../../anchorage/equipment.js';
+import { parseEquipment } from '../../anchorage/equipment.js';
 import { usageError } from '../../base/errors.js';
 import { anchorageToJson } from '../../formats/anchorage-json.js';
 import { anchorPlanInput } from '../../formats/anchorage-plan.js';
@@ -12,13 +11,11 @@ import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan-figure.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
-import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
-import { readSpectrumFile } from '../options/spectrum-file.js';
+import { elasticFromOptions, type MotionCliOptions } from '../options/motion.js';
+import { addRecordOptions } from '../options/record.js';
 
-export interface AnchorCliOptions extends RecordCliOptions, OutputCliOptions {
+export interface AnchorCliOptions extends MotionCliOptions, OutputCliOptions {
   equipment?: string;
-  record: string[];
-  spectrum?: string;
   demand?: string;
   method?: string;
   anchorRule?: string;
@@ -76,49 +73,10 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   const anchorRule = parseAnchorRule(options.anchorRule ?? 'projected');
 
   const equipment = parseEquipment(readFileSync(options.equipment, 'utf8'), options.equipment);
-  const notes: string[] = [];
-  let elastic: ElasticInput | null = null;
-  if (options.spectrum !== undefined) {
-    const read = readSpectrumFile(options.spectrum, equipment);
-    if (equipment.zM > 0 && !read.isFloor) {
-      refuseGroundOnFloor(equipment, demand, notes);
-    } else {
-      elastic = read.value;
-      if (read.isFloor) notes.push(read.floorNote);
-    }
-  } else if (records.length > 0) {
-    if (equipment.zM > 0) {
-      refuseGroundOnFloor(equipment, demand, notes);
-    } else {
-      for (const source of records) {
-        const record = await loadRecord(source, options);
-        const value = recordPsaForComponent(record, equipment.periodS, equipment.damping, method);
-        if (elastic === null || value.psaG > elastic.psaG) elastic = { ...value, source };
-      }
-      if (records.length > 1 && elastic !== null) {
-        notes.push(`Record demand: the largest of ${records.length} records (${records.join(', ')}).`);
-      }
-    }
-  }
-
+  const { elastic, notes } = await elasticFromOptions(options, equipment, demand, method);
   const analysis = analyseAnchorage(equipment, { elastic, demand, anchorRule });
   analysis.assumptions.push(...notes);
   const text = format === 'json' ? formatJson(anchorageToJson(analysis)) : anchorTable(analysis);
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
   writeProduct(inputs, options, text, () => [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]]);
-}
-
-function refuseGroundOnFloor(equipment: Equipment, demand: string, notes: string[]): void {
-  const length = EQUIPMENT_UNITS[equipment.units].length;
-  const z = equipment.zM / EQUIPMENT_UNITS[equipment.units].mPerLength;
-  if (demand !== 'code') {
-    throw usageError(
-      `the equipment is attached at z = ${z} ${length} above the base, so a ground motion does not describe its floor; ` +
-        'make a floor spectrum with `quakesweep floor REC ... --format json --out floor.json` and give --spectrum floor.json, ' +
-        'or use --demand code',
-    );
-  }
-  notes.push(
-    'The ground motion given was not used: the equipment is above the base and no floor spectrum was given.',
-  );
 }
