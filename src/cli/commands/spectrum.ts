@@ -6,7 +6,6 @@ import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { summaryTable } from '../../formats/spectrum-table.js';
 import { targetToJson } from '../../formats/target.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import type { SweepKernel } from '../../oscillator/sweep.js';
 import { checkFolder } from '../../output/output-set.js';
 import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
 import { targetOverlay, targetRecord } from '../../spectrum/target.js';
@@ -26,7 +25,7 @@ import {
   type TargetCliOptions,
   targetFromOptions,
 } from '../options/target.js';
-import { parseThreads } from '../options/threads.js';
+import { sweepFromOptions } from '../options/threads.js';
 
 export interface SpectrumCliOptions
   extends RecordCliOptions,
@@ -80,7 +79,7 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
   if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
   const target = targetFromOptions(options);
-  const sweep = sweepChoice(options);
+  const sweep = sweepFromOptions(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
   const { fit, spectrum } = applyTarget(swept, target);
@@ -104,12 +103,4 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
         : summaryTable(spectrum, lengthUnit, fit);
   const inputs = options.target === undefined ? [source] : [source, options.target];
   writeProduct(inputs, options, text, () => figures);
-}
-
-function sweepChoice(options: SpectrumCliOptions): { threads: number | 'auto'; kernel: SweepKernel } {
-  const kernel = options.kernel ?? 'auto';
-  if (kernel !== 'auto' && kernel !== 'wasm' && kernel !== 'js') {
-    throw usageError(`--kernel '${kernel}': use auto, wasm or js`);
-  }
-  return { threads: options.threads === undefined ? 'auto' : parseThreads(options.threads), kernel };
 }
