@@ -1,8 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { isQuakesweepError } from '../base/errors.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
+import { formatJson, spectrumToJson, toG } from '../formats/spectrum-json.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { OutputSet } from '../output/output-set.js';
 import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';
@@ -60,7 +59,7 @@ export function processRecord(task: RecordTask): RecordOutcome {
       .folder(task.outDir)
       .folder(join(task.outDir, name), [['spectra.json', spectra]])
       .write();
-    const psaG = spectrum.curves.map((curve) => Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2));
+    const psaG = spectrum.curves.map((curve) => toG(curve.psaMS2));
     return { ok: true, file, name, psaG, warnings: unitWarnings(record) };
   } catch (error) {
     return { ok: false, file, name, error: describeError(error, file) };

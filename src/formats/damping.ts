@@ -4,7 +4,7 @@ import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { dampingLabel } from './spectrum-csv.js';
-import { recordToJson } from './spectrum-json.js';
+import { recordToJson, toG } from './spectrum-json.js';
 import { summaryRows } from './spectrum-table.js';
 
 const SOURCES = {
@@ -27,7 +27,7 @@ export function dampingToJson(spectrum: Spectrum, comparison: DampingComparison,
     periods_s: Array.from(comparison.periodsS),
     spectra: comparison.curves.map((curve) => ({
       damping: curve.damping,
-      psa_g: Array.from(curve.psaMS2, (value) => value / STANDARD_GRAVITY_MS2),
+      psa_g: toG(curve.psaMS2),
       ratio_to_reference: Array.from(curve.ratio, nullable),
       geometric_mean_ratio: nullable(curve.geometricMeanRatio),
       published: {

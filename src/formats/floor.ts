@@ -4,7 +4,8 @@ import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
 import type { BuildingMode, FloorSpectra } from '../spectrum/floor.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { dampingLabel } from './spectrum-csv.js';
-import { spectrumToJson } from './spectrum-json.js';
+import { spectrumToJson, toG } from './spectrum-json.js';
+import { summaryRows } from './spectrum-table.js';
 import { wrapText } from './wrap.js';
 
 export function floorAssumptions(result: FloorSpectra, building: BuildingMode, dtS: number): string[] {
@@ -55,8 +56,7 @@ export function floorTable(
   }
   out.push(header.join(' '));
   const periods = floor.periodsS;
-  const rows = periods.length <= 16 ? Array.from(periods, (_, i) => i) : pickRows(periods);
-  for (const p of rows) {
+  for (const p of summaryRows(periods, true)) {
     const row = [Number(periods[p].toPrecision(3)).toString().padStart(8)];
     floor.curves.forEach((curve, d) => {
       row.push(
@@ -73,22 +73,10 @@ export function floorTable(
   return `${out.join('\n')}\n`;
 }
 
-function pickRows(periodsS: Float64Array): number[] {
-  const targets = [0, 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5, 10];
-  const rows = new Set<number>();
-  for (const target of targets) {
-    let best = 0;
-    for (let i = 1; i < periodsS.length; i++)
-      if (Math.abs(periodsS[i] - target) < Math.abs(periodsS[best] - target)) best = i;
-    rows.add(best);
-  }
-  return [...rows].sort((a, b) => a - b);
-}
-
 const psaCurvesG = (spectrum: Spectrum) =>
   spectrum.curves.map((curve) => ({
     damping: curve.damping,
-    psa_g: Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
+    psa_g: toG(curve.psaMS2),
   }));
 
 /** The JSON of `quakesweep floor`: the floor spectrum's, with the building, the ground and the assumptions. */

@@ -3,10 +3,8 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import { dampingLabel } from './spectrum-csv.js';
-import { recordToJson } from './spectrum-json.js';
+import { recordToJson, toG } from './spectrum-json.js';
 import { summaryRows } from './spectrum-table.js';
-
-const toG = (values: Float64Array) => Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
 
 function notes(spectra: RotDSpectra): string[] {
   const out = [

@@ -22,7 +22,9 @@ export interface SpectrumJson {
   [extra: string]: unknown;
 }
 
-const toG = (values: Float64Array): number[] => Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
+/** Accelerations, m/s², in g. */
+export const toG = (values: Float64Array): number[] =>
+  Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
 
 /** The `record` object of the JSON outputs: name, source, npts, dt_s, pga_g and processing. */
 export function recordToJson(record: Spectrum['record']): SpectrumJson['record'] {

@@ -48,13 +48,16 @@ export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit, target?
   return `${out.join('\n')}\n`;
 }
 
-/** Indices of the grid nearest to a set of round periods, for the summary. */
-export function summaryRows(periodsS: Float64Array): number[] {
+/**
+ * Indices of the grid nearest to a set of round periods, for the summary; round periods outside
+ * the grid are skipped, or with `toEnds` give the grid's nearest end (the floor table).
+ */
+export function summaryRows(periodsS: Float64Array, toEnds = false): number[] {
   if (periodsS.length <= 16) return Array.from(periodsS, (_, i) => i);
   const targets = [0, 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5, 10];
   const rows = new Set<number>();
   for (const target of targets) {
-    if (target < periodsS[0] || target > periodsS[periodsS.length - 1]) continue;
+    if (!toEnds && (target < periodsS[0] || target > periodsS[periodsS.length - 1])) continue;
     let best = 0;
     for (let i = 1; i < periodsS.length; i++) {
       if (Math.abs(periodsS[i] - target) < Math.abs(periodsS[best] - target)) best = i;

@@ -2,7 +2,7 @@ import { CAUTION } from '../base/caution.js';
 import { compareText } from '../batch/glob.js';
 import type { Shard } from '../batch/shard.js';
 import { STATISTICS_METHOD, type SuiteCurve, suiteStatistics } from '../batch/statistics.js';
-import type { SuiteSettings } from '../batch/work.js';
+import type { RecordOutcome, SuiteSettings } from '../batch/work.js';
 
 /** A record of the suite that was swept, with its PSA in g (per damping, per period). */
 export interface SuiteRecord {
@@ -70,4 +70,18 @@ export function shardJson(
   failed: SuiteFailure[],
 ): ShardJson {
   return { caution: CAUTION, format: SHARD_FORMAT, shard, all_files: allFiles, settings, records, failed };
+}
+
+/** A run's outcomes as suite records and failures, the patterns that matched no file failing first. */
+export function suiteOutcomes(
+  outcomes: readonly RecordOutcome[],
+  unmatched: readonly string[],
+): { records: SuiteRecord[]; failed: SuiteFailure[] } {
+  const records: SuiteRecord[] = [];
+  const failed = unmatched.map((pattern) => ({ file: pattern, error: `${pattern}: no file matches` }));
+  for (const outcome of outcomes) {
+    if (outcome.ok) records.push({ name: outcome.name, file: outcome.file, psaG: outcome.psaG });
+    else failed.push({ file: outcome.file, error: outcome.error });
+  }
+  return { records, failed };
 }

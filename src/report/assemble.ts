@@ -9,17 +9,7 @@ import { spectrumToCsv } from '../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
 import { targetToJson } from '../formats/target.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import {
-  anchorPlanSvg,
-  dampingFigure,
-  historiesFigure,
-  psaFigure,
-  psvFigure,
-  rotdFigure,
-  sdFigure,
-  tripartiteFigure,
-} from '../plot/index.js';
-import { integrateRecord } from '../record/integrate.js';
+import { anchorPlanSvg, dampingFigure, rotdFigure } from '../plot/index.js';
 import { groundMotionMeasures } from '../record/measures.js';
 import type { GroundRecord } from '../record/record.js';
 import { compareDamping } from '../spectrum/damping.js';
@@ -30,6 +20,7 @@ import { fitTarget, targetOverlay, targetRecord } from '../spectrum/target.js';
 import { rotDSpectraParallel } from '../threads/rotd-pool.js';
 import { equipmentDemand } from './equipment-demand.js';
 import { type ReportFigure, type ReportInput, renderReport } from './report.js';
+import { spectrumFigures } from './spectrum-figures.js';
 
 /** What a report is made of: records already read and processed, and the choices of its sections. */
 export interface ReportRequest {
@@ -38,7 +29,7 @@ export interface ReportRequest {
   /** The same record processed: the spectra are of this one. */
   processed: GroundRecord;
   grid: { periodsS: Float64Array; dampings: Float64Array; method: Method };
-  /** A target spectrum to fit (over `scaleRangeS`), the fit applied to every output with `applyScale`. */
+  /** A target spectrum to fit (over `rangeS`), the fit applied to every output with `apply`. */
   target?: { spectrum: DesignSpectrum; rangeS?: [number, number]; apply?: boolean };
   lengthUnit?: LengthUnit;
   axes?: 'log' | 'linear';
@@ -87,12 +78,17 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
     spectrum,
     measures: groundMotionMeasures(record),
     lengthUnit,
-    spectrumFigures: spectrumFigures(record, spectrum, {
-      axes: request.axes ?? 'log',
-      lengthUnit,
-      methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
-      overlays: fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)],
-    }),
+    spectrumFigures: spectrumFigures(
+      record,
+      spectrum,
+      {
+        axes: request.axes ?? 'log',
+        lengthUnit,
+        methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
+        overlays: fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)],
+      },
+      true,
+    ),
     target: fit,
     anchorage: [],
     methods: methodStatements(spectrum.method),
@@ -181,28 +177,6 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
   input.files = [...files.keys()];
   files.set('report.html', renderReport(input));
   return files;
-}
-
-function spectrumFigures(
-  record: GroundRecord,
-  spectrum: ReturnType<typeof responseSpectrum>,
-  shared: Parameters<typeof psaFigure>[1] & { lengthUnit: LengthUnit },
-): ReportFigure[] {
-  return [
-    { file: 'psa.svg', caption: 'Pseudo-acceleration spectra PSA', svg: psaFigure(spectrum, shared) },
-    { file: 'sd.svg', caption: 'Relative displacement spectra SD', svg: sdFigure(spectrum, shared) },
-    { file: 'psv.svg', caption: 'Pseudo-velocity spectra PSV', svg: psvFigure(spectrum, shared) },
-    {
-      file: 'tripartite.svg',
-      caption: 'Four-way (tripartite) plot of the same spectra',
-      svg: tripartiteFigure(spectrum, shared),
-    },
-    {
-      file: 'histories.svg',
-      caption: 'Ground acceleration, velocity and displacement of the processed record',
-      svg: historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: shared.lengthUnit }),
-    },
-  ];
 }
 
 /** The method statements of a report: the oscillators, the spectra and the record measures. */

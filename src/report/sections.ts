@@ -1,4 +1,5 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { dampingLabel } from '../formats/spectrum-csv.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
 import type { DampingComparison } from '../spectrum/damping.js';
@@ -16,7 +17,6 @@ export interface RecordFacts {
 }
 
 const g = STANDARD_GRAVITY_MS2;
-const percent = (damping: number) => `${Number((damping * 100).toPrecision(6))}%`;
 
 export function recordSection(read: RecordFacts, processed: { dtS: number; npts: number }): string {
   const rows: [string, string][] = [
@@ -115,7 +115,7 @@ export function peaksSection(spectrum: Spectrum, lengthUnit: LengthUnit, tableNu
     const pSd = peakIndex(periods, curve.sdM);
     const pPsv = peakIndex(periods, curve.psvMS);
     return [
-      percent(curve.damping),
+      dampingLabel(curve.damping),
       curve.psaMS2[pPsa] / g,
       periods[pPsa],
       curve.psaMS2[short] / g,
@@ -145,7 +145,7 @@ export function peaksSection(spectrum: Spectrum, lengthUnit: LengthUnit, tableNu
 
 export function dampingSection(comparison: DampingComparison, tableNumber: number): string {
   const rows = comparison.curves.map((curve): Cell[] => [
-    percent(curve.damping),
+    dampingLabel(curve.damping),
     curve.geometricMeanRatio,
     curve.published.ec8Eta,
     curve.published.newmarkHall.acceleration,
@@ -154,7 +154,7 @@ export function dampingSection(comparison: DampingComparison, tableNumber: numbe
   ]);
   return [
     table(
-      `Table ${tableNumber}. PSA(ζ)/PSA(${percent(comparison.referenceDamping)}): this record beside published factors`,
+      `Table ${tableNumber}. PSA(ζ)/PSA(${dampingLabel(comparison.referenceDamping)}): this record beside published factors`,
       [
         'Damping ζ',
         'Record, geometric mean over T > 0 (–)',
@@ -181,7 +181,7 @@ export function rotdSection(spectra: RotDSpectra, tableNumber: number): string {
       if (t < periods[0] || t > periods[periods.length - 1]) continue;
       const p = nearest(periods, t);
       rows.push([
-        percent(curve.damping),
+        dampingLabel(curve.damping),
         periods[p],
         curve.rotd50MS2[p] / g,
         curve.rotd100MS2[p] / g,

@@ -1,30 +1,23 @@
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { analyseAnchorage, type ElasticInput, parseDemandChoice } from '../../anchorage/anchorage.js';
+import { analyseAnchorage, parseDemandChoice } from '../../anchorage/anchorage.js';
 import { parseAnchorRule } from '../../anchorage/bolt-group.js';
-import { recordPsaForComponent } from '../../anchorage/elastic-demand.js';
-import { EQUIPMENT_UNITS, type Equipment, parseEquipment } from '../../anchorage/equipment.js';
+import { parseEquipment } from '../../anchorage/equipment.js';
 import { usageError } from '../../base/errors.js';
 import { anchorageToJson } from '../../formats/anchorage-json.js';
 import { anchorPlanInput } from '../../formats/anchorage-plan.js';
 import { anchorTable } from '../../formats/anchorage-table.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
-import { OutputSet } from '../../output/output-set.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan-figure.js';
-import { outputFormat } from '../options/format.js';
-import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
-import { readSpectrumFile } from '../options/spectrum-file.js';
+import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
+import { elasticFromOptions, type MotionCliOptions } from '../options/motion.js';
+import { addRecordOptions } from '../options/record.js';
 
-export interface AnchorCliOptions extends RecordCliOptions {
+export interface AnchorCliOptions extends MotionCliOptions, OutputCliOptions {
   equipment?: string;
-  record: string[];
-  spectrum?: string;
   demand?: string;
   method?: string;
-  format?: string;
-  out?: string;
-  svg?: string;
   anchorRule?: string;
 }
 
@@ -58,13 +51,13 @@ export function registerAnchor(program: Command): void {
       'projected',
     );
   addRecordOptions(command);
-  command
-    .option('--format <format>', 'json or table (default: table on the terminal, json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
-    .option('--svg <dir>', 'also write the anchor plan view, DIR/anchor-plan.svg')
-    .action(async (options: AnchorCliOptions) => {
-      await runAnchor(options);
-    });
+  addOutputOptions(
+    command,
+    'json or table (default: table on the terminal, json with --out)',
+    'also write the anchor plan view, DIR/anchor-plan.svg',
+  ).action(async (options: AnchorCliOptions) => {
+    await runAnchor(options);
+  });
 }
 
 export async function runAnchor(options: AnchorCliOptions): Promise<void> {
@@ -80,52 +73,10 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   const anchorRule = parseAnchorRule(options.anchorRule ?? 'projected');
 
   const equipment = parseEquipment(readFileSync(options.equipment, 'utf8'), options.equipment);
-  const notes: string[] = [];
-  let elastic: ElasticInput | null = null;
-  if (options.spectrum !== undefined) {
-    const read = readSpectrumFile(options.spectrum, equipment);
-    if (equipment.zM > 0 && !read.isFloor) {
-      refuseGroundOnFloor(equipment, demand, notes);
-    } else {
-      elastic = read.value;
-      if (read.isFloor) notes.push(read.floorNote);
-    }
-  } else if (records.length > 0) {
-    if (equipment.zM > 0) {
-      refuseGroundOnFloor(equipment, demand, notes);
-    } else {
-      for (const source of records) {
-        const record = await loadRecord(source, options);
-        const value = recordPsaForComponent(record, equipment.periodS, equipment.damping, method);
-        if (elastic === null || value.psaG > elastic.psaG) elastic = { ...value, source };
-      }
-      if (records.length > 1 && elastic !== null) {
-        notes.push(`Record demand: the largest of ${records.length} records (${records.join(', ')}).`);
-      }
-    }
-  }
-
+  const { elastic, notes } = await elasticFromOptions(options, equipment, demand, method);
   const analysis = analyseAnchorage(equipment, { elastic, demand, anchorRule });
   analysis.assumptions.push(...notes);
   const text = format === 'json' ? formatJson(anchorageToJson(analysis)) : anchorTable(analysis);
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
-  const outputs = new OutputSet(inputs);
-  if (options.svg !== undefined)
-    outputs.folder(options.svg, [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]], '--svg');
-  outputs.text(options.out, text).write();
-}
-
-function refuseGroundOnFloor(equipment: Equipment, demand: string, notes: string[]): void {
-  const length = EQUIPMENT_UNITS[equipment.units].length;
-  const z = equipment.zM / EQUIPMENT_UNITS[equipment.units].mPerLength;
-  if (demand !== 'code') {
-    throw usageError(
-      `the equipment is attached at z = ${z} ${length} above the base, so a ground motion does not describe its floor; ` +
-        'make a floor spectrum with `quakesweep floor REC ... --format json --out floor.json` and give --spectrum floor.json, ' +
-        'or use --demand code',
-    );
-  }
-  notes.push(
-    'The ground motion given was not used: the equipment is above the base and no floor spectrum was given.',
-  );
+  writeProduct(inputs, options, text, () => [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]]);
 }

@@ -1,39 +1,17 @@
-import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
 import { QuakesweepError, usageError } from '../../base/errors.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
-import { parseShard, type Shard, shardSlice } from '../../batch/shard.js';
-import type { RecordOutcome, SuiteSettings } from '../../batch/work.js';
+import { shardSlice } from '../../batch/shard.js';
 import { formatJson } from '../../formats/spectrum-json.js';
-import {
-  type SuiteFailure,
-  type SuiteRecord,
-  shardFileName,
-  shardJson,
-  suiteJson,
-} from '../../formats/suite.js';
+import { shardFileName, shardJson, suiteJson, suiteOutcomes } from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
-import {
-  addProcessingOptions,
-  type ProcessingCliOptions,
-  processingPlanFromOptions,
-} from '../options/processing.js';
-import {
-  addRecordOptions,
-  positiveInteger,
-  type RecordCliOptions,
-  recordReadOptions,
-} from '../options/record.js';
-
-export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
-  out?: string;
-  jobs?: string;
-  shard?: string;
-  shardCount?: string;
-}
+import { type BatchCliOptions, batchPlan } from '../options/batch.js';
+import { addGridOptions } from '../options/grid.js';
+import { addProcessingOptions } from '../options/processing.js';
+import { addRecordOptions } from '../options/record.js';
+import { runWithProgress } from '../progress.js';
 
 export function registerBatch(program: Command): void {
   const command = program
@@ -64,79 +42,27 @@ export function registerBatch(program: Command): void {
     });
 }
 
-/** What the options say every record shares. */
-export function suiteSettings(options: BatchCliOptions): SuiteSettings {
-  if (options.name !== undefined)
-    throw usageError('--name does not apply to batch: each record is named after its file');
-  const grid = gridFromOptions(options);
-  const { source: _source, name: _name, ...read } = recordReadOptions('', options);
-  return {
-    read,
-    plan: processingPlanFromOptions(options),
-    periodsS: Array.from(grid.periodsS),
-    dampings: Array.from(grid.dampings),
-    method: grid.method,
-  };
-}
-
 export async function runBatch(args: string[], options: BatchCliOptions): Promise<void> {
-  const out = options.out;
-  if (out === undefined) throw usageError('--out <dir> is required');
-  const settings = suiteSettings(options);
-  const jobs = options.jobs === undefined ? availableParallelism() : positiveInteger('--jobs', options.jobs);
-  const shard: Shard | null =
-    options.shard === undefined ? null : parseShard(options.shard, process.env, options.shardCount);
-  if (options.shardCount !== undefined && options.shard !== 'auto')
-    throw usageError('--shard-count goes with --shard auto');
+  const { out, settings, jobs, shard } = batchPlan(options);
   const { files: all, unmatched } = expandPatterns(args);
   if (all.length === 0) throw usageError(`no file matches ${unmatched.join(', ')}`);
   const names = assignNames(all);
   const mine = shard === null ? all : shardSlice(all, shard);
   new OutputSet(all).folder(out).write();
-
   const tasks = mine.map((file) => ({ file, name: names.get(file) as string, outDir: out, settings }));
-  // The pool and the progress bar are loaded here, not at start-up, so other commands do not pay
-  // for them.
-  const { runTasks } = await import('../../threads/batch-pool.js');
-  const { SingleBar } = process.stderr.isTTY ? await import('cli-progress') : { SingleBar: undefined };
-  const bar = SingleBar
-    ? new SingleBar({
-        stream: process.stderr,
-        format: 'quakesweep batch [{bar}] {value}/{total} records, {eta}s left',
-      })
-    : null;
-  bar?.start(tasks.length, 0);
-  let outcomes: RecordOutcome[];
-  try {
-    outcomes = await runTasks(tasks, jobs, () => bar?.increment());
-  } finally {
-    bar?.stop();
-  }
-  const records: SuiteRecord[] = [];
-  const failed: SuiteFailure[] = [];
-  // A pattern that matched nothing counts against the whole run, so only the first shard lists it.
-  if (shard === null || shard.index === 1)
-    for (const pattern of unmatched) failed.push({ file: pattern, error: `${pattern}: no file matches` });
+  const outcomes = await runWithProgress(tasks, jobs);
   for (const outcome of outcomes) {
-    if (outcome.ok) {
-      records.push({ name: outcome.name, file: outcome.file, psaG: outcome.psaG });
-      for (const warning of outcome.warnings)
-        process.stderr.write(`quakesweep: warning: ${outcome.file}: ${warning}\n`);
-    } else {
-      failed.push({ file: outcome.file, error: outcome.error });
-    }
+    if (!outcome.ok) continue;
+    for (const warning of outcome.warnings)
+      process.stderr.write(`quakesweep: warning: ${outcome.file}: ${warning}\n`);
   }
-  const outputs = new OutputSet(all);
-  if (shard === null) {
-    outputs.file(join(out, 'suite.json'), formatJson(suiteJson(records, failed, settings)));
-  } else {
-    outputs.file(
-      join(out, shardFileName(shard)),
-      formatJson(shardJson(shard, all, settings, records, failed)),
-    );
-  }
-  outputs.write();
+  // A pattern that matched nothing counts against the whole run, so only the first shard lists it.
+  const listed = shard === null || shard.index === 1 ? unmatched : [];
+  const { records, failed } = suiteOutcomes(outcomes, listed);
   const what = shard === null ? 'suite.json' : shardFileName(shard);
+  const summary =
+    shard === null ? suiteJson(records, failed, settings) : shardJson(shard, all, settings, records, failed);
+  new OutputSet(all).file(join(out, what), formatJson(summary)).write();
   process.stderr.write(
     `quakesweep: ${records.length} of ${records.length + failed.length} records done; ${join(out, what)}\n`,
   );

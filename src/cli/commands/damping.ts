@@ -2,19 +2,14 @@ import type { Command } from 'commander';
 import { dampingTable, dampingToCsv, dampingToJson } from '../../formats/damping.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { OutputSet } from '../../output/output-set.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping } from '../../spectrum/damping.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
-import { outputFormat } from '../options/format.js';
+import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
-export interface DampingCliOptions extends RecordCliOptions, GridCliOptions {
-  format?: string;
-  out?: string;
-  svg?: string;
-}
+export interface DampingCliOptions extends RecordCliOptions, GridCliOptions, OutputCliOptions {}
 
 /** Damping ratios compared when --damping is not given. */
 export const DEFAULT_DAMPING_LIST = '2%,5%,10%,20%';
@@ -31,14 +26,14 @@ export function registerDamping(program: Command): void {
     .argument('<record>', 'record file, or - for standard input');
   addRecordOptions(command);
   addGridOptions(command);
-  command
-    .option('--format <format>', 'json or csv (default: a table on the terminal, or json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
-    .option('--svg <dir>', 'also draw the spectra and their ratios to 5%, DIR/damping.svg')
-    .action(async (source: string, options: DampingCliOptions) => {
-      const fromDefault = command.getOptionValueSource('damping') === 'default';
-      await runDamping(source, { ...options, damping: fromDefault ? DEFAULT_DAMPING_LIST : options.damping });
-    });
+  addOutputOptions(
+    command,
+    'json or csv (default: a table on the terminal, or json with --out)',
+    'also draw the spectra and their ratios to 5%, DIR/damping.svg',
+  ).action(async (source: string, options: DampingCliOptions) => {
+    const fromDefault = command.getOptionValueSource('damping') === 'default';
+    await runDamping(source, { ...options, damping: fromDefault ? DEFAULT_DAMPING_LIST : options.damping });
+  });
 }
 
 export async function runDamping(source: string, options: DampingCliOptions): Promise<void> {
@@ -55,14 +50,8 @@ export async function runDamping(source: string, options: DampingCliOptions): Pr
       : format === 'csv'
         ? dampingToCsv(spectrum, comparison)
         : dampingTable(spectrum, comparison, added);
-  const outputs = new OutputSet([source]);
-  if (options.svg !== undefined) {
-    const figure = dampingFigure({
-      record: spectrum.record,
-      methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
-      comparison,
-    });
-    outputs.folder(options.svg, [['damping.svg', figure]], '--svg');
-  }
-  outputs.text(options.out, text).write();
+  const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
+  writeProduct([source], options, text, () => [
+    ['damping.svg', dampingFigure({ record: spectrum.record, methodDescription, comparison })],
+  ]);
 }

@@ -1,18 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { parseEquipment } from '../../anchorage/equipment.js';
 import { cautionLines } from '../../base/caution.js';
-import { checkFolder, OutputSet } from '../../output/output-set.js';
+import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
-import type { DesignSpectrum } from '../../spectrum/design.js';
-import { broadeningFromOptions, buildingFromOptions } from '../options/building.js';
-import { demoReportArguments, recordsFolder, shown } from '../options/demo-scenario.js';
-import { generationTime } from '../options/generation-time.js';
-import { gridFromOptions } from '../options/grid.js';
-import { applyProcessing } from '../options/processing.js';
-import { loadRecord } from '../options/record.js';
-import { loadTarget } from '../options/target.js';
+import { demoReport, recordsFolder, shown } from '../options/demo-scenario.js';
+import { optionWords, reportRequest } from '../options/report.js';
 
 export function registerDemo(program: Command): void {
   program
@@ -25,42 +18,12 @@ export function registerDemo(program: Command): void {
 }
 
 export async function runDemo(out: string): Promise<void> {
-  const records = recordsFolder();
-  const args = demoReportArguments(records, out);
+  const { source, options } = demoReport(recordsFolder(), out);
   const started = Date.now();
-  checkFolder({ path: out, option: '--out' });
-  const file = (name: string) => shown(join(records, name));
-  const processing = { baseline: 'linear', taper: '5%', filter: 'bandpass:0.1-25' };
-  const read = await loadRecord(file('marrowby-h1.csv'), {
-    units: 'g',
-    name: 'Marrowby Flats H1 (invented)',
-  });
-  const second = await loadRecord(file('marrowby-h2.csv'), { units: 'g' });
-  const equipment = ['equipment-generator.json', 'equipment-cabinet-floor4.json'].map((name) => ({
-    file: file(name),
-    value: parseEquipment(readFileSync(file(name), 'utf8'), file(name)),
-  }));
-  const at = (option: string) => args[args.indexOf(option) + 1];
-  const files = await assembleReport({
-    read,
-    processed: applyProcessing(read, processing),
-    grid: gridFromOptions({ damping: at('--damping') }),
-    target: { spectrum: loadTarget({ target: at('--target') }) as DesignSpectrum },
-    pair: { record: applyProcessing(second, processing), angleStepDeg: 1 },
-    equipment,
-    building: buildingFromOptions({
-      buildingPeriod: at('--building-period'),
-      modalFactor: at('--modal-factor'),
-    }),
-    broadening: broadeningFromOptions(true),
-    title: at('--title'),
-    notes: args.filter((_, i) => args[i - 1] === '--note'),
-    // The report states the report command that makes the same report.
-    commandLine: args,
-    workingDirectory: process.cwd(),
-    generatedAt: generationTime(),
-  });
-  new OutputSet([read.source, second.source, ...equipment.map((e) => e.file)]).folder(out, files).write();
+  // The report states the report command that makes the same report.
+  const words = ['report', source, ...optionWords(options)];
+  const { request, inputs } = await reportRequest(source, options, words);
+  new OutputSet(inputs).folder(out, await assembleReport(request)).write();
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   const spectra = JSON.parse(readFileSync(join(out, 'spectra.json'), 'utf8'));
   const lines = cautionLines(92).map((line) => `! ${line}`);

@@ -2,17 +2,13 @@ import type { Command } from 'commander';
 import { designTable, designToCsv, designToJson } from '../../formats/design.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, parsePeriods } from '../../oscillator/grid.js';
-import { OutputSet } from '../../output/output-set.js';
 import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../options/design.js';
-import { outputFormat } from '../options/format.js';
+import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 
-export interface DesignCommandOptions extends DesignCliOptions {
+export interface DesignCommandOptions extends DesignCliOptions, OutputCliOptions {
   periods?: string;
-  format?: string;
-  out?: string;
-  svg?: string;
 }
 
 export function registerDesign(program: Command): void {
@@ -20,15 +16,15 @@ export function registerDesign(program: Command): void {
     .command('design')
     .description('a code design spectrum (ASCE 7-16, Eurocode 8) or a tabulated one, PSA in g by period');
   addDesignOptions(command);
-  command
-    .option(
-      '--periods <grid>',
-      'periods, s: a list or a:b:n (default: 0 and 0.01:10:120 where the spectrum is defined; a table’s own rows)',
-    )
-    .option('--format <format>', 'json or csv (default: a table on the terminal, or json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
-    .option('--svg <dir>', 'also draw the spectrum, DIR/design.svg (PSA against T, log–log)')
-    .action((options: DesignCommandOptions) => runDesign(options));
+  command.option(
+    '--periods <grid>',
+    'periods, s: a list or a:b:n (default: 0 and 0.01:10:120 where the spectrum is defined; a table’s own rows)',
+  );
+  addOutputOptions(
+    command,
+    'json or csv (default: a table on the terminal, or json with --out)',
+    'also draw the spectrum, DIR/design.svg (PSA against T, log–log)',
+  ).action((options: DesignCommandOptions) => runDesign(options));
 }
 
 export function runDesign(options: DesignCommandOptions): void {
@@ -43,10 +39,7 @@ export function runDesign(options: DesignCommandOptions): void {
         ? designToCsv(spectrum, periodsS, psaG)
         : designTable(spectrum, periodsS, psaG);
   const inputs = options.table === undefined ? [] : [options.table];
-  const outputs = new OutputSet(inputs);
-  if (options.svg !== undefined)
-    outputs.folder(options.svg, [['design.svg', designFigure({ spectrum, periodsS, psaG })]], '--svg');
-  outputs.text(options.out, text).write();
+  writeProduct(inputs, options, text, () => [['design.svg', designFigure({ spectrum, periodsS, psaG })]]);
 }
 
 /** The periods asked for, each checked against the spectrum's range; or the default grid within it. */

@@ -3,24 +3,19 @@ import { floorAssumptions, floorTable, floorToJson } from '../../formats/floor.j
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { OutputSet } from '../../output/output-set.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { floorSpectrum } from '../../spectrum/floor.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
-import { outputFormat } from '../options/format.js';
+import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
-export interface FloorCliOptions extends RecordCliOptions, GridCliOptions, BuildingCliOptions {
-  format?: string;
-  out?: string;
-  buildingPeriod?: string;
-  buildingDamping?: string;
-  modalFactor?: string;
-  broaden?: string | boolean;
-  svg?: string;
-}
+export interface FloorCliOptions
+  extends RecordCliOptions,
+    GridCliOptions,
+    BuildingCliOptions,
+    OutputCliOptions {}
 
 export function registerFloor(program: Command): void {
   const command = program
@@ -36,13 +31,14 @@ export function registerFloor(program: Command): void {
       '--modal-factor <value>',
       'Γφ at the floor: participation factor times mode shape there (required)',
     )
-    .option('--broaden [fraction]', 'broaden peaks over [T(1−b), T/(1−b)], b = 0.15 unless given')
-    .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
-    .option('--svg <dir>', 'also draw the floor spectrum against the ground spectrum, DIR/floor.svg')
-    .action(async (source: string, options: FloorCliOptions) => {
-      await runFloor(source, options);
-    });
+    .option('--broaden [fraction]', 'broaden peaks over [T(1−b), T/(1−b)], b = 0.15 unless given');
+  addOutputOptions(
+    command,
+    'json or csv (default: a summary table on the terminal, or json with --out)',
+    'also draw the floor spectrum against the ground spectrum, DIR/floor.svg',
+  ).action(async (source: string, options: FloorCliOptions) => {
+    await runFloor(source, options);
+  });
 }
 
 export async function runFloor(source: string, options: FloorCliOptions): Promise<void> {
@@ -60,17 +56,17 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
       : format === 'csv'
         ? spectrumToCsv(result.spectrum, { lengthUnit: 'm' })
         : floorTable(result.spectrum, groundSpectrum, building, assumptions);
-  const outputs = new OutputSet([source]);
-  if (options.svg !== undefined) {
-    const figure = floorFigure({
-      ground: groundSpectrum,
-      floor: result.spectrum,
-      unbroadened: result.broadening === null ? undefined : result.unbroadened,
-      broadening: result.broadening,
-      building,
-      methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
-    });
-    outputs.folder(options.svg, [['floor.svg', figure]], '--svg');
-  }
-  outputs.text(options.out, text).write();
+  writeProduct([source], options, text, () => [
+    [
+      'floor.svg',
+      floorFigure({
+        ground: groundSpectrum,
+        floor: result.spectrum,
+        unbroadened: result.broadening === null ? undefined : result.unbroadened,
+        broadening: result.broadening,
+        building,
+        methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
+      }),
+    ],
+  ]);
 }

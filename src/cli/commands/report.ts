@@ -1,39 +1,12 @@
-import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Command } from 'commander';
-import { type Equipment, parseEquipment } from '../../anchorage/equipment.js';
-import { usageError } from '../../base/errors.js';
-import { parseLengthUnit } from '../../base/units.js';
-import { checkFolder, OutputSet } from '../../output/output-set.js';
-import { assembleReport, type ReportRequest } from '../../report/assemble.js';
-import type { BuildingMode } from '../../spectrum/floor.js';
-import { parseScaleRange } from '../../spectrum/scale.js';
-import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
-import { generationTime } from '../options/generation-time.js';
-import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
-import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
-import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
-import { addTargetOptions, loadTarget, type TargetCliOptions } from '../options/target.js';
-
-export interface ReportCliOptions
-  extends RecordCliOptions,
-    ProcessingCliOptions,
-    GridCliOptions,
-    TargetCliOptions,
-    BuildingCliOptions {
-  out?: string;
-  lengthUnit?: string;
-  axes?: string;
-  equipment?: string[];
-  buildingPeriod?: string;
-  buildingDamping?: string;
-  modalFactor?: string;
-  broaden?: string | boolean;
-  pair?: string;
-  angleStep?: string;
-  title?: string;
-  note?: string[];
-}
+import { OutputSet } from '../../output/output-set.js';
+import { assembleReport } from '../../report/assemble.js';
+import { addGridOptions } from '../options/grid.js';
+import { addProcessingOptions } from '../options/processing.js';
+import { addRecordOptions } from '../options/record.js';
+import { type ReportCliOptions, reportRequest } from '../options/report.js';
+import { addTargetOptions } from '../options/target.js';
 
 const collect = (value: string, previous: string[]) => [...previous, value];
 
@@ -84,59 +57,7 @@ export async function runReport(
   options: ReportCliOptions,
   commandLine: string[],
 ): Promise<string> {
-  const out = options.out;
-  if (out === undefined) throw usageError('--out <dir> is required');
-  const grid = gridFromOptions(options);
-  const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
-  const axes = options.axes ?? 'log';
-  if (axes !== 'log' && axes !== 'linear') throw usageError(`--axes '${axes}': use log or linear`);
-  const target = loadTarget(options);
-  const equipment = (options.equipment ?? []).map((file) => ({
-    file,
-    value: parseEquipment(readFileSync(file, 'utf8'), file),
-  }));
-  const building = needsBuilding(
-    equipment.map((e) => e.value),
-    options,
-  );
-  const broadening = broadeningFromOptions(options.broaden);
-  checkFolder({ path: out, option: '--out' });
-  const read = await loadRecord(source, options);
-  const processed = applyProcessing(read, options);
-  const rangeS = options.scaleRange === undefined ? undefined : parseScaleRange(options.scaleRange);
-  let pair: ReportRequest['pair'];
-  if (options.pair !== undefined) {
-    // --name names the main record only; the second component keeps its file's name.
-    const second = applyProcessing(await loadRecord(options.pair, { ...options, name: undefined }), options);
-    pair = { record: second, angleStepDeg: positiveNumber('--angle-step', options.angleStep ?? '1') };
-  }
-  const files = await assembleReport({
-    read,
-    processed,
-    grid,
-    target:
-      target === undefined ? undefined : { spectrum: target, rangeS, apply: options.applyScale === true },
-    lengthUnit,
-    axes,
-    pair,
-    equipment,
-    building,
-    broadening,
-    title: options.title,
-    notes: options.note,
-    commandLine,
-    workingDirectory: process.cwd(),
-    generatedAt: generationTime(),
-  });
-  const inputs = [source, ...(options.pair ? [options.pair] : []), ...equipment.map((e) => e.file)];
-  new OutputSet(inputs).folder(out, files).write();
+  const { request, inputs, out } = await reportRequest(source, options, commandLine);
+  new OutputSet(inputs).folder(out, await assembleReport(request)).write();
   return join(out, 'report.html');
-}
-
-/** The building mode, when any equipment is above the base and the options describe one. */
-function needsBuilding(equipment: Equipment[], options: ReportCliOptions): BuildingMode | null {
-  if (options.buildingPeriod === undefined && options.modalFactor === undefined) return null;
-  if (!equipment.some((e) => e.zM > 0))
-    throw usageError('--building-period and --modal-factor apply to equipment above the base (z > 0)');
-  return buildingFromOptions(options);
 }

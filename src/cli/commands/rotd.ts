@@ -3,20 +3,16 @@ import { usageError } from '../../base/errors.js';
 import { rotdTable, rotdToCsv, rotdToJson } from '../../formats/rotd.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { OutputSet } from '../../output/output-set.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { rotdThreads } from '../../spectrum/spectrum.js';
 import { rotDSpectraParallel } from '../../threads/rotd-pool.js';
-import { outputFormat } from '../options/format.js';
+import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
 import { parseThreads } from '../options/threads.js';
 
-export interface RotDCliOptions extends RecordCliOptions, GridCliOptions {
-  format?: string;
-  out?: string;
+export interface RotDCliOptions extends RecordCliOptions, GridCliOptions, OutputCliOptions {
   angleStep?: string;
-  svg?: string;
   threads?: string;
 }
 
@@ -28,11 +24,12 @@ export function registerRotD(program: Command): void {
     .argument('<second>', 'second horizontal component (same time step), at right angles to the first');
   addRecordOptions(command);
   addGridOptions(command);
-  command
-    .option('--angle-step <degrees>', 'rotation step over 0–180°, at most 1° and a divisor of 180', '1')
-    .option('--format <format>', 'json or csv (default: a table on the terminal, or json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
-    .option('--svg <dir>', 'also draw RotD50, RotD100 and the geometric mean, DIR/rotd.svg')
+  command.option('--angle-step <degrees>', 'rotation step over 0–180°, at most 1° and a divisor of 180', '1');
+  addOutputOptions(
+    command,
+    'json or csv (default: a table on the terminal, or json with --out)',
+    'also draw RotD50, RotD100 and the geometric mean, DIR/rotd.svg',
+  )
     .option('--threads <n>', 'threads (default: all cores for a large job; small ones use one)')
     .action(async (first: string, second: string, options: RotDCliOptions) => {
       await runRotD(first, second, options);
@@ -59,10 +56,7 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
       : format === 'csv'
         ? rotdToCsv(spectra)
         : rotdTable(spectra);
-  const outputs = new OutputSet([first, second]);
-  if (options.svg !== undefined) {
-    const figure = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] });
-    outputs.folder(options.svg, [['rotd.svg', figure]], '--svg');
-  }
-  outputs.text(options.out, text).write();
+  writeProduct([first, second], options, text, () => [
+    ['rotd.svg', rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] })],
+  ]);
 }

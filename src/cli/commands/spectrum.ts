@@ -1,34 +1,39 @@
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
-import { type LengthUnit, parseLengthUnit } from '../../base/units.js';
+import { parseLengthUnit } from '../../base/units.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
 import { summaryTable } from '../../formats/spectrum-table.js';
 import { targetToJson } from '../../formats/target.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import type { SweepKernel } from '../../oscillator/sweep.js';
-import { checkFolder, OutputSet } from '../../output/output-set.js';
-import type { PsaOverlay } from '../../plot/index.js';
-import { integrateRecord } from '../../record/integrate.js';
-import type { GroundRecord } from '../../record/record.js';
-import { responseSpectrumParallel, type Spectrum } from '../../spectrum/spectrum.js';
+import { checkFolder } from '../../output/output-set.js';
+import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
 import { targetOverlay, targetRecord } from '../../spectrum/target.js';
-import { outputFormat } from '../options/format.js';
+import {
+  addOutputOptions,
+  figureAxes,
+  type OutputCliOptions,
+  outputFormat,
+  writeProduct,
+} from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
-import { addTargetOptions, applyTarget, loadTarget, type TargetCliOptions } from '../options/target.js';
-import { parseThreads } from '../options/threads.js';
+import {
+  addTargetOptions,
+  applyTarget,
+  type TargetCliOptions,
+  targetFromOptions,
+} from '../options/target.js';
+import { sweepFromOptions } from '../options/threads.js';
 
 export interface SpectrumCliOptions
   extends RecordCliOptions,
     ProcessingCliOptions,
     GridCliOptions,
-    TargetCliOptions {
-  format?: string;
-  out?: string;
+    TargetCliOptions,
+    OutputCliOptions {
   lengthUnit?: string;
-  svg?: string;
   axes?: string;
   histories?: boolean;
   threads?: string;
@@ -44,9 +49,7 @@ export function registerSpectrum(program: Command): void {
   addProcessingOptions(command);
   addGridOptions(command);
   addTargetOptions(command);
-  command
-    .option('--format <format>', 'json or csv (default: a summary table on the terminal, or json with --out)')
-    .option('--out <path>', 'write to this file instead of standard output')
+  addOutputOptions(command, 'json or csv (default: a summary table on the terminal, or json with --out)')
     .option(
       '--length-unit <unit>',
       'length unit for CSV, figures and the terminal summary: m, cm, mm, in, ft',
@@ -72,18 +75,25 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const grid = gridFromOptions(options);
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
   const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
-  const axes = figureAxes(options);
-  const target = loadTarget(options);
-  const sweep = sweepChoice(options);
+  const axes = figureAxes(options.axes);
+  if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
+  if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
+  const target = targetFromOptions(options);
+  const sweep = sweepFromOptions(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
-  const { fit, spectrum } = applyTarget(swept, target, options);
-  const record = targetRecord(processed, fit);
-  const outputs = new OutputSet(options.target === undefined ? [source] : [source, options.target]);
+  const { fit, spectrum } = applyTarget(swept, target);
+  let figures: [string, string][] = [];
   if (options.svg !== undefined) {
+    // The figure modules load only for --svg.
+    const { spectrumFigures } = await import('../../report/spectrum-figures.js');
     const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
-    const figure = { axes, lengthUnit, overlays };
-    outputs.folder(options.svg, await figures(record, spectrum, figure, options.histories), '--svg');
+    const shared = { axes, lengthUnit, overlays, methodDescription: METHOD_DESCRIPTIONS[spectrum.method] };
+    const record = targetRecord(processed, fit);
+    figures = spectrumFigures(record, spectrum, shared, options.histories === true).map((f) => [
+      f.file,
+      f.svg,
+    ]);
   }
   const text =
     format === 'json'
@@ -91,47 +101,6 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
       : format === 'csv'
         ? spectrumToCsv(spectrum, { lengthUnit, target: fit })
         : summaryTable(spectrum, lengthUnit, fit);
-  outputs.text(options.out, text).write();
-}
-
-function sweepChoice(options: SpectrumCliOptions): { threads: number | 'auto'; kernel: SweepKernel } {
-  const kernel = options.kernel ?? 'auto';
-  if (kernel !== 'auto' && kernel !== 'wasm' && kernel !== 'js') {
-    throw usageError(`--kernel '${kernel}': use auto, wasm or js`);
-  }
-  return { threads: options.threads === undefined ? 'auto' : parseThreads(options.threads), kernel };
-}
-
-function figureAxes(options: SpectrumCliOptions): 'log' | 'linear' {
-  const axes = options.axes ?? 'log';
-  if (axes !== 'log' && axes !== 'linear') throw usageError(`--axes '${axes}': use log or linear`);
-  if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
-  if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
-  return axes;
-}
-
-/** The figures of --svg, by file name (the figure modules load only here). */
-async function figures(
-  record: GroundRecord,
-  spectrum: Spectrum,
-  figure: { axes: 'log' | 'linear'; lengthUnit: LengthUnit; overlays: PsaOverlay[] },
-  histories: boolean | undefined,
-): Promise<[string, string][]> {
-  const { historiesFigure, psaFigure, psvFigure, sdFigure, tripartiteFigure } = await import(
-    '../../plot/index.js'
-  );
-  const shared = { ...figure, methodDescription: METHOD_DESCRIPTIONS[spectrum.method] };
-  const files: [string, string][] = [
-    ['psa.svg', psaFigure(spectrum, shared)],
-    ['sd.svg', sdFigure(spectrum, shared)],
-    ['psv.svg', psvFigure(spectrum, shared)],
-    ['tripartite.svg', tripartiteFigure(spectrum, shared)],
-  ];
-  if (histories) {
-    files.push([
-      'histories.svg',
-      historiesFigure({ ...record, ...integrateRecord(record) }, { lengthUnit: figure.lengthUnit }),
-    ]);
-  }
-  return files;
+  const inputs = options.target === undefined ? [source] : [source, options.target];
+  writeProduct(inputs, options, text, () => figures);
 }

@@ -4,6 +4,7 @@ import { usageError } from '../../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { OutputSet } from '../../output/output-set.js';
 import { type SynthOptions, synthesizeRecord } from '../../record/synth.js';
+import { positiveNumber } from '../options/record.js';
 
 interface SynthCliOptions {
   seed?: string;
@@ -33,12 +34,12 @@ export function registerSynth(program: Command): void {
     .action((options: SynthCliOptions) => {
       const synth: SynthOptions = {
         seed: integer('--seed', options.seed ?? '1'),
-        dtS: number('--dt', options.dt ?? '0.01'),
-        durationS: number('--duration', options.duration ?? '30'),
-        pgaG: number('--pga', options.pga ?? '0.3'),
-        groundFrequencyHz: number('--site-frequency', options.siteFrequency ?? '2.5'),
-        groundDamping: number('--site-damping', options.siteDamping ?? '0.6'),
-        highPassFrequencyHz: number('--high-pass', options.highPass ?? '0.25'),
+        dtS: positiveNumber('--dt', options.dt ?? '0.01'),
+        durationS: positiveNumber('--duration', options.duration ?? '30'),
+        pgaG: positiveNumber('--pga', options.pga ?? '0.3'),
+        groundFrequencyHz: positiveNumber('--site-frequency', options.siteFrequency ?? '2.5'),
+        groundDamping: positiveNumber('--site-damping', options.siteDamping ?? '0.6'),
+        highPassFrequencyHz: positiveNumber('--high-pass', options.highPass ?? '0.25'),
         name: options.name,
       };
       const text = synthText(synth);
@@ -61,14 +62,6 @@ export function synthText(options: SynthOptions): string {
     lines.push(`${(i * record.dtS).toFixed(6)},${(a[i] / STANDARD_GRAVITY_MS2).toExponential(8)}`);
   }
   return `${lines.join('\n')}\n`;
-}
-
-function number(option: string, text: string): number {
-  const value = Number(text);
-  if (text.trim() === '' || !Number.isFinite(value) || value <= 0) {
-    throw usageError(`${option} must be a positive number, got '${text}'`);
-  }
-  return value;
 }
 
 function integer(option: string, text: string): number {

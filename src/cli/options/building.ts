@@ -7,10 +7,10 @@ export interface BuildingCliOptions {
   buildingPeriod?: string;
   buildingDamping?: string;
   modalFactor?: string;
+  broaden?: string | boolean;
 }
 
 /** --building-period, --building-damping and --modal-factor as a building mode. */
-
 export function buildingFromOptions(options: BuildingCliOptions): BuildingMode {
   if (options.buildingPeriod === undefined) throw usageError('--building-period <seconds> is required');
   if (options.modalFactor === undefined)

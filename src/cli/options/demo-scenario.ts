@@ -2,6 +2,7 @@ import { existsSync } from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { usageError } from '../../base/errors.js';
+import type { ReportCliOptions } from './report.js';
 
 /**
  * The package's records/ folder whatever the cwd: the first records/ holding the demo records
@@ -23,47 +24,31 @@ export function shown(path: string): string {
 }
 
 /**
- * The arguments of `quakesweep report` for the invented Marrowby Flats scenario (records/README.md):
- * H1 processed, four dampings, an invented ASCE 7-16 site, RotD of H1 and H2, the invented generator
- * on grade and the invented cabinet on level 4 of an invented one-mode building.
+ * The record and options of `quakesweep report` for the invented Marrowby Flats scenario
+ * (records/README.md): H1 processed, four dampings, an invented ASCE 7-16 site, RotD of H1 and H2,
+ * the invented generator on grade and the invented cabinet on level 4 of an invented one-mode building.
  */
-export function demoReportArguments(records: string, out: string): string[] {
+export function demoReport(records: string, out: string): { source: string; options: ReportCliOptions } {
   const file = (name: string) => shown(join(records, name));
-  return [
-    'report',
-    file('marrowby-h1.csv'),
-    '--units',
-    'g',
-    '--name',
-    'Marrowby Flats H1 (invented)',
-    '--baseline',
-    'linear',
-    '--taper',
-    '5%',
-    '--filter',
-    'bandpass:0.1-25',
-    '--damping',
-    '2%,5%,10%,20%',
-    '--target',
-    'asce7-16:sds=1.0,sd1=0.6,tl=8',
-    '--pair',
-    file('marrowby-h2.csv'),
-    '--equipment',
-    file('equipment-generator.json'),
-    '--equipment',
-    file('equipment-cabinet-floor4.json'),
-    '--building-period',
-    '0.8',
-    '--modal-factor',
-    '1.3',
-    '--broaden',
-    '--note',
-    'Everything in this report is invented for demonstration: the Marrowby Flats site, the Corrin Ridge scenario event, the records (written by quakesweep synth), the building and the equipment. The ASCE 7-16 site values S_DS = 1.0 g, S_D1 = 0.6 g, T_L = 8 s are invented too. Nothing here may be used for design.',
-    '--note',
-    'Equipment: the invented standby generator G-1 on grade, and the invented cabinet EC-4 on level 4 of an invented building idealised by one mode (T_b = 0.8 s, ζ_b = 5%, Γφ = 1.3, floor spectrum peaks broadened ±15%).',
-    '--title',
-    'Marrowby Flats pumping station (invented scenario): record H1',
-    '--out',
+  const options: ReportCliOptions = {
+    units: 'g',
+    name: 'Marrowby Flats H1 (invented)',
+    baseline: 'linear',
+    taper: '5%',
+    filter: 'bandpass:0.1-25',
+    damping: '2%,5%,10%,20%',
+    target: 'asce7-16:sds=1.0,sd1=0.6,tl=8',
+    pair: file('marrowby-h2.csv'),
+    equipment: [file('equipment-generator.json'), file('equipment-cabinet-floor4.json')],
+    buildingPeriod: '0.8',
+    modalFactor: '1.3',
+    broaden: true,
+    note: [
+      'Everything in this report is invented for demonstration: the Marrowby Flats site, the Corrin Ridge scenario event, the records (written by quakesweep synth), the building and the equipment. The ASCE 7-16 site values S_DS = 1.0 g, S_D1 = 0.6 g, T_L = 8 s are invented too. Nothing here may be used for design.',
+      'Equipment: the invented standby generator G-1 on grade, and the invented cabinet EC-4 on level 4 of an invented building idealised by one mode (T_b = 0.8 s, ζ_b = 5%, Γφ = 1.3, floor spectrum peaks broadened ±15%).',
+    ],
+    title: 'Marrowby Flats pumping station (invented scenario): record H1',
     out,
-  ];
+  };
+  return { source: file('marrowby-h1.csv'), options };
 }

@@ -71,11 +71,9 @@ export async function loadRecord(source: string, options: RecordCliOptions): Pro
 }
 
 /**
- * A file's bytes, 256 KiB at a time, read as they are asked for (the file is closed when the
- * reader stops early). Plain reads rather than a file stream: the reader takes the chunks one
- * after another and does nothing meanwhile, and the stream machinery (with node:fs/promises,
- * which it loads) would add to the start-up of every run. 256 KiB rather than larger reads:
- * fewer large chunks are left for the collector, so a long record peaks lower in memory.
+ * A file's bytes, 256 KiB at a time, read as they are asked for (closed when the reader stops
+ * early). Plain reads: a file stream would load node:fs/promises at every start-up. Chunks no
+ * larger than 256 KiB keep a long record's peak memory low.
  */
 async function* fileChunks(path: string): AsyncGenerator<Uint8Array> {
   const fd = openSync(path, 'r');

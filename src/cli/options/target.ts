@@ -26,24 +26,32 @@ export function addTargetOptions(command: Command): Command {
     .option('--apply-scale', 'scale the record by the fitted factor for every output');
 }
 
+/** The target, its fitting range and whether to apply it, as the options name them. */
+export interface TargetChoice {
+  spectrum: DesignSpectrum;
+  rangeS?: [number, number];
+  apply: boolean;
+}
+
 /** The target named by --target, or undefined; refuses the scaling options without it. */
-export function loadTarget(options: TargetCliOptions): DesignSpectrum | undefined {
+export function targetFromOptions(options: TargetCliOptions): TargetChoice | undefined {
   if (options.target === undefined) {
     if (options.scaleRange !== undefined) throw usageError('--scale-range needs --target');
     if (options.applyScale) throw usageError('--apply-scale needs --target');
     return undefined;
   }
   const spec = parseTargetSpec(options.target);
-  return spec.kind === 'code' ? spec.spectrum : loadTableSpectrum(spec.path);
+  return {
+    spectrum: spec.kind === 'code' ? spec.spectrum : loadTableSpectrum(spec.path),
+    rangeS: options.scaleRange === undefined ? undefined : parseScaleRange(options.scaleRange),
+    apply: options.applyScale === true,
+  };
 }
 
-/** Fit the target to the spectrum (--scale-range), scaling it with --apply-scale; no target, no fit. */
+/** Fit the target to the spectrum, scaled by the fit when it is applied; no target, no fit. */
 export function applyTarget(
   spectrum: Spectrum,
-  target: DesignSpectrum | undefined,
-  options: TargetCliOptions,
+  target: TargetChoice | undefined,
 ): { fit?: TargetFit; spectrum: Spectrum } {
-  if (target === undefined) return { spectrum };
-  const rangeS = options.scaleRange === undefined ? undefined : parseScaleRange(options.scaleRange);
-  return fitTarget(spectrum, target, { rangeS, apply: options.applyScale === true });
+  return target === undefined ? { spectrum } : fitTarget(spectrum, target.spectrum, target);
 }

@@ -1,4 +1,5 @@
 import { usageError } from '../../base/errors.js';
+import type { SweepKernel } from '../../oscillator/sweep.js';
 
 /** The value of --threads: a whole number from 1 to 256. */
 export function parseThreads(text: string): number {
@@ -7,4 +8,16 @@ export function parseThreads(text: string): number {
     throw usageError(`--threads must be a whole number from 1 to 256, got '${text}'`);
   }
   return threads;
+}
+
+/** --threads and --kernel of a sweep, each auto unless given. */
+export function sweepFromOptions(options: { threads?: string; kernel?: string }): {
+  threads: number | 'auto';
+  kernel: SweepKernel;
+} {
+  const kernel = options.kernel ?? 'auto';
+  if (kernel !== 'auto' && kernel !== 'wasm' && kernel !== 'js') {
+    throw usageError(`--kernel '${kernel}': use auto, wasm or js`);
+  }
+  return { threads: options.threads === undefined ? 'auto' : parseThreads(options.threads), kernel };
 }

@@ -1,0 +1,45 @@
+import { availableParallelism } from 'node:os';
+import { usageError } from '../../base/errors.js';
+import { parseShard, type Shard } from '../../batch/shard.js';
+import type { SuiteSettings } from '../../batch/work.js';
+import { type GridCliOptions, gridFromOptions } from './grid.js';
+import { type ProcessingCliOptions, processingPlanFromOptions } from './processing.js';
+import { positiveInteger, type RecordCliOptions, recordReadOptions } from './record.js';
+
+/** The options of `quakesweep batch`. */
+export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
+  out?: string;
+  jobs?: string;
+  shard?: string;
+  shardCount?: string;
+}
+
+/** A batch run as the options describe it: its folder, what every record shares, threads and shard. */
+export interface BatchPlan {
+  out: string;
+  settings: SuiteSettings;
+  jobs: number;
+  shard: Shard | null;
+}
+
+export function batchPlan(options: BatchCliOptions): BatchPlan {
+  const out = options.out;
+  if (out === undefined) throw usageError('--out <dir> is required');
+  if (options.name !== undefined)
+    throw usageError('--name does not apply to batch: each record is named after its file');
+  const grid = gridFromOptions(options);
+  const { source: _source, name: _name, ...read } = recordReadOptions('', options);
+  const settings: SuiteSettings = {
+    read,
+    plan: processingPlanFromOptions(options),
+    periodsS: Array.from(grid.periodsS),
+    dampings: Array.from(grid.dampings),
+    method: grid.method,
+  };
+  const jobs = options.jobs === undefined ? availableParallelism() : positiveInteger('--jobs', options.jobs);
+  const shard =
+    options.shard === undefined ? null : parseShard(options.shard, process.env, options.shardCount);
+  if (options.shardCount !== undefined && options.shard !== 'auto')
+    throw usageError('--shard-count goes with --shard auto');
+  return { out, settings, jobs, shard };
+}

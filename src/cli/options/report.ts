@@ -1,0 +1,99 @@
+import { readFileSync } from 'node:fs';
+import { parseEquipment } from '../../anchorage/equipment.js';
+import { usageError } from '../../base/errors.js';
+import { parseLengthUnit } from '../../base/units.js';
+import { checkFolder } from '../../output/output-set.js';
+import type { ReportRequest } from '../../report/assemble.js';
+import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from './building.js';
+import { figureAxes } from './format.js';
+import { generationTime } from './generation-time.js';
+import { type GridCliOptions, gridFromOptions } from './grid.js';
+import { applyProcessing, type ProcessingCliOptions } from './processing.js';
+import { loadRecord, positiveNumber, type RecordCliOptions } from './record.js';
+import { type TargetCliOptions, targetFromOptions } from './target.js';
+
+/** The options of `quakesweep report` (and of the report `quakesweep demo` makes). */
+export interface ReportCliOptions
+  extends RecordCliOptions,
+    ProcessingCliOptions,
+    GridCliOptions,
+    TargetCliOptions,
+    BuildingCliOptions {
+  out?: string;
+  lengthUnit?: string;
+  axes?: string;
+  equipment?: string[];
+  pair?: string;
+  angleStep?: string;
+  title?: string;
+  note?: string[];
+}
+
+/**
+ * Check the options, read the record, its pair and the equipment, and say what report to
+ * assemble, which files it is made from and the folder it goes to. `commandLine` is the one the report states.
+ */
+export async function reportRequest(
+  source: string,
+  options: ReportCliOptions,
+  commandLine: string[],
+): Promise<{ request: ReportRequest; inputs: string[]; out: string }> {
+  const out = options.out;
+  if (out === undefined) throw usageError('--out <dir> is required');
+  const grid = gridFromOptions(options);
+  const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
+  const axes = figureAxes(options.axes);
+  const target = targetFromOptions(options);
+  const equipment = (options.equipment ?? []).map((file) => ({
+    file,
+    value: parseEquipment(readFileSync(file, 'utf8'), file),
+  }));
+  let building = null;
+  if (options.buildingPeriod !== undefined || options.modalFactor !== undefined) {
+    if (!equipment.some((e) => e.value.zM > 0))
+      throw usageError('--building-period and --modal-factor apply to equipment above the base (z > 0)');
+    building = buildingFromOptions(options);
+  }
+  const broadening = broadeningFromOptions(options.broaden);
+  checkFolder({ path: out, option: '--out' });
+  const read = await loadRecord(source, options);
+  const processed = applyProcessing(read, options);
+  let pair: ReportRequest['pair'];
+  if (options.pair !== undefined) {
+    // --name names the main record only; the second component keeps its file's name.
+    const second = applyProcessing(await loadRecord(options.pair, { ...options, name: undefined }), options);
+    pair = { record: second, angleStepDeg: positiveNumber('--angle-step', options.angleStep ?? '1') };
+  }
+  const request: ReportRequest = {
+    read,
+    processed,
+    grid,
+    target,
+    lengthUnit,
+    axes,
+    pair,
+    equipment,
+    building,
+    broadening,
+    title: options.title,
+    notes: options.note,
+    commandLine,
+    workingDirectory: process.cwd(),
+    generatedAt: generationTime(),
+  };
+  const inputs = [source, ...(options.pair ? [options.pair] : []), ...equipment.map((e) => e.file)];
+  return { request, inputs, out };
+}
+
+/** The words of a command line that gives `options` (camelCase keys as --kebab-case flags). */
+export function optionWords(options: ReportCliOptions): string[] {
+  const words: string[] = [];
+  for (const [key, value] of Object.entries(options)) {
+    const flag = `--${key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`;
+    for (const item of Array.isArray(value) ? value : [value]) {
+      if (item === true) words.push(flag);
+      else words.push(flag, String(item));
+    }
+  }
+  return words;
+}
