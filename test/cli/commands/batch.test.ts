@@ -14,7 +14,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 // End to end: the built CLI on small invented records (decaying sines), coarse grid.
 
-const root = resolve(import.meta.dirname, '../..');
+const root = resolve(import.meta.dirname, '../../..');
 const bin = join(root, 'bin', 'quakesweep.js');
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-batch-'));
 const inputs = join(folder, 'in');

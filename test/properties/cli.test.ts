@@ -10,9 +10,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
-import { type CliResult, errorLines, expectOneLineFailure, runChild, runMain } from '../hardening/run-cli.js';
-import { FUZZ_SEED, report, runs } from './budget.js';
-import { G_MS2, mutatedRecord, wellFormedRecord } from './records.js';
+import { FUZZ_SEED, report, runs } from '../helpers/fuzz-budget.js';
+import { G_MS2, mutatedRecord, wellFormedRecord } from '../helpers/fuzz-records.js';
+import { type CliResult, errorLines, expectOneLineFailure, runChild, runMain } from '../helpers/run-cli.js';
 
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-fuzz-'));
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
