@@ -5,6 +5,7 @@
 import { readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { gridFromOptions } from '../../../src/cli/options/grid.js';
 import { writeFixtures } from '../../helpers/fixtures.js';
 import { expectOneLineFailure, runMain } from '../../helpers/run-cli.js';
 
@@ -79,5 +80,23 @@ describe('period grids and damping lists that make no sense are refused on every
         await runMain(['anchor', '--equipment', equipment, '--record', f.h1, '--units', 'g']),
       ),
     ).toMatch(/period_s/);
+  });
+});
+
+describe('gridFromOptions', () => {
+  it('defaults to T = 0 and 120 periods from 0.01 s to 10 s, 5%, Newmark average acceleration', () => {
+    const grid = gridFromOptions({});
+    expect(grid.periodsS).toHaveLength(121);
+    expect(Array.from(grid.dampings)).toEqual([0.05]);
+    expect(grid.method).toBe('newmark-average');
+  });
+
+  it('counts periods × dampings against the million, which --force lifts', () => {
+    const many = { periods: '0.01:10:500001', damping: '2%,5%' };
+    expect(() => gridFromOptions(many)).toThrow(
+      '1000002 oscillators is more than 1000000; add --force if you mean it',
+    );
+    expect(gridFromOptions({ ...many, force: true }).periodsS).toHaveLength(500_001);
+    expect(() => gridFromOptions({ method: 'runge-kutta' })).toThrow(/accepted: newmark-average/);
   });
 });
