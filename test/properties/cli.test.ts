@@ -139,7 +139,7 @@ describe('spectrum as a child process', () => {
         if (outcome.refused) refused++;
         maxMs = Math.max(maxMs, outcome.ms);
       }),
-      { seed: FUZZ_SEED + 11, numRuns: runs(24, 15) },
+      { seed: FUZZ_SEED + 11, numRuns: runs(8, 45) },
     );
     report('spectrum as child processes', { cases, refused, failures: 0, max_ms: Math.round(maxMs) });
   });
