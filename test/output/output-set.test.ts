@@ -162,7 +162,9 @@ describe('the input is never overwritten', () => {
       const input = join(dir, name);
       copyFileSync(f.h1, input);
       const grid = command === 'spectrum' ? ['--periods', '0,1'] : [];
-      const line = expectOneLineFailure(await runMain([command, input, '--units', 'g', ...grid, '--svg', dir]));
+      const line = expectOneLineFailure(
+        await runMain([command, input, '--units', 'g', ...grid, '--svg', dir]),
+      );
       expect(line).toContain('refusing to overwrite the input');
       expect(readdirSync(dir)).toEqual([name]);
       expect(readFileSync(input).equals(original)).toBe(true);
