@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// The long fuzz campaign: the property tests of test/fuzz/ with every case count multiplied by
+// The long fuzz campaign: the property tests of test/properties/ with every case count multiplied by
 // QUAKESWEEP_FUZZ_SCALE (default 170, a little over 100,000 cases: loader cases in-process,
 // spectrum cases through main() in-process, and a few hundred through real child processes).
 // Usage: npm run fuzz [-- --scale N --seed S]
@@ -22,7 +22,7 @@ console.log(`fuzz: scale ${scale}, seed ${seed} (rerun with --seed ${seed} to re
 const started = Date.now();
 const run = spawnSync(
   process.execPath,
-  ['node_modules/vitest/vitest.mjs', 'run', 'test/fuzz', '--testTimeout', '0', '--reporter', 'dot'],
+  ['node_modules/vitest/vitest.mjs', 'run', 'test/properties', '--testTimeout', '0', '--reporter', 'dot'],
   {
     stdio: 'inherit',
     env: {

@@ -4,7 +4,7 @@ import type { Method } from './recurrence.js';
  * The sub-step rule: how many steps per natural period each method takes so that every peak stays
  * within 0.3% of the exact peak response to the linearly interpolated record (the README promises
  * 0.5%). Calibrated on stochastic records against the exact method with 400 steps a period, over
- * T = 0.01–10 s, ζ = 0–0.5 and Δt = 0.005–0.02 s; test/oscillator/accuracy.test.ts checks it.
+ * T = 0.01–10 s, ζ = 0–0.5 and Δt = 0.005–0.02 s; test/reference/accuracy.test.ts checks it.
  *
  * - Piecewise-exact is exact at the steps; it needs 10 steps a period only so that the cubic
  *   Hermite refinement finds each peak between steps (its error there is below 0.05%).

@@ -24,7 +24,7 @@ import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runMain } from '../hardening/run-cli.js';
+import { runMain } from '../helpers/run-cli.js';
 import { GOLDEN_CASES, GOLDEN_FOLLOW_UPS } from './cases.js';
 
 const RECORDS = fileURLToPath(new URL('../../records/', import.meta.url));

@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { createSvgDocument, formatCoordinate } from '../../src/plot/svg.js';
-import { BIN } from '../hardening/run-cli.js';
+import { BIN } from '../helpers/run-cli.js';
 import { parseSvg } from './helpers.js';
 
 const RECORD = fileURLToPath(new URL('../../records/marrowby-h1.csv', import.meta.url));

@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { isQuakesweepError } from '../../src/base/errors.js';
 import { lineFields } from '../../src/record/fields.js';
 import type { Separator } from '../../src/record/separator.js';
-import { FUZZ_SEED, runs } from '../fuzz/budget.js';
+import { FUZZ_SEED, runs } from '../helpers/fuzz-budget.js';
 
 /** csv-parse's fields of one line, or 'refused' when it throws. */
 function csvParse(line: string, separator: Separator): string[] | 'refused' {

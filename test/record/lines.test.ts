@@ -16,8 +16,8 @@ import {
 } from '../../src/record/read.js';
 import type { GroundRecord } from '../../src/record/record.js';
 import { RowScanner } from '../../src/record/rows.js';
-import { FUZZ_SEED, runs } from '../fuzz/budget.js';
-import { chunked, mutatedRecord, streamOf, wellFormedRecord } from '../fuzz/records.js';
+import { FUZZ_SEED, runs } from '../helpers/fuzz-budget.js';
+import { chunked, mutatedRecord, streamOf, wellFormedRecord } from '../helpers/fuzz-records.js';
 
 const SOURCE = 'scan/rec.txt';
 const MAX = 1_000_000; // the reader's MAX_LINE_CHARACTERS

@@ -7,7 +7,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseNumber } from '../../src/record/number.js';
-import { FUZZ_SEED, runs } from '../fuzz/budget.js';
+import { FUZZ_SEED, runs } from '../helpers/fuzz-budget.js';
 
 /** A decimal as people print it: sign, digits, a point somewhere or none, an exponent or none. */
 const decimal = fc

@@ -1,4 +1,4 @@
-/** Small invented inputs for the hardening tests, written into a fresh temporary folder. */
+/** Small invented inputs for the CLI and output tests, written into a fresh temporary folder. */
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';

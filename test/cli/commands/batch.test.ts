@@ -1,4 +1,3 @@
-import { spawnSync } from 'node:child_process';
 import {
   existsSync,
   mkdirSync,
@@ -9,13 +8,12 @@ import {
   writeFileSync,
 } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { type CliResult, runMainIn } from '../../helpers/run-cli.js';
 
-// End to end: the built CLI on small invented records (decaying sines), coarse grid.
-
-const root = resolve(import.meta.dirname, '../..');
-const bin = join(root, 'bin', 'quakesweep.js');
+// quakesweep batch and merge in-process (the worker threads run dist/) on small invented records
+// (decaying sines), coarse grid, in the folder of the records as a person would run them.
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-batch-'));
 const inputs = join(folder, 'in');
 const grid = [
@@ -29,13 +27,18 @@ const grid = [
   '5%,10%',
 ];
 
-function run(args: string[], env: Record<string, string> = {}) {
-  const result = spawnSync(process.execPath, [bin, ...args], {
-    cwd: folder,
-    encoding: 'utf8',
-    env: { ...process.env, ...env },
-  });
-  return { code: result.status, stdout: result.stdout, stderr: result.stderr };
+/** main(args) in the test folder, with `env` added to the environment for the run. */
+async function run(args: string[], env: Record<string, string> = {}): Promise<CliResult> {
+  const saved = Object.keys(env).map((key) => [key, process.env[key]] as const);
+  Object.assign(process.env, env);
+  try {
+    return await runMainIn(folder, args);
+  } finally {
+    for (const [key, value] of saved) {
+      if (value === undefined) delete process.env[key];
+      else process.env[key] = value;
+    }
+  }
 }
 
 function record(name: string, frequencyHz: number): void {
@@ -53,8 +56,8 @@ beforeAll(() => {
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
 
 describe('quakesweep batch', () => {
-  it('finishes the good records past a broken one, lists it, and exits 1', () => {
-    const result = run(['batch', 'in/*.txt', ...grid, '--jobs', '2', '--out', 'single']);
+  it('finishes the good records past a broken one, lists it, and exits 1', async () => {
+    const result = await run(['batch', 'in/*.txt', ...grid, '--jobs', '2', '--out', 'single']);
     expect(result.code).toBe(1);
     expect(result.stderr).toMatch(/failed: .*broken\.txt:2/);
     expect(result.stderr).not.toMatch(/\n\s+at /); // no stack trace
@@ -74,21 +77,21 @@ describe('quakesweep batch', () => {
     expect(suite.spectra[0].mean_psa_g[0]).toBeCloseTo(mean, 12);
   });
 
-  it('three shards merged give the same suite.json byte for byte (Slurm and Kubernetes variables too)', () => {
-    run(['batch', 'in/*.txt', ...grid, '--jobs', '1', '--out', 'single1']);
-    const one = run(['batch', 'in/*.txt', ...grid, '--shard', '1/3', '--out', 'shards-a']);
+  it('three shards merged give the same suite.json byte for byte (Slurm and Kubernetes variables too)', async () => {
+    await run(['batch', 'in/*.txt', ...grid, '--jobs', '1', '--out', 'single1']);
+    const one = await run(['batch', 'in/*.txt', ...grid, '--shard', '1/3', '--out', 'shards-a']);
     expect(one.code).toBe(1); // broken.txt sorts first, into shard 1
     expect(one.stderr).toMatch(/broken\.txt/);
-    run(['batch', 'in/*.txt', ...grid, '--shard', 'auto', '--out', 'shards-b'], {
+    await run(['batch', 'in/*.txt', ...grid, '--shard', 'auto', '--out', 'shards-b'], {
       SLURM_ARRAY_TASK_ID: '2',
       SLURM_ARRAY_TASK_MIN: '1',
       SLURM_ARRAY_TASK_MAX: '3',
     });
-    run(['batch', 'in/*.txt', ...grid, '--shard', 'auto', '--shard-count', '3', '--out', 'shards-b'], {
+    await run(['batch', 'in/*.txt', ...grid, '--shard', 'auto', '--shard-count', '3', '--out', 'shards-b'], {
       JOB_COMPLETION_INDEX: '2',
     });
     expect(readdirSync(join(folder, 'shards-b')).filter((f) => f.startsWith('shard-'))).toHaveLength(2);
-    const merged = run(['merge', 'shards-a', 'shards-b', '--out', 'merged']);
+    const merged = await run(['merge', 'shards-a', 'shards-b', '--out', 'merged']);
     expect(merged.code).toBe(0);
     const single = readFileSync(join(folder, 'single1', 'suite.json'), 'utf8');
     expect(readFileSync(join(folder, 'merged', 'suite.json'), 'utf8')).toBe(single);
@@ -96,12 +99,12 @@ describe('quakesweep batch', () => {
     expect(readFileSync(join(folder, 'merged', 'rec4', 'spectra.json'), 'utf8')).toBe(
       readFileSync(join(folder, 'single1', 'rec4', 'spectra.json'), 'utf8'),
     );
-    const missing = run(['merge', 'shards-b', '--out', 'merged2']);
+    const missing = await run(['merge', 'shards-b', '--out', 'merged2']);
     expect(missing.code).toBe(2);
     expect(missing.stderr).toMatch(/shard 1 of 3 missing/);
   });
 
-  it('never writes outside DIR whatever the record is called', () => {
+  it('never writes outside DIR whatever the record is called', async () => {
     const evil = join(folder, 'evil');
     mkdirSync(join(evil, 'sub'), { recursive: true });
     for (const name of ['..csv', '...txt', '.hidden.txt', 'suite.json.txt', 'a\\..\\b.txt']) {
@@ -109,7 +112,7 @@ describe('quakesweep batch', () => {
     }
     const files = readdirSync(join(evil, 'sub')).map((f) => join('evil', 'sub', f));
     const before = readdirSync(evil).sort();
-    const result = run(['batch', ...files, ...grid, '--out', join('evil', 'out')]);
+    const result = await run(['batch', ...files, ...grid, '--out', join('evil', 'out')]);
     expect(result.code).toBe(0);
     expect(readdirSync(evil).sort()).toEqual([...before, 'out'].sort());
     const out = readdirSync(join(evil, 'out'));

@@ -78,3 +78,14 @@ export function expectOneLineFailure(result: CliResult): string {
   }
   return lines[0];
 }
+
+/** runMain(argv) with `cwd` as the working folder, so relative file names read as a person types them. */
+export async function runMainIn(cwd: string, argv: string[]): Promise<CliResult> {
+  const before = process.cwd();
+  process.chdir(cwd);
+  try {
+    return await runMain(argv);
+  } finally {
+    process.chdir(before);
+  }
+}

@@ -3,10 +3,12 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSy
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { CAUTION } from '../../src/base/caution.js';
+import { CAUTION } from '../../../src/base/caution.js';
+import { type CliResult, runMain, runMainIn } from '../../helpers/run-cli.js';
 
-// `quakesweep spectrum` end to end on an invented record (the built CLI, as a user runs it).
-const root = resolve(import.meta.dirname, '../..');
+// `quakesweep spectrum` on an invented record: in-process main(), and the built CLI where threads
+// and a pipe are the point.
+const root = resolve(import.meta.dirname, '../../..');
 const bin = join(root, 'bin', 'quakesweep.js');
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-spectrum-'));
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
@@ -20,17 +22,13 @@ writeFileSync(
   }).join('\n')}\n`,
 );
 
-function run(...args: string[]) {
-  const result = spawnSync(process.execPath, [bin, 'spectrum', recordFile, '--units', 'g', ...args], {
-    cwd: folder,
-    encoding: 'utf8',
-  });
-  return { code: result.status, stdout: result.stdout, stderr: result.stderr };
+function run(...args: string[]): Promise<CliResult> {
+  return runMain(['spectrum', recordFile, '--units', 'g', ...args]);
 }
 
 describe('quakesweep spectrum', () => {
-  it('writes the JSON contract with its keys and units', () => {
-    const result = run('--format', 'json', '--damping', '2%,0.05', '--periods', '0,0.1,1');
+  it('writes the JSON contract with its keys and units', async () => {
+    const result = await run('--format', 'json', '--damping', '2%,0.05', '--periods', '0,0.1,1');
     expect(result.code).toBe(0);
     const json = JSON.parse(result.stdout);
     expect(json.caution).toBe(CAUTION);
@@ -53,8 +51,8 @@ describe('quakesweep spectrum', () => {
     }
   });
 
-  it('uses the default grid: T = 0 and at least 100 log-spaced periods from 0.01 s to 10 s at 5%', () => {
-    const json = JSON.parse(run('--format', 'json').stdout);
+  it('uses the default grid: T = 0 and at least 100 log-spaced periods from 0.01 s to 10 s at 5%', async () => {
+    const json = JSON.parse((await run('--format', 'json')).stdout);
     expect(json.periods_s[0]).toBe(0);
     expect(json.periods_s[1]).toBeCloseTo(0.01, 12);
     expect(json.periods_s.at(-1)).toBeCloseTo(10, 12);
@@ -63,8 +61,8 @@ describe('quakesweep spectrum', () => {
     expect(json.spectra[0].damping).toBe(0.05);
   });
 
-  it('writes CSV with the caution on # lines and units in the header, in the length unit asked', () => {
-    const result = run('--format', 'csv', '--periods', '0.2:2:5', '--length-unit', 'mm');
+  it('writes CSV with the caution on # lines and units in the header, in the length unit asked', async () => {
+    const result = await run('--format', 'csv', '--periods', '0.2:2:5', '--length-unit', 'mm');
     expect(result.code).toBe(0);
     const lines = result.stdout.trim().split('\n');
     const comments = lines.filter((line) => line.startsWith('#'));
@@ -80,20 +78,20 @@ describe('quakesweep spectrum', () => {
     ]);
     const rows = lines.filter((line) => !line.startsWith('#') && line !== header);
     expect(rows).toHaveLength(5);
-    const json = JSON.parse(run('--format', 'json', '--periods', '0.2:2:5').stdout);
+    const json = JSON.parse((await run('--format', 'json', '--periods', '0.2:2:5')).stdout);
     expect(Number(rows[2].split(',')[1])).toBeCloseTo(json.spectra[0].sd_m[2] * 1000, 9);
   });
 
-  it('prints a summary table that starts with the caution', () => {
-    const result = run();
+  it('prints a summary table that starts with the caution', async () => {
+    const result = await run('--periods', '0,0.5,1');
     expect(result.code).toBe(0);
     expect(result.stdout.split('\n')[0].startsWith('! ')).toBe(true);
     expect(result.stdout.replace(/\n! /g, ' ')).toContain(CAUTION.slice(0, 60));
   });
 
-  it('writes --out atomically and leaves no temporary file', () => {
+  it('writes --out atomically and leaves no temporary file', async () => {
     const out = join(folder, 'out.json');
-    const result = run('--out', out);
+    const result = await run('--periods', '0,1', '--out', out);
     expect(result.code).toBe(0);
     expect(JSON.parse(readFileSync(out, 'utf8')).caution).toBe(CAUTION);
     expect(readdirSync(folder).filter((name) => name.includes('.tmp'))).toEqual([]);
@@ -108,30 +106,30 @@ describe('quakesweep spectrum', () => {
     [['--method', 'runge-kutta'], /accepted: newmark-average/],
     [['--format', 'xml'], /use json or csv/],
     [['--length-unit', 'furlong'], /unknown length unit/],
-  ])('refuses %s with one line and exit code 2', (args, message) => {
+  ])('refuses %s with one line and exit code 2', async (args, message) => {
     const out = join(folder, 'never.json');
-    const result = run(...args, '--out', out);
+    const result = await run(...args, '--out', out);
     expect(result.code).toBe(2);
     expect(result.stderr.trim().split('\n')).toHaveLength(1);
     expect(result.stderr).toMatch(message);
     expect(existsSync(out)).toBe(false);
   });
 
-  it('refuses more than a million oscillators without --force', () => {
-    const result = run('--periods', '0.01:10:600000', '--damping', '2%,5%');
+  it('refuses more than a million oscillators without --force', async () => {
+    const result = await run('--periods', '0.01:10:600000', '--damping', '2%,5%');
     expect(result.code).toBe(2);
     expect(result.stderr).toMatch(/--force/);
   });
 
-  it('runs every method', () => {
+  it('runs every method', async () => {
     for (const method of ['newmark-average', 'newmark-linear', 'piecewise-exact']) {
-      const json = JSON.parse(run('--format', 'json', '--method', method, '--periods', '0.5').stdout);
+      const json = JSON.parse((await run('--format', 'json', '--method', method, '--periods', '0.5')).stdout);
       expect(json.method).toBe(method);
       expect(json.spectra[0].psa_g[0]).toBeGreaterThan(0);
     }
   });
 
-  it('writes the same bytes on one thread, on two, and when threads started early go unused', () => {
+  it('writes the same bytes on one thread, on two, and when threads started early go unused', async () => {
     // 20,000 samples: the first 700 lines short (about 12 bytes), the rest padded with blanks to 80
     // bytes, so that spectrum, which guesses the record's length from the line ends of the file's
     // first 8 KiB before reading it, guesses about 100,000 and starts its threads early. 2,000
@@ -172,5 +170,92 @@ describe('quakesweep spectrum', () => {
     const fromPipe = JSON.parse(piped.stdout);
     expect(fromPipe.spectra).toEqual(JSON.parse(alone).spectra);
     expect(fromPipe.record.npts).toBe(20_000);
+  });
+});
+
+/** `quakesweep ARGS` run in the test folder, so file names are given as a person types them. */
+function runIn(...args: string[]): Promise<CliResult> {
+  return runMainIn(folder, args);
+}
+
+async function jsonIn(...args: string[]) {
+  const result = await runIn(...args, '--format', 'json');
+  expect(result.stderr).toBe('');
+  expect(result.code).toBe(0);
+  return JSON.parse(result.stdout);
+}
+
+// h1.txt: a Gaussian-windowed 1.6 Hz sine, 6 s at 0.01 s (invented), one value a line.
+writeFileSync(
+  join(folder, 'h1.txt'),
+  Array.from({ length: 600 }, (_, i) => {
+    const t = i * 0.01;
+    return String(0.3 * Math.exp(-(((t - 2.5) / 1) ** 2)) * Math.sin(2 * Math.PI * 1.6 * t));
+  }).join('\n'),
+);
+
+describe('quakesweep spectrum --target', () => {
+  const record = ['h1.txt', '--units', 'g', '--dt', '0.01'];
+
+  it('reports the scaling and the target in JSON; --apply-scale scales and records the step', async () => {
+    const plain = await jsonIn('spectrum', ...record, '--periods', '0,0.2,0.5,1,2');
+    const fitted = await jsonIn(
+      'spectrum',
+      ...record,
+      '--periods',
+      '0,0.2,0.5,1,2',
+      '--target',
+      'asce7-16:sds=1.0,sd1=0.6,tl=8',
+      '--scale-range',
+      '0.2:1',
+    );
+    expect(fitted.target.psa_g).toHaveLength(5);
+    expect(fitted.target.psa_g[2]).toBeCloseTo(1.0, 12);
+    const s = fitted.scaling;
+    expect(s.range_s).toEqual([0.2, 1]);
+    // exp(mean(ln target − ln record)) over 0.2, 0.5, 1 s, from the unscaled record's PSA.
+    const psa = plain.spectra[0].psa_g;
+    const expected = Math.exp((Math.log(1.0 / psa[1]) + Math.log(1.0 / psa[2]) + Math.log(0.6 / psa[3])) / 3);
+    expect(s.factor).toBeCloseTo(expected, 10);
+    expect(s.min_ratio).toBeLessThanOrEqual(s.mean_ratio);
+    expect(s.max_ratio).toBeGreaterThanOrEqual(s.mean_ratio);
+    expect(fitted.record.processing).toEqual([]);
+    const applied = await jsonIn(
+      'spectrum',
+      ...record,
+      '--periods',
+      '0,0.2,0.5,1,2',
+      '--target',
+      'asce7-16:sds=1.0,sd1=0.6,tl=8',
+      '--scale-range',
+      '0.2:1',
+      '--apply-scale',
+    );
+    expect(applied.record.processing[0].operation).toBe('scale');
+    expect(applied.spectra[0].psa_g[3]).toBeCloseTo(psa[3] * s.factor, 10);
+  });
+
+  it('accepts ec8 targets and table files, and refuses scaling options without a target', async () => {
+    const ec8 = await jsonIn('spectrum', ...record, '--target', 'ec8:type=1,ground=C,ag=0.25');
+    expect(ec8.target.psa_g.at(-1)).toBeNull(); // 10 s is beyond the Eurocode 8 spectrum
+    expect(ec8.scaling.range_s[1]).toBeLessThanOrEqual(4);
+    writeFileSync(join(folder, 'site.csv'), 'period_s,psa_g\n0.1,0.5\n3,0.2\n');
+    const table = await jsonIn('spectrum', ...record, '--target', 'site.csv');
+    expect(table.scaling.range_s[0]).toBeGreaterThanOrEqual(0.1);
+    const bad = await runIn('spectrum', ...record, '--apply-scale');
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toMatch(/needs --target/);
+    const csv = await runIn(
+      'spectrum',
+      ...record,
+      '--periods',
+      '0.2,1',
+      '--target',
+      'site.csv',
+      '--format',
+      'csv',
+    );
+    expect(csv.stdout).toMatch(/# scaling: factor/);
+    expect(csv.stdout).toMatch(/,target_psa_g\n/);
   });
 });

@@ -6,8 +6,8 @@
 import { mkdirSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { writeFixtures } from './fixtures.js';
-import { runMain } from './run-cli.js';
+import { writeFixtures } from '../helpers/fixtures.js';
+import { runMain } from '../helpers/run-cli.js';
 
 const f = writeFixtures();
 afterAll(() => rmSync(f.dir, { recursive: true, force: true }));

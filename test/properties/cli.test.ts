@@ -10,9 +10,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
-import { type CliResult, errorLines, expectOneLineFailure, runChild, runMain } from '../hardening/run-cli.js';
-import { FUZZ_SEED, report, runs } from './budget.js';
-import { G_MS2, mutatedRecord, wellFormedRecord } from './records.js';
+import { FUZZ_SEED, report, runs } from '../helpers/fuzz-budget.js';
+import { G_MS2, mutatedRecord, wellFormedRecord } from '../helpers/fuzz-records.js';
+import { type CliResult, errorLines, expectOneLineFailure, runChild, runMain } from '../helpers/run-cli.js';
 
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-fuzz-'));
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
@@ -91,7 +91,7 @@ const damagedCase = fc.record({ damaged: mutatedRecord, csv: fc.boolean(), dropD
   ({ damaged, csv, dropDt }): Case => ({
     text: damaged.text,
     // Leaving --dt out is only a file question in the auto layout; with --layout single or
-    // wrapped it is an option error, checked in test/hardening.
+    // wrapped it is an option error, checked in test/cli/options/record.test.ts.
     options: {
       ...damaged.options,
       dtS: dropDt && damaged.options.layout === 'auto' ? undefined : damaged.options.dtS,
@@ -139,7 +139,7 @@ describe('spectrum as a child process', () => {
         if (outcome.refused) refused++;
         maxMs = Math.max(maxMs, outcome.ms);
       }),
-      { seed: FUZZ_SEED + 11, numRuns: runs(24, 15) },
+      { seed: FUZZ_SEED + 11, numRuns: runs(8, 45) },
     );
     report('spectrum as child processes', { cases, refused, failures: 0, max_ms: Math.round(maxMs) });
   });

@@ -11,8 +11,8 @@ import { describe, expect, it } from 'vitest';
 import { isQuakesweepError } from '../../src/base/errors.js';
 import { readRecordStream, readRecordText, unitWarnings } from '../../src/record/read.js';
 import type { GroundRecord } from '../../src/record/record.js';
-import { FUZZ_SEED, report, runs } from './budget.js';
-import { chunked, G_MS2, mutatedRecord, streamOf, wellFormedRecord } from './records.js';
+import { FUZZ_SEED, report, runs } from '../helpers/fuzz-budget.js';
+import { chunked, G_MS2, mutatedRecord, streamOf, wellFormedRecord } from '../helpers/fuzz-records.js';
 
 const SOURCE = 'fuzz/record.txt';
 

@@ -1,0 +1,76 @@
+import { describe, expect, it } from 'vitest';
+import {
+  ACCELERATION_UNITS,
+  gFromMS2,
+  LENGTH_UNITS,
+  parseAccelerationUnit,
+  parseLengthUnit,
+  STANDARD_GRAVITY_MS2,
+  toMetresPerSecondSquared,
+} from '../../src/base/units.js';
+
+// Factors from their definitions (NIST SP 811, Appendix B): 1 in = 0.0254 m and 1 ft = 0.3048 m
+// exactly (international inch and foot, 1959); 1 Gal = 1 cm/s²; standard gravity 9.80665 m/s²
+// exactly (3rd CGPM, 1901).
+describe('unit factors', () => {
+  it('standard gravity is 9.80665 m/s² exactly', () => {
+    expect(STANDARD_GRAVITY_MS2).toBe(9.80665);
+    expect(ACCELERATION_UNITS.g).toBe(9.80665);
+  });
+
+  it('acceleration factors to m/s² follow the definitions of the units', () => {
+    expect(ACCELERATION_UNITS).toEqual({
+      g: 9.80665,
+      'm/s2': 1,
+      'cm/s2': 0.01,
+      gal: 0.01,
+      'mm/s2': 0.001,
+      'in/s2': 0.0254,
+      'ft/s2': 0.3048,
+    });
+  });
+
+  it('length factors to metres follow the definitions of the units', () => {
+    expect(LENGTH_UNITS).toEqual({ m: 1, cm: 0.01, mm: 0.001, in: 0.0254, ft: 0.3048 });
+    expect(LENGTH_UNITS.ft / LENGTH_UNITS.in).toBeCloseTo(12, 12); // 12 in to the foot
+  });
+
+  it('converts to m/s² and back to g', () => {
+    expect(toMetresPerSecondSquared(981, 'gal')).toBeCloseTo(9.81, 12);
+    expect(toMetresPerSecondSquared(1, 'ft/s2')).toBeCloseTo(0.3048, 15);
+    expect(gFromMS2(9.80665)).toBe(1);
+    expect(gFromMS2(toMetresPerSecondSquared(0.35, 'g'))).toBeCloseTo(0.35, 15);
+  });
+});
+
+describe('parseAccelerationUnit', () => {
+  it('accepts the names, the ^2 and ² spellings, any case and surrounding blanks', () => {
+    expect(parseAccelerationUnit('g')).toBe('g');
+    expect(parseAccelerationUnit(' CM/S^2 ')).toBe('cm/s2');
+    expect(parseAccelerationUnit('m/s²')).toBe('m/s2');
+    expect(parseAccelerationUnit('Gal')).toBe('gal');
+    expect(parseAccelerationUnit('in/s^2')).toBe('in/s2');
+  });
+
+  it('never guesses: a missing unit is refused, naming --units and the accepted names', () => {
+    for (const missing of [undefined, '', '   ']) {
+      expect(() => parseAccelerationUnit(missing)).toThrow(
+        "the record's units are required (--units); accepted: g, m/s2, cm/s2, gal, mm/s2, in/s2, ft/s2",
+      );
+    }
+  });
+
+  it('refuses an unknown unit, quoting it', () => {
+    expect(() => parseAccelerationUnit('furlong/s2')).toThrow(
+      /^unknown acceleration unit 'furlong\/s2'; accepted: g,/,
+    );
+  });
+});
+
+describe('parseLengthUnit', () => {
+  it('accepts the names in any case and refuses others, listing the accepted', () => {
+    expect(parseLengthUnit(' MM ')).toBe('mm');
+    expect(parseLengthUnit('ft')).toBe('ft');
+    expect(() => parseLengthUnit('yd')).toThrow("unknown length unit 'yd'; accepted: m, cm, mm, in, ft");
+  });
+});

@@ -1,0 +1,46 @@
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { designFromOptions, loadTableSpectrum } from '../../../src/cli/options/design.js';
+
+const folder = mkdtempSync(join(tmpdir(), 'quakesweep-design-options-'));
+afterAll(() => rmSync(folder, { recursive: true, force: true }));
+
+describe('designFromOptions', () => {
+  it('builds ASCE 7-16 from S_DS, S_D1 and T_L (§11.4.6: S_a = S_D1/T between T_s and T_L)', () => {
+    const spectrum = designFromOptions({ code: ' ASCE7-16 ', sds: '1.0', sd1: '0.6', tl: '8' });
+    expect(spectrum.psaG(1)).toBeCloseTo(0.6, 12);
+    expect(spectrum.psaG(0)).toBeCloseTo(0.4, 12); // 0.4 S_DS at T = 0
+  });
+
+  it('builds Eurocode 8 with η from the damping (EN 1998-1 Eq. 3.6: η = √(10/(5 + ξ%)))', () => {
+    const at = (damping?: string) =>
+      designFromOptions({ code: 'ec8', type: '1', ground: 'C', ag: '0.25', damping }).psaG(0.4);
+    expect(at()).toBeCloseTo(2.5 * 0.25 * 1.15, 12); // plateau, S = 1.15 for type 1 ground C
+    expect(at('10%') / at()).toBeCloseTo(Math.sqrt(10 / 15), 12);
+  });
+
+  it('reads a table file', () => {
+    const file = join(folder, 'site.csv');
+    writeFileSync(file, 'period_s,psa_g\n0.1,0.5\n3,0.2\n');
+    expect(designFromOptions({ table: file }).psaG(0.1)).toBe(0.5);
+    expect(loadTableSpectrum(file).psaG(3)).toBe(0.2);
+  });
+
+  it.each([
+    [{}, 'choose a spectrum: --code asce7-16, --code ec8 or --table FILE'],
+    [{ code: 'nbc' }, "--code 'nbc': use asce7-16 or ec8"],
+    [{ code: 'asce7-16', sds: '1', sd1: '0.6' }, '--tl is required with --code asce7-16'],
+    [{ code: 'asce7-16', sds: 'x', sd1: '0.6', tl: '8' }, "--sds 'x' is not a number"],
+    [
+      { code: 'asce7-16', sds: '1', sd1: '0.6', tl: '8', ag: '0.2' },
+      '--ag does not apply to --code asce7-16',
+    ],
+    [{ code: 'ec8', type: '1', ground: 'C', ag: '0.2', tl: '8' }, '--tl does not apply to --code ec8'],
+    [{ table: 't.csv', code: 'ec8' }, 'give either --code or --table, not both'],
+    [{ table: 't.csv', sds: '1' }, '--sds does not apply to --table'],
+  ])('refuses %o', (options, message) => {
+    expect(() => designFromOptions(options)).toThrow(message);
+  });
+});

@@ -1,0 +1,67 @@
+import { describe, expect, it } from 'vitest';
+import {
+  defaultPeriodsS,
+  logSpaced,
+  MAX_OSCILLATORS,
+  MIN_PERIOD_S,
+  parseDampings,
+  parsePeriods,
+} from '../../src/oscillator/grid.js';
+
+describe('period grids', () => {
+  it('logSpaced: both ends exact, a constant ratio between neighbours', () => {
+    const periods = logSpaced(0.1, 10, 5);
+    expect(periods[0]).toBe(0.1);
+    expect(periods[4]).toBe(10);
+    // 0.1 to 10 is two decades in four steps: a ratio of 10^(1/2) (closed form).
+    for (let i = 1; i < 5; i++) expect(periods[i] / periods[i - 1]).toBeCloseTo(Math.sqrt(10), 12);
+    expect(logSpaced(0.5, 2, 1)).toEqual([0.5]);
+  });
+
+  it('the default grid is T = 0 and 120 log-spaced periods from 0.01 s to 10 s', () => {
+    const grid = defaultPeriodsS();
+    expect(grid).toHaveLength(121);
+    expect(grid[0]).toBe(0);
+    expect(grid[1]).toBe(0.01);
+    expect(grid[120]).toBe(10);
+    expect(grid[2] / grid[1]).toBeCloseTo(1000 ** (1 / 119), 12);
+  });
+
+  it('parses a list, sorted, and a:b:n', () => {
+    expect(Array.from(parsePeriods(' 1, 0, 0.2 '))).toEqual([0, 0.2, 1]);
+    expect(Array.from(parsePeriods('0.1:10:5'))).toEqual(logSpaced(0.1, 10, 5));
+    expect(Array.from(parsePeriods(String(MIN_PERIOD_S)))).toEqual([1e-4]);
+  });
+
+  it.each([
+    ['0.1:1', "--periods '0.1:1': use a:b:n, e.g. 0.01:10:100"],
+    ['0:1:5', "--periods '0:1:5': need 0 < a < b (log spacing cannot start at 0; add 0 with a list)"],
+    ['1:0.1:5', /need 0 < a < b/],
+    ['0.1:1:2.5', "--periods '0.1:1:2.5': n must be an integer ≥ 2"],
+    [
+      `0.1:1:${MAX_OSCILLATORS + 1}`,
+      `--periods '0.1:1:${MAX_OSCILLATORS + 1}': n = 1000001 is more than 1000000`,
+    ],
+    ['0.1,,1', "--periods: '' is not a number"],
+    ['-0.5', '--periods: -0.5 is negative; periods are ≥ 0 s (0 means rigid)'],
+    ['0.00005', "--periods '0.00005': 0.00005 s is shorter than 0.0001 s; use 0 for a rigid oscillator"],
+    ['1,0.5,1', '--periods: 1 s appears twice'],
+  ])('refuses --periods %s', (text, message) => {
+    expect(() => parsePeriods(text)).toThrow(message);
+  });
+});
+
+describe('damping lists', () => {
+  it('reads fractions and percentages, keeping the order given', () => {
+    expect(Array.from(parseDampings('5%, 0.02,150%'))).toEqual([0.05, 0.02, 1.5]);
+  });
+
+  it.each([
+    ['5', '--damping: 5 is above 1; write 5% for a percentage, or a fraction such as 0.05'],
+    ['-1%', '--damping: -1% is negative; damping ratios are ≥ 0'],
+    ['x', "--damping: 'x' is not a number"],
+    ['5%,0.05', '--damping: 0.05 appears twice'],
+  ])('refuses --damping %s', (text, message) => {
+    expect(() => parseDampings(text)).toThrow(message);
+  });
+});

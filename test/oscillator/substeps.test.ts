@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest';
+import {
+  executionPlan,
+  MIN_STEPS_PER_PERIOD,
+  PREWARPED_STEPS_PER_PERIOD,
+  recordSubsteps,
+  stepsPerPeriod,
+  substepCount,
+  TEXTBOOK_SUBSTEP_RULE,
+} from '../../src/oscillator/substeps.js';
+
+// The rule as its documentation states it (src/oscillator/substeps.ts); how well it holds peaks
+// is checked against the exact method in test/reference/accuracy.test.ts.
+const context = { damping: 0.05, durationS: 20 };
+
+describe('steps per period', () => {
+  it('pre-warped: the fixed count of each method, raised (never lowered) by the user', () => {
+    expect(stepsPerPeriod('newmark-average', 1, context)).toBe(PREWARPED_STEPS_PER_PERIOD['newmark-average']);
+    expect(stepsPerPeriod('piecewise-exact', 1, context)).toBe(MIN_STEPS_PER_PERIOD);
+    expect(stepsPerPeriod('newmark-linear', 1, { ...context, stepsPerPeriod: 200 })).toBe(200);
+    expect(stepsPerPeriod('newmark-linear', 1, { ...context, stepsPerPeriod: 3 })).toBe(38);
+  });
+
+  it('textbook: N = √(K·C + N₀²), C the cycles remembered, min(duration/T, 1/(2πζ))', () => {
+    const { k, baseSteps } = TEXTBOOK_SUBSTEP_RULE['newmark-average'];
+    const damped = stepsPerPeriod('newmark-average', 1, { ...context, prewarp: false });
+    expect(damped).toBeCloseTo(Math.sqrt((k * 1) / (2 * Math.PI * 0.05) + baseSteps ** 2), 12);
+    // Undamped, an oscillator remembers the whole record: 20 cycles of a 1 s period.
+    const undamped = stepsPerPeriod('newmark-average', 1, { damping: 0, durationS: 20, prewarp: false });
+    expect(undamped).toBeCloseTo(Math.sqrt(k * 20 + baseSteps ** 2), 12);
+    expect(stepsPerPeriod('piecewise-exact', 1, { ...context, prewarp: false })).toBe(MIN_STEPS_PER_PERIOD);
+  });
+});
+
+describe('sub-steps per record step', () => {
+  it('⌈dt·N/T⌉, one for a rigid oscillator', () => {
+    expect(substepCount('newmark-average', 0, 0.01, context)).toBe(1);
+    expect(substepCount('newmark-average', 1, 0.01, context)).toBe(1); // 0.66 → 1
+    expect(substepCount('newmark-average', 0.1, 0.01, context)).toBe(7); // 6.6 → 7
+    expect(substepCount('newmark-linear', 0.038, 0.01, context)).toBe(10); // 10 exactly, not 11
+  });
+
+  it('for rough records: ⌈5R²⌉ for average acceleration, none for linear, ⌈R²/2⌉ for piecewise-exact', () => {
+    expect(recordSubsteps('newmark-average', 0.62)).toBe(2); // 5 × 0.3844 = 1.92
+    expect(recordSubsteps('newmark-average', 2)).toBe(20);
+    expect(recordSubsteps('newmark-linear', 2)).toBe(1);
+    expect(recordSubsteps('piecewise-exact', 2)).toBe(2);
+    expect(recordSubsteps('newmark-average', 0)).toBe(1);
+    expect(substepCount('newmark-average', 10, 0.02, { ...context, roughness: 2 })).toBe(20);
+  });
+});
+
+describe('executionPlan', () => {
+  it('executes what the Hermite search needs and composes the rest, covering every sub-step', () => {
+    for (const [substeps, periodS, dtS, roughness] of [
+      [7, 0.1, 0.01, 0.3],
+      [66, 0.01, 0.01, 0.3],
+      [20, 10, 0.02, 2],
+      [1, 1, 0.01, 0.1],
+    ]) {
+      const { steps, composed } = executionPlan(substeps, periodS, dtS, roughness);
+      expect(steps).toBeLessThanOrEqual(substeps);
+      expect(steps * composed).toBeGreaterThanOrEqual(substeps);
+      expect(steps * (composed - 1)).toBeLessThan(substeps);
+    }
+    // T = 0.01 s at dt = 0.01 s: the search needs 10 steps a period, so 66 sub-steps run as 10 × 7.
+    expect(executionPlan(66, 0.01, 0.01, 0.3)).toEqual({ steps: 10, composed: 7 });
+    // A long period needs one executed step; roughness 2 asks ⌈R²⌉ = 4 for content near Nyquist.
+    expect(executionPlan(20, 10, 0.02, 2)).toEqual({ steps: 4, composed: 5 });
+    // Steps a period asked for by the user are executed, not composed.
+    expect(executionPlan(66, 0.01, 0.01, 0.3, 66)).toEqual({ steps: 66, composed: 1 });
+  });
+});
