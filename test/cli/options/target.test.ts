@@ -2,7 +2,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { applyTarget, loadTarget } from '../../../src/cli/options/target.js';
+import { applyTarget, targetFromOptions } from '../../../src/cli/options/target.js';
 import { createRecord } from '../../../src/record/record.js';
 import { responseSpectrum } from '../../../src/spectrum/spectrum.js';
 
@@ -17,37 +17,38 @@ const record = createRecord({
 });
 const spectrum = responseSpectrum(record, { periodsS: [0, 0.2, 0.5, 1], dampings: [0.05] });
 
-describe('loadTarget', () => {
+describe('targetFromOptions', () => {
   it('is undefined without --target, and refuses the scaling options without it', () => {
-    expect(loadTarget({})).toBeUndefined();
-    expect(() => loadTarget({ scaleRange: '0.2:1' })).toThrow('--scale-range needs --target');
-    expect(() => loadTarget({ applyScale: true })).toThrow('--apply-scale needs --target');
+    expect(targetFromOptions({})).toBeUndefined();
+    expect(() => targetFromOptions({ scaleRange: '0.2:1' })).toThrow('--scale-range needs --target');
+    expect(() => targetFromOptions({ applyScale: true })).toThrow('--apply-scale needs --target');
   });
 
   it('reads a code target and a table file', () => {
-    const code = loadTarget({ target: 'asce7-16:sds=1.0,sd1=0.6,tl=8' })!;
-    expect(code.psaG(1)).toBeCloseTo(0.6, 12); // S_D1/T at 1 s (ASCE 7-16 §11.4.6)
+    const code = targetFromOptions({ target: 'asce7-16:sds=1.0,sd1=0.6,tl=8' })!;
+    expect(code.apply).toBe(false);
+    expect(code.spectrum.psaG(1)).toBeCloseTo(0.6, 12); // S_D1/T at 1 s (ASCE 7-16 §11.4.6)
     const file = join(folder, 'site.csv');
     writeFileSync(file, 'period_s,psa_g\n0.1,0.5\n3,0.2\n');
-    expect(loadTarget({ target: file })!.psaG(3)).toBe(0.2);
+    expect(targetFromOptions({ target: file })!.spectrum.psaG(3)).toBe(0.2);
   });
 });
 
 describe('applyTarget', () => {
   it('leaves the spectrum alone without a target', () => {
-    expect(applyTarget(spectrum, undefined, {})).toEqual({ spectrum });
+    expect(applyTarget(spectrum, undefined)).toEqual({ spectrum });
   });
 
   it('fits over --scale-range, and scales the spectrum only with --apply-scale', () => {
-    const target = loadTarget({ target: 'asce7-16:sds=1.0,sd1=0.6,tl=8' });
-    const fitted = applyTarget(spectrum, target, { scaleRange: '0.2:1' });
+    const asce = { target: 'asce7-16:sds=1.0,sd1=0.6,tl=8', scaleRange: '0.2:1' };
+    const fitted = applyTarget(spectrum, targetFromOptions(asce));
     expect(fitted.fit?.rangeS).toEqual([0.2, 1]);
     expect(fitted.fit?.applied).toBe(false);
     expect(fitted.spectrum).toBe(spectrum);
-    const scaled = applyTarget(spectrum, target, { scaleRange: '0.2:1', applyScale: true });
+    const scaled = applyTarget(spectrum, targetFromOptions({ ...asce, applyScale: true }));
     const factor = scaled.fit!.factor;
     expect(scaled.fit?.applied).toBe(true);
     expect(scaled.spectrum.curves[0].psaMS2[2]).toBeCloseTo(spectrum.curves[0].psaMS2[2] * factor, 9);
-    expect(() => applyTarget(spectrum, target, { scaleRange: '1:0.2' })).toThrow(/use a:b in seconds/);
+    expect(() => targetFromOptions({ ...asce, scaleRange: '1:0.2' })).toThrow(/use a:b in seconds/);
   });
 });
