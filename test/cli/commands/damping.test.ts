@@ -1,38 +1,8 @@
-// `quakesweep damping` in-process on an invented record (a Gaussian-windowed sine).
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { type CliResult, runMainIn } from '../../helpers/run-cli.js';
+import { describe, expect, it } from 'vitest';
+import { useCliFolder } from '../../helpers/cli-folder.js';
 
-let folder = '';
-
-function run(...args: string[]): Promise<CliResult> {
-  return runMainIn(folder, args);
-}
-
-async function json(...args: string[]) {
-  const result = await run(...args, '--format', 'json');
-  expect(result.stderr).toBe('');
-  expect(result.code).toBe(0);
-  return JSON.parse(result.stdout);
-}
-
-function write(name: string, frequencyHz: number): void {
-  writeFileSync(
-    join(folder, name),
-    Array.from({ length: 600 }, (_, i) => {
-      const t = i * 0.01;
-      return String(0.3 * Math.exp(-(((t - 2.5) / 1) ** 2)) * Math.sin(2 * Math.PI * frequencyHz * t));
-    }).join('\n'),
-  );
-}
-
-beforeAll(() => {
-  folder = mkdtempSync(join(tmpdir(), 'quakesweep-damping-'));
-  write('h1.txt', 1.6);
-});
-afterAll(() => rmSync(folder, { recursive: true, force: true }));
+const folder = useCliFolder('quakesweep-damping-', (f) => f.writeWindowedSine('h1.txt', 1.6));
+const { json } = folder;
 
 describe('quakesweep damping', () => {
   it('--damping 2%,5%,10%,20%: ratios to 5% and published factors', async () => {

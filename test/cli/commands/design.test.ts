@@ -1,28 +1,12 @@
 // `quakesweep design` in-process: code spectra checked against their published formulas, tables, refusals.
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../../src/base/caution.js';
-import { type CliResult, runMainIn } from '../../helpers/run-cli.js';
+import { useCliFolder } from '../../helpers/cli-folder.js';
 
-let folder = '';
-
-function run(...args: string[]): Promise<CliResult> {
-  return runMainIn(folder, args);
-}
-
-async function json(...args: string[]) {
-  const result = await run(...args, '--format', 'json');
-  expect(result.stderr).toBe('');
-  expect(result.code).toBe(0);
-  return JSON.parse(result.stdout);
-}
-
-beforeAll(() => {
-  folder = mkdtempSync(join(tmpdir(), 'quakesweep-design-'));
-});
-afterAll(() => rmSync(folder, { recursive: true, force: true }));
+const folder = useCliFolder('quakesweep-design-');
+const { run, json } = folder;
 
 describe('quakesweep design', () => {
   it('--code asce7-16 --sds 1.0 --sd1 0.6 --tl 8 (values from §11.4.6, hand calculation)', async () => {
@@ -92,7 +76,7 @@ describe('quakesweep design', () => {
       'ec8.csv',
     );
     expect(written.code).toBe(0);
-    expect(readFileSync(join(folder, 'ec8.csv'), 'utf8')).toContain('period_s,psa_g');
+    expect(readFileSync(join(folder.path, 'ec8.csv'), 'utf8')).toContain('period_s,psa_g');
     const original = await json('design', '--code', 'ec8', '--type', '2', '--ground', 'D', '--ag', '0.2');
     const back = await json('design', '--table', 'ec8.csv');
     expect(back.periods_s).toEqual(original.periods_s);

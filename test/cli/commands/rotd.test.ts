@@ -1,40 +1,15 @@
 // `quakesweep rotd` in-process on two invented components (Gaussian-windowed sines).
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../../src/base/caution.js';
-import { type CliResult, runMainIn } from '../../helpers/run-cli.js';
+import { useCliFolder } from '../../helpers/cli-folder.js';
 
-let folder = '';
-
-function run(...args: string[]): Promise<CliResult> {
-  return runMainIn(folder, args);
-}
-
-async function json(...args: string[]) {
-  const result = await run(...args, '--format', 'json');
-  expect(result.stderr).toBe('');
-  expect(result.code).toBe(0);
-  return JSON.parse(result.stdout);
-}
-
-function write(name: string, frequencyHz: number): void {
-  writeFileSync(
-    join(folder, name),
-    Array.from({ length: 600 }, (_, i) => {
-      const t = i * 0.01;
-      return String(0.3 * Math.exp(-(((t - 2.5) / 1) ** 2)) * Math.sin(2 * Math.PI * frequencyHz * t));
-    }).join('\n'),
-  );
-}
-
-beforeAll(() => {
-  folder = mkdtempSync(join(tmpdir(), 'quakesweep-rotd-'));
-  write('h1.txt', 1.6);
-  write('h2.txt', 0.9);
+const folder = useCliFolder('quakesweep-rotd-', (f) => {
+  f.writeWindowedSine('h1.txt', 1.6);
+  f.writeWindowedSine('h2.txt', 0.9);
 });
-afterAll(() => rmSync(folder, { recursive: true, force: true }));
+const { run, json } = folder;
 
 describe('quakesweep rotd', () => {
   it('H1 H2 with --periods, --damping, --method: JSON shape', async () => {
@@ -70,7 +45,7 @@ describe('quakesweep rotd', () => {
   it('refuses two components with different steps, and a coarse angle step (exit 2)', async () => {
     const timed = (name: string, dtS: number) =>
       writeFileSync(
-        join(folder, name),
+        join(folder.path, name),
         Array.from({ length: 50 }, (_, i) => `${i * dtS} ${Math.sin(i)}`).join('\n'),
       );
     timed('fine.txt', 0.01);
