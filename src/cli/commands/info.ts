@@ -23,7 +23,7 @@ export function registerInfo(program: Command): void {
   addRecordOptions(command);
   addProcessingOptions(command);
   addOutputOptions(command, 'table or json (default: table on the terminal, json with --out)')
-    .option('--svg <folder>', 'also draw histories.svg, husid.svg and fourier.svg into this folder')
+    .option('--svg <dir>', 'also draw histories.svg, husid.svg and fourier.svg into this folder')
     .option('--bracket-threshold <g>', 'threshold of the bracketed duration, g', '0.05')
     .option(
       '--smoothing <b>',
