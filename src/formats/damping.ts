@@ -5,7 +5,7 @@ import type { DampingComparison } from '../spectrum/damping.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { dampingLabel } from './spectrum-csv.js';
 import { recordToJson, toG } from './spectrum-json.js';
-import { summaryRows } from './spectrum-table.js';
+import { type PeriodColumn, periodTable } from './spectrum-table.js';
 
 const SOURCES = {
   ec8_eta: 'EN 1998-1:2004 §3.2.2.2, Eq. 3.6: η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent; ratio η(ξ)/η(5%)',
@@ -90,22 +90,14 @@ export function dampingTable(spectrum: Spectrum, comparison: DampingComparison, 
     );
   }
   out.push('(record: geometric mean of the ratio over the periods above 0 s)', '');
-  const header = ['T (s)'.padStart(8)];
-  for (const curve of comparison.curves) {
+  const columns = comparison.curves.flatMap((curve): PeriodColumn[] => {
     const d = dampingLabel(curve.damping);
-    header.push(`PSA g @${d}`.padStart(13), `ratio @${d}`.padStart(12));
-  }
-  out.push(header.join(' '));
-  for (const p of summaryRows(comparison.periodsS)) {
-    const row = [Number(comparison.periodsS[p].toPrecision(3)).toString().padStart(8)];
-    for (const curve of comparison.curves) {
-      row.push(
-        (curve.psaMS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(13),
-        f(curve.ratio[p]).padStart(12),
-      );
-    }
-    out.push(row.join(' '));
-  }
+    return [
+      { heading: `PSA g @${d}`, width: 13, at: (p) => curve.psaMS2[p] / STANDARD_GRAVITY_MS2 },
+      { heading: `ratio @${d}`, width: 12, at: (p) => curve.ratio[p], format: f },
+    ];
+  });
+  out.push(...periodTable(comparison.periodsS, columns));
   out.push(`(${comparison.periodsS.length} periods; --format json or csv for all of them)`);
   return `${out.join('\n')}\n`;
 }

@@ -5,7 +5,7 @@ import type { BuildingMode, FloorSpectra } from '../spectrum/floor.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { dampingLabel } from './spectrum-csv.js';
 import { spectrumToJson, toG } from './spectrum-json.js';
-import { summaryRows } from './spectrum-table.js';
+import { type PeriodColumn, periodTable } from './spectrum-table.js';
 import { wrapText } from './wrap.js';
 
 export function floorAssumptions(result: FloorSpectra, building: BuildingMode, dtS: number): string[] {
@@ -49,24 +49,15 @@ export function floorTable(
   );
   out.push(`method    ${METHOD_DESCRIPTIONS[floor.method]}`);
   out.push('');
-  const header = ['T (s)'.padStart(8)];
-  for (const curve of floor.curves) {
-    const d = dampingLabel(curve.damping);
-    header.push(`ground PSA g @${d}`.padStart(18), `floor PSA g @${d}`.padStart(17));
-  }
-  out.push(header.join(' '));
-  const periods = floor.periodsS;
-  for (const p of summaryRows(periods, true)) {
-    const row = [Number(periods[p].toPrecision(3)).toString().padStart(8)];
-    floor.curves.forEach((curve, d) => {
-      row.push(
-        (ground.curves[d].psaMS2[p] / g).toPrecision(4).padStart(18),
-        (curve.psaMS2[p] / g).toPrecision(4).padStart(17),
-      );
-    });
-    out.push(row.join(' '));
-  }
-  out.push(`(${periods.length} periods; --format json for all of them)`);
+  const columns = floor.curves.flatMap((curve, d): PeriodColumn[] => {
+    const label = dampingLabel(curve.damping);
+    return [
+      { heading: `ground PSA g @${label}`, width: 18, at: (p) => ground.curves[d].psaMS2[p] / g },
+      { heading: `floor PSA g @${label}`, width: 17, at: (p) => curve.psaMS2[p] / g },
+    ];
+  });
+  out.push(...periodTable(floor.periodsS, columns, true));
+  out.push(`(${floor.periodsS.length} periods; --format json for all of them)`);
   out.push('');
   out.push('method and assumptions');
   for (const line of assumptions) out.push(...wrapText(line, 92, '  - ', '    '));

@@ -4,7 +4,7 @@ import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import { dampingLabel } from './spectrum-csv.js';
 import { recordToJson, toG } from './spectrum-json.js';
-import { summaryRows } from './spectrum-table.js';
+import { type PeriodColumn, periodTable } from './spectrum-table.js';
 
 function notes(spectra: RotDSpectra): string[] {
   const out = [
@@ -73,27 +73,15 @@ export function rotdTable(spectra: RotDSpectra): string {
   out.push(`method  ${METHOD_DESCRIPTIONS[spectra.method]}`);
   for (const note of notes(spectra)) out.push(`note    ${note}`);
   out.push('');
-  const header = ['T (s)'.padStart(8)];
-  for (const curve of spectra.curves) {
+  const columns = spectra.curves.flatMap((curve): PeriodColumn[] => {
     const d = dampingLabel(curve.damping);
-    header.push(
-      `RotD50 g @${d}`.padStart(15),
-      `RotD100 g @${d}`.padStart(16),
-      `geomean g @${d}`.padStart(16),
-    );
-  }
-  out.push(header.join(' '));
-  for (const p of summaryRows(spectra.periodsS)) {
-    const row = [Number(spectra.periodsS[p].toPrecision(3)).toString().padStart(8)];
-    for (const curve of spectra.curves) {
-      row.push(
-        (curve.rotd50MS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(15),
-        (curve.rotd100MS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(16),
-        (curve.geomeanMS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(16),
-      );
-    }
-    out.push(row.join(' '));
-  }
+    return [
+      { heading: `RotD50 g @${d}`, width: 15, at: (p) => curve.rotd50MS2[p] / STANDARD_GRAVITY_MS2 },
+      { heading: `RotD100 g @${d}`, width: 16, at: (p) => curve.rotd100MS2[p] / STANDARD_GRAVITY_MS2 },
+      { heading: `geomean g @${d}`, width: 16, at: (p) => curve.geomeanMS2[p] / STANDARD_GRAVITY_MS2 },
+    ];
+  });
+  out.push(...periodTable(spectra.periodsS, columns));
   out.push(`(${spectra.periodsS.length} periods; --format json or csv for all of them)`);
   return `${out.join('\n')}\n`;
 }

@@ -19,22 +19,14 @@ export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit, target?
   out.push(`method  ${METHOD_DESCRIPTIONS[spectrum.method]}`);
   out.push('');
   const perLength = 1 / LENGTH_UNITS[lengthUnit];
-  const header = ['T (s)'.padStart(8)];
-  for (const curve of spectrum.curves) {
+  const columns = spectrum.curves.flatMap((curve): PeriodColumn[] => {
     const d = dampingLabel(curve.damping);
-    header.push(`SD ${lengthUnit} @${d}`.padStart(14), `PSA g @${d}`.padStart(12));
-  }
-  out.push(header.join(' '));
-  for (const p of summaryRows(spectrum.periodsS)) {
-    const row = [formatPeriod(spectrum.periodsS[p]).padStart(8)];
-    for (const curve of spectrum.curves) {
-      row.push(
-        (curve.sdM[p] * perLength).toPrecision(4).padStart(14),
-        (curve.psaMS2[p] / STANDARD_GRAVITY_MS2).toPrecision(4).padStart(12),
-      );
-    }
-    out.push(row.join(' '));
-  }
+    return [
+      { heading: `SD ${lengthUnit} @${d}`, width: 14, at: (p) => curve.sdM[p] * perLength },
+      { heading: `PSA g @${d}`, width: 12, at: (p) => curve.psaMS2[p] / STANDARD_GRAVITY_MS2 },
+    ];
+  });
+  out.push(...periodTable(spectrum.periodsS, columns));
   out.push('');
   for (const curve of spectrum.curves) {
     let peak = 0;
@@ -46,6 +38,33 @@ export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit, target?
   out.push(`(${spectrum.periodsS.length} periods; --format json or csv for all of them)`);
   if (target !== undefined) out.push('', ...targetTableLines(target));
   return `${out.join('\n')}\n`;
+}
+
+/**
+ * A column of a period table: its heading, its width and its value at the period of index p,
+ * written by `format` (4 significant digits unless given).
+ */
+export interface PeriodColumn {
+  heading: string;
+  width: number;
+  at: (p: number) => number;
+  format?: (value: number) => string;
+}
+
+/**
+ * The lines of a terminal table by period: a heading row, then the summary rows (summaryRows).
+ */
+export function periodTable(periodsS: Float64Array, columns: PeriodColumn[], toEnds = false): string[] {
+  const lines = [['T (s)'.padStart(8), ...columns.map((c) => c.heading.padStart(c.width))].join(' ')];
+  for (const p of summaryRows(periodsS, toEnds)) {
+    const row = [formatPeriod(periodsS[p]).padStart(8)];
+    for (const c of columns) {
+      const value = c.at(p);
+      row.push((c.format === undefined ? value.toPrecision(4) : c.format(value)).padStart(c.width));
+    }
+    lines.push(row.join(' '));
+  }
+  return lines;
 }
 
 /**
