@@ -1,11 +1,11 @@
 // The record reader's fast path for numeric rows (src/record/rows.ts): it reads, over many lines of
 // ASCII text at once, exactly the rows the TypeScript reader (src/record/reader.ts) would take
-// without a word, with the same short-decimal reading as parseNumber (src/record/number.ts), and
-// stops before any other line. TypeScript runs unoptimized for the first tens of thousands of rows
+// without a word, with the values parseNumber (src/record/number.ts) gives, and stops before any
+// other line. TypeScript runs unoptimized for the first tens of thousands of rows
 // in a fresh process; this runs at full speed from the first line. Written by hand; compiled by
 // scripts/build-wasm.mjs (no SIMD).
 
-/** 10⁰ to 10²², every one exact in binary64 (5²² < 2⁵³), as POWERS_OF_TEN in number.ts. */
+/** 10⁰ to 10²², every one exact in binary64 (5²² < 2⁵³). */
 const POWERS_OF_TEN = memory.data<f64>([
   1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19,
   1e20, 1e21, 1e22,
@@ -31,11 +31,12 @@ function isFieldEnd(c: u32): bool {
 let decimalEnd: usize = 0;
 
 /**
- * shortDecimal (number.ts) of the number that starts at `from` and goes no further than `to`: a
- * sign, digits with at most one point, an `e` or `E` exponent of at most three digits, at most 15
- * significant digits and a scale within 10^±22, read with one multiplication or division of exact
- * numbers; NaN for anything else. It stops at the first byte that cannot continue the number
- * (decimalEnd), which the caller checks ends the field.
+ * The number that starts at `from` and goes no further than `to`: a sign, digits with at most one
+ * point, an `e` or `E` exponent of at most three digits, at most 15 significant digits and a
+ * scale within 10^±22, read with one multiplication or division of exact numbers, which rounds
+ * once, to the nearest double, as Number() does (closed form); NaN for anything else. It stops
+ * at the first byte that cannot continue the number (decimalEnd), which the caller checks ends
+ * the field.
  */
 function decimal(from: usize, to: usize): f64 {
   if (from >= to) return NaN;
@@ -44,8 +45,8 @@ function decimal(from: usize, to: usize): f64 {
   const negative = c === 45;
   if (negative || c === 43) i++;
   // The digits as an integer: with at most 15 significant ones it is below 2⁵³, so it converts to
-  // f64 exactly, the same number number.ts accumulates in f64 (longer runs may wrap; they are
-  // refused below). A digit is significant from the first that is not 0, across the point.
+  // f64 exactly (longer runs may wrap; they are refused below). A digit is significant from the
+  // first that is not 0, across the point.
   let mantissa: u64 = 0;
   let significant = 0;
   const integerStart = i;

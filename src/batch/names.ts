@@ -1,14 +1,8 @@
+import { recordName } from '../record/record.js';
 import { compareText } from './glob.js';
 
 /** File names the suite itself writes in its folder, which a record folder must not take. */
 const RESERVED = /^(suite\.json|shard-.*\.json)$/i;
-
-/** The record's default name: the file's base name without its last extension (as the reader names it). */
-export function recordBaseName(file: string): string {
-  const base = file.split(/[\\/]/).pop() ?? file;
-  const dot = base.lastIndexOf('.');
-  return dot > 0 ? base.slice(0, dot) : base;
-}
 
 /**
  * A folder name that stays inside the output folder whatever the record is called: letters,
@@ -36,7 +30,7 @@ export function assignNames(files: readonly string[]): Map<string, string> {
   const names = new Map<string, string>();
   const taken = new Set<string>();
   for (const file of [...files].sort(compareText)) {
-    const base = sanitiseName(recordBaseName(file));
+    const base = sanitiseName(recordName(file));
     let name = base;
     for (let k = 2; taken.has(name.toLowerCase()); k++) name = `${base}-${k}`;
     taken.add(name.toLowerCase());

@@ -1,6 +1,6 @@
 import { lineFields, longLineError } from './fields.js';
 import type { RecordReader } from './reader.js';
-import { MAX_LINE_CHARACTERS } from './separator.js';
+import { MAX_LINE_CHARACTERS, sniffSeparator } from './separator.js';
 
 /** Offers of a text to the row scanner that may read nothing before it is offered no more of it. */
 const MAX_MISSES = 16;
@@ -26,9 +26,12 @@ export class LineSplitter {
   private afterCarriageReturn = false;
   private started = false;
 
-  constructor(reader: RecordReader) {
+  /** `head`: the text's first piece, which chooses the reader's separator (`partial`: it is cut short). */
+  constructor(reader: RecordReader, head: string, partial: boolean) {
     this.reader = reader;
     this.skip = reader.options.skip ?? 0;
+    reader.separator = sniffSeparator(head, this.skip, partial);
+    this.push(head);
   }
 
   push(text: string): void {
@@ -47,14 +50,12 @@ export class LineSplitter {
     let lf = text.indexOf('\n', from);
     let cr = text.indexOf('\r', from);
     // The scanner is offered the text at its first whole line, and again after each line it did
-    // not read; only the first offer copies text into its memory (the later ones read what is
-    // there), and after MAX_MISSES offers in a row that read nothing, no more of this text is offered.
-    let offers = 0;
+    // not read; after MAX_MISSES offers in a row that read nothing, no more of this text is offered.
     let misses = 0;
     let scanned = false;
     while (lf !== -1 || cr !== -1) {
       if (!scanned && misses < MAX_MISSES && this.pending === 0 && this.reader.readsRows) {
-        const { next, lines } = this.reader.rowsFrom(text, from, this.line, offers++ === 0);
+        const { next, lines } = this.reader.rowsFrom(text, from);
         if (lines > 0) {
           misses = 0;
           scanned = true;
@@ -87,7 +88,7 @@ export class LineSplitter {
       if (this.pending === 0) this.take(text.slice(start, end));
       else this.take(this.unfinished(text.slice(start, end)));
     }
-    if (offers > 0) this.reader.textDone();
+    this.reader.textDone();
     if (from < length) {
       this.pieces.push(from === 0 ? text : text.slice(from));
       this.pending += length - from;

@@ -4,7 +4,7 @@ import { LineSplitter } from './lines.js';
 import { RecordReader } from './reader.js';
 import type { GroundRecord } from './record.js';
 import { RowScanner } from './rows.js';
-import { MAX_LINE_CHARACTERS, sniffSeparator } from './separator.js';
+import { MAX_LINE_CHARACTERS } from './separator.js';
 
 /**
  * How the values are laid out in the file. `single`: one acceleration value a line. `table`: time
@@ -44,16 +44,15 @@ export function readRecordTextUsing(
   scanner: RowScanner | undefined,
 ): GroundRecord {
   const reader = new RecordReader(options, scanner);
-  reader.separator = sniffSeparator(text, options.skip ?? 0);
-  const lines = new LineSplitter(reader);
-  lines.push(wellFormed(text));
-  lines.end();
-  return reader.finish(options.name ?? baseName(options.source));
+  new LineSplitter(reader, wellFormed(text), false).end();
+  return reader.finish();
 }
 
 /** How much of a stream is looked at to choose the separator: this much, and this many lines after --skip. */
 const SNIFF_BYTES = 64 * 1024;
 const SNIFF_LINES = 100;
+/** A line break of a piece of the head: `\r\n`, `\n` or `\r` (one at a piece's end counts). */
+const LINE_BREAK = /\r\n|\n|\r/;
 
 /**
  * Read a record from a stream of text or bytes (a file, standard input): UTF-8, or UTF-16LE when
@@ -87,14 +86,12 @@ export async function readRecordStream(
       }
       const text = decoder.decode(next.value);
       headText += text;
-      headLines += lineBreaks(text, skip + SNIFF_LINES - headLines);
+      headLines += text.split(LINE_BREAK, skip + SNIFF_LINES - headLines + 1).length - 1;
       const last = Math.max(text.lastIndexOf('\n'), text.lastIndexOf('\r'));
       unfinished = last === -1 ? unfinished + text.length : text.length - 1 - last;
     }
     if (ended) headText += decoder.flush();
-    reader.separator = sniffSeparator(headText, skip, !ended);
-    const lines = new LineSplitter(reader);
-    lines.push(headText);
+    const lines = new LineSplitter(reader, headText, !ended);
     while (!ended) {
       const next = await chunks.next();
       if (next.done) ended = true;
@@ -105,19 +102,7 @@ export async function readRecordStream(
   } finally {
     if (!ended) await chunks.return?.(); // close the file when reading stops early
   }
-  return reader.finish(options.name ?? baseName(options.source));
-}
-
-/**
- * Line breaks in a piece of text, counted up to `atMost` (the head needs only so many): each `\n`,
- * and each `\r` not followed by `\n` in the piece.
- */
-function lineBreaks(text: string, atMost: number): number {
-  let count = 0;
-  for (let at = text.indexOf('\n'); at !== -1 && count < atMost; at = text.indexOf('\n', at + 1)) count++;
-  for (let at = text.indexOf('\r'); at !== -1 && count < atMost; at = text.indexOf('\r', at + 1))
-    if (text.charCodeAt(at + 1) !== 10) count++;
-  return count;
+  return reader.finish();
 }
 
 /**
@@ -194,12 +179,4 @@ export function unitWarnings(record: GroundRecord): string[] {
   return [
     `PGA ${pgaG.toPrecision(3)} g read in ${record.unitsRead} is ${bound}: are the units right?${hint}`,
   ];
-}
-
-/** A record's name from its source: the base name without extension, `stdin` for `-`. */
-function baseName(source: string): string {
-  if (source === '-') return 'stdin';
-  const base = source.split(/[\\/]/).pop() ?? source;
-  const dot = base.lastIndexOf('.');
-  return dot > 0 ? base.slice(0, dot) : base;
 }

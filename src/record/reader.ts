@@ -3,7 +3,7 @@ import { ACCELERATION_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { quote } from './fields.js';
 import { DECIMAL_COMMA, NUMBER, parseNumber, printedResolution } from './number.js';
 import type { ReadOptions, RecordLayout } from './read.js';
-import { createRecord, type GroundRecord } from './record.js';
+import { createRecord, type GroundRecord, recordName } from './record.js';
 import type { RowScanner } from './rows.js';
 import type { Separator } from './separator.js';
 
@@ -34,7 +34,7 @@ export class RecordReader {
   private values = new Float64Array(16384);
   private count = 0;
   private headerLine = 0;
-  private firstDataLine = 0;
+  /** The line of the last row of values that row() read. */
   private lastDataLine = 0;
   private columns = 0;
   private valueColumn = 0;
@@ -70,39 +70,30 @@ export class RecordReader {
    * rows row() would take without a word (a table of short decimals separated by commas or by
    * spaces and tabs, in the file's number of columns, its time advancing by the mean step to
    * 1e-6, values within the limit) and stops before any other line, which row() then reads.
-   * `copy`: whether it may copy text into its memory first (else it reads only text already there).
    */
-  rowsFrom(text: string, from: number, line: number, copy: boolean): { next: number; lines: number } {
+  rowsFrom(text: string, from: number): { next: number; lines: number } {
+    const scanner = this.scanner as RowScanner;
     let next = from;
     let lines = 0;
-    let fresh = copy;
-    while (this.readsRows && this.scanner !== undefined) {
-      const run = this.scanner.scan(
-        text,
-        next,
-        {
-          columns: this.columns,
-          valueColumn: this.valueColumn,
-          whitespace: this.separator === 'whitespace',
-          unitMS2: this.unitMS2,
-          limitMS2: MAX_ABS_ACCELERATION_MS2,
-          count: this.count,
-          timeFirstS: this.timeFirstS,
-          timePreviousS: this.timePreviousS,
-        },
-        fresh,
-      );
-      if (run === undefined) break;
-      while (this.count + run.values.length > this.values.length) this.grow();
+    while (next < text.length) {
+      const run = scanner.scan(text, next, {
+        columns: this.columns,
+        valueColumn: this.valueColumn,
+        whitespace: this.separator === 'whitespace',
+        unitMS2: this.unitMS2,
+        limitMS2: MAX_ABS_ACCELERATION_MS2,
+        count: this.count,
+        timeFirstS: this.timeFirstS,
+        timePreviousS: this.timePreviousS,
+      });
+      this.reserve(run.values.length);
       this.values.set(run.values, this.count);
       this.count += run.values.length;
       this.timePreviousS = run.timePreviousS;
-      if (run.lastRow >= 0) this.lastDataLine = line + lines + run.lastRow;
       lines += run.lines;
       next = run.next;
-      // It stopped before a line it does not read, or at the end of its memory's text: copy on.
-      if (run.refused || (run.lines === 0 && fresh)) break;
-      fresh = true;
+      // Past the end of the text laid out in its memory, it lays out more and reads on.
+      if (run.refused || run.lines === 0) break;
     }
     return { next, lines };
   }
@@ -151,9 +142,8 @@ export class RecordReader {
   private firstRow(columns: number, line: number): void {
     const o = this.options;
     this.columns = columns;
-    this.firstDataLine = line;
     // Semicolon files may write decimal commas, which number() tracks and the scanner does not.
-    this.readsRows = this.layout !== 'wrapped' && this.separator !== ';';
+    this.readsRows = this.scanner !== undefined && this.layout !== 'wrapped' && this.separator !== ';';
     if (this.layout === 'single' && columns !== 1)
       throw this.error(`the single layout has one value a line, found ${columns} columns`, line);
     if (this.layout === 'table' && columns < 2)
@@ -248,12 +238,14 @@ export class RecordReader {
         line,
       );
     }
-    if (this.count === this.values.length) this.grow();
+    this.reserve(1);
     this.values[this.count++] = value * this.unitMS2;
   }
 
-  private grow(): void {
-    const bigger = new Float64Array(this.values.length * 2);
+  /** Room for `more` samples: the array doubled, or more if that is not enough. */
+  private reserve(more: number): void {
+    if (this.count + more <= this.values.length) return;
+    const bigger = new Float64Array(Math.max(2 * this.values.length, this.count + more));
     bigger.set(this.values);
     this.values = bigger;
   }
@@ -262,8 +254,8 @@ export class RecordReader {
     return inputError(message, { file: this.options.source, line });
   }
 
-  /** The record read, named `name`. */
-  finish(name: string): GroundRecord {
+  /** The record read, named as the options say or after its source (`stdin` for `-`). */
+  finish(): GroundRecord {
     const o = this.options;
     if (this.count === 0) {
       if (this.headerLine > 0) throw this.error('a header row but no values after it', this.headerLine);
@@ -271,8 +263,7 @@ export class RecordReader {
       const message = `no values found${skipped}: the file is empty or holds only comments and blank lines`;
       throw inputError(message, { file: o.source });
     }
-    if (this.count < 2)
-      throw this.error('only 1 sample; a record needs at least 2', this.lastDataLine || this.firstDataLine);
+    if (this.count < 2) throw this.error('only 1 sample; a record needs at least 2', this.lastDataLine);
     let dtS = o.dtS;
     if (this.columns > 1) {
       const columnDtS = (this.timePreviousS - this.timeFirstS) / (this.count - 1);
@@ -284,7 +275,7 @@ export class RecordReader {
     }
     // The samples are in m/s² already: every row stored its value times the unit's factor.
     return createRecord({
-      name,
+      name: o.name ?? (o.source === '-' ? 'stdin' : recordName(o.source)),
       source: o.source,
       dtS: dtS as number,
       accelMS2: this.values.slice(0, this.count),

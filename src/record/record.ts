@@ -51,12 +51,10 @@ export function createRecord(fields: RecordFields): GroundRecord {
   if (accelMS2.length < 2) {
     throw inputError(`a record needs at least 2 samples, got ${accelMS2.length}`, { file: source });
   }
-  let pgaMS2 = 0;
-  for (let i = 0; i < accelMS2.length; i++) {
-    const a = accelMS2[i];
-    if (!Number.isFinite(a))
-      throw inputError(`sample ${i + 1} is not a finite number (${a})`, { file: source });
-    if (Math.abs(a) > pgaMS2) pgaMS2 = Math.abs(a);
+  const pgaMS2 = peakGroundAcceleration(fields);
+  if (!Number.isFinite(pgaMS2)) {
+    const i = accelMS2.findIndex((a) => !Number.isFinite(a));
+    throw inputError(`sample ${i + 1} is not a finite number (${accelMS2[i]})`, { file: source });
   }
   return {
     name,
@@ -79,13 +77,20 @@ export function withProcessing(
   return createRecord({ ...record, accelMS2, dtS, processing: [...record.processing, step] });
 }
 
-/** Peak absolute ground acceleration, m/s² (a GroundRecord carries it as `pgaMS2`). */
+/**
+ * Peak absolute ground acceleration, m/s² (a GroundRecord carries it as `pgaMS2`); NaN or
+ * Infinity when a sample is not finite.
+ */
 export function peakGroundAcceleration(record: Pick<GroundRecord, 'accelMS2'>): number {
-  let peak = 0;
   const a = record.accelMS2;
-  for (let i = 0; i < a.length; i++) {
-    const v = Math.abs(a[i]);
-    if (v > peak) peak = v;
-  }
+  let peak = 0;
+  for (let i = 0; i < a.length; i++) peak = Math.max(peak, Math.abs(a[i]));
   return peak;
+}
+
+/** A record's default name: the base name of the file at `path` without its last extension. */
+export function recordName(path: string): string {
+  const base = path.split(/[\\/]/).pop() ?? path;
+  const dot = base.lastIndexOf('.');
+  return dot > 0 ? base.slice(0, dot) : base;
 }

@@ -5,23 +5,6 @@ const TEXT_BYTES = 1 << 18;
 /** Rows it may read at a time: a row takes at least two bytes (a digit and a line end). */
 const CAPACITY = TEXT_BYTES / 2;
 
-interface RowsExports {
-  memory: WebAssembly.Memory;
-  heapBase(): number;
-  scanRows(
-    text: number,
-    length: number,
-    columns: number,
-    valueColumn: number,
-    whitespace: number,
-    unit: number,
-    limit: number,
-    values: number,
-    capacity: number,
-    state: number,
-  ): void;
-}
-
 /** The reader's layout and running time check, as RecordReader.rowsFrom hands them over. */
 export interface RowLayout {
   columns: number;
@@ -36,18 +19,6 @@ export interface RowLayout {
   timePreviousS: number;
 }
 
-/** What one scan read: up to `next` in the text, `lines` lines, their values in `values`. */
-export interface RowScan {
-  next: number;
-  lines: number;
-  /** Index among those lines of the last that held a row, −1 if none. */
-  lastRow: number;
-  values: Float64Array;
-  timePreviousS: number;
-  /** Whether it stopped before a line it does not read (rather than at the end of the text laid out). */
-  refused: boolean;
-}
-
 /**
  * The record reader's fast path for runs of numeric rows (assembly/rows.ts): a fresh process
  * reads them at full speed from the first line, where TypeScript runs unoptimized for the first
@@ -56,7 +27,8 @@ export interface RowScan {
  */
 export class RowScanner {
   private static instance: RowScanner | null | undefined;
-  private readonly exports: RowsExports;
+  private readonly memory: WebAssembly.Memory;
+  private readonly scanRows: (...args: number[]) => void;
   private readonly text: number;
   private readonly values: number;
   private readonly state: number;
@@ -78,32 +50,37 @@ export class RowScanner {
 
   private constructor() {
     const module = new WebAssembly.Module(Buffer.from(ROWS_WASM_BASE64, 'base64'));
-    const instance = new WebAssembly.Instance(module, {});
-    this.exports = instance.exports as unknown as RowsExports;
-    this.text = this.exports.heapBase();
+    const exports = new WebAssembly.Instance(module, {}).exports as {
+      memory: WebAssembly.Memory;
+      heapBase(): number;
+      scanRows(...args: number[]): void;
+    };
+    this.memory = exports.memory;
+    this.scanRows = exports.scanRows;
+    this.text = exports.heapBase();
     this.values = this.text + TEXT_BYTES;
     this.state = this.values + CAPACITY * 8;
-    const memory = this.exports.memory;
-    const pages = Math.ceil((this.state + 64) / 65536) - memory.buffer.byteLength / 65536;
-    if (pages > 0) memory.grow(pages);
+    const pages = Math.ceil((this.state + 64) / 65536) - this.memory.buffer.byteLength / 65536;
+    if (pages > 0) this.memory.grow(pages);
   }
 
   /**
    * Read the rows of `source` from character `from` on, while its lines are rows the scanner
-   * reads. With `copy`, up to TEXT_BYTES characters from `from` are laid out in memory first;
-   * without, only text already laid out is read, and undefined is returned when `from` is outside it.
+   * reads: up to `next`, `lines` lines, their values in `values` (a view of its memory, valid
+   * until the next scan). Unless `from` lies in the text laid out already, up to TEXT_BYTES
+   * characters from `from` are laid out first, so a text is copied once however often it is
+   * offered. `refused`: it stopped before a line it does not read, rather than at the end of
+   * what is laid out (which is then laid out anew from `next` at the next scan).
    */
-  scan(source: string, from: number, layout: RowLayout, copy: boolean): RowScan | undefined {
-    if (copy) this.layOut(source, from);
-    else if (source !== this.laid || from < this.laidFrom || from >= this.laidFrom + this.laidLength)
-      return undefined;
+  scan(source: string, from: number, layout: RowLayout) {
+    if (source !== this.laid || from < this.laidFrom || from >= this.laidFrom + this.laidLength)
+      this.layOut(source, from);
     const offset = from - this.laidFrom;
-    const memory = this.exports.memory.buffer;
-    const state = new Float64Array(memory, this.state, 8);
+    const state = new Float64Array(this.memory.buffer, this.state, 8);
     state[0] = layout.count;
     state[1] = layout.timeFirstS;
     state[2] = layout.timePreviousS;
-    this.exports.scanRows(
+    this.scanRows(
       this.text + offset,
       this.laidLength - offset,
       layout.columns,
@@ -115,13 +92,15 @@ export class RowScanner {
       CAPACITY,
       this.state,
     );
+    const next = from + state[3];
+    const refused = state[6] === 1;
+    if (!refused) this.laidLength = next - this.laidFrom;
     return {
-      next: from + state[3],
+      next,
       lines: state[4],
-      lastRow: state[5],
-      values: new Float64Array(memory, this.values, state[0] - layout.count),
+      values: new Float64Array(this.memory.buffer, this.values, state[0] - layout.count),
       timePreviousS: state[2],
-      refused: state[6] === 1,
+      refused,
     };
   }
 
@@ -136,7 +115,7 @@ export class RowScanner {
    */
   private layOut(source: string, from: number): void {
     const piece = source.slice(from, from + TEXT_BYTES);
-    const bytes = Buffer.from(this.exports.memory.buffer, this.text, TEXT_BYTES);
+    const bytes = Buffer.from(this.memory.buffer, this.text, TEXT_BYTES);
     bytes.write(piece, 0, 'latin1');
     for (const match of piece.matchAll(/[\u0080-\uffff]/g)) bytes[match.index] = 0x80;
     this.laid = source;

@@ -2,7 +2,8 @@ import { join, resolve, sep } from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { patternRegExp } from '../../src/batch/glob.js';
-import { assignNames, recordBaseName, sanitiseName } from '../../src/batch/names.js';
+import { assignNames, sanitiseName } from '../../src/batch/names.js';
+import { recordName } from '../../src/record/record.js';
 
 describe('record folder names (common practice: a name from outside never chooses a path)', () => {
   it('turns separators, .. and a leading dot into harmless characters', () => {
@@ -39,8 +40,8 @@ describe('record folder names (common practice: a name from outside never choose
   });
 
   it('names a record after its file as the reader does', () => {
-    expect(recordBaseName('records/marrowby-h1.csv')).toBe('marrowby-h1');
-    expect(recordBaseName('plain')).toBe('plain');
+    expect(recordName('records/marrowby-h1.csv')).toBe('marrowby-h1');
+    expect(recordName('plain')).toBe('plain');
   });
 });
 

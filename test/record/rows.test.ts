@@ -25,8 +25,7 @@ const layout = (overrides: Partial<RowLayout> = {}): RowLayout => ({
 function scan(text: string, overrides: Partial<RowLayout> = {}) {
   const scanner = RowScanner.get();
   if (scanner === undefined) throw new Error('no WebAssembly on this engine');
-  const result = scanner.scan(text, 0, layout(overrides), true);
-  if (result === undefined) throw new Error('a scan that copies the text always reads');
+  const result = scanner.scan(text, 0, layout(overrides));
   return { ...result, values: Array.from(result.values) };
 }
 
@@ -36,7 +35,6 @@ describe('the WebAssembly row scanner', () => {
     expect(scan(text)).toMatchObject({
       next: text.length,
       lines: 5,
-      lastRow: 4,
       values: [1.5, 2.5, -0.03, 0.25],
       timePreviousS: 0.04,
       refused: false,
@@ -128,7 +126,6 @@ describe('the WebAssembly row scanner', () => {
       text,
       after,
       layout({ timePreviousS: 0, timeFirstS: 0, unitMS2: 9.80665 }),
-      true,
     );
     expect(run?.values.length).toBe(4999);
   });
@@ -141,21 +138,29 @@ describe('the text the scanner holds', () => {
     // Line 2 has two characters outside ASCII (é, and 😀 as two UTF-16 units); after it, the
     // rows are found at their character offsets in the text without copying it again.
     const text = '0.01,1\n# é 😀\n0.02,2\n0.03,3\n';
-    const first = scanner.scan(text, 0, layout(), true);
+    const first = scanner.scan(text, 0, layout());
     expect(first).toMatchObject({ lines: 1, refused: true, next: 7 });
     const after = text.indexOf('0.02');
-    const second = scanner.scan(text, after, layout({ count: 2, timeFirstS: 0, timePreviousS: 0.01 }), false);
-    expect(second && Array.from(second.values)).toEqual([2, 3]);
+    const second = scanner.scan(text, after, layout({ count: 2, timeFirstS: 0, timePreviousS: 0.01 }));
+    expect(Array.from(second.values)).toEqual([2, 3]);
     expect(second).toMatchObject({ next: text.length, lines: 2, refused: false });
   });
 
-  it('reads nothing without copying when the text or the place is not the one it holds', () => {
+  it('reads another string, and lays out anew from the line cut at the end of what it holds', () => {
     const scanner = RowScanner.get();
     if (scanner === undefined) throw new Error('no WebAssembly on this engine');
-    const text = '0.01,1\n0.02,2\n';
-    scanner.scan(text, 0, layout(), true);
-    expect(scanner.scan(`${text} `, 0, layout(), false)).toBeUndefined(); // another string
-    expect(scanner.scan(text, text.length, layout(), false)).toBeUndefined(); // past its end
-    expect(scanner.scan(text, 7, layout({ timePreviousS: 0.01 }), false)?.values[0]).toBe(2);
+    scanner.scan('0.01,1\n0.02,2\n', 0, layout());
+    expect(Array.from(scanner.scan('0.01,5\n', 0, layout()).values)).toEqual([5]);
+    // 30,000 lines of 11 characters (the line end included): 330,000 characters, more than the
+    // 2¹⁸ = 262,144 it lays out at a time, so the first scan stops, unrefused, before the line cut
+    // there: ⌊262,144 / 11⌋ = 23,831 lines read, up to 23,831 × 11 = 262,141.
+    const rows = Array.from({ length: 30_000 }, (_, i) => `${String(i + 1).padStart(6, '0')},${i % 10}.5`);
+    const text = `${rows.join('\n')}\n`;
+    const first = scanner.scan(text, 0, layout({ timePreviousS: 0 }));
+    expect(first).toMatchObject({ lines: 23_831, next: 262_141, refused: false });
+    const count = 1 + first.lines;
+    const second = scanner.scan(text, first.next, layout({ count, timePreviousS: first.timePreviousS }));
+    expect(second).toMatchObject({ lines: 30_000 - 23_831, next: text.length, refused: false });
+    expect(second.values[0]).toBe(1.5); // line 23,831 from 0: 23,831 mod 10 = 1
   });
 });
