@@ -1,9 +1,9 @@
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 
-/** Whether a path names a pattern: `*` or `?` in its last segment. */
+/** Whether a path names a pattern: `*` or `?` in its last segment (no `/` or `\` after it). */
 export function isPattern(path: string): boolean {
-  return /[*?]/.test(path.split(/[\\/]/).pop() ?? '');
+  return /[*?][^\\/]*$/.test(path);
 }
 
 /**
@@ -19,19 +19,14 @@ export function patternRegExp(pattern: string): RegExp {
   return new RegExp(`^${pattern.startsWith('.') ? '' : '(?!\\.)'}${body}$`);
 }
 
-export interface Expansion {
-  /** Every file named or matched, each once, sorted (code-unit order, so the same everywhere). */
-  files: string[];
-  /** Patterns that matched no file. */
-  unmatched: string[];
-}
-
 /**
  * Expand the arguments of `batch`: a plain path is taken as is (a missing file is reported by the
  * run, not here); a pattern with `*` or `?` in its last segment is matched against the files of
- * its folder (no recursion, no `**`, no brackets; the folder part is literal).
+ * its folder (no recursion, no `**`, no brackets; the folder part is literal). `files`: every file
+ * named or matched, each once, sorted (code-unit order, so the same everywhere); `unmatched`: the
+ * patterns that matched no file.
  */
-export function expandPatterns(args: readonly string[]): Expansion {
+export function expandPatterns(args: readonly string[]): { files: string[]; unmatched: string[] } {
   const found = new Set<string>();
   const unmatched: string[] = [];
   for (const arg of args) {

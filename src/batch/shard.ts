@@ -28,43 +28,30 @@ export function parseShard(
   env: Readonly<Record<string, string | undefined>>,
   shardCount?: string,
 ): Shard {
+  const variable = (name: string) => whole(env[name], name);
   let shard: Shard;
-  if (text === 'auto') {
-    if (env['SLURM_ARRAY_TASK_ID'] !== undefined) {
-      const id = whole(env['SLURM_ARRAY_TASK_ID'], 'SLURM_ARRAY_TASK_ID');
-      const min =
-        env['SLURM_ARRAY_TASK_MIN'] === undefined
-          ? 0
-          : whole(env['SLURM_ARRAY_TASK_MIN'], 'SLURM_ARRAY_TASK_MIN');
-      const count =
-        shardCount !== undefined
-          ? whole(shardCount, '--shard-count')
-          : env['SLURM_ARRAY_TASK_COUNT'] !== undefined
-            ? whole(env['SLURM_ARRAY_TASK_COUNT'], 'SLURM_ARRAY_TASK_COUNT')
-            : env['SLURM_ARRAY_TASK_MAX'] !== undefined
-              ? whole(env['SLURM_ARRAY_TASK_MAX'], 'SLURM_ARRAY_TASK_MAX') - min + 1
-              : Number.NaN;
-      if (Number.isNaN(count))
-        throw usageError('--shard auto: Slurm gave no SLURM_ARRAY_TASK_COUNT or _MAX; add --shard-count N');
-      shard = { index: id - min + 1, count };
-    } else if (env['JOB_COMPLETION_INDEX'] !== undefined) {
-      const count = shardCount ?? env[SHARD_COUNT_VARIABLE];
-      if (count === undefined) {
-        throw usageError(
-          `--shard auto with JOB_COMPLETION_INDEX needs --shard-count N or ${SHARD_COUNT_VARIABLE}`,
-        );
-      }
-      shard = {
-        index: whole(env['JOB_COMPLETION_INDEX'], 'JOB_COMPLETION_INDEX') + 1,
-        count: whole(count, 'the shard count'),
-      };
-    } else {
-      throw usageError('--shard auto: neither SLURM_ARRAY_TASK_ID nor JOB_COMPLETION_INDEX is set');
-    }
-  } else {
+  if (text !== 'auto') {
     const match = /^\s*(\d+)\s*\/\s*(\d+)\s*$/.exec(text);
     if (match === null) throw usageError(`--shard '${text}': write i/N (1-based, e.g. 2/8) or auto`);
     shard = { index: Number(match[1]), count: Number(match[2]) };
+  } else if (env['SLURM_ARRAY_TASK_ID'] !== undefined) {
+    const id = variable('SLURM_ARRAY_TASK_ID');
+    const min = env['SLURM_ARRAY_TASK_MIN'] === undefined ? 0 : variable('SLURM_ARRAY_TASK_MIN');
+    let count: number;
+    if (shardCount !== undefined) count = whole(shardCount, '--shard-count');
+    else if (env['SLURM_ARRAY_TASK_COUNT'] !== undefined) count = variable('SLURM_ARRAY_TASK_COUNT');
+    else if (env['SLURM_ARRAY_TASK_MAX'] !== undefined) count = variable('SLURM_ARRAY_TASK_MAX') - min + 1;
+    else throw usageError('--shard auto: Slurm gave no SLURM_ARRAY_TASK_COUNT or _MAX; add --shard-count N');
+    shard = { index: id - min + 1, count };
+  } else if (env['JOB_COMPLETION_INDEX'] !== undefined) {
+    const count = shardCount ?? env[SHARD_COUNT_VARIABLE];
+    if (count === undefined)
+      throw usageError(
+        `--shard auto with JOB_COMPLETION_INDEX needs --shard-count N or ${SHARD_COUNT_VARIABLE}`,
+      );
+    shard = { index: variable('JOB_COMPLETION_INDEX') + 1, count: whole(count, 'the shard count') };
+  } else {
+    throw usageError('--shard auto: neither SLURM_ARRAY_TASK_ID nor JOB_COMPLETION_INDEX is set');
   }
   if (!(shard.count >= 1) || !(shard.index >= 1) || shard.index > shard.count) {
     throw usageError(`shard ${shard.index}/${shard.count}: need 1 ≤ i ≤ N (shards are numbered from 1)`);

@@ -35,19 +35,51 @@ export interface FilterSpec {
 }
 
 /** One second-order section, normalised so a0 = 1: (b0 + b1 z⁻¹ + b2 z⁻²)/(1 + a1 z⁻¹ + a2 z⁻²). */
-export interface Biquad {
-  b0: number;
-  b1: number;
-  b2: number;
-  a1: number;
-  a2: number;
-}
+export type Biquad = { [coefficient in 'b0' | 'b1' | 'b2' | 'a1' | 'a2']: number };
 
 /** Largest Butterworth order accepted; higher orders ring and add nothing for records. */
 export const MAX_FILTER_ORDER = 12;
 
-/** Refuse a specification that would be silently wrong for a record sampled at `dtS`. */
-export function checkFilter(spec: FilterSpec, dtS: number): void {
+/**
+ * Second-order sections of a digital Butterworth low-pass or high-pass of order `order`, corner
+ * `cornerHz`, for step `dtS` (bilinear transform with prewarping; see the module comment).
+ */
+export function butterworthSections(
+  kind: 'lowpass' | 'highpass',
+  order: number,
+  cornerHz: number,
+  dtS: number,
+): Biquad[] {
+  const k = Math.tan(Math.PI * cornerHz * dtS);
+  const k2 = k * k;
+  // The low-pass numerator is k²(1 + z⁻¹)², or k(1 + z⁻¹); the high-pass one (1 − z⁻¹)², or 1 − z⁻¹.
+  const low = kind === 'lowpass';
+  const sections: Biquad[] = [];
+  for (let i = 1; i <= Math.floor(order / 2); i++) {
+    const q = 2 * Math.sin(((2 * i - 1) * Math.PI) / (2 * order));
+    const a0 = 1 + q * k + k2;
+    const b0 = (low ? k2 : 1) / a0;
+    sections.push({
+      b0,
+      b1: (low ? 2 * k2 : -2) / a0,
+      b2: b0,
+      a1: (2 * k2 - 2) / a0,
+      a2: (1 - q * k + k2) / a0,
+    });
+  }
+  if (order % 2 === 1) {
+    const a0 = 1 + k;
+    const b0 = (low ? k : 1) / a0;
+    sections.push({ b0, b1: low ? b0 : -1 / a0, b2: 0, a1: (k - 1) / a0, a2: 0 });
+  }
+  return sections;
+}
+
+/**
+ * All sections of a specification, high-pass first, refusing a specification that would be
+ * silently wrong for a record sampled at `dtS`.
+ */
+export function filterSections(spec: FilterSpec, dtS: number): Biquad[] {
   if (!Number.isInteger(spec.order) || spec.order < 1 || spec.order > MAX_FILTER_ORDER) {
     throw usageError(`filter order must be a whole number from 1 to ${MAX_FILTER_ORDER}, got ${spec.order}`);
   }
@@ -70,51 +102,14 @@ export function checkFilter(spec: FilterSpec, dtS: number): void {
       `a band-pass needs its low corner below its high corner, got ${spec.lowCornerHz}–${spec.highCornerHz} Hz`,
     );
   }
-}
-
-/**
- * Second-order sections of a digital Butterworth low-pass or high-pass of order `order`, corner
- * `cornerHz`, for step `dtS` (bilinear transform with prewarping; see the module comment).
- */
-export function butterworthSections(
-  kind: 'lowpass' | 'highpass',
-  order: number,
-  cornerHz: number,
-  dtS: number,
-): Biquad[] {
-  const k = Math.tan(Math.PI * cornerHz * dtS);
-  const k2 = k * k;
-  const sections: Biquad[] = [];
-  for (let i = 1; i <= Math.floor(order / 2); i++) {
-    const q = 2 * Math.sin(((2 * i - 1) * Math.PI) / (2 * order));
-    const a0 = 1 + q * k + k2;
-    const a1 = (2 * k2 - 2) / a0;
-    const a2 = (1 - q * k + k2) / a0;
-    if (kind === 'lowpass') sections.push({ b0: k2 / a0, b1: (2 * k2) / a0, b2: k2 / a0, a1, a2 });
-    else sections.push({ b0: 1 / a0, b1: -2 / a0, b2: 1 / a0, a1, a2 });
-  }
-  if (order % 2 === 1) {
-    const a0 = 1 + k;
-    const a1 = (k - 1) / a0;
-    if (kind === 'lowpass') sections.push({ b0: k / a0, b1: k / a0, b2: 0, a1, a2: 0 });
-    else sections.push({ b0: 1 / a0, b1: -1 / a0, b2: 0, a1, a2: 0 });
-  }
-  return sections;
-}
-
-/** All sections of a specification, high-pass first. */
-export function filterSections(spec: FilterSpec, dtS: number): Biquad[] {
-  checkFilter(spec, dtS);
-  const sections: Biquad[] = [];
-  if (spec.kind !== 'lowpass')
-    sections.push(...butterworthSections('highpass', spec.order, spec.lowCornerHz!, dtS));
-  if (spec.kind !== 'highpass')
-    sections.push(...butterworthSections('lowpass', spec.order, spec.highCornerHz!, dtS));
-  return sections;
+  return [
+    ...(spec.kind === 'lowpass' ? [] : butterworthSections('highpass', spec.order, spec.lowCornerHz!, dtS)),
+    ...(spec.kind === 'highpass' ? [] : butterworthSections('lowpass', spec.order, spec.highCornerHz!, dtS)),
+  ];
 }
 
 /** Run the cascade over `values` in place, from the first sample to the last, from rest. */
-export function runSections(sections: readonly Biquad[], values: Float64Array): void {
+function runSections(sections: readonly Biquad[], values: Float64Array): void {
   for (const { b0, b1, b2, a1, a2 } of sections) {
     let s1 = 0;
     let s2 = 0;

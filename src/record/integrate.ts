@@ -1,13 +1,9 @@
 /**
- * Time integration of sampled histories. Everything in quakesweep that needs a running integral
- * (velocity, displacement, the Husid curve, CAV) goes through `cumulativeTrapezoid`.
- */
-
-/**
  * The running integral of `values` sampled at step `dtS`, by the trapezoidal rule, starting from
  * `initial` (0: from rest): out[0] = initial, out[i] = out[i−1] + dtS·(values[i−1] + values[i])/2.
  * Trapezoidal rule (common practice; e.g. Press et al., Numerical Recipes, 3rd ed., §4.1): exact for
- * histories that are linear between samples, which is how quakesweep reads a record.
+ * histories that are linear between samples, which is how quakesweep reads a record. Every running
+ * integral of quakesweep (velocity, displacement, the Husid curve) is this one.
  */
 export function cumulativeTrapezoid(values: Float64Array, dtS: number, initial = 0): Float64Array {
   const out = new Float64Array(values.length);
@@ -25,18 +21,12 @@ export function trapezoid(values: Float64Array, dtS: number): number {
   return (sum * dtS) / 2;
 }
 
-/** Ground velocity, m/s, and displacement, m, of an acceleration history, each integrated from rest. */
-export interface GroundMotionHistories {
-  accelMS2: Float64Array;
-  velocityMS: Float64Array;
-  displacementM: Float64Array;
-}
-
 /**
- * Velocity and displacement by two trapezoidal integrations from rest (v(0) = 0, d(0) = 0; common
- * practice). No baseline is removed here: ask for it in processing, where it is recorded.
+ * The acceleration with the ground velocity, m/s, and displacement, m, by two trapezoidal
+ * integrations from rest (v(0) = 0, d(0) = 0; common practice). No baseline is removed here: ask
+ * for it in processing, where it is recorded.
  */
-export function integrateRecord(record: { accelMS2: Float64Array; dtS: number }): GroundMotionHistories {
+export function integrateRecord(record: { accelMS2: Float64Array; dtS: number }) {
   const velocityMS = cumulativeTrapezoid(record.accelMS2, record.dtS);
   const displacementM = cumulativeTrapezoid(velocityMS, record.dtS);
   return { accelMS2: record.accelMS2, velocityMS, displacementM };

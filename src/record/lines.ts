@@ -14,35 +14,26 @@ const MAX_MISSES = 16;
 export class LineSplitter {
   private readonly reader: RecordReader;
   private readonly skip: number;
-  /**
-   * The unfinished line, in pieces, and their length. The array is emptied in place, never
-   * replaced: a new empty array has another shape, which would throw push()'s optimized code away.
-   */
-  private readonly pieces: string[] = [];
-  private pending = 0;
+  /** The unfinished line: the text after the last line break so far. */
+  private rest = '';
   /** Number of the line being read. */
   private line = 1;
   /** The last text ended with `\r`: a `\n` first in the next one is the second half of `\r\n`. */
   private afterCarriageReturn = false;
-  private started = false;
 
   /** `head`: the text's first piece, which chooses the reader's separator (`partial`: it is cut short). */
   constructor(reader: RecordReader, head: string, partial: boolean) {
     this.reader = reader;
     this.skip = reader.options.skip ?? 0;
     reader.separator = sniffSeparator(head, this.skip, partial);
-    this.push(head);
+    // One byte-order mark is removed, at the start of the text only; any other is a character.
+    this.push(head.charCodeAt(0) === 0xfeff ? head.slice(1) : head);
   }
 
   push(text: string): void {
     const length = text.length;
     if (length === 0) return;
     let from = 0;
-    if (!this.started) {
-      // One byte-order mark is removed, at the start of the text only; any other is a character.
-      this.started = true;
-      if (text.charCodeAt(0) === 0xfeff) from = 1;
-    }
     if (this.afterCarriageReturn) {
       this.afterCarriageReturn = false;
       if (text.charCodeAt(from) === 10) from++;
@@ -54,7 +45,7 @@ export class LineSplitter {
     let misses = 0;
     let scanned = false;
     while (lf !== -1 || cr !== -1) {
-      if (!scanned && misses < MAX_MISSES && this.pending === 0 && this.reader.readsRows) {
+      if (!scanned && misses < MAX_MISSES && this.rest === '' && this.reader.readsRows) {
         const { next, lines } = this.reader.rowsFrom(text, from);
         if (lines > 0) {
           misses = 0;
@@ -85,28 +76,19 @@ export class LineSplitter {
         }
         cr = text.indexOf('\r', from);
       }
-      if (this.pending === 0) this.take(text.slice(start, end));
-      else this.take(this.unfinished(text.slice(start, end)));
+      this.take(this.rest + text.slice(start, end));
+      this.rest = '';
     }
     this.reader.textDone();
     if (from < length) {
-      this.pieces.push(from === 0 ? text : text.slice(from));
-      this.pending += length - from;
-      if (this.pending > MAX_LINE_CHARACTERS) throw longLineError(this.reader.options.source, this.line);
+      this.rest += from === 0 ? text : text.slice(from);
+      if (this.rest.length > MAX_LINE_CHARACTERS) throw longLineError(this.reader.options.source, this.line);
     }
   }
 
   /** The end of the text: its last line, if it has no line break after it. */
   end(): void {
-    if (this.pending > 0) this.take(this.unfinished(''));
-  }
-
-  private unfinished(last: string): string {
-    this.pieces.push(last);
-    const line = this.pieces.join('');
-    this.pieces.length = 0;
-    this.pending = 0;
-    return line;
+    if (this.rest !== '') this.take(this.rest);
   }
 
   private take(line: string): void {

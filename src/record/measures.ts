@@ -38,13 +38,8 @@ export interface GroundMotionMeasures {
   meanPeriodBandHz: [number, number];
 }
 
-export interface MeasureOptions {
-  /** Threshold of the bracketed duration, m/s²; default 0.05 g. */
-  bracketThresholdMS2?: number;
-}
-
 /** Largest |x| and the time of its first occurrence (samples at step dtS from t = 0). */
-export function peakOf(values: Float64Array, dtS: number): Peak {
+function peakOf(values: Float64Array, dtS: number): Peak {
   let index = 0;
   for (let i = 1; i < values.length; i++) if (Math.abs(values[i]) > Math.abs(values[index])) index = i;
   return { value: Math.abs(values[index]), timeS: index * dtS };
@@ -69,7 +64,12 @@ export function husidCurve(accelMS2: Float64Array, dtS: number): Float64Array {
   return running;
 }
 
-/** First time at which a rising curve reaches `level`, linearly interpolated between samples. */
+/**
+ * First time at which a rising curve reaches `level`, linearly interpolated between samples. On
+ * the Husid curve, the significant duration between fractions a and b of the Arias intensity is
+ * timeToReach(b) − timeToReach(a) (Trifunac and Brady 1975, BSSA 65(3): D5–95; D5–75 as in
+ * Abrahamson and Silva 1996).
+ */
 export function timeToReach(curve: Float64Array, dtS: number, level: number): number {
   for (let i = 0; i < curve.length; i++) {
     if (curve[i] >= level) {
@@ -79,16 +79,6 @@ export function timeToReach(curve: Float64Array, dtS: number, level: number): nu
     }
   }
   return (curve.length - 1) * dtS;
-}
-
-/**
- * Significant duration between fractions `from` and `to` of the Arias intensity (Trifunac and Brady
- * 1975, BSSA 65(3): D5–95; D5–75 as in Abrahamson and Silva 1996), from the Husid curve.
- */
-export function significantDuration(husid: Float64Array, dtS: number, from: number, to: number) {
-  const startS = timeToReach(husid, dtS, from);
-  const endS = timeToReach(husid, dtS, to);
-  return { startS, endS, durationS: endS - startS };
 }
 
 /**
@@ -142,16 +132,18 @@ export function meanPeriod(
   return { periodS: denominator > 0 ? numerator / denominator : null, bandHz };
 }
 
-/** All the measures of a record; velocity and displacement by trapezoidal integration from rest. */
+/**
+ * All the measures of a record; velocity and displacement by trapezoidal integration from rest.
+ * `bracketThresholdMS2`: the threshold of the bracketed duration, m/s²; default 0.05 g.
+ */
 export function groundMotionMeasures(
   record: GroundRecord,
-  options: MeasureOptions = {},
+  options: { bracketThresholdMS2?: number } = {},
 ): GroundMotionMeasures {
   const { dtS, accelMS2 } = record;
   const { velocityMS, displacementM } = integrateRecord(record);
   const husid = husidCurve(accelMS2, dtS);
-  const d75 = significantDuration(husid, dtS, 0.05, 0.75);
-  const d95 = significantDuration(husid, dtS, 0.05, 0.95);
+  const [t5S, t75S, t95S] = [0.05, 0.75, 0.95].map((level) => timeToReach(husid, dtS, level));
   const bracketThresholdMS2 = options.bracketThresholdMS2 ?? 0.05 * STANDARD_GRAVITY_MS2;
   const bracket = bracketedDuration(accelMS2, dtS, bracketThresholdMS2);
   const mean = meanPeriod(accelMS2, dtS);
@@ -160,11 +152,11 @@ export function groundMotionMeasures(
     pgv: peakOf(velocityMS, dtS),
     pgd: peakOf(displacementM, dtS),
     ariasMS: ariasIntensity(accelMS2, dtS),
-    d5to75S: d75.durationS,
-    d5to95S: d95.durationS,
-    t5S: d95.startS,
-    t75S: d75.endS,
-    t95S: d95.endS,
+    d5to75S: t75S - t5S,
+    d5to95S: t95S - t5S,
+    t5S,
+    t75S,
+    t95S,
     bracketedS: bracket.durationS,
     bracketStartS: bracket.startS,
     bracketEndS: bracket.endS,

@@ -28,67 +28,45 @@ export const PROCESSING_ORDER = ['baseline', 'taper', 'filter', 'resample'] as c
  */
 export function applyProcessingPlan(record: GroundRecord, plan: ProcessingPlan): GroundRecord {
   let out = record;
-  if (plan.baselineOrder !== undefined) out = removeBaseline(out, plan.baselineOrder);
-  if (plan.taperFraction !== undefined) out = taperRecord(out, plan.taperFraction);
-  if (plan.filter !== undefined) out = filterRecord(out, plan.filter);
-  if (plan.resampleDtS !== undefined) out = resampleRecord(out, plan.resampleDtS);
+  const { baselineOrder: order, taperFraction: fraction, filter: spec, resampleDtS: newDtS } = plan;
+  if (order !== undefined) {
+    const what = order === 0 ? 'mean removed' : `least-squares ${BASELINE_NAMES[order]} polynomial removed`;
+    out = withProcessing(out, removePolynomialBaseline(out.accelMS2, order), {
+      operation: 'baseline',
+      description: `baseline correction: ${what} from the acceleration`,
+      parameters: { order, name: BASELINE_NAMES[order] },
+    });
+  }
+  if (fraction !== undefined) {
+    out = withProcessing(out, cosineTaper(out.accelMS2, fraction), {
+      operation: 'taper',
+      description: `cosine (Tukey) taper of ${Number((fraction * 100).toPrecision(6))}% of the record at each end`,
+      parameters: { fraction_each_end: fraction },
+    });
+  }
+  if (spec !== undefined) {
+    out = withProcessing(out, zeroPhaseFilter(out.accelMS2, out.dtS, spec), {
+      operation: 'filter',
+      description: describeFilter(spec),
+      parameters: {
+        kind: spec.kind,
+        order: spec.order,
+        low_corner_hz: spec.lowCornerHz ?? null,
+        high_corner_hz: spec.highCornerHz ?? null,
+        zero_phase: true,
+        pad_each_end_s: padDurationS(spec),
+      },
+    });
+  }
+  if (newDtS !== undefined) {
+    const { values, antiAliasHz } = resampleHistory(out.accelMS2, out.dtS, newDtS);
+    const filterNote =
+      antiAliasHz === null
+        ? 'finer step, no anti-alias filter needed'
+        : `after a zero-phase Butterworth anti-alias low-pass of order ${ANTI_ALIAS_ORDER} at ${Number(antiAliasHz.toPrecision(4))} Hz`;
+    const description = `resampled from ${out.dtS} s to ${newDtS} s by Lanczos-windowed sinc interpolation (${LANCZOS_LOBES} lobes), ${filterNote}`;
+    const parameters = { from_dt_s: out.dtS, to_dt_s: newDtS, anti_alias_hz: antiAliasHz };
+    out = withProcessing(out, values, { operation: 'resample', description, parameters }, newDtS);
+  }
   return out;
-}
-
-/** Remove a least-squares polynomial of order 0–3 from the acceleration (see baseline.ts). */
-export function removeBaseline(record: GroundRecord, order: number): GroundRecord {
-  const accelMS2 = removePolynomialBaseline(record.accelMS2, order);
-  const what = order === 0 ? 'mean removed' : `least-squares ${BASELINE_NAMES[order]} polynomial removed`;
-  return withProcessing(record, accelMS2, {
-    operation: 'baseline',
-    description: `baseline correction: ${what} from the acceleration`,
-    parameters: { order, name: BASELINE_NAMES[order] },
-  });
-}
-
-/** Cosine (Tukey) taper of each end (see taper.ts). */
-export function taperRecord(record: GroundRecord, fraction: number): GroundRecord {
-  const accelMS2 = cosineTaper(record.accelMS2, fraction);
-  const percent = Number((fraction * 100).toPrecision(6));
-  return withProcessing(record, accelMS2, {
-    operation: 'taper',
-    description: `cosine (Tukey) taper of ${percent}% of the record at each end`,
-    parameters: { fraction_each_end: fraction },
-  });
-}
-
-/** Zero-phase Butterworth filter (see filter.ts). */
-export function filterRecord(record: GroundRecord, spec: FilterSpec): GroundRecord {
-  const accelMS2 = zeroPhaseFilter(record.accelMS2, record.dtS, spec);
-  return withProcessing(record, accelMS2, {
-    operation: 'filter',
-    description: describeFilter(spec),
-    parameters: {
-      kind: spec.kind,
-      order: spec.order,
-      low_corner_hz: spec.lowCornerHz ?? null,
-      high_corner_hz: spec.highCornerHz ?? null,
-      zero_phase: true,
-      pad_each_end_s: padDurationS(spec),
-    },
-  });
-}
-
-/** Resample to a new step (see resample.ts). */
-export function resampleRecord(record: GroundRecord, newDtS: number): GroundRecord {
-  const { values, antiAliasHz } = resampleHistory(record.accelMS2, record.dtS, newDtS);
-  const filterNote =
-    antiAliasHz === null
-      ? 'finer step, no anti-alias filter needed'
-      : `after a zero-phase Butterworth anti-alias low-pass of order ${ANTI_ALIAS_ORDER} at ${Number(antiAliasHz.toPrecision(4))} Hz`;
-  return withProcessing(
-    record,
-    values,
-    {
-      operation: 'resample',
-      description: `resampled from ${record.dtS} s to ${newDtS} s by Lanczos-windowed sinc interpolation (${LANCZOS_LOBES} lobes), ${filterNote}`,
-      parameters: { from_dt_s: record.dtS, to_dt_s: newDtS, anti_alias_hz: antiAliasHz },
-    },
-    newDtS,
-  );
 }

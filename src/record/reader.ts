@@ -65,7 +65,7 @@ export class RecordReader {
   }
 
   /**
-   * The rows of `text` from `from` (the start of line `line`) on, for as many lines as the row
+   * The rows of `text` from `from` (the start of a line) on, for as many lines as the row
    * scanner reads (rows.ts): where it stopped and how many lines it read. It reads exactly the
    * rows row() would take without a word (a table of short decimals separated by commas or by
    * spaces and tabs, in the file's number of columns, its time advancing by the mean step to
@@ -119,13 +119,8 @@ export class RecordReader {
       return;
     }
     if (this.columns === 0) this.firstRow(fields.length, line);
-    if (fields.length !== this.columns) {
-      const found = fields.length === 1 ? '1 column' : `${fields.length} columns`;
-      throw this.error(
-        `expected ${this.columns} column${this.columns === 1 ? '' : 's'}, found ${found}`,
-        line,
-      );
-    }
+    if (fields.length !== this.columns)
+      throw this.error(`expected ${columnCount(this.columns)}, found ${columnCount(fields.length)}`, line);
     for (let i = 0; i < fields.length; i++) {
       if (i === 0 || i === this.valueColumn - 1) continue;
       this.number(fields[i], line, i + 1); // columns not used must still be numbers
@@ -282,6 +277,10 @@ export class RecordReader {
       unitsRead: o.units,
     });
   }
+}
+
+function columnCount(columns: number): string {
+  return columns === 1 ? '1 column' : `${columns} columns`;
 }
 
 function formatS(valueS: number): string {

@@ -6,13 +6,7 @@ export const LANCZOS_LOBES = 8;
 /** Order of the anti-alias Butterworth low-pass applied before a coarser step. */
 export const ANTI_ALIAS_ORDER = 8;
 /** Anti-alias corner as a fraction of the new Nyquist frequency. */
-export const ANTI_ALIAS_FRACTION = 0.8;
-
-export interface ResampleResult {
-  values: Float64Array;
-  /** The anti-alias corner, Hz, or null when the step became finer (no filter needed). */
-  antiAliasHz: number | null;
-}
+const ANTI_ALIAS_FRACTION = 0.8;
 
 /**
  * Resample a history from step `dtS` to step `newDtS` over the same duration (the new record has
@@ -22,8 +16,9 @@ export interface ResampleResult {
  * for band-limited interpolation). For a coarser step the history is first low-passed by a
  * zero-phase Butterworth of order 8 at 0.8 × the new Nyquist frequency (−6 dB there, about −31 dB
  * at the new Nyquist), so content above the new Nyquist cannot fold back (anti-aliasing).
+ * `antiAliasHz`: that corner, null when the step became finer (no filter needed).
  */
-export function resampleHistory(values: Float64Array, dtS: number, newDtS: number): ResampleResult {
+export function resampleHistory(values: Float64Array, dtS: number, newDtS: number) {
   if (!Number.isFinite(newDtS) || newDtS <= 0) {
     throw usageError(`the resampling step must be a positive number of seconds, got ${newDtS}`);
   }

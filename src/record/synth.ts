@@ -16,13 +16,8 @@ export interface SynthOptions {
   /** Kanai–Tajimi ground frequency f_g, Hz (default 2.5) and damping ζ_g (default 0.6). */
   groundFrequencyHz?: number;
   groundDamping?: number;
-  /** Clough–Penzien high-pass frequency f_f, Hz (default 0.25) and damping ζ_f (default 0.6). */
+  /** Clough–Penzien high-pass frequency f_f, Hz (default 0.25; its damping ζ_f is 0.6). */
   highPassFrequencyHz?: number;
-  highPassDamping?: number;
-  /** Envelope (Jennings, Housner and Tsai 1968): rise to t1, strong phase to t2, then exp(−c(t − t2)). */
-  riseEndS?: number;
-  strongEndS?: number;
-  decayPerS?: number;
   name?: string;
 }
 
@@ -64,8 +59,9 @@ export function seededNormal(seed: number): () => number {
  * A synthetic ground-acceleration record: Gaussian white noise passed through the Kanai–Tajimi
  * filter (Kanai 1957; Tajimi 1960) and the Clough–Penzien high-pass filter (Clough and Penzien,
  * Dynamics of Structures, 1975), multiplied by the Jennings–Housner–Tsai (1968) intensity envelope
- * and scaled to the target PGA. Each filter is a damped oscillator stepped exactly
- * (piecewise-exact recurrence), so the filters' outputs are
+ * and scaled to the target PGA. The envelope rises as (t/t1)² to t1 = 0.1·T, stays at 1 to
+ * t2 = 0.45·T and decays as exp(−(6/T)(t − t2)), T the duration. Each filter is a damped
+ * oscillator stepped exactly (piecewise-exact recurrence), so the filters' outputs are
  *   a_KT = −(2ζ_gω_g ẋ_g + ω_g² x_g) with ẍ_g + 2ζ_gω_g ẋ_g + ω_g² x_g = −w(t), and
  *   a = ẍ_f with ẍ_f + 2ζ_fω_f ẋ_f + ω_f² x_f = a_KT (the high-pass removes long-period drift).
  * For demo and test data only: it is not a hazard-consistent ground motion.
@@ -77,15 +73,14 @@ export function synthesizeRecord(options: SynthOptions): GroundRecord {
   const fg = options.groundFrequencyHz ?? 2.5;
   const zg = options.groundDamping ?? 0.6;
   const ff = options.highPassFrequencyHz ?? 0.25;
-  const zf = options.highPassDamping ?? 0.6;
-  const t1 = options.riseEndS ?? 0.1 * durationS;
-  const t2 = options.strongEndS ?? 0.45 * durationS;
-  const decay = options.decayPerS ?? 6 / durationS;
-  for (const [label, value] of Object.entries({ dtS, durationS, pgaG, fg, ff, zg, zf, decay })) {
+  const zf = 0.6;
+  for (const [label, value] of Object.entries({ dtS, durationS, pgaG, fg, ff, zg })) {
     if (!(value > 0) || !Number.isFinite(value))
       throw usageError(`synth: ${label} must be positive, got ${value}`);
   }
-  if (!(t1 >= 0 && t2 >= t1)) throw usageError('synth: the envelope needs 0 ≤ rise end ≤ strong-phase end');
+  const t1 = 0.1 * durationS;
+  const t2 = 0.45 * durationS;
+  const decay = 6 / durationS;
   if (fg >= 0.5 / dtS)
     throw usageError(`synth: the ground frequency ${fg} Hz is above the Nyquist frequency`);
   const n = Math.floor(durationS / dtS + 1e-9) + 1;

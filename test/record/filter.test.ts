@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import {
   type Biquad,
   butterworthSections,
-  checkFilter,
   filterSections,
   zeroPhaseFilter,
 } from '../../src/record/filter.js';
@@ -106,14 +105,14 @@ describe('zeroPhaseFilter (forward and backward)', () => {
   });
 });
 
-describe('checkFilter refuses what would be silently wrong', () => {
+describe('filterSections refuses what would be silently wrong', () => {
   it('a corner at or above the Nyquist frequency', () => {
-    expect(() => checkFilter({ kind: 'lowpass', order: 4, highCornerHz: 100 }, dtS)).toThrow(/Nyquist/);
-    expect(() => checkFilter({ kind: 'highpass', order: 4, lowCornerHz: 150 }, dtS)).toThrow(/Nyquist/);
+    expect(() => filterSections({ kind: 'lowpass', order: 4, highCornerHz: 100 }, dtS)).toThrow(/Nyquist/);
+    expect(() => filterSections({ kind: 'highpass', order: 4, lowCornerHz: 150 }, dtS)).toThrow(/Nyquist/);
   });
   it('a non-positive or fractional order', () => {
-    expect(() => checkFilter({ kind: 'lowpass', order: 0, highCornerHz: 5 }, dtS)).toThrow(/order/);
-    expect(() => checkFilter({ kind: 'lowpass', order: 2.5, highCornerHz: 5 }, dtS)).toThrow(/order/);
+    expect(() => filterSections({ kind: 'lowpass', order: 0, highCornerHz: 5 }, dtS)).toThrow(/order/);
+    expect(() => filterSections({ kind: 'lowpass', order: 2.5, highCornerHz: 5 }, dtS)).toThrow(/order/);
   });
   it('a band with low ≥ high', () => {
     expect(() =>
@@ -121,8 +120,8 @@ describe('checkFilter refuses what would be silently wrong', () => {
     ).toThrow(/below its high corner/);
   });
   it('a missing or non-positive corner', () => {
-    expect(() => checkFilter({ kind: 'highpass', order: 4 }, dtS)).toThrow(/positive frequency/);
-    expect(() => checkFilter({ kind: 'highpass', order: 4, lowCornerHz: -1 }, dtS)).toThrow(
+    expect(() => filterSections({ kind: 'highpass', order: 4 }, dtS)).toThrow(/positive frequency/);
+    expect(() => filterSections({ kind: 'highpass', order: 4, lowCornerHz: -1 }, dtS)).toThrow(
       /positive frequency/,
     );
   });

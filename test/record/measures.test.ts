@@ -7,7 +7,7 @@ import {
   groundMotionMeasures,
   husidCurve,
   meanPeriod,
-  significantDuration,
+  timeToReach,
 } from '../../src/record/measures.js';
 import { createRecord } from '../../src/record/record.js';
 
@@ -45,8 +45,9 @@ describe('significant duration (Trifunac and Brady 1975) from a known Husid curv
       sampled(T, () => 0.3),
       dtS,
     );
-    expect(significantDuration(husid, dtS, 0.05, 0.95).durationS).toBeCloseTo(0.9 * T, 9);
-    expect(significantDuration(husid, dtS, 0.05, 0.75).durationS).toBeCloseTo(0.7 * T, 9);
+    const t5S = timeToReach(husid, dtS, 0.05);
+    expect(timeToReach(husid, dtS, 0.95) - t5S).toBeCloseTo(0.9 * T, 9);
+    expect(timeToReach(husid, dtS, 0.75) - t5S).toBeCloseTo(0.7 * T, 9);
   });
 
   it('amplitude 1 then 2: H(T/2) = 0.2, so t5 = T/8, t95 = 31T/32, D5–95 = 27T/32 (closed form)', () => {
@@ -55,10 +56,11 @@ describe('significant duration (Trifunac and Brady 1975) from a known Husid curv
       sampled(T, (t) => (t < T / 2 ? 1 : 2)),
       dtS,
     );
-    const d = significantDuration(husid, dtS, 0.05, 0.95);
-    expect(d.startS).toBeCloseTo(T / 8, 2);
-    expect(d.endS).toBeCloseTo((31 * T) / 32, 2);
-    expect(d.durationS).toBeCloseTo((27 * T) / 32, 2);
+    const t5S = timeToReach(husid, dtS, 0.05);
+    const t95S = timeToReach(husid, dtS, 0.95);
+    expect(t5S).toBeCloseTo(T / 8, 2);
+    expect(t95S).toBeCloseTo((31 * T) / 32, 2);
+    expect(t95S - t5S).toBeCloseTo((27 * T) / 32, 2);
   });
 });
 
