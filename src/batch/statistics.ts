@@ -39,29 +39,23 @@ export function suiteStatistics(
     const curve: SuiteCurve = { damping, mean_psa_g: [], median_psa_g: [], p16_psa_g: [], p84_psa_g: [] };
     if (n === 0) return curve;
     for (let p = 0; p < periodCount; p++) {
-      let sum = 0;
-      let logSum = 0;
-      let positive = true;
-      for (const record of sorted) {
-        const value = record.psaG[d][p];
-        sum += value;
-        if (value > 0) logSum += Math.log(value);
-        else positive = false;
-      }
-      curve.mean_psa_g.push(sum / n);
-      const m = logSum / n;
+      const values = sorted.map((record) => record.psaG[d][p]);
+      curve.mean_psa_g.push(sum(values) / n);
+      const positive = values.every((value) => value > 0);
+      const logs = values.map(Math.log);
+      const m = sum(logs) / n;
       curve.median_psa_g.push(positive ? Math.exp(m) : null);
-      let squares = 0;
-      if (positive && n >= 2) {
-        for (const record of sorted) {
-          const deviation = Math.log(record.psaG[d][p]) - m;
-          squares += deviation * deviation;
-        }
-      }
-      const s = positive && n >= 2 ? Math.sqrt(squares / (n - 1)) : null;
+      const s = positive && n >= 2 ? Math.sqrt(sum(logs.map((l) => (l - m) * (l - m))) / (n - 1)) : null;
       curve.p16_psa_g.push(s === null ? null : Math.exp(m - s));
       curve.p84_psa_g.push(s === null ? null : Math.exp(m + s));
     }
     return curve;
   });
+}
+
+/** The sum from the first term to the last. */
+function sum(values: readonly number[]): number {
+  let total = 0;
+  for (const value of values) total += value;
+  return total;
 }

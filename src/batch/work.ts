@@ -30,7 +30,7 @@ export type RecordOutcome =
   | { ok: false; file: string; name: string; error: string };
 
 /** One line for a person from whatever a record's reading or sweeping threw. */
-export function describeError(error: unknown, file: string): string {
+function describeError(error: unknown, file: string): string {
   if (isQuakesweepError(error))
     return error.file === undefined ? `${file}: ${error.message}` : error.describe();
   const errno = error as NodeJS.ErrnoException;

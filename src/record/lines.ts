@@ -25,9 +25,10 @@ export class LineSplitter {
   constructor(reader: RecordReader, head: string, partial: boolean) {
     this.reader = reader;
     this.skip = reader.options.skip ?? 0;
-    reader.separator = sniffSeparator(head, this.skip, partial);
     // One byte-order mark is removed, at the start of the text only; any other is a character.
-    this.push(head.charCodeAt(0) === 0xfeff ? head.slice(1) : head);
+    const text = head.charCodeAt(0) === 0xfeff ? head.slice(1) : head;
+    reader.separator = sniffSeparator(text, this.skip, partial);
+    this.push(text);
   }
 
   push(text: string): void {

@@ -29,19 +29,14 @@ export interface ReadOptions {
   source: string;
 }
 
-/** Read a record from text already in memory (tests and the library API). */
-export function readRecordText(text: string, options: ReadOptions): GroundRecord {
-  return readRecordTextUsing(text, options, RowScanner.get());
-}
-
 /**
- * readRecordText with the given row scanner, or none, so that every row goes through the
- * TypeScript reader (the tests compare the two). Not part of the library API.
+ * Read a record from text already in memory (tests and the library API). `scanner`, not part of
+ * the library API: null to read every row with the TypeScript reader (the tests compare the two).
  */
-export function readRecordTextUsing(
+export function readRecordText(
   text: string,
   options: ReadOptions,
-  scanner: RowScanner | undefined,
+  scanner: RowScanner | null = RowScanner.get(),
 ): GroundRecord {
   const reader = new RecordReader(options, scanner);
   new LineSplitter(reader, wellFormed(text), false).end();
@@ -152,8 +147,7 @@ class StreamText {
  * character, as it does when the string is written as UTF-8 and read back.
  */
 function wellFormed(text: string): string {
-  const s = text as unknown as { isWellFormed(): boolean; toWellFormed(): string };
-  return s.isWellFormed() ? text : s.toWellFormed();
+  return (text as unknown as { toWellFormed(): string }).toWellFormed();
 }
 
 /**

@@ -29,7 +29,7 @@ export class RecordReader {
   readonly options: ReadOptions;
   /** The file's separator, chosen from its first lines before any row is taken. */
   separator: Separator = ',';
-  private readonly scanner: RowScanner | undefined;
+  private readonly scanner: RowScanner | null;
   private readonly layout: RecordLayout;
   private values = new Float64Array(16384);
   private count = 0;
@@ -49,7 +49,7 @@ export class RecordReader {
   private readonly unitMS2: number;
 
   /** `scanner`: the fast path for runs of numeric rows, none to read every row with row(). */
-  constructor(options: ReadOptions, scanner: RowScanner | undefined) {
+  constructor(options: ReadOptions, scanner: RowScanner | null) {
     this.options = options;
     this.scanner = scanner;
     this.layout = options.layout ?? 'auto';
@@ -138,7 +138,7 @@ export class RecordReader {
     const o = this.options;
     this.columns = columns;
     // Semicolon files may write decimal commas, which number() tracks and the scanner does not.
-    this.readsRows = this.scanner !== undefined && this.layout !== 'wrapped' && this.separator !== ';';
+    this.readsRows = this.scanner !== null && this.layout !== 'wrapped' && this.separator !== ';';
     if (this.layout === 'single' && columns !== 1)
       throw this.error(`the single layout has one value a line, found ${columns} columns`, line);
     if (this.layout === 'table' && columns < 2)

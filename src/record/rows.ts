@@ -22,7 +22,7 @@ export interface RowLayout {
 /**
  * The record reader's fast path for runs of numeric rows (assembly/rows.ts): a fresh process
  * reads them at full speed from the first line, where TypeScript runs unoptimized for the first
- * tens of thousands. One instance per thread, made on first use; undefined where the engine has
+ * tens of thousands. One instance per thread, made on first use; null where the engine has
  * no WebAssembly (the reader then reads every row itself).
  */
 export class RowScanner {
@@ -37,7 +37,7 @@ export class RowScanner {
   private laidFrom = 0;
   private laidLength = 0;
 
-  static get(): RowScanner | undefined {
+  static get(): RowScanner | null {
     if (RowScanner.instance === undefined) {
       try {
         RowScanner.instance = new RowScanner();
@@ -45,7 +45,7 @@ export class RowScanner {
         RowScanner.instance = null;
       }
     }
-    return RowScanner.instance ?? undefined;
+    return RowScanner.instance;
   }
 
   private constructor() {

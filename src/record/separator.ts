@@ -9,18 +9,17 @@ export const MAX_LINE_CHARACTERS = 1_000_000;
  * written in words cannot mislead it): a semicolon if it has one, else tabs and spaces if it
  * has a tab, else a comma, else runs of spaces. When `partial`, the text is cut mid-stream and
  * its last line is not looked at. The look stops before a line longer than MAX_LINE_CHARACTERS,
- * which is refused where it stands (a stream's head stops there too).
+ * which is refused where it stands (a stream's head stops there too). `text` starts after the
+ * byte-order mark, if any.
  */
 export function sniffSeparator(text: string, skip: number, partial = false): Separator {
   let lines = text.split(/\r\n|\n|\r/, skip + 2000);
-  const long = lines.findIndex(
-    (l, i) => l.length - (i === 0 && l.charCodeAt(0) === 0xfeff ? 1 : 0) > MAX_LINE_CHARACTERS,
-  );
+  const long = lines.findIndex((l) => l.length > MAX_LINE_CHARACTERS);
   if (long !== -1) lines = lines.slice(0, long);
   else if (partial) lines.pop();
   let firstText: string | undefined;
   for (const raw of lines.slice(skip)) {
-    const line = raw.replace(/^\ufeff/, '').trim();
+    const line = raw.trim(); // a byte-order mark is white space to trim()
     if (line === '' || line.startsWith('#')) continue;
     if (/^[0-9eEdD+\-.,;\s]+$/.test(line) && /\d/.test(line)) return separatorOf(line);
     firstText ??= line;

@@ -1,6 +1,6 @@
 /**
  * The line splitter and the row scanner (the reader's fast path) against the TypeScript reader
- * alone. The oracle is readRecordTextUsing with no scanner: every line split by the line splitter
+ * alone. The oracle is readRecordText with no scanner (null): every line split by the line splitter
  * and read by RecordReader.row. The fast path, the stream reader and every way of cutting a
  * stream into chunks must give the same samples, the same step and the same error message with
  * the same line number. Where a check names values or lines of its own, they were counted by hand.
@@ -8,12 +8,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { isQuakesweepError } from '../../src/base/errors.js';
-import {
-  type ReadOptions,
-  readRecordStream,
-  readRecordText,
-  readRecordTextUsing,
-} from '../../src/record/read.js';
+import { type ReadOptions, readRecordStream, readRecordText } from '../../src/record/read.js';
 import type { GroundRecord } from '../../src/record/record.js';
 import { RowScanner } from '../../src/record/rows.js';
 import { FUZZ_SEED, runs } from '../helpers/fuzz-budget.js';
@@ -39,7 +34,7 @@ const bytesOf = (text: string) => new Uint8Array(Buffer.from(text, 'utf8'));
 
 /** The oracle: the TypeScript reader alone, on the whole text. */
 function alone(text: string, options: Omit<ReadOptions, 'source'>): Promise<Outcome> {
-  return outcome(() => readRecordTextUsing(text, { ...options, source: SOURCE }, undefined));
+  return outcome(() => readRecordText(text, { ...options, source: SOURCE }, null));
 }
 
 function fromChunks(chunks: (string | Uint8Array)[], options: Omit<ReadOptions, 'source'>) {
@@ -383,7 +378,7 @@ describe('the fast path over a long text', () => {
     expect(await fromChunks(pieces(text, 65536), options)).toEqual(read);
     // The fast path read the rows after each odd line, not only those before the first.
     const scanner = RowScanner.get();
-    if (scanner === undefined) throw new Error('no WebAssembly on this engine');
+    if (scanner === null) throw new Error('no WebAssembly on this engine');
     let scanned = 0;
     const counting = {
       scan: (...args: Parameters<RowScanner['scan']>) => {
@@ -393,7 +388,7 @@ describe('the fast path over a long text', () => {
       },
       release: () => scanner.release(),
     } as unknown as RowScanner;
-    readRecordTextUsing(text, { ...options, source: SOURCE }, counting);
+    readRecordText(text, { ...options, source: SOURCE }, counting);
     expect(scanned).toBeGreaterThan(0.99 * 60_000);
   });
 });

@@ -24,7 +24,7 @@ const layout = (overrides: Partial<RowLayout> = {}): RowLayout => ({
 
 function scan(text: string, overrides: Partial<RowLayout> = {}) {
   const scanner = RowScanner.get();
-  if (scanner === undefined) throw new Error('no WebAssembly on this engine');
+  if (scanner === null) throw new Error('no WebAssembly on this engine');
   const result = scanner.scan(text, 0, layout(overrides));
   return { ...result, values: Array.from(result.values) };
 }
@@ -134,7 +134,7 @@ describe('the WebAssembly row scanner', () => {
 describe('the text the scanner holds', () => {
   it('reads on in the text it copied, one byte a character, past characters outside ASCII', () => {
     const scanner = RowScanner.get();
-    if (scanner === undefined) throw new Error('no WebAssembly on this engine');
+    if (scanner === null) throw new Error('no WebAssembly on this engine');
     // Line 2 has two characters outside ASCII (é, and 😀 as two UTF-16 units); after it, the
     // rows are found at their character offsets in the text without copying it again.
     const text = '0.01,1\n# é 😀\n0.02,2\n0.03,3\n';
@@ -148,7 +148,7 @@ describe('the text the scanner holds', () => {
 
   it('reads another string, and lays out anew from the line cut at the end of what it holds', () => {
     const scanner = RowScanner.get();
-    if (scanner === undefined) throw new Error('no WebAssembly on this engine');
+    if (scanner === null) throw new Error('no WebAssembly on this engine');
     scanner.scan('0.01,1\n0.02,2\n', 0, layout());
     expect(Array.from(scanner.scan('0.01,5\n', 0, layout()).values)).toEqual([5]);
     // 30,000 lines of 11 characters (the line end included): 330,000 characters, more than the
