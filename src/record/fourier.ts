@@ -1,23 +1,15 @@
 import FFT from 'fft.js';
 import { usageError } from '../base/errors.js';
 
-/** A one-sided Fourier amplitude spectrum of an acceleration history. */
-export interface FourierSpectrum {
-  /** Frequencies, Hz: k/(N·Δt) for k = 0 … N/2, N the padded length. */
-  frequenciesHz: Float64Array;
-  /** Fourier amplitude |A(f)| = Δt·|Σ a_j e^{−2πi f jΔt}|, m/s (acceleration × time). */
-  amplitudeMS: Float64Array;
-  /** Length of the transform: the record zero-padded to the next power of two. */
-  transformLength: number;
-}
-
 /**
  * Fourier amplitude spectrum of a sampled history: the discrete Fourier transform times Δt, which
  * approximates the continuous transform ∫a(t)e^{−2πift}dt (Brigham, The Fast Fourier Transform and
- * its Applications, 1988, §6.1). The record is zero-padded to a power of two and transformed with
- * the radix-4 FFT of fft.js (Cooley and Tukey 1965).
+ * its Applications, 1988, §6.1). The record is zero-padded to a power of two, `transformLength` N,
+ * and transformed with the radix-4 FFT of fft.js (Cooley and Tukey 1965), one-sided: the
+ * amplitudes |A(f)| = Δt·|Σ a_j e^{−2πi f jΔt}|, m/s (acceleration × time), at k/(N·Δt) Hz for
+ * k = 0 … N/2.
  */
-export function fourierAmplitudeSpectrum(values: Float64Array, dtS: number): FourierSpectrum {
+export function fourierAmplitudeSpectrum(values: Float64Array, dtS: number) {
   let size = 2;
   while (size < values.length) size *= 2;
   const fft = new FFT(size);

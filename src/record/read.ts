@@ -4,7 +4,7 @@ import { LineSplitter } from './lines.js';
 import { RecordReader } from './reader.js';
 import type { GroundRecord } from './record.js';
 import { RowScanner } from './rows.js';
-import { MAX_LINE_CHARACTERS } from './separator.js';
+import { LINE_BREAK, MAX_LINE_CHARACTERS } from './separator.js';
 
 /**
  * How the values are laid out in the file. `single`: one acceleration value a line. `table`: time
@@ -46,8 +46,6 @@ export function readRecordText(
 /** How much of a stream is looked at to choose the separator: this much, and this many lines after --skip. */
 const SNIFF_BYTES = 64 * 1024;
 const SNIFF_LINES = 100;
-/** A line break of a piece of the head: `\r\n`, `\n` or `\r` (one at a piece's end counts). */
-const LINE_BREAK = /\r\n|\n|\r/;
 
 /**
  * Read a record from a stream of text or bytes (a file, standard input): UTF-8, or UTF-16LE when
@@ -81,6 +79,7 @@ export async function readRecordStream(
       }
       const text = decoder.decode(next.value);
       headText += text;
+      // A `\r` that ends a chunk counts as a line: the count only tells when to stop looking.
       headLines += text.split(LINE_BREAK, skip + SNIFF_LINES - headLines + 1).length - 1;
       const last = Math.max(text.lastIndexOf('\n'), text.lastIndexOf('\r'));
       unfinished = last === -1 ? unfinished + text.length : text.length - 1 - last;

@@ -26,10 +26,8 @@ const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
  * scanner reads at once) and keeps the samples, in m/s², in a Float64Array grown by doubling.
  */
 export class RecordReader {
-  readonly options: ReadOptions;
   /** The file's separator, chosen from its first lines before any row is taken. */
   separator: Separator = ',';
-  private readonly scanner: RowScanner | null;
   private readonly layout: RecordLayout;
   private values = new Float64Array(16384);
   private count = 0;
@@ -49,9 +47,10 @@ export class RecordReader {
   private readonly unitMS2: number;
 
   /** `scanner`: the fast path for runs of numeric rows, none to read every row with row(). */
-  constructor(options: ReadOptions, scanner: RowScanner | null) {
-    this.options = options;
-    this.scanner = scanner;
+  constructor(
+    readonly options: ReadOptions,
+    private readonly scanner: RowScanner | null,
+  ) {
     this.layout = options.layout ?? 'auto';
     this.unitMS2 = ACCELERATION_UNITS[options.units];
     if ((this.layout === 'single' || this.layout === 'wrapped') && options.dtS === undefined)
@@ -191,11 +190,8 @@ export class RecordReader {
 
   /** A row of names: not all numbers, and some letters (so `0\t0,5` is refused as data, not skipped). */
   private isHeader(fields: string[]): boolean {
-    return !fields.every((f) => this.isNumber(f)) && fields.some((f) => LETTER.test(f));
-  }
-
-  private isNumber(text: string): boolean {
-    return NUMBER.test(text) || (this.separator === ';' && DECIMAL_COMMA.test(text));
+    const number = (f: string) => NUMBER.test(f) || (this.separator === ';' && DECIMAL_COMMA.test(f));
+    return !fields.every(number) && fields.some((f) => LETTER.test(f));
   }
 
   private number(text: string, line: number, column: number): number {

@@ -32,14 +32,9 @@ export interface GroundRecord {
   readonly pgaMS2: number;
 }
 
-export interface RecordFields {
-  name: string;
-  source?: string;
-  dtS: number;
-  accelMS2: Float64Array;
-  unitsRead?: AccelerationUnit;
-  processing?: readonly ProcessingStep[];
-}
+/** What createRecord takes: the record without its PGA, and `source`, `unitsRead`, `processing` optional. */
+export type RecordFields = Pick<GroundRecord, 'name' | 'dtS' | 'accelMS2'> &
+  Partial<Pick<GroundRecord, 'source' | 'unitsRead' | 'processing'>>;
 
 /** Build a record, refusing a step or samples that cannot describe a ground motion. */
 export function createRecord(fields: RecordFields): GroundRecord {

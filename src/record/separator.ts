@@ -1,6 +1,9 @@
 /** How the fields of a line are separated; `whitespace` is runs of spaces and tabs. */
 export type Separator = ',' | ';' | 'whitespace';
 
+/** A line break: `\r\n`, `\n` or a lone `\r`. */
+export const LINE_BREAK = /\r\n|\n|\r/;
+
 /** Longest line read, in characters as it stands; a longer one is refused where it is. */
 export const MAX_LINE_CHARACTERS = 1_000_000;
 
@@ -13,7 +16,7 @@ export const MAX_LINE_CHARACTERS = 1_000_000;
  * byte-order mark, if any.
  */
 export function sniffSeparator(text: string, skip: number, partial = false): Separator {
-  let lines = text.split(/\r\n|\n|\r/, skip + 2000);
+  let lines = text.split(LINE_BREAK, skip + 2000);
   const long = lines.findIndex((l) => l.length > MAX_LINE_CHARACTERS);
   if (long !== -1) lines = lines.slice(0, long);
   else if (partial) lines.pop();

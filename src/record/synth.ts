@@ -89,39 +89,34 @@ export function synthesizeRecord(options: SynthOptions): GroundRecord {
   const normal = seededNormal(options.seed);
   // White noise of unit spectral density sampled at dt has variance 1/dt; the level does not
   // matter because the record is scaled to its PGA at the end.
-  const noise = new Float64Array(n);
-  for (let i = 0; i < n; i++) noise[i] = normal();
-
+  let noisePrevious = normal();
   const wg = 2 * Math.PI * fg;
   const kt = stepCoefficients('piecewise-exact', wg, zg, dtS);
   const wf = 2 * Math.PI * ff;
   const cp = stepCoefficients('piecewise-exact', wf, zf, dtS);
+  const envelope = (t: number) => (t < t1 ? (t / t1) ** 2 : t <= t2 ? 1 : Math.exp(-decay * (t - t2)));
   const accel = new Float64Array(n);
   let xg = 0;
   let vg = 0;
   let xf = 0;
   let vf = 0;
   let aktPrevious = 0;
+  let peak = 0;
   for (let i = 1; i < n; i++) {
-    const xgNew = kt.uu * xg + kt.uv * vg + kt.up0 * noise[i - 1] + kt.up1 * noise[i];
-    const vgNew = kt.vu * xg + kt.vv * vg + kt.vp0 * noise[i - 1] + kt.vp1 * noise[i];
-    xg = xgNew;
-    vg = vgNew;
+    const noise = normal();
+    [xg, vg] = [
+      kt.uu * xg + kt.uv * vg + kt.up0 * noisePrevious + kt.up1 * noise,
+      kt.vu * xg + kt.vv * vg + kt.vp0 * noisePrevious + kt.vp1 * noise,
+    ];
+    noisePrevious = noise;
     const akt = -(2 * zg * wg * vg + wg * wg * xg);
     // The Clough–Penzien oscillator is driven by −a_KT in the recurrence's sign convention.
-    const xfNew = cp.uu * xf + cp.uv * vf - cp.up0 * aktPrevious - cp.up1 * akt;
-    const vfNew = cp.vu * xf + cp.vv * vf - cp.vp0 * aktPrevious - cp.vp1 * akt;
-    xf = xfNew;
-    vf = vfNew;
+    [xf, vf] = [
+      cp.uu * xf + cp.uv * vf - cp.up0 * aktPrevious - cp.up1 * akt,
+      cp.vu * xf + cp.vv * vf - cp.vp0 * aktPrevious - cp.vp1 * akt,
+    ];
     aktPrevious = akt;
-    accel[i] = akt - 2 * zf * wf * vf - wf * wf * xf;
-  }
-
-  let peak = 0;
-  for (let i = 0; i < n; i++) {
-    const t = i * dtS;
-    const envelope = t < t1 ? (t / t1) ** 2 : t <= t2 ? 1 : Math.exp(-decay * (t - t2));
-    accel[i] *= envelope;
+    accel[i] = (akt - 2 * zf * wf * vf - wf * wf * xf) * envelope(i * dtS);
     peak = Math.max(peak, Math.abs(accel[i]));
   }
   const scale = peak > 0 ? (pgaG * STANDARD_GRAVITY_MS2) / peak : 0;
