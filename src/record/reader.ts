@@ -64,11 +64,9 @@ export class RecordReader {
   }
 
   /**
-   * The rows of `text` from `from` (the start of a line) on, for as many lines as the row
-   * scanner reads (rows.ts): where it stopped and how many lines it read. It reads exactly the
-   * rows row() would take without a word (a table of short decimals separated by commas or by
-   * spaces and tabs, in the file's number of columns, its time advancing by the mean step to
-   * 1e-6, values within the limit) and stops before any other line, which row() then reads.
+   * The rows of `text` from `from` (the start of a line) on that the row scanner reads (rows.ts:
+   * exactly those row() would take without a word), up to the line that row() must read: where
+   * it stopped and how many lines it read.
    */
   rowsFrom(text: string, from: number): { next: number; lines: number } {
     const scanner = this.scanner as RowScanner;
