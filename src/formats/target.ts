@@ -24,12 +24,12 @@ export function targetToJson(fit: TargetFit) {
   };
 }
 
-/** The `#` lines a target adds to the spectrum CSV, before its header. */
+/** The notes a target adds to the spectrum CSV. */
 export function targetCsvNotes(fit: TargetFit): string[] {
   return [
-    `# target: ${fit.description.replace(/[\r\n]+/g, ' ')}`,
-    `# scaling: factor ${fit.factor} over ${fit.rangeS[0]}-${fit.rangeS[1]} s (${fit.periodCount} periods); record/target after scaling mean ${fit.meanRatio} min ${fit.minRatio} max ${fit.maxRatio}; ${fit.applied ? 'applied' : 'not applied'}`,
-    `# scaling criterion: ${fit.criterion}`,
+    `target: ${fit.description}`,
+    `scaling: factor ${fit.factor} over ${fit.rangeS[0]}-${fit.rangeS[1]} s (${fit.periodCount} periods); record/target after scaling mean ${fit.meanRatio} min ${fit.minRatio} max ${fit.maxRatio}; ${fit.applied ? 'applied' : 'not applied'}`,
+    `scaling criterion: ${fit.criterion}`,
   ];
 }
 
