@@ -17,25 +17,25 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
       `T ${e.periodS === 'rigid' ? 'rigid' : `${e.periodS} s`}, ζ ${e.damping}, z ${l(e.zM)} / h ${l(e.hM)} ${system.length}`,
   );
   out.push(`          a_p ${e.ap}, R_p ${e.rp}, I_p ${e.ip}, S_DS ${e.sds} g, Ω₀ ${e.omega0 ?? 'not given'}`);
-  const c = analysis.code;
-  out.push('', 'horizontal');
+  const { code: c, elastic, elasticKN, governing } = analysis;
+  const force = (label: string, kN: number, note = '') =>
+    `  ${label.padEnd(30)}   ${f(kN).padStart(10)} ${unit}${note && `   ${note}`}`;
   out.push(
-    `  F_p code (ASCE 7-16 Eq. 13.3-1)   ${f(c.fpFormula).padStart(10)} ${unit}   bounds ${f(c.fpMin)} to ${f(c.fpMax)} ${unit}`,
+    '',
+    'horizontal',
+    force('F_p code (ASCE 7-16 Eq. 13.3-1)', c.fpFormula, `bounds ${f(c.fpMin)} to ${f(c.fpMax)} ${unit}`),
+    force('F_p code, bounded', c.fp, `(${c.bound}; z/h = ${c.heightRatio.toFixed(3)})`),
   );
+  if (e.omega0 !== null) out.push(force('Ω₀·F_p', analysis.codeForAnchorsKN));
   out.push(
-    `  F_p code, bounded                ${f(c.fp).padStart(10)} ${unit}   (${c.bound}; z/h = ${c.heightRatio.toFixed(3)})`,
-  );
-  if (e.omega0 !== null)
-    out.push(`  Ω₀·F_p                           ${f(analysis.codeForAnchorsKN).padStart(10)} ${unit}`);
-  if (analysis.elasticKN !== null && analysis.elastic !== null) {
-    out.push(
-      `  record elastic PSA·W_p           ${f(analysis.elasticKN).padStart(10)} ${unit}   (PSA ${analysis.elastic.psaG.toPrecision(4)} g)`,
-    );
-  } else {
-    out.push('  record elastic PSA·W_p                  —      (no ground motion used)');
-  }
-  out.push(
-    `  for the anchors (--demand ${analysis.demand})   ${f(analysis.horizontalForAnchorsKN).padStart(10)} ${unit}   governing: ${analysis.governing}`,
+    elasticKN !== null && elastic !== null
+      ? force('record elastic PSA·W_p', elasticKN, `(PSA ${elastic.psaG.toPrecision(4)} g)`)
+      : '  record elastic PSA·W_p                  —      (no ground motion used)',
+    force(
+      `for the anchors (--demand ${analysis.demand})`,
+      analysis.horizontalForAnchorsKN,
+      `governing: ${governing}`,
+    ),
   );
   out.push(`vertical  E_v = ±0.2 S_DS W_p = ${f(analysis.verticalKN)} ${unit}`);
   const a = analysis.anchors;
@@ -50,16 +50,15 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
     `  ${alignRight(['#', `x ${length}`, `y ${length}`, `tension ${unit}`, 'at °', `shear ${unit}`, 'at °'], widths)}`,
   );
   a.perAnchor.forEach((p, i) => {
-    const cells = [
-      String(i + 1),
-      l(p.x),
-      l(p.y),
+    const forces = [
       f(p.tension),
       p.tensionDirectionDeg.toFixed(1),
       f(p.shear),
       p.shearDirectionDeg.toFixed(1),
     ];
-    out.push(`  ${alignRight(cells, widths)}${i === a.governingAnchor ? '  governs' : ''}`);
+    out.push(
+      `  ${alignRight([String(i + 1), l(p.x), l(p.y), ...forces], widths)}${i === a.governingAnchor ? '  governs' : ''}`,
+    );
   });
   out.push(
     `  max tension ${f(a.maxTension)} ${unit} at ${a.maxTensionDirectionDeg.toFixed(1)}° (anchor ${a.governingAnchor + 1}); max shear ${f(a.maxShear)} ${unit}`,

@@ -20,18 +20,14 @@ export function notFiniteError(where: string) {
 
 function nonFinitePath(value: unknown, path: string): string | undefined {
   if (typeof value === 'number') return Number.isFinite(value) ? undefined : `${path} = ${value}`;
-  if (value === null || typeof value !== 'object') return undefined;
-  if (Array.isArray(value) || (ArrayBuffer.isView(value) && !(value instanceof DataView))) {
+  if (value === null || typeof value !== 'object' || value instanceof DataView) return undefined;
+  if (Array.isArray(value) || ArrayBuffer.isView(value)) {
     const items = value as ArrayLike<unknown>;
     for (let i = 0; i < items.length; i++) {
-      const item = items[i];
-      // Numbers are checked in this loop, so that no path is built for each of them.
-      if (typeof item === 'number') {
-        if (!Number.isFinite(item)) return `${path}[${i}] = ${item}`;
-      } else if (typeof item === 'object') {
-        const found = nonFinitePath(item, `${path}[${i}]`);
-        if (found !== undefined) return found;
-      }
+      // Finite numbers are passed over here, so that no path is built for each of them.
+      if (typeof items[i] === 'number' && Number.isFinite(items[i])) continue;
+      const found = nonFinitePath(items[i], `${path}[${i}]`);
+      if (found !== undefined) return found;
     }
     return undefined;
   }

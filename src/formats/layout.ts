@@ -94,10 +94,7 @@ export function assumptionLines(assumptions: readonly string[]): string[] {
   return ['', 'method and assumptions', ...items];
 }
 
-/**
- * The lines of a terminal table by period, of the columns that have a width: a heading row, then
- * the summary rows (summaryRows).
- */
+/** A terminal table by period of the columns that have a width: a heading row, then the summary rows. */
 export function periodTable(periodsS: Float64Array, allColumns: readonly PeriodColumn[], toEnds = false) {
   const columns = allColumns.filter((c) => c.width !== undefined);
   const widths = [8, ...columns.map((c) => c.width!)];

@@ -56,12 +56,12 @@ export function shardJson(
 export type ShardJson = ReturnType<typeof shardJson>;
 
 /** A run's outcomes as suite records and failures, the patterns that matched no file failing first. */
-export function suiteOutcomes(
-  outcomes: readonly RecordOutcome[],
-  unmatched: readonly string[],
-): { records: SuiteRecord[]; failed: SuiteFailure[] } {
+export function suiteOutcomes(outcomes: readonly RecordOutcome[], unmatched: readonly string[]) {
   const records: SuiteRecord[] = [];
-  const failed = unmatched.map((pattern) => ({ file: pattern, error: `${pattern}: no file matches` }));
+  const failed: SuiteFailure[] = unmatched.map((pattern) => ({
+    file: pattern,
+    error: `${pattern}: no file matches`,
+  }));
   for (const outcome of outcomes) {
     if (outcome.ok) records.push({ name: outcome.name, file: outcome.file, psaG: outcome.psaG });
     else failed.push({ file: outcome.file, error: outcome.error });
