@@ -59,15 +59,10 @@ export function columnsByDamping<Curve extends { damping: number }>(
  * may hold line breaks), then the header and one row per period. A value that is not finite is
  * refused (see finite.ts), naming its column.
  */
-export function csvText(
-  notes: readonly string[],
-  periodsS: ArrayLike<number>,
-  columns: readonly PeriodColumn[],
-) {
+export function csvText(notes: readonly string[], periodsS: Float64Array, columns: readonly PeriodColumn[]) {
   const header = ['period_s', ...columns.map((c) => c.name)];
-  const lines = [...cautionLines(), ...notes.map((note) => note.replace(/[\r\n]+/g, ' '))].map(
-    (line) => `# ${line}`,
-  );
+  const oneLineNotes = notes.map((note) => note.replace(/[\r\n]+/g, ' '));
+  const lines = [...cautionLines(), ...oneLineNotes].map((line) => `# ${line}`);
   lines.push(header.join(','));
   for (let p = 0; p < periodsS.length; p++) {
     const cells = [periodsS[p], ...columns.map((c) => c.at(p))];

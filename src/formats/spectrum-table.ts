@@ -1,5 +1,4 @@
-import type { LengthUnit } from '../base/units.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';

@@ -32,7 +32,7 @@ describe('labels', () => {
 });
 
 describe('csvText', () => {
-  const periods = [0, 0.5, 1];
+  const periods = Float64Array.of(0, 0.5, 1);
   const columns = [
     { name: 'a_g@5%', at: (p: number) => [0.1, 0.2, 0.3][p] },
     { name: 'b_m', at: (p: number) => (p === 1 ? null : p * 1e-7) },
