@@ -8,18 +8,25 @@ export const CAUTION =
   'Have every number reviewed by a licensed structural engineer and follow the governing local ' +
   'building code.';
 
+/** Wrap a paragraph greedily at `width` columns, the first line after `first`, the others after `rest`. */
+export function wrapText(text: string, width: number, first = '', rest = ''): string[] {
+  const lines: string[] = [];
+  let line = first;
+  let fresh = true;
+  for (const word of text.split(' ')) {
+    if (!fresh && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = rest + word;
+    } else {
+      line = fresh ? line + word : `${line} ${word}`;
+    }
+    fresh = false;
+  }
+  lines.push(line);
+  return lines;
+}
+
 /** The caution as lines of at most `width` characters, for terminal tables and CSV comments. */
 export function cautionLines(width = 96): string[] {
-  const lines: string[] = [];
-  let line = '';
-  for (const word of CAUTION.split(' ')) {
-    if (line.length > 0 && line.length + 1 + word.length > width) {
-      lines.push(line);
-      line = word;
-    } else {
-      line = line.length > 0 ? `${line} ${word}` : word;
-    }
-  }
-  if (line.length > 0) lines.push(line);
-  return lines;
+  return wrapText(CAUTION, width);
 }

@@ -27,10 +27,8 @@ export class QuakesweepError extends Error {
 
   /** `file:line: message`, or as much of it as is known. */
   describe(): string {
-    if (this.file !== undefined && this.line !== undefined)
-      return `${this.file}:${this.line}: ${this.message}`;
-    if (this.file !== undefined) return `${this.file}: ${this.message}`;
-    return this.message;
+    if (this.file === undefined) return this.message;
+    return `${this.file}${this.line === undefined ? '' : `:${this.line}`}: ${this.message}`;
   }
 }
 

@@ -21,53 +21,31 @@ export const LENGTH_UNITS = { m: 1, cm: 0.01, mm: 0.001, in: 0.0254, ft: 0.3048 
 
 export type LengthUnit = keyof typeof LENGTH_UNITS;
 
-const ACCEL_ALIASES: Readonly<Record<string, AccelerationUnit>> = {
-  g: 'g',
-  'm/s2': 'm/s2',
-  'm/s^2': 'm/s2',
-  'm/s²': 'm/s2',
-  'cm/s2': 'cm/s2',
-  'cm/s^2': 'cm/s2',
-  'cm/s²': 'cm/s2',
-  gal: 'gal',
-  'mm/s2': 'mm/s2',
-  'mm/s^2': 'mm/s2',
-  'mm/s²': 'mm/s2',
-  'in/s2': 'in/s2',
-  'in/s^2': 'in/s2',
-  'in/s²': 'in/s2',
-  'ft/s2': 'ft/s2',
-  'ft/s^2': 'ft/s2',
-  'ft/s²': 'ft/s2',
-};
-
 /** The accepted spellings, for error messages. */
 export const ACCELERATION_UNIT_NAMES = Object.keys(ACCELERATION_UNITS).join(', ');
 
-/** Parse an acceleration unit name; units are never guessed, so a missing one is refused. */
+/**
+ * Parse an acceleration unit name, in any case, with s2, s^2 or s² alike; units are never guessed,
+ * so a missing one is refused.
+ */
 export function parseAccelerationUnit(text: string | undefined): AccelerationUnit {
   if (text === undefined || text.trim() === '') {
     throw usageError(`the record's units are required (--units); accepted: ${ACCELERATION_UNIT_NAMES}`);
   }
-  const unit = ACCEL_ALIASES[text.trim().toLowerCase()];
-  if (unit === undefined) {
+  const key = text
+    .trim()
+    .toLowerCase()
+    .replace(/s(\^2|²)$/, 's2');
+  if (!Object.hasOwn(ACCELERATION_UNITS, key)) {
     throw usageError(`unknown acceleration unit '${text}'; accepted: ${ACCELERATION_UNIT_NAMES}`);
   }
-  return unit;
+  return key as AccelerationUnit;
 }
 
 export function parseLengthUnit(text: string): LengthUnit {
   const key = text.trim().toLowerCase();
-  if (!(key in LENGTH_UNITS)) {
+  if (!Object.hasOwn(LENGTH_UNITS, key)) {
     throw usageError(`unknown length unit '${text}'; accepted: ${Object.keys(LENGTH_UNITS).join(', ')}`);
   }
   return key as LengthUnit;
-}
-
-export function toMetresPerSecondSquared(value: number, unit: AccelerationUnit): number {
-  return value * ACCELERATION_UNITS[unit];
-}
-
-export function gFromMS2(valueMS2: number): number {
-  return valueMS2 / STANDARD_GRAVITY_MS2;
 }

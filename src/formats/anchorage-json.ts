@@ -14,11 +14,7 @@ export function anchorageToJson(analysis: AnchorageAnalysis) {
     scope: ANCHORAGE_SCOPE,
     force_unit: system.force,
     length_unit: system.length,
-    equipment: {
-      ...e.input,
-      cg_plan: [length(e.cgPlanM[0]), length(e.cgPlanM[1])],
-      cg_plan_given: e.cgPlanGiven,
-    },
+    equipment: { ...e.input, cg_plan: e.cgPlanM.map(length), cg_plan_given: e.cgPlanGiven },
     horizontal: {
       fp_code: force(analysis.code.fp),
       fp_code_formula: force(analysis.code.fpFormula),
@@ -36,10 +32,7 @@ export function anchorageToJson(analysis: AnchorageAnalysis) {
       governing: analysis.governing,
       force_for_anchors: force(analysis.horizontalForAnchorsKN),
     },
-    vertical: {
-      ev: force(analysis.verticalKN),
-      dead_load_factor: analysis.deadLoadFactor,
-    },
+    vertical: { ev: force(analysis.verticalKN), dead_load_factor: analysis.deadLoadFactor },
     anchors: {
       rule: a.rule,
       method:

@@ -2,7 +2,6 @@ import type { AnchorageAnalysis } from '../anchorage/anchorage.js';
 import { centroid, EQUIPMENT_UNITS } from '../anchorage/equipment.js';
 
 /** The input of the anchor plan figure (plot/anchor-plan.ts) from an analysis, in the equipment's units. */
-
 export function anchorPlanInput(analysis: AnchorageAnalysis) {
   const e = analysis.equipment;
   const system = EQUIPMENT_UNITS[e.units];
@@ -15,7 +14,7 @@ export function anchorPlanInput(analysis: AnchorageAnalysis) {
     anchors: a.perAnchor.map((p) => ({ x: l(p.x), y: l(p.y), tension: p.tension / system.kNPerForce })),
     governingAnchor: a.governingAnchor,
     directionDeg: a.maxTensionDirectionDeg,
-    cgPlan: [l(e.cgPlanM[0]), l(e.cgPlanM[1])] as [number, number],
+    cgPlan: e.cgPlanM.map(l) as [number, number],
     centroid: centroid(e.anchorsM).map(l) as [number, number],
     subtitle: [
       `Horizontal force for the anchors ${(analysis.horizontalForAnchorsKN / system.kNPerForce).toPrecision(4)} ${system.force} ` +

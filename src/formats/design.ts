@@ -1,5 +1,6 @@
-import { CAUTION, cautionLines } from '../base/caution.js';
+import { CAUTION } from '../base/caution.js';
 import type { DesignSpectrum } from '../spectrum/design.js';
+import { alignRight, csvText, terminalText } from './layout.js';
 
 export function designToJson(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array) {
   return {
@@ -15,20 +16,13 @@ export function designToJson(spectrum: DesignSpectrum, periodsS: Float64Array, p
 
 /** The caution and the description on `#` lines, then `period_s,psa_g` (readable again by --table). */
 export function designToCsv(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array): string {
-  const lines = cautionLines().map((line) => `# ${line}`);
-  lines.push(`# spectrum: ${spectrum.description.replace(/[\r\n]+/g, ' ')}`);
-  lines.push('period_s,psa_g');
-  for (let i = 0; i < periodsS.length; i++) lines.push(`${periodsS[i]},${psaG[i]}`);
-  return `${lines.join('\n')}\n`;
+  return csvText([`spectrum: ${spectrum.description}`], periodsS, [{ name: 'psa_g', at: (p) => psaG[p] }]);
 }
 
 export function designTable(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array): string {
-  const out = cautionLines(92).map((line) => `! ${line}`);
-  out.push('', spectrum.description, '', `${'T (s)'.padStart(10)} ${'PSA (g)'.padStart(12)}`);
-  for (let i = 0; i < periodsS.length; i++) {
-    out.push(
-      `${Number(periodsS[i].toPrecision(4)).toString().padStart(10)} ${psaG[i].toPrecision(5).padStart(12)}`,
-    );
-  }
-  return `${out.join('\n')}\n`;
+  const widths = [10, 12];
+  const rows = Array.from(psaG, (psa, i) =>
+    alignRight([Number(periodsS[i].toPrecision(4)).toString(), psa.toPrecision(5)], widths),
+  );
+  return terminalText([spectrum.description, '', alignRight(['T (s)', 'PSA (g)'], widths), ...rows]);
 }

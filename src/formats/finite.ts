@@ -8,31 +8,25 @@ import { inputError } from '../base/errors.js';
  */
 export function assertFiniteResult(value: unknown): void {
   const path = nonFinitePath(value, '');
-  if (path !== undefined) {
-    throw inputError(
-      `a result is not a finite number (${path || 'the value'}); the record or the options are out of range, so nothing was written`,
-    );
-  }
+  if (path !== undefined) throw notFiniteError(path || 'the value');
+}
+
+/** The refusal of a value that is not finite, at `where` in a result. */
+export function notFiniteError(where: string) {
+  return inputError(
+    `a result is not a finite number (${where}); the record or the options are out of range, so nothing was written`,
+  );
 }
 
 function nonFinitePath(value: unknown, path: string): string | undefined {
   if (typeof value === 'number') return Number.isFinite(value) ? undefined : `${path} = ${value}`;
-  if (value === null || typeof value !== 'object') return undefined;
-  if (ArrayBuffer.isView(value) && !(value instanceof DataView)) {
-    const array = value as unknown as ArrayLike<number>;
-    for (let i = 0; i < array.length; i++)
-      if (typeof array[i] === 'number' && !Number.isFinite(array[i])) return `${path}[${i}] = ${array[i]}`;
-    return undefined;
-  }
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) {
-      const item = value[i];
-      // Numbers are checked in this loop, so that no path is built for each of them.
-      if (typeof item === 'number') {
-        if (!Number.isFinite(item)) return `${path}[${i}] = ${item}`;
-        continue;
-      }
-      const found = nonFinitePath(item, `${path}[${i}]`);
+  if (value === null || typeof value !== 'object' || value instanceof DataView) return undefined;
+  if (Array.isArray(value) || ArrayBuffer.isView(value)) {
+    const items = value as ArrayLike<unknown>;
+    for (let i = 0; i < items.length; i++) {
+      // Finite numbers are passed over here, so that no path is built for each of them.
+      if (typeof items[i] === 'number' && Number.isFinite(items[i])) continue;
+      const found = nonFinitePath(items[i], `${path}[${i}]`);
       if (found !== undefined) return found;
     }
     return undefined;

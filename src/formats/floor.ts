@@ -1,12 +1,9 @@
-import { cautionLines } from '../base/caution.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
 import type { BuildingMode, FloorSpectra } from '../spectrum/floor.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { dampingLabel } from './spectrum-csv.js';
+import { assumptionLines, columnsByDamping, periodTable, pgaText, terminalText } from './layout.js';
 import { spectrumToJson, toG } from './spectrum-json.js';
-import { type PeriodColumn, periodTable } from './spectrum-table.js';
-import { wrapText } from './wrap.js';
 
 export function floorAssumptions(result: FloorSpectra, building: BuildingMode, dtS: number): string[] {
   const out = [
@@ -37,38 +34,24 @@ export function floorTable(
   building: BuildingMode,
   assumptions: string[],
 ): string {
-  const g = STANDARD_GRAVITY_MS2;
-  const out: string[] = [];
-  for (const line of cautionLines(92)) out.push(`! ${line}`);
-  out.push('');
-  out.push(
-    `record    ${ground.record.name} (${ground.record.source}), PGA ${(ground.record.pgaMS2 / g).toFixed(4)} g`,
-  );
-  out.push(
-    `building  T_b ${building.periodS} s, ζ_b ${building.damping}, Γφ ${building.modalFactor}; floor PGA ${(floor.record.pgaMS2 / g).toFixed(4)} g`,
-  );
-  out.push(`method    ${METHOD_DESCRIPTIONS[floor.method]}`);
-  out.push('');
-  const columns = floor.curves.flatMap((curve, d): PeriodColumn[] => {
-    const label = dampingLabel(curve.damping);
-    return [
-      { heading: `ground PSA g @${label}`, width: 18, at: (p) => ground.curves[d].psaMS2[p] / g },
-      { heading: `floor PSA g @${label}`, width: 17, at: (p) => curve.psaMS2[p] / g },
-    ];
-  });
-  out.push(...periodTable(floor.periodsS, columns, true));
-  out.push(`(${floor.periodsS.length} periods; --format json for all of them)`);
-  out.push('');
-  out.push('method and assumptions');
-  for (const line of assumptions) out.push(...wrapText(line, 92, '  - ', '    '));
-  return `${out.join('\n')}\n`;
+  const curves = floor.curves.map((curve, d) => ({ ...curve, ground: ground.curves[d] }));
+  const columns = columnsByDamping(curves, [
+    { name: 'ground_psa_g', heading: 'ground PSA g', width: 18, at: (c, p) => c.ground.psaMS2[p] / G },
+    { name: 'floor_psa_g', heading: 'floor PSA g', width: 17, at: (c, p) => c.psaMS2[p] / G },
+  ]);
+  return terminalText([
+    `record    ${ground.record.name} (${ground.record.source}), ${pgaText(ground.record.pgaMS2)}`,
+    `building  T_b ${building.periodS} s, ζ_b ${building.damping}, Γφ ${building.modalFactor}; floor ${pgaText(floor.record.pgaMS2)}`,
+    `method    ${METHOD_DESCRIPTIONS[floor.method]}`,
+    '',
+    ...periodTable(floor.periodsS, columns, true),
+    `(${floor.periodsS.length} periods; --format json for all of them)`,
+    ...assumptionLines(assumptions),
+  ]);
 }
 
 const psaCurvesG = (spectrum: Spectrum) =>
-  spectrum.curves.map((curve) => ({
-    damping: curve.damping,
-    psa_g: toG(curve.psaMS2),
-  }));
+  spectrum.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2) }));
 
 /** The JSON of `quakesweep floor`: the floor spectrum's, with the building, the ground and the assumptions. */
 export function floorToJson(
@@ -97,7 +80,7 @@ export function floorToJson(
     ground: {
       name: ground.record.name,
       source: ground.record.source,
-      pga_g: ground.record.pgaMS2 / STANDARD_GRAVITY_MS2,
+      pga_g: ground.record.pgaMS2 / G,
       spectra: psaCurvesG(ground),
     },
     assumptions,

@@ -1,9 +1,10 @@
-import { CAUTION, cautionLines } from '../base/caution.js';
+import { CAUTION } from '../base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
 import type { GroundRecord } from '../record/record.js';
 import type { PredominantPeriod } from '../spectrum/predominant.js';
+import { terminalText } from './layout.js';
 
 /** How each measure is computed, stated in the JSON and under the table. */
 export const INFO_METHODS = {
@@ -63,54 +64,39 @@ export type InfoJson = ReturnType<typeof infoToJson>;
 
 /** A readable table for the terminal: the caution first, then one measure a line. */
 export function infoTable(json: InfoJson): string {
-  const out: string[] = [];
-  for (const line of cautionLines(92)) out.push(`! ${line}`);
-  out.push('');
   const r = json.record;
-  out.push(
-    `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dt_s} s, ${fixed(r.duration_s, 2)} s long`,
-  );
-  if (json.processing.steps.length === 0) out.push('        processed: nothing (as read)');
-  for (const step of json.processing.steps) out.push(`        processed: ${step.description}`);
-  out.push('');
-  const at = (t: number) => `at t = ${fixed(t, 3)} s`;
+  const fourDigits = (value: number) => value.toPrecision(4);
+  const seconds = (value: number) => value.toFixed(2);
+  const at = (t: number) => `at t = ${t.toFixed(3)} s`;
+  const steps = json.processing.steps.map((step) => step.description);
+  const bracket =
+    json.bracket_start_s === null
+      ? 'threshold never reached'
+      : `${seconds(json.bracket_start_s)} to ${seconds(json.bracket_end_s ?? 0)} s`;
+  const meanPeriod = json.mean_period_s === null ? '—' : fourDigits(json.mean_period_s);
+  const band = `${json.mean_period_band_hz[0]}–${fourDigits(json.mean_period_band_hz[1])} Hz`;
+  const predominantPsa = `PSA ${fourDigits(json.predominant_psa_g)} g at 5%`;
   const rows: [string, string, string, string][] = [
-    ['PGA', sig(json.pga_g), 'g', at(json.pga_time_s)],
-    ['PGV', sig(json.pgv_m_s), 'm/s', at(json.pgv_time_s)],
-    ['PGD', sig(json.pgd_m), 'm', at(json.pgd_time_s)],
-    ['Arias intensity', sig(json.arias_m_s), 'm/s', ''],
-    ['D5–75', fixed(json.d5_75_s, 2), 's', `${fixed(json.t5_s, 2)} to ${fixed(json.t75_s, 2)} s`],
-    ['D5–95', fixed(json.d5_95_s, 2), 's', `${fixed(json.t5_s, 2)} to ${fixed(json.t95_s, 2)} s`],
-    [
-      `bracketed (${json.bracket_threshold_g} g)`,
-      fixed(json.bracketed_duration_s, 2),
-      's',
-      json.bracket_start_s === null
-        ? 'threshold never reached'
-        : `${fixed(json.bracket_start_s, 2)} to ${fixed(json.bracket_end_s ?? 0, 2)} s`,
-    ],
-    ['CAV', sig(json.cav_m_s), 'm/s', ''],
-    [
-      'mean period T_m',
-      json.mean_period_s === null ? '—' : sig(json.mean_period_s),
-      's',
-      `${json.mean_period_band_hz[0]}–${sig(json.mean_period_band_hz[1])} Hz`,
-    ],
-    ['predominant period', sig(json.predominant_period_s), 's', `PSA ${sig(json.predominant_psa_g)} g at 5%`],
+    ['PGA', fourDigits(json.pga_g), 'g', at(json.pga_time_s)],
+    ['PGV', fourDigits(json.pgv_m_s), 'm/s', at(json.pgv_time_s)],
+    ['PGD', fourDigits(json.pgd_m), 'm', at(json.pgd_time_s)],
+    ['Arias intensity', fourDigits(json.arias_m_s), 'm/s', ''],
+    ['D5–75', seconds(json.d5_75_s), 's', `${seconds(json.t5_s)} to ${seconds(json.t75_s)} s`],
+    ['D5–95', seconds(json.d5_95_s), 's', `${seconds(json.t5_s)} to ${seconds(json.t95_s)} s`],
+    [`bracketed (${json.bracket_threshold_g} g)`, seconds(json.bracketed_duration_s), 's', bracket],
+    ['CAV', fourDigits(json.cav_m_s), 'm/s', ''],
+    ['mean period T_m', meanPeriod, 's', band],
+    ['predominant period', fourDigits(json.predominant_period_s), 's', predominantPsa],
   ];
   const width = Math.max(...rows.map((row) => row[0].length));
-  for (const [label, value, unit, note] of rows) {
-    out.push(`${label.padEnd(width)}  ${value.padStart(10)} ${unit.padEnd(4)} ${note}`.trimEnd());
-  }
-  out.push('');
-  for (const [key, text] of Object.entries(json.methods)) out.push(`${key.replace(/_/g, ' ')}: ${text}`);
-  return `${out.join('\n')}\n`;
-}
-
-function sig(value: number): string {
-  return value.toPrecision(4);
-}
-
-function fixed(value: number, digits: number): string {
-  return value.toFixed(digits);
+  return terminalText([
+    `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dt_s} s, ${seconds(r.duration_s)} s long`,
+    ...(steps.length === 0 ? ['nothing (as read)'] : steps).map((step) => `        processed: ${step}`),
+    '',
+    ...rows.map(([label, value, unit, note]) =>
+      `${label.padEnd(width)}  ${value.padStart(10)} ${unit.padEnd(4)} ${note}`.trimEnd(),
+    ),
+    '',
+    ...Object.entries(json.methods).map(([key, text]) => `${key.replace(/_/g, ' ')}: ${text}`),
+  ]);
 }

@@ -1,8 +1,7 @@
-import { cautionLines } from '../base/caution.js';
-import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import type { Spectrum } from '../spectrum/spectrum.js';
+import { STANDARD_GRAVITY_MS2 as G, LENGTH_UNITS, type LengthUnit } from '../base/units.js';
+import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
-import { assertFiniteResult } from './finite.js';
+import { columnsByDamping, csvText } from './layout.js';
 import { targetCsvNotes } from './target.js';
 
 export interface CsvOptions {
@@ -12,9 +11,16 @@ export interface CsvOptions {
   target?: TargetFit;
 }
 
-/** Percent label of a damping ratio, e.g. 0.05 → "5%". */
-export function dampingLabel(damping: number): string {
-  return `${Number((damping * 100).toPrecision(6))}%`;
+/** The columns of a spectrum, SD, PSV, PSA, SV and SA per damping; the terminal table shows SD and PSA. */
+export function spectrumColumns(spectrum: Spectrum, unit: LengthUnit) {
+  const perLength = 1 / LENGTH_UNITS[unit];
+  return columnsByDamping<SpectrumCurve>(spectrum.curves, [
+    { name: `sd_${unit}`, heading: `SD ${unit}`, width: 14, at: (c, p) => c.sdM[p] * perLength },
+    { name: `psv_${unit}_s`, at: (c, p) => c.psvMS[p] * perLength },
+    { name: 'psa_g', heading: 'PSA g', width: 12, at: (c, p) => c.psaMS2[p] / G },
+    { name: `sv_${unit}_s`, at: (c, p) => c.svMS[p] * perLength },
+    { name: 'sa_g', at: (c, p) => c.saMS2[p] / G },
+  ]);
 }
 
 /**
@@ -22,44 +28,15 @@ export function dampingLabel(damping: number): string {
  * record and method on leading `#` lines.
  */
 export function spectrumToCsv(spectrum: Spectrum, options: CsvOptions = {}): string {
-  const unit = options.lengthUnit ?? 'm';
-  assertFiniteResult([
-    spectrum.periodsS,
-    ...spectrum.curves.map((c) => [c.sdM, c.psvMS, c.psaMS2, c.svMS, c.saMS2]),
-  ]);
-  const perLength = 1 / LENGTH_UNITS[unit];
-  const lines = cautionLines().map((line) => `# ${line}`);
-  lines.push(
-    `# record: ${oneLine(spectrum.record.name)}; npts ${spectrum.record.npts}; dt ${spectrum.record.dtS} s`,
-  );
-  lines.push(`# method: ${spectrum.method}`);
-  for (const step of spectrum.record.processing) lines.push(`# processing: ${oneLine(step.description)}`);
+  const { record } = spectrum;
   const target = options.target;
-  if (target !== undefined) lines.push(...targetCsvNotes(target));
-  const header = ['period_s'];
-  for (const curve of spectrum.curves) {
-    const d = dampingLabel(curve.damping);
-    header.push(`sd_${unit}@${d}`, `psv_${unit}_s@${d}`, `psa_g@${d}`, `sv_${unit}_s@${d}`, `sa_g@${d}`);
-  }
-  if (target !== undefined) header.push('target_psa_g');
-  lines.push(header.join(','));
-  for (let p = 0; p < spectrum.periodsS.length; p++) {
-    const row = [String(spectrum.periodsS[p])];
-    for (const curve of spectrum.curves) {
-      row.push(
-        String(curve.sdM[p] * perLength),
-        String(curve.psvMS[p] * perLength),
-        String(curve.psaMS2[p] / STANDARD_GRAVITY_MS2),
-        String(curve.svMS[p] * perLength),
-        String(curve.saMS2[p] / STANDARD_GRAVITY_MS2),
-      );
-    }
-    if (target !== undefined) row.push(target.psaG[p] === null ? '' : String(target.psaG[p]));
-    lines.push(row.join(','));
-  }
-  return `${lines.join('\n')}\n`;
-}
-
-function oneLine(text: string): string {
-  return text.replace(/[\r\n]+/g, ' ');
+  const notes = [
+    `record: ${record.name}; npts ${record.npts}; dt ${record.dtS} s`,
+    `method: ${spectrum.method}`,
+    ...record.processing.map((step) => `processing: ${step.description}`),
+    ...(target === undefined ? [] : targetCsvNotes(target)),
+  ];
+  const columns = spectrumColumns(spectrum, options.lengthUnit ?? 'm');
+  if (target !== undefined) columns.push({ name: 'target_psa_g', at: (p) => target.psaG[p] });
+  return csvText(notes, spectrum.periodsS, columns);
 }

@@ -4,30 +4,12 @@ import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { assertFiniteResult } from './finite.js';
 
-/** The JSON contract of `quakesweep spectrum` (keys and units are relied on by scripts). */
-export interface SpectrumJson {
-  caution: string;
-  record: { name: string; source: string; npts: number; dt_s: number; pga_g: number; processing: unknown[] };
-  method: string;
-  method_description: string;
-  periods_s: number[];
-  spectra: {
-    damping: number;
-    sd_m: number[];
-    psv_m_s: number[];
-    psa_g: number[];
-    sv_m_s: number[];
-    sa_g: number[];
-  }[];
-  [extra: string]: unknown;
-}
-
 /** Accelerations, m/s², in g. */
 export const toG = (values: Float64Array): number[] =>
   Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
 
 /** The `record` object of the JSON outputs: name, source, npts, dt_s, pga_g and processing. */
-export function recordToJson(record: Spectrum['record']): SpectrumJson['record'] {
+export function recordToJson(record: Spectrum['record']) {
   return {
     name: record.name,
     source: record.source,
@@ -38,7 +20,8 @@ export function recordToJson(record: Spectrum['record']): SpectrumJson['record']
   };
 }
 
-export function spectrumToJson(spectrum: Spectrum): SpectrumJson {
+/** The JSON contract of `quakesweep spectrum` (keys and units are relied on by scripts). */
+export function spectrumToJson(spectrum: Spectrum) {
   return {
     caution: CAUTION,
     record: recordToJson(spectrum.record),
@@ -55,6 +38,8 @@ export function spectrumToJson(spectrum: Spectrum): SpectrumJson {
     })),
   };
 }
+
+export type SpectrumJson = ReturnType<typeof spectrumToJson>;
 
 /**
  * JSON text with two-space indentation and numbers in full precision (same input, same bytes).

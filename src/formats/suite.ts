@@ -1,7 +1,7 @@
 import { CAUTION } from '../base/caution.js';
 import { compareText } from '../batch/glob.js';
 import type { Shard } from '../batch/shard.js';
-import { STATISTICS_METHOD, type SuiteCurve, suiteStatistics } from '../batch/statistics.js';
+import { STATISTICS_METHOD, suiteStatistics } from '../batch/statistics.js';
 import type { RecordOutcome, SuiteSettings } from '../batch/work.js';
 
 /** A record of the suite that was swept, with its PSA in g (per damping, per period). */
@@ -16,22 +16,12 @@ export interface SuiteFailure {
   error: string;
 }
 
-/** The contract of DIR/suite.json. */
-export interface SuiteJson {
-  caution: string;
-  records: string[];
-  failed: SuiteFailure[];
-  periods_s: number[];
-  statistics: string;
-  spectra: SuiteCurve[];
-}
-
 /** suite.json of a set of records: names and failures sorted, statistics over the records by name. */
 export function suiteJson(
   records: readonly SuiteRecord[],
   failed: readonly SuiteFailure[],
   settings: Pick<SuiteSettings, 'periodsS' | 'dampings'>,
-): SuiteJson {
+) {
   const sorted = [...records].sort((a, b) => compareText(a.name, b.name));
   return {
     caution: CAUTION,
@@ -45,40 +35,33 @@ export function suiteJson(
 
 export const SHARD_FORMAT = 'quakesweep-shard-1';
 
-/** What one shard writes (DIR/shard-i-of-N.json): enough to merge to the same suite.json exactly. */
-export interface ShardJson {
-  caution: string;
-  format: typeof SHARD_FORMAT;
-  shard: Shard;
-  /** Every file of the whole run, sorted, so that a merge can check the shards belong together. */
-  all_files: string[];
-  settings: SuiteSettings;
-  records: SuiteRecord[];
-  failed: SuiteFailure[];
-}
-
 export function shardFileName(shard: Shard): string {
   return `shard-${shard.index}-of-${shard.count}.json`;
 }
 
-/** DIR/shard-i-of-N.json of one shard's run. */
+/**
+ * What one shard writes (DIR/shard-i-of-N.json): enough to merge to the same suite.json exactly;
+ * `allFiles`, every file of the whole run, sorted, lets a merge check the shards belong together.
+ */
 export function shardJson(
   shard: Shard,
   allFiles: string[],
   settings: SuiteSettings,
   records: SuiteRecord[],
   failed: SuiteFailure[],
-): ShardJson {
+) {
   return { caution: CAUTION, format: SHARD_FORMAT, shard, all_files: allFiles, settings, records, failed };
 }
 
+export type ShardJson = ReturnType<typeof shardJson>;
+
 /** A run's outcomes as suite records and failures, the patterns that matched no file failing first. */
-export function suiteOutcomes(
-  outcomes: readonly RecordOutcome[],
-  unmatched: readonly string[],
-): { records: SuiteRecord[]; failed: SuiteFailure[] } {
+export function suiteOutcomes(outcomes: readonly RecordOutcome[], unmatched: readonly string[]) {
   const records: SuiteRecord[] = [];
-  const failed = unmatched.map((pattern) => ({ file: pattern, error: `${pattern}: no file matches` }));
+  const failed: SuiteFailure[] = unmatched.map((pattern) => ({
+    file: pattern,
+    error: `${pattern}: no file matches`,
+  }));
   for (const outcome of outcomes) {
     if (outcome.ok) records.push({ name: outcome.name, file: outcome.file, psaG: outcome.psaG });
     else failed.push({ file: outcome.file, error: outcome.error });

@@ -1,4 +1,5 @@
 import type { TargetFit } from '../spectrum/target.js';
+import { dampingLabel } from './layout.js';
 
 /** The keys a target adds to the spectrum JSON. */
 export function targetToJson(fit: TargetFit) {
@@ -24,12 +25,12 @@ export function targetToJson(fit: TargetFit) {
   };
 }
 
-/** The `#` lines a target adds to the spectrum CSV, before its header. */
+/** The notes a target adds to the spectrum CSV. */
 export function targetCsvNotes(fit: TargetFit): string[] {
   return [
-    `# target: ${fit.description.replace(/[\r\n]+/g, ' ')}`,
-    `# scaling: factor ${fit.factor} over ${fit.rangeS[0]}-${fit.rangeS[1]} s (${fit.periodCount} periods); record/target after scaling mean ${fit.meanRatio} min ${fit.minRatio} max ${fit.maxRatio}; ${fit.applied ? 'applied' : 'not applied'}`,
-    `# scaling criterion: ${fit.criterion}`,
+    `target: ${fit.description}`,
+    `scaling: factor ${fit.factor} over ${fit.rangeS[0]}-${fit.rangeS[1]} s (${fit.periodCount} periods); record/target after scaling mean ${fit.meanRatio} min ${fit.minRatio} max ${fit.maxRatio}; ${fit.applied ? 'applied' : 'not applied'}`,
+    `scaling criterion: ${fit.criterion}`,
   ];
 }
 
@@ -38,7 +39,7 @@ export function targetTableLines(fit: TargetFit): string[] {
   const f = (value: number) => value.toPrecision(4);
   return [
     `target  ${fit.description}`,
-    `scale   × ${f(fit.factor)} to match it at ${Number((100 * fit.damping).toPrecision(6))}% over ${fit.rangeS[0]}–${fit.rangeS[1]} s (${fit.periodCount} periods)${fit.applied ? ', applied to every number above' : ', not applied (--apply-scale)'}`,
+    `scale   × ${f(fit.factor)} to match it at ${dampingLabel(fit.damping)} over ${fit.rangeS[0]}–${fit.rangeS[1]} s (${fit.periodCount} periods)${fit.applied ? ', applied to every number above' : ', not applied (--apply-scale)'}`,
     `        after scaling, record/target: mean ${f(fit.meanRatio)}, min ${f(fit.minRatio)}, max ${f(fit.maxRatio)}`,
     `        criterion: ${fit.criterion}`,
   ];

@@ -10,10 +10,7 @@ interface PlannedFile {
   option: string;
 }
 
-interface PlannedFolder {
-  path: string;
-  option: string;
-}
+type PlannedFolder = Omit<PlannedFile, 'contents'>;
 
 /**
  * Every output of one command, checked together before any is written: no two at one path, none
@@ -62,7 +59,11 @@ export class OutputSet {
       .map((input) => ({ input, real: realPath(input) }));
     const seen = new Map<string, PlannedFile>();
     for (const file of this.files) {
-      checkFile(file.path, planned);
+      const target = resolve(file.path);
+      if (!isFolder(dirname(target)) && !planned.has(dirname(target))) {
+        throw inputError(`cannot write ${file.path}: folder ${dirname(file.path)} does not exist`);
+      }
+      if (isFolder(target)) throw inputError(`cannot write ${file.path}: it is a folder`);
       const key = realPath(file.path);
       const other = seen.get(key);
       if (other !== undefined) {
@@ -87,15 +88,12 @@ export class OutputSet {
   }
 }
 
-/**
- * Write `contents` to `path` atomically, after the checks of an output set: its folder exists, it
- * is not a folder, and it is not one of the `protect`ed inputs.
- */
+/** Write one file atomically, after the checks of an output set, none of the `protect`ed inputs. */
 export function writeFileAtomic(
   path: string,
   contents: string | Uint8Array,
   protect: readonly string[] = [],
-): void {
+) {
   new OutputSet(protect).file(path, contents).write();
 }
 
@@ -106,23 +104,13 @@ export function writeFileAtomic(
 export function checkFolder({ path, option }: PlannedFolder, planned: ReadonlySet<string> = new Set()): void {
   const full = resolve(path);
   if (existsSync(full)) {
-    if (!statSync(full).isDirectory()) throw usageError(`${option} ${path}: exists and is not a folder`);
+    if (!isFolder(full)) throw usageError(`${option} ${path}: exists and is not a folder`);
   } else if (!existsSync(dirname(full)) && !planned.has(dirname(full))) {
     throw usageError(`${option} ${path}: its parent folder does not exist`);
   }
 }
 
-function checkFile(path: string, plannedFolders: ReadonlySet<string>): void {
-  const target = resolve(path);
-  const folder = dirname(target);
-  const folderExists = existsSync(folder) && statSync(folder).isDirectory();
-  if (!folderExists && !plannedFolders.has(folder)) {
-    throw inputError(`cannot write ${path}: folder ${dirname(path)} does not exist`);
-  }
-  if (existsSync(target) && statSync(target).isDirectory()) {
-    throw inputError(`cannot write ${path}: it is a folder`);
-  }
-}
+const isFolder = (path: string) => existsSync(path) && statSync(path).isDirectory();
 
 /** The real path of a file, or of its folder joined with its name when it does not exist yet. */
 function realPath(path: string): string {

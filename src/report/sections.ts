@@ -1,5 +1,5 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import { dampingLabel } from '../formats/spectrum-csv.js';
+import { dampingLabel } from '../formats/layout.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
 import type { DampingComparison } from '../spectrum/damping.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CAUTION, cautionLines } from '../../src/base/caution.js';
+import { CAUTION, cautionLines, wrapText } from '../../src/base/caution.js';
 
 describe('the standing caution', () => {
   it('says the results are preliminary and must be reviewed by a licensed engineer', () => {
@@ -25,5 +25,18 @@ describe('the standing caution', () => {
     const lines = cautionLines(5);
     expect(lines.join(' ')).toBe(CAUTION);
     expect(lines).toContain('Preliminary');
+  });
+});
+
+describe('wrapText', () => {
+  it('wraps greedily at the width, the first line after its prefix, the rest after theirs', () => {
+    const lines = wrapText('one two three four five six', 14, 'Note: ', '      ');
+    expect(lines).toEqual(['Note: one two', '      three', '      four', '      five six']);
+    for (const line of lines) expect(line.length).toBeLessThanOrEqual(14);
+  });
+
+  it('keeps a word longer than the width whole, and one short text on one line', () => {
+    expect(wrapText('a extraordinarily b', 6)).toEqual(['a', 'extraordinarily', 'b']);
+    expect(wrapText('short', 80, '- ', '  ')).toEqual(['- short']);
   });
 });

@@ -1,12 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import {
   ACCELERATION_UNITS,
-  gFromMS2,
   LENGTH_UNITS,
   parseAccelerationUnit,
   parseLengthUnit,
   STANDARD_GRAVITY_MS2,
-  toMetresPerSecondSquared,
 } from '../../src/base/units.js';
 import { UNIT_FACTOR } from '../helpers/fuzz-records.js';
 
@@ -28,13 +26,6 @@ describe('unit factors', () => {
     expect(LENGTH_UNITS).toEqual({ m: 1, cm: 0.01, mm: 0.001, in: 0.0254, ft: 0.3048 });
     expect(LENGTH_UNITS.ft / LENGTH_UNITS.in).toBeCloseTo(12, 12); // 12 in to the foot
   });
-
-  it('converts to m/s² and back to g', () => {
-    expect(toMetresPerSecondSquared(981, 'gal')).toBeCloseTo(9.81, 12);
-    expect(toMetresPerSecondSquared(1, 'ft/s2')).toBeCloseTo(0.3048, 15);
-    expect(gFromMS2(9.80665)).toBe(1);
-    expect(gFromMS2(toMetresPerSecondSquared(0.35, 'g'))).toBeCloseTo(0.35, 15);
-  });
 });
 
 describe('parseAccelerationUnit', () => {
@@ -44,6 +35,12 @@ describe('parseAccelerationUnit', () => {
     expect(parseAccelerationUnit('m/s²')).toBe('m/s2');
     expect(parseAccelerationUnit('Gal')).toBe('gal');
     expect(parseAccelerationUnit('in/s^2')).toBe('in/s2');
+    // Every unit per second squared in its three spellings (common practice in record headers).
+    for (const unit of Object.keys(ACCELERATION_UNITS).filter((name) => name.endsWith('/s2'))) {
+      for (const spelling of ['s2', 's^2', 's²']) {
+        expect(parseAccelerationUnit(unit.replace(/s2$/, spelling).toUpperCase())).toBe(unit);
+      }
+    }
   });
 
   it('never guesses: a missing unit is refused, naming --units and the accepted names', () => {
@@ -54,10 +51,14 @@ describe('parseAccelerationUnit', () => {
     }
   });
 
-  it('refuses an unknown unit, quoting it', () => {
+  it('refuses an unknown unit, quoting it, and the names of the object prototype', () => {
     expect(() => parseAccelerationUnit('furlong/s2')).toThrow(
       /^unknown acceleration unit 'furlong\/s2'; accepted: g,/,
     );
+    // Keys every object has are no units (a plain `in` test would take them).
+    for (const name of ['toString', 'constructor', 's^2']) {
+      expect(() => parseAccelerationUnit(name)).toThrow(/unknown acceleration unit/);
+    }
   });
 });
 
@@ -66,5 +67,6 @@ describe('parseLengthUnit', () => {
     expect(parseLengthUnit(' MM ')).toBe('mm');
     expect(parseLengthUnit('ft')).toBe('ft');
     expect(() => parseLengthUnit('yd')).toThrow("unknown length unit 'yd'; accepted: m, cm, mm, in, ft");
+    expect(() => parseLengthUnit('constructor')).toThrow(/unknown length unit/);
   });
 });

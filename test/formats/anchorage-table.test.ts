@@ -1,0 +1,82 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { analyseAnchorage } from '../../src/anchorage/anchorage.js';
+import { parseEquipment } from '../../src/anchorage/equipment.js';
+import { anchorTable } from '../../src/formats/anchorage-table.js';
+import { block, expectAligned, expectCaution } from '../helpers/outputs.js';
+
+const generatorJson = JSON.parse(readFileSync('records/equipment-generator.json', 'utf8'));
+const equipment = (changes: object) => parseEquipment(JSON.stringify({ ...generatorJson, ...changes }), 'e');
+const generator = equipment({});
+const elastic = { psaG: 0.9, how: 'h', source: 's' };
+
+describe('anchorTable', () => {
+  const analysis = analyseAnchorage(equipment({ omega0: 2 }), { elastic, demand: 'max' });
+  const text = anchorTable(analysis);
+  const lines = text.split('\n');
+
+  it('opens with the caution, then the scope and the equipment in its own units', () => {
+    expectCaution(text, '! ');
+    expect(lines.find((line) => line.startsWith('scope     '))).toBeDefined();
+    expect(text).toContain('equipment Generator G-1 (invented) (SI: kN, m)');
+    expect(text).toContain('          W_p 45.00 kN, h_cg 1.1 m, 4 anchors, T rigid');
+  });
+
+  it('writes the horizontal forces with their values right-aligned in one column', () => {
+    const rows = block(text, 'horizontal').slice(1);
+    expect(rows.map((row) => row.trim().split(/ {2,}/)[0])).toEqual([
+      'F_p code (ASCE 7-16 Eq. 13.3-1)',
+      'F_p code, bounded',
+      'Ω₀·F_p',
+      'record elastic PSA·W_p',
+      'for the anchors (--demand max)',
+      'vertical',
+    ]);
+    // §13.3.1.2 by hand: E_v = 0.2·1.0·45 = 9 kN.
+    expect(rows[5]).toBe('vertical  E_v = ±0.2 S_DS W_p = 9.000 kN');
+    // The force column ends with the unit, at one place, after the longest label (one row wider).
+    const ends = rows.slice(0, 5).map((row) => row.indexOf(' kN'));
+    expect(ends.slice(1, 4)).toEqual([ends[1], ends[1], ends[1]]);
+    expect(ends[0]).toBe(ends[1] + 1);
+    // ASCE 7-16 by hand: F_p 33.75 kN, Ω₀·F_p 67.50 kN; PSA·W_p = 0.9·45 = 40.50 kN; max: 67.50 governs.
+    expect(rows[2]).toMatch(/ 67\.50 kN$/);
+    expect(rows[3]).toMatch(/ 40\.50 kN {3}\(PSA 0\.9000 g\)$/);
+    expect(rows[4]).toMatch(/ 67\.50 kN {3}governing: code$/);
+  });
+
+  it('lists each anchor’s worst forces in aligned columns, marking the one that governs', () => {
+    const table = block(text, '    #').filter((line) => !line.startsWith('  max tension'));
+    const [heading, ...rows] = table;
+    expect(heading.trim().split(/ {2,}/)).toEqual([
+      '#',
+      'x m',
+      'y m',
+      'tension kN',
+      'at °',
+      'shear kN',
+      'at °',
+    ]);
+    const marked = rows.filter((row) => row.endsWith('  governs'));
+    expect(marked).toHaveLength(1);
+    expectAligned(
+      heading,
+      rows.map((row) => row.replace(/ {2}governs$/, '')),
+    );
+    const governing = analysis.anchors.governingAnchor;
+    expect(rows[governing].trim().startsWith(`${governing + 1} `)).toBe(true);
+    expect(text).toContain(`max tension ${analysis.anchors.maxTension.toPrecision(4)} kN`);
+  });
+
+  it('says when no anchor goes into tension, and closes with the assumptions', () => {
+    // At h_cg = 0 there is no overturning moment, so the dead load leaves every anchor in compression.
+    const flat = anchorTable(
+      analyseAnchorage(equipment({ cg_height: 0 }), { elastic: null, demand: 'code' }),
+    );
+    expect(flat).toContain('no anchor goes into tension');
+    expect(anchorTable(analyseAnchorage(generator, { elastic: null, demand: 'code' }))).not.toContain(
+      'no anchor goes into tension',
+    );
+    expect(lines).toContain('method and assumptions');
+    expect(lines.at(-2)?.startsWith('    ') || lines.at(-2)?.startsWith('  - ')).toBe(true);
+  });
+});
