@@ -53,21 +53,12 @@ export function analyseAnchorage(
   options: { elastic: ElasticInput | null; demand: DemandChoice; anchorRule?: AnchorRule },
 ): AnchorageAnalysis {
   const { demand, elastic } = options;
-  const anchorRule = options.anchorRule ?? 'projected';
   if (demand !== 'code' && elastic === null) {
     throw usageError(
       `--demand ${demand} needs a ground motion: give --record or --spectrum (or use --demand code)`,
     );
   }
-  const code = codeHorizontalForce({
-    weight: equipment.weightKN,
-    z: equipment.zM,
-    h: equipment.hM,
-    ap: equipment.ap,
-    rp: equipment.rp,
-    ip: equipment.ip,
-    sds: equipment.sds,
-  });
+  const code = codeHorizontalForce(equipment);
   const omega0 = equipment.omega0 ?? 1;
   const codeForAnchorsKN = omega0 * code.fp;
   const elasticKN = elastic === null ? null : elastic.psaG * equipment.weightKN;
@@ -81,9 +72,9 @@ export function analyseAnchorage(
     cgHeight: equipment.cgHeightM,
     horizontalForce: horizontalForAnchorsKN,
     deadLoad: deadLoadFactor * equipment.weightKN,
-    rule: anchorRule,
+    rule: options.anchorRule,
   });
-  return {
+  const analysis = {
     equipment,
     code,
     codeForAnchorsKN,
@@ -92,21 +83,15 @@ export function analyseAnchorage(
     demand,
     governing,
     horizontalForAnchorsKN,
-    verticalKN: verticalForce({ weight: equipment.weightKN, sds: equipment.sds }),
+    verticalKN: verticalForce(equipment),
     deadLoadFactor,
     anchors,
-    assumptions: assumptionsOf(equipment, code, elastic, governing, deadLoadFactor, anchorRule),
   };
+  return { ...analysis, assumptions: assumptionsOf(analysis) };
 }
 
-function assumptionsOf(
-  equipment: Equipment,
-  code: CodeForce,
-  elastic: ElasticInput | null,
-  governing: 'code' | 'record',
-  deadLoadFactor: number,
-  anchorRule: AnchorRule,
-): string[] {
+function assumptionsOf(analysis: Omit<AnchorageAnalysis, 'assumptions'>): string[] {
+  const { equipment, code, elastic, governing, deadLoadFactor } = analysis;
   const out: string[] = [
     'Code force: ASCE/SEI 7-16 §13.3.1, F_p = 0.4 a_p S_DS W_p (1 + 2z/h)/(R_p/I_p), bounded by ' +
       '0.3 S_DS I_p W_p and 1.6 S_DS I_p W_p; a_p, R_p, I_p and S_DS are as given in the equipment file ' +
@@ -114,7 +99,7 @@ function assumptionsOf(
     'Vertical: E_v = 0.2 S_DS W_p (§13.3.1.2); in the anchor tension it enters through the dead load ' +
       `(0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p of ASCE/SEI 7-16 §2.3.6, which counteracts uplift.`,
     'Anchors: rigid base, elastic bolt group about the anchors’ centroid, all anchors of equal stiffness ' +
-      `in tension and compression; ${ANCHOR_RULE_TEXT[anchorRule]} ` +
+      `in tension and compression; ${ANCHOR_RULE_TEXT[analysis.anchors.rule]} ` +
       'The base’s bearing on the support is not modelled. Horizontal force at the ' +
       'centre-of-mass height; overturning M = F·h_cg; every direction of shaking 0–360° (1° steps, refined to ' +
       'each anchor’s exact worst direction); one horizontal direction at a time (no orthogonal combination).',
