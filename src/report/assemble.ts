@@ -1,15 +1,12 @@
-import { analyseAnchorage } from '../anchorage/anchorage.js';
 import type { Equipment } from '../anchorage/equipment.js';
 import type { LengthUnit } from '../base/units.js';
 import { VERSION } from '../base/version.js';
-import { anchorageToJson } from '../formats/anchorage-json.js';
-import { anchorPlanInput } from '../formats/anchorage-plan.js';
 import { INFO_METHODS } from '../formats/info.js';
 import { spectrumToCsv } from '../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
 import { targetToJson } from '../formats/target.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import { anchorPlanSvg, dampingFigure, rotdFigure } from '../plot/index.js';
+import { dampingFigure, rotdFigure } from '../plot/index.js';
 import { groundMotionMeasures } from '../record/measures.js';
 import type { GroundRecord } from '../record/record.js';
 import { compareDamping } from '../spectrum/damping.js';
@@ -18,8 +15,8 @@ import type { BuildingMode } from '../spectrum/floor.js';
 import { responseSpectrum, rotdThreads } from '../spectrum/spectrum.js';
 import { fitTarget, targetOverlay, targetRecord } from '../spectrum/target.js';
 import { rotDSpectraParallel } from '../threads/rotd-pool.js';
-import { equipmentDemand } from './equipment-demand.js';
-import { type ReportFigure, type ReportInput, renderReport } from './report.js';
+import { equipmentAnchorage } from './equipment-demand.js';
+import { type ReportInput, renderReport } from './report.js';
 import { spectrumFigures } from './spectrum-figures.js';
 
 /** What a report is made of: records already read and processed, and the choices of its sections. */
@@ -68,13 +65,7 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
   const input: ReportInput = {
     title: request.title ?? `Response spectra of ${record.name}`,
     notes: request.notes ?? [],
-    read: {
-      name: request.read.name,
-      source: request.read.source,
-      dtS: request.read.dtS,
-      npts: request.read.accelMS2.length,
-      unitsRead: request.read.unitsRead,
-    },
+    read: request.read,
     spectrum,
     measures: groundMotionMeasures(record),
     lengthUnit,
@@ -133,39 +124,10 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       `RotD spectra: at ζ = ${damping * 100}% only; both components processed alike and unscaled (a target scaling is not applied to them).`,
     );
   }
-  (request.equipment ?? []).forEach(({ file, value }, i) => {
-    const n = i + 1;
-    const building = request.building ?? null;
-    const demand = equipmentDemand(
-      value,
-      record,
-      building,
-      request.broadening ?? null,
-      grid.periodsS,
-      grid.method,
-    );
-    const analysis = analyseAnchorage(value, {
-      elastic: demand.elastic,
-      demand: demand.elastic === null ? 'code' : 'max',
-    });
-    analysis.assumptions.push(...demand.notes);
-    const figures: ReportFigure[] = [
-      {
-        file: `anchor-plan-${n}.svg`,
-        caption: `Anchor plan of equipment ${n} with the worst tensions`,
-        svg: anchorPlanSvg(anchorPlanInput(analysis)),
-      },
-    ];
-    if (demand.floor !== undefined) {
-      figures.unshift({
-        file: `floor-${n}.svg`,
-        caption: `Floor spectrum for equipment ${n}, with the ground PSA`,
-        svg: demand.floor,
-      });
-    }
-    const json = anchorageToJson(analysis);
-    files.set(`anchorage-${n}.json`, formatJson(json));
-    input.anchorage.push({ item: { json, file, motion: demand.motion }, figures });
+  (request.equipment ?? []).forEach((equipment, i) => {
+    const anchorage = equipmentAnchorage(i + 1, equipment, record, request);
+    files.set(`anchorage-${i + 1}.json`, formatJson(anchorage.item.json));
+    input.anchorage.push(anchorage);
   });
   const figures = [
     ...input.spectrumFigures,

@@ -16,6 +16,7 @@ import {
   type RecordFacts,
   recordSection,
   rotdSection,
+  targetSection,
 } from './sections.js';
 import { REPORT_CSS } from './styles.js';
 
@@ -79,96 +80,54 @@ export const LIMITS_OF_USE = [
  */
 export function renderReport(input: ReportInput): string {
   const sections: { id: string; title: string; body: string }[] = [];
+  const add = (id: string, title: string, ...parts: string[]) => {
+    sections.push({ id, title, body: parts.join('\n') });
+  };
   let tableNumber = 3;
   let figureNumber = 1;
   const figure = (f: ReportFigure, id: string) => {
     const n = figureNumber++;
     return `<figure id="figure-${n}">\n${inlineSvg(f.svg, `${id}-${n}`)}\n<figcaption><strong>Figure ${n}.</strong> ${escapeHtml(f.caption)} (also saved as <code>${escapeHtml(f.file)}</code>)</figcaption>\n</figure>`;
   };
-  sections.push({ id: 'record', title: 'Record', body: recordSection(input.read, input.spectrum.record) });
-  sections.push({
-    id: 'processing',
-    title: 'Processing applied',
-    body: processingSection(input.spectrum.record.processing),
-  });
-  sections.push({ id: 'measures', title: 'Ground-motion measures', body: measuresSection(input.measures) });
-  sections.push({
-    id: 'spectra',
-    title: 'Response spectra',
-    body: [
-      peaksSection(input.spectrum, input.lengthUnit, tableNumber++),
-      paragraph(
-        'All values for every period are in spectra.json and spectra.csv beside this report.',
-        'note',
-      ),
-      ...input.spectrumFigures.map((f) => figure(f, 'spectra')),
-    ].join('\n'),
-  });
-  if (input.target !== undefined) {
-    const t = input.target;
-    sections.push({
-      id: 'target',
-      title: 'Comparison with the target spectrum',
-      body: [
-        definitionTable(`Table ${tableNumber++}. Target and amplitude scaling`, [
-          ['Target', t.description],
-          ['Damping compared', `${formatNumber(t.damping * 100, 6)}%`],
-          ['Scale factor', formatNumber(t.factor, 5)],
-          [
-            'Fitted over',
-            `${formatNumber(t.rangeS[0])} to ${formatNumber(t.rangeS[1])} s (${t.periodCount} grid periods)`,
-          ],
-          [
-            'Scaled record / target',
-            `mean ${formatNumber(t.meanRatio)}, least ${formatNumber(t.minRatio)}, greatest ${formatNumber(t.maxRatio)}`,
-          ],
-          ['Criterion', t.criterion],
-          [
-            'Applied to the spectra of this report',
-            t.applied ? 'yes: every spectral value above is scaled' : 'no: the values above are as recorded',
-          ],
-        ]),
-        paragraph('The target is drawn on the PSA and four-way figures of section 4.', 'note'),
-      ].join('\n'),
-    });
+  const { spectrum, target, damping, rotd } = input;
+  add('record', 'Record', recordSection(input.read, spectrum.record));
+  add('processing', 'Processing applied', processingSection(spectrum.record.processing));
+  add('measures', 'Ground-motion measures', measuresSection(input.measures));
+  add(
+    'spectra',
+    'Response spectra',
+    peaksSection(spectrum, input.lengthUnit, tableNumber++),
+    paragraph('All values for every period are in spectra.json and spectra.csv beside this report.', 'note'),
+    ...input.spectrumFigures.map((f) => figure(f, 'spectra')),
+  );
+  if (target !== undefined) {
+    add('target', 'Comparison with the target spectrum', targetSection(target, tableNumber++));
   }
-  if (input.damping !== undefined) {
-    sections.push({
-      id: 'damping',
-      title: 'Damping comparison',
-      body: [
-        dampingSection(input.damping.comparison, tableNumber++),
-        figure(input.damping.figure, 'damping'),
-      ].join('\n'),
-    });
+  if (damping !== undefined) {
+    const table = dampingSection(damping.comparison, tableNumber++);
+    add('damping', 'Damping comparison', table, figure(damping.figure, 'damping'));
   }
-  if (input.rotd !== undefined) {
-    sections.push({
-      id: 'rotd',
-      title: 'Two horizontal components: RotD50 and RotD100',
-      body: [rotdSection(input.rotd.spectra, tableNumber++), figure(input.rotd.figure, 'rotd')].join('\n'),
-    });
+  if (rotd !== undefined) {
+    const table = rotdSection(rotd.spectra, tableNumber++);
+    add('rotd', 'Two horizontal components: RotD50 and RotD100', table, figure(rotd.figure, 'rotd'));
   }
   if (input.anchorage.length > 0) {
     const parts: string[] = [paragraph(CAUTION, 'caution-inline')];
     input.anchorage.forEach(({ item, figures }, i) => {
       const number = `${sections.length + 1}.${i + 1}`;
+      const name = (item.json.equipment as { name?: unknown }).name ?? item.file;
       parts.push(
-        `<h3>${number} ${escapeHtml(String((item.json.equipment as { name?: unknown }).name ?? item.file))}</h3>`,
+        `<h3>${number} ${escapeHtml(String(name))}</h3>`,
+        anchorageSection(item, number, tableNumber),
       );
-      parts.push(anchorageSection(item, number, tableNumber));
       tableNumber += 3;
       for (const f of figures) parts.push(figure(f, `anchor-${i + 1}`));
     });
-    sections.push({ id: 'anchorage', title: 'Equipment anchorage demands', body: parts.join('\n') });
+    add('anchorage', 'Equipment anchorage demands', ...parts);
   }
-  sections.push({ id: 'method', title: 'Method and assumptions', body: list(input.methods) });
-  sections.push({ id: 'limits', title: 'Limits of use', body: list(LIMITS_OF_USE) });
-  sections.push({
-    id: 'reproduce',
-    title: 'Reproducing this report',
-    body: reproduceSection(input, tableNumber),
-  });
+  add('method', 'Method and assumptions', list(input.methods));
+  add('limits', 'Limits of use', list(LIMITS_OF_USE));
+  add('reproduce', 'Reproducing this report', reproduceSection(input, tableNumber));
 
   const contents = sections
     .map((s, i) => `<li><a href="#${s.id}">${i + 1}. ${escapeHtml(s.title)}</a></li>`)

@@ -2,32 +2,29 @@ import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/uni
 import { dampingLabel } from '../formats/spectrum-csv.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
+import type { GroundRecord } from '../record/record.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
+import type { TargetFit } from '../spectrum/target.js';
 import { type Cell, definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
 
 /** What the report says of the record as it was read (before processing). */
-export interface RecordFacts {
-  name: string;
-  source: string;
-  dtS: number;
-  npts: number;
-  unitsRead: string;
-}
+export type RecordFacts = Pick<GroundRecord, 'name' | 'source' | 'dtS' | 'accelMS2' | 'unitsRead'>;
 
 const g = STANDARD_GRAVITY_MS2;
 
 export function recordSection(read: RecordFacts, processed: { dtS: number; npts: number }): string {
+  const npts = read.accelMS2.length;
   const rows: [string, string][] = [
     ['Name', read.name],
     ['Source file', read.source],
     ['Units read', `${read.unitsRead} (converted to m/s² inside the program)`],
     ['Time step Δt as read', `${read.dtS} s`],
-    ['Samples as read', String(read.npts)],
-    ['Length as read', `${formatNumber((read.npts - 1) * read.dtS, 6)} s`],
+    ['Samples as read', String(npts)],
+    ['Length as read', `${formatNumber((npts - 1) * read.dtS, 6)} s`],
   ];
-  if (processed.dtS !== read.dtS || processed.npts !== read.npts) {
+  if (processed.dtS !== read.dtS || processed.npts !== npts) {
     rows.push(['Time step after processing', `${processed.dtS} s`]);
     rows.push(['Samples after processing', String(processed.npts)]);
   }
@@ -206,5 +203,29 @@ export function rotdSection(spectra: RotDSpectra, tableNumber: number): string {
       'PSA(θ) = ω² max|u₁ cos θ + u₂ sin θ|; RotD50 is the median over the angles and RotD100 the largest (Boore 2010); the geometric mean is √(PSA₁·PSA₂) of the components as recorded.',
       'note',
     ),
+  ].join('\n');
+}
+
+export function targetSection(t: TargetFit, tableNumber: number): string {
+  return [
+    definitionTable(`Table ${tableNumber}. Target and amplitude scaling`, [
+      ['Target', t.description],
+      ['Damping compared', `${formatNumber(t.damping * 100, 6)}%`],
+      ['Scale factor', formatNumber(t.factor, 5)],
+      [
+        'Fitted over',
+        `${formatNumber(t.rangeS[0])} to ${formatNumber(t.rangeS[1])} s (${t.periodCount} grid periods)`,
+      ],
+      [
+        'Scaled record / target',
+        `mean ${formatNumber(t.meanRatio)}, least ${formatNumber(t.minRatio)}, greatest ${formatNumber(t.maxRatio)}`,
+      ],
+      ['Criterion', t.criterion],
+      [
+        'Applied to the spectra of this report',
+        t.applied ? 'yes: every spectral value above is scaled' : 'no: the values above are as recorded',
+      ],
+    ]),
+    paragraph('The target is drawn on the PSA and four-way figures of section 4.', 'note'),
   ].join('\n');
 }
