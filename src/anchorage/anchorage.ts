@@ -11,10 +11,8 @@ import type { Equipment } from './equipment.js';
 
 export type DemandChoice = 'code' | 'record' | 'max';
 
-export const DEMAND_CHOICES: readonly DemandChoice[] = ['code', 'record', 'max'];
-
 export function parseDemandChoice(text: string): DemandChoice {
-  if ((DEMAND_CHOICES as readonly string[]).includes(text)) return text as DemandChoice;
+  if (text === 'code' || text === 'record' || text === 'max') return text;
   throw usageError(`--demand '${text}': use code, record or max`);
 }
 
@@ -92,7 +90,7 @@ export function analyseAnchorage(
 
 function assumptionsOf(analysis: Omit<AnchorageAnalysis, 'assumptions'>): string[] {
   const { equipment, code, elastic, governing, deadLoadFactor } = analysis;
-  const out: string[] = [
+  const lines = [
     'Code force: ASCE/SEI 7-16 §13.3.1, F_p = 0.4 a_p S_DS W_p (1 + 2z/h)/(R_p/I_p), bounded by ' +
       '0.3 S_DS I_p W_p and 1.6 S_DS I_p W_p; a_p, R_p, I_p and S_DS are as given in the equipment file ' +
       '(not chosen by this tool from the standard).',
@@ -107,30 +105,18 @@ function assumptionsOf(analysis: Omit<AnchorageAnalysis, 'assumptions'>): string
       (equipment.cgPlanGiven
         ? ' plus the torsion of the eccentric centre of mass, F·e, shared by the polar moment of the pattern (elastic method).'
         : '; the centre of mass is taken at the anchors’ centroid (no torsion).'),
-  ];
-  if (equipment.cgPlanGiven) {
-    out.push(
+    equipment.cgPlanGiven &&
       'Eccentric centre of mass: the counteracting dead load acts at the given plan position and is shared ' +
         'linearly over the pattern (less relief for anchors far from it); the horizontal force acts at the same point.',
-    );
-  }
-  if (code.heightRatioCapped)
-    out.push('z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.');
-  if (equipment.omega0 !== null) {
-    out.push(
+    code.heightRatioCapped && 'z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.',
+    equipment.omega0 !== null &&
       `Ω₀ = ${equipment.omega0} multiplies the code horizontal force for the anchors (not the dead load, not the record demand).`,
-    );
-  }
-  if (elastic !== null) {
-    out.push(
+    elastic !== null &&
       `Record demand: elastic, PSA·W_p with ${elastic.how} (source: ${elastic.source}); not reduced by R_p nor ` +
         'multiplied by I_p or Ω₀.',
-    );
-  }
-  out.push(
     `Governing horizontal force for the anchors: ${governing === 'code' ? 'the code force' : 'the record demand'}.`,
-  );
-  return out;
+  ];
+  return lines.filter((line): line is string => typeof line === 'string');
 }
 
 /** How each anchor rule shares the overturning moment, one sentence for outputs. */

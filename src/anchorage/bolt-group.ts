@@ -4,10 +4,8 @@ import { secondMoments } from './equipment.js';
 /** How overturning is shared among the anchors: 'projected' or 'biaxial' (both set out at boltGroupForces). */
 export type AnchorRule = 'projected' | 'biaxial';
 
-export const ANCHOR_RULES: readonly AnchorRule[] = ['projected', 'biaxial'];
-
 export function parseAnchorRule(text: string): AnchorRule {
-  if ((ANCHOR_RULES as readonly string[]).includes(text)) return text as AnchorRule;
+  if (text === 'projected' || text === 'biaxial') return text;
   throw usageError(`--anchor-rule '${text}': use projected or biaxial`);
 }
 
@@ -48,8 +46,6 @@ export interface BoltGroupResult {
   maxTensionDirectionDeg: number;
   maxShear: number;
   maxShearDirectionDeg: number;
-  /** Directions evaluated (the regular sweep plus each anchor's exact worst directions). */
-  directionsEvaluated: number;
   rule: AnchorRule;
 }
 
@@ -128,19 +124,13 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     value > worst + tolerance || (Math.abs(value - worst) <= tolerance && deg < worstDeg);
   for (const deg of directions) {
     const [c, s] = unitVector(deg);
-    for (let i = 0; i < n; i++) {
-      const a = perAnchor[i];
+    perAnchor.forEach((a, i) => {
       const tension = k.tension(i, c, s);
-      if (worse(tension, a.tension, deg, a.tensionDirectionDeg)) {
-        a.tension = tension;
-        a.tensionDirectionDeg = deg;
-      }
       const shear = k.shear(i, c, s);
-      if (worse(shear, a.shear, deg, a.shearDirectionDeg)) {
-        a.shear = shear;
-        a.shearDirectionDeg = deg;
-      }
-    }
+      if (worse(tension, a.tension, deg, a.tensionDirectionDeg))
+        [a.tension, a.tensionDirectionDeg] = [tension, deg];
+      if (worse(shear, a.shear, deg, a.shearDirectionDeg)) [a.shear, a.shearDirectionDeg] = [shear, deg];
+    });
   }
   let governingAnchor = 0;
   let shearAnchor = 0;
@@ -156,7 +146,6 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     maxTensionDirectionDeg: perAnchor[governingAnchor].tensionDirectionDeg,
     maxShear: perAnchor[shearAnchor].shear,
     maxShearDirectionDeg: perAnchor[shearAnchor].shearDirectionDeg,
-    directionsEvaluated: directions.length,
     rule,
   };
 }

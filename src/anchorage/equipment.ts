@@ -125,8 +125,7 @@ export function parseEquipment(text: string, file: string): Equipment {
     return value as number;
   };
 
-  const weight = number('weight');
-  const cgHeight = number('cg_height');
+  const [weight, cgHeight] = ['weight', 'cg_height'].map(number);
   const anchors = readPoints(object['anchors'], (message) => fail('anchors', message));
   checkPattern(anchors, (message) => fail('anchors', message));
 
@@ -140,13 +139,7 @@ export function parseEquipment(text: string, file: string): Equipment {
     fail('period_s', `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodS)}`);
   }
 
-  const damping = number('damping');
-  const z = number('z');
-  const h = number('h');
-  const ap = number('ap');
-  const rp = number('rp');
-  const ip = number('ip');
-  const sds = number('sds');
+  const [damping, z, h, ap, rp, ip, sds] = ['damping', 'z', 'h', 'ap', 'rp', 'ip', 'sds'].map(number);
   const omega0 = object['omega0'] == null ? null : number('omega0');
   if (object['notes'] !== undefined && typeof object['notes'] !== 'string') fail('notes', 'must be a string');
 

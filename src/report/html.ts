@@ -19,6 +19,11 @@ export function formatNumber(value: number | null | undefined, digits = 4): stri
   return Number(value.toPrecision(digits)).toString();
 }
 
+/** "a to b s", each with four significant figures. */
+export function span(fromS: number | null, toS: number | null): string {
+  return `${formatNumber(fromS)} to ${formatNumber(toS)} s`;
+}
+
 /**
  * An HTML table with a caption; `header` cells carry their unit in the text (e.g. "PSA (g)").
  * Every cell is escaped; numbers are formatted with four significant figures.

@@ -6,7 +6,7 @@ import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
 import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
-import { definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
+import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';
 import {
   dampingSection,
@@ -100,9 +100,7 @@ export function renderReport(input: ReportInput): string {
     paragraph('All values for every period are in spectra.json and spectra.csv beside this report.', 'note'),
     ...input.spectrumFigures.map((f) => figure(f, 'spectra')),
   );
-  if (target !== undefined) {
-    add('target', 'Comparison with the target spectrum', targetSection(target, tableNumber++));
-  }
+  if (target) add('target', 'Comparison with the target spectrum', targetSection(target, tableNumber++));
   if (damping !== undefined) {
     const table = dampingSection(damping.comparison, tableNumber++);
     add('damping', 'Damping comparison', table, figure(damping.figure, 'damping'));
@@ -162,6 +160,7 @@ ${body}
 }
 
 function reproduceSection(input: ReportInput, tableNumber: number): string {
+  const { periodsS, curves, method } = input.spectrum;
   const command = ['quakesweep', ...input.commandLine].map(shellQuote).join(' ');
   return [
     definitionTable(`Table ${tableNumber}. Program and run`, [
@@ -178,15 +177,9 @@ function reproduceSection(input: ReportInput, tableNumber: number): string {
       `Table ${tableNumber + 1}. Oscillator grid`,
       ['Quantity', 'Value'],
       [
-        [
-          'Periods',
-          `${input.spectrum.periodsS.length}, ${formatNumber(input.spectrum.periodsS[0])} to ${formatNumber(input.spectrum.periodsS[input.spectrum.periodsS.length - 1])} s`,
-        ],
-        [
-          'Damping ratios',
-          input.spectrum.curves.map((c) => `${formatNumber(c.damping * 100, 6)}%`).join(', '),
-        ],
-        ['Step method', input.spectrum.method],
+        ['Periods', `${periodsS.length}, ${span(periodsS[0], periodsS[periodsS.length - 1])}`],
+        ['Damping ratios', curves.map((c) => `${formatNumber(c.damping * 100, 6)}%`).join(', ')],
+        ['Step method', method],
       ],
     ),
   ].join('\n');

@@ -7,7 +7,16 @@ import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
-import { type Cell, definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
+import {
+  type Cell,
+  definitionTable,
+  escapeHtml,
+  formatNumber,
+  list,
+  paragraph,
+  span,
+  table,
+} from './html.js';
 
 /** What the report says of the record as it was read (before processing). */
 export type RecordFacts = Pick<GroundRecord, 'name' | 'source' | 'dtS' | 'accelMS2' | 'unitsRead'>;
@@ -49,20 +58,15 @@ export function measuresSection(m: GroundMotionMeasures): string {
     ['Peak ground velocity PGV', m.pgv.value, 'm/s', at(m.pgv.timeS)],
     ['Peak ground displacement PGD', m.pgd.value, 'm', at(m.pgd.timeS)],
     ['Arias intensity I_a', m.ariasMS, 'm/s', 'π/(2g)∫a²dt (Arias 1970)'],
-    [
-      'Significant duration D5–75',
-      m.d5to75S,
-      's',
-      `${formatNumber(m.t5S)} to ${formatNumber(m.t75S)} s (Trifunac and Brady 1975)`,
-    ],
-    ['Significant duration D5–95', m.d5to95S, 's', `${formatNumber(m.t5S)} to ${formatNumber(m.t95S)} s`],
+    ['Significant duration D5–75', m.d5to75S, 's', `${span(m.t5S, m.t75S)} (Trifunac and Brady 1975)`],
+    ['Significant duration D5–95', m.d5to95S, 's', span(m.t5S, m.t95S)],
     [
       `Bracketed duration (|a| ≥ ${formatNumber(m.bracketThresholdMS2 / g)} g)`,
       m.bracketedS,
       's',
       m.bracketStartS === null
         ? 'threshold never reached'
-        : `${formatNumber(m.bracketStartS)} to ${formatNumber(m.bracketEndS)} s (Bolt 1973)`,
+        : `${span(m.bracketStartS, m.bracketEndS)} (Bolt 1973)`,
     ],
     ['Cumulative absolute velocity CAV', m.cavMS, 'm/s', '∫|a|dt (EPRI 1988), no threshold'],
     [
@@ -85,21 +89,12 @@ export function measuresSection(m: GroundMotionMeasures): string {
   ].join('\n');
 }
 
-/** Index of the largest value at a period above 0. */
-function peakIndex(periodsS: Float64Array, values: Float64Array): number {
-  let best = -1;
-  for (let p = 0; p < values.length; p++) {
-    if (periodsS[p] > 0 && (best < 0 || values[p] > values[best])) best = p;
-  }
-  return Math.max(best, 0);
-}
-
-/** PSA at the grid period nearest to `t`, with that period. */
+/** Index of the grid period nearest to `t` (the first of two as near). */
 function nearest(periodsS: Float64Array, t: number): number {
-  let best = 0;
-  for (let p = 1; p < periodsS.length; p++)
-    if (Math.abs(periodsS[p] - t) < Math.abs(periodsS[best] - t)) best = p;
-  return best;
+  return periodsS.reduce(
+    (best, period, p) => (Math.abs(period - t) < Math.abs(periodsS[best] - t) ? p : best),
+    0,
+  );
 }
 
 export function peaksSection(spectrum: Spectrum, lengthUnit: LengthUnit, tableNumber: number): string {
@@ -107,24 +102,24 @@ export function peaksSection(spectrum: Spectrum, lengthUnit: LengthUnit, tableNu
   const periods = spectrum.periodsS;
   const short = nearest(periods, 0.2);
   const long = nearest(periods, 1);
-  const rows = spectrum.curves.map((curve): Cell[] => {
-    const pPsa = peakIndex(periods, curve.psaMS2);
-    const pSd = peakIndex(periods, curve.sdM);
-    const pPsv = peakIndex(periods, curve.psvMS);
-    return [
-      dampingLabel(curve.damping),
-      curve.psaMS2[pPsa] / g,
-      periods[pPsa],
-      curve.psaMS2[short] / g,
-      curve.psaMS2[long] / g,
-      curve.sdM[pSd] * perLength,
-      periods[pSd],
-      curve.psvMS[pPsv] * perLength,
-      periods[pPsv],
-    ];
-  });
+  // The largest value at a period above 0 (the first of equals), converted, and its period.
+  const peak = (values: Float64Array, convert: (value: number) => number): Cell[] => {
+    const p = values.reduce(
+      (best, v, i) => (periods[i] > 0 && (best < 0 || v > values[best]) ? i : best),
+      -1,
+    );
+    return [convert(values[Math.max(p, 0)]), periods[Math.max(p, 0)]];
+  };
+  const rows = spectrum.curves.map((curve): Cell[] => [
+    dampingLabel(curve.damping),
+    ...peak(curve.psaMS2, (v) => v / g),
+    curve.psaMS2[short] / g,
+    curve.psaMS2[long] / g,
+    ...peak(curve.sdM, (v) => v * perLength),
+    ...peak(curve.psvMS, (v) => v * perLength),
+  ]);
   return table(
-    `Table ${tableNumber}. Peak spectral values (grid of ${periods.length} periods, ${formatNumber(periods[0])} to ${formatNumber(periods[periods.length - 1])} s)`,
+    `Table ${tableNumber}. Peak spectral values (grid of ${periods.length} periods, ${span(periods[0], periods[periods.length - 1])})`,
     [
       'Damping ζ',
       'Peak PSA (g)',
@@ -172,21 +167,19 @@ export function dampingSection(comparison: DampingComparison, tableNumber: numbe
 
 export function rotdSection(spectra: RotDSpectra, tableNumber: number): string {
   const periods = spectra.periodsS;
-  const rows: Cell[][] = [];
-  for (const curve of spectra.curves) {
-    for (const t of [0, 0.2, 0.5, 1, 2]) {
-      if (t < periods[0] || t > periods[periods.length - 1]) continue;
-      const p = nearest(periods, t);
-      rows.push([
-        dampingLabel(curve.damping),
-        periods[p],
-        curve.rotd50MS2[p] / g,
-        curve.rotd100MS2[p] / g,
-        curve.geomeanMS2[p] / g,
-        curve.rotd50MS2[p] > 0 ? curve.rotd100MS2[p] / curve.rotd50MS2[p] : null,
-      ]);
-    }
-  }
+  const selected = [0, 0.2, 0.5, 1, 2]
+    .filter((t) => t >= periods[0] && t <= periods[periods.length - 1])
+    .map((t) => nearest(periods, t));
+  const rows = spectra.curves.flatMap((curve) =>
+    selected.map((p): Cell[] => [
+      dampingLabel(curve.damping),
+      periods[p],
+      curve.rotd50MS2[p] / g,
+      curve.rotd100MS2[p] / g,
+      curve.geomeanMS2[p] / g,
+      curve.rotd50MS2[p] > 0 ? curve.rotd100MS2[p] / curve.rotd50MS2[p] : null,
+    ]),
+  );
   return [
     definitionTable('Components', [
       ['First component', `${spectra.records[0].name} (${spectra.records[0].source})`],
@@ -212,10 +205,7 @@ export function targetSection(t: TargetFit, tableNumber: number): string {
       ['Target', t.description],
       ['Damping compared', `${formatNumber(t.damping * 100, 6)}%`],
       ['Scale factor', formatNumber(t.factor, 5)],
-      [
-        'Fitted over',
-        `${formatNumber(t.rangeS[0])} to ${formatNumber(t.rangeS[1])} s (${t.periodCount} grid periods)`,
-      ],
+      ['Fitted over', `${span(t.rangeS[0], t.rangeS[1])} (${t.periodCount} grid periods)`],
       [
         'Scaled record / target',
         `mean ${formatNumber(t.meanRatio)}, least ${formatNumber(t.minRatio)}, greatest ${formatNumber(t.maxRatio)}`,
