@@ -76,14 +76,11 @@ export function boltGroupAtDirection(
  * D_i is the anchor's share of the dead load, D/n when the centre of mass is over the centroid
  * (the eccentric share below otherwise, the same for both rules).
  *
- * Axial, rule 'biaxial': the base rotates rigidly about a neutral axis through the anchors' centroid, so each
- * anchor's force is linear in its position, P_i = N/n + b·r_i, with N and b fixed by ΣP_i = N and
- * ΣP_i r_i = moment; b = I⁻¹·m with I = Σ r_i r_iᵀ the pattern's second-moment matrix. For the
- * force F in the unit direction u at height h_cg, tension T_i = −F h_cg (I⁻¹u)·r_i; the dead load D
- * at the plan offset e of the centre of mass from the centroid gives compression
- * D (1/n + (I⁻¹e)·r_i). Along a principal axis of the pattern both rules agree; off those axes
- * moment equilibrium about both plan axes turns the neutral axis away from the perpendicular to u.
- * Tension below zero is reported as zero.
+ * Axial, rule 'biaxial': the base turns rigidly about a neutral axis through the centroid, so
+ * P_i = N/n + (I⁻¹m)·r_i with I = Σ r_i r_iᵀ; tension T_i = −F h_cg (I⁻¹u)·r_i, and the dead load D
+ * at the plan offset e of the centre of mass gives compression D (1/n + (I⁻¹e)·r_i). Along a
+ * principal axis of the pattern both rules agree; off them moment equilibrium about both plan axes
+ * turns the neutral axis away from the perpendicular to u. Tension below zero is reported as zero.
  *
  * Shear: direct share F/n plus the torsion F·(e × u) of an eccentric centre of mass, shared in
  * proportion to distance from the centroid (polar moment J = Σ|r_i|²), added as vectors.

@@ -33,15 +33,8 @@ export function codeHorizontalForce(input: CodeForceInput): CodeForce {
   const fpFormula = (0.4 * ap * sds * weight * (1 + 2 * heightRatio)) / (rp / ip);
   const fpMin = 0.3 * sds * ip * weight;
   const fpMax = 1.6 * sds * ip * weight;
-  let fp = fpFormula;
-  let bound: CodeForce['bound'] = 'formula';
-  if (fpFormula > fpMax) {
-    fp = fpMax;
-    bound = 'maximum';
-  } else if (fpFormula < fpMin) {
-    fp = fpMin;
-    bound = 'minimum';
-  }
+  const bound = fpFormula > fpMax ? 'maximum' : fpFormula < fpMin ? 'minimum' : 'formula';
+  const fp = { formula: fpFormula, maximum: fpMax, minimum: fpMin }[bound];
   return { fp, fpFormula, fpMin, fpMax, bound, heightRatio, heightRatioCapped: raw > 1 };
 }
 

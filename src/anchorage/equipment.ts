@@ -119,15 +119,13 @@ export function parseEquipment(text: string, file: string): Equipment {
   const number = (key: string): number => {
     const [ok, expected] = NUMBERS[key];
     const value = object[key];
-    if (typeof value !== 'number' || !Number.isFinite(value))
-      fail(key, `must be a number (${expected(system)})`);
+    if (!Number.isFinite(value)) fail(key, `must be a number (${expected(system)})`);
     if (!ok(value as number)) fail(key, `must be ${expected(system)}, got ${value}`);
     return value as number;
   };
 
   const [weight, cgHeight] = ['weight', 'cg_height'].map(number);
-  const anchors = readPoints(object['anchors'], (message) => fail('anchors', message));
-  checkPattern(anchors, (message) => fail('anchors', message));
+  const anchors = readAnchors(object['anchors'], (message) => fail('anchors', message));
 
   const cgGiven = object['cg_plan'] != null;
   if (cgGiven && !isPoint(object['cg_plan'])) fail('cg_plan', `must be [x, y] in ${system.length}`);
@@ -164,15 +162,30 @@ export function parseEquipment(text: string, file: string): Equipment {
   };
 }
 
-function readPoints(value: unknown, fail: (message: string) => never): [number, number][] {
+/**
+ * The anchors' plan positions: at least two, none repeated, and not all on one line (they could
+ * not resist overturning across it).
+ */
+function readAnchors(value: unknown, fail: (message: string) => never): [number, number][] {
   if (!Array.isArray(value)) return fail('must be a list of [x, y] anchor positions');
   if (value.length < 2) return fail(`needs at least 2 anchors, got ${value.length}`);
-  return value.map((point, i) => {
-    if (!isPoint(point)) {
-      return fail(`anchor ${i + 1} must be [x, y] with two numbers, got ${JSON.stringify(point)}`);
-    }
-    return [point[0], point[1]] as [number, number];
+  const anchors = value.map((point, i): [number, number] =>
+    isPoint(point)
+      ? [point[0], point[1]]
+      : fail(`anchor ${i + 1} must be [x, y] with two numbers, got ${JSON.stringify(point)}`),
+  );
+  anchors.forEach(([x, y], i) => {
+    const j = anchors.findIndex((p) => p[0] === x && p[1] === y);
+    if (j < i) fail(`anchors ${j + 1} and ${i + 1} are at the same place`);
   });
+  const { ixx, iyy, ixy } = secondMoments(anchors);
+  if (!(ixx * iyy - ixy * ixy > 1e-12 * (ixx + iyy) ** 2)) {
+    fail(
+      'all lie on one line; the elastic bolt-group method needs anchors off that line to resist ' +
+        'overturning across it (bearing of the base on its edge is not modelled)',
+    );
+  }
+  return anchors;
 }
 
 /** Whether a JSON value is a plan point [x, y] of two finite numbers. */
@@ -182,22 +195,6 @@ function isPoint(value: unknown): value is [number, number] {
     value.length === 2 &&
     value.every((v) => typeof v === 'number' && Number.isFinite(v))
   );
-}
-
-/** Refuse repeated anchors and patterns on one line (they cannot resist overturning across it). */
-function checkPattern(anchors: [number, number][], fail: (message: string) => never): void {
-  anchors.forEach(([x, y], i) => {
-    const j = anchors.findIndex((p) => p[0] === x && p[1] === y);
-    if (j < i) fail(`anchors ${j + 1} and ${i + 1} are at the same place`);
-  });
-  const { ixx, iyy, ixy } = secondMoments(anchors);
-  const det = ixx * iyy - ixy * ixy;
-  if (!(det > 1e-12 * (ixx + iyy) ** 2)) {
-    fail(
-      'all lie on one line; the elastic bolt-group method needs anchors off that line to resist ' +
-        'overturning across it (bearing of the base on its edge is not modelled)',
-    );
-  }
 }
 
 /** The centroid of the anchor pattern (each anchor weighted equally). */

@@ -1,4 +1,5 @@
 import type { AnchorageJson } from '../formats/anchorage-json.js';
+import type { ReportFigure } from './html.js';
 import { type Cell, definitionTable, formatNumber, list, paragraph, table } from './html.js';
 
 /** One equipment item's anchorage, as the report shows it. */
@@ -9,6 +10,8 @@ export interface ReportAnchorage {
   file: string;
   /** How the elastic demand was found (ground record, floor spectrum, or none). */
   motion: string;
+  /** Its figures: the floor spectrum (above the base in a described building), the anchor plan. */
+  figures: ReportFigure[];
 }
 
 /** Tables for one equipment item: inputs, horizontal and vertical forces, anchors; then its assumptions. */

@@ -59,9 +59,12 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       ? { fit: undefined, spectrum: swept }
       : fitTarget(swept, request.target.spectrum, request.target);
   const record = targetRecord(processed, fit);
+  const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
   const files = new Map<string, string>();
   files.set('spectra.json', formatJson({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }));
   files.set('spectra.csv', spectrumToCsv(spectrum, { lengthUnit, target: fit }));
+  const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
+  const shared = { axes: request.axes ?? 'log', lengthUnit, methodDescription, overlays };
   const input: ReportInput = {
     title: request.title ?? `Response spectra of ${record.name}`,
     notes: request.notes ?? [],
@@ -69,17 +72,7 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
     spectrum,
     measures: groundMotionMeasures(record),
     lengthUnit,
-    spectrumFigures: spectrumFigures(
-      record,
-      spectrum,
-      {
-        axes: request.axes ?? 'log',
-        lengthUnit,
-        methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
-        overlays: fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)],
-      },
-      true,
-    ),
+    spectrumFigures: spectrumFigures(record, spectrum, shared, true),
     target: fit,
     anchorage: [],
     methods: methodStatements(spectrum.method),
@@ -89,22 +82,17 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
     generatedAt: request.generatedAt,
     files: [],
   };
-  if (spectrum.curves.length > 1 && spectrum.curves.some((c) => Math.abs(c.damping - 0.05) < 1e-12)) {
+  const isFivePercent = (damping: number) => Math.abs(damping - 0.05) < 1e-12;
+  if (spectrum.curves.length > 1 && spectrum.curves.some((c) => isFivePercent(c.damping))) {
     const comparison = compareDamping(spectrum);
-    const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
-    input.damping = {
-      comparison,
-      figure: {
-        file: 'damping.svg',
-        caption: 'PSA at each damping ratio relative to 5%',
-        svg: dampingFigure({ record: spectrum.record, methodDescription, comparison }),
-      },
-    };
+    const svg = dampingFigure({ record: spectrum.record, methodDescription, comparison });
+    const caption = 'PSA at each damping ratio relative to 5%';
+    input.damping = { comparison, figure: { file: 'damping.svg', caption, svg } };
   }
   if (request.pair !== undefined) {
     const second = request.pair.record;
     // One damping ratio (5% where the grid has it): the rotation sweep costs about 180 single sweeps.
-    const damping = grid.dampings.find((d) => Math.abs(d - 0.05) < 1e-12) ?? grid.dampings[0];
+    const damping = grid.dampings.find(isFivePercent) ?? grid.dampings[0];
     const samples = Math.max(processed.accelMS2.length, second.accelMS2.length);
     const spectra = await rotDSpectraParallel(processed, second, {
       ...grid,
@@ -112,13 +100,10 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       angleStepDeg: request.pair.angleStepDeg,
       threads: rotdThreads(grid.periodsS.length, 1, samples),
     });
+    const svg = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] });
     input.rotd = {
       spectra,
-      figure: {
-        file: 'rotd.svg',
-        caption: 'RotD50, RotD100 and geometric mean',
-        svg: rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] }),
-      },
+      figure: { file: 'rotd.svg', caption: 'RotD50, RotD100 and geometric mean', svg },
     };
     input.methods.push(
       `RotD spectra: at ζ = ${damping * 100}% only; both components processed alike and unscaled (a target scaling is not applied to them).`,
@@ -126,15 +111,15 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
   }
   (request.equipment ?? []).forEach((equipment, i) => {
     const anchorage = equipmentAnchorage(i + 1, equipment, record, request);
-    files.set(`anchorage-${i + 1}.json`, formatJson(anchorage.item.json));
+    files.set(`anchorage-${i + 1}.json`, formatJson(anchorage.json));
     input.anchorage.push(anchorage);
   });
   const figures = [
-    ...input.spectrumFigures,
-    ...(input.damping ? [input.damping.figure] : []),
-    ...(input.rotd ? [input.rotd.figure] : []),
-    ...input.anchorage.flatMap((a) => a.figures),
-  ];
+    input.spectrumFigures,
+    input.damping?.figure ?? [],
+    input.rotd?.figure ?? [],
+    input.anchorage.flatMap((a) => a.figures),
+  ].flat();
   for (const f of figures) files.set(f.file, f.svg);
   input.files = [...files.keys()];
   files.set('report.html', renderReport(input));

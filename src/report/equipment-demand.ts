@@ -94,7 +94,7 @@ export function equipmentAnchorage(
   equipment: { file: string; value: Equipment },
   record: GroundRecord,
   motion: DemandMotion,
-): { item: ReportAnchorage; figures: ReportFigure[] } {
+): ReportAnchorage {
   const demand = equipmentDemand(equipment.value, record, motion);
   const analysis = analyseAnchorage(equipment.value, {
     elastic: demand.elastic,
@@ -112,6 +112,5 @@ export function equipmentAnchorage(
     const caption = `Floor spectrum for equipment ${n}, with the ground PSA`;
     figures.unshift({ file: `floor-${n}.svg`, caption, svg: demand.floor });
   }
-  const item = { json: anchorageToJson(analysis), file: equipment.file, motion: demand.motion };
-  return { item, figures };
+  return { json: anchorageToJson(analysis), file: equipment.file, motion: demand.motion, figures };
 }

@@ -1,3 +1,10 @@
+/** A figure of the report: the SVG text as the figure functions write it, and the file it is also saved as. */
+export interface ReportFigure {
+  file: string;
+  caption: string;
+  svg: string;
+}
+
 /** Escape text for HTML element content and double-quoted attribute values. */
 export function escapeHtml(text: string): string {
   return text

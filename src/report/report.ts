@@ -6,6 +6,7 @@ import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
 import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
+import type { ReportFigure } from './html.js';
 import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';
 import {
@@ -21,14 +22,8 @@ import {
 import { REPORT_CSS } from './styles.js';
 
 export type { ReportAnchorage } from './anchorage-section.js';
+export type { ReportFigure } from './html.js';
 export type { RecordFacts } from './sections.js';
-
-/** A figure of the report: the SVG text as the figure functions write it, and the file it is also saved as. */
-export interface ReportFigure {
-  file: string;
-  caption: string;
-  svg: string;
-}
 
 /** Everything one report shows. The function that renders it does no I/O. */
 export interface ReportInput {
@@ -44,7 +39,7 @@ export interface ReportInput {
   target?: TargetFit;
   damping?: { comparison: DampingComparison; figure: ReportFigure };
   rotd?: { spectra: RotDSpectra; figure: ReportFigure };
-  anchorage: { item: ReportAnchorage; figures: ReportFigure[] }[];
+  anchorage: ReportAnchorage[];
   /** Method statements from the rest of the program (oscillator, spectra). */
   methods: string[];
   version: string;
@@ -111,7 +106,7 @@ export function renderReport(input: ReportInput): string {
   }
   if (input.anchorage.length > 0) {
     const parts: string[] = [paragraph(CAUTION, 'caution-inline')];
-    input.anchorage.forEach(({ item, figures }, i) => {
+    input.anchorage.forEach((item, i) => {
       const number = `${sections.length + 1}.${i + 1}`;
       const name = (item.json.equipment as { name?: unknown }).name ?? item.file;
       parts.push(
@@ -119,7 +114,7 @@ export function renderReport(input: ReportInput): string {
         anchorageSection(item, number, tableNumber),
       );
       tableNumber += 3;
-      for (const f of figures) parts.push(figure(f, `anchor-${i + 1}`));
+      for (const f of item.figures) parts.push(figure(f, `anchor-${i + 1}`));
     });
     add('anchorage', 'Equipment anchorage demands', ...parts);
   }

@@ -7,16 +7,8 @@ import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
-import {
-  type Cell,
-  definitionTable,
-  escapeHtml,
-  formatNumber,
-  list,
-  paragraph,
-  span,
-  table,
-} from './html.js';
+import type { Cell } from './html.js';
+import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 
 /** What the report says of the record as it was read (before processing). */
 export type RecordFacts = Pick<GroundRecord, 'name' | 'source' | 'dtS' | 'accelMS2' | 'unitsRead'>;
