@@ -57,8 +57,7 @@ export function analyseAnchorage(
     );
   }
   const code = codeHorizontalForce(equipment);
-  const omega0 = equipment.omega0 ?? 1;
-  const codeForAnchorsKN = omega0 * code.fp;
+  const codeForAnchorsKN = (equipment.omega0 ?? 1) * code.fp;
   const elasticKN = elastic === null ? null : elastic.psaG * equipment.weightKN;
   const governing =
     demand !== 'max' ? demand : elasticKN !== null && elasticKN > codeForAnchorsKN ? 'record' : 'code';

@@ -106,14 +106,8 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     directions.push(worst, normalizeDeg(worst + 180));
   }
 
-  const perAnchor: AnchorDemand[] = input.anchors.map((p) => ({
-    x: p[0],
-    y: p[1],
-    tension: -Infinity,
-    tensionDirectionDeg: 0,
-    shear: -Infinity,
-    shearDirectionDeg: 0,
-  }));
+  const unset = { tension: -Infinity, tensionDirectionDeg: 0, shear: -Infinity, shearDirectionDeg: 0 };
+  const perAnchor: AnchorDemand[] = input.anchors.map(([x, y]) => ({ x, y, ...unset }));
   const tolerance =
     1e-12 * (Math.abs(input.horizontalForce) * (input.cgHeight + 1) + Math.abs(input.deadLoad) + 1);
   // Larger by more than the tolerance, or as large in a smaller direction (so ties resolve alike everywhere).

@@ -1,6 +1,4 @@
 import type { Equipment } from '../anchorage/equipment.js';
-import type { LengthUnit } from '../base/units.js';
-import { VERSION } from '../base/version.js';
 import { INFO_METHODS } from '../formats/info.js';
 import { spectrumToCsv } from '../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
@@ -19,8 +17,13 @@ import { equipmentAnchorage } from './equipment-demand.js';
 import { type ReportInput, renderReport } from './report.js';
 import { spectrumFigures } from './spectrum-figures.js';
 
-/** What a report is made of: records already read and processed, and the choices of its sections. */
-export interface ReportRequest {
+/**
+ * What a report is made of: records already read and processed, and the choices of its sections.
+ * The command line, folder and time the report states are the caller's: the library reads none.
+ */
+export interface ReportRequest
+  extends Partial<Pick<ReportInput, 'title' | 'notes' | 'lengthUnit' | 'commandLine' | 'workingDirectory'>>,
+    Pick<ReportInput, 'generatedAt'> {
   /** The record as read (its facts are shown as read). */
   read: GroundRecord;
   /** The same record processed: the spectra are of this one. */
@@ -28,7 +31,6 @@ export interface ReportRequest {
   grid: { periodsS: Float64Array; dampings: Float64Array; method: Method };
   /** A target spectrum to fit (over `rangeS`), the fit applied to every output with `apply`. */
   target?: { spectrum: DesignSpectrum; rangeS?: [number, number]; apply?: boolean };
-  lengthUnit?: LengthUnit;
   axes?: 'log' | 'linear';
   /** The second horizontal component, processed alike: adds RotD50 and RotD100. */
   pair?: { record: GroundRecord; angleStepDeg: number };
@@ -37,12 +39,6 @@ export interface ReportRequest {
   /** The one-mode building of equipment above the base, and the floor spectrum's peak broadening. */
   building?: BuildingMode | null;
   broadening?: number | null;
-  title?: string;
-  notes?: string[];
-  /** The command line, folder and time the report states (the caller's: the library reads none). */
-  commandLine?: string[];
-  workingDirectory?: string;
-  generatedAt: string;
 }
 
 /**
@@ -76,7 +72,6 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
     target: fit,
     anchorage: [],
     methods: methodStatements(spectrum.method),
-    version: VERSION,
     commandLine: request.commandLine ?? [],
     workingDirectory: request.workingDirectory ?? '',
     generatedAt: request.generatedAt,

@@ -11,7 +11,7 @@ import type { GroundRecord } from '../record/record.js';
 import { type BuildingMode, floorSpectrum } from '../spectrum/floor.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
 import type { ReportAnchorage } from './anchorage-section.js';
-import type { ReportFigure } from './report.js';
+import type { ReportFigure } from './html.js';
 
 /** The elastic demand of one item of equipment in a report, with the motion it came from. */
 export interface EquipmentDemand {

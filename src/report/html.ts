@@ -5,14 +5,11 @@ export interface ReportFigure {
   svg: string;
 }
 
+const ENTITIES = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
+
 /** Escape text for HTML element content and double-quoted attribute values. */
 export function escapeHtml(text: string): string {
-  return text
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&#39;');
+  return text.replace(/[&<>"']/g, (character) => ENTITIES[character as keyof typeof ENTITIES]);
 }
 
 /** A table cell value: text is escaped; numbers are written with `digits` significant figures. */

@@ -1,5 +1,6 @@
 import { CAUTION } from '../base/caution.js';
 import type { LengthUnit } from '../base/units.js';
+import { VERSION } from '../base/version.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
@@ -21,10 +22,6 @@ import {
 } from './sections.js';
 import { REPORT_CSS } from './styles.js';
 
-export type { ReportAnchorage } from './anchorage-section.js';
-export type { ReportFigure } from './html.js';
-export type { RecordFacts } from './sections.js';
-
 /** Everything one report shows. The function that renders it does no I/O. */
 export interface ReportInput {
   title: string;
@@ -42,7 +39,6 @@ export interface ReportInput {
   anchorage: ReportAnchorage[];
   /** Method statements from the rest of the program (oscillator, spectra). */
   methods: string[];
-  version: string;
   /** The command line that produced the report, as words (quoted for a POSIX shell when shown). */
   commandLine: string[];
   /** The folder the command was run from, for the relative paths in it. */
@@ -133,14 +129,14 @@ export function renderReport(input: ReportInput): string {
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
-<meta name="generator" content="quakesweep ${escapeHtml(input.version)}">
+<meta name="generator" content="quakesweep ${escapeHtml(VERSION)}">
 <title>${escapeHtml(input.title)}</title>
 <style>${REPORT_CSS}</style>
 </head>
 <body>
 <header class="title">
 <h1>${escapeHtml(input.title)}</h1>
-<p>Response spectrum calculation · quakesweep ${escapeHtml(input.version)} · record ${escapeHtml(input.read.name)}</p>
+<p>Response spectrum calculation · quakesweep ${escapeHtml(VERSION)} · record ${escapeHtml(input.read.name)}</p>
 </header>
 <div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
 ${input.notes.map((note) => paragraph(note, 'intro')).join('\n')}
@@ -159,7 +155,7 @@ function reproduceSection(input: ReportInput, tableNumber: number): string {
   const command = ['quakesweep', ...input.commandLine].map(shellQuote).join(' ');
   return [
     definitionTable(`Table ${tableNumber}. Program and run`, [
-      ['Program', `quakesweep ${input.version}`],
+      ['Program', `quakesweep ${VERSION}`],
       ['Run from the folder', input.workingDirectory],
       ['Files written beside report.html', input.files.join(', ')],
     ]),

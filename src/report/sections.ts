@@ -33,10 +33,8 @@ export function recordSection(read: RecordFacts, processed: { dtS: number; npts:
 }
 
 export function processingSection(steps: readonly { operation: string; description: string }[]): string {
-  if (steps.length === 0)
-    return paragraph(
-      'None: the record is used as read (no baseline correction, taper, filter or resampling).',
-    );
+  const none = 'None: the record is used as read (no baseline correction, taper, filter or resampling).';
+  if (steps.length === 0) return paragraph(none);
   return [
     paragraph(`Applied in this order (the program's fixed order is ${PROCESSING_ORDER.join(' → ')}):`),
     `<ol>\n${steps.map((s) => `<li><strong>${escapeHtml(s.operation)}</strong>: ${escapeHtml(s.description)}</li>`).join('\n')}\n</ol>`,
@@ -68,12 +66,9 @@ export function measuresSection(m: GroundMotionMeasures): string {
       `Fourier lines ${formatNumber(m.meanPeriodBandHz[0])}–${formatNumber(m.meanPeriodBandHz[1])} Hz (Rathje, Abrahamson and Bray 1998)`,
     ],
   ];
+  const caption = 'Table 2. Ground-motion measures of the processed record';
   return [
-    table(
-      'Table 2. Ground-motion measures of the processed record',
-      ['Measure', 'Value', 'Unit', 'Where / how'],
-      rows,
-    ),
+    table(caption, ['Measure', 'Value', 'Unit', 'Where / how'], rows),
     paragraph(
       'Velocity and displacement by the trapezoidal rule from rest, after the processing of section 2.',
       'note',
