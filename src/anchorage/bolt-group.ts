@@ -100,7 +100,7 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     if (rule === 'biaxial') {
       if (A[i] !== 0 || B[i] !== 0) directions.push(normalizeDeg((Math.atan2(B[i], A[i]) * 180) / Math.PI));
     } else {
-      directions.push(worstProjectedDirectionDeg((deg) => k.tensionAtDeg(i, deg), step));
+      directions.push(worstProjectedDirectionDeg((deg) => k.tension(i, ...unitVector(deg)), step));
     }
     const worst = worstShearDirectionDeg(L[i]);
     directions.push(worst, normalizeDeg(worst + 180));
@@ -226,11 +226,10 @@ function coefficients(input: BoltGroupInput) {
           const sumD2 = ixx * c * c + 2 * ixy * c * s + iyy * s * s;
           return (moment * -(rx[i] * c + ry[i] * s)) / sumD2 - C[i];
         };
-  const tensionAtDeg = (i: number, deg: number) => tension(i, ...unitVector(deg));
   /** Shear of anchor i for the force along (c, s): |F·L_i·u|. */
   const shear = (i: number, c: number, s: number) => {
     const [l11, l12, l21, l22] = L[i];
     return Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s);
   };
-  return { n, rule, A, B, L, tension, tensionAtDeg, shear };
+  return { n, rule, A, B, L, tension, shear };
 }

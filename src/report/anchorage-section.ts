@@ -1,6 +1,6 @@
 import type { AnchorageJson } from '../formats/anchorage-json.js';
 import type { ReportFigure } from './html.js';
-import { type Cell, definitionTable, formatNumber, list, paragraph, table } from './html.js';
+import { type Cell, definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
 
 /** One equipment item's anchorage, as the report shows it. */
 export interface ReportAnchorage {
@@ -14,7 +14,7 @@ export interface ReportAnchorage {
   figures: ReportFigure[];
 }
 
-/** Tables for one equipment item: inputs, horizontal and vertical forces, anchors; then its assumptions. */
+/** One equipment item: its heading, tables of inputs, forces and anchors, then its assumptions. */
 export function anchorageSection(item: ReportAnchorage, number: string, tableNumber: number): string {
   const j = item.json;
   const e = j.equipment as Record<string, unknown>;
@@ -23,6 +23,7 @@ export function anchorageSection(item: ReportAnchorage, number: string, tableNum
   const h = j.horizontal;
   const value = (key: string) => String(e[key] ?? 'not given');
   return [
+    `<h3>${number} ${escapeHtml(String(e['name'] ?? item.file))}</h3>`,
     definitionTable(`Table ${tableNumber}. Equipment ${number}: inputs (file ${item.file})`, [
       ['Name', value('name')],
       ['Units of the file', `${value('units')} (forces in ${f}, lengths in ${l})`],

@@ -36,12 +36,12 @@ export interface DemandMotion {
  */
 export function equipmentDemand(e: Equipment, record: GroundRecord, motion: DemandMotion): EquipmentDemand {
   const { periodsS, method } = motion.grid;
-  const building = motion.building ?? null;
+  const { building } = motion;
   if (e.zM === 0) {
     const value = recordPsaForComponent(record, e.periodS, e.damping, method);
     return { elastic: { ...value, source: record.name }, motion: `ground record ${record.name}`, notes: [] };
   }
-  if (building === null) {
+  if (!building) {
     return {
       elastic: null,
       motion:

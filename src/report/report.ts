@@ -103,12 +103,7 @@ export function renderReport(input: ReportInput): string {
   if (input.anchorage.length > 0) {
     const parts: string[] = [paragraph(CAUTION, 'caution-inline')];
     input.anchorage.forEach((item, i) => {
-      const number = `${sections.length + 1}.${i + 1}`;
-      const name = (item.json.equipment as { name?: unknown }).name ?? item.file;
-      parts.push(
-        `<h3>${number} ${escapeHtml(String(name))}</h3>`,
-        anchorageSection(item, number, tableNumber),
-      );
+      parts.push(anchorageSection(item, `${sections.length + 1}.${i + 1}`, tableNumber));
       tableNumber += 3;
       for (const f of item.figures) parts.push(figure(f, `anchor-${i + 1}`));
     });
