@@ -70,9 +70,12 @@ export const LIMITS_OF_USE = [
  * of text from a file or an option is escaped.
  */
 export function renderReport(input: ReportInput): string {
-  const sections: { id: string; title: string; body: string }[] = [];
+  const contents: string[] = [];
+  const body: string[] = [];
   const add = (id: string, title: string, ...parts: string[]) => {
-    sections.push({ id, title, body: parts.join('\n') });
+    const heading = `${contents.length + 1}. ${escapeHtml(title)}`;
+    contents.push(`<li><a href="#${id}">${heading}</a></li>`);
+    body.push(`<section id="${id}">\n<h2>${heading}</h2>\n${parts.join('\n')}\n</section>`);
   };
   let tableNumber = 3;
   let figureNumber = 1;
@@ -103,7 +106,7 @@ export function renderReport(input: ReportInput): string {
   if (input.anchorage.length > 0) {
     const parts: string[] = [paragraph(CAUTION, 'caution-inline')];
     input.anchorage.forEach((item, i) => {
-      parts.push(anchorageSection(item, `${sections.length + 1}.${i + 1}`, tableNumber));
+      parts.push(anchorageSection(item, `${contents.length + 1}.${i + 1}`, tableNumber));
       tableNumber += 3;
       for (const f of item.figures) parts.push(figure(f, `anchor-${i + 1}`));
     });
@@ -113,12 +116,6 @@ export function renderReport(input: ReportInput): string {
   add('limits', 'Limits of use', list(LIMITS_OF_USE));
   add('reproduce', 'Reproducing this report', reproduceSection(input, tableNumber));
 
-  const contents = sections
-    .map((s, i) => `<li><a href="#${s.id}">${i + 1}. ${escapeHtml(s.title)}</a></li>`)
-    .join('\n');
-  const body = sections
-    .map((s, i) => `<section id="${s.id}">\n<h2>${i + 1}. ${escapeHtml(s.title)}</h2>\n${s.body}\n</section>`)
-    .join('\n');
   return `<!DOCTYPE html>
 <html lang="en">
 <head>
@@ -136,9 +133,9 @@ export function renderReport(input: ReportInput): string {
 <div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
 ${input.notes.map((note) => paragraph(note, 'intro')).join('\n')}
 <nav class="contents"><strong>Contents</strong><ol class="plain">
-${contents}
+${contents.join('\n')}
 </ol></nav>
-${body}
+${body.join('\n')}
 <footer>${escapeHtml(CAUTION)}</footer>
 </body>
 </html>
