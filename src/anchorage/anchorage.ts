@@ -11,10 +11,8 @@ import type { Equipment } from './equipment.js';
 
 export type DemandChoice = 'code' | 'record' | 'max';
 
-export const DEMAND_CHOICES: readonly DemandChoice[] = ['code', 'record', 'max'];
-
 export function parseDemandChoice(text: string): DemandChoice {
-  if ((DEMAND_CHOICES as readonly string[]).includes(text)) return text as DemandChoice;
+  if (text === 'code' || text === 'record' || text === 'max') return text;
   throw usageError(`--demand '${text}': use code, record or max`);
 }
 
@@ -53,23 +51,13 @@ export function analyseAnchorage(
   options: { elastic: ElasticInput | null; demand: DemandChoice; anchorRule?: AnchorRule },
 ): AnchorageAnalysis {
   const { demand, elastic } = options;
-  const anchorRule = options.anchorRule ?? 'projected';
   if (demand !== 'code' && elastic === null) {
     throw usageError(
       `--demand ${demand} needs a ground motion: give --record or --spectrum (or use --demand code)`,
     );
   }
-  const code = codeHorizontalForce({
-    weight: equipment.weightKN,
-    z: equipment.zM,
-    h: equipment.hM,
-    ap: equipment.ap,
-    rp: equipment.rp,
-    ip: equipment.ip,
-    sds: equipment.sds,
-  });
-  const omega0 = equipment.omega0 ?? 1;
-  const codeForAnchorsKN = omega0 * code.fp;
+  const code = codeHorizontalForce(equipment);
+  const codeForAnchorsKN = (equipment.omega0 ?? 1) * code.fp;
   const elasticKN = elastic === null ? null : elastic.psaG * equipment.weightKN;
   const governing =
     demand !== 'max' ? demand : elasticKN !== null && elasticKN > codeForAnchorsKN ? 'record' : 'code';
@@ -81,9 +69,9 @@ export function analyseAnchorage(
     cgHeight: equipment.cgHeightM,
     horizontalForce: horizontalForAnchorsKN,
     deadLoad: deadLoadFactor * equipment.weightKN,
-    rule: anchorRule,
+    rule: options.anchorRule,
   });
-  return {
+  const analysis = {
     equipment,
     code,
     codeForAnchorsKN,
@@ -92,29 +80,23 @@ export function analyseAnchorage(
     demand,
     governing,
     horizontalForAnchorsKN,
-    verticalKN: verticalForce({ weight: equipment.weightKN, sds: equipment.sds }),
+    verticalKN: verticalForce(equipment),
     deadLoadFactor,
     anchors,
-    assumptions: assumptionsOf(equipment, code, elastic, governing, deadLoadFactor, anchorRule),
   };
+  return { ...analysis, assumptions: assumptionsOf(analysis) };
 }
 
-function assumptionsOf(
-  equipment: Equipment,
-  code: CodeForce,
-  elastic: ElasticInput | null,
-  governing: 'code' | 'record',
-  deadLoadFactor: number,
-  anchorRule: AnchorRule,
-): string[] {
-  const out: string[] = [
+function assumptionsOf(analysis: Omit<AnchorageAnalysis, 'assumptions'>): string[] {
+  const { equipment, code, elastic, governing, deadLoadFactor } = analysis;
+  const lines = [
     'Code force: ASCE/SEI 7-16 §13.3.1, F_p = 0.4 a_p S_DS W_p (1 + 2z/h)/(R_p/I_p), bounded by ' +
       '0.3 S_DS I_p W_p and 1.6 S_DS I_p W_p; a_p, R_p, I_p and S_DS are as given in the equipment file ' +
       '(not chosen by this tool from the standard).',
     'Vertical: E_v = 0.2 S_DS W_p (§13.3.1.2); in the anchor tension it enters through the dead load ' +
       `(0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p of ASCE/SEI 7-16 §2.3.6, which counteracts uplift.`,
     'Anchors: rigid base, elastic bolt group about the anchors’ centroid, all anchors of equal stiffness ' +
-      `in tension and compression; ${ANCHOR_RULE_TEXT[anchorRule]} ` +
+      `in tension and compression; ${ANCHOR_RULE_TEXT[analysis.anchors.rule]} ` +
       'The base’s bearing on the support is not modelled. Horizontal force at the ' +
       'centre-of-mass height; overturning M = F·h_cg; every direction of shaking 0–360° (1° steps, refined to ' +
       'each anchor’s exact worst direction); one horizontal direction at a time (no orthogonal combination).',
@@ -122,30 +104,18 @@ function assumptionsOf(
       (equipment.cgPlanGiven
         ? ' plus the torsion of the eccentric centre of mass, F·e, shared by the polar moment of the pattern (elastic method).'
         : '; the centre of mass is taken at the anchors’ centroid (no torsion).'),
-  ];
-  if (equipment.cgPlanGiven) {
-    out.push(
+    equipment.cgPlanGiven &&
       'Eccentric centre of mass: the counteracting dead load acts at the given plan position and is shared ' +
         'linearly over the pattern (less relief for anchors far from it); the horizontal force acts at the same point.',
-    );
-  }
-  if (code.heightRatioCapped)
-    out.push('z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.');
-  if (equipment.omega0 !== null) {
-    out.push(
+    code.heightRatioCapped && 'z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.',
+    equipment.omega0 !== null &&
       `Ω₀ = ${equipment.omega0} multiplies the code horizontal force for the anchors (not the dead load, not the record demand).`,
-    );
-  }
-  if (elastic !== null) {
-    out.push(
+    elastic !== null &&
       `Record demand: elastic, PSA·W_p with ${elastic.how} (source: ${elastic.source}); not reduced by R_p nor ` +
         'multiplied by I_p or Ω₀.',
-    );
-  }
-  out.push(
     `Governing horizontal force for the anchors: ${governing === 'code' ? 'the code force' : 'the record demand'}.`,
-  );
-  return out;
+  ];
+  return lines.filter((line): line is string => typeof line === 'string');
 }
 
 /** How each anchor rule shares the overturning moment, one sentence for outputs. */

@@ -4,10 +4,8 @@ import { secondMoments } from './equipment.js';
 /** How overturning is shared among the anchors: 'projected' or 'biaxial' (both set out at boltGroupForces). */
 export type AnchorRule = 'projected' | 'biaxial';
 
-export const ANCHOR_RULES: readonly AnchorRule[] = ['projected', 'biaxial'];
-
 export function parseAnchorRule(text: string): AnchorRule {
-  if ((ANCHOR_RULES as readonly string[]).includes(text)) return text as AnchorRule;
+  if (text === 'projected' || text === 'biaxial') return text;
   throw usageError(`--anchor-rule '${text}': use projected or biaxial`);
 }
 
@@ -48,8 +46,6 @@ export interface BoltGroupResult {
   maxTensionDirectionDeg: number;
   maxShear: number;
   maxShearDirectionDeg: number;
-  /** Directions evaluated (the regular sweep plus each anchor's exact worst directions). */
-  directionsEvaluated: number;
   rule: AnchorRule;
 }
 
@@ -80,15 +76,11 @@ export function boltGroupAtDirection(
  * D_i is the anchor's share of the dead load, D/n when the centre of mass is over the centroid
  * (the eccentric share below otherwise, the same for both rules).
  *
- * Axial, rule 'biaxial': the base rotates rigidly about a neutral axis through the anchors' centroid, so each
- * anchor's force is linear in its position, P_i = N/n + b·r_i, with N and b fixed by ΣP_i = N and
- * ΣP_i r_i = moment; b = I⁻¹·m with I = Σ r_i r_iᵀ the pattern's second-moment matrix. For the
- * force F in the unit direction u at height h_cg, tension T_i = −F h_cg (I⁻¹u)·r_i; the dead load D
- * at the plan offset e of the centre of mass from the centroid gives compression
- * D (1/n + (I⁻¹e)·r_i). For a direction along a principal axis of the pattern this is
- * T_i = M d_i / Σd_j² − D/n with d_i the distance from the neutral axis perpendicular to u; off
- * those axes the neutral axis of an elastic group is not perpendicular to u (moment equilibrium
- * about both plan axes requires the I⁻¹ form). Tension below zero is reported as zero.
+ * Axial, rule 'biaxial': the base turns rigidly about a neutral axis through the centroid, so
+ * P_i = N/n + (I⁻¹m)·r_i with I = Σ r_i r_iᵀ; tension T_i = −F h_cg (I⁻¹u)·r_i, and the dead load D
+ * at the plan offset e of the centre of mass gives compression D (1/n + (I⁻¹e)·r_i). Along a
+ * principal axis of the pattern both rules agree; off them moment equilibrium about both plan axes
+ * turns the neutral axis away from the perpendicular to u. Tension below zero is reported as zero.
  *
  * Shear: direct share F/n plus the torsion F·(e × u) of an eccentric centre of mass, shared in
  * proportion to distance from the centroid (polar moment J = Σ|r_i|²), added as vectors.
@@ -100,8 +92,7 @@ export function boltGroupAtDirection(
  */
 export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
   const k = coefficients(input);
-  const { n, A, B, L } = k;
-  const rule = input.rule ?? 'projected';
+  const { n, rule, A, B, L } = k;
   const step = input.stepDeg ?? 1;
   const directions: number[] = [];
   for (let j = 0; j * step < 360 - 1e-9; j++) directions.push(j * step);
@@ -109,20 +100,14 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     if (rule === 'biaxial') {
       if (A[i] !== 0 || B[i] !== 0) directions.push(normalizeDeg((Math.atan2(B[i], A[i]) * 180) / Math.PI));
     } else {
-      directions.push(worstProjectedDirectionDeg((deg) => k.tensionAtDeg(i, deg), step));
+      directions.push(worstProjectedDirectionDeg((deg) => k.tension(i, ...unitVector(deg)), step));
     }
     const worst = worstShearDirectionDeg(L[i]);
     directions.push(worst, normalizeDeg(worst + 180));
   }
 
-  const perAnchor: AnchorDemand[] = input.anchors.map((p) => ({
-    x: p[0],
-    y: p[1],
-    tension: -Infinity,
-    tensionDirectionDeg: 0,
-    shear: -Infinity,
-    shearDirectionDeg: 0,
-  }));
+  const unset = { tension: -Infinity, tensionDirectionDeg: 0, shear: -Infinity, shearDirectionDeg: 0 };
+  const perAnchor: AnchorDemand[] = input.anchors.map(([x, y]) => ({ x, y, ...unset }));
   const tolerance =
     1e-12 * (Math.abs(input.horizontalForce) * (input.cgHeight + 1) + Math.abs(input.deadLoad) + 1);
   // Larger by more than the tolerance, or as large in a smaller direction (so ties resolve alike everywhere).
@@ -130,19 +115,13 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     value > worst + tolerance || (Math.abs(value - worst) <= tolerance && deg < worstDeg);
   for (const deg of directions) {
     const [c, s] = unitVector(deg);
-    for (let i = 0; i < n; i++) {
-      const a = perAnchor[i];
+    perAnchor.forEach((a, i) => {
       const tension = k.tension(i, c, s);
-      if (worse(tension, a.tension, deg, a.tensionDirectionDeg)) {
-        a.tension = tension;
-        a.tensionDirectionDeg = deg;
-      }
       const shear = k.shear(i, c, s);
-      if (worse(shear, a.shear, deg, a.shearDirectionDeg)) {
-        a.shear = shear;
-        a.shearDirectionDeg = deg;
-      }
-    }
+      if (worse(tension, a.tension, deg, a.tensionDirectionDeg))
+        [a.tension, a.tensionDirectionDeg] = [tension, deg];
+      if (worse(shear, a.shear, deg, a.shearDirectionDeg)) [a.shear, a.shearDirectionDeg] = [shear, deg];
+    });
   }
   let governingAnchor = 0;
   let shearAnchor = 0;
@@ -158,7 +137,6 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
     maxTensionDirectionDeg: perAnchor[governingAnchor].tensionDirectionDeg,
     maxShear: perAnchor[shearAnchor].shear,
     maxShearDirectionDeg: perAnchor[shearAnchor].shearDirectionDeg,
-    directionsEvaluated: directions.length,
     rule,
   };
 }
@@ -168,10 +146,11 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
  * degrees, then refined by golden-section search (Kiefer 1953) within one step of the best sample.
  */
 function worstProjectedDirectionDeg(f: (deg: number) => number, step: number): number {
+  const sampleDeg = Math.min(step, 1);
   let best = 0;
-  for (let deg = 0; deg < 360; deg += Math.min(step, 1)) if (f(deg) > f(best)) best = deg;
-  let lo = best - Math.min(step, 1);
-  let hi = best + Math.min(step, 1);
+  for (let deg = 0; deg < 360; deg += sampleDeg) if (f(deg) > f(best)) best = deg;
+  let lo = best - sampleDeg;
+  let hi = best + sampleDeg;
   const ratio = (Math.sqrt(5) - 1) / 2;
   let x1 = hi - ratio * (hi - lo);
   let x2 = lo + ratio * (hi - lo);
@@ -179,15 +158,11 @@ function worstProjectedDirectionDeg(f: (deg: number) => number, step: number): n
   let f2 = f(x2);
   for (let iteration = 0; iteration < 80 && hi - lo > 1e-10; iteration++) {
     if (f1 < f2) {
-      lo = x1;
-      x1 = x2;
-      f1 = f2;
+      [lo, x1, f1] = [x1, x2, f2];
       x2 = lo + ratio * (hi - lo);
       f2 = f(x2);
     } else {
-      hi = x2;
-      x2 = x1;
-      f2 = f1;
+      [hi, x2, f2] = [x2, x1, f1];
       x1 = hi - ratio * (hi - lo);
       f1 = f(x1);
     }
@@ -196,7 +171,7 @@ function worstProjectedDirectionDeg(f: (deg: number) => number, step: number): n
 }
 
 /** The direction of u maximising |L u| (the leading right singular vector of the 2×2 matrix L). */
-function worstShearDirectionDeg([a, b, c, d]: [number, number, number, number]): number {
+function worstShearDirectionDeg([a, b, c, d]: Matrix2): number {
   // LᵀL = [[p, q], [q, r]]; its leading eigenvector's angle is ½·atan2(2q, p − r).
   const p = a * a + c * c;
   const q = a * b + c * d;
@@ -215,8 +190,12 @@ function normalizeDeg(deg: number): number {
   return value >= 360 - 1e-12 ? 0 : value;
 }
 
+/** A 2×2 matrix [m11, m12, m21, m22]. */
+type Matrix2 = [number, number, number, number];
+
 function coefficients(input: BoltGroupInput) {
   const n = input.anchors.length;
+  const rule = input.rule ?? 'projected';
   const { cx, cy, rx, ry, ixx, iyy, ixy, polar } = secondMoments(input.anchors);
   const det = ixx * iyy - ixy * ixy;
   // I⁻¹ = [[iyy, −ixy], [−ixy, ixx]] / det
@@ -228,28 +207,17 @@ function coefficients(input: BoltGroupInput) {
   const ey = input.cgPlan[1] - cy;
   const [gx, gy] = inv(ex, ey);
   const F = input.horizontalForce;
-  const D = input.deadLoad;
-
-  // Tension T_i(θ) = A_i cos θ + B_i sin θ − C_i.
-  const A: number[] = [];
-  const B: number[] = [];
-  const C: number[] = [];
-  // Shear vector V_i(θ) = F·L_i·u, L_i = 𝟙/n + w_i gᵀ with w_i = ẑ × r_i and g = (−e_y, e_x)/J.
-  const L: [number, number, number, number][] = [];
-  for (let i = 0; i < n; i++) {
-    const [qx, qy] = inv(rx[i], ry[i]);
-    A.push(-F * input.cgHeight * qx);
-    B.push(-F * input.cgHeight * qy);
-    C.push(D * (1 / n + gx * rx[i] + gy * ry[i]));
-    const wx = -ry[i];
-    const wy = rx[i];
-    const tx = -ey / polar;
-    const ty = ex / polar;
-    L.push([1 / n + wx * tx, wx * ty, wy * tx, 1 / n + wy * ty]);
-  }
-
-  const rule = input.rule ?? 'projected';
   const moment = F * input.cgHeight;
+  const q = rx.map((x, i) => inv(x, ry[i]));
+  // Tension T_i(θ) = A_i cos θ + B_i sin θ − C_i (rule 'biaxial'); C_i is the dead load's share.
+  const A = q.map(([qx]) => -moment * qx);
+  const B = q.map(([, qy]) => -moment * qy);
+  const C = rx.map((x, i) => input.deadLoad * (1 / n + gx * x + gy * ry[i]));
+  // Shear vector V_i(θ) = F·L_i·u, L_i = 𝟙/n + w_i tᵀ with w_i = ẑ × r_i = (−r_y, r_x) and t = (−e_y, e_x)/J.
+  const tx = -ey / polar;
+  const ty = ex / polar;
+  const L = rx.map((x, i): Matrix2 => [1 / n - ry[i] * tx, -ry[i] * ty, x * tx, 1 / n + x * ty]);
+
   /** Tension of anchor i (may be negative: compression) for the force along (c, s). */
   const tension =
     rule === 'biaxial'
@@ -258,11 +226,10 @@ function coefficients(input: BoltGroupInput) {
           const sumD2 = ixx * c * c + 2 * ixy * c * s + iyy * s * s;
           return (moment * -(rx[i] * c + ry[i] * s)) / sumD2 - C[i];
         };
-  const tensionAtDeg = (i: number, deg: number) => tension(i, ...unitVector(deg));
   /** Shear of anchor i for the force along (c, s): |F·L_i·u|. */
   const shear = (i: number, c: number, s: number) => {
     const [l11, l12, l21, l22] = L[i];
     return Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s);
   };
-  return { n, A, B, L, tension, tensionAtDeg, shear };
+  return { n, rule, A, B, L, tension, shear };
 }

@@ -1,20 +1,10 @@
-/** The inputs of the ASCE/SEI 7-16 component force, in consistent units (any force unit for W_p). */
-export interface CodeForceInput {
-  /** Operating weight W_p. */
-  weight: number;
-  /** Attachment height z above the base (same length unit as h). */
-  z: number;
-  /** Roof height h above the base. */
-  h: number;
-  ap: number;
-  rp: number;
-  ip: number;
-  /** Design short-period spectral acceleration S_DS, g. */
-  sds: number;
-}
+import type { Equipment } from './equipment.js';
+
+/** The inputs of the ASCE/SEI 7-16 component force: W_p in kN, z and h in m, S_DS in g. */
+export type CodeForceInput = Pick<Equipment, 'weightKN' | 'zM' | 'hM' | 'ap' | 'rp' | 'ip' | 'sds'>;
 
 export interface CodeForce {
-  /** The governing design horizontal force F_p (in the unit of W_p). */
+  /** The governing design horizontal force F_p, kN. */
   fp: number;
   /** Eq. 13.3-1 before the bounds. */
   fpFormula: number;
@@ -37,27 +27,20 @@ export interface CodeForce {
  * The coefficients are the user's: nothing is looked up from the standard's tables.
  */
 export function codeHorizontalForce(input: CodeForceInput): CodeForce {
-  const { weight, z, h, ap, rp, ip, sds } = input;
+  const { weightKN: weight, zM: z, hM: h, ap, rp, ip, sds } = input;
   const raw = Math.max(0, z) / h;
   const heightRatio = Math.min(1, raw);
   const fpFormula = (0.4 * ap * sds * weight * (1 + 2 * heightRatio)) / (rp / ip);
   const fpMin = 0.3 * sds * ip * weight;
   const fpMax = 1.6 * sds * ip * weight;
-  let fp = fpFormula;
-  let bound: CodeForce['bound'] = 'formula';
-  if (fpFormula > fpMax) {
-    fp = fpMax;
-    bound = 'maximum';
-  } else if (fpFormula < fpMin) {
-    fp = fpMin;
-    bound = 'minimum';
-  }
+  const bound = fpFormula > fpMax ? 'maximum' : fpFormula < fpMin ? 'minimum' : 'formula';
+  const fp = { formula: fpFormula, maximum: fpMax, minimum: fpMin }[bound];
   return { fp, fpFormula, fpMin, fpMax, bound, heightRatio, heightRatioCapped: raw > 1 };
 }
 
 /** Vertical seismic load effect E_v = 0.2 S_DS W_p (ASCE/SEI 7-16 §13.3.1.2 with §12.4.2.2), ±. */
-export function verticalForce(input: Pick<CodeForceInput, 'weight' | 'sds'>): number {
-  return 0.2 * input.sds * input.weight;
+export function verticalForce(input: Pick<CodeForceInput, 'weightKN' | 'sds'>): number {
+  return 0.2 * input.sds * input.weightKN;
 }
 
 /**

@@ -38,6 +38,7 @@ export interface Equipment {
   zM: number;
   /** Roof height h above the base, m. */
   hM: number;
+  // ASCE/SEI 7-16 §13.3.1 coefficients as the file gives them: a_p, R_p, I_p, S_DS (g), Ω₀ or null.
   ap: number;
   rp: number;
   ip: number;
@@ -47,29 +48,30 @@ export interface Equipment {
   input: Readonly<Record<string, unknown>>;
 }
 
-const REQUIRED = [
-  'name',
-  'units',
-  'weight',
-  'cg_height',
-  'anchors',
-  'period_s',
-  'damping',
-  'z',
-  'h',
-  'ap',
-  'rp',
-  'ip',
-  'sds',
-];
-const OPTIONAL = ['omega0', 'cg_plan', 'notes'];
-const KNOWN = [...REQUIRED, ...OPTIONAL];
+const REQUIRED = 'name units weight cg_height anchors period_s damping z h ap rp ip sds'.split(' ');
+type UnitSystem = (typeof EQUIPMENT_UNITS)[EquipmentUnits];
+const KNOWN = [...REQUIRED, 'omega0', 'cg_plan', 'notes'];
+
+/** The numeric fields: the test each value must pass and what is expected, in the file's units. */
+const NUMBERS: Record<string, [(v: number) => boolean, (u: UnitSystem) => string]> = {
+  weight: [(v) => v > 0, (u) => `a positive operating weight in ${u.force}`],
+  cg_height: [(v) => v >= 0, (u) => `a height ≥ 0 in ${u.length}`],
+  damping: [(v) => v >= 0 && v < 1, () => 'a fraction of critical, 0 ≤ ζ < 1 (0.05 for 5%)'],
+  z: [
+    (v) => v >= 0,
+    (u) => `a height ≥ 0 above the base in ${u.length} (0 at or below the base, ASCE 7-16 §13.3.1)`,
+  ],
+  h: [(v) => v > 0, (u) => `the roof height above the base, > 0, in ${u.length}`],
+  ap: [(v) => v > 0, () => 'a positive amplification factor a_p'],
+  rp: [(v) => v > 0, () => 'a positive response modification factor R_p'],
+  ip: [(v) => v > 0, () => 'a positive importance factor I_p'],
+  sds: [(v) => v > 0, () => 'a positive S_DS in g'],
+  omega0: [(v) => v >= 1, () => 'null or an overstrength factor Ω₀ ≥ 1'],
+};
 
 /** The 1-based line of a character offset in a text. */
 function lineOf(text: string, offset: number): number {
-  let line = 1;
-  for (let i = 0; i < offset && i < text.length; i++) if (text.charCodeAt(i) === 10) line++;
-  return line;
+  return text.slice(0, offset).split('\n').length;
 }
 
 /**
@@ -83,43 +85,28 @@ export function parseEquipment(text: string, file: string): Equipment {
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     const position = /position (\d+)/.exec(message);
-    const line = position ? lineOf(text, Number(position[1])) : undefined;
-    throw inputError(`not valid JSON (${message.replace(/ in JSON at position \d+.*$/, '')})`, {
-      file,
-      line,
-    });
+    const place = { file, line: position ? lineOf(text, Number(position[1])) : undefined };
+    throw inputError(`not valid JSON (${message.replace(/ in JSON at position \d+.*$/, '')})`, place);
   }
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
     throw inputError('an equipment file holds one JSON object {"name": ..., "units": ..., ...}', { file });
   }
   const object = raw as Record<string, unknown>;
-  const where = (key: string) => {
-    const match = new RegExp(`"${key.replace(/[^\w]/g, '\\$&')}"\\s*:`).exec(text);
-    return { file, line: match ? lineOf(text, match.index) : undefined };
-  };
   const fail = (key: string, message: string): never => {
-    throw inputError(`"${key}" ${message}`, where(key));
+    const match = new RegExp(`"${key.replace(/[^\w]/g, '\\$&')}"\\s*:`).exec(text);
+    throw inputError(`"${key}" ${message}`, { file, line: match ? lineOf(text, match.index) : undefined });
   };
 
   for (const key of Object.keys(object)) {
     if (!KNOWN.includes(key)) {
       const hint = KNOWN.find((known) => known.replace(/_/g, '') === key.replace(/_/g, '').toLowerCase());
-      fail(
-        key,
-        `is not a known field${hint ? ` (did you mean "${hint}"?)` : ''}; known: ${KNOWN.join(', ')}`,
-      );
+      const suggestion = hint ? ` (did you mean "${hint}"?)` : '';
+      fail(key, `is not a known field${suggestion}; known: ${KNOWN.join(', ')}`);
     }
   }
   for (const key of REQUIRED) {
     if (!(key in object)) throw inputError(`"${key}" is missing; required: ${REQUIRED.join(', ')}`, { file });
   }
-
-  const number = (key: string, check: (v: number) => boolean, expected: string): number => {
-    const value = object[key];
-    if (typeof value !== 'number' || !Number.isFinite(value)) fail(key, `must be a number (${expected})`);
-    if (!check(value as number)) fail(key, `must be ${expected}, got ${value}`);
-    return value as number;
-  };
 
   const name = object['name'];
   if (typeof name !== 'string' || name.trim() === '') fail('name', 'must be a non-empty string');
@@ -129,13 +116,18 @@ export function parseEquipment(text: string, file: string): Equipment {
   }
   const system = EQUIPMENT_UNITS[units as EquipmentUnits];
   const m = system.mPerLength;
+  const number = (key: string): number => {
+    const [ok, expected] = NUMBERS[key];
+    const value = object[key];
+    if (!Number.isFinite(value)) fail(key, `must be a number (${expected(system)})`);
+    if (!ok(value as number)) fail(key, `must be ${expected(system)}, got ${value}`);
+    return value as number;
+  };
 
-  const weight = number('weight', (v) => v > 0, `a positive operating weight in ${system.force}`);
-  const cgHeight = number('cg_height', (v) => v >= 0, `a height ≥ 0 in ${system.length}`);
-  const anchors = readPoints(object['anchors'], (message) => fail('anchors', message));
-  checkPattern(anchors, (message) => fail('anchors', message));
+  const [weight, cgHeight] = ['weight', 'cg_height'].map(number);
+  const anchors = readAnchors(object['anchors'], (message) => fail('anchors', message));
 
-  const cgGiven = object['cg_plan'] !== undefined && object['cg_plan'] !== null;
+  const cgGiven = object['cg_plan'] != null;
   if (cgGiven && !isPoint(object['cg_plan'])) fail('cg_plan', `must be [x, y] in ${system.length}`);
   const cgPlan = cgGiven ? (object['cg_plan'] as [number, number]) : centroid(anchors);
 
@@ -145,25 +137,8 @@ export function parseEquipment(text: string, file: string): Equipment {
     fail('period_s', `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodS)}`);
   }
 
-  const damping = number(
-    'damping',
-    (v) => v >= 0 && v < 1,
-    'a fraction of critical, 0 ≤ ζ < 1 (0.05 for 5%)',
-  );
-  const z = number(
-    'z',
-    (v) => v >= 0,
-    `a height ≥ 0 above the base in ${system.length} (0 at or below the base, ASCE 7-16 §13.3.1)`,
-  );
-  const h = number('h', (v) => v > 0, `the roof height above the base, > 0, in ${system.length}`);
-  const ap = number('ap', (v) => v > 0, 'a positive amplification factor a_p');
-  const rp = number('rp', (v) => v > 0, 'a positive response modification factor R_p');
-  const ip = number('ip', (v) => v > 0, 'a positive importance factor I_p');
-  const sds = number('sds', (v) => v > 0, 'a positive S_DS in g');
-  const omega0 =
-    object['omega0'] === undefined || object['omega0'] === null
-      ? null
-      : number('omega0', (v) => v >= 1, 'null or an overstrength factor Ω₀ ≥ 1');
+  const [damping, z, h, ap, rp, ip, sds] = ['damping', 'z', 'h', 'ap', 'rp', 'ip', 'sds'].map(number);
+  const omega0 = object['omega0'] == null ? null : number('omega0');
   if (object['notes'] !== undefined && typeof object['notes'] !== 'string') fail('notes', 'must be a string');
 
   return {
@@ -187,15 +162,30 @@ export function parseEquipment(text: string, file: string): Equipment {
   };
 }
 
-function readPoints(value: unknown, fail: (message: string) => never): [number, number][] {
+/**
+ * The anchors' plan positions: at least two, none repeated, and not all on one line (they could
+ * not resist overturning across it).
+ */
+function readAnchors(value: unknown, fail: (message: string) => never): [number, number][] {
   if (!Array.isArray(value)) return fail('must be a list of [x, y] anchor positions');
   if (value.length < 2) return fail(`needs at least 2 anchors, got ${value.length}`);
-  return value.map((point, i) => {
-    if (!isPoint(point)) {
-      return fail(`anchor ${i + 1} must be [x, y] with two numbers, got ${JSON.stringify(point)}`);
-    }
-    return [point[0], point[1]] as [number, number];
+  const anchors = value.map((point, i): [number, number] =>
+    isPoint(point)
+      ? [point[0], point[1]]
+      : fail(`anchor ${i + 1} must be [x, y] with two numbers, got ${JSON.stringify(point)}`),
+  );
+  anchors.forEach(([x, y], i) => {
+    const j = anchors.findIndex((p) => p[0] === x && p[1] === y);
+    if (j < i) fail(`anchors ${j + 1} and ${i + 1} are at the same place`);
   });
+  const { ixx, iyy, ixy } = secondMoments(anchors);
+  if (!(ixx * iyy - ixy * ixy > 1e-12 * (ixx + iyy) ** 2)) {
+    fail(
+      'all lie on one line; the elastic bolt-group method needs anchors off that line to resist ' +
+        'overturning across it (bearing of the base on its edge is not modelled)',
+    );
+  }
+  return anchors;
 }
 
 /** Whether a JSON value is a plan point [x, y] of two finite numbers. */
@@ -207,34 +197,10 @@ function isPoint(value: unknown): value is [number, number] {
   );
 }
 
-/** Refuse repeated anchors and patterns on one line (they cannot resist overturning across it). */
-function checkPattern(anchors: [number, number][], fail: (message: string) => never): void {
-  for (let i = 0; i < anchors.length; i++) {
-    for (let j = 0; j < i; j++) {
-      if (anchors[i][0] === anchors[j][0] && anchors[i][1] === anchors[j][1]) {
-        fail(`anchors ${j + 1} and ${i + 1} are at the same place`);
-      }
-    }
-  }
-  const { ixx, iyy, ixy } = secondMoments(anchors);
-  const det = ixx * iyy - ixy * ixy;
-  if (!(det > 1e-12 * (ixx + iyy) ** 2)) {
-    fail(
-      'all lie on one line; the elastic bolt-group method needs anchors off that line to resist ' +
-        'overturning across it (bearing of the base on its edge is not modelled)',
-    );
-  }
-}
-
 /** The centroid of the anchor pattern (each anchor weighted equally). */
 export function centroid(points: readonly (readonly [number, number])[]): [number, number] {
-  let x = 0;
-  let y = 0;
-  for (const [px, py] of points) {
-    x += px;
-    y += py;
-  }
-  return [x / points.length, y / points.length];
+  const sum = (axis: 0 | 1) => points.reduce((total, p) => total + p[axis], 0);
+  return [sum(0) / points.length, sum(1) / points.length];
 }
 
 /** The anchors' offsets r_i from the centroid and the pattern's second moments Σx², Σy², Σxy, Σ|r|². */
@@ -242,15 +208,10 @@ export function secondMoments(points: readonly (readonly [number, number])[]) {
   const [cx, cy] = centroid(points);
   const rx = points.map((p) => p[0] - cx);
   const ry = points.map((p) => p[1] - cy);
-  let ixx = 0;
-  let iyy = 0;
-  let ixy = 0;
-  let polar = 0;
-  for (let i = 0; i < points.length; i++) {
-    ixx += rx[i] * rx[i];
-    iyy += ry[i] * ry[i];
-    ixy += rx[i] * ry[i];
-    polar += rx[i] * rx[i] + ry[i] * ry[i];
-  }
+  const sum = (term: (i: number) => number) => rx.reduce((total, _, i) => total + term(i), 0);
+  const ixx = sum((i) => rx[i] * rx[i]);
+  const iyy = sum((i) => ry[i] * ry[i]);
+  const ixy = sum((i) => rx[i] * ry[i]);
+  const polar = sum((i) => rx[i] * rx[i] + ry[i] * ry[i]);
   return { cx, cy, rx, ry, ixx, iyy, ixy, polar };
 }

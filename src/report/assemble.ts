@@ -1,15 +1,10 @@
-import { analyseAnchorage } from '../anchorage/anchorage.js';
 import type { Equipment } from '../anchorage/equipment.js';
-import type { LengthUnit } from '../base/units.js';
-import { VERSION } from '../base/version.js';
-import { anchorageToJson } from '../formats/anchorage-json.js';
-import { anchorPlanInput } from '../formats/anchorage-plan.js';
 import { INFO_METHODS } from '../formats/info.js';
 import { spectrumToCsv } from '../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
 import { targetToJson } from '../formats/target.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import { anchorPlanSvg, dampingFigure, rotdFigure } from '../plot/index.js';
+import { dampingFigure, rotdFigure } from '../plot/index.js';
 import { groundMotionMeasures } from '../record/measures.js';
 import type { GroundRecord } from '../record/record.js';
 import { compareDamping } from '../spectrum/damping.js';
@@ -18,12 +13,17 @@ import type { BuildingMode } from '../spectrum/floor.js';
 import { responseSpectrum, rotdThreads } from '../spectrum/spectrum.js';
 import { fitTarget, targetOverlay, targetRecord } from '../spectrum/target.js';
 import { rotDSpectraParallel } from '../threads/rotd-pool.js';
-import { equipmentDemand } from './equipment-demand.js';
-import { type ReportFigure, type ReportInput, renderReport } from './report.js';
+import { equipmentAnchorage } from './equipment-demand.js';
+import { type ReportInput, renderReport } from './report.js';
 import { spectrumFigures } from './spectrum-figures.js';
 
-/** What a report is made of: records already read and processed, and the choices of its sections. */
-export interface ReportRequest {
+/**
+ * What a report is made of: records already read and processed, and the choices of its sections.
+ * The command line, folder and time the report states are the caller's: the library reads none.
+ */
+export interface ReportRequest
+  extends Partial<Pick<ReportInput, 'title' | 'notes' | 'lengthUnit' | 'commandLine' | 'workingDirectory'>>,
+    Pick<ReportInput, 'generatedAt'> {
   /** The record as read (its facts are shown as read). */
   read: GroundRecord;
   /** The same record processed: the spectra are of this one. */
@@ -31,7 +31,6 @@ export interface ReportRequest {
   grid: { periodsS: Float64Array; dampings: Float64Array; method: Method };
   /** A target spectrum to fit (over `rangeS`), the fit applied to every output with `apply`. */
   target?: { spectrum: DesignSpectrum; rangeS?: [number, number]; apply?: boolean };
-  lengthUnit?: LengthUnit;
   axes?: 'log' | 'linear';
   /** The second horizontal component, processed alike: adds RotD50 and RotD100. */
   pair?: { record: GroundRecord; angleStepDeg: number };
@@ -40,12 +39,6 @@ export interface ReportRequest {
   /** The one-mode building of equipment above the base, and the floor spectrum's peak broadening. */
   building?: BuildingMode | null;
   broadening?: number | null;
-  title?: string;
-  notes?: string[];
-  /** The command line, folder and time the report states (the caller's: the library reads none). */
-  commandLine?: string[];
-  workingDirectory?: string;
-  generatedAt: string;
 }
 
 /**
@@ -62,58 +55,39 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       ? { fit: undefined, spectrum: swept }
       : fitTarget(swept, request.target.spectrum, request.target);
   const record = targetRecord(processed, fit);
+  const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
   const files = new Map<string, string>();
   files.set('spectra.json', formatJson({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }));
   files.set('spectra.csv', spectrumToCsv(spectrum, { lengthUnit, target: fit }));
+  const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
+  const shared = { axes: request.axes ?? 'log', lengthUnit, methodDescription, overlays };
   const input: ReportInput = {
     title: request.title ?? `Response spectra of ${record.name}`,
     notes: request.notes ?? [],
-    read: {
-      name: request.read.name,
-      source: request.read.source,
-      dtS: request.read.dtS,
-      npts: request.read.accelMS2.length,
-      unitsRead: request.read.unitsRead,
-    },
+    read: request.read,
     spectrum,
     measures: groundMotionMeasures(record),
     lengthUnit,
-    spectrumFigures: spectrumFigures(
-      record,
-      spectrum,
-      {
-        axes: request.axes ?? 'log',
-        lengthUnit,
-        methodDescription: METHOD_DESCRIPTIONS[spectrum.method],
-        overlays: fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)],
-      },
-      true,
-    ),
+    spectrumFigures: spectrumFigures(record, spectrum, shared, true),
     target: fit,
     anchorage: [],
     methods: methodStatements(spectrum.method),
-    version: VERSION,
     commandLine: request.commandLine ?? [],
     workingDirectory: request.workingDirectory ?? '',
     generatedAt: request.generatedAt,
     files: [],
   };
-  if (spectrum.curves.length > 1 && spectrum.curves.some((c) => Math.abs(c.damping - 0.05) < 1e-12)) {
+  const isFivePercent = (damping: number) => Math.abs(damping - 0.05) < 1e-12;
+  if (spectrum.curves.length > 1 && spectrum.curves.some((c) => isFivePercent(c.damping))) {
     const comparison = compareDamping(spectrum);
-    const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
-    input.damping = {
-      comparison,
-      figure: {
-        file: 'damping.svg',
-        caption: 'PSA at each damping ratio relative to 5%',
-        svg: dampingFigure({ record: spectrum.record, methodDescription, comparison }),
-      },
-    };
+    const svg = dampingFigure({ record: spectrum.record, methodDescription, comparison });
+    const caption = 'PSA at each damping ratio relative to 5%';
+    input.damping = { comparison, figure: { file: 'damping.svg', caption, svg } };
   }
   if (request.pair !== undefined) {
     const second = request.pair.record;
     // One damping ratio (5% where the grid has it): the rotation sweep costs about 180 single sweeps.
-    const damping = grid.dampings.find((d) => Math.abs(d - 0.05) < 1e-12) ?? grid.dampings[0];
+    const damping = grid.dampings.find(isFivePercent) ?? grid.dampings[0];
     const samples = Math.max(processed.accelMS2.length, second.accelMS2.length);
     const spectra = await rotDSpectraParallel(processed, second, {
       ...grid,
@@ -121,58 +95,26 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       angleStepDeg: request.pair.angleStepDeg,
       threads: rotdThreads(grid.periodsS.length, 1, samples),
     });
+    const svg = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] });
     input.rotd = {
       spectra,
-      figure: {
-        file: 'rotd.svg',
-        caption: 'RotD50, RotD100 and geometric mean',
-        svg: rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] }),
-      },
+      figure: { file: 'rotd.svg', caption: 'RotD50, RotD100 and geometric mean', svg },
     };
     input.methods.push(
       `RotD spectra: at ζ = ${damping * 100}% only; both components processed alike and unscaled (a target scaling is not applied to them).`,
     );
   }
-  (request.equipment ?? []).forEach(({ file, value }, i) => {
-    const n = i + 1;
-    const building = request.building ?? null;
-    const demand = equipmentDemand(
-      value,
-      record,
-      building,
-      request.broadening ?? null,
-      grid.periodsS,
-      grid.method,
-    );
-    const analysis = analyseAnchorage(value, {
-      elastic: demand.elastic,
-      demand: demand.elastic === null ? 'code' : 'max',
-    });
-    analysis.assumptions.push(...demand.notes);
-    const figures: ReportFigure[] = [
-      {
-        file: `anchor-plan-${n}.svg`,
-        caption: `Anchor plan of equipment ${n} with the worst tensions`,
-        svg: anchorPlanSvg(anchorPlanInput(analysis)),
-      },
-    ];
-    if (demand.floor !== undefined) {
-      figures.unshift({
-        file: `floor-${n}.svg`,
-        caption: `Floor spectrum for equipment ${n}, with the ground PSA`,
-        svg: demand.floor,
-      });
-    }
-    const json = anchorageToJson(analysis);
-    files.set(`anchorage-${n}.json`, formatJson(json));
-    input.anchorage.push({ item: { json, file, motion: demand.motion }, figures });
+  (request.equipment ?? []).forEach((equipment, i) => {
+    const anchorage = equipmentAnchorage(i + 1, equipment, record, request);
+    files.set(`anchorage-${i + 1}.json`, formatJson(anchorage.json));
+    input.anchorage.push(anchorage);
   });
   const figures = [
-    ...input.spectrumFigures,
-    ...(input.damping ? [input.damping.figure] : []),
-    ...(input.rotd ? [input.rotd.figure] : []),
-    ...input.anchorage.flatMap((a) => a.figures),
-  ];
+    input.spectrumFigures,
+    input.damping?.figure ?? [],
+    input.rotd?.figure ?? [],
+    input.anchorage.flatMap((a) => a.figures),
+  ].flat();
   for (const f of figures) files.set(f.file, f.svg);
   input.files = [...files.keys()];
   files.set('report.html', renderReport(input));

@@ -1,13 +1,17 @@
-import type { ElasticInput } from '../anchorage/anchorage.js';
+import { analyseAnchorage, type ElasticInput } from '../anchorage/anchorage.js';
 import { psaAtPeriod, recordPsaForComponent } from '../anchorage/elastic-demand.js';
 import type { Equipment } from '../anchorage/equipment.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { anchorageToJson } from '../formats/anchorage-json.js';
+import { anchorPlanInput } from '../formats/anchorage-plan.js';
 import { floorAssumptions } from '../formats/floor.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import { psaFigure } from '../plot/index.js';
+import { anchorPlanSvg, psaFigure } from '../plot/index.js';
 import type { GroundRecord } from '../record/record.js';
 import { type BuildingMode, floorSpectrum } from '../spectrum/floor.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
+import type { ReportAnchorage } from './anchorage-section.js';
+import type { ReportFigure } from './html.js';
 
 /** The elastic demand of one item of equipment in a report, with the motion it came from. */
 export interface EquipmentDemand {
@@ -18,24 +22,26 @@ export interface EquipmentDemand {
   floor?: string;
 }
 
+/** Where the demand of equipment comes from: the grid, and the building of equipment above the base. */
+export interface DemandMotion {
+  grid: { periodsS: Float64Array; method: Method };
+  building?: BuildingMode | null;
+  broadening?: number | null;
+}
+
 /**
  * The elastic demand of one item: on grade, the record's own oscillator at the component's period
  * and damping; above the base, the floor spectrum of the one-mode building (floor.ts), broadened
  * as `broadening` says; without a building, none (the code force alone).
  */
-export function equipmentDemand(
-  e: Equipment,
-  record: GroundRecord,
-  building: BuildingMode | null,
-  broadening: number | null,
-  periodsS: Float64Array,
-  method: Method,
-): EquipmentDemand {
+export function equipmentDemand(e: Equipment, record: GroundRecord, motion: DemandMotion): EquipmentDemand {
+  const { periodsS, method } = motion.grid;
+  const { building } = motion;
   if (e.zM === 0) {
     const value = recordPsaForComponent(record, e.periodS, e.damping, method);
     return { elastic: { ...value, source: record.name }, motion: `ground record ${record.name}`, notes: [] };
   }
-  if (building === null) {
+  if (!building) {
     return {
       elastic: null,
       motion:
@@ -46,39 +52,65 @@ export function equipmentDemand(
     };
   }
   const grid = { periodsS, dampings: [e.damping], method };
-  const floor = floorSpectrum(record, { ...building, method }, grid, broadening);
+  const floor = floorSpectrum(record, { ...building, method }, grid, motion.broadening ?? null);
   const psa = Array.from(floor.spectrum.curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
-  let value: { psaG: number; how: string };
-  if (e.periodS === 'rigid') {
-    const zero = Array.from(periodsS).indexOf(0);
-    value =
-      zero >= 0
+  const zero = Array.from(periodsS).indexOf(0);
+  const value =
+    e.periodS !== 'rigid'
+      ? psaAtPeriod(periodsS, psa, e.periodS, 'the floor spectrum')
+      : zero >= 0
         ? { psaG: psa[zero], how: 'PSA at T = 0 of the floor spectrum (floor PGA), rigid component' }
         : { psaG: floor.spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2, how: 'floor PGA, rigid component' };
-  } else {
-    value = psaAtPeriod(periodsS, psa, e.periodS, 'the floor spectrum');
-  }
-  const ground = responseSpectrum(record, grid);
+  const ground = Array.from(responseSpectrum(record, grid).curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
+  const abovePeriodZero = <T>(values: T[]) => values.filter((_, i) => periodsS[i] > 0);
   const figure = psaFigure(floor.spectrum, {
     methodDescription: METHOD_DESCRIPTIONS[method],
     overlays: [
       {
         label: `ground PSA, ζ = ${e.damping * 100}%`,
-        periodsS: Array.from(periodsS).filter((t) => t > 0),
-        psaG: Array.from(ground.curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2).filter(
-          (_, i) => periodsS[i] > 0,
-        ),
+        periodsS: abovePeriodZero(Array.from(periodsS)),
+        psaG: abovePeriodZero(ground),
       },
     ],
   });
-  const motion = `floor spectrum of ${record.name}: T_b = ${building.periodS} s, ζ_b = ${building.damping}, Γφ = ${building.modalFactor}${floor.broadening === null ? '' : `, peaks broadened ±${floor.broadening}`}`;
+  const broadened = floor.broadening === null ? '' : `, peaks broadened ±${floor.broadening}`;
   return {
     elastic: { ...value, source: 'floor spectrum' },
-    motion,
+    motion: `floor spectrum of ${record.name}: T_b = ${building.periodS} s, ζ_b = ${building.damping}, Γφ = ${building.modalFactor}${broadened}`,
     notes: [
       ...floorAssumptions(floor, building, record.dtS),
       'This tool does not check that Γφ belongs to the floor at z.',
     ],
     floor: figure,
   };
+}
+
+/**
+ * Item `n` of the report's equipment: its anchorage for the larger of the code force and the
+ * elastic demand (the code force alone without a motion), and its figures, the floor spectrum first.
+ */
+export function equipmentAnchorage(
+  n: number,
+  equipment: { file: string; value: Equipment },
+  record: GroundRecord,
+  motion: DemandMotion,
+): ReportAnchorage {
+  const demand = equipmentDemand(equipment.value, record, motion);
+  const analysis = analyseAnchorage(equipment.value, {
+    elastic: demand.elastic,
+    demand: demand.elastic === null ? 'code' : 'max',
+  });
+  analysis.assumptions.push(...demand.notes);
+  const figures: ReportFigure[] = [
+    {
+      file: `anchor-plan-${n}.svg`,
+      caption: `Anchor plan of equipment ${n} with the worst tensions`,
+      svg: anchorPlanSvg(anchorPlanInput(analysis)),
+    },
+  ];
+  if (demand.floor !== undefined) {
+    const caption = `Floor spectrum for equipment ${n}, with the ground PSA`;
+    figures.unshift({ file: `floor-${n}.svg`, caption, svg: demand.floor });
+  }
+  return { json: anchorageToJson(analysis), file: equipment.file, motion: demand.motion, figures };
 }

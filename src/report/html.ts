@@ -1,11 +1,15 @@
+/** A figure of the report: the SVG text as the figure functions write it, and the file it is also saved as. */
+export interface ReportFigure {
+  file: string;
+  caption: string;
+  svg: string;
+}
+
+const ENTITIES = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
+
 /** Escape text for HTML element content and double-quoted attribute values. */
 export function escapeHtml(text: string): string {
-  return text
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&#39;');
+  return text.replace(/[&<>"']/g, (character) => ENTITIES[character as keyof typeof ENTITIES]);
 }
 
 /** A table cell value: text is escaped; numbers are written with `digits` significant figures. */
@@ -17,6 +21,11 @@ export function formatNumber(value: number | null | undefined, digits = 4): stri
   if (value === 0) return '0';
   if (!Number.isFinite(value)) return String(value);
   return Number(value.toPrecision(digits)).toString();
+}
+
+/** "a to b s", each with four significant figures. */
+export function span(fromS: number | null, toS: number | null): string {
+  return `${formatNumber(fromS)} to ${formatNumber(toS)} s`;
 }
 
 /**

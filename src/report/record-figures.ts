@@ -1,6 +1,6 @@
 import { INFO_METHODS } from '../formats/info.js';
 import { logSpaced } from '../oscillator/grid.js';
-import { fourierFigure } from '../plot/fourier-figure.js';
+import { type FourierFigureInput, fourierFigure } from '../plot/fourier-figure.js';
 import { historiesFigure } from '../plot/histories-figure.js';
 import { husidFigure } from '../plot/husid-figure.js';
 import { fourierAmplitudeSpectrum, konnoOhmachiSmooth } from '../record/fourier.js';
@@ -17,50 +17,28 @@ export function recordFigures(
   m: GroundMotionMeasures,
   smoothingB: number | null,
 ): [string, string][] {
-  const about = { name: record.name, source: record.source, processing: record.processing };
-  const histories = historiesFigure(
-    {
-      ...about,
-      dtS: record.dtS,
-      ...integrateRecord(record),
-      integrationDescription: INFO_METHODS.integration,
-    },
-    { lengthUnit: 'm' },
-  );
-  const husid = husidFigure({
-    ...about,
-    dtS: record.dtS,
-    husid: husidCurve(record.accelMS2, record.dtS),
-    t5S: m.t5S,
-    t75S: m.t75S,
-    t95S: m.t95S,
-  });
   const fas = fourierAmplitudeSpectrum(record.accelMS2, record.dtS);
-  let smoothed: { smoothedHz?: Float64Array; smoothedMS?: Float64Array; smoothingLabel?: string } = {};
+  let smoothed: Partial<FourierFigureInput> = {};
   if (smoothingB !== null) {
     const fLow = fas.frequenciesHz[1];
     const fHigh = fas.frequenciesHz[fas.frequenciesHz.length - 1];
     const count = Math.max(2, Math.ceil(60 * Math.log10(fHigh / fLow)));
-    const smoothedHz = Float64Array.from(logSpaced(fLow, fHigh, count));
+    const centresHz = Float64Array.from(logSpaced(fLow, fHigh, count));
     smoothed = {
-      smoothedHz,
+      smoothedHz: centresHz,
       smoothedMS: konnoOhmachiSmooth(fas.frequenciesHz, fas.amplitudeMS, {
         bandwidth: smoothingB,
-        centresHz: smoothedHz,
+        centresHz,
       }),
       smoothingLabel: `Konno–Ohmachi 1998, b = ${smoothingB}`,
     };
   }
-  const fourier = fourierFigure({
-    ...about,
-    frequenciesHz: fas.frequenciesHz,
-    amplitudeMS: fas.amplitudeMS,
-    ...smoothed,
-    methodDescription: `FFT of ${fas.transformLength} points (zero-padded), amplitude = Δt·|DFT|`,
-  });
+  const histories = { ...integrateRecord(record), integrationDescription: INFO_METHODS.integration };
+  const husid = husidCurve(record.accelMS2, record.dtS);
+  const fourierMethod = `FFT of ${fas.transformLength} points (zero-padded), amplitude = Δt·|DFT|`;
   return [
-    ['histories.svg', histories],
-    ['husid.svg', husid],
-    ['fourier.svg', fourier],
+    ['histories.svg', historiesFigure({ ...record, ...histories }, { lengthUnit: 'm' })],
+    ['husid.svg', husidFigure({ ...record, husid, t5S: m.t5S, t75S: m.t75S, t95S: m.t95S })],
+    ['fourier.svg', fourierFigure({ ...record, ...fas, ...smoothed, methodDescription: fourierMethod })],
   ];
 }

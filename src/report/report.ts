@@ -1,12 +1,14 @@
 import { CAUTION } from '../base/caution.js';
 import type { LengthUnit } from '../base/units.js';
+import { VERSION } from '../base/version.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
 import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
-import { definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
+import type { ReportFigure } from './html.js';
+import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';
 import {
   dampingSection,
@@ -16,18 +18,9 @@ import {
   type RecordFacts,
   recordSection,
   rotdSection,
+  targetSection,
 } from './sections.js';
 import { REPORT_CSS } from './styles.js';
-
-export type { ReportAnchorage } from './anchorage-section.js';
-export type { RecordFacts } from './sections.js';
-
-/** A figure of the report: the SVG text as the figure functions write it, and the file it is also saved as. */
-export interface ReportFigure {
-  file: string;
-  caption: string;
-  svg: string;
-}
 
 /** Everything one report shows. The function that renders it does no I/O. */
 export interface ReportInput {
@@ -43,10 +36,9 @@ export interface ReportInput {
   target?: TargetFit;
   damping?: { comparison: DampingComparison; figure: ReportFigure };
   rotd?: { spectra: RotDSpectra; figure: ReportFigure };
-  anchorage: { item: ReportAnchorage; figures: ReportFigure[] }[];
+  anchorage: ReportAnchorage[];
   /** Method statements from the rest of the program (oscillator, spectra). */
   methods: string[];
-  version: string;
   /** The command line that produced the report, as words (quoted for a POSIX shell when shown). */
   commandLine: string[];
   /** The folder the command was run from, for the relative paths in it. */
@@ -78,124 +70,72 @@ export const LIMITS_OF_USE = [
  * of text from a file or an option is escaped.
  */
 export function renderReport(input: ReportInput): string {
-  const sections: { id: string; title: string; body: string }[] = [];
+  const contents: string[] = [];
+  const body: string[] = [];
+  const add = (id: string, title: string, ...parts: string[]) => {
+    const heading = `${contents.length + 1}. ${escapeHtml(title)}`;
+    contents.push(`<li><a href="#${id}">${heading}</a></li>`);
+    body.push(`<section id="${id}">\n<h2>${heading}</h2>\n${parts.join('\n')}\n</section>`);
+  };
   let tableNumber = 3;
   let figureNumber = 1;
   const figure = (f: ReportFigure, id: string) => {
     const n = figureNumber++;
     return `<figure id="figure-${n}">\n${inlineSvg(f.svg, `${id}-${n}`)}\n<figcaption><strong>Figure ${n}.</strong> ${escapeHtml(f.caption)} (also saved as <code>${escapeHtml(f.file)}</code>)</figcaption>\n</figure>`;
   };
-  sections.push({ id: 'record', title: 'Record', body: recordSection(input.read, input.spectrum.record) });
-  sections.push({
-    id: 'processing',
-    title: 'Processing applied',
-    body: processingSection(input.spectrum.record.processing),
-  });
-  sections.push({ id: 'measures', title: 'Ground-motion measures', body: measuresSection(input.measures) });
-  sections.push({
-    id: 'spectra',
-    title: 'Response spectra',
-    body: [
-      peaksSection(input.spectrum, input.lengthUnit, tableNumber++),
-      paragraph(
-        'All values for every period are in spectra.json and spectra.csv beside this report.',
-        'note',
-      ),
-      ...input.spectrumFigures.map((f) => figure(f, 'spectra')),
-    ].join('\n'),
-  });
-  if (input.target !== undefined) {
-    const t = input.target;
-    sections.push({
-      id: 'target',
-      title: 'Comparison with the target spectrum',
-      body: [
-        definitionTable(`Table ${tableNumber++}. Target and amplitude scaling`, [
-          ['Target', t.description],
-          ['Damping compared', `${formatNumber(t.damping * 100, 6)}%`],
-          ['Scale factor', formatNumber(t.factor, 5)],
-          [
-            'Fitted over',
-            `${formatNumber(t.rangeS[0])} to ${formatNumber(t.rangeS[1])} s (${t.periodCount} grid periods)`,
-          ],
-          [
-            'Scaled record / target',
-            `mean ${formatNumber(t.meanRatio)}, least ${formatNumber(t.minRatio)}, greatest ${formatNumber(t.maxRatio)}`,
-          ],
-          ['Criterion', t.criterion],
-          [
-            'Applied to the spectra of this report',
-            t.applied ? 'yes: every spectral value above is scaled' : 'no: the values above are as recorded',
-          ],
-        ]),
-        paragraph('The target is drawn on the PSA and four-way figures of section 4.', 'note'),
-      ].join('\n'),
-    });
+  const { spectrum, target, damping, rotd } = input;
+  add('record', 'Record', recordSection(input.read, spectrum.record));
+  add('processing', 'Processing applied', processingSection(spectrum.record.processing));
+  add('measures', 'Ground-motion measures', measuresSection(input.measures));
+  add(
+    'spectra',
+    'Response spectra',
+    peaksSection(spectrum, input.lengthUnit, tableNumber++),
+    paragraph('All values for every period are in spectra.json and spectra.csv beside this report.', 'note'),
+    ...input.spectrumFigures.map((f) => figure(f, 'spectra')),
+  );
+  if (target) add('target', 'Comparison with the target spectrum', targetSection(target, tableNumber++));
+  if (damping !== undefined) {
+    const table = dampingSection(damping.comparison, tableNumber++);
+    add('damping', 'Damping comparison', table, figure(damping.figure, 'damping'));
   }
-  if (input.damping !== undefined) {
-    sections.push({
-      id: 'damping',
-      title: 'Damping comparison',
-      body: [
-        dampingSection(input.damping.comparison, tableNumber++),
-        figure(input.damping.figure, 'damping'),
-      ].join('\n'),
-    });
-  }
-  if (input.rotd !== undefined) {
-    sections.push({
-      id: 'rotd',
-      title: 'Two horizontal components: RotD50 and RotD100',
-      body: [rotdSection(input.rotd.spectra, tableNumber++), figure(input.rotd.figure, 'rotd')].join('\n'),
-    });
+  if (rotd !== undefined) {
+    const table = rotdSection(rotd.spectra, tableNumber++);
+    add('rotd', 'Two horizontal components: RotD50 and RotD100', table, figure(rotd.figure, 'rotd'));
   }
   if (input.anchorage.length > 0) {
     const parts: string[] = [paragraph(CAUTION, 'caution-inline')];
-    input.anchorage.forEach(({ item, figures }, i) => {
-      const number = `${sections.length + 1}.${i + 1}`;
-      parts.push(
-        `<h3>${number} ${escapeHtml(String((item.json.equipment as { name?: unknown }).name ?? item.file))}</h3>`,
-      );
-      parts.push(anchorageSection(item, number, tableNumber));
+    input.anchorage.forEach((item, i) => {
+      parts.push(anchorageSection(item, `${contents.length + 1}.${i + 1}`, tableNumber));
       tableNumber += 3;
-      for (const f of figures) parts.push(figure(f, `anchor-${i + 1}`));
+      for (const f of item.figures) parts.push(figure(f, `anchor-${i + 1}`));
     });
-    sections.push({ id: 'anchorage', title: 'Equipment anchorage demands', body: parts.join('\n') });
+    add('anchorage', 'Equipment anchorage demands', ...parts);
   }
-  sections.push({ id: 'method', title: 'Method and assumptions', body: list(input.methods) });
-  sections.push({ id: 'limits', title: 'Limits of use', body: list(LIMITS_OF_USE) });
-  sections.push({
-    id: 'reproduce',
-    title: 'Reproducing this report',
-    body: reproduceSection(input, tableNumber),
-  });
+  add('method', 'Method and assumptions', list(input.methods));
+  add('limits', 'Limits of use', list(LIMITS_OF_USE));
+  add('reproduce', 'Reproducing this report', reproduceSection(input, tableNumber));
 
-  const contents = sections
-    .map((s, i) => `<li><a href="#${s.id}">${i + 1}. ${escapeHtml(s.title)}</a></li>`)
-    .join('\n');
-  const body = sections
-    .map((s, i) => `<section id="${s.id}">\n<h2>${i + 1}. ${escapeHtml(s.title)}</h2>\n${s.body}\n</section>`)
-    .join('\n');
   return `<!DOCTYPE html>
 <html lang="en">
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
-<meta name="generator" content="quakesweep ${escapeHtml(input.version)}">
+<meta name="generator" content="quakesweep ${escapeHtml(VERSION)}">
 <title>${escapeHtml(input.title)}</title>
 <style>${REPORT_CSS}</style>
 </head>
 <body>
 <header class="title">
 <h1>${escapeHtml(input.title)}</h1>
-<p>Response spectrum calculation · quakesweep ${escapeHtml(input.version)} · record ${escapeHtml(input.read.name)}</p>
+<p>Response spectrum calculation · quakesweep ${escapeHtml(VERSION)} · record ${escapeHtml(input.read.name)}</p>
 </header>
 <div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
 ${input.notes.map((note) => paragraph(note, 'intro')).join('\n')}
 <nav class="contents"><strong>Contents</strong><ol class="plain">
-${contents}
+${contents.join('\n')}
 </ol></nav>
-${body}
+${body.join('\n')}
 <footer>${escapeHtml(CAUTION)}</footer>
 </body>
 </html>
@@ -203,10 +143,11 @@ ${body}
 }
 
 function reproduceSection(input: ReportInput, tableNumber: number): string {
+  const { periodsS, curves, method } = input.spectrum;
   const command = ['quakesweep', ...input.commandLine].map(shellQuote).join(' ');
   return [
     definitionTable(`Table ${tableNumber}. Program and run`, [
-      ['Program', `quakesweep ${input.version}`],
+      ['Program', `quakesweep ${VERSION}`],
       ['Run from the folder', input.workingDirectory],
       ['Files written beside report.html', input.files.join(', ')],
     ]),
@@ -219,15 +160,9 @@ function reproduceSection(input: ReportInput, tableNumber: number): string {
       `Table ${tableNumber + 1}. Oscillator grid`,
       ['Quantity', 'Value'],
       [
-        [
-          'Periods',
-          `${input.spectrum.periodsS.length}, ${formatNumber(input.spectrum.periodsS[0])} to ${formatNumber(input.spectrum.periodsS[input.spectrum.periodsS.length - 1])} s`,
-        ],
-        [
-          'Damping ratios',
-          input.spectrum.curves.map((c) => `${formatNumber(c.damping * 100, 6)}%`).join(', '),
-        ],
-        ['Step method', input.spectrum.method],
+        ['Periods', `${periodsS.length}, ${span(periodsS[0], periodsS[periodsS.length - 1])}`],
+        ['Damping ratios', curves.map((c) => `${formatNumber(c.damping * 100, 6)}%`).join(', ')],
+        ['Step method', method],
       ],
     ),
   ].join('\n');

@@ -2,32 +2,30 @@ import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/uni
 import { dampingLabel } from '../formats/layout.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
+import type { GroundRecord } from '../record/record.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { type Cell, definitionTable, escapeHtml, formatNumber, list, paragraph, table } from './html.js';
+import type { TargetFit } from '../spectrum/target.js';
+import type { Cell } from './html.js';
+import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 
 /** What the report says of the record as it was read (before processing). */
-export interface RecordFacts {
-  name: string;
-  source: string;
-  dtS: number;
-  npts: number;
-  unitsRead: string;
-}
+export type RecordFacts = Pick<GroundRecord, 'name' | 'source' | 'dtS' | 'accelMS2' | 'unitsRead'>;
 
 const g = STANDARD_GRAVITY_MS2;
 
 export function recordSection(read: RecordFacts, processed: { dtS: number; npts: number }): string {
+  const npts = read.accelMS2.length;
   const rows: [string, string][] = [
     ['Name', read.name],
     ['Source file', read.source],
     ['Units read', `${read.unitsRead} (converted to m/s² inside the program)`],
     ['Time step Δt as read', `${read.dtS} s`],
-    ['Samples as read', String(read.npts)],
-    ['Length as read', `${formatNumber((read.npts - 1) * read.dtS, 6)} s`],
+    ['Samples as read', String(npts)],
+    ['Length as read', `${formatNumber((npts - 1) * read.dtS, 6)} s`],
   ];
-  if (processed.dtS !== read.dtS || processed.npts !== read.npts) {
+  if (processed.dtS !== read.dtS || processed.npts !== npts) {
     rows.push(['Time step after processing', `${processed.dtS} s`]);
     rows.push(['Samples after processing', String(processed.npts)]);
   }
@@ -35,10 +33,8 @@ export function recordSection(read: RecordFacts, processed: { dtS: number; npts:
 }
 
 export function processingSection(steps: readonly { operation: string; description: string }[]): string {
-  if (steps.length === 0)
-    return paragraph(
-      'None: the record is used as read (no baseline correction, taper, filter or resampling).',
-    );
+  const none = 'None: the record is used as read (no baseline correction, taper, filter or resampling).';
+  if (steps.length === 0) return paragraph(none);
   return [
     paragraph(`Applied in this order (the program's fixed order is ${PROCESSING_ORDER.join(' → ')}):`),
     `<ol>\n${steps.map((s) => `<li><strong>${escapeHtml(s.operation)}</strong>: ${escapeHtml(s.description)}</li>`).join('\n')}\n</ol>`,
@@ -52,20 +48,15 @@ export function measuresSection(m: GroundMotionMeasures): string {
     ['Peak ground velocity PGV', m.pgv.value, 'm/s', at(m.pgv.timeS)],
     ['Peak ground displacement PGD', m.pgd.value, 'm', at(m.pgd.timeS)],
     ['Arias intensity I_a', m.ariasMS, 'm/s', 'π/(2g)∫a²dt (Arias 1970)'],
-    [
-      'Significant duration D5–75',
-      m.d5to75S,
-      's',
-      `${formatNumber(m.t5S)} to ${formatNumber(m.t75S)} s (Trifunac and Brady 1975)`,
-    ],
-    ['Significant duration D5–95', m.d5to95S, 's', `${formatNumber(m.t5S)} to ${formatNumber(m.t95S)} s`],
+    ['Significant duration D5–75', m.d5to75S, 's', `${span(m.t5S, m.t75S)} (Trifunac and Brady 1975)`],
+    ['Significant duration D5–95', m.d5to95S, 's', span(m.t5S, m.t95S)],
     [
       `Bracketed duration (|a| ≥ ${formatNumber(m.bracketThresholdMS2 / g)} g)`,
       m.bracketedS,
       's',
       m.bracketStartS === null
         ? 'threshold never reached'
-        : `${formatNumber(m.bracketStartS)} to ${formatNumber(m.bracketEndS)} s (Bolt 1973)`,
+        : `${span(m.bracketStartS, m.bracketEndS)} (Bolt 1973)`,
     ],
     ['Cumulative absolute velocity CAV', m.cavMS, 'm/s', '∫|a|dt (EPRI 1988), no threshold'],
     [
@@ -75,12 +66,9 @@ export function measuresSection(m: GroundMotionMeasures): string {
       `Fourier lines ${formatNumber(m.meanPeriodBandHz[0])}–${formatNumber(m.meanPeriodBandHz[1])} Hz (Rathje, Abrahamson and Bray 1998)`,
     ],
   ];
+  const caption = 'Table 2. Ground-motion measures of the processed record';
   return [
-    table(
-      'Table 2. Ground-motion measures of the processed record',
-      ['Measure', 'Value', 'Unit', 'Where / how'],
-      rows,
-    ),
+    table(caption, ['Measure', 'Value', 'Unit', 'Where / how'], rows),
     paragraph(
       'Velocity and displacement by the trapezoidal rule from rest, after the processing of section 2.',
       'note',
@@ -88,21 +76,12 @@ export function measuresSection(m: GroundMotionMeasures): string {
   ].join('\n');
 }
 
-/** Index of the largest value at a period above 0. */
-function peakIndex(periodsS: Float64Array, values: Float64Array): number {
-  let best = -1;
-  for (let p = 0; p < values.length; p++) {
-    if (periodsS[p] > 0 && (best < 0 || values[p] > values[best])) best = p;
-  }
-  return Math.max(best, 0);
-}
-
-/** PSA at the grid period nearest to `t`, with that period. */
+/** Index of the grid period nearest to `t` (the first of two as near). */
 function nearest(periodsS: Float64Array, t: number): number {
-  let best = 0;
-  for (let p = 1; p < periodsS.length; p++)
-    if (Math.abs(periodsS[p] - t) < Math.abs(periodsS[best] - t)) best = p;
-  return best;
+  return periodsS.reduce(
+    (best, period, p) => (Math.abs(period - t) < Math.abs(periodsS[best] - t) ? p : best),
+    0,
+  );
 }
 
 export function peaksSection(spectrum: Spectrum, lengthUnit: LengthUnit, tableNumber: number): string {
@@ -110,24 +89,24 @@ export function peaksSection(spectrum: Spectrum, lengthUnit: LengthUnit, tableNu
   const periods = spectrum.periodsS;
   const short = nearest(periods, 0.2);
   const long = nearest(periods, 1);
-  const rows = spectrum.curves.map((curve): Cell[] => {
-    const pPsa = peakIndex(periods, curve.psaMS2);
-    const pSd = peakIndex(periods, curve.sdM);
-    const pPsv = peakIndex(periods, curve.psvMS);
-    return [
-      dampingLabel(curve.damping),
-      curve.psaMS2[pPsa] / g,
-      periods[pPsa],
-      curve.psaMS2[short] / g,
-      curve.psaMS2[long] / g,
-      curve.sdM[pSd] * perLength,
-      periods[pSd],
-      curve.psvMS[pPsv] * perLength,
-      periods[pPsv],
-    ];
-  });
+  // The largest value at a period above 0 (the first of equals), converted, and its period.
+  const peak = (values: Float64Array, convert: (value: number) => number): Cell[] => {
+    const p = values.reduce(
+      (best, v, i) => (periods[i] > 0 && (best < 0 || v > values[best]) ? i : best),
+      -1,
+    );
+    return [convert(values[Math.max(p, 0)]), periods[Math.max(p, 0)]];
+  };
+  const rows = spectrum.curves.map((curve): Cell[] => [
+    dampingLabel(curve.damping),
+    ...peak(curve.psaMS2, (v) => v / g),
+    curve.psaMS2[short] / g,
+    curve.psaMS2[long] / g,
+    ...peak(curve.sdM, (v) => v * perLength),
+    ...peak(curve.psvMS, (v) => v * perLength),
+  ]);
   return table(
-    `Table ${tableNumber}. Peak spectral values (grid of ${periods.length} periods, ${formatNumber(periods[0])} to ${formatNumber(periods[periods.length - 1])} s)`,
+    `Table ${tableNumber}. Peak spectral values (grid of ${periods.length} periods, ${span(periods[0], periods[periods.length - 1])})`,
     [
       'Damping ζ',
       'Peak PSA (g)',
@@ -175,21 +154,19 @@ export function dampingSection(comparison: DampingComparison, tableNumber: numbe
 
 export function rotdSection(spectra: RotDSpectra, tableNumber: number): string {
   const periods = spectra.periodsS;
-  const rows: Cell[][] = [];
-  for (const curve of spectra.curves) {
-    for (const t of [0, 0.2, 0.5, 1, 2]) {
-      if (t < periods[0] || t > periods[periods.length - 1]) continue;
-      const p = nearest(periods, t);
-      rows.push([
-        dampingLabel(curve.damping),
-        periods[p],
-        curve.rotd50MS2[p] / g,
-        curve.rotd100MS2[p] / g,
-        curve.geomeanMS2[p] / g,
-        curve.rotd50MS2[p] > 0 ? curve.rotd100MS2[p] / curve.rotd50MS2[p] : null,
-      ]);
-    }
-  }
+  const selected = [0, 0.2, 0.5, 1, 2]
+    .filter((t) => t >= periods[0] && t <= periods[periods.length - 1])
+    .map((t) => nearest(periods, t));
+  const rows = spectra.curves.flatMap((curve) =>
+    selected.map((p): Cell[] => [
+      dampingLabel(curve.damping),
+      periods[p],
+      curve.rotd50MS2[p] / g,
+      curve.rotd100MS2[p] / g,
+      curve.geomeanMS2[p] / g,
+      curve.rotd50MS2[p] > 0 ? curve.rotd100MS2[p] / curve.rotd50MS2[p] : null,
+    ]),
+  );
   return [
     definitionTable('Components', [
       ['First component', `${spectra.records[0].name} (${spectra.records[0].source})`],
@@ -206,5 +183,26 @@ export function rotdSection(spectra: RotDSpectra, tableNumber: number): string {
       'PSA(θ) = ω² max|u₁ cos θ + u₂ sin θ|; RotD50 is the median over the angles and RotD100 the largest (Boore 2010); the geometric mean is √(PSA₁·PSA₂) of the components as recorded.',
       'note',
     ),
+  ].join('\n');
+}
+
+export function targetSection(t: TargetFit, tableNumber: number): string {
+  return [
+    definitionTable(`Table ${tableNumber}. Target and amplitude scaling`, [
+      ['Target', t.description],
+      ['Damping compared', `${formatNumber(t.damping * 100, 6)}%`],
+      ['Scale factor', formatNumber(t.factor, 5)],
+      ['Fitted over', `${span(t.rangeS[0], t.rangeS[1])} (${t.periodCount} grid periods)`],
+      [
+        'Scaled record / target',
+        `mean ${formatNumber(t.meanRatio)}, least ${formatNumber(t.minRatio)}, greatest ${formatNumber(t.maxRatio)}`,
+      ],
+      ['Criterion', t.criterion],
+      [
+        'Applied to the spectra of this report',
+        t.applied ? 'yes: every spectral value above is scaled' : 'no: the values above are as recorded',
+      ],
+    ]),
+    paragraph('The target is drawn on the PSA and four-way figures of section 4.', 'note'),
   ].join('\n');
 }

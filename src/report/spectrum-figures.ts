@@ -3,7 +3,7 @@ import { historiesFigure, psaFigure, psvFigure, sdFigure, tripartiteFigure } fro
 import { integrateRecord } from '../record/integrate.js';
 import type { GroundRecord } from '../record/record.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import type { ReportFigure } from './report.js';
+import type { ReportFigure } from './html.js';
 
 /** The figures of a record's spectra (PSA, SD, PSV, tripartite) and, with `histories`, of the record. */
 export function spectrumFigures(
