@@ -22,15 +22,13 @@ export function registerMerge(program: Command): void {
       '--out <dir>',
       'folder for suite.json and the record folders (may be one of the shard folders)',
     )
-    .action((dirs: string[], options: { out: string }) => {
-      runMerge(dirs, options.out);
-    });
+    .action(runMerge);
 }
 
 const SHARD_FILE = /^shard-(\d+)-of-(\d+)\.json$/;
 
 /** Read every shard summary, check that they make one whole run, copy the record folders, write suite.json. */
-export function runMerge(dirs: string[], out: string): void {
+export function runMerge(dirs: string[], { out }: { out: string }): void {
   const shards: { dir: string; file: string; json: ShardJson }[] = [];
   for (const dir of dirs) {
     if (!existsSync(dir)) throw usageError(`${dir}: no such folder`);

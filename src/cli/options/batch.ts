@@ -4,7 +4,7 @@ import { parseShard, type Shard } from '../../batch/shard.js';
 import type { SuiteSettings } from '../../batch/work.js';
 import { type GridCliOptions, gridFromOptions } from './grid.js';
 import { type ProcessingCliOptions, processingPlanFromOptions } from './processing.js';
-import { positiveInteger, type RecordCliOptions, recordReadOptions } from './record.js';
+import { type RecordCliOptions, recordReadOptions, wholeNumber } from './record.js';
 
 /** The options of `quakesweep batch`. */
 export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
@@ -36,7 +36,7 @@ export function batchPlan(options: BatchCliOptions): BatchPlan {
     dampings: Array.from(grid.dampings),
     method: grid.method,
   };
-  const jobs = options.jobs === undefined ? availableParallelism() : positiveInteger('--jobs', options.jobs);
+  const jobs = options.jobs === undefined ? availableParallelism() : wholeNumber('--jobs', options.jobs, 1);
   const shard =
     options.shard === undefined ? null : parseShard(options.shard, process.env, options.shardCount);
   if (options.shardCount !== undefined && options.shard !== 'auto')
