@@ -11,7 +11,9 @@ describe('outputFormat', () => {
 
   it('refuses a format the command does not write, in the words it gives', () => {
     expect(() => outputFormat({ format: 'xml' }, 'json or csv')).toThrow("--format 'xml': use json or csv");
-    expect(() => outputFormat({ format: 'csv' }, 'json or table')).toThrow("--format 'csv': use json or table");
+    expect(() => outputFormat({ format: 'csv' }, 'json or table')).toThrow(
+      "--format 'csv': use json or table",
+    );
     expect(() => outputFormat({ out: 'x' }, 'csv')).toThrow("--format 'json': use csv");
   });
 });
