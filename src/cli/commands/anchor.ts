@@ -61,9 +61,8 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   if (options.equipment === undefined) throw usageError('--equipment <file> is required');
   outputFormat(options, 'json or table');
   const records = options.record ?? [];
-  if (records.length > 0 && options.spectrum !== undefined) {
+  if (records.length > 0 && options.spectrum !== undefined)
     throw usageError('give --record or --spectrum, not both');
-  }
   const hasMotion = records.length > 0 || options.spectrum !== undefined;
   const demand = parseDemandChoice(options.demand ?? (hasMotion ? 'max' : 'code'));
   const method = parseMethod(options.method ?? 'newmark-average');

@@ -35,7 +35,9 @@ export function registerInfo(program: Command): void {
 export async function runInfo(source: string, options: InfoCliOptions): Promise<void> {
   outputFormat(options, 'table or json');
   const thresholdG = positiveNumber('--bracket-threshold', options.bracketThreshold ?? '0.05');
-  const smoothing = parseSmoothing(options.smoothing ?? String(KONNO_OHMACHI_DEFAULT_B));
+  const smoothingText = options.smoothing ?? String(KONNO_OHMACHI_DEFAULT_B);
+  const smoothing =
+    smoothingText.trim().toLowerCase() === 'none' ? null : positiveNumber('--smoothing', smoothingText);
   const record = applyProcessing(await loadRecord(source, options), options);
   const measures = groundMotionMeasures(record, { bracketThresholdMS2: thresholdG * STANDARD_GRAVITY_MS2 });
   const predominant = predominantPeriod(record);
@@ -45,9 +47,4 @@ export async function runInfo(source: string, options: InfoCliOptions): Promise<
     table: () => infoTable(json),
     figures: () => recordFigures(record, measures, smoothing),
   });
-}
-
-function parseSmoothing(text: string): number | null {
-  if (text.trim().toLowerCase() === 'none') return null;
-  return positiveNumber('--smoothing', text);
 }

@@ -8,7 +8,7 @@ import { targetToJson } from '../../formats/target.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { checkFolder } from '../../output/output-set.js';
 import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
-import { targetOverlay, targetRecord } from '../../spectrum/target.js';
+import { fitTarget, targetOverlay, targetRecord } from '../../spectrum/target.js';
 import {
   addOutputOptions,
   figureAxes,
@@ -19,12 +19,7 @@ import {
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
-import {
-  addTargetOptions,
-  applyTarget,
-  type TargetCliOptions,
-  targetFromOptions,
-} from '../options/target.js';
+import { addTargetOptions, type TargetCliOptions, targetFromOptions } from '../options/target.js';
 import { sweepFromOptions } from '../options/threads.js';
 
 export interface SpectrumCliOptions
@@ -80,7 +75,8 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const sweep = sweepFromOptions(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
-  const { fit, spectrum } = applyTarget(swept, target);
+  const { fit, spectrum } =
+    target === undefined ? { fit: undefined, spectrum: swept } : fitTarget(swept, target.spectrum, target);
   const inputs = options.target === undefined ? [source] : [source, options.target];
   await writeProduct(inputs, options, {
     json: () => ({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }),

@@ -1,6 +1,6 @@
 import { availableParallelism } from 'node:os';
 import { usageError } from '../../base/errors.js';
-import { parseShard, type Shard } from '../../batch/shard.js';
+import { parseShard } from '../../batch/shard.js';
 import type { SuiteSettings } from '../../batch/work.js';
 import { type GridCliOptions, gridFromOptions } from './grid.js';
 import { type ProcessingCliOptions, processingPlanFromOptions } from './processing.js';
@@ -15,14 +15,7 @@ export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions,
 }
 
 /** A batch run as the options describe it: its folder, what every record shares, threads and shard. */
-export interface BatchPlan {
-  out: string;
-  settings: SuiteSettings;
-  jobs: number;
-  shard: Shard | null;
-}
-
-export function batchPlan(options: BatchCliOptions): BatchPlan {
+export function batchPlan(options: BatchCliOptions) {
   const out = options.out;
   if (out === undefined) throw usageError('--out <dir> is required');
   if (options.name !== undefined)
