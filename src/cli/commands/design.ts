@@ -6,10 +6,6 @@ import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../.
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../options/design.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 
-export interface DesignCommandOptions extends DesignCliOptions, OutputCliOptions {
-  periods?: string;
-}
-
 export function registerDesign(program: Command): void {
   const command = program
     .command('design')
@@ -26,7 +22,7 @@ export function registerDesign(program: Command): void {
   ).action(runDesign);
 }
 
-export async function runDesign(options: DesignCommandOptions): Promise<void> {
+export async function runDesign(options: DesignCliOptions & OutputCliOptions): Promise<void> {
   outputFormat(options, 'json or csv');
   const spectrum = designFromOptions(options);
   const periodsS = designPeriods(spectrum, options.periods);

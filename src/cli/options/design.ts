@@ -5,7 +5,7 @@ import type { DesignSpectrum } from '../../spectrum/design.js';
 import { readSpectrumTable, tableSpectrum } from '../../spectrum/design-table.js';
 import { CODE_KEYS, codeSpectrum } from '../../spectrum/target.js';
 
-/** The options that choose a design spectrum (the `design` command). */
+/** The options of the `design` command: the spectrum and the periods it is given at. */
 export interface DesignCliOptions {
   code?: string;
   sds?: string;
@@ -16,6 +16,7 @@ export interface DesignCliOptions {
   ag?: string;
   damping?: string;
   table?: string;
+  periods?: string;
 }
 
 export function addDesignOptions(command: Command): Command {
