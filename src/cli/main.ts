@@ -53,38 +53,32 @@ export async function buildProgram(only?: string): Promise<Command> {
 /** Run the CLI; every failure becomes one line on stderr and an exit code, never a stack trace. */
 export async function main(argv: string[]): Promise<number> {
   try {
-    const program = await buildProgram(argv[0]);
-    await program.parseAsync(argv, { from: 'user' });
+    await (await buildProgram(argv[0])).parseAsync(argv, { from: 'user' });
     return 0;
   } catch (error) {
     return reportError(error);
   }
 }
 
+/** What a failed file operation says, by its error code. */
+const FILE_ERRORS = new Map([
+  ['ENOENT', 'no such file'],
+  ['EACCES', 'permission denied'],
+  ['EISDIR', 'is a folder'],
+  ['ENOTDIR', 'not a folder'],
+]);
+
 export function reportError(error: unknown): number {
-  if (error instanceof CommanderError) {
-    if (
-      error.exitCode === 0 ||
-      error.code === 'commander.helpDisplayed' ||
-      error.code === 'commander.version'
-    )
-      return 0;
-    return EXIT_INPUT; // commander already printed its one-line message
-  }
+  // Commander has printed its own one-line message; help and --version end with exit code 0.
+  if (error instanceof CommanderError) return error.exitCode === 0 ? 0 : EXIT_INPUT;
   if (isQuakesweepError(error)) {
     process.stderr.write(`quakesweep: ${oneLine(error.describe())}\n`);
     return error.kind === 'internal' ? EXIT_INTERNAL : EXIT_INPUT;
   }
-  const code = (error as NodeJS.ErrnoException | undefined)?.code;
-  if (code === 'ENOENT' || code === 'EACCES' || code === 'EISDIR' || code === 'ENOTDIR') {
-    const path = (error as NodeJS.ErrnoException).path ?? '';
-    const reason = {
-      ENOENT: 'no such file',
-      EACCES: 'permission denied',
-      EISDIR: 'is a folder',
-      ENOTDIR: 'not a folder',
-    }[code];
-    process.stderr.write(`quakesweep: ${oneLine(`${path}: ${reason}`)}\n`);
+  const errno = error as NodeJS.ErrnoException | undefined;
+  const reason = FILE_ERRORS.get(errno?.code ?? '');
+  if (reason !== undefined) {
+    process.stderr.write(`quakesweep: ${oneLine(`${errno?.path ?? ''}: ${reason}`)}\n`);
     return EXIT_INPUT;
   }
   const message = error instanceof Error ? error.message : String(error);

@@ -18,10 +18,20 @@ import type { Spectrum, SpectrumCurve } from './spectrum.js';
  */
 export type TargetSpec = { kind: 'code'; spectrum: DesignSpectrum } | { kind: 'table'; path: string };
 
+/** The parameters of each code spectrum, by the keys a target (and the `design` command) names them with. */
+export const CODE_KEYS = {
+  'asce7-16': ['sds', 'sd1', 'tl'],
+  ec8: ['type', 'ground', 'ag', 'damping'],
+} as const;
+
+export type DesignCode = keyof typeof CODE_KEYS;
+
+type CodeFields = { [key in (typeof CODE_KEYS)[DesignCode][number]]?: string };
+
 /**
  * Parse a target: `asce7-16:sds=1.0,sd1=0.6,tl=8`, `ec8:type=1,ground=C,ag=0.25[,damping=5%]`
- * (accelerations in g, periods in s, damping as a fraction or a percentage), or anything else,
- * which is taken as the path of a two-column table of period (s) and PSA (g).
+ * (the parameters of codeSpectrum), or anything else, which is taken as the path of a two-column
+ * table of period (s) and PSA (g).
  */
 export function parseTargetSpec(text: string): TargetSpec {
   const spec = text.trim();
@@ -31,46 +41,66 @@ export function parseTargetSpec(text: string): TargetSpec {
     if (spec === '') throw usageError('--target is empty');
     return { kind: 'table', path: spec };
   }
-  const fields = parseFields(spec, spec.slice(colon + 1));
-  if (code === 'asce7-16') {
-    onlyKeys(spec, fields, ['sds', 'sd1', 'tl']);
-    return {
-      kind: 'code',
-      spectrum: asce716Spectrum({
-        sdsG: numberField(spec, fields, 'sds'),
-        sd1G: numberField(spec, fields, 'sd1'),
-        tlS: numberField(spec, fields, 'tl'),
-      }),
-    };
+  const fields: { [key: string]: string } = {};
+  for (const item of spec.slice(colon + 1).split(',')) {
+    const equals = item.indexOf('=');
+    if (equals <= 0) throw usageError(`target '${spec}': '${item}' is not key=value`);
+    const key = item.slice(0, equals).trim().toLowerCase();
+    if (key in fields) throw usageError(`target '${spec}': ${key} is given twice`);
+    if (!(CODE_KEYS[code] as readonly string[]).includes(key)) {
+      throw usageError(`target '${spec}': unknown key '${key}'; accepted: ${CODE_KEYS[code].join(', ')}`);
+    }
+    fields[key] = item.slice(equals + 1).trim();
   }
-  onlyKeys(spec, fields, ['type', 'ground', 'ag', 'damping']);
-  return {
-    kind: 'code',
-    spectrum: ec8Spectrum({
-      type: parseEc8Type(requiredField(spec, fields, 'type')),
-      ground: parseEc8Ground(requiredField(spec, fields, 'ground')),
-      agG: numberField(spec, fields, 'ag'),
-      damping: fields.damping === undefined ? 0.05 : parseDampingRatio(fields.damping),
-    }),
+  return { kind: 'code', spectrum: codeSpectrum(code, fields, (key) => `target '${spec}': ${key}=`) };
+}
+
+/**
+ * The code spectrum of its parameters, given as text by key (CODE_KEYS): accelerations in g,
+ * periods in s, the Eurocode 8 damping a fraction or a percentage (5% when left out). `label`
+ * names a parameter in the messages as the user wrote it.
+ */
+export function codeSpectrum(
+  code: DesignCode,
+  fields: CodeFields,
+  label: (key: string) => string,
+): DesignSpectrum {
+  const text = (key: keyof CodeFields): string => {
+    const value = fields[key];
+    if (value === undefined || value.trim() === '') throw usageError(`${label(key)} is required`);
+    return value;
   };
+  const number = (key: keyof CodeFields): number => {
+    const value = Number(text(key));
+    if (!Number.isFinite(value)) throw usageError(`${label(key)} '${fields[key]}' is not a number`);
+    return value;
+  };
+  if (code === 'asce7-16')
+    return asce716Spectrum({ sdsG: number('sds'), sd1G: number('sd1'), tlS: number('tl') });
+  return ec8Spectrum({
+    type: parseEc8Type(text('type')),
+    ground: parseEc8Ground(text('ground')),
+    agG: number('ag'),
+    damping: fields.damping === undefined ? 0.05 : parseDampingRatio(fields.damping),
+  });
 }
 
 /** `1` or `2`. */
-export function parseEc8Type(text: string): 1 | 2 {
+function parseEc8Type(text: string): 1 | 2 {
   if (text.trim() === '1') return 1;
   if (text.trim() === '2') return 2;
   throw usageError(`Eurocode 8 spectrum type '${text}': use 1 or 2`);
 }
 
 /** A ground type A–E, in either case. */
-export function parseEc8Ground(text: string): Ec8Ground {
+function parseEc8Ground(text: string): Ec8Ground {
   const ground = text.trim().toUpperCase();
   if ((EC8_GROUNDS as readonly string[]).includes(ground)) return ground as Ec8Ground;
   throw usageError(`Eurocode 8 ground type '${text}': use A, B, C, D or E (S1 and S2 need special studies)`);
 }
 
 /** One damping ratio: a fraction (0.05) or a percentage (5%); a bare number above 1 is refused. */
-export function parseDampingRatio(text: string): number {
+function parseDampingRatio(text: string): number {
   const part = text.trim();
   const percent = part.endsWith('%');
   const value = Number(percent ? part.slice(0, -1).trim() : part);
@@ -79,39 +109,6 @@ export function parseDampingRatio(text: string): number {
   }
   if (!percent && value > 1) throw usageError(`damping ${part} is above 1; write ${part}% for a percentage`);
   return percent ? value / 100 : value;
-}
-
-function parseFields(spec: string, body: string): { [key: string]: string } {
-  const fields: { [key: string]: string } = {};
-  for (const item of body.split(',')) {
-    const equals = item.indexOf('=');
-    if (equals <= 0) throw usageError(`target '${spec}': '${item}' is not key=value`);
-    const key = item.slice(0, equals).trim().toLowerCase();
-    if (key in fields) throw usageError(`target '${spec}': ${key} is given twice`);
-    fields[key] = item.slice(equals + 1).trim();
-  }
-  return fields;
-}
-
-function onlyKeys(spec: string, fields: { [key: string]: string }, allowed: string[]): void {
-  for (const key of Object.keys(fields)) {
-    if (!allowed.includes(key)) {
-      throw usageError(`target '${spec}': unknown key '${key}'; accepted: ${allowed.join(', ')}`);
-    }
-  }
-}
-
-function requiredField(spec: string, fields: { [key: string]: string }, key: string): string {
-  const value = fields[key];
-  if (value === undefined || value === '') throw usageError(`target '${spec}': ${key}= is required`);
-  return value;
-}
-
-function numberField(spec: string, fields: { [key: string]: string }, key: string): number {
-  const text = requiredField(spec, fields, key);
-  const value = Number(text);
-  if (!Number.isFinite(value)) throw usageError(`target '${spec}': ${key}=${text} is not a number`);
-  return value;
 }
 
 /** A record's spectrum fitted to a target spectrum (scaleToTarget), as data for the outputs. */

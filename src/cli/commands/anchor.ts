@@ -7,7 +7,6 @@ import { usageError } from '../../base/errors.js';
 import { anchorageToJson } from '../../formats/anchorage-json.js';
 import { anchorPlanInput } from '../../formats/anchorage-plan.js';
 import { anchorTable } from '../../formats/anchorage-table.js';
-import { formatJson } from '../../formats/spectrum-json.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan-figure.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
@@ -55,18 +54,15 @@ export function registerAnchor(program: Command): void {
     command,
     'json or table (default: table on the terminal, json with --out)',
     'also write the anchor plan view, DIR/anchor-plan.svg',
-  ).action(async (options: AnchorCliOptions) => {
-    await runAnchor(options);
-  });
+  ).action(runAnchor);
 }
 
 export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   if (options.equipment === undefined) throw usageError('--equipment <file> is required');
-  const format = outputFormat(options, ['json', 'table'], 'json or table');
+  outputFormat(options, 'json or table');
   const records = options.record ?? [];
-  if (records.length > 0 && options.spectrum !== undefined) {
+  if (records.length > 0 && options.spectrum !== undefined)
     throw usageError('give --record or --spectrum, not both');
-  }
   const hasMotion = records.length > 0 || options.spectrum !== undefined;
   const demand = parseDemandChoice(options.demand ?? (hasMotion ? 'max' : 'code'));
   const method = parseMethod(options.method ?? 'newmark-average');
@@ -76,7 +72,10 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   const { elastic, notes } = await elasticFromOptions(options, equipment, demand, method);
   const analysis = analyseAnchorage(equipment, { elastic, demand, anchorRule });
   analysis.assumptions.push(...notes);
-  const text = format === 'json' ? formatJson(anchorageToJson(analysis)) : anchorTable(analysis);
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
-  writeProduct(inputs, options, text, () => [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]]);
+  await writeProduct(inputs, options, {
+    json: () => anchorageToJson(analysis),
+    table: () => anchorTable(analysis),
+    figures: () => [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]],
+  });
 }

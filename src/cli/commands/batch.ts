@@ -37,9 +37,7 @@ export function registerBatch(program: Command): void {
       '--shard-count <n>',
       'with --shard auto under Kubernetes: the number of shards (or QUAKESWEEP_SHARD_COUNT)',
     )
-    .action(async (files: string[], options: BatchCliOptions) => {
-      await runBatch(files, options);
-    });
+    .action(runBatch);
 }
 
 export async function runBatch(args: string[], options: BatchCliOptions): Promise<void> {

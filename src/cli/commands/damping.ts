@@ -1,6 +1,5 @@
 import type { Command } from 'commander';
 import { dampingTable, dampingToCsv, dampingToJson } from '../../formats/damping.js';
-import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping } from '../../spectrum/damping.js';
@@ -37,21 +36,20 @@ export function registerDamping(program: Command): void {
 }
 
 export async function runDamping(source: string, options: DampingCliOptions): Promise<void> {
-  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
+  outputFormat(options, 'json or csv');
   const grid = gridFromOptions(options);
   const added = !Array.from(grid.dampings).some((d) => Math.abs(d - REFERENCE_DAMPING) < 1e-12);
   const dampings = added ? Float64Array.from([...grid.dampings, REFERENCE_DAMPING]).sort() : grid.dampings;
   const record = await loadRecord(source, options);
   const spectrum = responseSpectrum(record, { ...grid, dampings });
   const comparison = compareDamping(spectrum, REFERENCE_DAMPING);
-  const text =
-    format === 'json'
-      ? formatJson(dampingToJson(spectrum, comparison, added))
-      : format === 'csv'
-        ? dampingToCsv(spectrum, comparison)
-        : dampingTable(spectrum, comparison, added);
   const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
-  writeProduct([source], options, text, () => [
-    ['damping.svg', dampingFigure({ record: spectrum.record, methodDescription, comparison })],
-  ]);
+  await writeProduct([source], options, {
+    json: () => dampingToJson(spectrum, comparison, added),
+    csv: () => dampingToCsv(spectrum, comparison),
+    table: () => dampingTable(spectrum, comparison, added),
+    figures: () => [
+      ['damping.svg', dampingFigure({ record: spectrum.record, methodDescription, comparison })],
+    ],
+  });
 }

@@ -12,12 +12,10 @@ export function registerDemo(program: Command): void {
     .command('demo')
     .description('write the full report of the invented Marrowby Flats scenario (records/README.md)')
     .option('--out <dir>', 'folder for the report (created if its parent exists)', 'demo-output')
-    .action(async (options: { out: string }) => {
-      await runDemo(options.out);
-    });
+    .action(runDemo);
 }
 
-export async function runDemo(out: string): Promise<void> {
+export async function runDemo({ out }: { out: string }): Promise<void> {
   const { source, options } = demoReport(recordsFolder(), out);
   const started = Date.now();
   // The report states the report command that makes the same report.

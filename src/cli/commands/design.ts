@@ -1,15 +1,10 @@
 import type { Command } from 'commander';
 import { designTable, designToCsv, designToJson } from '../../formats/design.js';
-import { formatJson } from '../../formats/spectrum-json.js';
 import { defaultPeriodsS, parsePeriods } from '../../oscillator/grid.js';
 import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../options/design.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
-
-export interface DesignCommandOptions extends DesignCliOptions, OutputCliOptions {
-  periods?: string;
-}
 
 export function registerDesign(program: Command): void {
   const command = program
@@ -24,22 +19,20 @@ export function registerDesign(program: Command): void {
     command,
     'json or csv (default: a table on the terminal, or json with --out)',
     'also draw the spectrum, DIR/design.svg (PSA against T, log–log)',
-  ).action((options: DesignCommandOptions) => runDesign(options));
+  ).action(runDesign);
 }
 
-export function runDesign(options: DesignCommandOptions): void {
-  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
+export async function runDesign(options: DesignCliOptions & OutputCliOptions): Promise<void> {
+  outputFormat(options, 'json or csv');
   const spectrum = designFromOptions(options);
   const periodsS = designPeriods(spectrum, options.periods);
   const psaG = designPsaG(spectrum, periodsS);
-  const text =
-    format === 'json'
-      ? formatJson(designToJson(spectrum, periodsS, psaG))
-      : format === 'csv'
-        ? designToCsv(spectrum, periodsS, psaG)
-        : designTable(spectrum, periodsS, psaG);
-  const inputs = options.table === undefined ? [] : [options.table];
-  writeProduct(inputs, options, text, () => [['design.svg', designFigure({ spectrum, periodsS, psaG })]]);
+  await writeProduct(options.table === undefined ? [] : [options.table], options, {
+    json: () => designToJson(spectrum, periodsS, psaG),
+    csv: () => designToCsv(spectrum, periodsS, psaG),
+    table: () => designTable(spectrum, periodsS, psaG),
+    figures: () => [['design.svg', designFigure({ spectrum, periodsS, psaG })]],
+  });
 }
 
 /** The periods asked for, each checked against the spectrum's range; or the default grid within it. */

@@ -1,7 +1,6 @@
 import type { Command } from 'commander';
 import { floorAssumptions, floorTable, floorToJson } from '../../formats/floor.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
-import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { floorSpectrum } from '../../spectrum/floor.js';
@@ -36,37 +35,31 @@ export function registerFloor(program: Command): void {
     command,
     'json or csv (default: a summary table on the terminal, or json with --out)',
     'also draw the floor spectrum against the ground spectrum, DIR/floor.svg',
-  ).action(async (source: string, options: FloorCliOptions) => {
-    await runFloor(source, options);
-  });
+  ).action(runFloor);
 }
 
 export async function runFloor(source: string, options: FloorCliOptions): Promise<void> {
   const grid = gridFromOptions(options);
   const building = { ...buildingFromOptions(options), method: grid.method };
   const broadening = broadeningFromOptions(options.broaden);
-  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
+  outputFormat(options, 'json or csv');
   const ground = await loadRecord(source, options);
   const result = floorSpectrum(ground, building, grid, broadening);
   const groundSpectrum = responseSpectrum(ground, grid);
   const assumptions = floorAssumptions(result, building, ground.dtS);
-  const text =
-    format === 'json'
-      ? formatJson(floorToJson(result, groundSpectrum, building, assumptions))
-      : format === 'csv'
-        ? spectrumToCsv(result.spectrum, { lengthUnit: 'm' })
-        : floorTable(result.spectrum, groundSpectrum, building, assumptions);
-  writeProduct([source], options, text, () => [
-    [
-      'floor.svg',
-      floorFigure({
-        ground: groundSpectrum,
-        floor: result.spectrum,
-        unbroadened: result.broadening === null ? undefined : result.unbroadened,
-        broadening: result.broadening,
-        building,
-        methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
-      }),
-    ],
-  ]);
+  const figure = () =>
+    floorFigure({
+      ground: groundSpectrum,
+      floor: result.spectrum,
+      unbroadened: result.broadening === null ? undefined : result.unbroadened,
+      broadening: result.broadening,
+      building,
+      methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
+    });
+  await writeProduct([source], options, {
+    json: () => floorToJson(result, groundSpectrum, building, assumptions),
+    csv: () => spectrumToCsv(result.spectrum, { lengthUnit: 'm' }),
+    table: () => floorTable(result.spectrum, groundSpectrum, building, assumptions),
+    figures: () => [['floor.svg', figure()]],
+  });
 }

@@ -1,7 +1,6 @@
 import type { Command } from 'commander';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { infoTable, infoToJson } from '../../formats/info.js';
-import { formatJson } from '../../formats/spectrum-json.js';
 import { KONNO_OHMACHI_DEFAULT_B } from '../../record/fourier.js';
 import { groundMotionMeasures } from '../../record/measures.js';
 import { recordFigures } from '../../report/record-figures.js';
@@ -30,24 +29,22 @@ export function registerInfo(program: Command): void {
       'Konno–Ohmachi b of the smoothed Fourier spectrum in the figure, or none',
       '40',
     )
-    .action(async (source: string, options: InfoCliOptions) => {
-      await runInfo(source, options);
-    });
+    .action(runInfo);
 }
 
 export async function runInfo(source: string, options: InfoCliOptions): Promise<void> {
-  const format = outputFormat(options, ['json', 'table'], 'table or json');
+  outputFormat(options, 'table or json');
   const thresholdG = positiveNumber('--bracket-threshold', options.bracketThreshold ?? '0.05');
-  const smoothing = parseSmoothing(options.smoothing ?? String(KONNO_OHMACHI_DEFAULT_B));
+  const smoothingText = options.smoothing ?? String(KONNO_OHMACHI_DEFAULT_B);
+  const smoothing =
+    smoothingText.trim().toLowerCase() === 'none' ? null : positiveNumber('--smoothing', smoothingText);
   const record = applyProcessing(await loadRecord(source, options), options);
   const measures = groundMotionMeasures(record, { bracketThresholdMS2: thresholdG * STANDARD_GRAVITY_MS2 });
   const predominant = predominantPeriod(record);
   const json = infoToJson(record, measures, predominant);
-  const text = format === 'json' ? formatJson(json) : infoTable(json);
-  writeProduct([source], options, text, () => recordFigures(record, measures, smoothing));
-}
-
-function parseSmoothing(text: string): number | null {
-  if (text.trim().toLowerCase() === 'none') return null;
-  return positiveNumber('--smoothing', text);
+  await writeProduct([source], options, {
+    json: () => json,
+    table: () => infoTable(json),
+    figures: () => recordFigures(record, measures, smoothing),
+  });
 }

@@ -4,14 +4,8 @@ import type { Command } from 'commander';
 import { inputError, usageError } from '../../base/errors.js';
 import { sanitiseName } from '../../batch/names.js';
 import { formatJson } from '../../formats/spectrum-json.js';
-import {
-  SHARD_FORMAT,
-  type ShardJson,
-  type SuiteFailure,
-  type SuiteRecord,
-  suiteJson,
-} from '../../formats/suite.js';
-import { checkFolder, OutputSet } from '../../output/output-set.js';
+import { SHARD_FORMAT, type ShardJson, suiteJson } from '../../formats/suite.js';
+import { OutputSet } from '../../output/output-set.js';
 
 export function registerMerge(program: Command): void {
   program
@@ -22,21 +16,18 @@ export function registerMerge(program: Command): void {
       '--out <dir>',
       'folder for suite.json and the record folders (may be one of the shard folders)',
     )
-    .action((dirs: string[], options: { out: string }) => {
-      runMerge(dirs, options.out);
-    });
+    .action(runMerge);
 }
 
-const SHARD_FILE = /^shard-(\d+)-of-(\d+)\.json$/;
+const SHARD_FILE = /^shard-\d+-of-\d+\.json$/;
 
 /** Read every shard summary, check that they make one whole run, copy the record folders, write suite.json. */
-export function runMerge(dirs: string[], out: string): void {
+export function runMerge(dirs: string[], { out }: { out: string }): void {
   const shards: { dir: string; file: string; json: ShardJson }[] = [];
   for (const dir of dirs) {
     if (!existsSync(dir)) throw usageError(`${dir}: no such folder`);
-    for (const entry of readdirSync(dir)
-      .filter((e) => SHARD_FILE.test(e))
-      .sort()) {
+    for (const entry of readdirSync(dir).sort()) {
+      if (!SHARD_FILE.test(entry)) continue;
       const file = join(dir, entry);
       let json: ShardJson;
       try {
@@ -71,26 +62,22 @@ export function runMerge(dirs: string[], out: string): void {
   if (missing.length > 0)
     throw usageError(`shard${missing.length > 1 ? 's' : ''} ${missing.join(', ')} of ${count} missing`);
 
-  checkFolder({ path: out, option: '--out' });
   const outputs = new OutputSet().folder(out);
-  const records: SuiteRecord[] = [];
-  const failed: SuiteFailure[] = [];
   for (const { dir, file, json } of shards) {
     const sameFolder = existsSync(out) && realpathSync(dir) === realpathSync(resolve(out));
-    for (const record of json.records) {
-      if (typeof record.name !== 'string' || sanitiseName(record.name) !== record.name) {
-        throw inputError(`record name ${JSON.stringify(record.name)} is not a safe folder name`, { file });
+    for (const { name } of json.records) {
+      if (typeof name !== 'string' || sanitiseName(name) !== name) {
+        throw inputError(`record name ${JSON.stringify(name)} is not a safe folder name`, { file });
       }
-      records.push(record);
-      if (!sameFolder) {
-        const spectra = readFileSync(join(dir, record.name, 'spectra.json'));
-        outputs.folder(join(out, record.name), [['spectra.json', spectra]]);
-      }
+      if (!sameFolder)
+        outputs.folder(join(out, name), [['spectra.json', readFileSync(join(dir, name, 'spectra.json'))]]);
     }
-    failed.push(...json.failed);
   }
-  outputs.file(join(out, 'suite.json'), formatJson(suiteJson(records, failed, first.settings))).write();
+  const records = shards.flatMap((shard) => shard.json.records);
+  const failed = shards.flatMap((shard) => shard.json.failed);
+  const suite = join(out, 'suite.json');
+  outputs.file(suite, formatJson(suiteJson(records, failed, first.settings))).write();
   process.stderr.write(
-    `quakesweep: merged ${count} shards: ${records.length} records, ${failed.length} failed; ${join(out, 'suite.json')}\n`,
+    `quakesweep: merged ${count} shards: ${records.length} records, ${failed.length} failed; ${suite}\n`,
   );
 }

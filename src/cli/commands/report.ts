@@ -1,4 +1,3 @@
-import { join } from 'node:path';
 import type { Command } from 'commander';
 import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
@@ -56,8 +55,7 @@ export async function runReport(
   source: string,
   options: ReportCliOptions,
   commandLine: string[],
-): Promise<string> {
+): Promise<void> {
   const { request, inputs, out } = await reportRequest(source, options, commandLine);
   new OutputSet(inputs).folder(out, await assembleReport(request)).write();
-  return join(out, 'report.html');
 }

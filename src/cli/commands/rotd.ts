@@ -1,7 +1,6 @@
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
 import { rotdTable, rotdToCsv, rotdToJson } from '../../formats/rotd.js';
-import { formatJson } from '../../formats/spectrum-json.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { rotdThreads } from '../../spectrum/spectrum.js';
@@ -31,13 +30,11 @@ export function registerRotD(program: Command): void {
     'also draw RotD50, RotD100 and the geometric mean, DIR/rotd.svg',
   )
     .option('--threads <n>', 'threads (default: all cores for a large job; small ones use one)')
-    .action(async (first: string, second: string, options: RotDCliOptions) => {
-      await runRotD(first, second, options);
-    });
+    .action(runRotD);
 }
 
 export async function runRotD(first: string, second: string, options: RotDCliOptions): Promise<void> {
-  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
+  outputFormat(options, 'json or csv');
   if (first === '-' && second === '-')
     throw usageError('only one of the two components can be standard input');
   const grid = gridFromOptions(options);
@@ -50,13 +47,12 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
       ? rotdThreads(grid.periodsS.length, grid.dampings.length, samples)
       : parseThreads(options.threads);
   const spectra = await rotDSpectraParallel(one, two, { ...grid, angleStepDeg, threads });
-  const text =
-    format === 'json'
-      ? formatJson(rotdToJson(spectra))
-      : format === 'csv'
-        ? rotdToCsv(spectra)
-        : rotdTable(spectra);
-  writeProduct([first, second], options, text, () => [
-    ['rotd.svg', rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] })],
-  ]);
+  await writeProduct([first, second], options, {
+    json: () => rotdToJson(spectra),
+    csv: () => rotdToCsv(spectra),
+    table: () => rotdTable(spectra),
+    figures: () => [
+      ['rotd.svg', rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] })],
+    ],
+  });
 }

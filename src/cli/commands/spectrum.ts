@@ -2,13 +2,13 @@ import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
 import { parseLengthUnit } from '../../base/units.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
-import { formatJson, spectrumToJson } from '../../formats/spectrum-json.js';
+import { spectrumToJson } from '../../formats/spectrum-json.js';
 import { summaryTable } from '../../formats/spectrum-table.js';
 import { targetToJson } from '../../formats/target.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { checkFolder } from '../../output/output-set.js';
 import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
-import { targetOverlay, targetRecord } from '../../spectrum/target.js';
+import { fitTarget, targetOverlay, targetRecord } from '../../spectrum/target.js';
 import {
   addOutputOptions,
   figureAxes,
@@ -19,12 +19,7 @@ import {
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
-import {
-  addTargetOptions,
-  applyTarget,
-  type TargetCliOptions,
-  targetFromOptions,
-} from '../options/target.js';
+import { addTargetOptions, type TargetCliOptions, targetFromOptions } from '../options/target.js';
 import { sweepFromOptions } from '../options/threads.js';
 
 export interface SpectrumCliOptions
@@ -66,15 +61,13 @@ export function registerSpectrum(program: Command): void {
     )
     .option('--threads <n>', 'threads for a large sweep (default: all cores; small sweeps use one)')
     .option('--kernel <kernel>', 'sweep kernel: auto (WebAssembly SIMD where available), wasm or js', 'auto')
-    .action(async (source: string, options: SpectrumCliOptions) => {
-      await runSpectrum(source, options);
-    });
+    .action(runSpectrum);
 }
 
 export async function runSpectrum(source: string, options: SpectrumCliOptions): Promise<void> {
   const grid = gridFromOptions(options);
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
-  const format = outputFormat(options, ['json', 'csv', 'table'], 'json or csv');
+  outputFormat(options, 'json or csv');
   const axes = figureAxes(options.axes);
   if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
   if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
@@ -82,25 +75,25 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const sweep = sweepFromOptions(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
-  const { fit, spectrum } = applyTarget(swept, target);
-  let figures: [string, string][] = [];
-  if (options.svg !== undefined) {
-    // The figure modules load only for --svg.
-    const { spectrumFigures } = await import('../../report/spectrum-figures.js');
-    const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
-    const shared = { axes, lengthUnit, overlays, methodDescription: METHOD_DESCRIPTIONS[spectrum.method] };
-    const record = targetRecord(processed, fit);
-    figures = spectrumFigures(record, spectrum, shared, options.histories === true).map((f) => [
-      f.file,
-      f.svg,
-    ]);
-  }
-  const text =
-    format === 'json'
-      ? formatJson({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) })
-      : format === 'csv'
-        ? spectrumToCsv(spectrum, { lengthUnit, target: fit })
-        : summaryTable(spectrum, lengthUnit, fit);
+  const { fit, spectrum } =
+    target === undefined ? { fit: undefined, spectrum: swept } : fitTarget(swept, target.spectrum, target);
   const inputs = options.target === undefined ? [source] : [source, options.target];
-  writeProduct(inputs, options, text, () => figures);
+  await writeProduct(inputs, options, {
+    json: () => ({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }),
+    csv: () => spectrumToCsv(spectrum, { lengthUnit, target: fit }),
+    table: () => summaryTable(spectrum, lengthUnit, fit),
+    async figures() {
+      // The figure modules load only for --svg.
+      const { spectrumFigures } = await import('../../report/spectrum-figures.js');
+      const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
+      const shared = { axes, lengthUnit, overlays, methodDescription: METHOD_DESCRIPTIONS[spectrum.method] };
+      const figures = spectrumFigures(
+        targetRecord(processed, fit),
+        spectrum,
+        shared,
+        options.histories === true,
+      );
+      return figures.map((f): [string, string] => [f.file, f.svg]);
+    },
+  });
 }

@@ -1,10 +1,10 @@
 import { availableParallelism } from 'node:os';
 import { usageError } from '../../base/errors.js';
-import { parseShard, type Shard } from '../../batch/shard.js';
+import { parseShard } from '../../batch/shard.js';
 import type { SuiteSettings } from '../../batch/work.js';
 import { type GridCliOptions, gridFromOptions } from './grid.js';
 import { type ProcessingCliOptions, processingPlanFromOptions } from './processing.js';
-import { positiveInteger, type RecordCliOptions, recordReadOptions } from './record.js';
+import { type RecordCliOptions, recordReadOptions, wholeNumber } from './record.js';
 
 /** The options of `quakesweep batch`. */
 export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions, GridCliOptions {
@@ -15,14 +15,7 @@ export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions,
 }
 
 /** A batch run as the options describe it: its folder, what every record shares, threads and shard. */
-export interface BatchPlan {
-  out: string;
-  settings: SuiteSettings;
-  jobs: number;
-  shard: Shard | null;
-}
-
-export function batchPlan(options: BatchCliOptions): BatchPlan {
+export function batchPlan(options: BatchCliOptions) {
   const out = options.out;
   if (out === undefined) throw usageError('--out <dir> is required');
   if (options.name !== undefined)
@@ -36,7 +29,7 @@ export function batchPlan(options: BatchCliOptions): BatchPlan {
     dampings: Array.from(grid.dampings),
     method: grid.method,
   };
-  const jobs = options.jobs === undefined ? availableParallelism() : positiveInteger('--jobs', options.jobs);
+  const jobs = options.jobs === undefined ? availableParallelism() : wholeNumber('--jobs', options.jobs, 1);
   const shard =
     options.shard === undefined ? null : parseShard(options.shard, process.env, options.shardCount);
   if (options.shardCount !== undefined && options.shard !== 'auto')

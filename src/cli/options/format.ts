@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
+import { formatJson } from '../../formats/spectrum-json.js';
 import { OutputSet } from '../../output/output-set.js';
 
 /** --format, --out and --svg as commander hands them over. */
@@ -18,13 +19,18 @@ export function addOutputOptions(command: Command, formatHelp: string, svgHelp?:
 }
 
 /**
- * The value of --format, one of `allowed`: by default a table on the terminal, or json with --out.
- * `hint` is the list the refusal names (the commands name it each in their own words).
+ * Check --format: by default a table on the terminal, or json with --out; else the table or one of
+ * the formats `offered` lists, in the command's words ("json or csv"), which the refusal repeats.
  */
-export function outputFormat(options: OutputCliOptions, allowed: readonly string[], hint: string): string {
-  const format = options.format ?? (options.out === undefined ? 'table' : 'json');
-  if (!allowed.includes(format)) throw usageError(`--format '${format}': use ${hint}`);
+export function outputFormat(options: OutputCliOptions, offered: string): string {
+  const format = chosenFormat(options);
+  if (format !== 'table' && !offered.split(' or ').includes(format))
+    throw usageError(`--format '${format}': use ${offered}`);
   return format;
+}
+
+function chosenFormat(options: OutputCliOptions): string {
+  return options.format ?? (options.out === undefined ? 'table' : 'json');
 }
 
 /** The value of --axes: log or linear. */
@@ -33,17 +39,32 @@ export function figureAxes(axes = 'log'): 'log' | 'linear' {
   return axes;
 }
 
+/** A command's product in each of its formats, and its figures for --svg by file name. */
+export interface Product {
+  /** The JSON value (written by formatJson). */
+  json(): unknown;
+  csv?(): string;
+  table(): string;
+  figures(): Iterable<[string, string]> | Promise<Iterable<[string, string]>>;
+}
+
 /**
- * Write a command's product to --out (or standard output) and, with --svg, its figures by file
- * name, after checking them all against each other and the `inputs`.
+ * Write a command's product, in the format checked by outputFormat, to --out (or standard output)
+ * and, with --svg, its figures, after checking them all against each other and the `inputs`.
  */
-export function writeProduct(
+export async function writeProduct(
   inputs: readonly string[],
   options: OutputCliOptions,
-  text: string,
-  figures: () => Iterable<[string, string]>,
-): void {
+  product: Product,
+): Promise<void> {
+  const format = chosenFormat(options);
   const outputs = new OutputSet(inputs);
-  if (options.svg !== undefined) outputs.folder(options.svg, figures(), '--svg');
+  if (options.svg !== undefined) outputs.folder(options.svg, await product.figures(), '--svg');
+  const text =
+    format === 'json'
+      ? formatJson(product.json())
+      : format === 'csv' && product.csv
+        ? product.csv()
+        : product.table();
   outputs.text(options.out, text).write();
 }

@@ -23,44 +23,28 @@ export async function elasticFromOptions(
   method: Method,
 ): Promise<{ elastic: ElasticInput | null; notes: string[] }> {
   const records = options.record ?? [];
-  const notes: string[] = [];
+  const file = options.spectrum === undefined ? undefined : readSpectrumFile(options.spectrum, equipment);
+  if (file === undefined && records.length === 0) return { elastic: null, notes: [] };
+  if (equipment.zM > 0 && !file?.isFloor) {
+    const { length, mPerLength } = EQUIPMENT_UNITS[equipment.units];
+    if (demand !== 'code') {
+      throw usageError(
+        `the equipment is attached at z = ${equipment.zM / mPerLength} ${length} above the base, so a ground motion does not describe its floor; ` +
+          'make a floor spectrum with `quakesweep floor REC ... --format json --out floor.json` and give --spectrum floor.json, ' +
+          'or use --demand code',
+      );
+    }
+    const unused =
+      'The ground motion given was not used: the equipment is above the base and no floor spectrum was given.';
+    return { elastic: null, notes: [unused] };
+  }
+  if (file !== undefined) return { elastic: file.value, notes: file.isFloor ? [file.floorNote] : [] };
   let elastic: ElasticInput | null = null;
-  if (options.spectrum !== undefined) {
-    const read = readSpectrumFile(options.spectrum, equipment);
-    if (equipment.zM > 0 && !read.isFloor) {
-      refuseGroundOnFloor(equipment, demand, notes);
-    } else {
-      elastic = read.value;
-      if (read.isFloor) notes.push(read.floorNote);
-    }
-  } else if (records.length > 0) {
-    if (equipment.zM > 0) {
-      refuseGroundOnFloor(equipment, demand, notes);
-    } else {
-      for (const source of records) {
-        const record = await loadRecord(source, options);
-        const value = recordPsaForComponent(record, equipment.periodS, equipment.damping, method);
-        if (elastic === null || value.psaG > elastic.psaG) elastic = { ...value, source };
-      }
-      if (records.length > 1 && elastic !== null) {
-        notes.push(`Record demand: the largest of ${records.length} records (${records.join(', ')}).`);
-      }
-    }
+  for (const source of records) {
+    const record = await loadRecord(source, options);
+    const value = recordPsaForComponent(record, equipment.periodS, equipment.damping, method);
+    if (elastic === null || value.psaG > elastic.psaG) elastic = { ...value, source };
   }
-  return { elastic, notes };
-}
-
-function refuseGroundOnFloor(equipment: Equipment, demand: DemandChoice, notes: string[]): void {
-  const length = EQUIPMENT_UNITS[equipment.units].length;
-  const z = equipment.zM / EQUIPMENT_UNITS[equipment.units].mPerLength;
-  if (demand !== 'code') {
-    throw usageError(
-      `the equipment is attached at z = ${z} ${length} above the base, so a ground motion does not describe its floor; ` +
-        'make a floor spectrum with `quakesweep floor REC ... --format json --out floor.json` and give --spectrum floor.json, ' +
-        'or use --demand code',
-    );
-  }
-  notes.push(
-    'The ground motion given was not used: the equipment is above the base and no floor spectrum was given.',
-  );
+  const largest = `Record demand: the largest of ${records.length} records (${records.join(', ')}).`;
+  return { elastic, notes: records.length > 1 ? [largest] : [] };
 }

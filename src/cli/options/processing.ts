@@ -4,6 +4,7 @@ import { BASELINE_NAMES } from '../../record/baseline.js';
 import { type FilterSpec, MAX_FILTER_ORDER } from '../../record/filter.js';
 import { applyProcessingPlan, type ProcessingPlan } from '../../record/process.js';
 import type { GroundRecord } from '../../record/record.js';
+import { positiveNumber } from './record.js';
 
 /** Processing options as commander hands them over. */
 export interface ProcessingCliOptions {
@@ -37,7 +38,7 @@ export function processingPlanFromOptions(options: ProcessingCliOptions): Proces
   if (options.baseline !== undefined) plan.baselineOrder = parseBaseline(options.baseline);
   if (options.taper !== undefined) plan.taperFraction = parseTaper(options.taper);
   if (options.filter !== undefined) plan.filter = parseFilter(options.filter);
-  if (options.resample !== undefined) plan.resampleDtS = parseResample(options.resample);
+  if (options.resample !== undefined) plan.resampleDtS = positiveNumber('--resample', options.resample);
   return plan;
 }
 
@@ -64,42 +65,26 @@ export function parseTaper(text: string): number {
 }
 
 export function parseFilter(text: string): FilterSpec {
-  const parts = text.trim().toLowerCase().split(':');
-  const kind = parts[0];
+  const refusal = (why: string) => usageError(`--filter '${text}': ${why}`);
   const hint = 'use highpass:0.1, lowpass:25:4 or bandpass:0.1-25:4';
-  if (parts.length < 2 || parts.length > 3) throw usageError(`--filter '${text}': ${hint}`);
-  const order = parts.length === 3 ? Number(parts[2]) : DEFAULT_FILTER_ORDER;
-  if (parts.length === 3 && (parts[2].trim() === '' || !Number.isInteger(order) || order < 1)) {
-    throw usageError(`--filter '${text}': the order must be a whole number ≥ 1, got '${parts[2]}'`);
-  }
-  if (order > MAX_FILTER_ORDER)
-    throw usageError(`--filter '${text}': the order must be at most ${MAX_FILTER_ORDER}`);
+  const [kind, corners, orderText, ...rest] = text.trim().toLowerCase().split(':');
+  if (corners === undefined || rest.length > 0) throw refusal(hint);
+  const order = orderText === undefined ? DEFAULT_FILTER_ORDER : Number(orderText);
+  if (orderText !== undefined && (orderText.trim() === '' || !Number.isInteger(order) || order < 1))
+    throw refusal(`the order must be a whole number ≥ 1, got '${orderText}'`);
+  if (order > MAX_FILTER_ORDER) throw refusal(`the order must be at most ${MAX_FILTER_ORDER}`);
   const frequency = (value: string): number => {
     const hz = Number(value);
-    if (value.trim() === '' || !Number.isFinite(hz) || hz <= 0) {
-      throw usageError(`--filter '${text}': '${value}' is not a positive frequency in Hz`);
-    }
+    if (value.trim() === '' || !Number.isFinite(hz) || hz <= 0)
+      throw refusal(`'${value}' is not a positive frequency in Hz`);
     return hz;
   };
-  if (kind === 'highpass') return { kind, order, lowCornerHz: frequency(parts[1]) };
-  if (kind === 'lowpass') return { kind, order, highCornerHz: frequency(parts[1]) };
-  if (kind === 'bandpass') {
-    const band = parts[1].split('-');
-    if (band.length !== 2) throw usageError(`--filter '${text}': a band is low-high in Hz, e.g. 0.1-25`);
-    const lowCornerHz = frequency(band[0]);
-    const highCornerHz = frequency(band[1]);
-    if (lowCornerHz >= highCornerHz) {
-      throw usageError(`--filter '${text}': the low corner must be below the high corner`);
-    }
-    return { kind, order, lowCornerHz, highCornerHz };
-  }
-  throw usageError(`--filter '${text}': unknown filter '${kind}'; ${hint}`);
-}
-
-export function parseResample(text: string): number {
-  const value = Number(text);
-  if (text.trim() === '' || !Number.isFinite(value) || value <= 0) {
-    throw usageError(`--resample '${text}': the new time step must be a positive number of seconds`);
-  }
-  return value;
+  if (kind === 'highpass') return { kind, order, lowCornerHz: frequency(corners) };
+  if (kind === 'lowpass') return { kind, order, highCornerHz: frequency(corners) };
+  if (kind !== 'bandpass') throw refusal(`unknown filter '${kind}'; ${hint}`);
+  const band = corners.split('-');
+  if (band.length !== 2) throw refusal('a band is low-high in Hz, e.g. 0.1-25');
+  const [lowCornerHz, highCornerHz] = band.map(frequency);
+  if (lowCornerHz >= highCornerHz) throw refusal('the low corner must be below the high corner');
+  return { kind, order, lowCornerHz, highCornerHz };
 }

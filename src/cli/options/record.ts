@@ -45,8 +45,8 @@ export function recordReadOptions(source: string, options: RecordCliOptions): Re
     source,
     units: parseAccelerationUnit(options.units),
     dtS: options.dt === undefined ? undefined : positiveNumber('--dt', options.dt),
-    column: options.column === undefined ? undefined : positiveInteger('--column', options.column),
-    skip: options.skip === undefined ? 0 : nonNegativeInteger('--skip', options.skip),
+    column: options.column === undefined ? undefined : wholeNumber('--column', options.column, 1),
+    skip: options.skip === undefined ? 0 : wholeNumber('--skip', options.skip, 0),
     layout: layout as RecordLayout,
     name: options.name,
   };
@@ -96,16 +96,12 @@ export function positiveNumber(option: string, text: string): number {
   return value;
 }
 
-export function positiveInteger(option: string, text: string): number {
+/** A whole number from `min` to `max` (unbounded when left out). */
+export function wholeNumber(option: string, text: string, min: number, max?: number): number {
   const value = Number(text);
-  if (!Number.isInteger(value) || value < 1)
-    throw usageError(`${option} must be a whole number ≥ 1, got '${text}'`);
-  return value;
-}
-
-export function nonNegativeInteger(option: string, text: string): number {
-  const value = Number(text);
-  if (!Number.isInteger(value) || value < 0)
-    throw usageError(`${option} must be a whole number ≥ 0, got '${text}'`);
+  if (!Number.isInteger(value) || value < min || (max !== undefined && value > max)) {
+    const range = max === undefined ? `≥ ${min}` : `from ${min} to ${max}`;
+    throw usageError(`${option} must be a whole number ${range}, got '${text}'`);
+  }
   return value;
 }

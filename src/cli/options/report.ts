@@ -40,47 +40,36 @@ export async function reportRequest(
 ): Promise<{ request: ReportRequest; inputs: string[]; out: string }> {
   const out = options.out;
   if (out === undefined) throw usageError('--out <dir> is required');
-  const grid = gridFromOptions(options);
-  const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
-  const axes = figureAxes(options.axes);
-  const target = targetFromOptions(options);
   const equipment = (options.equipment ?? []).map((file) => ({
     file,
     value: parseEquipment(readFileSync(file, 'utf8'), file),
   }));
-  let building = null;
-  if (options.buildingPeriod !== undefined || options.modalFactor !== undefined) {
-    if (!equipment.some((e) => e.value.zM > 0))
-      throw usageError('--building-period and --modal-factor apply to equipment above the base (z > 0)');
-    building = buildingFromOptions(options);
-  }
-  const broadening = broadeningFromOptions(options.broaden);
-  checkFolder({ path: out, option: '--out' });
-  const read = await loadRecord(source, options);
-  const processed = applyProcessing(read, options);
-  let pair: ReportRequest['pair'];
-  if (options.pair !== undefined) {
-    // --name names the main record only; the second component keeps its file's name.
-    const second = applyProcessing(await loadRecord(options.pair, { ...options, name: undefined }), options);
-    pair = { record: second, angleStepDeg: positiveNumber('--angle-step', options.angleStep ?? '1') };
-  }
-  const request: ReportRequest = {
-    read,
-    processed,
-    grid,
-    target,
-    lengthUnit,
-    axes,
-    pair,
+  const aboveBase = options.buildingPeriod !== undefined || options.modalFactor !== undefined;
+  if (aboveBase && !equipment.some((e) => e.value.zM > 0))
+    throw usageError('--building-period and --modal-factor apply to equipment above the base (z > 0)');
+  const settings = {
+    grid: gridFromOptions(options),
+    lengthUnit: parseLengthUnit(options.lengthUnit ?? 'm'),
+    axes: figureAxes(options.axes),
+    target: targetFromOptions(options),
     equipment,
-    building,
-    broadening,
+    building: aboveBase ? buildingFromOptions(options) : null,
+    broadening: broadeningFromOptions(options.broaden),
     title: options.title,
     notes: options.note,
     commandLine,
     workingDirectory: process.cwd(),
     generatedAt: generationTime(),
   };
+  checkFolder({ path: out, option: '--out' });
+  const read = await loadRecord(source, options);
+  let pair: ReportRequest['pair'];
+  if (options.pair !== undefined) {
+    // --name names the main record only; the second component keeps its file's name.
+    const second = applyProcessing(await loadRecord(options.pair, { ...options, name: undefined }), options);
+    pair = { record: second, angleStepDeg: positiveNumber('--angle-step', options.angleStep ?? '1') };
+  }
+  const request: ReportRequest = { ...settings, read, processed: applyProcessing(read, options), pair };
   const inputs = [source, ...(options.pair ? [options.pair] : []), ...equipment.map((e) => e.file)];
   return { request, inputs, out };
 }

@@ -4,14 +4,14 @@ import { psaAtPeriod } from '../../anchorage/elastic-demand.js';
 import type { Equipment } from '../../anchorage/equipment.js';
 import { inputError } from '../../base/errors.js';
 
-interface SpectrumFileValue {
-  value: ElasticInput;
-  isFloor: boolean;
-  floorNote: string;
-}
-
-/** Read the component's PSA from a spectrum JSON file, checking the fields it needs. */
-export function readSpectrumFile(file: string, equipment: Equipment): SpectrumFileValue {
+/**
+ * Read the component's PSA from a spectrum JSON file, checking the fields it needs; a floor
+ * spectrum's note states its building.
+ */
+export function readSpectrumFile(
+  file: string,
+  equipment: Equipment,
+): { value: ElasticInput; isFloor: boolean; floorNote: string } {
   let data: unknown;
   try {
     data = JSON.parse(readFileSync(file, 'utf8'));

@@ -1,9 +1,7 @@
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
-import type { DesignSpectrum } from '../../spectrum/design.js';
 import { parseScaleRange } from '../../spectrum/scale.js';
-import type { Spectrum } from '../../spectrum/spectrum.js';
-import { fitTarget, parseTargetSpec, type TargetFit } from '../../spectrum/target.js';
+import { parseTargetSpec } from '../../spectrum/target.js';
 import { loadTableSpectrum } from './design.js';
 
 /** The target options of `spectrum`. */
@@ -26,15 +24,8 @@ export function addTargetOptions(command: Command): Command {
     .option('--apply-scale', 'scale the record by the fitted factor for every output');
 }
 
-/** The target, its fitting range and whether to apply it, as the options name them. */
-export interface TargetChoice {
-  spectrum: DesignSpectrum;
-  rangeS?: [number, number];
-  apply: boolean;
-}
-
-/** The target named by --target, or undefined; refuses the scaling options without it. */
-export function targetFromOptions(options: TargetCliOptions): TargetChoice | undefined {
+/** The target named by --target, its fitting range and whether to apply it; refuses the scaling options without it. */
+export function targetFromOptions(options: TargetCliOptions) {
   if (options.target === undefined) {
     if (options.scaleRange !== undefined) throw usageError('--scale-range needs --target');
     if (options.applyScale) throw usageError('--apply-scale needs --target');
@@ -46,12 +37,4 @@ export function targetFromOptions(options: TargetCliOptions): TargetChoice | und
     rangeS: options.scaleRange === undefined ? undefined : parseScaleRange(options.scaleRange),
     apply: options.applyScale === true,
   };
-}
-
-/** Fit the target to the spectrum, scaled by the fit when it is applied; no target, no fit. */
-export function applyTarget(
-  spectrum: Spectrum,
-  target: TargetChoice | undefined,
-): { fit?: TargetFit; spectrum: Spectrum } {
-  return target === undefined ? { spectrum } : fitTarget(spectrum, target.spectrum, target);
 }

@@ -1,13 +1,10 @@
 import { usageError } from '../../base/errors.js';
 import type { SweepKernel } from '../../oscillator/sweep.js';
+import { wholeNumber } from './record.js';
 
 /** The value of --threads: a whole number from 1 to 256. */
 export function parseThreads(text: string): number {
-  const threads = Number(text);
-  if (!Number.isInteger(threads) || threads < 1 || threads > 256) {
-    throw usageError(`--threads must be a whole number from 1 to 256, got '${text}'`);
-  }
-  return threads;
+  return wholeNumber('--threads', text, 1, 256);
 }
 
 /** --threads and --kernel of a sweep, each auto unless given. */

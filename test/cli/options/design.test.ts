@@ -31,7 +31,7 @@ describe('designFromOptions', () => {
   it.each([
     [{}, 'choose a spectrum: --code asce7-16, --code ec8 or --table FILE'],
     [{ code: 'nbc' }, "--code 'nbc': use asce7-16 or ec8"],
-    [{ code: 'asce7-16', sds: '1', sd1: '0.6' }, '--tl is required with --code asce7-16'],
+    [{ code: 'asce7-16', sds: '1', sd1: '0.6' }, '--tl is required'],
     [{ code: 'asce7-16', sds: 'x', sd1: '0.6', tl: '8' }, "--sds 'x' is not a number"],
     [
       { code: 'asce7-16', sds: '1', sd1: '0.6', tl: '8', ag: '0.2' },

@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import {
   parseBaseline,
   parseFilter,
-  parseResample,
   parseTaper,
   processingPlanFromOptions,
 } from '../../../src/cli/options/processing.js';
@@ -39,9 +38,11 @@ describe('processing options', () => {
   });
 
   it('--resample refuses a step ≤ 0', () => {
-    expect(parseResample('0.005')).toBe(0.005);
-    expect(() => parseResample('0')).toThrow(/positive/);
-    expect(() => parseResample('-1')).toThrow(/positive/);
+    expect(processingPlanFromOptions({ resample: '0.005' })).toEqual({ resampleDtS: 0.005 });
+    expect(() => processingPlanFromOptions({ resample: '0' })).toThrow(
+      "--resample must be a positive number, got '0'",
+    );
+    expect(() => processingPlanFromOptions({ resample: '-1' })).toThrow(/--resample must be a positive/);
   });
 
   it('an empty set of options is an empty plan', () => {

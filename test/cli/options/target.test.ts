@@ -2,9 +2,10 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { applyTarget, targetFromOptions } from '../../../src/cli/options/target.js';
+import { type TargetCliOptions, targetFromOptions } from '../../../src/cli/options/target.js';
 import { createRecord } from '../../../src/record/record.js';
 import { responseSpectrum } from '../../../src/spectrum/spectrum.js';
+import { fitTarget } from '../../../src/spectrum/target.js';
 
 const folder = mkdtempSync(join(tmpdir(), 'quakesweep-target-options-'));
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
@@ -34,18 +35,19 @@ describe('targetFromOptions', () => {
   });
 });
 
-describe('applyTarget', () => {
-  it('leaves the spectrum alone without a target', () => {
-    expect(applyTarget(spectrum, undefined)).toEqual({ spectrum });
-  });
+describe('the target choice', () => {
+  const fitWith = (options: TargetCliOptions) => {
+    const choice = targetFromOptions(options)!;
+    return fitTarget(spectrum, choice.spectrum, choice);
+  };
 
   it('fits over --scale-range, and scales the spectrum only with --apply-scale', () => {
     const asce = { target: 'asce7-16:sds=1.0,sd1=0.6,tl=8', scaleRange: '0.2:1' };
-    const fitted = applyTarget(spectrum, targetFromOptions(asce));
+    const fitted = fitWith(asce);
     expect(fitted.fit?.rangeS).toEqual([0.2, 1]);
     expect(fitted.fit?.applied).toBe(false);
     expect(fitted.spectrum).toBe(spectrum);
-    const scaled = applyTarget(spectrum, targetFromOptions({ ...asce, applyScale: true }));
+    const scaled = fitWith({ ...asce, applyScale: true });
     const factor = scaled.fit!.factor;
     expect(scaled.fit?.applied).toBe(true);
     expect(scaled.spectrum.curves[0].psaMS2[2]).toBeCloseTo(spectrum.curves[0].psaMS2[2] * factor, 9);

@@ -1,0 +1,86 @@
+import { cpSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { useCliFolder } from '../../helpers/cli-folder.js';
+import { expectOneLineFailure } from '../../helpers/run-cli.js';
+
+// quakesweep merge on the shards of a batch of three invented records (windowed sines); the
+// batch's worker threads run dist/.
+const folder = useCliFolder('quakesweep-merge-', (f) => {
+  for (const [name, hz] of [
+    ['a.txt', 0.8],
+    ['b.txt', 1.6],
+    ['c.txt', 3.1],
+  ] as const)
+    f.writeWindowedSine(name, hz);
+});
+const grid = ['--units', 'g', '--dt', '0.01', '--periods', '0,0.1,0.3,1', '--damping', '5%'];
+const batch = (...args: string[]) =>
+  folder.run('batch', 'a.txt', 'b.txt', 'c.txt', ...grid, '--jobs', '1', ...args);
+const read = (...path: string[]) => readFileSync(join(folder.path, ...path), 'utf8');
+
+beforeAll(async () => {
+  for (const result of [
+    await batch('--out', 'whole'),
+    await batch('--shard', '1/2', '--out', 's1'),
+    await batch('--shard', '2/2', '--out', 's2'),
+    await batch('--shard', '2/3', '--out', 'thirds'),
+  ])
+    expect(result.code).toBe(0);
+});
+
+describe('quakesweep merge', () => {
+  it('two shards merged give the unsharded suite.json and record folders byte for byte', async () => {
+    const merged = await folder.run('merge', 's1', 's2', '--out', 'merged');
+    expect(merged.code).toBe(0);
+    expect(merged.stderr).toMatch(/merged 2 shards: 3 records, 0 failed/);
+    expect(read('merged', 'suite.json')).toBe(read('whole', 'suite.json'));
+    for (const name of ['a', 'b', 'c'])
+      expect(read('merged', name, 'spectra.json')).toBe(read('whole', name, 'spectra.json'));
+  });
+
+  it('merges into one of the shard folders, copying only the other shard’s records', async () => {
+    cpSync(join(folder.path, 's1'), join(folder.path, 'into'), { recursive: true });
+    expect((await folder.run('merge', 'into', 's2', '--out', 'into')).code).toBe(0);
+    expect(read('into', 'suite.json')).toBe(read('whole', 'suite.json'));
+  });
+
+  it('refuses shards that do not make one whole run, with exit 2 and one line', async () => {
+    const refusal = async (...args: string[]) => expectOneLineFailure(await folder.run('merge', ...args));
+    expect(await refusal('s1', '--out', 'm1')).toMatch(/shard 2 of 2 missing/);
+    expect(await refusal('s1', 's1', '--out', 'm2')).toMatch(/shard 1 of 2 is also in/);
+    expect(await refusal('s1', 'thirds', '--out', 'm3')).toMatch(/is shard 2 of 3, others are of 2/);
+    expect(await refusal('nowhere', '--out', 'm4')).toMatch(/nowhere: no such folder/);
+    expect(await refusal('whole', '--out', 'm5')).toMatch(/no shard-i-of-N\.json in whole/);
+  });
+
+  it('refuses a shard run with other options, a damaged summary and an unsafe record name', async () => {
+    const other = await folder.run(
+      'batch',
+      'a.txt',
+      'b.txt',
+      'c.txt',
+      ...grid,
+      '--damping',
+      '2%',
+      '--shard',
+      '2/2',
+      '--out',
+      'other',
+    );
+    expect(other.code).toBe(0);
+    const refusal = async (...args: string[]) => expectOneLineFailure(await folder.run('merge', ...args));
+    expect(await refusal('s1', 'other', '--out', 'm6')).toMatch(
+      /was run with other reading, processing or grid options/,
+    );
+    cpSync(join(folder.path, 's2'), join(folder.path, 'bad'), { recursive: true });
+    writeFileSync(join(folder.path, 'bad', 'shard-2-of-2.json'), '{ not json');
+    expect(await refusal('s1', 'bad', '--out', 'm7')).toMatch(/shard-2-of-2\.json: not valid JSON/);
+    const shard = JSON.parse(read('s2', 'shard-2-of-2.json'));
+    shard.records[0].name = '../escape';
+    writeFileSync(join(folder.path, 'bad', 'shard-2-of-2.json'), JSON.stringify(shard));
+    expect(await refusal('s1', 'bad', '--out', 'm8')).toMatch(
+      /record name "\.\.\/escape" is not a safe folder name/,
+    );
+  });
+});
