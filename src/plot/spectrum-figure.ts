@@ -1,6 +1,6 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { lineChart } from './line-chart.js';
+import { type LineChartOptions, lineChart } from './line-chart.js';
 import type { AxisScale, Series } from './panel.js';
 import { overlayStyle } from './styles.js';
 import {
@@ -38,21 +38,36 @@ export function spectrumSubtitle(spectrum: Spectrum, methodDescription?: string)
   return [recordLine('Record', spectrum.record), ...processingLines(spectrum.record.processing), method];
 }
 
-/** The note that T = 0 is left off a log period axis, when the grid holds it. */
-export function spectrumZeroNote(spectrum: Spectrum, axes: AxisScale, there: string): string[] {
-  return axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, there) : [];
+/**
+ * A spectrum quantity against period, one curve per damping ratio: the record and method in the
+ * subtitle, the damping ratios in the legend, the note on T = 0 (value `zeroThere`) off a log axis.
+ */
+export function spectrumChart(
+  spectrum: Spectrum,
+  options: SpectrumFigureOptions,
+  { note, zeroThere, ...chart }: Omit<LineChartOptions, 'x'> & { note: string; zeroThere: string },
+): string {
+  const axes = chart.axes ?? options.axes ?? 'log';
+  return lineChart({
+    ...chart,
+    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
+    x: { title: 'Period T (s)' },
+    axes,
+    legendTitle: 'Damping:',
+    notes: [note, ...(axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, zeroThere) : [])],
+  });
 }
 
-/** One curve per damping ratio: the values `pick` gives for curve i, times `scale`. */
+/** One curve per damping ratio: the curves' `quantity` times `scale`. */
 export function dampingSeries(
   spectrum: Spectrum,
-  pick: (index: number) => Float64Array,
+  quantity: 'sdM' | 'psvMS' | 'psaMS2',
   scale: number,
 ): Series[] {
-  return spectrum.curves.map((curve, i) => ({
+  return spectrum.curves.map((curve) => ({
     label: `ζ = ${percentLabel(curve.damping)}`,
     x: spectrum.periodsS,
-    y: pick(i).map((v) => v * scale),
+    y: curve[quantity].map((v) => v * scale),
   }));
 }
 
@@ -71,59 +86,45 @@ export function overlaySeries(
   );
 }
 
+/** The T = 0 note's value of PSA: the record's PGA. */
+export function pgaThere(spectrum: Spectrum): string {
+  return ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`;
+}
+
 /** PSA (g) against period, one curve per damping ratio, optional overlays (e.g. a design spectrum). */
 export function psaFigure(spectrum: Spectrum, options: PsaFigureOptions = {}): string {
-  const axes = options.axes ?? 'log';
-  const pgaG = spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2;
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Pseudo-acceleration response spectrum PSA',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
     y: { title: 'Pseudo-acceleration PSA (g)' },
-    axes,
-    legendTitle: 'Damping:',
     series: [
-      ...dampingSeries(spectrum, (i) => spectrum.curves[i].psaMS2, 1 / STANDARD_GRAVITY_MS2),
+      ...dampingSeries(spectrum, 'psaMS2', 1 / STANDARD_GRAVITY_MS2),
       ...overlaySeries(options.overlays, (a) => a),
     ],
-    notes: [
-      'PSA = ω²·SD with ω = 2π/T; at T = 0, PSA is the peak ground acceleration.',
-      ...spectrumZeroNote(spectrum, axes, ` (there PSA = PGA = ${formatValue(pgaG)} g)`),
-    ],
+    note: 'PSA = ω²·SD with ω = 2π/T; at T = 0, PSA is the peak ground acceleration.',
+    zeroThere: pgaThere(spectrum),
   });
 }
 
 /** SD against period, one curve per damping ratio. */
 export function sdFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {}): string {
-  const axes = options.axes ?? 'log';
   const unit = options.lengthUnit ?? 'm';
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Displacement response spectrum SD',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
     y: { title: `Relative displacement SD (${unit})` },
-    axes,
-    legendTitle: 'Damping:',
-    series: dampingSeries(spectrum, (i) => spectrum.curves[i].sdM, 1 / LENGTH_UNITS[unit]),
-    notes: [
-      'SD is the peak displacement of the oscillator relative to the ground.',
-      ...spectrumZeroNote(spectrum, axes, ' (there SD = 0)'),
-    ],
+    series: dampingSeries(spectrum, 'sdM', 1 / LENGTH_UNITS[unit]),
+    note: 'SD is the peak displacement of the oscillator relative to the ground.',
+    zeroThere: ' (there SD = 0)',
   });
 }
 
 /** PSV against period, one curve per damping ratio. */
 export function psvFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {}): string {
-  const axes = options.axes ?? 'log';
   const unit = options.lengthUnit ?? 'm';
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Pseudo-velocity response spectrum PSV',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
-    axes,
-    legendTitle: 'Damping:',
-    series: dampingSeries(spectrum, (i) => spectrum.curves[i].psvMS, 1 / LENGTH_UNITS[unit]),
-    notes: ['PSV = ω·SD with ω = 2π/T.', ...spectrumZeroNote(spectrum, axes, ' (there PSV = 0)')],
+    series: dampingSeries(spectrum, 'psvMS', 1 / LENGTH_UNITS[unit]),
+    note: 'PSV = ω·SD with ω = 2π/T.',
+    zeroThere: ' (there PSV = 0)',
   });
 }

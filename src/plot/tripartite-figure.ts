@@ -1,16 +1,14 @@
 import { LENGTH_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
 import {
   dampingSeries,
   overlaySeries,
   type PsaFigureOptions,
-  spectrumSubtitle,
-  spectrumZeroNote,
+  pgaThere,
+  spectrumChart,
 } from './spectrum-figure.js';
 import { formatCoordinate } from './svg.js';
-import { formatValue } from './text.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
 
 const DIAGONAL_COLOUR = '#b8b8b8';
@@ -43,27 +41,18 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
   const perLength = 1 / LENGTH_UNITS[unit];
   const gInUnit = STANDARD_GRAVITY_MS2 * perLength;
   const series = [
-    ...dampingSeries(spectrum, (i) => spectrum.curves[i].psvMS, perLength),
+    ...dampingSeries(spectrum, 'psvMS', perLength),
     ...overlaySeries(options.overlays, (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI)),
   ];
-  const underlay = (context: PanelContext) => drawDiagonals(context, unit, gInUnit, series);
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Four-way logarithmic response spectrum (PSV, SD, PSA)',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
+    axes: 'log',
     heightPx: 430,
-    legendTitle: 'Damping:',
     series,
-    underlay,
-    notes: [
-      `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
-      ...spectrumZeroNote(
-        spectrum,
-        'log',
-        ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`,
-      ),
-    ],
+    underlay: (context) => drawDiagonals(context, unit, gInUnit, series),
+    note: `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
+    zeroThere: pgaThere(spectrum),
   });
 }
 
