@@ -32,6 +32,14 @@ export interface PsaFigureOptions extends SpectrumFigureOptions {
   overlays?: readonly PsaOverlay[];
 }
 
+export const PERIOD_AXIS = { title: 'Period T (s)' };
+export const PSA_AXIS = { title: 'Pseudo-acceleration PSA (g)' };
+
+/** Accelerations in m/s² as values in g. */
+export function inG(valuesMS2: ArrayLike<number>): number[] {
+  return Array.from(valuesMS2, (v) => v / STANDARD_GRAVITY_MS2);
+}
+
 /** The lines that say where a spectrum comes from: record, processing, method and damping. */
 export function spectrumSubtitle(spectrum: Spectrum, methodDescription?: string): string[] {
   const method = methodLine(methodDescription ?? spectrum.method, spectrum.curves);
@@ -51,7 +59,7 @@ export function spectrumChart(
   return lineChart({
     ...chart,
     subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
+    x: PERIOD_AXIS,
     axes,
     legendTitle: 'Damping:',
     notes: [note, ...(axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, zeroThere) : [])],
@@ -95,7 +103,7 @@ export function pgaThere(spectrum: Spectrum): string {
 export function psaFigure(spectrum: Spectrum, options: PsaFigureOptions = {}): string {
   return spectrumChart(spectrum, options, {
     title: 'Pseudo-acceleration response spectrum PSA',
-    y: { title: 'Pseudo-acceleration PSA (g)' },
+    y: PSA_AXIS,
     series: [
       ...dampingSeries(spectrum, 'psaMS2', 1 / STANDARD_GRAVITY_MS2),
       ...overlaySeries(options.overlays, (a) => a),
