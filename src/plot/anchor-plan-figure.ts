@@ -1,5 +1,5 @@
-import { drawFooter, layoutFooter } from './footer.js';
-import { layoutHeader, startPage } from './header.js';
+import { finishPage } from './footer.js';
+import { startPage } from './header.js';
 import { axisTicks, makeScale } from './layout.js';
 import { drawAxisTitle, drawFrame, drawTickLabels } from './panel.js';
 import { FIGURE_TEXT, FIGURE_WIDTH_PX, GRID_COLOUR, HALO, TEXT_COLOUR } from './styles.js';
@@ -34,9 +34,9 @@ const MASS = '#111111';
  * as the other figures, all text escaped by the document's serializer.
  */
 export function anchorPlanSvg(input: AnchorPlanInput): string {
-  const widthPx = FIGURE_WIDTH_PX;
   const { tickPx, axisTitlePx, sidePx } = FIGURE_TEXT;
-  const header = layoutHeader(input.title, input.subtitle, widthPx);
+  const { page, bottom } = startPage(input.title, input.subtitle);
+  const { doc } = page;
 
   const xs = [...input.anchors.map((a) => a.x), input.cgPlan[0], input.centroid[0]];
   const ys = [...input.anchors.map((a) => a.y), input.cgPlan[1], input.centroid[1]];
@@ -46,11 +46,14 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const xDomain = [(minX + maxX) / 2 - half, (minX + maxX) / 2 + half] as const;
   const yDomain = [(minY + maxY) / 2 - half, (minY + maxY) / 2 + half] as const;
   const plotSize = 400;
-  const plot = { left: (widthPx - plotSize) / 2, top: header.bottom + 16, width: plotSize, height: plotSize };
+  const plot = {
+    left: (FIGURE_WIDTH_PX - plotSize) / 2,
+    top: bottom + 16,
+    width: plotSize,
+    height: plotSize,
+  };
   const [plotRight, plotBottom] = [plot.left + plotSize, plot.top + plotSize];
   const legendTop = plotBottom + tickPx + 8 + axisTitlePx + 16;
-  const footer = layoutFooter(input.notes, widthPx, legendTop + 20);
-  const doc = startPage(header, widthPx, Math.ceil(footer.bottom));
 
   const px = makeScale('linear', xDomain, [plot.left, plotRight]);
   const py = makeScale('linear', yDomain, [plotBottom, plot.top]);
@@ -153,8 +156,7 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   item((x) => doc.element(legend, 'path', massMark(x, ly, 6)), 'centre of mass');
   item((x) => doc.element(legend, 'path', centroidMark(x, ly)), 'anchor centroid');
 
-  drawFooter(doc, footer);
-  return doc.serialize();
+  return finishPage(page, input.notes, legendTop + 20);
 }
 
 /** The centre of mass: a plus sign `size` px from its centre to each end. */

@@ -8,6 +8,7 @@ import {
   pgaThere,
   spectrumChart,
 } from './spectrum-figure.js';
+import { HALO } from './styles.js';
 import { formatCoordinate } from './svg.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
 
@@ -105,7 +106,7 @@ function drawDiagonals(
     },
   ];
   const lines = doc.element(group, 'g', { class: 'diagonals', fill: 'none' });
-  const labels: { cx: number; cy: number; half: number; angle: number }[] = [];
+  const labels: { cx: number; cy: number; half: number }[] = [];
   for (const family of families) {
     for (const value of family.values) {
       const segment = family.segment(value);
@@ -126,10 +127,10 @@ function drawDiagonals(
       });
       if (length < 2 * half + 8) continue;
       const angle = (Math.atan2(by - ay, bx - ax) * 180) / Math.PI;
-      const spot = chooseSpot(ax, ay, bx, by, length, half, occupied, labels);
+      const spot = chooseSpot([ax, ay, bx, by], length, half, occupied, labels);
       const cx = ax + ((bx - ax) * spot) / length;
       const cy = ay + ((by - ay) * spot) / length;
-      labels.push({ cx, cy, half, angle });
+      labels.push({ cx, cy, half });
       doc.text(item, text, {
         x: 0,
         y: 0,
@@ -138,9 +139,8 @@ function drawDiagonals(
         'text-anchor': 'middle',
         'font-size': DIAGONAL_PX,
         fill: DIAGONAL_TEXT,
-        stroke: '#ffffff',
+        ...HALO,
         'stroke-width': 3,
-        'paint-order': 'stroke',
       });
     }
   }
@@ -148,10 +148,7 @@ function drawDiagonals(
 
 /** Distance along the segment for a label's centre, away from curves and other labels if it can be. */
 function chooseSpot(
-  ax: number,
-  ay: number,
-  bx: number,
-  by: number,
+  [ax, ay, bx, by]: readonly number[],
   length: number,
   half: number,
   occupied: readonly [number, number][],
