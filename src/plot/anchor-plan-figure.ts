@@ -26,6 +26,8 @@ export interface AnchorPlanInput {
 const GOVERNING = '#D55E00';
 const ANCHOR = '#0072B2';
 const MASS = '#111111';
+/** The plan's square plot, px. */
+const PLOT_PX = 400;
 
 /**
  * Plan view of an anchor pattern as SVG text: each anchor with its worst tension (circle area in
@@ -45,21 +47,15 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const half = span / 2 + span * 0.3;
   const xDomain = [(minX + maxX) / 2 - half, (minX + maxX) / 2 + half] as const;
   const yDomain = [(minY + maxY) / 2 - half, (minY + maxY) / 2 + half] as const;
-  const plotSize = 400;
-  const plot = {
-    left: (FIGURE_WIDTH_PX - plotSize) / 2,
-    top: bottom + 16,
-    width: plotSize,
-    height: plotSize,
-  };
-  const [plotRight, plotBottom] = [plot.left + plotSize, plot.top + plotSize];
+  const plot = { left: (FIGURE_WIDTH_PX - PLOT_PX) / 2, top: bottom + 16, width: PLOT_PX, height: PLOT_PX };
+  const [plotRight, plotBottom] = [plot.left + PLOT_PX, plot.top + PLOT_PX];
   const legendTop = plotBottom + tickPx + 8 + axisTitlePx + 16;
 
   const px = makeScale('linear', xDomain, [plot.left, plotRight]);
   const py = makeScale('linear', yDomain, [plotBottom, plot.top]);
   const panel = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': 0 });
-  const xTicks = axisTicks('linear', xDomain, plotSize, 'x');
-  const yTicks = axisTicks('linear', yDomain, plotSize, 'y');
+  const xTicks = axisTicks('linear', xDomain, PLOT_PX, 'x');
+  const yTicks = axisTicks('linear', yDomain, PLOT_PX, 'y');
   const grid = doc.element(panel, 'g', { class: 'grid', stroke: GRID_COLOUR, 'stroke-width': 0.6 });
   for (const v of xTicks.major)
     doc.element(grid, 'line', { x1: px(v), x2: px(v), y1: plot.top, y2: plotBottom });
@@ -70,9 +66,9 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   drawTickLabels(doc, labels, 'x', xTicks, (v) => ({ x: px(v), y: plotBottom + 7 + tickPx }));
   drawTickLabels(doc, labels, 'y', yTicks, (v) => ({ x: plot.left - 6, y: py(v) + tickPx * 0.35 }));
   const xTitleY = plotBottom + 7 + tickPx + 6 + axisTitlePx;
-  drawAxisTitle(doc, panel, 'x', `x (${input.lengthUnit})`, [plot.left + plotSize / 2, xTitleY]);
+  drawAxisTitle(doc, panel, 'x', `x (${input.lengthUnit})`, [plot.left + PLOT_PX / 2, xTitleY]);
   const yLabelWidth = Math.max(...yTicks.labels.map((l) => textWidthPx(l.text, tickPx)), 20);
-  const yTitleAt: [number, number] = [plot.left - 6 - yLabelWidth - 10, plot.top + plotSize / 2];
+  const yTitleAt: [number, number] = [plot.left - 6 - yLabelWidth - 10, plot.top + PLOT_PX / 2];
   drawAxisTitle(doc, panel, 'y', `y (${input.lengthUnit})`, yTitleAt);
 
   const marks = doc.element(panel, 'g', { class: 'plan' });
@@ -80,7 +76,7 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const [gx, gy] = [px(input.cgPlan[0]), py(input.cgPlan[1])];
   const rad = (input.directionDeg * Math.PI) / 180;
   const [ux, uy] = [Math.cos(rad), -Math.sin(rad)];
-  const length = plotSize * 0.3;
+  const length = PLOT_PX * 0.3;
   const [tipX, tipY] = [gx + ux * length, gy + uy * length];
   const arrow = doc.element(marks, 'g', { class: 'direction', 'data-direction-deg': input.directionDeg });
   doc.element(arrow, 'path', {

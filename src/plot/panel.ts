@@ -52,8 +52,8 @@ export interface PlotBox {
   height: number;
 }
 
-/** What a panel's decorations draw with: its settled layout, its scales as functions and its frame. */
-export type PanelContext = Pick<PanelLayout, 'xScale' | 'yScale' | 'xDomain' | 'yDomain'> & {
+/** What a panel's decorations draw with: its spec, its settled axes, its scales and its frame. */
+export type PanelContext = Pick<PanelLayout, 'spec' | 'xScale' | 'yScale' | 'xDomain' | 'yDomain'> & {
   doc: SvgDocument;
   group: SVGElement;
   x: (value: number) => number;
@@ -82,7 +82,7 @@ export function drawPanel(doc: SvgDocument, layout: PanelLayout, plot: PlotBox, 
   const x = makeScale(xScale, xDomain, [plot.left, plot.left + plot.width]);
   const y = makeScale(yScale, yDomain, [plot.top + plot.height, plot.top]);
   const group = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': index });
-  const context: PanelContext = { doc, group, x, y, xDomain, yDomain, xScale, yScale, plot };
+  const context: PanelContext = { doc, group, spec, x, y, xDomain, yDomain, xScale, yScale, plot };
   const xTicks = axisTicks(xScale, xDomain, plot.width, 'x');
   const bottom = plot.top + plot.height;
   const right = plot.left + plot.width;

@@ -46,57 +46,56 @@ export function spectrumSubtitle(spectrum: Spectrum, methodDescription?: string)
   return [recordLine('Record', spectrum.record), ...processingLines(spectrum.record.processing), method];
 }
 
+/** What a spectrum chart draws: `quantity` times `scale` and, where `overlayY` is given, the overlays. */
+type SpectrumChart = Omit<LineChartOptions, 'x' | 'series'> & {
+  quantity: 'sdM' | 'psvMS' | 'psaMS2';
+  scale: number;
+  /** An overlay's value drawn at period `t` for its PSA (g). */
+  overlayY?: (psaG: number, t: number) => number;
+  note: string;
+  /** The value at T = 0 for the note that it is left off a log axis; default PSA = PGA. */
+  zeroThere?: string;
+};
+
 /**
- * A spectrum quantity against period, one curve per damping ratio: the record and method in the
- * subtitle, the damping ratios in the legend, the note on T = 0 (value `zeroThere`) off a log axis.
+ * A spectrum quantity against period, one curve per damping ratio, then the overlays: the record
+ * and method in the subtitle, the damping ratios in the legend, the note on T = 0 off a log axis.
  */
 export function spectrumChart(
   spectrum: Spectrum,
-  options: SpectrumFigureOptions,
-  { note, zeroThere, ...chart }: Omit<LineChartOptions, 'x'> & { note: string; zeroThere: string },
+  options: PsaFigureOptions,
+  { quantity, scale, overlayY, note, zeroThere, ...chart }: SpectrumChart,
 ): string {
+  const curves = spectrum.curves.map(
+    (curve): Series => ({
+      label: `ζ = ${percentLabel(curve.damping)}`,
+      x: spectrum.periodsS,
+      y: curve[quantity].map((v) => v * scale),
+    }),
+  );
+  const overlays =
+    overlayY === undefined
+      ? []
+      : (options.overlays ?? []).map(
+          (overlay, i): Series => ({
+            label: overlay.label,
+            x: overlay.periodsS,
+            y: Array.from(overlay.psaG, (a, k) => overlayY(a, overlay.periodsS[k])),
+            style: overlayStyle(i),
+            kind: 'overlay',
+          }),
+        );
   const axes = chart.axes ?? options.axes ?? 'log';
+  const pga = ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`;
   return lineChart({
     ...chart,
     subtitle: spectrumSubtitle(spectrum, options.methodDescription),
     x: PERIOD_AXIS,
     axes,
     legendTitle: 'Damping:',
-    notes: [note, ...(axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, zeroThere) : [])],
+    series: [...curves, ...overlays],
+    notes: [note, ...(axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, zeroThere ?? pga) : [])],
   });
-}
-
-/** One curve per damping ratio: the curves' `quantity` times `scale`. */
-export function dampingSeries(
-  spectrum: Spectrum,
-  quantity: 'sdM' | 'psvMS' | 'psaMS2',
-  scale: number,
-): Series[] {
-  return spectrum.curves.map((curve) => ({
-    label: `ζ = ${percentLabel(curve.damping)}`,
-    x: spectrum.periodsS,
-    y: curve[quantity].map((v) => v * scale),
-  }));
-}
-
-export function overlaySeries(
-  overlays: readonly PsaOverlay[] | undefined,
-  toY: (psaG: number, t: number) => number,
-) {
-  return (overlays ?? []).map(
-    (overlay, i): Series => ({
-      label: overlay.label,
-      x: overlay.periodsS,
-      y: Array.from(overlay.psaG, (a, k) => toY(a, overlay.periodsS[k])),
-      style: overlayStyle(i),
-      kind: 'overlay',
-    }),
-  );
-}
-
-/** The T = 0 note's value of PSA: the record's PGA. */
-export function pgaThere(spectrum: Spectrum): string {
-  return ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`;
 }
 
 /** PSA (g) against period, one curve per damping ratio, optional overlays (e.g. a design spectrum). */
@@ -104,12 +103,10 @@ export function psaFigure(spectrum: Spectrum, options: PsaFigureOptions = {}): s
   return spectrumChart(spectrum, options, {
     title: 'Pseudo-acceleration response spectrum PSA',
     y: PSA_AXIS,
-    series: [
-      ...dampingSeries(spectrum, 'psaMS2', 1 / STANDARD_GRAVITY_MS2),
-      ...overlaySeries(options.overlays, (a) => a),
-    ],
+    quantity: 'psaMS2',
+    scale: 1 / STANDARD_GRAVITY_MS2,
+    overlayY: (psaG) => psaG,
     note: 'PSA = ω²·SD with ω = 2π/T; at T = 0, PSA is the peak ground acceleration.',
-    zeroThere: pgaThere(spectrum),
   });
 }
 
@@ -119,7 +116,8 @@ export function sdFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {}
   return spectrumChart(spectrum, options, {
     title: 'Displacement response spectrum SD',
     y: { title: `Relative displacement SD (${unit})` },
-    series: dampingSeries(spectrum, 'sdM', 1 / LENGTH_UNITS[unit]),
+    quantity: 'sdM',
+    scale: 1 / LENGTH_UNITS[unit],
     note: 'SD is the peak displacement of the oscillator relative to the ground.',
     zeroThere: ' (there SD = 0)',
   });
@@ -131,7 +129,8 @@ export function psvFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {
   return spectrumChart(spectrum, options, {
     title: 'Pseudo-velocity response spectrum PSV',
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
-    series: dampingSeries(spectrum, 'psvMS', 1 / LENGTH_UNITS[unit]),
+    quantity: 'psvMS',
+    scale: 1 / LENGTH_UNITS[unit],
     note: 'PSV = ω·SD with ω = 2π/T.',
     zeroThere: ' (there PSV = 0)',
   });

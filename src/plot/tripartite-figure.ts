@@ -1,13 +1,7 @@
 import { LENGTH_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { PanelContext } from './panel.js';
-import {
-  dampingSeries,
-  overlaySeries,
-  type PsaFigureOptions,
-  pgaThere,
-  spectrumChart,
-} from './spectrum-figure.js';
+import { type PsaFigureOptions, spectrumChart } from './spectrum-figure.js';
 import { HALO } from './styles.js';
 import { formatCoordinate } from './svg.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
@@ -41,33 +35,26 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
   const unit = options.lengthUnit ?? 'm';
   const perLength = 1 / LENGTH_UNITS[unit];
   const gInUnit = STANDARD_GRAVITY_MS2 * perLength;
-  const series = [
-    ...dampingSeries(spectrum, 'psvMS', perLength),
-    ...overlaySeries(options.overlays, (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI)),
-  ];
   return spectrumChart(spectrum, options, {
     title: 'Four-way logarithmic response spectrum (PSV, SD, PSA)',
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
     axes: 'log',
     heightPx: 430,
-    series,
-    underlay: (context) => drawDiagonals(context, unit, gInUnit, series),
+    quantity: 'psvMS',
+    scale: perLength,
+    overlayY: (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI),
+    underlay: (context) => drawDiagonals(context, unit, gInUnit),
     note: `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
-    zeroThere: pgaThere(spectrum),
   });
 }
 
-function drawDiagonals(
-  context: PanelContext,
-  unit: string,
-  gInUnit: number,
-  series: readonly { x: ArrayLike<number>; y: ArrayLike<number> }[],
-): void {
+/** The SD and PSA diagonals, each labelled where it crosses the fewest curves and other labels. */
+function drawDiagonals(context: PanelContext, unit: string, gInUnit: number): void {
   const { doc, group, x, y } = context;
   const [tLow, tHigh] = context.xDomain;
   const [vLow, vHigh] = context.yDomain;
   const occupied: [number, number][] = [];
-  for (const s of series) {
+  for (const s of context.spec.series) {
     for (let i = 0; i < s.x.length; i++) {
       if (s.x[i] > 0 && s.y[i] > 0) occupied.push([x(s.x[i]), y(s.y[i])]);
       if (i > 0 && s.x[i - 1] > 0 && s.y[i - 1] > 0 && s.x[i] > 0 && s.y[i] > 0) {
