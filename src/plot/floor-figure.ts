@@ -3,7 +3,7 @@ import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext, Series } from './panel.js';
 import { inG, PERIOD_AXIS, PSA_AXIS } from './spectrum-figure.js';
-import { DAMPING_DASHES, HALO, type SeriesStyle, TEXT_COLOUR } from './styles.js';
+import { DAMPING_DASHES, MARK_LABEL, MARK_LINE, type SeriesStyle } from './styles.js';
 import {
   formatValue,
   methodLine,
@@ -78,20 +78,7 @@ function markBuildingPeriod(context: PanelContext, periodS: number): void {
   if (!(periodS >= xDomain[0] && periodS <= xDomain[1])) return;
   const px = x(periodS);
   const mark = doc.element(group, 'g', { class: 'building-period', 'data-period-s': periodS });
-  doc.element(mark, 'line', {
-    x1: px,
-    x2: px,
-    y1: plot.top,
-    y2: plot.top + plot.height,
-    stroke: '#777777',
-    'stroke-width': 0.9,
-    'stroke-dasharray': '1 3',
-  });
-  doc.text(mark, `T_b = ${periodS} s`, {
-    x: px + 4,
-    y: plot.top + 12,
-    'font-size': 9,
-    fill: TEXT_COLOUR,
-    ...HALO,
-  });
+  const ends = { x1: px, x2: px, y1: plot.top, y2: plot.top + plot.height };
+  doc.element(mark, 'line', { ...ends, ...MARK_LINE, 'stroke-dasharray': '1 3' });
+  doc.text(mark, `T_b = ${periodS} s`, { x: px + 4, y: plot.top + 12, ...MARK_LABEL });
 }

@@ -87,7 +87,5 @@ export function axisTicks(
   const range: [number, number] = axis === 'x' ? [0, lengthPx] : [lengthPx, 0];
   const scale = makeScale(kind, domain, range);
   const extent = (text: string) => (axis === 'x' ? textWidthPx(text, tickPx) : tickPx * 1.3);
-  return kind === 'log'
-    ? logTicks(domain, (v) => scale(v), extent)
-    : linearTicks(domain, (v) => scale(v), extent, lengthPx);
+  return kind === 'log' ? logTicks(domain, scale, extent) : linearTicks(domain, scale, extent, lengthPx);
 }
