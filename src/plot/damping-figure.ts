@@ -142,15 +142,12 @@ function labelReferences(
   colourOf: (damping: number) => string,
 ): void {
   const { doc, group, y, plot } = context;
-  const items = references
-    .map((r) => ({
-      ...r,
-      at: y(r.value),
-      text: `${percentLabel(r.damping)}: ${REFERENCES[r.kind].label} ${r.value.toFixed(2)}`,
-    }))
+  const text = (r: Reference) =>
+    `${percentLabel(r.damping)}: ${REFERENCES[r.kind].label} ${r.value.toFixed(2)}`;
+  const placed = references
+    .map((r) => ({ ...r, at: y(r.value), textY: y(r.value), text: text(r) }))
     .sort((a, b) => a.at - b.at);
   const gap = LABEL_PX + 1.5;
-  const placed = items.map((item) => ({ ...item, textY: item.at }));
   for (let i = 1; i < placed.length; i++) {
     placed[i].textY = Math.max(placed[i].textY, placed[i - 1].textY + gap);
   }
