@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
-import { EVERY_FIGURE, NASTY } from './every-figure.js';
-import { parseSvg } from './helpers.js';
+import { EVERY_FIGURE, NASTY, parseSvg } from './helpers.js';
 
 /** The drawn curves of a figure: data curves and overlays (reference lines are counted apart). */
 function curvePaths(doc: Document, name: string): Element[] {
