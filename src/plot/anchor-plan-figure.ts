@@ -1,8 +1,9 @@
-import { drawFooter, layoutFooter } from './footer.js';
-import { layoutHeader, startPage } from './header.js';
-import { makeScale } from './layout.js';
-import { FIGURE_TEXT, FIGURE_WIDTH_PX, FRAME_COLOUR, GRID_COLOUR, HALO, TEXT_COLOUR } from './styles.js';
-import { linearTicks, textWidthPx } from './ticks.js';
+import { finishPage } from './footer.js';
+import { startPage } from './header.js';
+import { axisTicks, makeScale } from './layout.js';
+import { drawAxisTitle, drawFrame, drawTickLabels } from './panel.js';
+import { FIGURE_TEXT, FIGURE_WIDTH_PX, GRID_COLOUR, HALO, TEXT_COLOUR } from './styles.js';
+import { textWidthPx } from './ticks.js';
 
 /** What the plan view needs (plain values in the user's units; no dependency on anchorage types). */
 export interface AnchorPlanInput {
@@ -25,6 +26,8 @@ export interface AnchorPlanInput {
 const GOVERNING = '#D55E00';
 const ANCHOR = '#0072B2';
 const MASS = '#111111';
+/** The plan's square plot, px. */
+const PLOT_PX = 400;
 
 /**
  * Plan view of an anchor pattern as SVG text: each anchor with its worst tension (circle area in
@@ -33,80 +36,47 @@ const MASS = '#111111';
  * as the other figures, all text escaped by the document's serializer.
  */
 export function anchorPlanSvg(input: AnchorPlanInput): string {
-  const widthPx = FIGURE_WIDTH_PX;
   const { tickPx, axisTitlePx, sidePx } = FIGURE_TEXT;
-  const header = layoutHeader(input.title, input.subtitle, widthPx);
+  const { page, bottom } = startPage(input.title, input.subtitle);
+  const { doc } = page;
 
   const xs = [...input.anchors.map((a) => a.x), input.cgPlan[0], input.centroid[0]];
   const ys = [...input.anchors.map((a) => a.y), input.cgPlan[1], input.centroid[1]];
   const [minX, maxX, minY, maxY] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
   const span = Math.max(maxX - minX, maxY - minY) || 1;
   const half = span / 2 + span * 0.3;
-  const midX = (minX + maxX) / 2;
-  const midY = (minY + maxY) / 2;
-  const plotSize = 400;
-  const plotLeft = (widthPx - plotSize) / 2;
-  const plotTop = header.bottom + 16;
-  const legendTop = plotTop + plotSize + tickPx + 8 + axisTitlePx + 16;
-  const footer = layoutFooter(input.notes, widthPx, legendTop + 20);
-  const doc = startPage(header, widthPx, Math.ceil(footer.bottom));
+  const xDomain = [(minX + maxX) / 2 - half, (minX + maxX) / 2 + half] as const;
+  const yDomain = [(minY + maxY) / 2 - half, (minY + maxY) / 2 + half] as const;
+  const plot = { left: (FIGURE_WIDTH_PX - PLOT_PX) / 2, top: bottom + 16, width: PLOT_PX, height: PLOT_PX };
+  const [plotRight, plotBottom] = [plot.left + PLOT_PX, plot.top + PLOT_PX];
+  const legendTop = plotBottom + tickPx + 8 + axisTitlePx + 16;
 
-  const px = makeScale('linear', [midX - half, midX + half], [plotLeft, plotLeft + plotSize]);
-  const py = makeScale('linear', [midY - half, midY + half], [plotTop + plotSize, plotTop]);
+  const px = makeScale('linear', xDomain, [plot.left, plotRight]);
+  const py = makeScale('linear', yDomain, [plotBottom, plot.top]);
   const panel = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': 0 });
-  const extent = (text: string) => textWidthPx(text, tickPx);
-  const xTicks = linearTicks(px.domain() as [number, number], (v) => px(v), extent, plotSize);
-  const yTicks = linearTicks(
-    py.domain() as [number, number],
-    (v) => py(v),
-    () => tickPx * 1.3,
-    plotSize,
-  );
+  const xTicks = axisTicks('linear', xDomain, PLOT_PX, 'x');
+  const yTicks = axisTicks('linear', yDomain, PLOT_PX, 'y');
   const grid = doc.element(panel, 'g', { class: 'grid', stroke: GRID_COLOUR, 'stroke-width': 0.6 });
   for (const v of xTicks.major)
-    doc.element(grid, 'line', { x1: px(v), x2: px(v), y1: plotTop, y2: plotTop + plotSize });
+    doc.element(grid, 'line', { x1: px(v), x2: px(v), y1: plot.top, y2: plotBottom });
   for (const v of yTicks.major)
-    doc.element(grid, 'line', { x1: plotLeft, x2: plotLeft + plotSize, y1: py(v), y2: py(v) });
-  doc.element(panel, 'rect', {
-    class: 'frame',
-    x: plotLeft,
-    y: plotTop,
-    width: plotSize,
-    height: plotSize,
-    fill: 'none',
-    stroke: FRAME_COLOUR,
-    'stroke-width': 0.8,
-  });
+    doc.element(grid, 'line', { x1: plot.left, x2: plotRight, y1: py(v), y2: py(v) });
+  drawFrame(doc, panel, plot);
   const labels = doc.element(panel, 'g', { class: 'tick-labels', fill: TEXT_COLOUR, 'font-size': tickPx });
-  const xLabels = doc.element(labels, 'g', { class: 'x-ticks', 'text-anchor': 'middle' });
-  for (const { value, text } of xTicks.labels)
-    doc.text(xLabels, text, { x: px(value), y: plotTop + plotSize + 7 + tickPx, 'data-value': value });
-  const yLabels = doc.element(labels, 'g', { class: 'y-ticks', 'text-anchor': 'end' });
-  for (const { value, text } of yTicks.labels)
-    doc.text(yLabels, text, { x: plotLeft - 6, y: py(value) + tickPx * 0.35, 'data-value': value });
-  doc.text(panel, `x (${input.lengthUnit})`, {
-    class: 'axis-title x-title',
-    x: plotLeft + plotSize / 2,
-    y: plotTop + plotSize + 7 + tickPx + 6 + axisTitlePx,
-    'text-anchor': 'middle',
-    'font-size': axisTitlePx,
-    fill: TEXT_COLOUR,
-  });
-  const yTitleX = plotLeft - 6 - Math.max(...yTicks.labels.map((l) => extent(l.text)), 20) - 10;
-  doc.text(panel, `y (${input.lengthUnit})`, {
-    class: 'axis-title y-title',
-    transform: `translate(${yTitleX}, ${plotTop + plotSize / 2}) rotate(-90)`,
-    'text-anchor': 'middle',
-    'font-size': axisTitlePx,
-    fill: TEXT_COLOUR,
-  });
+  drawTickLabels(doc, labels, 'x', xTicks, (v) => ({ x: px(v), y: plotBottom + 7 + tickPx }));
+  drawTickLabels(doc, labels, 'y', yTicks, (v) => ({ x: plot.left - 6, y: py(v) + tickPx * 0.35 }));
+  const xTitleY = plotBottom + 7 + tickPx + 6 + axisTitlePx;
+  drawAxisTitle(doc, panel, 'x', `x (${input.lengthUnit})`, [plot.left + PLOT_PX / 2, xTitleY]);
+  const yLabelWidth = Math.max(...yTicks.labels.map((l) => textWidthPx(l.text, tickPx)), 20);
+  const yTitleAt: [number, number] = [plot.left - 6 - yLabelWidth - 10, plot.top + PLOT_PX / 2];
+  drawAxisTitle(doc, panel, 'y', `y (${input.lengthUnit})`, yTitleAt);
 
   const marks = doc.element(panel, 'g', { class: 'plan' });
   // The governing direction: an arrow through the centre of mass, where the force acts.
   const [gx, gy] = [px(input.cgPlan[0]), py(input.cgPlan[1])];
   const rad = (input.directionDeg * Math.PI) / 180;
   const [ux, uy] = [Math.cos(rad), -Math.sin(rad)];
-  const length = plotSize * 0.3;
+  const length = PLOT_PX * 0.3;
   const [tipX, tipY] = [gx + ux * length, gy + uy * length];
   const arrow = doc.element(marks, 'g', { class: 'direction', 'data-direction-deg': input.directionDeg });
   doc.element(arrow, 'path', {
@@ -122,10 +92,10 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   doc.element(arrow, 'path', { d: `M${tipX},${tipY}L${h1x},${h1y}L${h2x},${h2y}Z`, fill: GOVERNING });
   const arrowText = `force direction ${input.directionDeg.toFixed(1)}°`;
   const arrowTextWidth = textWidthPx(arrowText, 9.5);
-  const textX = Math.min(plotLeft + plotSize - 4 - (ux >= 0 ? arrowTextWidth : 0), tipX + (ux >= 0 ? 6 : -6));
+  const textX = Math.min(plotRight - 4 - (ux >= 0 ? arrowTextWidth : 0), tipX + (ux >= 0 ? 6 : -6));
   doc.text(arrow, arrowText, {
-    x: Math.max(plotLeft + 4 + (ux < 0 ? arrowTextWidth : 0), textX),
-    y: Math.min(plotTop + plotSize - 6, Math.max(plotTop + 12, tipY + (uy <= 0 ? -6 : 14))),
+    x: Math.max(plot.left + 4 + (ux < 0 ? arrowTextWidth : 0), textX),
+    y: Math.min(plotBottom - 6, Math.max(plot.top + 12, tipY + (uy <= 0 ? -6 : 14))),
     'text-anchor': ux >= 0 ? 'start' : 'end',
     'font-size': 9.5,
     fill: GOVERNING,
@@ -152,10 +122,10 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
       'stroke-width': 1,
     });
     // Centred above the anchors of the upper half, below those of the lower half, kept in the frame.
-    const label = `${i + 1}: T = ${format(p.tension)} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
+    const label = `${i + 1}: T = ${Number(p.tension.toPrecision(4))} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
     const halfWidth = textWidthPx(label, 9.5) / 2;
     doc.text(anchor, label, {
-      x: Math.min(plotLeft + plotSize - halfWidth - 3, Math.max(plotLeft + halfWidth + 3, cx)),
+      x: Math.min(plotRight - halfWidth - 3, Math.max(plot.left + halfWidth + 3, cx)),
       y: cy + (p.y >= input.centroid[1] ? -r - 4 : r + 12),
       'text-anchor': 'middle',
       'font-size': 9.5,
@@ -182,8 +152,7 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   item((x) => doc.element(legend, 'path', massMark(x, ly, 6)), 'centre of mass');
   item((x) => doc.element(legend, 'path', centroidMark(x, ly)), 'anchor centroid');
 
-  drawFooter(doc, footer);
-  return doc.serialize();
+  return finishPage(page, input.notes, legendTop + 20);
 }
 
 /** The centre of mass: a plus sign `size` px from its centre to each end. */
@@ -193,13 +162,6 @@ function massMark(x: number, y: number, size: number) {
 
 /** The anchors' centroid: a small grey cross. */
 function centroidMark(x: number, y: number) {
-  return {
-    d: `M${x - 4},${y - 4}L${x + 4},${y + 4}M${x - 4},${y + 4}L${x + 4},${y - 4}`,
-    stroke: '#555555',
-    'stroke-width': 1.2,
-  };
-}
-
-function format(value: number): string {
-  return Number(value.toPrecision(4)).toString();
+  const d = `M${x - 4},${y - 4}L${x + 4},${y + 4}M${x - 4},${y + 4}L${x + 4},${y - 4}`;
+  return { d, stroke: '#555555', 'stroke-width': 1.2 };
 }

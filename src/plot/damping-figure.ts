@@ -1,8 +1,8 @@
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import type { DampingComparison } from '../spectrum/damping.js';
+import type { DampingComparison, DampingCurveComparison } from '../spectrum/damping.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
 import { renderFigure } from './figure.js';
 import type { PanelContext, PanelSpec, Series } from './panel.js';
+import { inG, PERIOD_AXIS } from './spectrum-figure.js';
 import { seriesStyle, TEXT_COLOUR } from './styles.js';
 import { methodLine, percentLabel, processingLines, recordLine, zeroPeriodNotes } from './text.js';
 
@@ -32,6 +32,9 @@ const referenceStyle = (kind: ReferenceKind, color = '#444444') => ({
   widthPx: 0.9,
 });
 
+/** A published ratio for one damping ratio, drawn as a horizontal line. */
+type Reference = { kind: ReferenceKind; damping: number; value: number };
+
 /**
  * The record's PSA at each damping ratio (top) and its ratio to the reference damping's PSA period
  * by period (bottom), with the published ratios drawn as labelled horizontal lines: Eurocode 8
@@ -42,12 +45,11 @@ export function dampingFigure(input: DampingFigureInput): string {
   const { comparison, record } = input;
   const periods = comparison.periodsS;
   const positive = Array.from(periods).filter((t) => t > 0);
-  const tLow = Math.min(...positive);
-  const tHigh = Math.max(...positive);
+  const periodRange = [Math.min(...positive), Math.max(...positive)];
+  const reference = percentLabel(comparison.referenceDamping);
   const colourOf = (damping: number) =>
     seriesStyle(comparison.curves.findIndex((c) => c.damping === damping)).color;
-  const others = comparison.curves.filter((c) => Math.abs(c.damping - comparison.referenceDamping) > 1e-12);
-  const curveSeries = (y: (curve: (typeof comparison.curves)[number]) => ArrayLike<number>, legend = true) =>
+  const curveSeries = (y: (curve: DampingCurveComparison) => ArrayLike<number>, legend: boolean) =>
     comparison.curves.map(
       (curve, i): Series => ({
         label: `ζ = ${percentLabel(curve.damping)}`,
@@ -57,22 +59,21 @@ export function dampingFigure(input: DampingFigureInput): string {
         legend,
       }),
     );
-  const psaSeries = curveSeries((curve) => Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2));
   const ratioSeries = curveSeries((curve) => curve.ratio, false);
-  const references: { kind: ReferenceKind; damping: number; value: number }[] = [];
-  for (const curve of others) {
-    const nh = curve.published.newmarkHall;
-    references.push({ kind: 'ec8', damping: curve.damping, value: curve.published.ec8Eta });
+  const references: Reference[] = [];
+  const others = comparison.curves.filter((c) => Math.abs(c.damping - comparison.referenceDamping) > 1e-12);
+  for (const { damping, published } of others) {
+    references.push({ kind: 'ec8', damping, value: published.ec8Eta });
     for (const kind of ['acceleration', 'velocity', 'displacement'] as const) {
-      const value = nh[kind];
-      if (value !== null) references.push({ kind, damping: curve.damping, value });
+      const value = published.newmarkHall[kind];
+      if (value !== null) references.push({ kind, damping, value });
     }
   }
   // Each published line in the colour of its damping ratio; the legend shows the dash of each source.
   const referenceSeries = references.map(
     (r): Series => ({
       label: REFERENCES[r.kind].legend,
-      x: [tLow, tHigh],
+      x: periodRange,
       y: [r.value, r.value],
       style: referenceStyle(r.kind, colourOf(r.damping)),
       legend: false,
@@ -90,56 +91,45 @@ export function dampingFigure(input: DampingFigureInput): string {
         kind: 'legend-only',
       }),
     );
-  let low = 1;
-  let high = 1;
-  for (const s of [...ratioSeries, ...referenceSeries]) {
-    for (let i = 0; i < s.x.length; i++) {
-      if (s.x[i] > 0 && Number.isFinite(s.y[i])) {
-        low = Math.min(low, s.y[i]);
-        high = Math.max(high, s.y[i]);
-      }
-    }
-  }
+  const ratios = [...ratioSeries, ...referenceSeries].flatMap((s) =>
+    Array.from(s.y).filter((v, i) => s.x[i] > 0 && Number.isFinite(v)),
+  );
+  const low = ratios.reduce((m, v) => Math.min(m, v), 1);
+  const high = ratios.reduce((m, v) => Math.max(m, v), 1);
   const pad = 0.06 * (high - low || 1);
-  const ratioDomain: [number, number] = [Math.max(0, low - pad), high + pad];
+  const psaTitle = `PSA(ζ) / PSA(${reference})`;
   const panels: PanelSpec[] = [
     {
       heightPx: 250,
-      x: { title: 'Period T (s)' },
+      x: PERIOD_AXIS,
       y: { title: 'PSA (g)' },
-      series: psaSeries,
+      series: curveSeries((curve) => inG(curve.psaMS2), true),
       xLabels: false,
     },
     {
       heightPx: 230,
       gapAbovePx: 16,
-      x: { title: 'Period T (s)' },
-      y: {
-        title: `PSA(ζ) / PSA(${percentLabel(comparison.referenceDamping)})`,
-        scale: 'linear',
-        domain: ratioDomain,
-      },
+      x: PERIOD_AXIS,
+      y: { title: psaTitle, scale: 'linear', domain: [Math.max(0, low - pad), high + pad] },
       series: [...referenceSeries, ...ratioSeries, ...legendSamples],
       overlay: (context) => labelReferences(context, references, colourOf),
     },
   ];
-  const subtitle = [
-    recordLine('Record', record),
-    ...processingLines(record.processing),
-    methodLine(input.methodDescription, comparison.curves),
-  ];
-  const notes = [
-    `Bottom: the record's PSA at each damping ratio divided by its PSA at ${percentLabel(comparison.referenceDamping)}, period by period. Thin horizontal lines, in the colour of their damping ratio and dashed by source: the published ratios for that damping, labelled at the right.`,
-    'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
-    ...zeroPeriodNotes(periods, ' (there every ratio is 1)'),
-  ];
   return renderFigure({
     title: 'Damping comparison: PSA and its ratio to 5% damping',
-    subtitle,
+    subtitle: [
+      recordLine('Record', record),
+      ...processingLines(record.processing),
+      methodLine(input.methodDescription, comparison.curves),
+    ],
     panels,
     legendTitle: 'Damping:',
     rightMarginPx: 104,
-    notes,
+    notes: [
+      `Bottom: the record's PSA at each damping ratio divided by its PSA at ${reference}, period by period. Thin horizontal lines, in the colour of their damping ratio and dashed by source: the published ratios for that damping, labelled at the right.`,
+      'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
+      ...zeroPeriodNotes(periods, ' (there every ratio is 1)'),
+    ],
   });
 }
 
@@ -148,19 +138,16 @@ const LABEL_PX = 8.5;
 /** Labels at the right end of the reference lines, pushed apart vertically so none overlap. */
 function labelReferences(
   context: PanelContext,
-  references: readonly { kind: ReferenceKind; damping: number; value: number }[],
+  references: readonly Reference[],
   colourOf: (damping: number) => string,
 ): void {
   const { doc, group, y, plot } = context;
-  const items = references
-    .map((r) => ({
-      ...r,
-      at: y(r.value),
-      text: `${percentLabel(r.damping)}: ${REFERENCES[r.kind].label} ${r.value.toFixed(2)}`,
-    }))
+  const text = (r: Reference) =>
+    `${percentLabel(r.damping)}: ${REFERENCES[r.kind].label} ${r.value.toFixed(2)}`;
+  const placed = references
+    .map((r) => ({ ...r, at: y(r.value), textY: y(r.value), text: text(r) }))
     .sort((a, b) => a.at - b.at);
   const gap = LABEL_PX + 1.5;
-  const placed = items.map((item) => ({ ...item, textY: item.at }));
   for (let i = 1; i < placed.length; i++) {
     placed[i].textY = Math.max(placed[i].textY, placed[i - 1].textY + gap);
   }

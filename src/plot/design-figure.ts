@@ -1,7 +1,7 @@
 import type { DesignSpectrum } from '../spectrum/design.js';
 import { lineChart } from './line-chart.js';
 import { overlayStyle } from './styles.js';
-import { formatValue, percentLabel, zeroPeriodNote } from './text.js';
+import { formatValue, percentLabel, zeroPeriodNotes } from './text.js';
 
 const CODE_LABELS: Readonly<Record<DesignSpectrum['code'], string>> = {
   'asce7-16': 'ASCE/SEI 7-16 design spectrum',
@@ -23,12 +23,10 @@ export interface DesignFigureInput {
  */
 export function designFigure(input: DesignFigureInput): string {
   const { spectrum } = input;
-  const notes: string[] = [];
-  const zero = Array.from(input.periodsS).indexOf(0);
-  if (zero >= 0) notes.push(zeroPeriodNote(` (there PSA = ${formatValue(input.psaG[zero])} g)`));
-  notes.push(
+  const notes = [
+    ...zeroPeriodNotes(input.periodsS, (zero) => ` (there PSA = ${formatValue(input.psaG[zero])} g)`),
     'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',
-  );
+  ];
   const drawn = densified(input);
   const damping = spectrum.damping === undefined ? 'not stated' : percentLabel(spectrum.damping);
   return lineChart({

@@ -1,7 +1,7 @@
-import { drawFooter, layoutFooter } from './footer.js';
-import { layoutHeader, startPage } from './header.js';
+import { finishPage } from './footer.js';
+import { startPage } from './header.js';
 import { layoutPanel } from './layout.js';
-import { drawLegend, legendLayout } from './legend.js';
+import { drawLegend } from './legend.js';
 import { drawPanel, type PanelSpec } from './panel.js';
 import { FIGURE_TEXT, FIGURE_WIDTH_PX } from './styles.js';
 
@@ -24,32 +24,18 @@ export interface FigureSpec {
  * standing caution as the footer. Returns standalone SVG text.
  */
 export function renderFigure(spec: FigureSpec): string {
-  const widthPx = FIGURE_WIDTH_PX;
   const layouts = spec.panels.map(layoutPanel);
   const yLabelWidth = Math.max(...layouts.map((l) => l.yLabelWidthPx), 20);
-  const plotLeft = sidePx + axisTitlePx + 8 + yLabelWidth + 7;
-  const plotWidth = widthPx - plotLeft - (spec.rightMarginPx ?? RIGHT_MARGIN_PX);
-  const header = layoutHeader(spec.title, spec.subtitle, widthPx);
-  const legendEntries = layouts.flatMap((l) => l.series.filter((s) => s.series.legend !== false));
-  const legendRows = legendLayout(legendEntries, spec.legendTitle, plotWidth);
-
-  let y = header.bottom + 10;
-  const panelTops: number[] = [];
-  for (const layout of layouts) {
-    y += layout.spec.gapAbovePx ?? 0;
-    panelTops.push(y);
-    y += layout.spec.heightPx + (layout.spec.xLabels === false ? 10 : tickPx + 8 + axisTitlePx + 12);
-  }
-  const legendTop = y;
-  if (legendRows.length > 0) y += legendRows.length * 16 + 6;
-  const footer = layoutFooter(spec.notes, widthPx, y);
-
-  const doc = startPage(header, widthPx, Math.ceil(footer.bottom));
+  const left = sidePx + axisTitlePx + 8 + yLabelWidth + 7;
+  const width = FIGURE_WIDTH_PX - left - (spec.rightMarginPx ?? RIGHT_MARGIN_PX);
+  const { page, bottom } = startPage(spec.title, spec.subtitle);
+  let y = bottom + 10;
   layouts.forEach((layout, i) => {
-    const plot = { left: plotLeft, top: panelTops[i], width: plotWidth, height: layout.spec.heightPx };
-    drawPanel(doc, layout, plot, i);
+    y += layout.spec.gapAbovePx ?? 0;
+    drawPanel(page.doc, layout, { left, top: y, width, height: layout.spec.heightPx }, i);
+    y += layout.spec.heightPx + (layout.spec.xLabels === false ? 10 : tickPx + 8 + axisTitlePx + 12);
   });
-  drawLegend(doc, legendRows, plotLeft, legendTop);
-  drawFooter(doc, footer);
-  return doc.serialize();
+  const legendEntries = layouts.flatMap((l) => l.series.filter((s) => s.series.legend !== false));
+  y = drawLegend(page.doc, legendEntries, spec.legendTitle, { left, top: y, widthPx: width });
+  return finishPage(page, spec.notes, y);
 }

@@ -2,7 +2,8 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext, Series } from './panel.js';
-import { DAMPING_DASHES, HALO, TEXT_COLOUR } from './styles.js';
+import { inG, PERIOD_AXIS, PSA_AXIS } from './spectrum-figure.js';
+import { DAMPING_DASHES, MARK_LABEL, MARK_LINE, type SeriesStyle } from './styles.js';
 import {
   formatValue,
   methodLine,
@@ -31,32 +32,17 @@ export interface FloorFigureInput {
  */
 export function floorFigure(input: FloorFigureInput): string {
   const { ground, floor } = input;
-  const many = floor.curves.length > 1;
-  const broadened = input.unbroadened !== undefined && input.broadening != null;
-  const suffix = (damping: number) => (many ? `, ζ = ${percentLabel(damping)}` : '');
+  const unbroadened = input.broadening != null ? input.unbroadened : undefined;
   const series: Series[] = [];
   floor.curves.forEach((curve, d) => {
     const dash = DAMPING_DASHES[d % DAMPING_DASHES.length];
-    series.push({
-      label: `${broadened ? 'floor, broadened' : 'floor'}${suffix(curve.damping)}`,
-      x: floor.periodsS,
-      y: Array.from(curve.psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
-      style: { color: '#D55E00', dash, widthPx: 2 },
-    });
-    if (broadened && input.unbroadened !== undefined) {
-      series.push({
-        label: `floor, not broadened${suffix(curve.damping)}`,
-        x: input.unbroadened.periodsS,
-        y: Array.from(input.unbroadened.curves[d].psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
-        style: { color: '#A8558A', dash: d === 0 ? '3 2' : dash, widthPx: 1.2 },
-      });
-    }
-    series.push({
-      label: `ground${suffix(curve.damping)}`,
-      x: ground.periodsS,
-      y: Array.from(ground.curves[d].psaMS2, (v) => v / STANDARD_GRAVITY_MS2),
-      style: { color: '#0072B2', dash, widthPx: 1.4 },
-    });
+    const suffix = floor.curves.length > 1 ? `, ζ = ${percentLabel(curve.damping)}` : '';
+    const add = (label: string, spectrum: Spectrum, style: SeriesStyle) =>
+      series.push({ label: label + suffix, x: spectrum.periodsS, y: inG(spectrum.curves[d].psaMS2), style });
+    add(unbroadened ? 'floor, broadened' : 'floor', floor, { color: '#D55E00', dash, widthPx: 2 });
+    const thin = { color: '#A8558A', dash: d === 0 ? '3 2' : dash, widthPx: 1.2 };
+    if (unbroadened) add('floor, not broadened', unbroadened, thin);
+    add('ground', ground, { color: '#0072B2', dash, widthPx: 1.4 });
   });
   const b = input.building;
   const r = ground.record;
@@ -68,7 +54,7 @@ export function floorFigure(input: FloorFigureInput): string {
   ];
   const notes = [
     "Floor absolute acceleration a_g + Γφ·q'' of the building's fundamental mode; higher modes, soil–structure interaction, nonlinear building response and the equipment's feedback on the floor are not represented.",
-    broadened
+    unbroadened
       ? `Peaks broadened: the value at T is the largest over [T(1−b), T/(1−b)], b = ${input.broadening} (US NRC Regulatory Guide 1.122, from memory).`
       : 'Peaks not broadened.',
     ...zeroPeriodNotes(
@@ -79,8 +65,8 @@ export function floorFigure(input: FloorFigureInput): string {
   return lineChart({
     title: 'Floor response spectrum against the ground spectrum, PSA',
     subtitle,
-    x: { title: 'Period T (s)' },
-    y: { title: 'Pseudo-acceleration PSA (g)' },
+    x: PERIOD_AXIS,
+    y: PSA_AXIS,
     series,
     notes,
     underlay: (context) => markBuildingPeriod(context, b.periodS),
@@ -92,20 +78,7 @@ function markBuildingPeriod(context: PanelContext, periodS: number): void {
   if (!(periodS >= xDomain[0] && periodS <= xDomain[1])) return;
   const px = x(periodS);
   const mark = doc.element(group, 'g', { class: 'building-period', 'data-period-s': periodS });
-  doc.element(mark, 'line', {
-    x1: px,
-    x2: px,
-    y1: plot.top,
-    y2: plot.top + plot.height,
-    stroke: '#777777',
-    'stroke-width': 0.9,
-    'stroke-dasharray': '1 3',
-  });
-  doc.text(mark, `T_b = ${periodS} s`, {
-    x: px + 4,
-    y: plot.top + 12,
-    'font-size': 9,
-    fill: TEXT_COLOUR,
-    ...HALO,
-  });
+  const ends = { x1: px, x2: px, y1: plot.top, y2: plot.top + plot.height };
+  doc.element(mark, 'line', { ...ends, ...MARK_LINE, 'stroke-dasharray': '1 3' });
+  doc.text(mark, `T_b = ${periodS} s`, { x: px + 4, y: plot.top + 12, ...MARK_LABEL });
 }

@@ -1,56 +1,31 @@
 import { CAUTION } from '../base/caution.js';
-import { FIGURE_TEXT, TEXT_COLOUR } from './styles.js';
-import type { SvgDocument } from './svg.js';
+import type { Page } from './header.js';
+import { FIGURE_TEXT, FIGURE_WIDTH_PX, TEXT_COLOUR } from './styles.js';
 import { wrapText } from './text.js';
 
 const { footerPx, notePx, sidePx } = FIGURE_TEXT;
 
-/** Where the foot of a figure goes: the notes' lines from `top`, then the caution under its rule. */
-export interface FooterLayout {
-  noteLines: string[];
-  top: number;
-  cautionTop: number;
-  /** The bottom of the page, px. */
-  bottom: number;
-  widthPx: number;
-}
-
-/** Lay out the foot of a figure `widthPx` wide from `top`: small-print notes, then the caution. */
-export function layoutFooter(
-  notes: readonly string[] | undefined,
-  widthPx: number,
-  top: number,
-): FooterLayout {
-  const textWidth = widthPx - 2 * sidePx;
-  const noteLines = (notes ?? []).flatMap((n) => wrapText(n, textWidth, notePx));
-  const cautionTop = top + noteLines.length * (notePx + 3) + 6;
-  const cautionLines = wrapText(CAUTION, textWidth, footerPx).length;
-  return {
-    noteLines,
-    top,
-    cautionTop,
-    bottom: cautionTop + (6 + cautionLines * (footerPx + 3) + 6),
-    widthPx,
-  };
-}
-
-/** Draw the notes and, under a rule, the standing caution in small print, as every figure ends. */
-export function drawFooter(doc: SvgDocument, layout: FooterLayout): void {
-  const { noteLines, top, cautionTop, widthPx } = layout;
-  const notes = doc.element(doc.root, 'g', { class: 'notes', fill: TEXT_COLOUR, 'font-size': notePx });
+/**
+ * End a page as every figure ends: the notes in small print from `top`, then the standing caution
+ * under a rule; the page is made as tall as what was drawn. Returns the standalone SVG text.
+ */
+export function finishPage({ doc, background }: Page, notes: readonly string[] = [], top: number): string {
+  const textWidth = FIGURE_WIDTH_PX - 2 * sidePx;
+  const noteLines = notes.flatMap((n) => wrapText(n, textWidth, notePx));
+  const group = doc.element(doc.root, 'g', { class: 'notes', fill: TEXT_COLOUR, 'font-size': notePx });
   noteLines.forEach((text, i) => {
-    doc.text(notes, text, { x: sidePx, y: top + (i + 1) * (notePx + 3) - 2 });
+    doc.text(group, text, { x: sidePx, y: top + (i + 1) * (notePx + 3) - 2 });
   });
+  const cautionTop = top + noteLines.length * (notePx + 3) + 6;
   const footer = doc.element(doc.root, 'g', { class: 'caution', fill: '#444444', 'font-size': footerPx });
-  doc.element(footer, 'line', {
-    x1: sidePx,
-    x2: widthPx - sidePx,
-    y1: cautionTop,
-    y2: cautionTop,
-    stroke: '#999999',
-    'stroke-width': 0.6,
-  });
-  wrapText(CAUTION, widthPx - 2 * sidePx, footerPx).forEach((text, i) => {
+  const rule = { x1: sidePx, x2: FIGURE_WIDTH_PX - sidePx, y1: cautionTop, y2: cautionTop };
+  doc.element(footer, 'line', { ...rule, stroke: '#999999', 'stroke-width': 0.6 });
+  const cautionLines = wrapText(CAUTION, textWidth, footerPx);
+  cautionLines.forEach((text, i) => {
     doc.text(footer, text, { x: sidePx, y: cautionTop + 4 + (i + 1) * (footerPx + 3) - 2 });
   });
+  const heightPx = Math.ceil(cautionTop + (6 + cautionLines.length * (footerPx + 3) + 6));
+  doc.set(doc.root, { height: heightPx, viewBox: `0 0 ${FIGURE_WIDTH_PX} ${heightPx}` });
+  doc.set(background, { height: heightPx });
+  return doc.serialize();
 }

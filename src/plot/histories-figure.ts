@@ -42,45 +42,27 @@ export function historiesFigure(input: HistoriesFigureInput, options: HistoriesF
   const timesS = Float64Array.from({ length: n }, (_, i) => i * input.dtS);
   const durationS = n > 1 ? timesS[n - 1] : input.dtS;
   const scaled = (values: ArrayLike<number>, factor: number) => Float64Array.from(values, (v) => v * factor);
+  const perG = 1 / STANDARD_GRAVITY_MS2;
   const rows = [
-    {
-      title: 'Acceleration (g)',
-      unit: 'g',
-      values: scaled(input.accelMS2, 1 / STANDARD_GRAVITY_MS2),
-      color: '#0072B2',
-    },
-    {
-      title: `Velocity (${unit}/s)`,
-      unit: `${unit}/s`,
-      values: scaled(input.velocityMS, perLength),
-      color: '#D55E00',
-    },
-    {
-      title: `Displacement (${unit})`,
-      unit,
-      values: scaled(input.displacementM, perLength),
-      color: '#009E73',
-    },
+    { name: 'Acceleration', unit: 'g', values: scaled(input.accelMS2, perG), color: '#0072B2' },
+    { name: 'Velocity', unit: `${unit}/s`, values: scaled(input.velocityMS, perLength), color: '#D55E00' },
+    { name: 'Displacement', unit, values: scaled(input.displacementM, perLength), color: '#009E73' },
   ];
-  const panels: PanelSpec[] = rows.map((row, i) => ({
-    heightPx: 126,
-    gapAbovePx: 14,
-    x: { title: 'Time t (s)', scale: 'linear', domain: [0, durationS] },
-    y: { title: row.title, scale: 'linear', symmetric: true },
-    series: [
-      {
-        label: row.title,
-        x: timesS,
-        y: row.values,
-        style: { color: row.color, dash: 'none', widthPx: 1 },
-        legend: false,
-        kind: 'history',
-        decimate: true,
-      },
-    ],
-    xLabels: i === rows.length - 1,
-    overlay: (context) => markPeak(context, timesS, row.values, row.unit),
-  }));
+  const panels = rows.map((row, i): PanelSpec => {
+    const title = `${row.name} (${row.unit})`;
+    const style = { color: row.color, dash: 'none', widthPx: 1 };
+    return {
+      heightPx: 126,
+      gapAbovePx: 14,
+      x: { title: 'Time t (s)', scale: 'linear', domain: [0, durationS] },
+      y: { title, scale: 'linear', symmetric: true },
+      series: [
+        { label: title, x: timesS, y: row.values, style, legend: false, kind: 'history', decimate: true },
+      ],
+      xLabels: i === rows.length - 1,
+      overlay: (context) => markPeak(context, timesS, row.values, row.unit),
+    };
+  });
   const subtitle = [
     `${recordNameLine(input.name, input.source)}; ${n} samples at Δt = ${input.dtS} s`,
     ...processingLines(input.processing),

@@ -1,6 +1,6 @@
 import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
-import { HALO, TEXT_COLOUR } from './styles.js';
+import { MARK_LABEL, MARK_LINE } from './styles.js';
 import { processingLines, recordNameLine } from './text.js';
 
 export interface HusidFigureInput {
@@ -66,18 +66,9 @@ function markLevels(context: PanelContext, levels: readonly [number, number][]):
     const px = x(timeS);
     const py = y(level);
     const mark = doc.element(marks, 'g', { class: 'level', 'data-level': level, 'data-time': timeS });
-    doc.element(mark, 'path', {
-      d: `M${plot.left},${py}H${px}V${plot.top + plot.height}`,
-      stroke: '#777777',
-      'stroke-width': 0.9,
-      'stroke-dasharray': '4 3',
-    });
-    doc.text(mark, `${level * 100}% at t = ${timeS.toFixed(2)} s`, {
-      x: px + 5,
-      y: py + (level > 0.5 ? 12 : -5),
-      'font-size': 9,
-      fill: TEXT_COLOUR,
-      ...HALO,
-    });
+    const d = `M${plot.left},${py}H${px}V${plot.top + plot.height}`;
+    doc.element(mark, 'path', { d, ...MARK_LINE, 'stroke-dasharray': '4 3' });
+    const label = `${level * 100}% at t = ${timeS.toFixed(2)} s`;
+    doc.text(mark, label, { x: px + 5, y: py + (level > 0.5 ? 12 : -5), ...MARK_LABEL });
   }
 }

@@ -13,6 +13,7 @@ export interface PanelLayout {
   yScale: AxisScale;
   xDomain: readonly [number, number];
   yDomain: readonly [number, number];
+  yTicks: AxisTicks;
   yLabelWidthPx: number;
 }
 
@@ -26,9 +27,9 @@ export function layoutPanel(spec: PanelSpec): PanelLayout {
   const series = spec.series.map((s, i) => ({ series: s, style: { ...seriesStyle(i), ...s.style } }));
   const xDomain = spec.x.domain ?? dataDomain(spec.series, 'x', xScale, yScale);
   const yDomain = spec.y.domain ?? yAxisDomain(dataDomain(spec.series, 'y', xScale, yScale), yScale, spec.y);
-  const ticks = axisTicks(yScale, yDomain, spec.heightPx, 'y');
-  const yLabelWidthPx = Math.max(0, ...ticks.labels.map((l) => textWidthPx(l.text, tickPx)));
-  return { spec, series, xScale, yScale, xDomain, yDomain, yLabelWidthPx };
+  const yTicks = axisTicks(yScale, yDomain, spec.heightPx, 'y');
+  const yLabelWidthPx = Math.max(0, ...yTicks.labels.map((l) => textWidthPx(l.text, tickPx)));
+  return { spec, series, xScale, yScale, xDomain, yDomain, yTicks, yLabelWidthPx };
 }
 
 /** A y axis over the data's extent: widened to 1-2-5 values (log), made nice from 0 or about 0 (linear). */
@@ -86,7 +87,5 @@ export function axisTicks(
   const range: [number, number] = axis === 'x' ? [0, lengthPx] : [lengthPx, 0];
   const scale = makeScale(kind, domain, range);
   const extent = (text: string) => (axis === 'x' ? textWidthPx(text, tickPx) : tickPx * 1.3);
-  return kind === 'log'
-    ? logTicks(domain, (v) => scale(v), extent)
-    : linearTicks(domain, (v) => scale(v), extent, lengthPx);
+  return kind === 'log' ? logTicks(domain, scale, extent) : linearTicks(domain, scale, extent, lengthPx);
 }

@@ -1,22 +1,11 @@
-import { renderFigure } from './figure.js';
-import type { AxisScale, PanelContext, Series } from './panel.js';
+import { type FigureSpec, renderFigure } from './figure.js';
+import type { AxisScale, PanelSpec } from './panel.js';
 
-export interface LineChartOptions {
-  x: { title: string; scale?: AxisScale; domain?: readonly [number, number] };
-  y: { title: string; scale?: AxisScale; domain?: readonly [number, number] };
-  series: readonly Series[];
+export interface LineChartOptions extends Omit<FigureSpec, 'panels'>, Omit<PanelSpec, 'heightPx'> {
   /** Scale of both axes unless an axis names its own; default 'log'. */
   axes?: AxisScale;
-  title: string;
-  subtitle?: readonly string[];
-  notes?: readonly string[];
-  legendTitle?: string;
   /** Height of the plotting area, px; default 360. */
   heightPx?: number;
-  /** Drawn under the curves, over the grid. */
-  underlay?: (context: PanelContext) => void;
-  /** Drawn over the curves. */
-  overlay?: (context: PanelContext) => void;
 }
 
 /**
@@ -29,20 +18,8 @@ export interface LineChartOptions {
  */
 export function lineChart(options: LineChartOptions): string {
   const axes = options.axes ?? 'log';
-  return renderFigure({
-    title: options.title,
-    subtitle: options.subtitle,
-    notes: options.notes,
-    legendTitle: options.legendTitle,
-    panels: [
-      {
-        heightPx: options.heightPx ?? 360,
-        x: { ...options.x, scale: options.x.scale ?? axes },
-        y: { ...options.y, scale: options.y.scale ?? axes },
-        series: options.series,
-        underlay: options.underlay,
-        overlay: options.overlay,
-      },
-    ],
-  });
+  const x = { ...options.x, scale: options.x.scale ?? axes };
+  const y = { ...options.y, scale: options.y.scale ?? axes };
+  // The options are the figure's and its one panel's at once.
+  return renderFigure({ ...options, panels: [{ ...options, heightPx: options.heightPx ?? 360, x, y }] });
 }

@@ -9,6 +9,7 @@ import {
   TEXT_COLOUR,
 } from './styles.js';
 import type { SvgDocument } from './svg.js';
+import type { AxisTicks } from './ticks.js';
 
 const { tickPx, axisTitlePx, sidePx } = FIGURE_TEXT;
 
@@ -43,18 +44,22 @@ export interface Series {
   decimate?: boolean;
 }
 
-/** What a panel's decorations draw with. */
-export interface PanelContext {
+/** Where a plot's frame stands on the page, px. */
+export interface PlotBox {
+  left: number;
+  top: number;
+  width: number;
+  height: number;
+}
+
+/** What a panel's decorations draw with: its spec, its settled axes, its scales and its frame. */
+export type PanelContext = Pick<PanelLayout, 'spec' | 'xScale' | 'yScale' | 'xDomain' | 'yDomain'> & {
   doc: SvgDocument;
   group: SVGElement;
   x: (value: number) => number;
   y: (value: number) => number;
-  xDomain: readonly [number, number];
-  yDomain: readonly [number, number];
-  xScale: AxisScale;
-  yScale: AxisScale;
-  plot: { left: number; top: number; width: number; height: number };
-}
+  plot: PlotBox;
+};
 
 export interface PanelSpec {
   heightPx: number;
@@ -72,45 +77,29 @@ export interface PanelSpec {
 }
 
 /** Draw one panel in its frame: grid, underlay, curves, frame, ticks, axis titles, overlay. */
-export function drawPanel(
-  doc: SvgDocument,
-  layout: PanelLayout,
-  plot: { left: number; top: number; width: number; height: number },
-  index: number,
-): void {
-  const { spec } = layout;
-  const x = makeScale(layout.xScale, layout.xDomain, [plot.left, plot.left + plot.width]);
-  const y = makeScale(layout.yScale, layout.yDomain, [plot.top + plot.height, plot.top]);
+export function drawPanel(doc: SvgDocument, layout: PanelLayout, plot: PlotBox, index: number): void {
+  const { spec, xScale, yScale, xDomain, yDomain, yTicks } = layout;
+  const x = makeScale(xScale, xDomain, [plot.left, plot.left + plot.width]);
+  const y = makeScale(yScale, yDomain, [plot.top + plot.height, plot.top]);
   const group = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': index });
-  const context: PanelContext = {
-    doc,
-    group,
-    x: (v) => x(v),
-    y: (v) => y(v),
-    xDomain: layout.xDomain,
-    yDomain: layout.yDomain,
-    xScale: layout.xScale,
-    yScale: layout.yScale,
-    plot,
-  };
-  const xTicks = axisTicks(layout.xScale, layout.xDomain, plot.width, 'x');
-  const yTicks = axisTicks(layout.yScale, layout.yDomain, plot.height, 'y');
+  const context: PanelContext = { doc, group, spec, x, y, xDomain, yDomain, xScale, yScale, plot };
+  const xTicks = axisTicks(xScale, xDomain, plot.width, 'x');
   const bottom = plot.top + plot.height;
   const right = plot.left + plot.width;
+  const vertical = (parent: Element, v: number, y1: number, y2: number, stroke?: string) =>
+    doc.element(parent, 'line', { x1: x(v), x2: x(v), y1, y2, stroke });
+  const horizontal = (parent: Element, v: number, x1: number, x2: number, stroke?: string) =>
+    doc.element(parent, 'line', { x1, x2, y1: y(v), y2: y(v), stroke });
 
   const grid = doc.element(group, 'g', { class: 'grid', fill: 'none' });
-  for (const v of xTicks.minor)
-    doc.element(grid, 'line', { x1: x(v), x2: x(v), y1: plot.top, y2: bottom, stroke: MINOR_GRID_COLOUR });
-  for (const v of yTicks.minor)
-    doc.element(grid, 'line', { x1: plot.left, x2: right, y1: y(v), y2: y(v), stroke: MINOR_GRID_COLOUR });
-  for (const v of xTicks.major)
-    doc.element(grid, 'line', { x1: x(v), x2: x(v), y1: plot.top, y2: bottom, stroke: GRID_COLOUR });
-  for (const v of yTicks.major)
-    doc.element(grid, 'line', { x1: plot.left, x2: right, y1: y(v), y2: y(v), stroke: GRID_COLOUR });
+  for (const v of xTicks.minor) vertical(grid, v, plot.top, bottom, MINOR_GRID_COLOUR);
+  for (const v of yTicks.minor) horizontal(grid, v, plot.left, right, MINOR_GRID_COLOUR);
+  for (const v of xTicks.major) vertical(grid, v, plot.top, bottom, GRID_COLOUR);
+  for (const v of yTicks.major) horizontal(grid, v, plot.left, right, GRID_COLOUR);
 
   const clipId = `plot-area-${index}`;
   const clip = doc.element(doc.element(group, 'defs'), 'clipPath', { id: clipId });
-  doc.element(clip, 'rect', { x: plot.left, y: plot.top, width: plot.width, height: plot.height });
+  doc.element(clip, 'rect', boxAttributes(plot));
   if (spec.underlay) {
     const under = doc.element(group, 'g', { class: 'underlay', 'clip-path': `url(#${clipId})` });
     spec.underlay({ ...context, group: under });
@@ -118,18 +107,14 @@ export function drawPanel(
   const curves = doc.element(group, 'g', { class: 'curves', fill: 'none', 'clip-path': `url(#${clipId})` });
   for (const { series, style } of layout.series) {
     const count = Math.min(series.x.length, series.y.length);
-    const canDraw = (i: number) => drawable(series.x[i], series.y[i], layout.xScale, layout.yScale);
+    const canDraw = (i: number) => drawable(series.x[i], series.y[i], xScale, yScale);
+    const column = (i: number) => x(series.x[i]);
     const indices = series.decimate
-      ? decimatedIndices(
-          count,
-          (i) => x(series.x[i]),
-          (i) => series.y[i],
-          canDraw,
-        )
+      ? decimatedIndices(count, column, (i) => series.y[i], canDraw)
       : Array.from({ length: count }, (_, i) => i);
     const path = line<number>()
       .defined(canDraw)
-      .x((i) => x(series.x[i]))
+      .x(column)
       .y((i) => y(series.y[i]))
       .digits(2)(indices);
     doc.element(curves, 'path', {
@@ -142,49 +127,61 @@ export function drawPanel(
       'stroke-linejoin': 'round',
     });
   }
-  doc.element(group, 'rect', {
-    class: 'frame',
-    x: plot.left,
-    y: plot.top,
-    width: plot.width,
-    height: plot.height,
-    fill: 'none',
-    stroke: FRAME_COLOUR,
-    'stroke-width': 0.8,
-  });
+  drawFrame(doc, group, plot);
 
   const axes = doc.element(group, 'g', { class: 'axes', stroke: FRAME_COLOUR, 'stroke-width': 0.8 });
-  for (const v of xTicks.minor) doc.element(axes, 'line', { x1: x(v), x2: x(v), y1: bottom, y2: bottom + 3 });
-  for (const v of xTicks.major) doc.element(axes, 'line', { x1: x(v), x2: x(v), y1: bottom, y2: bottom + 5 });
-  for (const v of yTicks.minor)
-    doc.element(axes, 'line', { x1: plot.left - 3, x2: plot.left, y1: y(v), y2: y(v) });
-  for (const v of yTicks.major)
-    doc.element(axes, 'line', { x1: plot.left - 5, x2: plot.left, y1: y(v), y2: y(v) });
+  for (const v of xTicks.minor) vertical(axes, v, bottom, bottom + 3);
+  for (const v of xTicks.major) vertical(axes, v, bottom, bottom + 5);
+  for (const v of yTicks.minor) horizontal(axes, v, plot.left - 3, plot.left);
+  for (const v of yTicks.major) horizontal(axes, v, plot.left - 5, plot.left);
   const labels = doc.element(group, 'g', { class: 'tick-labels', fill: TEXT_COLOUR, 'font-size': tickPx });
-  const yLabels = doc.element(labels, 'g', { class: 'y-ticks', 'text-anchor': 'end' });
-  for (const { value, text } of yTicks.labels)
-    doc.text(yLabels, text, { x: plot.left - 7, y: y(value) + tickPx * 0.35, 'data-value': value });
-  doc.text(group, spec.y.title, {
-    class: 'axis-title y-title',
-    transform: `translate(${sidePx + axisTitlePx}, ${plot.top + plot.height / 2}) rotate(-90)`,
-    'text-anchor': 'middle',
-    'font-size': axisTitlePx,
-    fill: TEXT_COLOUR,
-  });
+  drawTickLabels(doc, labels, 'y', yTicks, (v) => ({ x: plot.left - 7, y: y(v) + tickPx * 0.35 }));
+  drawAxisTitle(doc, group, 'y', spec.y.title, [sidePx + axisTitlePx, plot.top + plot.height / 2]);
   if (spec.xLabels !== false) {
-    const xLabels = doc.element(labels, 'g', { class: 'x-ticks', 'text-anchor': 'middle' });
-    for (const { value, text } of xTicks.labels)
-      doc.text(xLabels, text, { x: x(value), y: bottom + 7 + tickPx, 'data-value': value });
-    doc.text(group, spec.x.title, {
-      class: 'axis-title x-title',
-      x: plot.left + plot.width / 2,
-      y: bottom + 7 + tickPx + 6 + axisTitlePx,
-      'text-anchor': 'middle',
-      'font-size': axisTitlePx,
-      fill: TEXT_COLOUR,
-    });
+    drawTickLabels(doc, labels, 'x', xTicks, (v) => ({ x: x(v), y: bottom + 7 + tickPx }));
+    drawAxisTitle(doc, group, 'x', spec.x.title, [
+      plot.left + plot.width / 2,
+      bottom + 7 + tickPx + 6 + axisTitlePx,
+    ]);
   }
   if (spec.overlay) spec.overlay({ ...context, group: doc.element(group, 'g', { class: 'marks' }) });
+}
+
+/** A plot's frame as the attributes of an SVG rect. */
+function boxAttributes({ left, top, width, height }: PlotBox) {
+  return { x: left, y: top, width, height };
+}
+
+/** A plot's frame. */
+export function drawFrame(doc: SvgDocument, parent: Element, plot: PlotBox): void {
+  const stroke = { fill: 'none', stroke: FRAME_COLOUR, 'stroke-width': 0.8 };
+  doc.element(parent, 'rect', { class: 'frame', ...boxAttributes(plot), ...stroke });
+}
+
+/** The labels of an axis' ticks, each placed by `at` (x labels centred, y labels ending there). */
+export function drawTickLabels(
+  doc: SvgDocument,
+  parent: Element,
+  axis: 'x' | 'y',
+  ticks: AxisTicks,
+  at: (value: number) => { x: number; y: number },
+): void {
+  const anchor = axis === 'x' ? 'middle' : 'end';
+  const group = doc.element(parent, 'g', { class: `${axis}-ticks`, 'text-anchor': anchor });
+  for (const { value, text } of ticks.labels) doc.text(group, text, { ...at(value), 'data-value': value });
+}
+
+/** An axis title centred at `at`: under the plot (x), or turned up its left side (y). */
+export function drawAxisTitle(
+  doc: SvgDocument,
+  parent: Element,
+  axis: 'x' | 'y',
+  title: string,
+  [x, y]: [number, number],
+): void {
+  const place = axis === 'x' ? { x, y } : { transform: `translate(${x}, ${y}) rotate(-90)` };
+  const font = { 'text-anchor': 'middle', 'font-size': axisTitlePx, fill: TEXT_COLOUR };
+  doc.text(parent, title, { class: `axis-title ${axis}-title`, ...place, ...font });
 }
 
 /**

@@ -2,8 +2,9 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import { lineChart } from './line-chart.js';
 import type { Series } from './panel.js';
-import { DAMPING_DASHES, type SeriesStyle } from './styles.js';
-import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNote } from './text.js';
+import { inG, PERIOD_AXIS, PSA_AXIS } from './spectrum-figure.js';
+import { DAMPING_DASHES } from './styles.js';
+import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNotes } from './text.js';
 
 export interface RotDFigureInput {
   spectra: RotDSpectra;
@@ -24,48 +25,38 @@ const MEASURES = [
  */
 export function rotdFigure(input: RotDFigureInput): string {
   const { spectra } = input;
-  const many = spectra.curves.length > 1;
-  const series: Series[] = [];
-  spectra.curves.forEach((curve, d) => {
-    for (const measure of MEASURES) {
-      const style: SeriesStyle = {
-        color: measure.color,
-        dash: DAMPING_DASHES[d % DAMPING_DASHES.length],
-        widthPx: 1.6,
-      };
-      series.push({
-        label: many ? `${measure.label}, ζ = ${percentLabel(curve.damping)}` : measure.label,
+  const series = spectra.curves.flatMap((curve, d) =>
+    MEASURES.map(
+      (measure): Series => ({
+        label:
+          spectra.curves.length > 1 ? `${measure.label}, ζ = ${percentLabel(curve.damping)}` : measure.label,
         x: spectra.periodsS,
-        y: Array.from(curve[measure.key], (v) => v / STANDARD_GRAVITY_MS2),
-        style,
-      });
-    }
-  });
+        y: inG(curve[measure.key]),
+        style: { color: measure.color, dash: DAMPING_DASHES[d % DAMPING_DASHES.length], widthPx: 1.6 },
+      }),
+    ),
+  );
   const subtitle = spectra.records.map((r, i) => recordLine(`Component ${i + 1}`, r));
   for (const [i, r] of spectra.records.entries())
     for (const step of r.processing) subtitle.push(`Component ${i + 1} processed: ${step.description}`);
   subtitle.push(methodLine(input.methodDescription, spectra.curves));
+  const inGAt = (values: Float64Array, zero: number) => formatValue(values[zero] / STANDARD_GRAVITY_MS2);
+  const { rotd50MS2, rotd100MS2 } = spectra.curves[0];
   const notes = [
     `PSA(θ) = ω² max|u₁ cos θ + u₂ sin θ| over ${180 / spectra.angleStepDeg} angles 0 ≤ θ < 180° in steps of ${spectra.angleStepDeg}°; RotD50 is the median over the angles, RotD100 the largest (Boore 2010); geometric mean √(PSA₁·PSA₂) of the components as recorded.`,
+    ...(spectra.paddedSamples > 0
+      ? [`The shorter component was padded with ${spectra.paddedSamples} zero samples (ground at rest).`]
+      : []),
+    ...zeroPeriodNotes(
+      spectra.periodsS,
+      (zero) => ` (there RotD50 = ${inGAt(rotd50MS2, zero)} g, RotD100 = ${inGAt(rotd100MS2, zero)} g)`,
+    ),
   ];
-  if (spectra.paddedSamples > 0) {
-    notes.push(
-      `The shorter component was padded with ${spectra.paddedSamples} zero samples (ground at rest).`,
-    );
-  }
-  const zero = Array.from(spectra.periodsS).indexOf(0);
-  if (zero >= 0) {
-    const c = spectra.curves[0];
-    const there = (values: Float64Array) => formatValue(values[zero] / STANDARD_GRAVITY_MS2);
-    notes.push(
-      zeroPeriodNote(` (there RotD50 = ${there(c.rotd50MS2)} g, RotD100 = ${there(c.rotd100MS2)} g)`),
-    );
-  }
   return lineChart({
     title: 'Two-component spectra: RotD50, RotD100 and geometric mean PSA',
     subtitle,
-    x: { title: 'Period T (s)' },
-    y: { title: 'Pseudo-acceleration PSA (g)' },
+    x: PERIOD_AXIS,
+    y: PSA_AXIS,
     series,
     notes,
   });

@@ -1,6 +1,6 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { lineChart } from './line-chart.js';
+import { type LineChartOptions, lineChart } from './line-chart.js';
 import type { AxisScale, Series } from './panel.js';
 import { overlayStyle } from './styles.js';
 import {
@@ -32,98 +32,106 @@ export interface PsaFigureOptions extends SpectrumFigureOptions {
   overlays?: readonly PsaOverlay[];
 }
 
+export const PERIOD_AXIS = { title: 'Period T (s)' };
+export const PSA_AXIS = { title: 'Pseudo-acceleration PSA (g)' };
+
+/** Accelerations in m/s² as values in g. */
+export function inG(valuesMS2: ArrayLike<number>): number[] {
+  return Array.from(valuesMS2, (v) => v / STANDARD_GRAVITY_MS2);
+}
+
 /** The lines that say where a spectrum comes from: record, processing, method and damping. */
 export function spectrumSubtitle(spectrum: Spectrum, methodDescription?: string): string[] {
   const method = methodLine(methodDescription ?? spectrum.method, spectrum.curves);
   return [recordLine('Record', spectrum.record), ...processingLines(spectrum.record.processing), method];
 }
 
-/** The note that T = 0 is left off a log period axis, when the grid holds it. */
-export function spectrumZeroNote(spectrum: Spectrum, axes: AxisScale, there: string): string[] {
-  return axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, there) : [];
-}
+/** What a spectrum chart draws: `quantity` times `scale` and, where `overlayY` is given, the overlays. */
+type SpectrumChart = Omit<LineChartOptions, 'x' | 'series'> & {
+  quantity: 'sdM' | 'psvMS' | 'psaMS2';
+  scale: number;
+  /** An overlay's value drawn at period `t` for its PSA (g). */
+  overlayY?: (psaG: number, t: number) => number;
+  note: string;
+  /** The value at T = 0 for the note that it is left off a log axis; default PSA = PGA. */
+  zeroThere?: string;
+};
 
-/** One curve per damping ratio: the values `pick` gives for curve i, times `scale`. */
-export function dampingSeries(
+/**
+ * A spectrum quantity against period, one curve per damping ratio, then the overlays: the record
+ * and method in the subtitle, the damping ratios in the legend, the note on T = 0 off a log axis.
+ */
+export function spectrumChart(
   spectrum: Spectrum,
-  pick: (index: number) => Float64Array,
-  scale: number,
-): Series[] {
-  return spectrum.curves.map((curve, i) => ({
-    label: `ζ = ${percentLabel(curve.damping)}`,
-    x: spectrum.periodsS,
-    y: pick(i).map((v) => v * scale),
-  }));
-}
-
-export function overlaySeries(
-  overlays: readonly PsaOverlay[] | undefined,
-  toY: (psaG: number, t: number) => number,
-) {
-  return (overlays ?? []).map(
-    (overlay, i): Series => ({
-      label: overlay.label,
-      x: overlay.periodsS,
-      y: Array.from(overlay.psaG, (a, k) => toY(a, overlay.periodsS[k])),
-      style: overlayStyle(i),
-      kind: 'overlay',
+  options: PsaFigureOptions,
+  { quantity, scale, overlayY, note, zeroThere, ...chart }: SpectrumChart,
+): string {
+  const curves = spectrum.curves.map(
+    (curve): Series => ({
+      label: `ζ = ${percentLabel(curve.damping)}`,
+      x: spectrum.periodsS,
+      y: curve[quantity].map((v) => v * scale),
     }),
   );
+  const overlays =
+    overlayY === undefined
+      ? []
+      : (options.overlays ?? []).map(
+          (overlay, i): Series => ({
+            label: overlay.label,
+            x: overlay.periodsS,
+            y: Array.from(overlay.psaG, (a, k) => overlayY(a, overlay.periodsS[k])),
+            style: overlayStyle(i),
+            kind: 'overlay',
+          }),
+        );
+  const axes = chart.axes ?? options.axes ?? 'log';
+  const pga = ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`;
+  return lineChart({
+    ...chart,
+    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
+    x: PERIOD_AXIS,
+    axes,
+    legendTitle: 'Damping:',
+    series: [...curves, ...overlays],
+    notes: [note, ...(axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, zeroThere ?? pga) : [])],
+  });
 }
 
 /** PSA (g) against period, one curve per damping ratio, optional overlays (e.g. a design spectrum). */
 export function psaFigure(spectrum: Spectrum, options: PsaFigureOptions = {}): string {
-  const axes = options.axes ?? 'log';
-  const pgaG = spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2;
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Pseudo-acceleration response spectrum PSA',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
-    y: { title: 'Pseudo-acceleration PSA (g)' },
-    axes,
-    legendTitle: 'Damping:',
-    series: [
-      ...dampingSeries(spectrum, (i) => spectrum.curves[i].psaMS2, 1 / STANDARD_GRAVITY_MS2),
-      ...overlaySeries(options.overlays, (a) => a),
-    ],
-    notes: [
-      'PSA = ω²·SD with ω = 2π/T; at T = 0, PSA is the peak ground acceleration.',
-      ...spectrumZeroNote(spectrum, axes, ` (there PSA = PGA = ${formatValue(pgaG)} g)`),
-    ],
+    y: PSA_AXIS,
+    quantity: 'psaMS2',
+    scale: 1 / STANDARD_GRAVITY_MS2,
+    overlayY: (psaG) => psaG,
+    note: 'PSA = ω²·SD with ω = 2π/T; at T = 0, PSA is the peak ground acceleration.',
   });
 }
 
 /** SD against period, one curve per damping ratio. */
 export function sdFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {}): string {
-  const axes = options.axes ?? 'log';
   const unit = options.lengthUnit ?? 'm';
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Displacement response spectrum SD',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
     y: { title: `Relative displacement SD (${unit})` },
-    axes,
-    legendTitle: 'Damping:',
-    series: dampingSeries(spectrum, (i) => spectrum.curves[i].sdM, 1 / LENGTH_UNITS[unit]),
-    notes: [
-      'SD is the peak displacement of the oscillator relative to the ground.',
-      ...spectrumZeroNote(spectrum, axes, ' (there SD = 0)'),
-    ],
+    quantity: 'sdM',
+    scale: 1 / LENGTH_UNITS[unit],
+    note: 'SD is the peak displacement of the oscillator relative to the ground.',
+    zeroThere: ' (there SD = 0)',
   });
 }
 
 /** PSV against period, one curve per damping ratio. */
 export function psvFigure(spectrum: Spectrum, options: SpectrumFigureOptions = {}): string {
-  const axes = options.axes ?? 'log';
   const unit = options.lengthUnit ?? 'm';
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Pseudo-velocity response spectrum PSV',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
-    axes,
-    legendTitle: 'Damping:',
-    series: dampingSeries(spectrum, (i) => spectrum.curves[i].psvMS, 1 / LENGTH_UNITS[unit]),
-    notes: ['PSV = ω·SD with ω = 2π/T.', ...spectrumZeroNote(spectrum, axes, ' (there PSV = 0)')],
+    quantity: 'psvMS',
+    scale: 1 / LENGTH_UNITS[unit],
+    note: 'PSV = ω·SD with ω = 2π/T.',
+    zeroThere: ' (there PSV = 0)',
   });
 }

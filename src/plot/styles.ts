@@ -44,6 +44,10 @@ export const TEXT_COLOUR = '#111111';
 /** A white outline under a label, so it stays legible over grid lines and curves. */
 export const HALO = { stroke: '#ffffff', 'stroke-width': 2.5, 'paint-order': 'stroke' } as const;
 
+/** A mark over a plot (the building period, an Arias level): a thin grey line, a small haloed label. */
+export const MARK_LINE = { stroke: '#777777', 'stroke-width': 0.9 } as const;
+export const MARK_LABEL = { 'font-size': 9, fill: TEXT_COLOUR, ...HALO } as const;
+
 /** Width of every figure: 640 px, 169 mm at 96 px to the inch, the text width of an A4 or letter page. */
 export const FIGURE_WIDTH_PX = 640;
 

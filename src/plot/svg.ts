@@ -20,6 +20,8 @@ export type Attributes = Readonly<Record<string, string | number | undefined>>;
  */
 export interface SvgDocument {
   readonly root: SVGSVGElement;
+  /** Set attributes of a node, written as `element` writes them (an attribute set again keeps its place). */
+  set(node: Element, attributes: Attributes): void;
   /** Append a child element with attributes. */
   element(parent: Element, name: string, attributes?: Attributes): SVGElement;
   /** Append a text element whose content is `content` (escaped on output). */
@@ -58,6 +60,7 @@ export function createSvgDocument(widthPx: number, heightPx: number): SvgDocumen
   };
   return {
     root,
+    set,
     element,
     text(parent, content, attributes = {}) {
       const node = element(parent, 'text', attributes) as SVGTextElement;

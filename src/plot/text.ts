@@ -47,14 +47,18 @@ export function methodLine(method: string, curves: readonly { damping: number }[
   return `Method: ${method}; ${what} ζ = ${curves.map((c) => percentLabel(c.damping)).join(', ')}`;
 }
 
-/** The note that T = 0, held by the period grid, is left off a logarithmic axis; `there` gives its value. */
-export function zeroPeriodNote(there: string): string {
-  return `T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off${there}.`;
-}
-
-/** The zero-period note as a list: one note when `periodsS` holds T = 0, none otherwise. */
-export function zeroPeriodNotes(periodsS: ArrayLike<number>, there: string): string[] {
-  return Array.from(periodsS).includes(0) ? [zeroPeriodNote(there)] : [];
+/**
+ * The note that T = 0, when `periodsS` holds it, is left off a logarithmic axis, with its value
+ * there (`there` is given the index of T = 0); none when the grid does not hold it.
+ */
+export function zeroPeriodNotes(
+  periodsS: ArrayLike<number>,
+  there: string | ((zero: number) => string),
+): string[] {
+  const zero = Array.from(periodsS).indexOf(0);
+  if (zero < 0) return [];
+  const value = typeof there === 'string' ? there : there(zero);
+  return [`T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off${value}.`];
 }
 
 /** One subtitle line per processing step; `none` stands alone when there were none (if given). */

@@ -24,6 +24,25 @@ export function formatLogValue(value: number): string {
   return mantissa === 1 ? power : `${mantissa}×${power}`;
 }
 
+/** A label's extent along its axis, px, centred on its tick. */
+type LabelSpan = { value: number; text: string; from: number; to: number };
+
+function labelSpan(
+  value: number,
+  text: string,
+  toPixel: (value: number) => number,
+  labelExtentPx: (text: string) => number,
+): LabelSpan {
+  const half = labelExtentPx(text) / 2;
+  return { value, text, from: toPixel(value) - half, to: toPixel(value) + half };
+}
+
+/** Whether no two labels come within 4 px of each other; sorts `spans` by position. */
+function clear(spans: LabelSpan[]): boolean {
+  spans.sort((a, b) => a.from - b.from);
+  return spans.every((s, i) => i === 0 || s.from >= spans[i - 1].to + 4);
+}
+
 /**
  * Decade ticks with minor ticks at 2…9 × 10ᵏ on a log axis (common practice). Decades are labelled,
  * thinned to every second or third decade when their labels would touch; 2 and 5 × 10ᵏ are labelled
@@ -43,33 +62,17 @@ export function logTicks(
     if (inside(decade)) major.push(decade);
     for (let m = 2; m <= 9; m++) if (inside(m * decade)) minor.push(m * decade);
   }
-  const placed: { value: number; text: string; from: number; to: number }[] = [];
-  const fits = (from: number, to: number) => placed.every((p) => to + 4 <= p.from || from >= p.to + 4);
-  const span = (value: number) => {
-    const text = formatLogValue(value);
-    const centre = toPixel(value);
-    const half = labelExtentPx(text) / 2;
-    return { value, text, from: centre - half, to: centre + half };
-  };
+  const span = (value: number) => labelSpan(value, formatLogValue(value), toPixel, labelExtentPx);
+  let placed: LabelSpan[] = [];
   for (let stride = 1; stride <= Math.max(1, major.length); stride++) {
-    placed.length = 0;
-    let ok = true;
-    for (let i = 0; i < major.length; i += stride) {
-      const s = span(major[i]);
-      if (!fits(s.from, s.to)) {
-        ok = false;
-        break;
-      }
-      placed.push(s);
-    }
-    if (ok) break;
+    placed = major.filter((_, i) => i % stride === 0).map(span);
+    if (clear(placed)) break;
   }
   const decades = Math.log10(high / low);
   if (placed.length < 3 || decades < 2) {
     const extra = decades < 1.2 ? minor : minor.filter((v) => [2, 5].includes(leadingDigit(v)));
-    for (const value of extra) {
-      const s = span(value);
-      if (fits(s.from, s.to)) placed.push(s);
+    for (const s of extra.map(span)) {
+      if (placed.every((p) => s.to + 4 <= p.from || s.from >= p.to + 4)) placed.push(s);
     }
   }
   placed.sort((a, b) => a.value - b.value);
@@ -87,22 +90,15 @@ export function linearTicks(
   lengthPx: number,
 ): AxisTicks {
   const scale = scaleLinear().domain(domain);
-  for (let count = Math.max(2, Math.round(lengthPx / 50)); count >= 2; count--) {
+  for (let count = Math.max(2, Math.round(lengthPx / 50)); ; count--) {
     const values = scale.ticks(count);
     const format = scale.tickFormat(count);
-    const spans = values.map((value) => {
-      const text = format(value);
-      const half = labelExtentPx(text) / 2;
-      return { value, text, from: toPixel(value) - half, to: toPixel(value) + half };
-    });
-    spans.sort((a, b) => a.from - b.from);
-    const clear = spans.every((s, i) => i === 0 || s.from >= spans[i - 1].to + 4);
-    if (clear || count === 2) {
+    const spans = values.map((value) => labelSpan(value, format(value), toPixel, labelExtentPx));
+    if (clear(spans) || count === 2) {
       const minor = scale.ticks(count * 5).filter((v) => !values.includes(v));
       return { major: values, minor, labels: spans.map(({ value, text }) => ({ value, text })) };
     }
   }
-  return { major: [], minor: [], labels: [] };
 }
 
 function leadingDigit(value: number): number {

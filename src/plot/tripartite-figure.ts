@@ -1,16 +1,9 @@
 import { LENGTH_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
-import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
-import {
-  dampingSeries,
-  overlaySeries,
-  type PsaFigureOptions,
-  spectrumSubtitle,
-  spectrumZeroNote,
-} from './spectrum-figure.js';
+import { type PsaFigureOptions, spectrumChart } from './spectrum-figure.js';
+import { HALO } from './styles.js';
 import { formatCoordinate } from './svg.js';
-import { formatValue } from './text.js';
 import { formatLogValue, textWidthPx } from './ticks.js';
 
 const DIAGONAL_COLOUR = '#b8b8b8';
@@ -42,42 +35,26 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
   const unit = options.lengthUnit ?? 'm';
   const perLength = 1 / LENGTH_UNITS[unit];
   const gInUnit = STANDARD_GRAVITY_MS2 * perLength;
-  const series = [
-    ...dampingSeries(spectrum, (i) => spectrum.curves[i].psvMS, perLength),
-    ...overlaySeries(options.overlays, (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI)),
-  ];
-  const underlay = (context: PanelContext) => drawDiagonals(context, unit, gInUnit, series);
-  return lineChart({
+  return spectrumChart(spectrum, options, {
     title: 'Four-way logarithmic response spectrum (PSV, SD, PSA)',
-    subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: { title: 'Period T (s)' },
     y: { title: `Pseudo-velocity PSV (${unit}/s)` },
+    axes: 'log',
     heightPx: 430,
-    legendTitle: 'Damping:',
-    series,
-    underlay,
-    notes: [
-      `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
-      ...spectrumZeroNote(
-        spectrum,
-        'log',
-        ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`,
-      ),
-    ],
+    quantity: 'psvMS',
+    scale: perLength,
+    overlayY: (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI),
+    underlay: (context) => drawDiagonals(context, unit, gInUnit),
+    note: `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
   });
 }
 
-function drawDiagonals(
-  context: PanelContext,
-  unit: string,
-  gInUnit: number,
-  series: readonly { x: ArrayLike<number>; y: ArrayLike<number> }[],
-): void {
+/** The SD and PSA diagonals, each labelled where it crosses the fewest curves and other labels. */
+function drawDiagonals(context: PanelContext, unit: string, gInUnit: number): void {
   const { doc, group, x, y } = context;
   const [tLow, tHigh] = context.xDomain;
   const [vLow, vHigh] = context.yDomain;
   const occupied: [number, number][] = [];
-  for (const s of series) {
+  for (const s of context.spec.series) {
     for (let i = 0; i < s.x.length; i++) {
       if (s.x[i] > 0 && s.y[i] > 0) occupied.push([x(s.x[i]), y(s.y[i])]);
       if (i > 0 && s.x[i - 1] > 0 && s.y[i - 1] > 0 && s.x[i] > 0 && s.y[i] > 0) {
@@ -116,7 +93,7 @@ function drawDiagonals(
     },
   ];
   const lines = doc.element(group, 'g', { class: 'diagonals', fill: 'none' });
-  const labels: { cx: number; cy: number; half: number; angle: number }[] = [];
+  const labels: { cx: number; cy: number; half: number }[] = [];
   for (const family of families) {
     for (const value of family.values) {
       const segment = family.segment(value);
@@ -137,10 +114,10 @@ function drawDiagonals(
       });
       if (length < 2 * half + 8) continue;
       const angle = (Math.atan2(by - ay, bx - ax) * 180) / Math.PI;
-      const spot = chooseSpot(ax, ay, bx, by, length, half, occupied, labels);
+      const spot = chooseSpot([ax, ay, bx, by], length, half, occupied, labels);
       const cx = ax + ((bx - ax) * spot) / length;
       const cy = ay + ((by - ay) * spot) / length;
-      labels.push({ cx, cy, half, angle });
+      labels.push({ cx, cy, half });
       doc.text(item, text, {
         x: 0,
         y: 0,
@@ -149,9 +126,8 @@ function drawDiagonals(
         'text-anchor': 'middle',
         'font-size': DIAGONAL_PX,
         fill: DIAGONAL_TEXT,
-        stroke: '#ffffff',
+        ...HALO,
         'stroke-width': 3,
-        'paint-order': 'stroke',
       });
     }
   }
@@ -159,10 +135,7 @@ function drawDiagonals(
 
 /** Distance along the segment for a label's centre, away from curves and other labels if it can be. */
 function chooseSpot(
-  ax: number,
-  ay: number,
-  bx: number,
-  by: number,
+  [ax, ay, bx, by]: readonly number[],
   length: number,
   half: number,
   occupied: readonly [number, number][],

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EVERY_FIGURE } from './every-figure.js';
-import { axisFromTicks, parseSvg, pathVertices } from './helpers.js';
+import { axisFromTicks, EVERY_FIGURE, parseSvg, pathVertices } from './helpers.js';
 
 describe('dampingFigure', () => {
   it('the published ratios are horizontal lines at EC8 η(ξ)/η(5%) = √(10/(5+ξ))/1 (EN 1998-1 Eq. 3.6)', () => {

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EVERY_FIGURE } from './every-figure.js';
-import { axisFromTicks, parseSvg, pathVertices } from './helpers.js';
+import { axisFromTicks, EVERY_FIGURE, parseSvg, pathVertices } from './helpers.js';
 
 describe('designFigure', () => {
   it('T = 0 is left off the log axis and its PSA stated; PSA = S_DS on the plateau (ASCE/SEI 7-16 §11.4.6)', () => {

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EVERY_FIGURE } from './every-figure.js';
-import { parseSvg } from './helpers.js';
+import { EVERY_FIGURE, parseSvg } from './helpers.js';
 
 describe('floorFigure', () => {
   it('marks the building period', () => {

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EVERY_FIGURE } from './every-figure.js';
-import { parseSvg } from './helpers.js';
+import { EVERY_FIGURE, parseSvg } from './helpers.js';
 
 describe('husidFigure', () => {
   it('marks 5, 75 and 95% at their times', () => {
