@@ -4,7 +4,7 @@ import { parseEquipment } from '../../src/anchorage/equipment.js';
 import { CAUTION } from '../../src/base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { groundMotionMeasures } from '../../src/record/measures.js';
-import { taperRecord } from '../../src/record/process.js';
+import { applyProcessingPlan } from '../../src/record/process.js';
 import { createRecord } from '../../src/record/record.js';
 import { assembleReport } from '../../src/report/assemble.js';
 import {
@@ -68,7 +68,10 @@ describe('processingSection', () => {
   });
 
   it('lists the steps in the order applied, escaped', () => {
-    const steps = [...taperRecord(sine, 0.05).processing, { operation: HOSTILE, description: HOSTILE }];
+    const steps = [
+      ...applyProcessingPlan(sine, { taperFraction: 0.05 }).processing,
+      { operation: HOSTILE, description: HOSTILE },
+    ];
     const items = [...page(processingSection(steps)).querySelectorAll('ol > li')];
     expect(items).toHaveLength(2);
     expect(items[0].querySelector('strong')?.textContent).toBe('taper');
