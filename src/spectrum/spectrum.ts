@@ -1,6 +1,4 @@
-import { availableParallelism } from 'node:os';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import { planSweep, sweepThreads } from '../oscillator/plan.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { type Peaks, type SweepKernel, sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord, ProcessingStep } from '../record/record.js';
@@ -65,25 +63,16 @@ export interface ParallelSpectrumOptions extends SpectrumOptions {
 }
 
 /**
- * responseSpectrum, its sweep split over threads as `threads` says; the numbers are the same bits
- * whatever the threads (SweepPool).
+ * responseSpectrum with its sweep split over threads as `threads` says (sweepOscillatorsParallel);
+ * the numbers are the same bits whatever the threads.
  */
 export async function responseSpectrumParallel(
   record: GroundRecord,
   options: ParallelSpectrumOptions,
 ): Promise<Spectrum> {
-  const plan = planSweep(record.accelMS2, record.dtS, options);
-  const threads = sweepThreads(plan, record.accelMS2.length, options.threads, availableParallelism());
-  if (threads === 1)
-    return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options, plan));
-  // The thread modules load only for a split sweep.
-  const { SweepPool } = await import('../threads/sweep-pool.js');
-  const pool = new SweepPool(threads);
-  try {
-    return assembleSpectrum(record, await pool.sweep(record.accelMS2, record.dtS, options, plan));
-  } finally {
-    await pool.close();
-  }
+  // The thread modules load only for a parallel spectrum.
+  const { sweepOscillatorsParallel } = await import('../threads/sweep-pool.js');
+  return assembleSpectrum(record, await sweepOscillatorsParallel(record.accelMS2, record.dtS, options));
 }
 
 /**
