@@ -124,7 +124,8 @@ export function packCoefficients(
   target[o + C.ds] = t.accelerationOffset;
 }
 
-function checkSweep(
+/** Refuse a sweep that cannot run: a bad step, a record too short, an empty or invalid grid. */
+export function checkSweep(
   accelMS2: Float64Array,
   dtS: number,
   periodsS: Float64Array,

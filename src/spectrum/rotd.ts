@@ -2,12 +2,13 @@ import { inputError, usageError } from '../base/errors.js';
 import { resolveKernel } from '../oscillator/group-runner.js';
 import { WasmRotD } from '../oscillator/kernels/wasm-rotd.js';
 import { hermitePeak, refinementThresholds } from '../oscillator/peak.js';
+import { checkSweep } from '../oscillator/plan.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
 import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
 import { executionPlan, substepCount } from '../oscillator/substeps.js';
 import type { SweepKernel } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
-import type { SpectrumRecordInfo } from './spectrum.js';
+import { recordInfo, type SpectrumRecordInfo } from './spectrum.js';
 
 /** Two-component spectra of a pair of horizontal records at one damping ratio, m/s², by period. */
 export interface RotDCurve {
@@ -55,13 +56,33 @@ export interface RotDOptions {
  * (ground at rest) to the length of the longer.
  */
 export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDSpectra {
-  const work = prepareRotD(first, second, options);
-  return finishRotD(first, second, work, rotDCurves(work));
+  const job = prepareRotD(first, second, options);
+  runRotDCells(job);
+  return finishRotD(first, second, job);
 }
 
-/** Check the pair and the grid, and pad the shorter component. */
-export function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDWork {
-  const method = options.method ?? 'newmark-average';
+/**
+ * RotD work as the threads of a RotDPool (or this thread alone) share it: both components (same
+ * length), the grid and the method, a counter handing out (damping, period) cells, damping-major
+ * (cell c is damping ⌊c / periods⌋, period c mod periods), and the results: for each damping in
+ * turn its RotD50, RotD100 and geometric-mean curves (m/s²), one after the other.
+ */
+export interface RotDJob {
+  a1: Float64Array;
+  a2: Float64Array;
+  dtS: number;
+  periodsS: Float64Array;
+  dampings: Float64Array;
+  method: Method;
+  angleStepDeg: number;
+  /** The loop over angles: WebAssembly SIMD (assembly/rotd.ts) or TypeScript; 'auto' by default. */
+  kernel?: SweepKernel;
+  counter: Int32Array;
+  results: Float64Array;
+}
+
+/** Check the pair and the grid, pad the shorter component, and lay out the job for one thread. */
+export function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDJob {
   const periodsS = Float64Array.from(options.periodsS);
   const dampings = Float64Array.from(options.dampings);
   const angleStepDeg = options.angleStepDeg ?? 1;
@@ -72,138 +93,105 @@ export function prepareRotD(first: GroundRecord, second: GroundRecord, options: 
       { file: second.source },
     );
   }
-  if (periodsS.length === 0) throw usageError('the period grid is empty');
-  if (dampings.length === 0) throw usageError('the damping list is empty');
-  for (const damping of dampings) {
-    if (!(damping >= 0) || !Number.isFinite(damping)) throw usageError(`damping must be ≥ 0, got ${damping}`);
-  }
-  for (const periodS of periodsS) {
-    if (!(periodS >= 0) || !Number.isFinite(periodS))
-      throw usageError(`periods must be ≥ 0 s, got ${periodS}`);
-  }
   const length = Math.max(first.accelMS2.length, second.accelMS2.length);
+  const a1 = padded(first.accelMS2, length);
+  checkSweep(a1, first.dtS, periodsS, dampings);
   return {
-    a1: padded(first.accelMS2, length),
+    a1,
     a2: padded(second.accelMS2, length),
     dtS: first.dtS,
     periodsS,
     dampings,
-    method,
+    method: options.method ?? 'newmark-average',
     angleStepDeg,
     kernel: options.kernel,
+    counter: new Int32Array(1),
+    results: new Float64Array(3 * dampings.length * periodsS.length),
   };
 }
 
-/** The spectra of the pair from its curves. */
-export function finishRotD(
-  first: GroundRecord,
-  second: GroundRecord,
-  work: RotDWork,
-  curves: RotDCurve[],
-): RotDSpectra {
+/** The spectra of the pair from the job's results. */
+export function finishRotD(first: GroundRecord, second: GroundRecord, job: RotDJob): RotDSpectra {
+  const periods = job.periodsS.length;
+  const curve = (d: number, q: number) => job.results.slice((3 * d + q) * periods, (3 * d + q + 1) * periods);
   return {
     records: [recordInfo(first), recordInfo(second)],
-    method: work.method,
-    periodsS: work.periodsS,
-    angleStepDeg: work.angleStepDeg,
+    method: job.method,
+    periodsS: job.periodsS,
+    angleStepDeg: job.angleStepDeg,
     paddedSamples: Math.abs(first.accelMS2.length - second.accelMS2.length),
-    curves,
-  };
-}
-
-/** What one thread needs to compute RotD curves: both components (same length), the grid and the method. */
-export interface RotDWork {
-  a1: Float64Array;
-  a2: Float64Array;
-  dtS: number;
-  periodsS: Float64Array;
-  dampings: Float64Array;
-  method: Method;
-  angleStepDeg: number;
-  /** The loop over angles: WebAssembly SIMD (assembly/rotd.ts) or TypeScript; 'auto' by default. */
-  kernel?: SweepKernel;
-}
-
-/** What one thread keeps to compute the cells of one work: the angles, scratch and the kernel. */
-interface RotDContext {
-  angleCount: number;
-  quarter: number;
-  cos: Float64Array;
-  sin: Float64Array;
-  peaks: Float64Array;
-  thresholds: Float64Array;
-  wasm: WasmRotD | undefined;
-}
-
-function rotDContext(work: RotDWork): RotDContext {
-  const angleCount = checkAngleStep(work.angleStepDeg);
-  const cos = new Float64Array(angleCount);
-  const sin = new Float64Array(angleCount);
-  for (let k = 0; k < angleCount; k++) {
-    const degrees = k * work.angleStepDeg;
-    cos[k] = degrees === 90 ? 0 : Math.cos((degrees * Math.PI) / 180);
-    sin[k] = degrees === 0 ? 0 : degrees === 90 ? 1 : Math.sin((degrees * Math.PI) / 180);
-  }
-  const wasm =
-    resolveKernel(work.kernel ?? 'auto') === 'wasm' ? new WasmRotD(work.a1, work.a2, cos, sin) : undefined;
-  return {
-    angleCount,
-    quarter: Math.round(90 / work.angleStepDeg),
-    cos,
-    sin,
-    peaks: new Float64Array(angleCount),
-    thresholds: new Float64Array(angleCount),
-    wasm,
+    curves: Array.from(job.dampings, (damping, d) => ({
+      damping,
+      rotd50MS2: curve(d, 0),
+      rotd100MS2: curve(d, 1),
+      geomeanMS2: curve(d, 2),
+    })),
   };
 }
 
 /**
- * RotD cells of checked work computed on this thread, for the threads of a RotDPool: the
- * function writes RotD50, RotD100 and the geometric mean (m/s²) of period p at damping d into
- * out[0..2].
+ * Claim cells of the job from its counter until none is left, and compute each on this thread:
+ * RotD50, RotD100 and the geometric mean of its period at its damping, into the results.
  */
-export function rotDCellRunner(work: RotDWork): (d: number, p: number, out: Float64Array) => void {
-  const context = rotDContext(work);
-  return (d, p, out) => rotDCell(work, context, d, p, out);
-}
-
-/** RotD50, RotD100 and the geometric mean (m/s²) of period p at damping d, into out[0..2]. */
-function rotDCell(work: RotDWork, context: RotDContext, d: number, p: number, out: Float64Array): void {
-  const { a1, a2, dtS, method } = work;
-  const { angleCount, quarter, cos, sin, peaks, thresholds, wasm } = context;
-  const damping = work.dampings[d];
-  const periodS = work.periodsS[p];
-  let scale = 1;
-  if (periodS === 0) {
-    groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
-  } else {
-    const omega = (2 * Math.PI) / periodS;
-    scale = omega * omega;
-    oscillatorPeaks(a1, a2, dtS, { periodS, damping, method }, cos, sin, peaks, thresholds, wasm);
+export function runRotDCells(job: RotDJob): void {
+  const { a1, a2, dtS, periodsS, dampings, method } = job;
+  const angleCount = checkAngleStep(job.angleStepDeg);
+  const quarter = Math.round(90 / job.angleStepDeg);
+  const cos = new Float64Array(angleCount);
+  const sin = new Float64Array(angleCount);
+  for (let k = 0; k < angleCount; k++) {
+    const degrees = k * job.angleStepDeg;
+    cos[k] = degrees === 90 ? 0 : Math.cos((degrees * Math.PI) / 180);
+    sin[k] = degrees === 0 ? 0 : degrees === 90 ? 1 : Math.sin((degrees * Math.PI) / 180);
   }
-  out[2] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
-  peaks.sort();
-  out[1] = scale * peaks[angleCount - 1];
-  const middle = angleCount >> 1;
-  out[0] = scale * (angleCount % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
+  const pair: ComponentPair = {
+    a1,
+    a2,
+    dtS,
+    roughness: Math.max(recordRoughness(a1), recordRoughness(a2)),
+    // A rotated component never exceeds |(a₁, a₂)|.
+    pgaMS2: peakResultant(a1, a2),
+    cos,
+    sin,
+    wasm: resolveKernel(job.kernel ?? 'auto') === 'wasm' ? new WasmRotD(a1, a2, cos, sin) : undefined,
+  };
+  const peaks = new Float64Array(angleCount);
+  const thresholds = new Float64Array(angleCount);
+  const periods = periodsS.length;
+  for (;;) {
+    const cell = Atomics.add(job.counter, 0, 1);
+    if (cell >= dampings.length * periods) return;
+    const d = Math.floor(cell / periods);
+    const p = cell - d * periods;
+    const periodS = periodsS[p];
+    let scale = 1;
+    if (periodS === 0) {
+      groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
+    } else {
+      const omega = (2 * Math.PI) / periodS;
+      scale = omega * omega;
+      oscillatorPeaks(pair, { periodS, damping: dampings[d], method }, peaks, thresholds);
+    }
+    const at = 3 * d * periods + p;
+    job.results[at + 2 * periods] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
+    peaks.sort();
+    job.results[at + periods] = scale * peaks[angleCount - 1];
+    const middle = angleCount >> 1;
+    job.results[at] =
+      scale * (angleCount % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
+  }
 }
 
-/** The RotD curves of checked work (see rotDSpectra), one per damping ratio. */
-export function rotDCurves(work: RotDWork): RotDCurve[] {
-  const context = rotDContext(work);
-  const out = new Float64Array(3);
-  return Array.from(work.dampings, (damping, d) => {
-    const rotd50MS2 = new Float64Array(work.periodsS.length);
-    const rotd100MS2 = new Float64Array(work.periodsS.length);
-    const geomeanMS2 = new Float64Array(work.periodsS.length);
-    for (let p = 0; p < work.periodsS.length; p++) {
-      rotDCell(work, context, d, p, out);
-      rotd50MS2[p] = out[0];
-      rotd100MS2[p] = out[1];
-      geomeanMS2[p] = out[2];
-    }
-    return { damping, rotd50MS2, rotd100MS2, geomeanMS2 };
-  });
+/** The components of a job as one thread steps them: with their roughness, peak resultant and angles. */
+interface ComponentPair {
+  a1: Float64Array;
+  a2: Float64Array;
+  dtS: number;
+  roughness: number;
+  pgaMS2: number;
+  cos: Float64Array;
+  sin: Float64Array;
+  wasm: WasmRotD | undefined;
 }
 
 /** Number of angles in [0°, 180°) for a step that divides 180° into whole steps, at most 1°. */
@@ -241,24 +229,26 @@ function groundPeaks(
   }
 }
 
+/** Peak over the samples of |(a₁, a₂)|, m/s². */
+function peakResultant(a1: Float64Array, a2: Float64Array): number {
+  let peak = 0;
+  for (let n = 0; n < a1.length; n++) peak = Math.max(peak, Math.hypot(a1[n], a2[n]));
+  return peak;
+}
+
 /**
  * Peak |u(θ, t)| for every angle of one oscillator, m, into `peaks`. Both components are stepped
  * together with the sweep's sub-stepping; nothing is allocated inside the loops.
  */
 function oscillatorPeaks(
-  a1: Float64Array,
-  a2: Float64Array,
-  dtS: number,
+  pair: ComponentPair,
   oscillator: { periodS: number; damping: number; method: Method },
-  cos: Float64Array,
-  sin: Float64Array,
   peaks: Float64Array,
   thresholds: Float64Array,
-  wasm?: WasmRotD,
 ): void {
+  const { a1, a2, dtS, roughness, cos, sin, wasm } = pair;
   const { periodS, damping, method } = oscillator;
   const durationS = (a1.length - 1) * dtS;
-  const roughness = Math.max(recordRoughness(a1), recordRoughness(a2));
   // The sweep's execution plan: the method's sub-steps, composed down to the steps that the
   // Hermite refinement needs (executionPlan in substeps.ts), so PSA here is the sweep's PSA.
   const run = executionPlan(
@@ -274,11 +264,8 @@ function oscillatorPeaks(
   const { uu, uv, up0, up1, vu, vv, vp0, vp1 } = c;
   const angles = peaks.length;
   const inverse = 1 / substeps;
-  // The sweep's refinement rule (see refinementThresholds), with the ground's peak over all
-  // directions: a rotated component never exceeds |(a₁, a₂)|.
-  let pga = 0;
-  for (let n = 0; n < a1.length; n++) pga = Math.max(pga, Math.hypot(a1[n], a2[n]));
-  const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: pga, jerkMS3: 0 });
+  // The sweep's refinement rule (see refinementThresholds), with the ground's peak over all directions.
+  const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: pair.pgaMS2, jerkMS3: 0 });
   const R = rule.ratio;
   const offset = rule.displacementOffset;
   if (wasm !== undefined) {
@@ -328,15 +315,4 @@ function oscillatorPeaks(
       pa2 = pb2;
     }
   }
-}
-
-function recordInfo(record: GroundRecord): SpectrumRecordInfo {
-  return {
-    name: record.name,
-    source: record.source,
-    npts: record.accelMS2.length,
-    dtS: record.dtS,
-    pgaMS2: record.pgaMS2,
-    processing: record.processing,
-  };
 }

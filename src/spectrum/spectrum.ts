@@ -111,18 +111,23 @@ export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
     curves.push({ damping: peaks.dampings[d], sdM, psvMS, psaMS2, svMS, saMS2 });
   }
   return {
-    record: {
-      name: record.name,
-      source: record.source,
-      npts: record.accelMS2.length,
-      dtS: record.dtS,
-      pgaMS2,
-      processing: record.processing,
-    },
+    record: recordInfo(record),
     method: peaks.method,
     periodsS: peaks.periodsS,
     curves,
     oscillatorSteps: peaks.oscillatorSteps,
+  };
+}
+
+/** What outputs say about the record a spectrum came from. */
+export function recordInfo(record: GroundRecord): SpectrumRecordInfo {
+  return {
+    name: record.name,
+    source: record.source,
+    npts: record.accelMS2.length,
+    dtS: record.dtS,
+    pgaMS2: record.pgaMS2,
+    processing: record.processing,
   };
 }
 

@@ -2,9 +2,9 @@
 // period) cells from the shared counter until none is left, and says so.
 
 import { prepareWasmKernel } from '../oscillator/kernels/wasm.js';
-import { runClaimedRotD } from './rotd-pool.js';
+import { runRotDCells } from '../spectrum/rotd.js';
 import { serveJobs } from './team.js';
 
-serveJobs(runClaimedRotD);
+serveJobs(runRotDCells);
 // The kernel's instance is made while the first job is on its way.
 prepareWasmKernel();
