@@ -15,10 +15,9 @@ const SIMD_PROBE = Uint8Array.from(
 
 let simdSupported: boolean | undefined;
 
-/** Whether `validate` (WebAssembly.validate by default) accepts a SIMD module. */
+/** Whether `validate` (WebAssembly.validate by default) accepts a SIMD module; false where it throws. */
 export function detectWasmSimd(
-  validate: (bytes: Uint8Array<ArrayBuffer>) => boolean = (bytes) =>
-    typeof WebAssembly === 'object' && WebAssembly.validate(bytes),
+  validate: (bytes: Uint8Array<ArrayBuffer>) => boolean = (bytes) => WebAssembly.validate(bytes),
 ): boolean {
   try {
     return validate(SIMD_PROBE);
@@ -33,63 +32,45 @@ export function wasmSimdSupported(): boolean {
   return simdSupported;
 }
 
-/** The exports of assembly/sweep.ts (with RotD's loop, assembly/rotd.ts). */
-export interface KernelExports {
+/**
+ * The exports of assembly/sweep.ts (runGroup) and assembly/rotd.ts (rotdPeaks), whose parameters
+ * (addresses in the memory, counts and values) are documented there.
+ */
+interface KernelExports {
   memory: WebAssembly.Memory;
   heapBase(): number;
-  runGroup(
-    record: number,
-    samples: number,
-    substeps: number,
-    stepS: number,
-    coefficients: number,
-    state: number,
-    peaks: number,
-    buffer: number,
-    chunkSteps: number,
-    blockSteps: number,
-    checkpoints: number,
-    symmetric: number,
-    narrow: number,
-  ): void;
-  rotdPeaks(
-    a1: number,
-    a2: number,
-    samples: number,
-    substeps: number,
-    h: number,
-    coefficients: number,
-    cos: number,
-    sin: number,
-    angles: number,
-    peaks: number,
-    thresholds: number,
-    ratio: number,
-    offset: number,
-  ): void;
+  runGroup(...parameters: number[]): void;
+  rotdPeaks(...parameters: number[]): void;
 }
 
 /**
- * The sweep's instance of the kernel in this thread, reused by every WasmSweeper: a new instance
+ * The thread's instance of the kernel, shared by every WasmSweeper and WasmRotD: a new instance
  * per record would map and unmap a fresh linear memory each time, which in a pool of threads
  * costs every thread of the process (the mappings are the process's), and the memory would start
- * cold. Its memory grows to the largest sweep so far and stays.
+ * cold. Its memory grows to the largest need so far and stays; `holder` is the sweeper or RotD
+ * loop whose inputs it holds.
  */
-let sweepInstance: KernelInstance | undefined;
-
-/** The thread's instance of the kernel and the sweeper or RotD loop whose inputs its memory holds. */
 export interface KernelInstance {
   exports: KernelExports;
-  holder?: unknown;
+  view: Float64Array;
+  holder?: KernelInputs;
 }
+
+/** A user of the kernel that loads its inputs (a record, or two components and the angles) into its memory. */
+export interface KernelInputs {
+  load(view: Float64Array): void;
+}
+
+let instance: KernelInstance | undefined;
 
 /** The thread's instance of the kernel, made (and its module compiled) on first use. */
 export function kernelInstance(): KernelInstance {
-  if (sweepInstance === undefined) {
+  if (instance === undefined) {
     const module = new WebAssembly.Module(Buffer.from(SWEEP_WASM_BASE64, 'base64'));
-    sweepInstance = { exports: new WebAssembly.Instance(module, {}).exports as unknown as KernelExports };
+    const exports = new WebAssembly.Instance(module, {}).exports as unknown as KernelExports;
+    instance = { exports, view: new Float64Array(exports.memory.buffer) };
   }
-  return sweepInstance;
+  return instance;
 }
 
 /**
@@ -100,17 +81,38 @@ export function prepareWasmKernel(): void {
   if (wasmSimdSupported()) kernelInstance();
 }
 
+/** Byte offsets of areas of `bytes` each, 16-byte aligned, from the kernel's heap base; the last is their end. */
+export function heapAreas(kernel: KernelInstance, ...bytes: number[]): number[] {
+  const at = [kernel.exports.heapBase()];
+  for (const size of bytes) at.push(at[at.length - 1] + Math.ceil(size / 16) * 16);
+  return at;
+}
+
+/**
+ * The kernel's memory as f64, grown to at least `bytes`, holding the inputs of `holder` (loaded
+ * again when another user has had the instance since).
+ */
+export function kernelMemory(kernel: KernelInstance, bytes: number, holder: KernelInputs): Float64Array {
+  const memory = kernel.exports.memory;
+  const pages = Math.ceil(bytes / 65536) - memory.buffer.byteLength / 65536;
+  if (pages > 0) memory.grow(pages);
+  // One view while the memory stays as it is (growing it replaces its buffer).
+  if (kernel.view.buffer !== memory.buffer) kernel.view = new Float64Array(memory.buffer);
+  if (kernel.holder !== holder) {
+    holder.load(kernel.view);
+    kernel.holder = holder;
+  }
+  return kernel.view;
+}
+
 /**
  * The WebAssembly kernel with a record loaded into its memory. Groups of up to GROUP_WIDTH
  * oscillators are stepped by `run`, which takes their coefficients packed as plan.ts packs them
- * (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator). All
- * sweepers of a thread share one instance; each loads its record again when another has used it
- * since.
+ * (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator).
  */
-export class WasmSweeper {
-  private readonly kernel: KernelInstance;
+export class WasmSweeper implements KernelInputs {
+  private readonly kernel = kernelInstance();
   private readonly accelMS2: Float64Array;
-  private readonly samples: number;
   private readonly coefficients: number;
   private readonly state: number;
   private readonly peaks: number;
@@ -118,42 +120,24 @@ export class WasmSweeper {
   private readonly record: number;
   /** Pass 1's checkpoints, at the end of the layout; memory grows when a group needs more. */
   private readonly checkpoints: number;
-  private view: Float64Array;
 
   constructor(accelMS2: Float64Array) {
-    this.kernel = kernelInstance();
     this.accelMS2 = accelMS2;
-    this.samples = accelMS2.length;
-    const align = (bytes: number) => Math.ceil(bytes / 16) * 16;
-    let next = this.kernel.exports.heapBase();
-    const take = (bytes: number) => {
-      const at = next;
-      next += align(bytes);
-      return at;
-    };
-    this.coefficients = take(GROUP_WIDTH * COEFFICIENT_STRIDE * 8);
-    this.state = take(GROUP_WIDTH * STATE_STRIDE * 8);
-    this.peaks = take(GROUP_WIDTH * PEAK_STRIDE * 8);
-    this.buffer = take((STRETCH_STEPS + 1) * 8);
-    // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
-    this.record = take(accelMS2.length * 8 + 16);
-    this.checkpoints = next;
-    this.view = new Float64Array(this.kernel.exports.memory.buffer);
+    [this.coefficients, this.state, this.peaks, this.buffer, this.record, this.checkpoints] = heapAreas(
+      this.kernel,
+      GROUP_WIDTH * COEFFICIENT_STRIDE * 8,
+      GROUP_WIDTH * STATE_STRIDE * 8,
+      GROUP_WIDTH * PEAK_STRIDE * 8,
+      (STRETCH_STEPS + 1) * 8,
+      // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
+      accelMS2.length * 8 + 16,
+    );
   }
 
-  /** The memory as f64, grown to hold `bytes` of checkpoints and holding this sweeper's record. */
-  private memory(bytes: number): Float64Array {
-    const memory = this.kernel.exports.memory;
-    const pages = Math.ceil((this.checkpoints + bytes) / 65536) - memory.buffer.byteLength / 65536;
-    if (pages > 0) memory.grow(pages);
-    // One view while the memory stays as it is (growing it replaces its buffer).
-    if (this.view.buffer !== memory.buffer) this.view = new Float64Array(memory.buffer);
-    if (this.kernel.holder !== this) {
-      this.view.set(this.accelMS2, this.record / 8);
-      this.view.fill(0, (this.record + this.samples * 8) / 8, (this.record + this.samples * 8 + 16) / 8);
-      this.kernel.holder = this;
-    }
-    return this.view;
+  load(view: Float64Array): void {
+    const at = this.record / 8 + this.accelMS2.length;
+    view.set(this.accelMS2, this.record / 8);
+    view.fill(0, at, at + 2);
   }
 
   /**
@@ -170,9 +154,14 @@ export class WasmSweeper {
     symmetric: boolean,
     out: Float64Array,
   ) {
-    const blockSteps = checkpointBlockSteps((this.samples - 1) * substeps);
-    const blocks = Math.ceil(((this.samples - 1) * substeps) / blockSteps);
-    const view = this.memory(blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8);
+    const samples = this.accelMS2.length;
+    const blockSteps = checkpointBlockSteps((samples - 1) * substeps);
+    const blocks = Math.ceil(((samples - 1) * substeps) / blockSteps);
+    const view = kernelMemory(
+      this.kernel,
+      this.checkpoints + blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8,
+      this,
+    );
     const c = this.coefficients / 8;
     // Lanes side by side (oscillators 0 and 1 in the first vector, 2 and 3 in the second); a
     // short group repeats its last oscillator.
@@ -183,7 +172,7 @@ export class WasmSweeper {
     }
     this.kernel.exports.runGroup(
       this.record,
-      this.samples,
+      samples,
       substeps,
       stepS,
       this.coefficients,
