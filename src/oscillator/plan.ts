@@ -94,6 +94,8 @@ export function plannedSteps(plan: SweepPlan, samples: number): number {
   return steps;
 }
 
+const STEP_KEYS = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1'] as const;
+
 /** Write one oscillator's row of coefficients (layout.ts) into slot `slot` of the packed array. */
 export function packCoefficients(
   target: Float64Array,
@@ -107,14 +109,7 @@ export function packCoefficients(
   const omega = (2 * Math.PI) / oscillator.periodS;
   const s = executedStepCoefficients(method, omega, oscillator.damping, stepS, oscillator.composed, prewarp);
   const o = slot * COEFFICIENT_STRIDE;
-  target[o + C.uu] = s.uu;
-  target[o + C.uv] = s.uv;
-  target[o + C.up0] = s.up0;
-  target[o + C.up1] = s.up1;
-  target[o + C.vu] = s.vu;
-  target[o + C.vv] = s.vv;
-  target[o + C.vp0] = s.vp0;
-  target[o + C.vp1] = s.vp1;
+  for (const key of STEP_KEYS) target[o + C[key]] = s[key];
   target[o + C.c] = 2 * oscillator.damping * omega;
   target[o + C.k] = omega * omega;
   const t = refinementThresholds(omega, 2 * oscillator.damping * omega, stepS, bounds);

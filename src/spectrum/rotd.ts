@@ -62,19 +62,26 @@ export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: 
 }
 
 /**
- * RotD work as the threads of a RotDPool (or this thread alone) share it: both components (same
- * length), the grid and the method, a counter handing out (damping, period) cells, damping-major
- * (cell c is damping ⌊c / periods⌋, period c mod periods), and the results: for each damping in
- * turn its RotD50, RotD100 and geometric-mean curves (m/s²), one after the other.
+ * RotD work as the threads of a RotDPool (or this thread alone) share it: the two components
+ * (same length) with their roughness and peak resultant, the angles, the grid and the method, a
+ * counter handing out (damping, period) cells, damping-major (cell c is damping ⌊c / periods⌋,
+ * period c mod periods), and the results: for each damping in turn its RotD50, RotD100 and
+ * geometric-mean curves (m/s²), one after the other.
  */
 export interface RotDJob {
   a1: Float64Array;
   a2: Float64Array;
   dtS: number;
+  /** max(R₁, R₂) of recordRoughness, for the sub-step rule. */
+  roughness: number;
+  /** Peak |(a₁, a₂)|, m/s², which no rotated component exceeds. */
+  resultantMS2: number;
+  cos: Float64Array;
+  sin: Float64Array;
+  angleStepDeg: number;
   periodsS: Float64Array;
   dampings: Float64Array;
   method: Method;
-  angleStepDeg: number;
   /** The loop over angles: WebAssembly SIMD (assembly/rotd.ts) or TypeScript; 'auto' by default. */
   kernel?: SweepKernel;
   counter: Int32Array;
@@ -86,7 +93,10 @@ export function prepareRotD(first: GroundRecord, second: GroundRecord, options: 
   const periodsS = Float64Array.from(options.periodsS);
   const dampings = Float64Array.from(options.dampings);
   const angleStepDeg = options.angleStepDeg ?? 1;
-  checkAngleStep(angleStepDeg);
+  const angles = Math.round(180 / angleStepDeg);
+  if (!(angleStepDeg > 0) || angleStepDeg > 1 || Math.abs(angles * angleStepDeg - 180) > 1e-9) {
+    throw usageError(`angle step ${angleStepDeg}°: use at most 1° and a divisor of 180° (1, 0.5, 0.25, …)`);
+  }
   if (Math.abs(first.dtS - second.dtS) > 1e-9 * first.dtS) {
     throw inputError(
       `the two components have different time steps (${first.dtS} s and ${second.dtS} s); resample one first`,
@@ -95,15 +105,29 @@ export function prepareRotD(first: GroundRecord, second: GroundRecord, options: 
   }
   const length = Math.max(first.accelMS2.length, second.accelMS2.length);
   const a1 = padded(first.accelMS2, length);
+  const a2 = padded(second.accelMS2, length);
   checkSweep(a1, first.dtS, periodsS, dampings);
+  let resultantMS2 = 0;
+  for (let n = 0; n < length; n++) resultantMS2 = Math.max(resultantMS2, Math.hypot(a1[n], a2[n]));
+  const cos = new Float64Array(angles);
+  const sin = new Float64Array(angles);
+  for (let k = 0; k < angles; k++) {
+    const degrees = k * angleStepDeg;
+    cos[k] = degrees === 90 ? 0 : Math.cos((degrees * Math.PI) / 180);
+    sin[k] = degrees === 0 ? 0 : degrees === 90 ? 1 : Math.sin((degrees * Math.PI) / 180);
+  }
   return {
     a1,
-    a2: padded(second.accelMS2, length),
+    a2,
     dtS: first.dtS,
+    roughness: Math.max(recordRoughness(a1), recordRoughness(a2)),
+    resultantMS2,
+    cos,
+    sin,
+    angleStepDeg,
     periodsS,
     dampings,
     method: options.method ?? 'newmark-average',
-    angleStepDeg,
     kernel: options.kernel,
     counter: new Int32Array(1),
     results: new Float64Array(3 * dampings.length * periodsS.length),
@@ -134,73 +158,33 @@ export function finishRotD(first: GroundRecord, second: GroundRecord, job: RotDJ
  * RotD50, RotD100 and the geometric mean of its period at its damping, into the results.
  */
 export function runRotDCells(job: RotDJob): void {
-  const { a1, a2, dtS, periodsS, dampings, method } = job;
-  const angleCount = checkAngleStep(job.angleStepDeg);
+  const { a1, a2, cos, sin, periodsS, dampings } = job;
+  const angles = cos.length;
   const quarter = Math.round(90 / job.angleStepDeg);
-  const cos = new Float64Array(angleCount);
-  const sin = new Float64Array(angleCount);
-  for (let k = 0; k < angleCount; k++) {
-    const degrees = k * job.angleStepDeg;
-    cos[k] = degrees === 90 ? 0 : Math.cos((degrees * Math.PI) / 180);
-    sin[k] = degrees === 0 ? 0 : degrees === 90 ? 1 : Math.sin((degrees * Math.PI) / 180);
-  }
-  const pair: ComponentPair = {
-    a1,
-    a2,
-    dtS,
-    roughness: Math.max(recordRoughness(a1), recordRoughness(a2)),
-    // A rotated component never exceeds |(a₁, a₂)|.
-    pgaMS2: peakResultant(a1, a2),
-    cos,
-    sin,
-    wasm: resolveKernel(job.kernel ?? 'auto') === 'wasm' ? new WasmRotD(a1, a2, cos, sin) : undefined,
-  };
-  const peaks = new Float64Array(angleCount);
-  const thresholds = new Float64Array(angleCount);
+  const peaks = new Float64Array(angles);
+  const thresholds = new Float64Array(angles);
+  const wasm = resolveKernel(job.kernel ?? 'auto') === 'wasm' ? new WasmRotD(a1, a2, cos, sin) : undefined;
   const periods = periodsS.length;
   for (;;) {
     const cell = Atomics.add(job.counter, 0, 1);
     if (cell >= dampings.length * periods) return;
     const d = Math.floor(cell / periods);
     const p = cell - d * periods;
-    const periodS = periodsS[p];
     let scale = 1;
-    if (periodS === 0) {
+    if (periodsS[p] === 0) {
       groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
     } else {
-      const omega = (2 * Math.PI) / periodS;
+      const omega = (2 * Math.PI) / periodsS[p];
       scale = omega * omega;
-      oscillatorPeaks(pair, { periodS, damping: dampings[d], method }, peaks, thresholds);
+      oscillatorPeaks(job, periodsS[p], dampings[d], peaks, thresholds, wasm);
     }
     const at = 3 * d * periods + p;
     job.results[at + 2 * periods] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
     peaks.sort();
-    job.results[at + periods] = scale * peaks[angleCount - 1];
-    const middle = angleCount >> 1;
-    job.results[at] =
-      scale * (angleCount % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
+    job.results[at + periods] = scale * peaks[angles - 1];
+    const middle = angles >> 1;
+    job.results[at] = scale * (angles % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
   }
-}
-
-/** The components of a job as one thread steps them: with their roughness, peak resultant and angles. */
-interface ComponentPair {
-  a1: Float64Array;
-  a2: Float64Array;
-  dtS: number;
-  roughness: number;
-  pgaMS2: number;
-  cos: Float64Array;
-  sin: Float64Array;
-  wasm: WasmRotD | undefined;
-}
-
-/** Number of angles in [0°, 180°) for a step that divides 180° into whole steps, at most 1°. */
-function checkAngleStep(angleStepDeg: number): number {
-  const count = Math.round(180 / angleStepDeg);
-  if (!(angleStepDeg > 0) || angleStepDeg > 1 || Math.abs(count * angleStepDeg - 180) > 1e-9) {
-    throw usageError(`angle step ${angleStepDeg}°: use at most 1° and a divisor of 180° (1, 0.5, 0.25, …)`);
-  }
-  return count;
 }
 
 function padded(samples: Float64Array, length: number): Float64Array {
@@ -229,25 +213,19 @@ function groundPeaks(
   }
 }
 
-/** Peak over the samples of |(a₁, a₂)|, m/s². */
-function peakResultant(a1: Float64Array, a2: Float64Array): number {
-  let peak = 0;
-  for (let n = 0; n < a1.length; n++) peak = Math.max(peak, Math.hypot(a1[n], a2[n]));
-  return peak;
-}
-
 /**
  * Peak |u(θ, t)| for every angle of one oscillator, m, into `peaks`. Both components are stepped
  * together with the sweep's sub-stepping; nothing is allocated inside the loops.
  */
 function oscillatorPeaks(
-  pair: ComponentPair,
-  oscillator: { periodS: number; damping: number; method: Method },
+  job: RotDJob,
+  periodS: number,
+  damping: number,
   peaks: Float64Array,
   thresholds: Float64Array,
+  wasm: WasmRotD | undefined,
 ): void {
-  const { a1, a2, dtS, roughness, cos, sin, wasm } = pair;
-  const { periodS, damping, method } = oscillator;
+  const { a1, a2, dtS, roughness, method, cos, sin } = job;
   const durationS = (a1.length - 1) * dtS;
   // The sweep's execution plan: the method's sub-steps, composed down to the steps that the
   // Hermite refinement needs (executionPlan in substeps.ts), so PSA here is the sweep's PSA.
@@ -265,7 +243,7 @@ function oscillatorPeaks(
   const angles = peaks.length;
   const inverse = 1 / substeps;
   // The sweep's refinement rule (see refinementThresholds), with the ground's peak over all directions.
-  const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: pair.pgaMS2, jerkMS3: 0 });
+  const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: job.resultantMS2, jerkMS3: 0 });
   const R = rule.ratio;
   const offset = rule.displacementOffset;
   if (wasm !== undefined) {
