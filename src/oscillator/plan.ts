@@ -29,8 +29,6 @@ export interface SweepPlan {
   dtS: number;
   periodsS: Float64Array;
   dampings: Float64Array;
-  /** Peak |ground acceleration|, the SA of rigid oscillators. */
-  pgaMS2: number;
   bounds: GroundBounds;
   /**
    * Groups of at most GROUP_WIDTH oscillators with the same sub-step count, in sub-step order;
@@ -62,8 +60,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const runs = prewarp
     ? Array.from(periodsS, (periodS) => (periodS === 0 ? undefined : runOf(periodS, 0)))
     : [];
-  // In sub-step order, and in index order among equal counts: by bucket, which needs no
-  // comparison function.
+  // Groups of one sub-step count each, in sub-step order, and in index order within a count.
   const buckets = new Map<number, PlannedOscillator[]>();
   for (let d = 0; d < dampings.length; d++) {
     for (let p = 0; p < periodsS.length; p++) {
@@ -84,7 +81,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
       groups.push(bucket.slice(start, start + GROUP_WIDTH));
     }
   }
-  return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups };
+  return { method, prewarp, dtS, periodsS, dampings, bounds, groups };
 }
 
 /** Oscillator-steps the whole plan executes over a record of `samples` values. */
