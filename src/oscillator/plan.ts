@@ -1,5 +1,5 @@
 import { inputError } from '../base/errors.js';
-import { COEFFICIENT as C, COEFFICIENT_STRIDE, GROUP_WIDTH } from './layout.js';
+import { COEFFICIENT as C, COEFFICIENT_STRIDE, GROUP_WIDTH, STEP_KEYS } from './layout.js';
 import { refinementThresholds } from './peak.js';
 import { type GroundBounds, recordStatistics } from './record-statistics.js';
 import { executedStepCoefficients, type Method } from './recurrence.js';
@@ -90,8 +90,6 @@ export function plannedSteps(plan: SweepPlan, samples: number): number {
   for (const group of plan.groups) steps += group.length * group[0].substeps * (samples - 1);
   return steps;
 }
-
-const STEP_KEYS = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1'] as const;
 
 /** Write one oscillator's row of coefficients (layout.ts) into slot `slot` of the packed array. */
 export function packCoefficients(

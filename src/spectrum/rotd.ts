@@ -6,7 +6,7 @@ import { checkSweep } from '../oscillator/plan.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
 import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
 import { executionPlan, substepCount } from '../oscillator/substeps.js';
-import type { SweepKernel } from '../oscillator/sweep.js';
+import type { SweepKernel, SweepOptions } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
 import { recordInfo, type SpectrumRecordInfo } from './spectrum.js';
 
@@ -32,14 +32,10 @@ export interface RotDSpectra {
   curves: RotDCurve[];
 }
 
-export interface RotDOptions {
-  periodsS: ArrayLike<number>;
-  dampings: ArrayLike<number>;
-  method?: Method;
+/** The grid, the method and the kernel (both kernels give the same bits) as for a sweep. */
+export interface RotDOptions extends Pick<SweepOptions, 'periodsS' | 'dampings' | 'method' | 'kernel'> {
   /** Rotation step, degrees, dividing 180 into a whole number of steps; default 1. */
   angleStepDeg?: number;
-  /** Kernel: 'auto' (WebAssembly SIMD where the engine has it), 'wasm' or 'js' (same bits). */
-  kernel?: SweepKernel;
 }
 
 /**

@@ -1,7 +1,8 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Method } from '../oscillator/recurrence.js';
-import { type Peaks, type SweepKernel, sweepOscillators } from '../oscillator/sweep.js';
+import { type Peaks, type SweepOptions, sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord, ProcessingStep } from '../record/record.js';
+import type { ParallelSweepOptions } from '../threads/sweep-pool.js';
 
 /** The response spectra of one record at one damping ratio. All arrays are indexed by period. */
 export interface SpectrumCurve {
@@ -39,28 +40,16 @@ export interface Spectrum {
   oscillatorSteps: number;
 }
 
-export interface SpectrumOptions {
-  periodsS: ArrayLike<number>;
-  dampings: ArrayLike<number>;
-  method?: Method;
-}
+export type SpectrumOptions = Pick<SweepOptions, 'periodsS' | 'dampings' | 'method'>;
 
 /** Sweep the record's oscillators and assemble SD, PSV, PSA, SV and SA for each damping ratio. */
 export function responseSpectrum(record: GroundRecord, options: SpectrumOptions): Spectrum {
-  const peaks = sweepOscillators(record.accelMS2, record.dtS, options);
-  return assembleSpectrum(record, peaks);
+  return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options));
 }
 
 export { PARALLEL_MIN_OSCILLATOR_STEPS } from '../oscillator/plan.js';
 
-export interface ParallelSpectrumOptions extends SpectrumOptions {
-  kernel?: SweepKernel;
-  /**
-   * Threads, this one included: a number, or 'auto' (the default): all cores for a sweep of at
-   * least PARALLEL_MIN_OSCILLATOR_STEPS oscillator-steps, this thread alone below.
-   */
-  threads?: 'auto' | number;
-}
+export type ParallelSpectrumOptions = SpectrumOptions & Pick<ParallelSweepOptions, 'kernel' | 'threads'>;
 
 /**
  * responseSpectrum with its sweep split over threads as `threads` says (sweepOscillatorsParallel);
