@@ -1,6 +1,6 @@
 import { inputError } from '../base/errors.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
-import { type Method, prewarpedOscillator, stepCoefficients } from '../oscillator/recurrence.js';
+import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
 import { substepCount } from '../oscillator/substeps.js';
 import { type GroundRecord, withProcessing } from '../record/record.js';
 import { interpolateSpectrum } from './interpolate.js';
@@ -26,10 +26,10 @@ export interface BuildingMode {
  *
  *   a_floor(t) = a_g(t) + Γφ·q''(t),   q'' = −a_g − 2ζ_b ω_b q' − ω_b² q.
  *
- * q is stepped with the oscillator recurrences (stepCoefficients, substepCount, ground acceleration
- * linear between samples) and a_floor is sampled at the record's own times. Higher modes, soil–
- * structure interaction, nonlinear response of the building and feedback of the equipment on the
- * floor are not represented.
+ * q is stepped with the sweep's pre-warped recurrences (executedStepCoefficients, substepCount,
+ * ground acceleration linear between samples) and a_floor is sampled at the record's own times.
+ * Higher modes, soil–structure interaction, nonlinear response of the building and feedback of
+ * the equipment on the floor are not represented.
  */
 export function floorRecord(ground: GroundRecord, building: BuildingMode): GroundRecord {
   checkBuilding(building);
@@ -41,9 +41,7 @@ export function floorRecord(ground: GroundRecord, building: BuildingMode): Groun
     durationS,
     roughness: recordRoughness(ground.accelMS2),
   });
-  const h = ground.dtS / substeps;
-  const warped = prewarpedOscillator(method, omega, building.damping, h);
-  const k = stepCoefficients(method, warped.omegaRadS, warped.damping, h);
+  const k = executedStepCoefficients(method, omega, building.damping, ground.dtS / substeps);
   const ag = ground.accelMS2;
   const floor = new Float64Array(ag.length);
   const c = 2 * building.damping * omega;

@@ -23,21 +23,17 @@ export interface ScaleResult {
   criterion: string;
 }
 
-export interface ScaleOptions {
-  /** Period range [from, to], s, both included. Default: every grid period above 0 the target covers. */
-  rangeS?: readonly [number, number];
-}
-
 /**
  * The amplitude factor c minimising Σ (ln target(Tᵢ) − ln(c · PSA(Tᵢ)))² over the grid periods Tᵢ
  * in the range, which is c = exp(mean(ln target − ln PSA)) (least squares on log spectral values;
- * common practice for amplitude scaling of records to a target spectrum).
+ * common practice for amplitude scaling of records to a target spectrum). `rangeS` is the period
+ * range [from, to], s, both included; by default every grid period above 0 the target covers.
  */
 export function scaleToTarget(
   periodsS: ArrayLike<number>,
   recordPsaG: ArrayLike<number>,
   target: DesignSpectrum,
-  options: ScaleOptions = {},
+  options: { rangeS?: readonly [number, number] } = {},
 ): ScaleResult {
   const used: number[] = [];
   const range = options.rangeS;

@@ -15,20 +15,15 @@ const SIMD_PROBE = Uint8Array.from(
 
 let simdSupported: boolean | undefined;
 
-/** Whether `validate` (WebAssembly.validate by default) accepts a SIMD module; false where it throws. */
-export function detectWasmSimd(
-  validate: (bytes: Uint8Array<ArrayBuffer>) => boolean = (bytes) => WebAssembly.validate(bytes),
-): boolean {
-  try {
-    return validate(SIMD_PROBE);
-  } catch {
-    return false;
-  }
-}
-
-/** Whether this engine runs WebAssembly SIMD (detected once). */
+/** Whether this engine runs WebAssembly SIMD (detected once, by validating SIMD_PROBE). */
 export function wasmSimdSupported(): boolean {
-  simdSupported ??= detectWasmSimd();
+  if (simdSupported === undefined) {
+    try {
+      simdSupported = WebAssembly.validate(SIMD_PROBE);
+    } catch {
+      simdSupported = false;
+    }
+  }
   return simdSupported;
 }
 
@@ -44,11 +39,9 @@ interface KernelExports {
 }
 
 /**
- * The thread's instance of the kernel, shared by every WasmSweeper and WasmRotD: a new instance
- * per record would map and unmap a fresh linear memory each time, which in a pool of threads
- * costs every thread of the process (the mappings are the process's), and the memory would start
- * cold. Its memory grows to the largest need so far and stays; `holder` is the sweeper or RotD
- * loop whose inputs it holds.
+ * The thread's one instance of the kernel, shared by every WasmSweeper and WasmRotD (an instance
+ * per record would map a fresh, cold linear memory each time, and mappings cost every thread of
+ * the process); its memory grows to the largest need so far. `holder`: whose inputs it holds.
  */
 export interface KernelInstance {
   exports: KernelExports;
