@@ -23,17 +23,13 @@ export const MIN_STEPS_PER_PERIOD = 10;
 
 /**
  * Each method's rule: `prewarped` steps per period; the textbook rule's K and N₀ (`k`,
- * `baseSteps`); and `recordFactor` F, for the ⌈F·R²⌉ sub-steps per record step that a method needs
- * whatever the period, because of how it takes in the excitation between samples (R the record's
- * roughness). Average acceleration enters the excitation as the mean of its ends, an error of
- * order (Ωh)² for content at Ω; on sines near the record's Nyquist frequency, with no sub-steps,
- * its long-period peaks were 12–40% off the exact response to the linearly interpolated record
- * (Δt = 0.02 s). Calibrated on sines from 5 Hz to 24.5 Hz at Δt = 0.02 s: ⌈5R²⌉ keep them within
- * 0.4% (R = 0.62 at 5 Hz takes 2; R = 2 takes 20). Real records' content lies far below the
- * Nyquist frequency (R of 0.1–0.5), so they rarely need more than one. Linear acceleration (which
- * assumes the linear variation the record has) and piecewise-exact (exact for it) need none for
- * this; piecewise-exact takes ⌈R²/2⌉ so that its Hermite refinement also follows content near the
- * Nyquist frequency.
+ * `baseSteps`); and `recordFactor` F, for the ⌈F·R²⌉ sub-steps per record step (R the record's
+ * roughness) that a method needs whatever the period. Average acceleration takes in the
+ * excitation as the mean of its ends, an error of order (Ωh)² for content at Ω: on sines of
+ * 5–24.5 Hz at Δt = 0.02 s its long-period peaks were 12–40% off with no sub-steps, within 0.4%
+ * with ⌈5R²⌉ (real records, R of 0.1–0.5, rarely need more than one). Linear acceleration and
+ * piecewise-exact take in the linear interpolation exactly; piecewise-exact takes ⌈R²/2⌉ so that
+ * its Hermite refinement follows content near the Nyquist frequency.
  */
 export const SUBSTEP_RULE: Readonly<
   Record<Method, { prewarped: number; k: number; baseSteps: number; recordFactor: number }>

@@ -79,9 +79,7 @@ export function rotdThreads(periods: number, dampings: number, samples: number):
 /** Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). */
 export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
   const n = peaks.periodsS.length;
-  const pgaMS2 = record.pgaMS2;
-  const curves: SpectrumCurve[] = [];
-  for (let d = 0; d < peaks.dampings.length; d++) {
+  const curves = Array.from(peaks.dampings, (damping, d): SpectrumCurve => {
     const sdM = peaks.sdM.slice(d * n, (d + 1) * n);
     const svMS = peaks.svMS.slice(d * n, (d + 1) * n);
     const saMS2 = peaks.saMS2.slice(d * n, (d + 1) * n);
@@ -90,15 +88,15 @@ export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
     for (let p = 0; p < n; p++) {
       const t = peaks.periodsS[p];
       if (t === 0) {
-        psaMS2[p] = pgaMS2;
+        psaMS2[p] = record.pgaMS2;
         continue;
       }
       const omega = (2 * Math.PI) / t;
       psvMS[p] = omega * sdM[p];
       psaMS2[p] = omega * omega * sdM[p];
     }
-    curves.push({ damping: peaks.dampings[d], sdM, psvMS, psaMS2, svMS, saMS2 });
-  }
+    return { damping, sdM, psvMS, psaMS2, svMS, saMS2 };
+  });
   return {
     record: recordInfo(record),
     method: peaks.method,

@@ -7,10 +7,9 @@ import { hermiteFold } from '../peak.js';
  * rest and writes its peaks |u|, |v| and |s| (s = −(c·v + k·u), the absolute acceleration) to
  * peaks[at..at + 2].
  *
- * The record is stepped twice with the same arithmetic, so both passes see the same states:
- *   1. the sample peaks P, the largest values at the steps;
- *   2. the cubic Hermite peak inside every step whose new end passes the threshold P·r − d of
- *      refinementThresholds (peak.ts), folded into P. A step below it cannot hold a higher peak.
+ * The record is stepped twice with the same arithmetic: pass 1 finds the sample peaks P; pass 2
+ * folds into P the cubic Hermite peak inside every step whose new end passes the threshold
+ * P·r − d of refinementThresholds (peak.ts), below which a step cannot hold a higher peak.
  * With `substeps` steps of `stepS` per sample interval the inputs are the record's linear
  * interpolation, w/substeps of the way from sample s to sample s + 1. `row` holds the
  * oscillator's packed coefficients (layout.ts).
