@@ -165,9 +165,7 @@ export function ec8Spectrum(parameters: Ec8Parameters): DesignSpectrum {
 
 /** The spectrum at every period of a grid, g. */
 export function designPsaG(spectrum: DesignSpectrum, periodsS: ArrayLike<number>): Float64Array {
-  const out = new Float64Array(periodsS.length);
-  for (let i = 0; i < periodsS.length; i++) out[i] = spectrum.psaG(periodsS[i]);
-  return out;
+  return Float64Array.from(periodsS, (periodS) => spectrum.psaG(periodS));
 }
 
 /** Whether `periodS` lies where the spectrum is defined. */

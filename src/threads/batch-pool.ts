@@ -30,7 +30,7 @@ export async function runTasks(
     onDone(outcome);
   };
   const data: BatchWorkerData = { tasks, counter: new Int32Array(new SharedArrayBuffer(4)) };
-  const script = workerScript(import.meta.url, 'threads', 'batch-worker.js');
+  const script = workerScript('batch-worker.js');
   const threads = Math.max(1, Math.min(jobs, tasks.length));
   const workers = Array.from({ length: threads - 1 }, () => {
     const worker = startWorker(script, { workerData: data });

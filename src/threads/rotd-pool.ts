@@ -43,7 +43,7 @@ export async function rotDSpectraParallel(
  */
 export class RotDPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
-    super(threads, workerScript(import.meta.url, 'threads', 'rotd-worker.js'));
+    super(threads, workerScript('pool-worker.js'));
   }
 
   /** rotDSpectra of the pair, bit for bit, computed by all the pool's threads. */

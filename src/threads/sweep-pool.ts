@@ -55,7 +55,7 @@ export function runClaimedGroups(job: SharedSweepJob): void {
  */
 export class SweepPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
-    super(threads, workerScript(import.meta.url, 'threads', 'sweep-worker.js'));
+    super(threads, workerScript('pool-worker.js'));
   }
 
   /**

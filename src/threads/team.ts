@@ -2,15 +2,16 @@ import { parentPort, Worker } from 'node:worker_threads';
 import { inputError, QuakesweepError } from '../base/errors.js';
 
 /**
- * The worker script `file` of src/`folder`/ for the module at `moduleUrl`: beside it in dist/; the
- * build under a test runner, where modules run from their TypeScript source; and the bundled
- * worker (dist/cli/workers/, CommonJS) from the CLI bundle dist/cli/quakesweep.cjs, where every
- * module's URL is the bundle's (see scripts/build-cli.mjs).
+ * The worker script `file` of this folder: beside this module in dist/; the build under a test
+ * runner, where modules run from their TypeScript source; and the bundled worker
+ * (dist/cli/workers/, CommonJS) from the CLI bundle dist/cli/quakesweep.cjs, where every module's
+ * URL is the bundle's (see scripts/build-cli.mjs).
  */
-export function workerScript(moduleUrl: string, folder: string, file: string): URL {
-  if (moduleUrl.endsWith('.ts')) return new URL(`../../dist/${folder}/${file}`, moduleUrl);
-  if (moduleUrl.endsWith('.cjs')) return new URL(`./workers/${file.replace(/\.js$/, '.cjs')}`, moduleUrl);
-  return new URL(`../${folder}/${file}`, moduleUrl);
+export function workerScript(file: string): URL {
+  const here = import.meta.url;
+  if (here.endsWith('.ts')) return new URL(`../../dist/threads/${file}`, here);
+  if (here.endsWith('.cjs')) return new URL(`./workers/${file.replace(/\.js$/, '.cjs')}`, here);
+  return new URL(`./${file}`, here);
 }
 
 /**
