@@ -61,22 +61,14 @@ export function scaleToTarget(
     sum += Math.log(target.psaG(t)) - Math.log(recordPsaG[i]);
   }
   const factor = Math.exp(sum / used.length);
-  let total = 0;
-  let minRatio = Number.POSITIVE_INFINITY;
-  let maxRatio = 0;
-  for (const i of used) {
-    const ratio = (factor * recordPsaG[i]) / target.psaG(periodsS[i]);
-    total += ratio;
-    minRatio = Math.min(minRatio, ratio);
-    maxRatio = Math.max(maxRatio, ratio);
-  }
+  const ratios = used.map((i) => (factor * recordPsaG[i]) / target.psaG(periodsS[i]));
   return {
     factor,
     rangeS: [periodsS[used[0]], periodsS[used[used.length - 1]]],
     periodCount: used.length,
-    meanRatio: total / used.length,
-    minRatio,
-    maxRatio,
+    meanRatio: ratios.reduce((sum, ratio) => sum + ratio, 0) / used.length,
+    minRatio: Math.min(...ratios),
+    maxRatio: Math.max(...ratios),
     criterion: SCALE_CRITERION,
   };
 }
