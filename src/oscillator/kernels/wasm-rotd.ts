@@ -9,26 +9,21 @@ export class WasmRotD implements KernelInputs {
   private readonly inputs: { a1: Float64Array; a2: Float64Array; cos: Float64Array; sin: Float64Array };
   /** The angles as the kernel steps them, an even count: a padding angle has cos = sin = 0. */
   private readonly lanes: number;
-  private readonly at: Record<
-    'coefficients' | 'cos' | 'sin' | 'peaks' | 'thresholds' | 'a1' | 'a2' | 'end',
-    number
-  >;
+  private readonly at;
 
   constructor(a1: Float64Array, a2: Float64Array, cos: Float64Array, sin: Float64Array) {
     this.inputs = { a1, a2, cos, sin };
     this.lanes = cos.length + (cos.length % 2);
     const lane = this.lanes * 8;
-    const [coefficients, cosAt, sinAt, peaks, thresholds, a1At, a2At, end] = heapAreas(
-      this.kernel,
-      8 * 8,
-      lane,
-      lane,
-      lane,
-      lane,
-      a1.length * 8,
-      a2.length * 8,
-    );
-    this.at = { coefficients, cos: cosAt, sin: sinAt, peaks, thresholds, a1: a1At, a2: a2At, end };
+    this.at = heapAreas(this.kernel, {
+      coefficients: 8 * 8,
+      cos: lane,
+      sin: lane,
+      peaks: lane,
+      thresholds: lane,
+      a1: a1.length * 8,
+      a2: a2.length * 8,
+    });
   }
 
   load(view: Float64Array): void {

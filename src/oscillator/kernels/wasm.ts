@@ -74,10 +74,16 @@ export function prepareWasmKernel(): void {
   if (wasmSimdSupported()) kernelInstance();
 }
 
-/** Byte offsets of areas of `bytes` each, 16-byte aligned, from the kernel's heap base; the last is their end. */
-export function heapAreas(kernel: KernelInstance, ...bytes: number[]): number[] {
-  const at = [kernel.exports.heapBase()];
-  for (const size of bytes) at.push(at[at.length - 1] + Math.ceil(size / 16) * 16);
+/** Byte offsets of areas of the given sizes, 16-byte aligned, from the kernel's heap base, and their end. */
+export function heapAreas<Area extends string>(
+  kernel: KernelInstance,
+  bytes: Record<Area, number>,
+): Record<Area | 'end', number> {
+  const at = { end: kernel.exports.heapBase() } as Record<Area | 'end', number>;
+  for (const area of Object.keys(bytes) as Area[]) {
+    at[area] = at.end;
+    at.end += Math.ceil(bytes[area] / 16) * 16;
+  }
   return at;
 }
 
@@ -105,32 +111,24 @@ export function kernelMemory(kernel: KernelInstance, bytes: number, holder: Kern
  */
 export class WasmSweeper implements KernelInputs {
   private readonly kernel = kernelInstance();
-  private readonly accelMS2: Float64Array;
-  private readonly coefficients: number;
-  private readonly state: number;
-  private readonly peaks: number;
-  private readonly buffer: number;
-  private readonly record: number;
-  /** Pass 1's checkpoints, at the end of the layout; memory grows when a group needs more. */
-  private readonly checkpoints: number;
+  /** The areas of the layout; pass 1's checkpoints follow them (memory grows when a group needs more). */
+  private readonly at;
 
-  constructor(accelMS2: Float64Array) {
-    this.accelMS2 = accelMS2;
-    [this.coefficients, this.state, this.peaks, this.buffer, this.record, this.checkpoints] = heapAreas(
-      this.kernel,
-      GROUP_WIDTH * COEFFICIENT_STRIDE * 8,
-      GROUP_WIDTH * STATE_STRIDE * 8,
-      GROUP_WIDTH * PEAK_STRIDE * 8,
-      (STRETCH_STEPS + 1) * 8,
+  constructor(private readonly accelMS2: Float64Array) {
+    this.at = heapAreas(this.kernel, {
+      coefficients: GROUP_WIDTH * COEFFICIENT_STRIDE * 8,
+      state: GROUP_WIDTH * STATE_STRIDE * 8,
+      peaks: GROUP_WIDTH * PEAK_STRIDE * 8,
+      buffer: (STRETCH_STEPS + 1) * 8,
       // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
-      accelMS2.length * 8 + 16,
-    );
+      record: accelMS2.length * 8 + 16,
+    });
   }
 
   load(view: Float64Array): void {
-    const at = this.record / 8 + this.accelMS2.length;
-    view.set(this.accelMS2, this.record / 8);
-    view.fill(0, at, at + 2);
+    const end = this.at.record / 8 + this.accelMS2.length;
+    view.set(this.accelMS2, this.at.record / 8);
+    view.fill(0, end, end + 2);
   }
 
   /**
@@ -150,12 +148,9 @@ export class WasmSweeper implements KernelInputs {
     const samples = this.accelMS2.length;
     const blockSteps = checkpointBlockSteps((samples - 1) * substeps);
     const blocks = Math.ceil(((samples - 1) * substeps) / blockSteps);
-    const view = kernelMemory(
-      this.kernel,
-      this.checkpoints + blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8,
-      this,
-    );
-    const c = this.coefficients / 8;
+    const { at } = this;
+    const view = kernelMemory(this.kernel, at.end + blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8, this);
+    const c = at.coefficients / 8;
     // Lanes side by side (oscillators 0 and 1 in the first vector, 2 and 3 in the second); a
     // short group repeats its last oscillator.
     for (let i = 0; i < GROUP_WIDTH; i++) {
@@ -164,22 +159,22 @@ export class WasmSweeper implements KernelInputs {
       for (let q = 0; q < COEFFICIENT_STRIDE; q++) view[lane + 2 * q] = packed[from + q];
     }
     this.kernel.exports.runGroup(
-      this.record,
+      at.record,
       samples,
       substeps,
       stepS,
-      this.coefficients,
-      this.state,
-      this.peaks,
-      this.buffer,
+      at.coefficients,
+      at.state,
+      at.peaks,
+      at.buffer,
       STRETCH_STEPS,
       blockSteps,
-      this.checkpoints,
+      at.end,
       symmetric ? 1 : 0,
       // A group of one or two oscillators fills one vector: step that one only.
       count <= 2 ? 1 : 0,
     );
-    const p = this.peaks / 8;
+    const p = at.peaks / 8;
     for (let i = 0; i < count; i++) {
       const lane = p + (i >> 1) * PEAK_STRIDE * 2 + (i & 1);
       for (let q = 0; q < PEAK_STRIDE; q++) out[i * PEAK_STRIDE + q] = view[lane + 2 * q];
