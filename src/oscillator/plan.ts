@@ -125,12 +125,10 @@ export function checkSweep(
   if (accelMS2.length < 2) throw inputError('a sweep needs a record of at least 2 samples');
   if (periodsS.length === 0) throw inputError('the period grid is empty');
   if (dampings.length === 0) throw inputError('the damping list is empty');
-  for (const t of periodsS) {
-    if (!(t >= 0) || !Number.isFinite(t)) throw inputError(`periods must be finite and ≥ 0 s, got ${t}`);
-  }
-  for (const z of dampings) {
-    if (!(z >= 0) || !Number.isFinite(z)) throw inputError(`damping ratios must be finite and ≥ 0, got ${z}`);
-  }
+  const period = periodsS.find((t) => !(t >= 0) || !Number.isFinite(t));
+  if (period !== undefined) throw inputError(`periods must be finite and ≥ 0 s, got ${period}`);
+  const damping = dampings.find((z) => !(z >= 0) || !Number.isFinite(z));
+  if (damping !== undefined) throw inputError(`damping ratios must be finite and ≥ 0, got ${damping}`);
 }
 
 /**

@@ -106,24 +106,16 @@ export function broadenCurve(
 ): Float64Array {
   if (!(fraction >= 0) || !(fraction < 1))
     throw inputError(`the broadening must be a fraction 0 ≤ b < 1, got ${fraction}`);
-  const n = periodsS.length;
-  const out = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const t = periodsS[i];
-    if (t === 0) {
-      out[i] = values[i];
-      continue;
-    }
+  return Float64Array.from(periodsS, (t, i) => {
+    if (t === 0) return values[i];
     const low = t * (1 - fraction);
     const high = t / (1 - fraction);
     let peak = values[i];
-    for (let j = 0; j < n; j++) {
+    for (let j = 0; j < periodsS.length; j++) {
       if (periodsS[j] >= low && periodsS[j] <= high && values[j] > peak) peak = values[j];
     }
-    peak = Math.max(peak, valueAt(periodsS, values, low), valueAt(periodsS, values, high));
-    out[i] = peak;
-  }
-  return out;
+    return Math.max(peak, valueAt(periodsS, values, low), valueAt(periodsS, values, high));
+  });
 }
 
 /** The spectrum at a window's end, on the positive part of the grid; −∞ elsewhere (so it never wins a max). */

@@ -82,9 +82,7 @@ export class SweepPool extends ThreadTeam {
       plan,
     };
     await this.run(job, () => runClaimedGroups(job));
-    peaks.sdM.set(job.peaks.sdM);
-    peaks.svMS.set(job.peaks.svMS);
-    peaks.saMS2.set(job.peaks.saMS2);
+    for (const key of ['sdM', 'svMS', 'saMS2'] as const) peaks[key].set(job.peaks[key]);
     peaks.oscillatorSteps = plannedSteps(plan, accelMS2.length);
     return peaks;
   }
