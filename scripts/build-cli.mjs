@@ -69,9 +69,7 @@ await build({ ...common, entryPoints: [join(root, 'dist/cli/main.js')], outfile:
 // when it is called from the bundle).
 await build({
   ...common,
-  entryPoints: ['threads/sweep-worker.js', 'threads/rotd-worker.js', 'threads/batch-worker.js'].map((file) =>
-    join(root, 'dist', file),
-  ),
+  entryPoints: ['threads/pool-worker.js', 'threads/batch-worker.js'].map((file) => join(root, 'dist', file)),
   outdir: join(root, 'dist/cli/workers'),
   entryNames: '[name]',
   outExtension: { '.js': '.cjs' },

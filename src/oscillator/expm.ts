@@ -26,16 +26,12 @@ export function expm(matrix: Float64Array, n: number): Float64Array {
   for (let k = 1; k <= 18; k++) {
     multiplyInto(spare, term, scaled, n);
     for (let i = 0; i < size; i++) spare[i] = spare[i] / k;
-    const previous = term;
-    term = spare;
-    spare = previous;
+    [term, spare] = [spare, term];
     for (let i = 0; i < size; i++) result[i] += term[i];
   }
   for (let s = 0; s < squarings; s++) {
     multiplyInto(spare, result, result, n);
-    const previous = result;
-    result = spare;
-    spare = previous;
+    [result, spare] = [spare, result];
   }
   return result;
 }

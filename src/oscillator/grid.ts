@@ -60,7 +60,6 @@ export function parsePeriods(text: string): Float64Array {
   for (let i = 1; i < values.length; i++) {
     if (values[i] === values[i - 1]) throw usageError(`--periods: ${values[i]} s appears twice`);
   }
-  if (values.length === 0) throw usageError('--periods: the grid is empty');
   return Float64Array.from(values);
 }
 
@@ -90,6 +89,5 @@ export function parseDampings(text: string): Float64Array {
   for (let i = 0; i < values.length; i++) {
     if (values.indexOf(values[i]) !== i) throw usageError(`--damping: ${values[i]} appears twice`);
   }
-  if (values.length === 0) throw usageError('--damping: the list is empty');
   return Float64Array.from(values);
 }

@@ -1,31 +1,22 @@
 // The memory layout that the sweep's kernels share: read by the TypeScript here and by
 // scripts/generate-wasm-kernel.mjs (from dist/ after tsc), which writes assembly/sweep.ts with it.
 
+/** The step's recurrence uu … vp1 (see recurrence.ts), first in an oscillator's row of packed coefficients. */
+export const STEP_KEYS = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1'] as const;
+
 /**
- * Where each value sits in an oscillator's row of packed coefficients: the step's recurrence
- * uu … vp1 (see recurrence.ts), c = 2ζω and k = ω² for the absolute acceleration −(c·v + k·u),
- * and the refinement threshold's ratio r and offsets du, dv, ds for u, v and the absolute
- * acceleration (see refinementThresholds in plan.ts).
+ * The values of a row, in order: the step's, c = 2ζω and k = ω² for the absolute acceleration
+ * −(c·v + k·u), and the refinement threshold's ratio r and offsets du, dv, ds for u, v and the
+ * absolute acceleration (see refinementThresholds in peak.ts).
  */
-export const COEFFICIENT = {
-  uu: 0,
-  uv: 1,
-  up0: 2,
-  up1: 3,
-  vu: 4,
-  vv: 5,
-  vp0: 6,
-  vp1: 7,
-  c: 8,
-  k: 9,
-  ratio: 10,
-  du: 11,
-  dv: 12,
-  ds: 13,
-} as const;
+const ROW = [...STEP_KEYS, 'c', 'k', 'ratio', 'du', 'dv', 'ds'] as const;
+
+/** Where each value sits in a row. */
+export const COEFFICIENT = Object.fromEntries(ROW.map((name, i) => [name, i])) as Record<RowValue, number>;
+type RowValue = (typeof ROW)[number];
 
 /** Values in an oscillator's row of packed coefficients. */
-export const COEFFICIENT_STRIDE = 14;
+export const COEFFICIENT_STRIDE = ROW.length;
 
 /** Peaks per oscillator, in this order: |u|max (m), |v|max (m/s), |ü + a_g|max (m/s²). */
 export const PEAK_STRIDE = 3;

@@ -5,38 +5,60 @@ import type { GroundBounds } from './record-statistics.js';
  * interpolation (common practice; the cubic is exact when q is a cubic in t, and its error is
  * h⁴·max|q''''|/384 otherwise — any numerical analysis text, e.g. Burden and Faires §3.4).
  * `q0`, `q1` are the values at the ends, `dq0`, `dq1` the time derivatives, `stepS` the step.
+ * RotD's loops use it (assembly/rotd.ts repeats it); H' is taken as linear where its t² term
+ * is below 1e-12 of the sum of its terms.
  */
 export function hermitePeak(q0: number, q1: number, dq0: number, dq1: number, stepS: number): number {
   const m0 = dq0 * stepS;
   const m1 = dq1 * stepS;
-  let peak = Math.max(Math.abs(q0), Math.abs(q1));
-  // H'(t) = A t² + B t + m0 on t in [0, 1].
   const a = 6 * q0 + 3 * m0 - 6 * q1 + 3 * m1;
   const b = -6 * q0 - 4 * m0 + 6 * q1 - 2 * m1;
-  const c = m0;
-  const scale = Math.abs(a) + Math.abs(b) + Math.abs(c);
-  if (scale === 0) return peak;
-  if (Math.abs(a) <= 1e-12 * scale) {
-    if (b !== 0) peak = Math.max(peak, hermiteAbs(q0, q1, m0, m1, -c / b));
-    return peak;
-  }
-  const discriminant = b * b - 4 * a * c;
-  if (discriminant < 0) return peak;
-  const root = Math.sqrt(discriminant);
-  // Numerically stable pair of roots.
-  const qq = -0.5 * (b + (b >= 0 ? root : -root));
-  if (qq !== 0) peak = Math.max(peak, hermiteAbs(q0, q1, m0, m1, c / qq));
-  peak = Math.max(peak, hermiteAbs(q0, q1, m0, m1, qq / a));
-  return peak;
+  const linear = !(Math.abs(a) > 1e-12 * (Math.abs(a) + Math.abs(b) + Math.abs(m0)));
+  return turningPeak(Math.max(Math.abs(q0), Math.abs(q1)), q0, q1, m0, m1, a, b, linear);
 }
 
-function hermiteAbs(q0: number, q1: number, m0: number, m1: number, t: number): number {
-  if (!(t > 0 && t < 1)) return 0;
+/**
+ * `peak`, or the cubic Hermite peak of |q| inside the step if larger (as hermitePeak), for the
+ * sweep's kernels: H' is taken as linear where its t² term is below 1e-9 of the others, since it
+ * vanishes identically for Newmark average acceleration, whose velocity update is the trapezoidal
+ * rule. The SIMD kernel (scripts/wasm-kernel-loops.mjs) finds the roots the same way.
+ */
+export function hermiteFold(peak: number, q0: number, q1: number, dq0: number, dq1: number, stepS: number) {
+  const m0 = dq0 * stepS;
+  const m1 = dq1 * stepS;
+  const a = 6 * q0 + 3 * m0 - 6 * q1 + 3 * m1;
+  const b = -6 * q0 - 4 * m0 + 6 * q1 - 2 * m1;
+  return turningPeak(peak, q0, q1, m0, m1, a, b, !(Math.abs(a) > 1e-9 * (Math.abs(b) + Math.abs(m0))));
+}
+
+/** `peak`, or |H| where H'(t) = a·t² + b·t + m0 vanishes inside the step (0 < t < 1) if larger. */
+function turningPeak(
+  peak: number,
+  q0: number,
+  q1: number,
+  m0: number,
+  m1: number,
+  a: number,
+  b: number,
+  linear: boolean,
+): number {
+  if (linear) return b === 0 ? peak : hermiteAt(peak, q0, q1, m0, m1, -m0 / b);
+  const discriminant = b * b - 4 * a * m0;
+  if (!(discriminant >= 0)) return peak;
+  // Numerically stable pair of roots.
+  const qq = -0.5 * (b + (b >= 0 ? 1 : -1) * Math.sqrt(discriminant));
+  const first = hermiteAt(peak, q0, q1, m0, m1, qq / a);
+  return qq === 0 ? first : hermiteAt(first, q0, q1, m0, m1, m0 / qq);
+}
+
+/** `peak`, or |H(t)| if larger, for t inside the step (0 < t < 1). */
+function hermiteAt(peak: number, q0: number, q1: number, m0: number, m1: number, t: number): number {
+  if (!(t > 0 && t < 1)) return peak;
   const t2 = t * t;
   const t3 = t2 * t;
-  return Math.abs(
-    (2 * t3 - 3 * t2 + 1) * q0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * q1 + (t3 - t2) * m1,
-  );
+  const value =
+    (2 * t3 - 3 * t2 + 1) * q0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * q1 + (t3 - t2) * m1;
+  return Math.max(peak, Math.abs(value));
 }
 
 /**

@@ -1,5 +1,5 @@
 import { inputError } from '../base/errors.js';
-import { COEFFICIENT as C, COEFFICIENT_STRIDE, GROUP_WIDTH } from './layout.js';
+import { COEFFICIENT as C, COEFFICIENT_STRIDE, GROUP_WIDTH, STEP_KEYS } from './layout.js';
 import { refinementThresholds } from './peak.js';
 import { type GroundBounds, recordStatistics } from './record-statistics.js';
 import { executedStepCoefficients, type Method } from './recurrence.js';
@@ -29,8 +29,6 @@ export interface SweepPlan {
   dtS: number;
   periodsS: Float64Array;
   dampings: Float64Array;
-  /** Peak |ground acceleration|, the SA of rigid oscillators. */
-  pgaMS2: number;
   bounds: GroundBounds;
   /**
    * Groups of at most GROUP_WIDTH oscillators with the same sub-step count, in sub-step order;
@@ -62,8 +60,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const runs = prewarp
     ? Array.from(periodsS, (periodS) => (periodS === 0 ? undefined : runOf(periodS, 0)))
     : [];
-  // In sub-step order, and in index order among equal counts: by bucket, which needs no
-  // comparison function.
+  // Groups of one sub-step count each, in sub-step order, and in index order within a count.
   const buckets = new Map<number, PlannedOscillator[]>();
   for (let d = 0; d < dampings.length; d++) {
     for (let p = 0; p < periodsS.length; p++) {
@@ -84,7 +81,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
       groups.push(bucket.slice(start, start + GROUP_WIDTH));
     }
   }
-  return { method, prewarp, dtS, periodsS, dampings, pgaMS2: bounds.pgaMS2, bounds, groups };
+  return { method, prewarp, dtS, periodsS, dampings, bounds, groups };
 }
 
 /** Oscillator-steps the whole plan executes over a record of `samples` values. */
@@ -107,14 +104,7 @@ export function packCoefficients(
   const omega = (2 * Math.PI) / oscillator.periodS;
   const s = executedStepCoefficients(method, omega, oscillator.damping, stepS, oscillator.composed, prewarp);
   const o = slot * COEFFICIENT_STRIDE;
-  target[o + C.uu] = s.uu;
-  target[o + C.uv] = s.uv;
-  target[o + C.up0] = s.up0;
-  target[o + C.up1] = s.up1;
-  target[o + C.vu] = s.vu;
-  target[o + C.vv] = s.vv;
-  target[o + C.vp0] = s.vp0;
-  target[o + C.vp1] = s.vp1;
+  for (const key of STEP_KEYS) target[o + C[key]] = s[key];
   target[o + C.c] = 2 * oscillator.damping * omega;
   target[o + C.k] = omega * omega;
   const t = refinementThresholds(omega, 2 * oscillator.damping * omega, stepS, bounds);
@@ -124,7 +114,8 @@ export function packCoefficients(
   target[o + C.ds] = t.accelerationOffset;
 }
 
-function checkSweep(
+/** Refuse a sweep that cannot run: a bad step, a record too short, an empty or invalid grid. */
+export function checkSweep(
   accelMS2: Float64Array,
   dtS: number,
   periodsS: Float64Array,
@@ -134,12 +125,10 @@ function checkSweep(
   if (accelMS2.length < 2) throw inputError('a sweep needs a record of at least 2 samples');
   if (periodsS.length === 0) throw inputError('the period grid is empty');
   if (dampings.length === 0) throw inputError('the damping list is empty');
-  for (const t of periodsS) {
-    if (!(t >= 0) || !Number.isFinite(t)) throw inputError(`periods must be finite and ≥ 0 s, got ${t}`);
-  }
-  for (const z of dampings) {
-    if (!(z >= 0) || !Number.isFinite(z)) throw inputError(`damping ratios must be finite and ≥ 0, got ${z}`);
-  }
+  const period = periodsS.find((t) => !(t >= 0) || !Number.isFinite(t));
+  if (period !== undefined) throw inputError(`periods must be finite and ≥ 0 s, got ${period}`);
+  const damping = dampings.find((z) => !(z >= 0) || !Number.isFinite(z));
+  if (damping !== undefined) throw inputError(`damping ratios must be finite and ≥ 0, got ${damping}`);
 }
 
 /**

@@ -45,14 +45,8 @@ export function stepCoefficients(
   damping: number,
   stepS: number,
 ): StepCoefficients {
-  switch (method) {
-    case 'newmark-average':
-      return newmarkCoefficients(omegaRadS, damping, stepS, 0.5, 0.25);
-    case 'newmark-linear':
-      return newmarkCoefficients(omegaRadS, damping, stepS, 0.5, 1 / 6);
-    case 'piecewise-exact':
-      return piecewiseExactCoefficients(omegaRadS, damping, stepS);
-  }
+  if (method === 'piecewise-exact') return piecewiseExactCoefficients(omegaRadS, damping, stepS);
+  return newmarkCoefficients(omegaRadS, damping, stepS, 0.5, method === 'newmark-average' ? 0.25 : 1 / 6);
 }
 
 /**
@@ -110,17 +104,8 @@ export function piecewiseExactCoefficients(
   const c = 2 * damping * omegaRadS;
   const m = new Float64Array([0, h, 0, 0, -k * h, -c * h, -h, 0, 0, 0, 0, 1, 0, 0, 0, 0]);
   // The last column carries ṗ·h (the increment p_{n+1} − p_n) rather than ṗ, keeping M well scaled.
-  const e = expm(m, 4);
-  return {
-    uu: e[0],
-    uv: e[1],
-    up0: e[2] - e[3],
-    up1: e[3],
-    vu: e[4],
-    vv: e[5],
-    vp0: e[6] - e[7],
-    vp1: e[7],
-  };
+  const [uu, uv, e13, e14, vu, vv, e23, e24] = expm(m, 4);
+  return { uu, uv, up0: e13 - e14, up1: e14, vu, vv, vp0: e23 - e24, vp1: e24 };
 }
 
 /**

@@ -21,16 +21,27 @@ import type { Method } from './recurrence.js';
  */
 export const MIN_STEPS_PER_PERIOD = 10;
 
-export const PREWARPED_STEPS_PER_PERIOD: Readonly<Record<Method, number>> = {
-  'newmark-average': 66,
-  'newmark-linear': 38,
-  'piecewise-exact': MIN_STEPS_PER_PERIOD,
-};
-
-export const TEXTBOOK_SUBSTEP_RULE: Readonly<Record<Method, { k: number; baseSteps: number }>> = {
-  'newmark-average': { k: 2100, baseSteps: 71 },
-  'newmark-linear': { k: 1050, baseSteps: 39 },
-  'piecewise-exact': { k: 0, baseSteps: MIN_STEPS_PER_PERIOD },
+/**
+ * Each method's rule: `prewarped` steps per period; the textbook rule's K and N₀ (`k`,
+ * `baseSteps`); and `recordFactor` F, for the ⌈F·R²⌉ sub-steps per record step (R the record's
+ * roughness) that a method needs whatever the period. Average acceleration takes in the
+ * excitation as the mean of its ends, an error of order (Ωh)² for content at Ω: on sines of
+ * 5–24.5 Hz at Δt = 0.02 s its long-period peaks were 12–40% off with no sub-steps, within 0.4%
+ * with ⌈5R²⌉ (real records, R of 0.1–0.5, rarely need more than one). Linear acceleration and
+ * piecewise-exact take in the linear interpolation exactly; piecewise-exact takes ⌈R²/2⌉ so that
+ * its Hermite refinement follows content near the Nyquist frequency.
+ */
+export const SUBSTEP_RULE: Readonly<
+  Record<Method, { prewarped: number; k: number; baseSteps: number; recordFactor: number }>
+> = {
+  'newmark-average': { prewarped: 66, k: 2100, baseSteps: 71, recordFactor: 5 },
+  'newmark-linear': { prewarped: 38, k: 1050, baseSteps: 39, recordFactor: 0 },
+  'piecewise-exact': {
+    prewarped: MIN_STEPS_PER_PERIOD,
+    k: 0,
+    baseSteps: MIN_STEPS_PER_PERIOD,
+    recordFactor: 0.5,
+  },
 };
 
 export interface SubstepContext {
@@ -46,39 +57,20 @@ export interface SubstepContext {
   stepsPerPeriod?: number;
 }
 
-/**
- * Sub-steps per record step that a method needs whatever the oscillator's period, because of
- * how it takes in the excitation between samples. Average acceleration enters the excitation as
- * the mean of its ends, an error of order (Ωh)² for content at Ω; on sines near the record's
- * Nyquist frequency, with no sub-steps, its long-period peaks were 12–40% off the exact response
- * to the linearly interpolated record (Δt = 0.02 s). Calibrated on sines from 5 Hz to 24.5 Hz at
- * Δt = 0.02 s: ⌈5R²⌉ sub-steps keep them within 0.4% (R = 0.62 at 5 Hz takes 2; R = 2 takes 20).
- * Real records' content lies far below the Nyquist frequency (R of 0.1–0.5), so they rarely need
- * more than one. Linear acceleration (which assumes the linear variation the record has) and
- * piecewise-exact (exact for it) need none for this; piecewise-exact takes ⌈R²/2⌉ so that its
- * Hermite refinement between steps also follows content near the Nyquist frequency.
- */
-export const RECORD_SUBSTEP_FACTOR: Readonly<Record<Method, number>> = {
-  'newmark-average': 5,
-  'newmark-linear': 0,
-  'piecewise-exact': 0.5,
-};
-
+/** Sub-steps per record step that `method` needs whatever the period (see SUBSTEP_RULE). */
 export function recordSubsteps(method: Method, roughness: number): number {
-  return Math.max(1, Math.ceil(RECORD_SUBSTEP_FACTOR[method] * roughness * roughness - 1e-9));
+  return Math.max(1, Math.ceil(SUBSTEP_RULE[method].recordFactor * roughness * roughness - 1e-9));
 }
 
 /** Steps per natural period the rule asks of `method` for this oscillator. */
 export function stepsPerPeriod(method: Method, periodS: number, context: SubstepContext): number {
-  let rule: number;
-  if (context.prewarp ?? true) {
-    rule = PREWARPED_STEPS_PER_PERIOD[method];
-  } else {
+  const { prewarped, k, baseSteps } = SUBSTEP_RULE[method];
+  let rule = prewarped;
+  if (context.prewarp === false) {
     const cyclesRemembered = Math.min(
       context.durationS / periodS,
       context.damping > 0 ? 1 / (2 * Math.PI * context.damping) : Number.POSITIVE_INFINITY,
     );
-    const { k, baseSteps } = TEXTBOOK_SUBSTEP_RULE[method];
     rule = Math.max(MIN_STEPS_PER_PERIOD, Math.sqrt(k * cyclesRemembered + baseSteps * baseSteps));
   }
   return Math.max(rule, context.stepsPerPeriod ?? 0);

@@ -74,7 +74,7 @@ export function emptyPeaks(plan: SweepPlan): Peaks {
   };
   for (let d = 0; d < plan.dampings.length; d++) {
     for (let p = 0; p < plan.periodsS.length; p++) {
-      if (plan.periodsS[p] === 0) peaks.saMS2[d * plan.periodsS.length + p] = plan.pgaMS2; // rigid: moves with the ground
+      if (plan.periodsS[p] === 0) peaks.saMS2[d * plan.periodsS.length + p] = plan.bounds.pgaMS2; // rigid: moves with the ground
     }
   }
   return peaks;

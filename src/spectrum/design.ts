@@ -1,14 +1,12 @@
 import { inputError, usageError } from '../base/errors.js';
 
-/** Where a design spectrum comes from. */
-export type DesignCode = 'asce7-16' | 'ec8' | 'table';
-
 /**
  * A design spectrum: pseudo-spectral acceleration in g as a function of the period, over the
  * periods where it is defined. Evaluating it outside [minPeriodS, maxPeriodS] is an error.
  */
 export interface DesignSpectrum {
-  code: DesignCode;
+  /** Where it comes from. */
+  code: 'asce7-16' | 'ec8' | 'table';
   /** One line for a reviewer: the standard, clause and parameters. */
   description: string;
   /** The defining parameters (g, s, fractions), as written to outputs. */
@@ -76,19 +74,14 @@ export type Ec8Ground = 'A' | 'B' | 'C' | 'D' | 'E';
 
 export const EC8_GROUNDS: readonly Ec8Ground[] = ['A', 'B', 'C', 'D', 'E'];
 
-/** Soil factor S and corner periods T_B, T_C, T_D (s) of one spectrum type and ground type. */
-export interface Ec8Corners {
-  s: number;
-  tbS: number;
-  tcS: number;
-  tdS: number;
-}
-
 /**
- * Recommended values of EN 1998-1:2004 Table 3.2 (Type 1, larger-magnitude events) and Table 3.3
- * (Type 2, M_s ≤ 5.5). A National Annex may set other values; these are the recommended ones.
+ * Soil factor S and corner periods T_B, T_C, T_D (s): the recommended values of EN 1998-1:2004
+ * Table 3.2 (Type 1, larger-magnitude events) and Table 3.3 (Type 2, M_s ≤ 5.5). A National Annex
+ * may set other values.
  */
-export const EC8_CORNERS: Readonly<Record<1 | 2, Readonly<Record<Ec8Ground, Ec8Corners>>>> = {
+export const EC8_CORNERS: Readonly<
+  Record<1 | 2, Readonly<Record<Ec8Ground, { s: number; tbS: number; tcS: number; tdS: number }>>>
+> = {
   1: {
     A: { s: 1.0, tbS: 0.15, tcS: 0.4, tdS: 2.0 },
     B: { s: 1.2, tbS: 0.15, tcS: 0.5, tdS: 2.0 },
@@ -156,17 +149,7 @@ export function ec8Spectrum(parameters: Ec8Parameters): DesignSpectrum {
   return {
     code: 'ec8',
     description: `EN 1998-1 §3.2.2.2 horizontal elastic spectrum, Type ${type}, ground ${ground}: a_g = ${agG} g, S = ${s}, T_B = ${tbS} s, T_C = ${tcS} s, T_D = ${tdS} s, ξ = ${round(100 * damping)}% (η = ${round(eta)}); recommended Table 3.2/3.3 values`,
-    parameters: {
-      type,
-      ground,
-      ag_g: agG,
-      damping,
-      eta,
-      s,
-      tb_s: tbS,
-      tc_s: tcS,
-      td_s: tdS,
-    },
+    parameters: { type, ground, ag_g: agG, damping, eta, s, tb_s: tbS, tc_s: tcS, td_s: tdS },
     damping,
     minPeriodS: 0,
     maxPeriodS: EC8_MAX_PERIOD_S,
@@ -182,9 +165,7 @@ export function ec8Spectrum(parameters: Ec8Parameters): DesignSpectrum {
 
 /** The spectrum at every period of a grid, g. */
 export function designPsaG(spectrum: DesignSpectrum, periodsS: ArrayLike<number>): Float64Array {
-  const out = new Float64Array(periodsS.length);
-  for (let i = 0; i < periodsS.length; i++) out[i] = spectrum.psaG(periodsS[i]);
-  return out;
+  return Float64Array.from(periodsS, (periodS) => spectrum.psaG(periodS));
 }
 
 /** Whether `periodS` lies where the spectrum is defined. */

@@ -1,6 +1,6 @@
 import { inputError } from '../base/errors.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
-import { type Method, prewarpedOscillator, stepCoefficients } from '../oscillator/recurrence.js';
+import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
 import { substepCount } from '../oscillator/substeps.js';
 import { type GroundRecord, withProcessing } from '../record/record.js';
 import { interpolateSpectrum } from './interpolate.js';
@@ -26,10 +26,10 @@ export interface BuildingMode {
  *
  *   a_floor(t) = a_g(t) + Γφ·q''(t),   q'' = −a_g − 2ζ_b ω_b q' − ω_b² q.
  *
- * q is stepped with the oscillator recurrences (stepCoefficients, substepCount, ground acceleration
- * linear between samples) and a_floor is sampled at the record's own times. Higher modes, soil–
- * structure interaction, nonlinear response of the building and feedback of the equipment on the
- * floor are not represented.
+ * q is stepped with the sweep's pre-warped recurrences (executedStepCoefficients, substepCount,
+ * ground acceleration linear between samples) and a_floor is sampled at the record's own times.
+ * Higher modes, soil–structure interaction, nonlinear response of the building and feedback of
+ * the equipment on the floor are not represented.
  */
 export function floorRecord(ground: GroundRecord, building: BuildingMode): GroundRecord {
   checkBuilding(building);
@@ -41,9 +41,7 @@ export function floorRecord(ground: GroundRecord, building: BuildingMode): Groun
     durationS,
     roughness: recordRoughness(ground.accelMS2),
   });
-  const h = ground.dtS / substeps;
-  const warped = prewarpedOscillator(method, omega, building.damping, h);
-  const k = stepCoefficients(method, warped.omegaRadS, warped.damping, h);
+  const k = executedStepCoefficients(method, omega, building.damping, ground.dtS / substeps);
   const ag = ground.accelMS2;
   const floor = new Float64Array(ag.length);
   const c = 2 * building.damping * omega;
@@ -108,24 +106,16 @@ export function broadenCurve(
 ): Float64Array {
   if (!(fraction >= 0) || !(fraction < 1))
     throw inputError(`the broadening must be a fraction 0 ≤ b < 1, got ${fraction}`);
-  const n = periodsS.length;
-  const out = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const t = periodsS[i];
-    if (t === 0) {
-      out[i] = values[i];
-      continue;
-    }
+  return Float64Array.from(periodsS, (t, i) => {
+    if (t === 0) return values[i];
     const low = t * (1 - fraction);
     const high = t / (1 - fraction);
     let peak = values[i];
-    for (let j = 0; j < n; j++) {
+    for (let j = 0; j < periodsS.length; j++) {
       if (periodsS[j] >= low && periodsS[j] <= high && values[j] > peak) peak = values[j];
     }
-    peak = Math.max(peak, valueAt(periodsS, values, low), valueAt(periodsS, values, high));
-    out[i] = peak;
-  }
-  return out;
+    return Math.max(peak, valueAt(periodsS, values, low), valueAt(periodsS, values, high));
+  });
 }
 
 /** The spectrum at a window's end, on the positive part of the grid; −∞ elsewhere (so it never wins a max). */

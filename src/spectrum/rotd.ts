@@ -2,12 +2,13 @@ import { inputError, usageError } from '../base/errors.js';
 import { resolveKernel } from '../oscillator/group-runner.js';
 import { WasmRotD } from '../oscillator/kernels/wasm-rotd.js';
 import { hermitePeak, refinementThresholds } from '../oscillator/peak.js';
+import { checkSweep } from '../oscillator/plan.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
 import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
 import { executionPlan, substepCount } from '../oscillator/substeps.js';
-import type { SweepKernel } from '../oscillator/sweep.js';
+import type { SweepKernel, SweepOptions } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
-import type { SpectrumRecordInfo } from './spectrum.js';
+import { recordInfo, type SpectrumRecordInfo } from './spectrum.js';
 
 /** Two-component spectra of a pair of horizontal records at one damping ratio, m/s², by period. */
 export interface RotDCurve {
@@ -31,14 +32,10 @@ export interface RotDSpectra {
   curves: RotDCurve[];
 }
 
-export interface RotDOptions {
-  periodsS: ArrayLike<number>;
-  dampings: ArrayLike<number>;
-  method?: Method;
+/** The grid, the method and the kernel (both kernels give the same bits) as for a sweep. */
+export interface RotDOptions extends Pick<SweepOptions, 'periodsS' | 'dampings' | 'method' | 'kernel'> {
   /** Rotation step, degrees, dividing 180 into a whole number of steps; default 1. */
   angleStepDeg?: number;
-  /** Kernel: 'auto' (WebAssembly SIMD where the engine has it), 'wasm' or 'js' (same bits). */
-  kernel?: SweepKernel;
 }
 
 /**
@@ -55,164 +52,135 @@ export interface RotDOptions {
  * (ground at rest) to the length of the longer.
  */
 export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDSpectra {
-  const work = prepareRotD(first, second, options);
-  return finishRotD(first, second, work, rotDCurves(work));
+  const job = prepareRotD(first, second, options);
+  runRotDCells(job);
+  return finishRotD(first, second, job);
 }
 
-/** Check the pair and the grid, and pad the shorter component. */
-export function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDWork {
-  const method = options.method ?? 'newmark-average';
+/**
+ * RotD work as the threads of a RotDPool (or this thread alone) share it: the two components
+ * (same length) with their roughness and peak resultant, the angles, the grid and the method, a
+ * counter handing out (damping, period) cells, damping-major (cell c is damping ⌊c / periods⌋,
+ * period c mod periods), and the results: for each damping in turn its RotD50, RotD100 and
+ * geometric-mean curves (m/s²), one after the other.
+ */
+export interface RotDJob {
+  a1: Float64Array;
+  a2: Float64Array;
+  dtS: number;
+  /** max(R₁, R₂) of recordRoughness, for the sub-step rule. */
+  roughness: number;
+  /** Peak |(a₁, a₂)|, m/s², which no rotated component exceeds. */
+  resultantMS2: number;
+  cos: Float64Array;
+  sin: Float64Array;
+  angleStepDeg: number;
+  periodsS: Float64Array;
+  dampings: Float64Array;
+  method: Method;
+  /** The loop over angles: WebAssembly SIMD (assembly/rotd.ts) or TypeScript; 'auto' by default. */
+  kernel?: SweepKernel;
+  counter: Int32Array;
+  results: Float64Array;
+}
+
+/** Check the pair and the grid, pad the shorter component, and lay out the job for one thread. */
+export function prepareRotD(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDJob {
   const periodsS = Float64Array.from(options.periodsS);
   const dampings = Float64Array.from(options.dampings);
   const angleStepDeg = options.angleStepDeg ?? 1;
-  checkAngleStep(angleStepDeg);
+  const angles = Math.round(180 / angleStepDeg);
+  if (!(angleStepDeg > 0) || angleStepDeg > 1 || Math.abs(angles * angleStepDeg - 180) > 1e-9) {
+    throw usageError(`angle step ${angleStepDeg}°: use at most 1° and a divisor of 180° (1, 0.5, 0.25, …)`);
+  }
   if (Math.abs(first.dtS - second.dtS) > 1e-9 * first.dtS) {
     throw inputError(
       `the two components have different time steps (${first.dtS} s and ${second.dtS} s); resample one first`,
       { file: second.source },
     );
   }
-  if (periodsS.length === 0) throw usageError('the period grid is empty');
-  if (dampings.length === 0) throw usageError('the damping list is empty');
-  for (const damping of dampings) {
-    if (!(damping >= 0) || !Number.isFinite(damping)) throw usageError(`damping must be ≥ 0, got ${damping}`);
-  }
-  for (const periodS of periodsS) {
-    if (!(periodS >= 0) || !Number.isFinite(periodS))
-      throw usageError(`periods must be ≥ 0 s, got ${periodS}`);
-  }
   const length = Math.max(first.accelMS2.length, second.accelMS2.length);
-  return {
-    a1: padded(first.accelMS2, length),
-    a2: padded(second.accelMS2, length),
-    dtS: first.dtS,
-    periodsS,
-    dampings,
-    method,
-    angleStepDeg,
-    kernel: options.kernel,
-  };
-}
-
-/** The spectra of the pair from its curves. */
-export function finishRotD(
-  first: GroundRecord,
-  second: GroundRecord,
-  work: RotDWork,
-  curves: RotDCurve[],
-): RotDSpectra {
-  return {
-    records: [recordInfo(first), recordInfo(second)],
-    method: work.method,
-    periodsS: work.periodsS,
-    angleStepDeg: work.angleStepDeg,
-    paddedSamples: Math.abs(first.accelMS2.length - second.accelMS2.length),
-    curves,
-  };
-}
-
-/** What one thread needs to compute RotD curves: both components (same length), the grid and the method. */
-export interface RotDWork {
-  a1: Float64Array;
-  a2: Float64Array;
-  dtS: number;
-  periodsS: Float64Array;
-  dampings: Float64Array;
-  method: Method;
-  angleStepDeg: number;
-  /** The loop over angles: WebAssembly SIMD (assembly/rotd.ts) or TypeScript; 'auto' by default. */
-  kernel?: SweepKernel;
-}
-
-/** What one thread keeps to compute the cells of one work: the angles, scratch and the kernel. */
-interface RotDContext {
-  angleCount: number;
-  quarter: number;
-  cos: Float64Array;
-  sin: Float64Array;
-  peaks: Float64Array;
-  thresholds: Float64Array;
-  wasm: WasmRotD | undefined;
-}
-
-function rotDContext(work: RotDWork): RotDContext {
-  const angleCount = checkAngleStep(work.angleStepDeg);
-  const cos = new Float64Array(angleCount);
-  const sin = new Float64Array(angleCount);
-  for (let k = 0; k < angleCount; k++) {
-    const degrees = k * work.angleStepDeg;
+  const a1 = padded(first.accelMS2, length);
+  const a2 = padded(second.accelMS2, length);
+  checkSweep(a1, first.dtS, periodsS, dampings);
+  let resultantMS2 = 0;
+  for (let n = 0; n < length; n++) resultantMS2 = Math.max(resultantMS2, Math.hypot(a1[n], a2[n]));
+  const cos = new Float64Array(angles);
+  const sin = new Float64Array(angles);
+  for (let k = 0; k < angles; k++) {
+    const degrees = k * angleStepDeg;
     cos[k] = degrees === 90 ? 0 : Math.cos((degrees * Math.PI) / 180);
     sin[k] = degrees === 0 ? 0 : degrees === 90 ? 1 : Math.sin((degrees * Math.PI) / 180);
   }
-  const wasm =
-    resolveKernel(work.kernel ?? 'auto') === 'wasm' ? new WasmRotD(work.a1, work.a2, cos, sin) : undefined;
   return {
-    angleCount,
-    quarter: Math.round(90 / work.angleStepDeg),
+    a1,
+    a2,
+    dtS: first.dtS,
+    roughness: Math.max(recordRoughness(a1), recordRoughness(a2)),
+    resultantMS2,
     cos,
     sin,
-    peaks: new Float64Array(angleCount),
-    thresholds: new Float64Array(angleCount),
-    wasm,
+    angleStepDeg,
+    periodsS,
+    dampings,
+    method: options.method ?? 'newmark-average',
+    kernel: options.kernel,
+    counter: new Int32Array(1),
+    results: new Float64Array(3 * dampings.length * periodsS.length),
+  };
+}
+
+/** The spectra of the pair from the job's results. */
+export function finishRotD(first: GroundRecord, second: GroundRecord, job: RotDJob): RotDSpectra {
+  const periods = job.periodsS.length;
+  const curve = (d: number, q: number) => job.results.slice((3 * d + q) * periods, (3 * d + q + 1) * periods);
+  return {
+    records: [recordInfo(first), recordInfo(second)],
+    method: job.method,
+    periodsS: job.periodsS,
+    angleStepDeg: job.angleStepDeg,
+    paddedSamples: Math.abs(first.accelMS2.length - second.accelMS2.length),
+    curves: Array.from(job.dampings, (damping, d) => ({
+      damping,
+      rotd50MS2: curve(d, 0),
+      rotd100MS2: curve(d, 1),
+      geomeanMS2: curve(d, 2),
+    })),
   };
 }
 
 /**
- * RotD cells of checked work computed on this thread, for the threads of a RotDPool: the
- * function writes RotD50, RotD100 and the geometric mean (m/s²) of period p at damping d into
- * out[0..2].
+ * Claim cells of the job from its counter until none is left, and compute each on this thread:
+ * RotD50, RotD100 and the geometric mean of its period at its damping, into the results.
  */
-export function rotDCellRunner(work: RotDWork): (d: number, p: number, out: Float64Array) => void {
-  const context = rotDContext(work);
-  return (d, p, out) => rotDCell(work, context, d, p, out);
-}
-
-/** RotD50, RotD100 and the geometric mean (m/s²) of period p at damping d, into out[0..2]. */
-function rotDCell(work: RotDWork, context: RotDContext, d: number, p: number, out: Float64Array): void {
-  const { a1, a2, dtS, method } = work;
-  const { angleCount, quarter, cos, sin, peaks, thresholds, wasm } = context;
-  const damping = work.dampings[d];
-  const periodS = work.periodsS[p];
-  let scale = 1;
-  if (periodS === 0) {
-    groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
-  } else {
-    const omega = (2 * Math.PI) / periodS;
-    scale = omega * omega;
-    oscillatorPeaks(a1, a2, dtS, { periodS, damping, method }, cos, sin, peaks, thresholds, wasm);
-  }
-  out[2] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
-  peaks.sort();
-  out[1] = scale * peaks[angleCount - 1];
-  const middle = angleCount >> 1;
-  out[0] = scale * (angleCount % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
-}
-
-/** The RotD curves of checked work (see rotDSpectra), one per damping ratio. */
-export function rotDCurves(work: RotDWork): RotDCurve[] {
-  const context = rotDContext(work);
-  const out = new Float64Array(3);
-  return Array.from(work.dampings, (damping, d) => {
-    const rotd50MS2 = new Float64Array(work.periodsS.length);
-    const rotd100MS2 = new Float64Array(work.periodsS.length);
-    const geomeanMS2 = new Float64Array(work.periodsS.length);
-    for (let p = 0; p < work.periodsS.length; p++) {
-      rotDCell(work, context, d, p, out);
-      rotd50MS2[p] = out[0];
-      rotd100MS2[p] = out[1];
-      geomeanMS2[p] = out[2];
+export function runRotDCells(job: RotDJob): void {
+  const { a1, a2, cos, sin, periodsS, dampings } = job;
+  const angles = cos.length;
+  const quarter = Math.round(90 / job.angleStepDeg);
+  const peaks = new Float64Array(angles);
+  const thresholds = new Float64Array(angles);
+  const wasm = resolveKernel(job.kernel ?? 'auto') === 'wasm' ? new WasmRotD(a1, a2, cos, sin) : undefined;
+  const periods = periodsS.length;
+  for (;;) {
+    const cell = Atomics.add(job.counter, 0, 1);
+    if (cell >= dampings.length * periods) return;
+    const d = Math.floor(cell / periods);
+    const p = cell - d * periods;
+    let scale = 1;
+    if (periodsS[p] === 0) {
+      groundPeaks(a1, a2, cos, sin, peaks); // rigid: PSA(θ) is the peak rotated ground acceleration
+    } else {
+      const omega = (2 * Math.PI) / periodsS[p];
+      scale = omega * omega;
+      oscillatorPeaks(job, periodsS[p], dampings[d], peaks, thresholds, wasm);
     }
-    return { damping, rotd50MS2, rotd100MS2, geomeanMS2 };
-  });
-}
-
-/** Number of angles in [0°, 180°) for a step that divides 180° into whole steps, at most 1°. */
-function checkAngleStep(angleStepDeg: number): number {
-  const count = Math.round(180 / angleStepDeg);
-  if (!(angleStepDeg > 0) || angleStepDeg > 1 || Math.abs(count * angleStepDeg - 180) > 1e-9) {
-    throw usageError(`angle step ${angleStepDeg}°: use at most 1° and a divisor of 180° (1, 0.5, 0.25, …)`);
+    const at = 3 * d * periods + p;
+    job.results[at + 2 * periods] = scale * Math.sqrt(peaks[0] * peaks[quarter]);
+    peaks.sort();
+    job.results[at + periods] = scale * peaks[angles - 1];
+    const middle = angles >> 1;
+    job.results[at] = scale * (angles % 2 === 1 ? peaks[middle] : 0.5 * (peaks[middle - 1] + peaks[middle]));
   }
-  return count;
 }
 
 function padded(samples: Float64Array, length: number): Float64Array {
@@ -246,19 +214,15 @@ function groundPeaks(
  * together with the sweep's sub-stepping; nothing is allocated inside the loops.
  */
 function oscillatorPeaks(
-  a1: Float64Array,
-  a2: Float64Array,
-  dtS: number,
-  oscillator: { periodS: number; damping: number; method: Method },
-  cos: Float64Array,
-  sin: Float64Array,
+  job: RotDJob,
+  periodS: number,
+  damping: number,
   peaks: Float64Array,
   thresholds: Float64Array,
-  wasm?: WasmRotD,
+  wasm: WasmRotD | undefined,
 ): void {
-  const { periodS, damping, method } = oscillator;
+  const { a1, a2, dtS, roughness, method, cos, sin } = job;
   const durationS = (a1.length - 1) * dtS;
-  const roughness = Math.max(recordRoughness(a1), recordRoughness(a2));
   // The sweep's execution plan: the method's sub-steps, composed down to the steps that the
   // Hermite refinement needs (executionPlan in substeps.ts), so PSA here is the sweep's PSA.
   const run = executionPlan(
@@ -274,11 +238,8 @@ function oscillatorPeaks(
   const { uu, uv, up0, up1, vu, vv, vp0, vp1 } = c;
   const angles = peaks.length;
   const inverse = 1 / substeps;
-  // The sweep's refinement rule (see refinementThresholds), with the ground's peak over all
-  // directions: a rotated component never exceeds |(a₁, a₂)|.
-  let pga = 0;
-  for (let n = 0; n < a1.length; n++) pga = Math.max(pga, Math.hypot(a1[n], a2[n]));
-  const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: pga, jerkMS3: 0 });
+  // The sweep's refinement rule (see refinementThresholds), with the ground's peak over all directions.
+  const rule = refinementThresholds(omega, 2 * damping * omega, h, { pgaMS2: job.resultantMS2, jerkMS3: 0 });
   const R = rule.ratio;
   const offset = rule.displacementOffset;
   if (wasm !== undefined) {
@@ -328,15 +289,4 @@ function oscillatorPeaks(
       pa2 = pb2;
     }
   }
-}
-
-function recordInfo(record: GroundRecord): SpectrumRecordInfo {
-  return {
-    name: record.name,
-    source: record.source,
-    npts: record.accelMS2.length,
-    dtS: record.dtS,
-    pgaMS2: record.pgaMS2,
-    processing: record.processing,
-  };
 }

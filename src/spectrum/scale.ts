@@ -23,21 +23,17 @@ export interface ScaleResult {
   criterion: string;
 }
 
-export interface ScaleOptions {
-  /** Period range [from, to], s, both included. Default: every grid period above 0 the target covers. */
-  rangeS?: readonly [number, number];
-}
-
 /**
  * The amplitude factor c minimising Σ (ln target(Tᵢ) − ln(c · PSA(Tᵢ)))² over the grid periods Tᵢ
  * in the range, which is c = exp(mean(ln target − ln PSA)) (least squares on log spectral values;
- * common practice for amplitude scaling of records to a target spectrum).
+ * common practice for amplitude scaling of records to a target spectrum). `rangeS` is the period
+ * range [from, to], s, both included; by default every grid period above 0 the target covers.
  */
 export function scaleToTarget(
   periodsS: ArrayLike<number>,
   recordPsaG: ArrayLike<number>,
   target: DesignSpectrum,
-  options: ScaleOptions = {},
+  options: { rangeS?: readonly [number, number] } = {},
 ): ScaleResult {
   const used: number[] = [];
   const range = options.rangeS;
@@ -65,22 +61,14 @@ export function scaleToTarget(
     sum += Math.log(target.psaG(t)) - Math.log(recordPsaG[i]);
   }
   const factor = Math.exp(sum / used.length);
-  let total = 0;
-  let minRatio = Number.POSITIVE_INFINITY;
-  let maxRatio = 0;
-  for (const i of used) {
-    const ratio = (factor * recordPsaG[i]) / target.psaG(periodsS[i]);
-    total += ratio;
-    minRatio = Math.min(minRatio, ratio);
-    maxRatio = Math.max(maxRatio, ratio);
-  }
+  const ratios = used.map((i) => (factor * recordPsaG[i]) / target.psaG(periodsS[i]));
   return {
     factor,
     rangeS: [periodsS[used[0]], periodsS[used[used.length - 1]]],
     periodCount: used.length,
-    meanRatio: total / used.length,
-    minRatio,
-    maxRatio,
+    meanRatio: ratios.reduce((sum, ratio) => sum + ratio, 0) / used.length,
+    minRatio: Math.min(...ratios),
+    maxRatio: Math.max(...ratios),
     criterion: SCALE_CRITERION,
   };
 }

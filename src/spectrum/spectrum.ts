@@ -1,9 +1,8 @@
-import { availableParallelism } from 'node:os';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import { planSweep, sweepThreads } from '../oscillator/plan.js';
 import type { Method } from '../oscillator/recurrence.js';
-import { type Peaks, type SweepKernel, sweepOscillators } from '../oscillator/sweep.js';
+import { type Peaks, type SweepOptions, sweepOscillators } from '../oscillator/sweep.js';
 import type { GroundRecord, ProcessingStep } from '../record/record.js';
+import type { ParallelSweepOptions } from '../threads/sweep-pool.js';
 
 /** The response spectra of one record at one damping ratio. All arrays are indexed by period. */
 export interface SpectrumCurve {
@@ -41,49 +40,28 @@ export interface Spectrum {
   oscillatorSteps: number;
 }
 
-export interface SpectrumOptions {
-  periodsS: ArrayLike<number>;
-  dampings: ArrayLike<number>;
-  method?: Method;
-}
+export type SpectrumOptions = Pick<SweepOptions, 'periodsS' | 'dampings' | 'method'>;
 
 /** Sweep the record's oscillators and assemble SD, PSV, PSA, SV and SA for each damping ratio. */
 export function responseSpectrum(record: GroundRecord, options: SpectrumOptions): Spectrum {
-  const peaks = sweepOscillators(record.accelMS2, record.dtS, options);
-  return assembleSpectrum(record, peaks);
+  return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options));
 }
 
 export { PARALLEL_MIN_OSCILLATOR_STEPS } from '../oscillator/plan.js';
 
-export interface ParallelSpectrumOptions extends SpectrumOptions {
-  kernel?: SweepKernel;
-  /**
-   * Threads, this one included: a number, or 'auto' (the default): all cores for a sweep of at
-   * least PARALLEL_MIN_OSCILLATOR_STEPS oscillator-steps, this thread alone below.
-   */
-  threads?: 'auto' | number;
-}
+export type ParallelSpectrumOptions = SpectrumOptions & Pick<ParallelSweepOptions, 'kernel' | 'threads'>;
 
 /**
- * responseSpectrum, its sweep split over threads as `threads` says; the numbers are the same bits
- * whatever the threads (SweepPool).
+ * responseSpectrum with its sweep split over threads as `threads` says (sweepOscillatorsParallel);
+ * the numbers are the same bits whatever the threads.
  */
 export async function responseSpectrumParallel(
   record: GroundRecord,
   options: ParallelSpectrumOptions,
 ): Promise<Spectrum> {
-  const plan = planSweep(record.accelMS2, record.dtS, options);
-  const threads = sweepThreads(plan, record.accelMS2.length, options.threads, availableParallelism());
-  if (threads === 1)
-    return assembleSpectrum(record, sweepOscillators(record.accelMS2, record.dtS, options, plan));
-  // The thread modules load only for a split sweep.
-  const { SweepPool } = await import('../threads/sweep-pool.js');
-  const pool = new SweepPool(threads);
-  try {
-    return assembleSpectrum(record, await pool.sweep(record.accelMS2, record.dtS, options, plan));
-  } finally {
-    await pool.close();
-  }
+  // The thread modules load only for a parallel spectrum.
+  const { sweepOscillatorsParallel } = await import('../threads/sweep-pool.js');
+  return assembleSpectrum(record, await sweepOscillatorsParallel(record.accelMS2, record.dtS, options));
 }
 
 /**
@@ -101,9 +79,7 @@ export function rotdThreads(periods: number, dampings: number, samples: number):
 /** Turn a sweep's peaks into spectra: PSV = ωSD and PSA = ω²SD (PSA = PGA at T = 0). */
 export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
   const n = peaks.periodsS.length;
-  const pgaMS2 = record.pgaMS2;
-  const curves: SpectrumCurve[] = [];
-  for (let d = 0; d < peaks.dampings.length; d++) {
+  const curves = Array.from(peaks.dampings, (damping, d): SpectrumCurve => {
     const sdM = peaks.sdM.slice(d * n, (d + 1) * n);
     const svMS = peaks.svMS.slice(d * n, (d + 1) * n);
     const saMS2 = peaks.saMS2.slice(d * n, (d + 1) * n);
@@ -112,28 +88,33 @@ export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
     for (let p = 0; p < n; p++) {
       const t = peaks.periodsS[p];
       if (t === 0) {
-        psaMS2[p] = pgaMS2;
+        psaMS2[p] = record.pgaMS2;
         continue;
       }
       const omega = (2 * Math.PI) / t;
       psvMS[p] = omega * sdM[p];
       psaMS2[p] = omega * omega * sdM[p];
     }
-    curves.push({ damping: peaks.dampings[d], sdM, psvMS, psaMS2, svMS, saMS2 });
-  }
+    return { damping, sdM, psvMS, psaMS2, svMS, saMS2 };
+  });
   return {
-    record: {
-      name: record.name,
-      source: record.source,
-      npts: record.accelMS2.length,
-      dtS: record.dtS,
-      pgaMS2,
-      processing: record.processing,
-    },
+    record: recordInfo(record),
     method: peaks.method,
     periodsS: peaks.periodsS,
     curves,
     oscillatorSteps: peaks.oscillatorSteps,
+  };
+}
+
+/** What outputs say about the record a spectrum came from. */
+export function recordInfo(record: GroundRecord): SpectrumRecordInfo {
+  return {
+    name: record.name,
+    source: record.source,
+    npts: record.accelMS2.length,
+    dtS: record.dtS,
+    pgaMS2: record.pgaMS2,
+    processing: record.processing,
   };
 }
 

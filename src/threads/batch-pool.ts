@@ -14,12 +14,9 @@ export type BatchWorkerMessage = { index: number; outcome: RecordOutcome } | { f
 /**
  * Run the tasks on `jobs` threads, this one included, calling `onDone` as each finishes, and give
  * the outcomes back in the order of the tasks. Every thread claims the next record from a shared
- * counter (Atomics.add, so each runs exactly once) until none is left, so a thread never waits to
- * be handed work: this thread starts on the first records at once while the `jobs − 1` worker
- * threads start, and the workers post each outcome as they finish it. With one job the tasks run
- * here, one after another. `here` runs a task on this thread (processRecord; tests slow it down to
- * see the workers take their share). Claiming, rather than handing tasks out from here one
- * message at a time, keeps workers from waiting on this thread and lets this thread work too.
+ * counter (Atomics.add, so each runs exactly once) until none is left: no thread waits to be
+ * handed work, and this one starts at once while the workers start. `here` runs a task on this
+ * thread (processRecord; tests slow it down to see the workers take their share).
  */
 export async function runTasks(
   tasks: readonly RecordTask[],
@@ -33,7 +30,7 @@ export async function runTasks(
     onDone(outcome);
   };
   const data: BatchWorkerData = { tasks, counter: new Int32Array(new SharedArrayBuffer(4)) };
-  const script = workerScript(import.meta.url, 'threads', 'batch-worker.js');
+  const script = workerScript('batch-worker.js');
   const threads = Math.max(1, Math.min(jobs, tasks.length));
   const workers = Array.from({ length: threads - 1 }, () => {
     const worker = startWorker(script, { workerData: data });

@@ -20,9 +20,9 @@ export interface ParallelSweepOptions extends SweepOptions {
 }
 
 /**
- * A job as the threads share it: the record, the kernel, the order in which groups are claimed, a
- * counter that hands out the next group (Atomics.add, so every group runs exactly once), and the
- * result arrays. All buffers are SharedArrayBuffers.
+ * A job as the threads share it (SharedArrayBuffers): the record, the kernel, the order in which
+ * groups are claimed, the counter that hands out the next group (Atomics.add, so every group runs
+ * exactly once), the result arrays, and the calling thread's plan, so that no worker plans again.
  */
 export interface SharedSweepJob {
   accelMS2: Float64Array;
@@ -30,14 +30,13 @@ export interface SharedSweepJob {
   order: Int32Array;
   counter: Int32Array;
   peaks: Pick<Peaks, 'sdM' | 'svMS' | 'saMS2'>;
-  /** The calling thread's plan, sent along so that no worker plans the sweep again. */
   plan: SweepPlan;
 }
 
 /**
- * Claim groups of the plan one at a time from the shared counter, step them with this thread's
- * kernel and write their peaks into the shared results. Each oscillator's peaks depend only on
- * its own coefficients and the record, so which thread steps a group changes no bit.
+ * Claim groups of the plan one at a time, step them with this thread's kernel and write their
+ * peaks into the shared results. Each oscillator's peaks depend only on its own coefficients and
+ * the record, so which thread steps a group changes no bit.
  */
 export function runClaimedGroups(job: SharedSweepJob): void {
   let runner: ReturnType<typeof groupRunner> | undefined;
@@ -51,43 +50,12 @@ export function runClaimedGroups(job: SharedSweepJob): void {
 }
 
 /**
- * Records as the threads of a SweepPool share them for sweepRecords: each thread claims whole
- * records from the counter and sweeps them alone (same options for all), writing their peaks
- * (sdM, svMS, saMS2, count each) and executed steps into the shared results.
- */
-export interface SharedRecordsJob {
-  kind: 'records';
-  records: { accelMS2: Float64Array; dtS: number }[];
-  options: SweepOptions;
-  counter: Int32Array;
-  results: Float64Array;
-  steps: Float64Array;
-}
-
-/** Claim records of the job one at a time and sweep each on this thread (see SharedRecordsJob). */
-export function runClaimedRecords(job: SharedRecordsJob): void {
-  const count = job.options.periodsS.length * job.options.dampings.length;
-  for (;;) {
-    const next = Atomics.add(job.counter, 0, 1);
-    if (next >= job.records.length) return;
-    const record = job.records[next];
-    const peaks = sweepOscillators(record.accelMS2, record.dtS, job.options);
-    const at = next * 3 * count;
-    job.results.set(peaks.sdM, at);
-    job.results.set(peaks.svMS, at + count);
-    job.results.set(peaks.saMS2, at + 2 * count);
-    job.steps[next] = peaks.oscillatorSteps;
-  }
-}
-
-/**
- * Worker threads that sweep together with the calling thread. A pool can run many sweeps (one
- * record after another, each split over all its threads, or many records at once, each on one
- * thread); close it when done so that the process can exit.
+ * Worker threads that sweep together with the calling thread, one record after another, each
+ * split over all the threads; close the pool when done so that the process can exit.
  */
 export class SweepPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
-    super(threads, workerScript(import.meta.url, 'threads', 'sweep-worker.js'));
+    super(threads, workerScript('pool-worker.js'));
   }
 
   /**
@@ -114,57 +82,15 @@ export class SweepPool extends ThreadTeam {
       plan,
     };
     await this.run(job, () => runClaimedGroups(job));
-    peaks.sdM.set(job.peaks.sdM);
-    peaks.svMS.set(job.peaks.svMS);
-    peaks.saMS2.set(job.peaks.saMS2);
+    for (const key of ['sdM', 'svMS', 'saMS2'] as const) peaks[key].set(job.peaks[key]);
     peaks.oscillatorSteps = plannedSteps(plan, accelMS2.length);
     return peaks;
-  }
-
-  /**
-   * sweepOscillators of each record with the same options, the records dealt out whole to the
-   * pool's threads (for many small records, where splitting each one would cost more in
-   * messages than it saves). The peaks are those of sweepOscillators, bit for bit, in the order
-   * of the records. Records not already in shared memory are copied there for the call: give a
-   * suite of long records a slice at a time.
-   */
-  async sweepRecords(
-    records: readonly { accelMS2: Float64Array; dtS: number }[],
-    options: SweepOptions,
-  ): Promise<Peaks[]> {
-    if (records.length === 0) return [];
-    // Plan the first one here: it checks the options, so that a bad grid fails on this thread.
-    const first = planSweep(records[0].accelMS2, records[0].dtS, options);
-    const grid = { ...options, periodsS: first.periodsS, dampings: first.dampings };
-    const count = first.periodsS.length * first.dampings.length;
-    const job: SharedRecordsJob = {
-      kind: 'records',
-      records: records.map((r) => ({ accelMS2: shared(r.accelMS2), dtS: r.dtS })),
-      options: grid,
-      counter: new Int32Array(new SharedArrayBuffer(4)),
-      results: new Float64Array(new SharedArrayBuffer(8 * 3 * count * records.length)),
-      steps: new Float64Array(new SharedArrayBuffer(8 * records.length)),
-    };
-    await this.run(job, () => runClaimedRecords(job));
-    return records.map((_, i) => {
-      const at = i * 3 * count;
-      return {
-        method: first.method,
-        periodsS: first.periodsS,
-        dampings: first.dampings,
-        sdM: job.results.slice(at, at + count),
-        svMS: job.results.slice(at + count, at + 2 * count),
-        saMS2: job.results.slice(at + 2 * count, at + 3 * count),
-        oscillatorSteps: job.steps[i],
-      };
-    });
   }
 }
 
 /**
- * sweepOscillators on a SweepPool of `threads` (default: all cores), started for the call and
- * closed after: the same peaks, bit for bit. Starting workers costs more than a small sweep: use
- * it for large sweeps only.
+ * sweepOscillators on the threads that `options.threads` asks for, on a SweepPool started for the
+ * call and closed after: the same peaks, bit for bit.
  */
 export async function sweepOscillatorsParallel(
   accelMS2: Float64Array,

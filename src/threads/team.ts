@@ -2,21 +2,21 @@ import { parentPort, Worker } from 'node:worker_threads';
 import { inputError, QuakesweepError } from '../base/errors.js';
 
 /**
- * The worker script `file` of src/`folder`/ for the module at `moduleUrl`: beside it in dist/; the
- * build under a test runner, where modules run from their TypeScript source; and the bundled
- * worker (dist/cli/workers/, CommonJS) from the CLI bundle dist/cli/quakesweep.cjs, where every
- * module's URL is the bundle's (see scripts/build-cli.mjs).
+ * The worker script `file` of this folder: beside this module in dist/; the build under a test
+ * runner, where modules run from their TypeScript source; and the bundled worker
+ * (dist/cli/workers/, CommonJS) from the CLI bundle dist/cli/quakesweep.cjs, where every module's
+ * URL is the bundle's (see scripts/build-cli.mjs).
  */
-export function workerScript(moduleUrl: string, folder: string, file: string): URL {
-  if (moduleUrl.endsWith('.ts')) return new URL(`../../dist/${folder}/${file}`, moduleUrl);
-  if (moduleUrl.endsWith('.cjs')) return new URL(`./workers/${file.replace(/\.js$/, '.cjs')}`, moduleUrl);
-  return new URL(`../${folder}/${file}`, moduleUrl);
+export function workerScript(file: string): URL {
+  const here = import.meta.url;
+  if (here.endsWith('.ts')) return new URL(`../../dist/threads/${file}`, here);
+  if (here.endsWith('.cjs')) return new URL(`./workers/${file.replace(/\.js$/, '.cjs')}`, here);
+  return new URL(`./${file}`, here);
 }
 
 /**
- * A worker thread running `script`, whose output is copied to this process's as it comes: a
- * listener on each stream, which costs the calling thread less than Node's own piping of a
- * worker's stdout and stderr into the parent's.
+ * A worker thread running `script`, its output copied to this process's by a listener on each
+ * stream (cheaper for the calling thread than Node's own piping of a worker's output).
  */
 export function startWorker(script: URL, options: { workerData?: unknown } = {}): Worker {
   const worker = new Worker(script, { ...options, stdout: true, stderr: true });
@@ -34,10 +34,9 @@ export function shared(values: Float64Array): Float64Array {
 }
 
 /**
- * Worker threads that each run the jobs they are sent alongside the calling thread (the script
- * `script` answers every `{ id, job }` message with `{ id }`, or `{ id, error }`). A job is
- * shared memory and a claim counter: every thread, this one included, claims work from it until
- * none is left. SweepPool (sweep-pool.ts) and RotDPool (rotd-pool.ts) are teams with their own scripts.
+ * Worker threads that run the jobs they are sent alongside the calling thread (`script` answers
+ * every `{ id, job }` with `{ id }`, or `{ id, error }`; see serveJobs). A job is shared memory
+ * and a claim counter, from which every thread, this one included, claims work until none is left.
  */
 export class ThreadTeam {
   readonly threads: number;

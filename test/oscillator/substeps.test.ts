@@ -2,11 +2,10 @@ import { describe, expect, it } from 'vitest';
 import {
   executionPlan,
   MIN_STEPS_PER_PERIOD,
-  PREWARPED_STEPS_PER_PERIOD,
   recordSubsteps,
+  SUBSTEP_RULE,
   stepsPerPeriod,
   substepCount,
-  TEXTBOOK_SUBSTEP_RULE,
 } from '../../src/oscillator/substeps.js';
 
 // The rule as its documentation states it (src/oscillator/substeps.ts); how well it holds peaks
@@ -15,14 +14,14 @@ const context = { damping: 0.05, durationS: 20 };
 
 describe('steps per period', () => {
   it('pre-warped: the fixed count of each method, raised (never lowered) by the user', () => {
-    expect(stepsPerPeriod('newmark-average', 1, context)).toBe(PREWARPED_STEPS_PER_PERIOD['newmark-average']);
+    expect(stepsPerPeriod('newmark-average', 1, context)).toBe(SUBSTEP_RULE['newmark-average'].prewarped);
     expect(stepsPerPeriod('piecewise-exact', 1, context)).toBe(MIN_STEPS_PER_PERIOD);
     expect(stepsPerPeriod('newmark-linear', 1, { ...context, stepsPerPeriod: 200 })).toBe(200);
     expect(stepsPerPeriod('newmark-linear', 1, { ...context, stepsPerPeriod: 3 })).toBe(38);
   });
 
   it('textbook: N = √(K·C + N₀²), C the cycles remembered, min(duration/T, 1/(2πζ))', () => {
-    const { k, baseSteps } = TEXTBOOK_SUBSTEP_RULE['newmark-average'];
+    const { k, baseSteps } = SUBSTEP_RULE['newmark-average'];
     const damped = stepsPerPeriod('newmark-average', 1, { ...context, prewarp: false });
     expect(damped).toBeCloseTo(Math.sqrt((k * 1) / (2 * Math.PI * 0.05) + baseSteps ** 2), 12);
     // Undamped, an oscillator remembers the whole record: 20 cycles of a 1 s period.

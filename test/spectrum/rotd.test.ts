@@ -3,7 +3,6 @@ import type { Method } from '../../src/oscillator/recurrence.js';
 import { createRecord, type GroundRecord } from '../../src/record/record.js';
 import { rotDSpectra } from '../../src/spectrum/rotd.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
-import { RotDPool, rotDSpectraParallel } from '../../src/threads/rotd-pool.js';
 
 /** Invented test motions, m/s². */
 function component(name: string, f1: number, f2: number, phase: number, count = 800): GroundRecord {
@@ -111,45 +110,6 @@ describe('RotD50, RotD100 and geometric mean (Boore 2010)', () => {
     expect(() => rotDSpectra(one, two, { periodsS, dampings: [0.05], angleStepDeg: 0.7 })).toThrow(
       /angle step/,
     );
-  });
-});
-
-describe('RotD over worker threads', () => {
-  it('gives the same bits from one pool for two pairs and both kernels, then closes', async () => {
-    const grid = { periodsS, dampings, method: 'piecewise-exact' as const };
-    const pool = new RotDPool(2);
-    try {
-      for (const [a, b, kernel] of [
-        [one, two, 'wasm'],
-        [two, one, 'js'],
-      ] as const) {
-        const alone = rotDSpectra(a, b, { ...grid, kernel });
-        const pooled = await pool.rotd(a, b, { ...grid, kernel });
-        pooled.curves.forEach((curve, d) => {
-          expect(Array.from(curve.rotd50MS2)).toEqual(Array.from(alone.curves[d].rotd50MS2));
-          expect(Array.from(curve.rotd100MS2)).toEqual(Array.from(alone.curves[d].rotd100MS2));
-          expect(Array.from(curve.geomeanMS2)).toEqual(Array.from(alone.curves[d].geomeanMS2));
-        });
-      }
-      await expect(pool.rotd(one, two, { ...grid, angleStepDeg: 0.7 })).rejects.toThrow(/angle step/);
-    } finally {
-      await pool.close();
-    }
-  });
-
-  // Each period's curves are computed by one thread as rotDSpectra computes them, so dealing the
-  // periods out over threads changes no bit (the order of the results is the grid's).
-  it.each([2, 3])('gives the same bits on %s threads as on one', async (threads) => {
-    const grid = { periodsS, dampings, method: 'newmark-average' as const };
-    const alone = rotDSpectra(one, two, grid);
-    const split = await rotDSpectraParallel(one, two, { ...grid, threads });
-    expect(split.periodsS).toEqual(alone.periodsS);
-    split.curves.forEach((curve, d) => {
-      expect(curve.damping).toBe(alone.curves[d].damping);
-      expect(Array.from(curve.rotd50MS2)).toEqual(Array.from(alone.curves[d].rotd50MS2));
-      expect(Array.from(curve.rotd100MS2)).toEqual(Array.from(alone.curves[d].rotd100MS2));
-      expect(Array.from(curve.geomeanMS2)).toEqual(Array.from(alone.curves[d].geomeanMS2));
-    });
   });
 });
 

@@ -56,30 +56,6 @@ describe('parallel sweep', () => {
     }
   });
 
-  it('sweeps many records dealt out whole to its threads, bit for bit and in order', async () => {
-    // Records of different lengths and steps, the rigid T = 0 among the periods; each record is
-    // swept by one thread as sweepOscillators sweeps it.
-    const records = [
-      synthesizeRecord({ seed: 41, dtS: 0.01, durationS: 12.3 }),
-      synthesizeRecord({ seed: 42, dtS: 0.02, durationS: 30 }),
-      synthesizeRecord({ seed: 43, dtS: 0.005, durationS: 7.77 }),
-      synthesizeRecord({ seed: 44, dtS: 0.01, durationS: 20 }),
-      synthesizeRecord({ seed: 45, dtS: 0.01, durationS: 3 }),
-    ];
-    const pool = new SweepPool(2);
-    try {
-      const all = await pool.sweepRecords(records, options);
-      expect(all).toHaveLength(records.length);
-      records.forEach((r, i) => {
-        expectSameBits(sweepOscillators(r.accelMS2, r.dtS, options), all[i]);
-      });
-      expect(await pool.sweepRecords([], options)).toEqual([]);
-      await expect(pool.sweepRecords(records, { ...options, periodsS: [-1] })).rejects.toThrow(/periods/);
-    } finally {
-      await pool.close();
-    }
-  });
-
   it('refuses a thread count that is not a whole number ≥ 1', async () => {
     await expect(
       sweepOscillatorsParallel(record.accelMS2, record.dtS, { ...options, threads: 0 }),

@@ -1,4 +1,5 @@
 import { COEFFICIENT as C } from '../layout.js';
+import { hermiteFold } from '../peak.js';
 
 /**
  * The TypeScript kernel: the fallback where WebAssembly SIMD does not run, and the oracle the
@@ -6,10 +7,9 @@ import { COEFFICIENT as C } from '../layout.js';
  * rest and writes its peaks |u|, |v| and |s| (s = −(c·v + k·u), the absolute acceleration) to
  * peaks[at..at + 2].
  *
- * The record is stepped twice with the same arithmetic, so both passes see the same states:
- *   1. the sample peaks P, the largest values at the steps;
- *   2. the cubic Hermite peak inside every step whose new end passes the threshold P·r − d of
- *      refinementThresholds (peak.ts), folded into P. A step below it cannot hold a higher peak.
+ * The record is stepped twice with the same arithmetic: pass 1 finds the sample peaks P; pass 2
+ * folds into P the cubic Hermite peak inside every step whose new end passes the threshold
+ * P·r − d of refinementThresholds (peak.ts), below which a step cannot hold a higher peak.
  * With `substeps` steps of `stepS` per sample interval the inputs are the record's linear
  * interpolation, w/substeps of the way from sample s to sample s + 1. `row` holds the
  * oscillator's packed coefficients (layout.ts).
@@ -81,35 +81,4 @@ export function referencePeaks(
   peaks[at] = peakU;
   peaks[at + 1] = peakV;
   peaks[at + 2] = peakS;
-}
-
-/**
- * `peak`, or the cubic Hermite peak of |q| inside the step if larger, from q and dq/dt at both
- * ends (the interpolation of hermitePeak in peak.ts). H'(t) = ca·t² + cb·t + m0 vanishes where q
- * turns; ca vanishes identically for Newmark average acceleration, whose velocity update is the
- * trapezoidal rule, and H' is then linear. The SIMD kernel finds the roots the same way.
- */
-function hermiteFold(peak: number, qa: number, qb: number, d0: number, d1: number, h: number): number {
-  const m0 = d0 * h;
-  const m1 = d1 * h;
-  const ca = 6 * qa + 3 * m0 - 6 * qb + 3 * m1;
-  const cb = -6 * qa - 4 * m0 + 6 * qb - 2 * m1;
-  if (!(Math.abs(ca) > 1e-9 * (Math.abs(cb) + Math.abs(m0)))) {
-    return cb === 0 ? peak : hermiteAt(peak, qa, qb, m0, m1, -m0 / cb);
-  }
-  const disc = cb * cb - 4 * ca * m0;
-  if (!(disc >= 0)) return peak;
-  const qq = -0.5 * (cb + (cb >= 0 ? 1 : -1) * Math.sqrt(disc));
-  const first = hermiteAt(peak, qa, qb, m0, m1, qq / ca);
-  return qq === 0 ? first : hermiteAt(first, qa, qb, m0, m1, m0 / qq);
-}
-
-/** `peak`, or |H(t)| if larger, for t inside the step (0 < t < 1). */
-function hermiteAt(peak: number, qa: number, qb: number, m0: number, m1: number, t: number): number {
-  if (!(t > 0 && t < 1)) return peak;
-  const t2 = t * t;
-  const t3 = t2 * t;
-  const value =
-    (2 * t3 - 3 * t2 + 1) * qa + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * qb + (t3 - t2) * m1;
-  return Math.max(peak, Math.abs(value));
 }

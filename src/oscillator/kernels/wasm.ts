@@ -15,81 +15,55 @@ const SIMD_PROBE = Uint8Array.from(
 
 let simdSupported: boolean | undefined;
 
-/** Whether `validate` (WebAssembly.validate by default) accepts a SIMD module. */
-export function detectWasmSimd(
-  validate: (bytes: Uint8Array<ArrayBuffer>) => boolean = (bytes) =>
-    typeof WebAssembly === 'object' && WebAssembly.validate(bytes),
-): boolean {
-  try {
-    return validate(SIMD_PROBE);
-  } catch {
-    return false;
-  }
-}
-
-/** Whether this engine runs WebAssembly SIMD (detected once). */
+/** Whether this engine runs WebAssembly SIMD (detected once, by validating SIMD_PROBE). */
 export function wasmSimdSupported(): boolean {
-  simdSupported ??= detectWasmSimd();
+  if (simdSupported === undefined) {
+    try {
+      simdSupported = WebAssembly.validate(SIMD_PROBE);
+    } catch {
+      simdSupported = false;
+    }
+  }
   return simdSupported;
 }
 
-/** The exports of assembly/sweep.ts (with RotD's loop, assembly/rotd.ts). */
-export interface KernelExports {
+/**
+ * The exports of assembly/sweep.ts (runGroup) and assembly/rotd.ts (rotdPeaks), whose parameters
+ * (addresses in the memory, counts and values) are documented there.
+ */
+interface KernelExports {
   memory: WebAssembly.Memory;
   heapBase(): number;
-  runGroup(
-    record: number,
-    samples: number,
-    substeps: number,
-    stepS: number,
-    coefficients: number,
-    state: number,
-    peaks: number,
-    buffer: number,
-    chunkSteps: number,
-    blockSteps: number,
-    checkpoints: number,
-    symmetric: number,
-    narrow: number,
-  ): void;
-  rotdPeaks(
-    a1: number,
-    a2: number,
-    samples: number,
-    substeps: number,
-    h: number,
-    coefficients: number,
-    cos: number,
-    sin: number,
-    angles: number,
-    peaks: number,
-    thresholds: number,
-    ratio: number,
-    offset: number,
-  ): void;
+  runGroup(...parameters: number[]): void;
+  rotdPeaks(...parameters: number[]): void;
 }
 
 /**
- * The sweep's instance of the kernel in this thread, reused by every WasmSweeper: a new instance
- * per record would map and unmap a fresh linear memory each time, which in a pool of threads
- * costs every thread of the process (the mappings are the process's), and the memory would start
- * cold. Its memory grows to the largest sweep so far and stays.
+ * The thread's one instance of the kernel, shared by every WasmSweeper and WasmRotD (an instance
+ * per record would map a fresh, cold linear memory each time, and mappings cost every thread of
+ * the process); its memory grows to the largest need so far. `holder`: whose inputs it holds.
  */
-let sweepInstance: KernelInstance | undefined;
-
-/** The thread's instance of the kernel and the sweeper or RotD loop whose inputs its memory holds. */
 export interface KernelInstance {
   exports: KernelExports;
-  holder?: unknown;
+  view: Float64Array;
+  holder?: KernelInputs;
 }
+
+/** A user of the kernel that loads its inputs (a record, or two components and the angles) into its memory. */
+export interface KernelInputs {
+  load(view: Float64Array): void;
+}
+
+let instance: KernelInstance | undefined;
 
 /** The thread's instance of the kernel, made (and its module compiled) on first use. */
 export function kernelInstance(): KernelInstance {
-  if (sweepInstance === undefined) {
+  if (instance === undefined) {
     const module = new WebAssembly.Module(Buffer.from(SWEEP_WASM_BASE64, 'base64'));
-    sweepInstance = { exports: new WebAssembly.Instance(module, {}).exports as unknown as KernelExports };
+    const exports = new WebAssembly.Instance(module, {}).exports as unknown as KernelExports;
+    instance = { exports, view: new Float64Array(exports.memory.buffer) };
   }
-  return sweepInstance;
+  return instance;
 }
 
 /**
@@ -100,60 +74,61 @@ export function prepareWasmKernel(): void {
   if (wasmSimdSupported()) kernelInstance();
 }
 
+/** Byte offsets of areas of the given sizes, 16-byte aligned, from the kernel's heap base, and their end. */
+export function heapAreas<Area extends string>(
+  kernel: KernelInstance,
+  bytes: Record<Area, number>,
+): Record<Area | 'end', number> {
+  const at = { end: kernel.exports.heapBase() } as Record<Area | 'end', number>;
+  for (const area of Object.keys(bytes) as Area[]) {
+    at[area] = at.end;
+    at.end += Math.ceil(bytes[area] / 16) * 16;
+  }
+  return at;
+}
+
+/**
+ * The kernel's memory as f64, grown to at least `bytes`, holding the inputs of `holder` (loaded
+ * again when another user has had the instance since).
+ */
+export function kernelMemory(kernel: KernelInstance, bytes: number, holder: KernelInputs): Float64Array {
+  const memory = kernel.exports.memory;
+  const pages = Math.ceil(bytes / 65536) - memory.buffer.byteLength / 65536;
+  if (pages > 0) memory.grow(pages);
+  // One view while the memory stays as it is (growing it replaces its buffer).
+  if (kernel.view.buffer !== memory.buffer) kernel.view = new Float64Array(memory.buffer);
+  if (kernel.holder !== holder) {
+    holder.load(kernel.view);
+    kernel.holder = holder;
+  }
+  return kernel.view;
+}
+
 /**
  * The WebAssembly kernel with a record loaded into its memory. Groups of up to GROUP_WIDTH
  * oscillators are stepped by `run`, which takes their coefficients packed as plan.ts packs them
- * (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator). All
- * sweepers of a thread share one instance; each loads its record again when another has used it
- * since.
+ * (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator).
  */
-export class WasmSweeper {
-  private readonly kernel: KernelInstance;
-  private readonly accelMS2: Float64Array;
-  private readonly samples: number;
-  private readonly coefficients: number;
-  private readonly state: number;
-  private readonly peaks: number;
-  private readonly buffer: number;
-  private readonly record: number;
-  /** Pass 1's checkpoints, at the end of the layout; memory grows when a group needs more. */
-  private readonly checkpoints: number;
-  private view: Float64Array;
+export class WasmSweeper implements KernelInputs {
+  private readonly kernel = kernelInstance();
+  /** The areas of the layout; pass 1's checkpoints follow them (memory grows when a group needs more). */
+  private readonly at;
 
-  constructor(accelMS2: Float64Array) {
-    this.kernel = kernelInstance();
-    this.accelMS2 = accelMS2;
-    this.samples = accelMS2.length;
-    const align = (bytes: number) => Math.ceil(bytes / 16) * 16;
-    let next = this.kernel.exports.heapBase();
-    const take = (bytes: number) => {
-      const at = next;
-      next += align(bytes);
-      return at;
-    };
-    this.coefficients = take(GROUP_WIDTH * COEFFICIENT_STRIDE * 8);
-    this.state = take(GROUP_WIDTH * STATE_STRIDE * 8);
-    this.peaks = take(GROUP_WIDTH * PEAK_STRIDE * 8);
-    this.buffer = take((STRETCH_STEPS + 1) * 8);
-    // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
-    this.record = take(accelMS2.length * 8 + 16);
-    this.checkpoints = next;
-    this.view = new Float64Array(this.kernel.exports.memory.buffer);
+  constructor(private readonly accelMS2: Float64Array) {
+    this.at = heapAreas(this.kernel, {
+      coefficients: GROUP_WIDTH * COEFFICIENT_STRIDE * 8,
+      state: GROUP_WIDTH * STATE_STRIDE * 8,
+      peaks: GROUP_WIDTH * PEAK_STRIDE * 8,
+      buffer: (STRETCH_STEPS + 1) * 8,
+      // 16 bytes past the record: the interpolation may read (and discard) one value beyond it.
+      record: accelMS2.length * 8 + 16,
+    });
   }
 
-  /** The memory as f64, grown to hold `bytes` of checkpoints and holding this sweeper's record. */
-  private memory(bytes: number): Float64Array {
-    const memory = this.kernel.exports.memory;
-    const pages = Math.ceil((this.checkpoints + bytes) / 65536) - memory.buffer.byteLength / 65536;
-    if (pages > 0) memory.grow(pages);
-    // One view while the memory stays as it is (growing it replaces its buffer).
-    if (this.view.buffer !== memory.buffer) this.view = new Float64Array(memory.buffer);
-    if (this.kernel.holder !== this) {
-      this.view.set(this.accelMS2, this.record / 8);
-      this.view.fill(0, (this.record + this.samples * 8) / 8, (this.record + this.samples * 8 + 16) / 8);
-      this.kernel.holder = this;
-    }
-    return this.view;
+  load(view: Float64Array): void {
+    const end = this.at.record / 8 + this.accelMS2.length;
+    view.set(this.accelMS2, this.at.record / 8);
+    view.fill(0, end, end + 2);
   }
 
   /**
@@ -170,10 +145,12 @@ export class WasmSweeper {
     symmetric: boolean,
     out: Float64Array,
   ) {
-    const blockSteps = checkpointBlockSteps((this.samples - 1) * substeps);
-    const blocks = Math.ceil(((this.samples - 1) * substeps) / blockSteps);
-    const view = this.memory(blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8);
-    const c = this.coefficients / 8;
+    const samples = this.accelMS2.length;
+    const blockSteps = checkpointBlockSteps((samples - 1) * substeps);
+    const blocks = Math.ceil(((samples - 1) * substeps) / blockSteps);
+    const { at } = this;
+    const view = kernelMemory(this.kernel, at.end + blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8, this);
+    const c = at.coefficients / 8;
     // Lanes side by side (oscillators 0 and 1 in the first vector, 2 and 3 in the second); a
     // short group repeats its last oscillator.
     for (let i = 0; i < GROUP_WIDTH; i++) {
@@ -182,22 +159,22 @@ export class WasmSweeper {
       for (let q = 0; q < COEFFICIENT_STRIDE; q++) view[lane + 2 * q] = packed[from + q];
     }
     this.kernel.exports.runGroup(
-      this.record,
-      this.samples,
+      at.record,
+      samples,
       substeps,
       stepS,
-      this.coefficients,
-      this.state,
-      this.peaks,
-      this.buffer,
+      at.coefficients,
+      at.state,
+      at.peaks,
+      at.buffer,
       STRETCH_STEPS,
       blockSteps,
-      this.checkpoints,
+      at.end,
       symmetric ? 1 : 0,
       // A group of one or two oscillators fills one vector: step that one only.
       count <= 2 ? 1 : 0,
     );
-    const p = this.peaks / 8;
+    const p = at.peaks / 8;
     for (let i = 0; i < count; i++) {
       const lane = p + (i >> 1) * PEAK_STRIDE * 2 + (i & 1);
       for (let q = 0; q < PEAK_STRIDE; q++) out[i * PEAK_STRIDE + q] = view[lane + 2 * q];

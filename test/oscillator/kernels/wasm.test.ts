@@ -1,11 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { logSpaced } from '../../../src/oscillator/grid.js';
 import { groupRunner, resolveKernel } from '../../../src/oscillator/group-runner.js';
-import {
-  checkpointBlockSteps,
-  detectWasmSimd,
-  wasmSimdSupported,
-} from '../../../src/oscillator/kernels/wasm.js';
+import { checkpointBlockSteps, wasmSimdSupported } from '../../../src/oscillator/kernels/wasm.js';
 import { planSweep } from '../../../src/oscillator/plan.js';
 import { METHODS } from '../../../src/oscillator/recurrence.js';
 import { type Peaks, sweepOscillators } from '../../../src/oscillator/sweep.js';
@@ -43,14 +39,8 @@ const periodsS = [0, ...logSpaced(0.01, 10, 19)];
 const dampings = [0, 0.02, 0.05, 0.2, 0.5];
 
 describe('WebAssembly SIMD kernel', () => {
-  it('is detected on this engine (Node 20 has WebAssembly SIMD) and refused when validation fails', () => {
+  it('is detected on this engine (Node 20 has WebAssembly SIMD)', () => {
     expect(wasmSimdSupported()).toBe(true);
-    expect(detectWasmSimd(() => false)).toBe(false);
-    expect(
-      detectWasmSimd(() => {
-        throw new Error('no WebAssembly');
-      }),
-    ).toBe(false);
   });
 
   it('keeps checkpoint blocks of 64 steps up to 16,384 blocks, then doubles them up to 8,192 steps', () => {
