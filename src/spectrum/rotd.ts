@@ -39,17 +39,12 @@ export interface RotDOptions extends Pick<SweepOptions, 'periodsS' | 'dampings' 
 }
 
 /**
- * RotD50 and RotD100 (Boore, "Orientation-independent, nongeometric-mean measures of seismic
- * intensity from two horizontal components of motion", BSSA 100(4), 2010) and the geometric mean
- * of two horizontal components with the same time step.
- *
- * The oscillator is linear, so its displacement under the ground motion rotated by θ is
- * u(θ, t) = u₁(t) cos θ + u₂(t) sin θ: each oscillator is run once per component, with the
- * sub-steps and step coefficients of the sweep (recurrence.ts), and at every sub-step the
- * rotated displacement is formed for each angle and its peak kept, with the cubic Hermite
- * refinement between sub-steps the sweep uses. PSA(θ) = ω² max|u(θ, t)|. With an even number of
- * angles the median is the mean of the two middle values. A shorter record is padded with zeros
- * (ground at rest) to the length of the longer.
+ * RotD50 and RotD100 (Boore, BSSA 100(4), 2010) and the geometric mean of two horizontal
+ * components with the same time step. The oscillator is linear, so under the motion rotated by θ
+ * u(θ, t) = u₁(t) cos θ + u₂(t) sin θ: each oscillator runs once per component with the sweep's
+ * sub-steps and coefficients, and each angle's peak is kept with the sweep's Hermite refinement;
+ * PSA(θ) = ω² max|u(θ, t)|. An even number of angles takes the mean of the two middle values as
+ * the median. A shorter record is padded with zeros (ground at rest).
  */
 export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: RotDOptions): RotDSpectra {
   const job = prepareRotD(first, second, options);
@@ -58,11 +53,9 @@ export function rotDSpectra(first: GroundRecord, second: GroundRecord, options: 
 }
 
 /**
- * RotD work as the threads of a RotDPool (or this thread alone) share it: the two components
- * (same length) with their roughness and peak resultant, the angles, the grid and the method, a
- * counter handing out (damping, period) cells, damping-major (cell c is damping ⌊c / periods⌋,
- * period c mod periods), and the results: for each damping in turn its RotD50, RotD100 and
- * geometric-mean curves (m/s²), one after the other.
+ * RotD work as the threads of a RotDPool (or this thread alone) share it: a counter hands out
+ * (damping, period) cells, damping-major; the results hold, for each damping in turn, its RotD50,
+ * RotD100 and geometric-mean curves (m/s²).
  */
 export interface RotDJob {
   a1: Float64Array;
@@ -149,10 +142,7 @@ export function finishRotD(first: GroundRecord, second: GroundRecord, job: RotDJ
   };
 }
 
-/**
- * Claim cells of the job from its counter until none is left, and compute each on this thread:
- * RotD50, RotD100 and the geometric mean of its period at its damping, into the results.
- */
+/** Claim cells from the job's counter until none is left, and compute each on this thread. */
 export function runRotDCells(job: RotDJob): void {
   const { a1, a2, cos, sin, periodsS, dampings } = job;
   const angles = cos.length;
@@ -209,10 +199,7 @@ function groundPeaks(
   }
 }
 
-/**
- * Peak |u(θ, t)| for every angle of one oscillator, m, into `peaks`. Both components are stepped
- * together with the sweep's sub-stepping; nothing is allocated inside the loops.
- */
+/** Peak |u(θ, t)| for every angle of one oscillator, m, into `peaks`; nothing is allocated in the loops. */
 function oscillatorPeaks(
   job: RotDJob,
   periodS: number,
@@ -223,8 +210,7 @@ function oscillatorPeaks(
 ): void {
   const { a1, a2, dtS, roughness, method, cos, sin } = job;
   const durationS = (a1.length - 1) * dtS;
-  // The sweep's execution plan: the method's sub-steps, composed down to the steps that the
-  // Hermite refinement needs (executionPlan in substeps.ts), so PSA here is the sweep's PSA.
+  // The sweep's execution plan (substeps.ts), so PSA here is the sweep's PSA.
   const run = executionPlan(
     substepCount(method, periodS, dtS, { damping, durationS, roughness }),
     periodS,
