@@ -1,7 +1,4 @@
-/**
- * The standing caution. Every output of quakesweep (terminal, JSON, CSV, SVG, HTML) carries this
- * text, and this module is the only place it is written.
- */
+/** The standing caution, carried by every output (terminal, JSON, CSV, SVG, HTML); written only here. */
 export const CAUTION =
   'Preliminary engineering aid only. Results depend on the record, its processing and the ' +
   'assumptions stated with them; they are not a design and not a check of anchor capacity. ' +

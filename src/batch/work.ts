@@ -67,9 +67,8 @@ export function processRecord(task: RecordTask): RecordOutcome {
 }
 
 /**
- * Claim records from `counter` one at a time and run each on this thread, giving its outcome to
- * `report`, until none is left (the main thread and every batch worker run this). The thread
- * yields between records, so that the other threads' outcomes come in and the progress bar moves.
+ * Claim records from `counter` and run each on this thread, giving its outcome to `report`, until
+ * none is left; yield between records so that other threads' outcomes come in and progress shows.
  */
 export async function claimRecords(
   tasks: readonly RecordTask[],

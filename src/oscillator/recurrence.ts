@@ -3,13 +3,10 @@ import { expm } from './expm.js';
 
 /**
  * The base-excited linear oscillator u'' + 2ζωu' + ω²u = −a_g(t), started at rest, advanced over
- * one step h from state (u, v) with ground acceleration p_n at the start and p_{n+1} at the end:
- *
+ * one step h from state (u, v) with ground acceleration p_n at the start and p_{n+1} at the end;
+ * every method here is this linear recurrence, its coefficients computed once per oscillator:
  *   u_{n+1} = uu·u_n + uv·v_n + up0·p_n + up1·p_{n+1}
  *   v_{n+1} = vu·u_n + vv·v_n + vp0·p_n + vp1·p_{n+1}
- *
- * Every method here is such a linear recurrence; its eight coefficients are computed once per
- * period, damping and step, and the sweep's inner loop only multiplies and adds.
  */
 export interface StepCoefficients {
   uu: number;
@@ -52,7 +49,6 @@ export function stepCoefficients(
 /**
  * Newmark-β (Newmark 1959; Chopra, Dynamics of Structures, §5.4) with equilibrium enforced at
  * every step, so the relative acceleration a_n = −p_n − 2ζωv_n − ω²u_n is not carried as state.
- * The step is linear in (u_n, v_n, p_n, p_{n+1}), so its coefficients are read off (readOff).
  * The denominator 1 + γ·2ζωh + βω²h² is positive for every ζ ≥ 0.
  */
 export function newmarkCoefficients(
@@ -109,11 +105,10 @@ export function piecewiseExactCoefficients(
 }
 
 /**
- * Frequency and damping at which a Newmark recurrence has exactly the poles of the continuous
- * oscillator (pre-warping: the step matrix's eigenvalues become exp(λh), so the method has no
- * period error and no spurious amplitude decay; the error that is left is in how the excitation
- * enters, and does not grow with the number of cycles). For average acceleration, which is the
- * trapezoidal rule (the bilinear transform s = (2/h)(z − 1)/(z + 1)), it is closed-form: with
+ * Frequency and damping at which a Newmark recurrence has exactly the poles exp(λh) of the
+ * continuous oscillator (pre-warping: no period error, no spurious decay; what is left is in how
+ * the excitation enters, and does not grow with the cycles). For average acceleration, the
+ * trapezoidal rule (bilinear transform s = (2/h)(z − 1)/(z + 1)), it is closed-form: with
  * τ = z₁ + z₂ = 2e^{−ζωh}cos(ω_D h) (cosh for ζ > 1) and δ = z₁z₂ = e^{−2ζωh},
  *   ω'² = (4/h²)(1 − τ + δ)/(1 + τ + δ),   2ζ'ω' = (4/h)(1 − δ)/(1 + τ + δ)
  * (pre-warping of the bilinear transform: Oppenheim and Schafer, Discrete-Time Signal Processing,
@@ -165,11 +160,8 @@ export function prewarpedOscillator(
 }
 
 /**
- * The map of `count` consecutive steps of `s` under an input that varies linearly from p0 to p1
- * over all of them (sub-step j runs from p0 + (p1 − p0)·j/count to p0 + (p1 − p0)·(j + 1)/count),
- * as one step in the same form. It is the sub-stepped recurrence itself, read off (readOff), so
- * a composed step gives the numbers of the sub-steps (to rounding) for the cost of one; only the
- * values between its ends are not visited.
+ * `count` steps of `s` under an input linear from p0 to p1 over all of them, as one step in the
+ * same form: the sub-stepped recurrence read off, so its ends are the sub-steps' (to rounding).
  */
 export function composeSteps(s: StepCoefficients, count: number): StepCoefficients {
   if (count === 1) return s;
@@ -187,10 +179,7 @@ export function composeSteps(s: StepCoefficients, count: number): StepCoefficien
   });
 }
 
-/**
- * The coefficients of one executed step of length `stepS` made of `composed` sub-steps of
- * `method` (composeSteps), each pre-warped to the oscillator's exact poles unless `prewarp` is false.
- */
+/** One executed step of `stepS`: `composed` sub-steps of `method` (composeSteps), pre-warped by default. */
 export function executedStepCoefficients(
   method: Method,
   omegaRadS: number,

@@ -38,7 +38,6 @@ export function referencePeaks(
   let peakU = 0;
   let peakV = 0;
   let peakS = 0;
-  // Pass 1 refines nothing; pass 2 refines the steps that pass P·r − d.
   let limitU = Infinity;
   let limitV = Infinity;
   let limitS = Infinity;
