@@ -8,16 +8,15 @@ export const CAUTION =
 /** Wrap a paragraph greedily at `width` columns, the first line after `first`, the others after `rest`. */
 export function wrapText(text: string, width: number, first = '', rest = ''): string[] {
   const lines: string[] = [];
-  let line = first;
-  let fresh = true;
-  for (const word of text.split(' ')) {
-    if (!fresh && line.length + 1 + word.length > width) {
+  const [head, ...words] = text.split(' ');
+  let line = first + head;
+  for (const word of words) {
+    if (line.length + 1 + word.length > width) {
       lines.push(line);
       line = rest + word;
     } else {
-      line = fresh ? line + word : `${line} ${word}`;
+      line = `${line} ${word}`;
     }
-    fresh = false;
   }
   lines.push(line);
   return lines;

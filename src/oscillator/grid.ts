@@ -53,9 +53,8 @@ export function parsePeriods(text: string): Float64Array {
     });
   }
   values.sort((a, b) => a - b);
-  for (let i = 1; i < values.length; i++) {
-    if (values[i] === values[i - 1]) throw usageError(`--periods: ${values[i]} s appears twice`);
-  }
+  const twice = values.find((value, i) => i > 0 && value === values[i - 1]);
+  if (twice !== undefined) throw usageError(`--periods: ${twice} s appears twice`);
   return Float64Array.from(values);
 }
 
@@ -81,8 +80,7 @@ export function parseDampings(text: string): Float64Array {
     }
     return percent ? value / 100 : value;
   });
-  for (let i = 0; i < values.length; i++) {
-    if (values.indexOf(values[i]) !== i) throw usageError(`--damping: ${values[i]} appears twice`);
-  }
+  const twice = values.find((value, i) => values.indexOf(value) !== i);
+  if (twice !== undefined) throw usageError(`--damping: ${twice} appears twice`);
   return Float64Array.from(values);
 }

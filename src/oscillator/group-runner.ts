@@ -7,12 +7,9 @@ import type { SweepKernel } from './sweep.js';
 
 /** The kernel a sweep uses: WebAssembly SIMD where the engine has it, unless told otherwise. */
 export function resolveKernel(kernel: SweepKernel, simd = wasmSimdSupported()): 'wasm' | 'js' {
-  if (kernel === 'js') return 'js';
-  if (kernel === 'wasm') {
-    if (!simd) throw inputError('the WebAssembly SIMD kernel does not run on this engine');
-    return 'wasm';
-  }
-  return simd ? 'wasm' : 'js';
+  if (kernel === 'wasm' && !simd) throw inputError('the WebAssembly SIMD kernel does not run on this engine');
+  if (kernel === 'auto') return simd ? 'wasm' : 'js';
+  return kernel;
 }
 
 /**

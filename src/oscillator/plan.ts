@@ -40,14 +40,9 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const durationS = (accelMS2.length - 1) * dtS;
   const { roughness, bounds } = recordStatistics(accelMS2, dtS);
   const prewarp = options.prewarp ?? true;
+  const context = { durationS, prewarp, roughness, stepsPerPeriod: options.stepsPerPeriod };
   const runOf = (periodS: number, damping: number) => {
-    const substeps = substepCount(method, periodS, dtS, {
-      damping,
-      durationS,
-      prewarp,
-      roughness,
-      stepsPerPeriod: options.stepsPerPeriod,
-    });
+    const substeps = substepCount(method, periodS, dtS, { ...context, damping });
     return executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod);
   };
   // Pre-warped, the rule does not depend on the damping: once a period.

@@ -106,14 +106,13 @@ export function piecewiseExactCoefficients(
 
 /**
  * Frequency and damping at which a Newmark recurrence has exactly the poles exp(λh) of the
- * continuous oscillator (pre-warping: no period error, no spurious decay; what is left is in how
- * the excitation enters, and does not grow with the cycles). For average acceleration, the
- * trapezoidal rule (bilinear transform s = (2/h)(z − 1)/(z + 1)), it is closed-form: with
- * τ = z₁ + z₂ = 2e^{−ζωh}cos(ω_D h) (cosh for ζ > 1) and δ = z₁z₂ = e^{−2ζωh},
- *   ω'² = (4/h²)(1 − τ + δ)/(1 + τ + δ),   2ζ'ω' = (4/h)(1 − δ)/(1 + τ + δ)
- * (pre-warping of the bilinear transform: Oppenheim and Schafer, Discrete-Time Signal Processing,
- * §7.2; Franklin, Powell and Workman, Digital Control of Dynamic Systems, §6.3). For linear
- * acceleration the same trace and determinant are matched by Newton's method.
+ * continuous oscillator (pre-warping: no period error, no spurious decay; the error left, in how
+ * the excitation enters, does not grow with the cycles). For average acceleration (trapezoidal
+ * rule, bilinear transform s = (2/h)(z − 1)/(z + 1); Oppenheim and Schafer, Discrete-Time Signal
+ * Processing, §7.2; Franklin, Powell and Workman, Digital Control of Dynamic Systems, §6.3), with
+ * τ = z₁ + z₂ = 2e^{−ζωh}cos(ω_D h) (cosh for ζ > 1) and δ = z₁z₂ = e^{−2ζωh}:
+ *   ω'² = (4/h²)(1 − τ + δ)/(1 + τ + δ),   2ζ'ω' = (4/h)(1 − δ)/(1 + τ + δ).
+ * For linear acceleration Newton's method matches the same trace and determinant.
  */
 export function prewarpedOscillator(
   method: Method,
@@ -134,8 +133,7 @@ export function prewarpedOscillator(
   let omega = Math.sqrt(omegaSquared);
   let zeta = ((4 / h) * ((1 - determinant) / denominator)) / (2 * omega);
   if (method === 'newmark-average') return { omegaRadS: omega, damping: zeta };
-  // Newmark linear acceleration: solve trace(A(ω', ζ')) = τ, det(A(ω', ζ')) = δ from the
-  // average-acceleration values, with a finite-difference Jacobian.
+  // From the average-acceleration values, with a finite-difference Jacobian.
   const residual = (w: number, z: number): [number, number] => {
     const c = newmarkCoefficients(w, z, h, 0.5, 1 / 6);
     return [c.uu + c.vv - trace, c.uu * c.vv - c.uv * c.vu - determinant];

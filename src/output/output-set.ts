@@ -84,13 +84,9 @@ export class OutputSet {
   }
 }
 
-/** Write one file atomically, after the checks of an output set, none of the `protect`ed inputs. */
-export function writeFileAtomic(
-  path: string,
-  contents: string | Uint8Array,
-  protect: readonly string[] = [],
-) {
-  new OutputSet(protect).file(path, contents).write();
+/** Write one file atomically, after the checks of an output set, over none of the `inputs`. */
+export function writeFileAtomic(path: string, contents: string | Uint8Array, inputs: readonly string[] = []) {
+  new OutputSet(inputs).file(path, contents).write();
 }
 
 /** A folder may exist (as a folder), or be created when its parent exists or is `planned` (full paths). */

@@ -12,10 +12,7 @@ import {
 import { shared, ThreadTeam, workerScript } from './team.js';
 
 export interface ParallelSweepOptions extends SweepOptions {
-  /**
-   * Threads stepping oscillators, this one included: a number (1 sweeps here alone), or 'auto'
-   * (the default): all cores from PARALLEL_MIN_OSCILLATOR_STEPS oscillator-steps, one below.
-   */
+  /** Threads, this one included: a number (1 sweeps here), or 'auto' (the default; see sweepThreads). */
   threads?: 'auto' | number;
 }
 

@@ -29,9 +29,8 @@ export function shared(values: Float64Array): Float64Array {
 }
 
 /**
- * Worker threads that run the jobs they are sent alongside the calling thread (`script` answers
- * every `{ id, job }` with `{ id }` or `{ id, error }`: serveJobs). A job is shared memory and a
- * counter from which every thread claims work until none is left.
+ * Worker threads that run the jobs they are sent (`{ id, job }`, answered by `{ id }` or `{ id, error }`:
+ * serveJobs) alongside the calling thread, every thread claiming work from the job's shared counter.
  */
 export class ThreadTeam {
   readonly threads: number;

@@ -6,24 +6,16 @@ import { SWEEP_WASM_BASE64 } from './wasm-binary.js';
  * has WebAssembly 128-bit SIMD (the fixed-width SIMD proposal, WebAssembly 2.0 §4.3). Magic and
  * version; type section () → v128; function section; code section with v128.const 0.
  */
-const SIMD_PROBE = Uint8Array.from(
-  Buffer.from(
-    `0061736d01000000 0105016000017b 03020100 0a160114 00fd0c${'00'.repeat(16)}0b`.replace(/ /g, ''),
-    'hex',
-  ),
+const SIMD_PROBE = Buffer.from(
+  `0061736d01000000 0105016000017b 03020100 0a160114 00fd0c${'00'.repeat(16)}0b`.replace(/ /g, ''),
+  'hex',
 );
 
 let simdSupported: boolean | undefined;
 
 /** Whether this engine runs WebAssembly SIMD (detected once, by validating SIMD_PROBE). */
 export function wasmSimdSupported(): boolean {
-  if (simdSupported === undefined) {
-    try {
-      simdSupported = WebAssembly.validate(SIMD_PROBE);
-    } catch {
-      simdSupported = false;
-    }
-  }
+  simdSupported ??= typeof WebAssembly === 'object' && WebAssembly.validate(SIMD_PROBE);
   return simdSupported;
 }
 
