@@ -41,10 +41,7 @@ function describeError(error: unknown, file: string): string {
   return `${file}: ${message.split('\n')[0]}`;
 }
 
-/**
- * Read, process and sweep one record, and write DIR/<name>/spectra.json (the JSON of
- * `quakesweep spectrum`). Never throws: a bad record comes back as an outcome with its error.
- */
+/** Read, process and sweep a record into outDir/name/spectra.json; a failure comes back as its outcome. */
 export function processRecord(task: RecordTask): RecordOutcome {
   const { file, name, settings } = task;
   try {

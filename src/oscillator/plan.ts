@@ -64,8 +64,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
     }
   }
   const groups: PlannedOscillator[][] = [];
-  for (const substeps of [...buckets.keys()].sort((a, b) => a - b)) {
-    const bucket = buckets.get(substeps) as PlannedOscillator[];
+  for (const [, bucket] of [...buckets].sort(([a], [b]) => a - b)) {
     for (let start = 0; start < bucket.length; start += GROUP_WIDTH) {
       groups.push(bucket.slice(start, start + GROUP_WIDTH));
     }

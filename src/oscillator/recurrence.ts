@@ -62,15 +62,14 @@ export function newmarkCoefficients(
   const k = omegaRadS * omegaRadS;
   const h = stepS;
   const denominator = 1 + c * gamma * h + k * beta * h * h;
-  const step = (u: number, v: number, p0: number, p1: number): [number, number] => {
+  return readOff((u, v, p0, p1) => {
     const a0 = -p0 - c * v - k * u;
     const a1 =
       (-p1 - k * u - (c + k * h) * v - (c * h * (1 - gamma) + k * h * h * (0.5 - beta)) * a0) / denominator;
     const u1 = u + h * v + h * h * ((0.5 - beta) * a0 + beta * a1);
     const v1 = v + h * ((1 - gamma) * a0 + gamma * a1);
     return [u1, v1];
-  };
-  return readOff(step);
+  });
 }
 
 /** The coefficients of a step that is linear in (u, v, p0, p1), read off by stepping the four unit vectors. */
@@ -83,10 +82,9 @@ function readOff(step: (u: number, v: number, p0: number, p1: number) => [number
 }
 
 /**
- * The exact step for ground acceleration that varies linearly over the step: the recurrence of
- * Nigam and Jennings (1969), obtained here without case distinctions for ζ < 1, ζ = 1 and ζ > 1
- * as the exponential of the augmented matrix of the system z = (u, v, p, ṗ) with ṗ constant
- * (Van Loan, "Computing integrals involving the matrix exponential", IEEE TAC 23, 1978):
+ * The exact step for ground acceleration linear over the step (Nigam and Jennings 1969), without
+ * cases for ζ < 1, = 1, > 1, as the exponential of the augmented matrix of z = (u, v, p, ṗ), ṗ
+ * constant (Van Loan, "Computing integrals involving the matrix exponential", IEEE TAC 23, 1978):
  * z(h) = exp(M h) z(0), M = [[0, 1, 0, 0], [−ω², −2ζω, −1, 0], [0, 0, 0, 1], [0, 0, 0, 0]].
  * With ṗ = (p_{n+1} − p_n)/h, the coefficient of p_n is E₁₃ − E₁₄/h and of p_{n+1} is E₁₄/h.
  */

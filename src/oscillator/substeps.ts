@@ -70,10 +70,9 @@ export function stepsPerPeriod(method: Method, periodS: number, context: Substep
 /** How many equal sub-steps each record step is divided into for an oscillator of period T. */
 export function substepCount(method: Method, periodS: number, dtS: number, context: SubstepContext): number {
   if (periodS <= 0) return 1;
-  const perPeriod = stepsPerPeriod(method, periodS, context);
   return Math.max(
     recordSubsteps(method, context.roughness ?? 0),
-    Math.ceil((dtS * perPeriod) / periodS - 1e-9),
+    Math.ceil((dtS * stepsPerPeriod(method, periodS, context)) / periodS - 1e-9),
   );
 }
 

@@ -65,10 +65,8 @@ export function emptyPeaks(plan: SweepPlan): Peaks {
     saMS2: new Float64Array(count),
     oscillatorSteps: 0,
   };
-  for (let d = 0; d < plan.dampings.length; d++) {
-    for (let p = 0; p < plan.periodsS.length; p++) {
-      if (plan.periodsS[p] === 0) peaks.saMS2[d * plan.periodsS.length + p] = plan.bounds.pgaMS2;
-    }
+  for (let i = 0; i < count; i++) {
+    if (plan.periodsS[i % plan.periodsS.length] === 0) peaks.saMS2[i] = plan.bounds.pgaMS2;
   }
   return peaks;
 }

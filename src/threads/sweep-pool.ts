@@ -29,10 +29,7 @@ export interface SharedSweepJob {
   plan: SweepPlan;
 }
 
-/**
- * Claim groups one at a time, step them with this thread's kernel and write their peaks into the
- * shared results (an oscillator's peaks do not depend on the thread that steps it).
- */
+/** Claim groups one at a time and write their peaks into the shared results (the same whichever thread). */
 export function runClaimedGroups(job: SharedSweepJob): void {
   let runner: ReturnType<typeof groupRunner> | undefined;
   for (;;) {

@@ -49,7 +49,10 @@ export class ThreadTeam {
     for (let i = 1; i < threads; i++) {
       const worker = startWorker(script);
       worker.on('message', (message: { id: number; error?: string }) => this.settle(message));
-      worker.on('error', (error) => this.failAll(error));
+      worker.on('error', (error) => {
+        for (const entry of this.pending.values()) entry.reject(error);
+        this.pending.clear();
+      });
       this.workers.push(worker);
     }
   }
@@ -62,11 +65,6 @@ export class ThreadTeam {
     this.pending.delete(message.id);
     if (failed) entry.reject(new QuakesweepError('internal', `worker thread: ${message.error}`));
     else entry.resolve();
-  }
-
-  private failAll(error: Error): void {
-    for (const entry of this.pending.values()) entry.reject(error);
-    this.pending.clear();
   }
 
   /** Send `job` to every worker, run `here` on this thread meanwhile, and wait for them all. */

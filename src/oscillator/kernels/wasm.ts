@@ -38,7 +38,7 @@ export interface KernelInstance {
   holder?: KernelInputs;
 }
 
-/** A user of the kernel that loads its inputs (a record, or two components and the angles) into its memory. */
+/** A user of the kernel, which loads its inputs (a record, or two components and angles) into its memory. */
 export interface KernelInputs {
   load(view: Float64Array): void;
 }
@@ -129,8 +129,7 @@ export class WasmSweeper implements KernelInputs {
     const { at } = this;
     const view = kernelMemory(this.kernel, at.end + blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8, this);
     const c = at.coefficients / 8;
-    // Lanes side by side (oscillators 0 and 1 in the first vector, 2 and 3 in the second); a
-    // short group repeats its last oscillator.
+    // Lanes interleaved (0 and 1 in the first vector, 2 and 3 in the second); a short group repeats its last.
     for (let i = 0; i < GROUP_WIDTH; i++) {
       const from = Math.min(i, count - 1) * COEFFICIENT_STRIDE;
       const lane = c + (i >> 1) * COEFFICIENT_STRIDE * 2 + (i & 1);
