@@ -1,7 +1,6 @@
 'use strict';
-// Loads the CLI bundle (dist/cli/quakesweep.cjs, made by scripts/build-cli.mjs) with the V8 code
-// cache made beside it at build time. CommonJS (see bin/package.json): a CommonJS entry point
-// starts without Node's ES module loader.
+// Loads the CLI bundle (dist/cli/quakesweep.cjs, by scripts/build-cli.mjs) with the V8 code cache
+// made beside it. CommonJS (bin/package.json), which starts without Node's ES module loader.
 const { existsSync, readFileSync, statSync } = require('node:fs');
 const { createRequire } = require('node:module');
 const { dirname, join } = require('node:path');
@@ -11,10 +10,9 @@ const BUNDLE = join(__dirname, '..', 'dist', 'cli', 'quakesweep.cjs');
 const CACHE = `${BUNDLE}.cache`;
 
 /**
- * Compile and run the bundle; its exports are those of dist/cli/main.js. With `cache` (the
- * default) the code cache is handed to V8 when it is at least as new as the bundle (V8 compares
- * no more than the Node version, its flags and the source's length); V8 refuses a cache that does
- * not fit, and the bundle is then compiled as usual. `script` can make a cache.
+ * Compile and run the bundle (exports: those of dist/cli/main.js). With `cache`, the code cache is
+ * given to V8 when no older than the bundle (V8 checks only the Node version, flags and source
+ * length, and refuses a cache that does not fit). `script` can make a cache.
  */
 function compileCli({ cache = true } = {}) {
   const source = readFileSync(BUNDLE, 'utf8');

@@ -1,7 +1,4 @@
-/**
- * The standing caution. Every output of quakesweep (terminal, JSON, CSV, SVG, HTML) carries this
- * text, and this module is the only place it is written.
- */
+/** The standing caution, carried by every output (terminal, JSON, CSV, SVG, HTML); written only here. */
 export const CAUTION =
   'Preliminary engineering aid only. Results depend on the record, its processing and the ' +
   'assumptions stated with them; they are not a design and not a check of anchor capacity. ' +
@@ -11,16 +8,15 @@ export const CAUTION =
 /** Wrap a paragraph greedily at `width` columns, the first line after `first`, the others after `rest`. */
 export function wrapText(text: string, width: number, first = '', rest = ''): string[] {
   const lines: string[] = [];
-  let line = first;
-  let fresh = true;
-  for (const word of text.split(' ')) {
-    if (!fresh && line.length + 1 + word.length > width) {
+  const [head, ...words] = text.split(' ');
+  let line = first + head;
+  for (const word of words) {
+    if (line.length + 1 + word.length > width) {
       lines.push(line);
       line = rest + word;
     } else {
-      line = fresh ? line + word : `${line} ${word}`;
+      line = `${line} ${word}`;
     }
-    fresh = false;
   }
   lines.push(line);
   return lines;

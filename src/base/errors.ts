@@ -1,14 +1,12 @@
 /**
- * Typed errors. The core throws these; only the CLI turns them into one line and an exit code.
- * `input` is a bad record, file or option value (exit 2), `usage` a bad command line (exit 2),
- * `internal` a fault of quakesweep itself (exit 1).
+ * Typed errors, which only the CLI turns into one line and an exit code: `input` a bad record, file
+ * or option value (exit 2), `usage` a bad command line (exit 2), `internal` a fault of ours (exit 1).
  */
 export type ErrorKind = 'input' | 'usage' | 'internal';
 
+/** The file the problem is in, as the user named it, and the 1-based line in it. */
 export interface ErrorPlace {
-  /** The file the problem is in, as the user named it. */
   file?: string;
-  /** 1-based line number in that file. */
   line?: number;
 }
 
@@ -32,12 +30,10 @@ export class QuakesweepError extends Error {
   }
 }
 
-/** A bad record, file or value. */
 export function inputError(message: string, place: ErrorPlace = {}): QuakesweepError {
   return new QuakesweepError('input', message, place);
 }
 
-/** A bad command line or option. */
 export function usageError(message: string): QuakesweepError {
   return new QuakesweepError('usage', message);
 }

@@ -24,10 +24,7 @@ export type LengthUnit = keyof typeof LENGTH_UNITS;
 /** The accepted spellings, for error messages. */
 export const ACCELERATION_UNIT_NAMES = Object.keys(ACCELERATION_UNITS).join(', ');
 
-/**
- * Parse an acceleration unit name, in any case, with s2, s^2 or s² alike; units are never guessed,
- * so a missing one is refused.
- */
+/** Parse an acceleration unit name, in any case, with s2, s^2 or s² alike; never guessed when missing. */
 export function parseAccelerationUnit(text: string | undefined): AccelerationUnit {
   if (text === undefined || text.trim() === '') {
     throw usageError(`the record's units are required (--units); accepted: ${ACCELERATION_UNIT_NAMES}`);

@@ -7,9 +7,8 @@ export function isPattern(path: string): boolean {
 }
 
 /**
- * A file-name pattern as a regular expression: `*` matches any run of characters (none too),
- * `?` exactly one; everything else stands for itself. A leading dot must be matched explicitly
- * (as in a POSIX shell), so `*` does not pick up hidden files.
+ * A file-name pattern as a regular expression: `*` matches any run of characters, `?` exactly one;
+ * a leading dot must be matched explicitly (as in a POSIX shell), so `*` skips hidden files.
  */
 export function patternRegExp(pattern: string): RegExp {
   const body = pattern
@@ -20,11 +19,9 @@ export function patternRegExp(pattern: string): RegExp {
 }
 
 /**
- * Expand the arguments of `batch`: a plain path is taken as is (a missing file is reported by the
- * run, not here); a pattern with `*` or `?` in its last segment is matched against the files of
- * its folder (no recursion, no `**`, no brackets; the folder part is literal). `files`: every file
- * named or matched, each once, sorted (code-unit order, so the same everywhere); `unmatched`: the
- * patterns that matched no file.
+ * Expand the arguments of `batch`: a plain path is taken as is (the run reports a missing file); a
+ * pattern is matched against the files of its literal folder (no recursion, no `**`, no brackets).
+ * `files`: every file named or matched, once each, sorted; `unmatched`: patterns that matched none.
  */
 export function expandPatterns(args: readonly string[]): { files: string[]; unmatched: string[] } {
   const found = new Set<string>();

@@ -16,15 +16,14 @@ export function sanitiseName(name: string): string {
     .replace(/\.{2,}/g, '_')
     .replace(/^\.+/, '_')
     .slice(0, 96);
-  if (safe === '' || safe === '_' || /^_+$/.test(safe)) safe = `record${safe}`;
+  if (/^_*$/.test(safe)) safe = `record${safe}`;
   if (RESERVED.test(safe)) safe = `record-${safe}`;
   return safe;
 }
 
 /**
- * Folder names for every file of the whole (unsharded) list, so that every shard gives a record
- * the same name: sanitised, then made unique without regard to case in sorted-file order, the
- * first keeping its name and the later ones taking `-2`, `-3`, … (the first free one).
+ * Folder names for every file of the whole (unsharded) list, so that every shard names a record
+ * alike: sanitised, then made unique regardless of case in sorted order by `-2`, `-3`, ….
  */
 export function assignNames(files: readonly string[]): Map<string, string> {
   const names = new Map<string, string>();

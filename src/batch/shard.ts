@@ -18,10 +18,9 @@ function whole(text: string | undefined, what: string): number {
 }
 
 /**
- * `--shard i/N` (1 ≤ i ≤ N, 1-based like Slurm's usual --array=1-N) or `--shard auto`, which reads
- * SLURM_ARRAY_TASK_ID with SLURM_ARRAY_TASK_COUNT (or _MIN/_MAX; index = ID − MIN + 1, so 0-based
- * and 1-based arrays both work), else JOB_COMPLETION_INDEX (0-based, index = it + 1) with the count
- * from --shard-count or QUAKESWEEP_SHARD_COUNT.
+ * `--shard i/N` (1 ≤ i ≤ N) or `--shard auto`: SLURM_ARRAY_TASK_ID with SLURM_ARRAY_TASK_COUNT (or
+ * _MIN/_MAX; index = ID − MIN + 1, so 0- and 1-based arrays both work), else JOB_COMPLETION_INDEX
+ * (0-based, index = it + 1) with the count from --shard-count or QUAKESWEEP_SHARD_COUNT.
  */
 export function parseShard(
   text: string,

@@ -22,11 +22,10 @@ export const STATISTICS_METHOD =
   'where a PSA is 0 or, for p16 and p84, with fewer than two records';
 
 /**
- * Mean, median and 16th/84th percentiles of PSA across records at every period and damping, the
- * percentiles from a log-normal fit (common practice for suites of ground motions: ln PSA taken as
- * normal, so the median is exp(mean ln PSA) and the 16th and 84th percentiles are one standard
- * deviation below and above it). The records are taken sorted by name, so the sums run in the same
- * order in a single run and in a merge of shards, and the results agree to the last digit.
+ * Mean, median and 16th/84th percentiles of PSA across records at every period and damping, from a
+ * log-normal fit (common practice for suites of ground motions: ln PSA taken as normal, the
+ * percentiles one standard deviation off). Records are sorted by name, so that a single run and a
+ * merge of shards sum in the same order and agree to the last digit.
  */
 export function suiteStatistics(
   records: readonly RecordPsa[],

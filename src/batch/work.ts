@@ -41,10 +41,7 @@ function describeError(error: unknown, file: string): string {
   return `${file}: ${message.split('\n')[0]}`;
 }
 
-/**
- * Read, process and sweep one record, and write DIR/<name>/spectra.json (the JSON of
- * `quakesweep spectrum`). Never throws: a bad record comes back as an outcome with its error.
- */
+/** Read, process and sweep a record into outDir/name/spectra.json; a failure comes back as its outcome. */
 export function processRecord(task: RecordTask): RecordOutcome {
   const { file, name, settings } = task;
   try {
@@ -67,9 +64,8 @@ export function processRecord(task: RecordTask): RecordOutcome {
 }
 
 /**
- * Claim records from `counter` one at a time and run each on this thread, giving its outcome to
- * `report`, until none is left (the main thread and every batch worker run this). The thread
- * yields between records, so that the other threads' outcomes come in and the progress bar moves.
+ * Claim records from `counter` and run each on this thread, giving its outcome to `report`, until
+ * none is left; yield between records so that other threads' outcomes come in and progress shows.
  */
 export async function claimRecords(
   tasks: readonly RecordTask[],

@@ -1,10 +1,8 @@
 /**
- * Exponential of a small dense square matrix (row-major Float64Array of n×n), by scaling and
- * squaring with a truncated Taylor series: method 3 of Moler and Van Loan, "Nineteen dubious ways
- * to compute the exponential of a matrix, twenty-five years later", SIAM Review 45 (2003).
- * The matrix is scaled by 2^-s so that its 1-norm is at most 1/2, where 18 Taylor terms leave a
- * truncation error below 1e-20 of the norm; then the result is squared s times.
- * Used once per (period, damping, step) to build step coefficients, never in the inner loop.
+ * Exponential of a small dense n×n matrix (row-major), by scaling and squaring with a truncated
+ * Taylor series: method 3 of Moler and Van Loan, "Nineteen dubious ways to compute the exponential
+ * of a matrix, twenty-five years later", SIAM Review 45 (2003). Scaled to a 1-norm ≤ 1/2, 18 terms
+ * leave an error below 1e-20 of the norm. Used to build step coefficients, never in the inner loop.
  */
 export function expm(matrix: Float64Array, n: number): Float64Array {
   let norm = 0;

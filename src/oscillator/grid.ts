@@ -15,19 +15,15 @@ export function logSpaced(fromS: number, toS: number, count: number): number[] {
 }
 
 /**
- * Shortest period other than 0 in a grid, s (10 kHz). The sweep sub-steps each sample to follow
- * the oscillator, so the work grows as 1/T; far below this no record is sampled finely enough for
- * the period to mean anything, and T = 0 (rigid) is the way to ask for the PGA.
+ * Shortest period other than 0 in a grid, s (10 kHz): the work grows as 1/T, no record is sampled
+ * finely enough for shorter periods to mean anything, and T = 0 (rigid) asks for the PGA.
  */
 export const MIN_PERIOD_S = 1e-4;
 
 /** Most oscillators a sweep runs without `--force`. */
 export const MAX_OSCILLATORS = 1_000_000;
 
-/**
- * Parse a period grid: a comma list (`0,0.1,0.2,1`) or `a:b:n`, n log-spaced periods from a to b
- * seconds. Periods must be finite and ≥ 0; duplicates are refused and the list is sorted.
- */
+/** Parse a period grid, s: a comma list (`0,0.1,1`) or `a:b:n`, n log-spaced from a to b; sorted. */
 export function parsePeriods(text: string): Float64Array {
   const spec = text.trim();
   let values: number[];
@@ -57,9 +53,8 @@ export function parsePeriods(text: string): Float64Array {
     });
   }
   values.sort((a, b) => a - b);
-  for (let i = 1; i < values.length; i++) {
-    if (values[i] === values[i - 1]) throw usageError(`--periods: ${values[i]} s appears twice`);
-  }
+  const twice = values.find((value, i) => i > 0 && value === values[i - 1]);
+  if (twice !== undefined) throw usageError(`--periods: ${twice} s appears twice`);
   return Float64Array.from(values);
 }
 
@@ -68,9 +63,8 @@ function tooShort(text: string, periodS: number): string {
 }
 
 /**
- * Parse damping ratios: fractions (`0.05`) or percentages (`5%`), comma separated. A bare number
- * above 1 is refused (it is almost always a percentage written without `%`). Ratios above 1
- * (overdamped) are allowed when written as percentages.
+ * Parse damping ratios, comma separated: fractions (`0.05`) or percentages (`5%`). A bare number
+ * above 1 is refused (almost always a percentage without `%`); overdamped ones take a `%`.
  */
 export function parseDampings(text: string): Float64Array {
   const values = text.split(',').map((raw) => {
@@ -86,8 +80,7 @@ export function parseDampings(text: string): Float64Array {
     }
     return percent ? value / 100 : value;
   });
-  for (let i = 0; i < values.length; i++) {
-    if (values.indexOf(values[i]) !== i) throw usageError(`--damping: ${values[i]} appears twice`);
-  }
+  const twice = values.find((value, i) => values.indexOf(value) !== i);
+  if (twice !== undefined) throw usageError(`--damping: ${twice} appears twice`);
   return Float64Array.from(values);
 }

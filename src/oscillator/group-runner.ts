@@ -7,18 +7,14 @@ import type { SweepKernel } from './sweep.js';
 
 /** The kernel a sweep uses: WebAssembly SIMD where the engine has it, unless told otherwise. */
 export function resolveKernel(kernel: SweepKernel, simd = wasmSimdSupported()): 'wasm' | 'js' {
-  if (kernel === 'js') return 'js';
-  if (kernel === 'wasm') {
-    if (!simd) throw inputError('the WebAssembly SIMD kernel does not run on this engine');
-    return 'wasm';
-  }
-  return simd ? 'wasm' : 'js';
+  if (kernel === 'wasm' && !simd) throw inputError('the WebAssembly SIMD kernel does not run on this engine');
+  if (kernel === 'auto') return simd ? 'wasm' : 'js';
+  return kernel;
 }
 
 /**
  * A function that steps one planned group over the record from rest and returns its peaks
- * (PEAK_STRIDE per oscillator; the array is reused from call to call). The group's coefficients
- * are packed here, by the thread that steps it.
+ * (PEAK_STRIDE per oscillator, in an array reused between calls), packing its coefficients itself.
  */
 export function groupRunner(
   accelMS2: Float64Array,
@@ -35,8 +31,7 @@ export function groupRunner(
       packCoefficients(packed, g, group[g], plan.method, stepS, plan.bounds, plan.prewarp);
     }
     if (sweeper !== undefined) {
-      // Newmark average acceleration has equal forcing coefficients (see assembly/sweep.ts),
-      // unless sub-steps are composed.
+      // Newmark average acceleration has equal forcing coefficients unless sub-steps are composed.
       const symmetric = plan.method === 'newmark-average' && group.every((o) => o.composed === 1);
       sweeper.run(packed, group.length, substeps, stepS, symmetric, values);
     } else {

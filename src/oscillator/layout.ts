@@ -6,8 +6,7 @@ export const STEP_KEYS = ['uu', 'uv', 'up0', 'up1', 'vu', 'vv', 'vp0', 'vp1'] as
 
 /**
  * The values of a row, in order: the step's, c = 2ζω and k = ω² for the absolute acceleration
- * −(c·v + k·u), and the refinement threshold's ratio r and offsets du, dv, ds for u, v and the
- * absolute acceleration (see refinementThresholds in peak.ts).
+ * −(c·v + k·u), and the ratio r and offsets du, dv, ds of refinementThresholds (peak.ts).
  */
 const ROW = [...STEP_KEYS, 'c', 'k', 'ratio', 'du', 'dv', 'ds'] as const;
 
@@ -21,17 +20,11 @@ export const COEFFICIENT_STRIDE = ROW.length;
 /** Peaks per oscillator, in this order: |u|max (m), |v|max (m/s), |ü + a_g|max (m/s²). */
 export const PEAK_STRIDE = 3;
 
-/**
- * Values per oscillator in a block's checkpoint of the WebAssembly kernel's first pass: u and v
- * at the block's start, then the block's largest |u|, |v| and |s| (CHECKPOINT_MAXIMA onwards).
- */
+/** Per oscillator in a checkpoint of pass 1: u and v at the block's start, then its largest |u|, |v|, |s|. */
 export const CHECKPOINT_STRIDE = 5;
 export const CHECKPOINT_MAXIMA = 2;
 
-/**
- * Values per oscillator in the WebAssembly kernel's state area: u and v, carried from stretch to
- * stretch of the first pass, then the three refinement thresholds.
- */
+/** Per oscillator in the WebAssembly kernel's state: u and v between stretches of pass 1, 3 thresholds. */
 export const STATE_STRIDE = 5;
 
 /** Oscillators per pass of the WebAssembly kernel (two f64x2 vectors) and per planned group. */

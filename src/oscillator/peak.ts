@@ -1,12 +1,10 @@
 import type { GroundBounds } from './record-statistics.js';
 
 /**
- * Peak of |q(t)| over one step, from the values and slopes at its two ends, by cubic Hermite
- * interpolation (common practice; the cubic is exact when q is a cubic in t, and its error is
- * h⁴·max|q''''|/384 otherwise — any numerical analysis text, e.g. Burden and Faires §3.4).
- * `q0`, `q1` are the values at the ends, `dq0`, `dq1` the time derivatives, `stepS` the step.
- * RotD's loops use it (assembly/rotd.ts repeats it); H' is taken as linear where its t² term
- * is below 1e-12 of the sum of its terms.
+ * Peak of |q(t)| over one step of `stepS`, from the values q0, q1 and time derivatives dq0, dq1 at
+ * its ends, by cubic Hermite interpolation (common practice; error h⁴·max|q''''|/384, e.g. Burden
+ * and Faires §3.4). For RotD (assembly/rotd.ts repeats it); H' is taken as linear where its t²
+ * term is below 1e-12 of the sum of its terms.
  */
 export function hermitePeak(q0: number, q1: number, dq0: number, dq1: number, stepS: number): number {
   const m0 = dq0 * stepS;
@@ -18,10 +16,9 @@ export function hermitePeak(q0: number, q1: number, dq0: number, dq1: number, st
 }
 
 /**
- * `peak`, or the cubic Hermite peak of |q| inside the step if larger (as hermitePeak), for the
- * sweep's kernels: H' is taken as linear where its t² term is below 1e-9 of the others, since it
- * vanishes identically for Newmark average acceleration, whose velocity update is the trapezoidal
- * rule. The SIMD kernel (scripts/wasm-kernel-loops.mjs) finds the roots the same way.
+ * `peak`, or the larger hermitePeak, for the sweep's kernels (scripts/wasm-kernel-loops.mjs finds
+ * the roots the same way): H' is linear where its t² term is below 1e-9 of the others, since that
+ * term vanishes for Newmark average acceleration (its velocity update is the trapezoidal rule).
  */
 export function hermiteFold(peak: number, q0: number, q1: number, dq0: number, dq1: number, stepS: number) {
   const m0 = dq0 * stepS;
@@ -62,15 +59,15 @@ function hermiteAt(peak: number, q0: number, q1: number, m0: number, m1: number,
 }
 
 /**
- * When to refine a peak between steps. Near its peak P* at t*, a quantity q falls off no faster
- * than ½|q''|(t − t*)² (Taylor's theorem), so both ends of the step holding P* are above
- * P* − ½h²·max|q''|. Bounding |q''| at the peak from the equation of motion (with a_rel = ü):
+ * When to refine a peak between steps. Near its peak P* a quantity q falls off no faster than
+ * ½|q''|(t − t*)² (Taylor), so both ends of the step holding P* are above P* − ½h²·max|q''|, with
+ * |q''| at the peak bounded from the equation of motion (a_rel = ü):
  *   u'' = a_rel = −a_g − ω²u           → |u''| ≤ PGA + ω²P
  *   v'' = ȧ_rel = −ȧ_g − 2ζωa_rel − ω²v → |v''| ≤ J + ω²P      (a_rel = 0 at a peak of v)
  *   s'' (s = absolute acceleration)     → |s''| ≤ 2ζωJ + ω²(P + PGA)
  * where J is the record's peak jerk. A step whose new end is below P·r − d (r = 1 − ½(ωh)²·m,
  * d = ½h²·m·(bound's ground term), m = 1.1 a margin for the variation of q'' over the step)
- * cannot hold a peak higher than the running one P, so only the others are examined.
+ * cannot hold a peak above the running one P, and is not examined.
  */
 export function refinementThresholds(omegaRadS: number, cRadS: number, stepS: number, bounds: GroundBounds) {
   const margin = 1.1;

@@ -6,12 +6,9 @@ import { executedStepCoefficients, type Method } from './recurrence.js';
 import { executionPlan, substepCount } from './substeps.js';
 import type { SweepOptions } from './sweep.js';
 
-/**
- * One oscillator of a planned sweep: its index in the result arrays, the steps the kernel executes
- * per record step, and the method's sub-steps composed into each (see executionPlan in
- * substeps.ts).
- */
+/** One oscillator of a planned sweep (see executionPlan in substeps.ts). */
 export interface PlannedOscillator {
+  /** Index in the result arrays. */
   index: number;
   periodS: number;
   damping: number;
@@ -30,10 +27,7 @@ export interface SweepPlan {
   periodsS: Float64Array;
   dampings: Float64Array;
   bounds: GroundBounds;
-  /**
-   * Groups of at most GROUP_WIDTH oscillators with the same sub-step count, in sub-step order;
-   * each thread packs the coefficients of the groups it steps.
-   */
+  /** Groups of at most GROUP_WIDTH oscillators of one sub-step count, in sub-step order. */
   groups: PlannedOscillator[][];
 }
 
@@ -46,21 +40,16 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const durationS = (accelMS2.length - 1) * dtS;
   const { roughness, bounds } = recordStatistics(accelMS2, dtS);
   const prewarp = options.prewarp ?? true;
+  const context = { durationS, prewarp, roughness, stepsPerPeriod: options.stepsPerPeriod };
   const runOf = (periodS: number, damping: number) => {
-    const substeps = substepCount(method, periodS, dtS, {
-      damping,
-      durationS,
-      prewarp,
-      roughness,
-      stepsPerPeriod: options.stepsPerPeriod,
-    });
+    const substeps = substepCount(method, periodS, dtS, { ...context, damping });
     return executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod);
   };
   // Pre-warped, the rule does not depend on the damping: once a period.
   const runs = prewarp
     ? Array.from(periodsS, (periodS) => (periodS === 0 ? undefined : runOf(periodS, 0)))
     : [];
-  // Groups of one sub-step count each, in sub-step order, and in index order within a count.
+  // In index order within a sub-step count.
   const buckets = new Map<number, PlannedOscillator[]>();
   for (let d = 0; d < dampings.length; d++) {
     for (let p = 0; p < periodsS.length; p++) {
@@ -75,8 +64,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
     }
   }
   const groups: PlannedOscillator[][] = [];
-  for (const substeps of [...buckets.keys()].sort((a, b) => a - b)) {
-    const bucket = buckets.get(substeps) as PlannedOscillator[];
+  for (const [, bucket] of [...buckets].sort(([a], [b]) => a - b)) {
     for (let start = 0; start < bucket.length; start += GROUP_WIDTH) {
       groups.push(bucket.slice(start, start + GROUP_WIDTH));
     }
@@ -132,10 +120,8 @@ export function checkSweep(
 }
 
 /**
- * Oscillator-steps (sub-steps included) from which `threads: 'auto'` splits a sweep over all
- * cores. Below it, starting the worker threads and running their first groups cold costs more
- * than the second core saves in a whole run; measured on `quakesweep spectrum` runs of a
- * 40,000-sample record (the numbers are in the commit history).
+ * Oscillator-steps (sub-steps included) from which `threads: 'auto'` splits a sweep over all cores:
+ * below it, starting the workers costs more than the second core saves (measured; see the history).
  */
 export const PARALLEL_MIN_OSCILLATOR_STEPS = 20_000_000;
 

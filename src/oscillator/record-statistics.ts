@@ -6,10 +6,7 @@ export interface GroundBounds {
   jerkMS3: number;
 }
 
-/**
- * The record's roughness (recordRoughness) and bounds (GroundBounds), in one pass over it: Σa²,
- * Σ(Δa)², max |a| and max |Δa|.
- */
+/** The record's roughness (recordRoughness) and bounds (GroundBounds), in one pass over it. */
 export function recordStatistics(
   accelMS2: Float64Array,
   dtS: number,
@@ -32,9 +29,8 @@ export function recordStatistics(
 }
 
 /**
- * How much of the record's content sits near its Nyquist frequency: R = RMS(Δa)/RMS(a), which is
- * 2 sin(Ωdt/2) for a sine of circular frequency Ω (0 for a constant, 2 at the Nyquist
- * frequency). The sub-step rule uses it (see recordSubsteps in substeps.ts).
+ * How much of the record's content sits near its Nyquist frequency, for recordSubsteps: R =
+ * RMS(Δa)/RMS(a), which is 2 sin(Ωdt/2) for a sine of circular frequency Ω (2 at the Nyquist frequency).
  */
 export function recordRoughness(accelMS2: Float64Array): number {
   return recordStatistics(accelMS2, 1).roughness;

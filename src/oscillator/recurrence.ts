@@ -3,13 +3,10 @@ import { expm } from './expm.js';
 
 /**
  * The base-excited linear oscillator u'' + 2ζωu' + ω²u = −a_g(t), started at rest, advanced over
- * one step h from state (u, v) with ground acceleration p_n at the start and p_{n+1} at the end:
- *
+ * one step h from state (u, v) with ground acceleration p_n at the start and p_{n+1} at the end;
+ * every method here is this linear recurrence, its coefficients computed once per oscillator:
  *   u_{n+1} = uu·u_n + uv·v_n + up0·p_n + up1·p_{n+1}
  *   v_{n+1} = vu·u_n + vv·v_n + vp0·p_n + vp1·p_{n+1}
- *
- * Every method here is such a linear recurrence; its eight coefficients are computed once per
- * period, damping and step, and the sweep's inner loop only multiplies and adds.
  */
 export interface StepCoefficients {
   uu: number;
@@ -52,7 +49,6 @@ export function stepCoefficients(
 /**
  * Newmark-β (Newmark 1959; Chopra, Dynamics of Structures, §5.4) with equilibrium enforced at
  * every step, so the relative acceleration a_n = −p_n − 2ζωv_n − ω²u_n is not carried as state.
- * The step is linear in (u_n, v_n, p_n, p_{n+1}), so its coefficients are read off (readOff).
  * The denominator 1 + γ·2ζωh + βω²h² is positive for every ζ ≥ 0.
  */
 export function newmarkCoefficients(
@@ -66,15 +62,14 @@ export function newmarkCoefficients(
   const k = omegaRadS * omegaRadS;
   const h = stepS;
   const denominator = 1 + c * gamma * h + k * beta * h * h;
-  const step = (u: number, v: number, p0: number, p1: number): [number, number] => {
+  return readOff((u, v, p0, p1) => {
     const a0 = -p0 - c * v - k * u;
     const a1 =
       (-p1 - k * u - (c + k * h) * v - (c * h * (1 - gamma) + k * h * h * (0.5 - beta)) * a0) / denominator;
     const u1 = u + h * v + h * h * ((0.5 - beta) * a0 + beta * a1);
     const v1 = v + h * ((1 - gamma) * a0 + gamma * a1);
     return [u1, v1];
-  };
-  return readOff(step);
+  });
 }
 
 /** The coefficients of a step that is linear in (u, v, p0, p1), read off by stepping the four unit vectors. */
@@ -87,10 +82,9 @@ function readOff(step: (u: number, v: number, p0: number, p1: number) => [number
 }
 
 /**
- * The exact step for ground acceleration that varies linearly over the step: the recurrence of
- * Nigam and Jennings (1969), obtained here without case distinctions for ζ < 1, ζ = 1 and ζ > 1
- * as the exponential of the augmented matrix of the system z = (u, v, p, ṗ) with ṗ constant
- * (Van Loan, "Computing integrals involving the matrix exponential", IEEE TAC 23, 1978):
+ * The exact step for ground acceleration linear over the step (Nigam and Jennings 1969), without
+ * cases for ζ < 1, = 1, > 1, as the exponential of the augmented matrix of z = (u, v, p, ṗ), ṗ
+ * constant (Van Loan, "Computing integrals involving the matrix exponential", IEEE TAC 23, 1978):
  * z(h) = exp(M h) z(0), M = [[0, 1, 0, 0], [−ω², −2ζω, −1, 0], [0, 0, 0, 1], [0, 0, 0, 0]].
  * With ṗ = (p_{n+1} − p_n)/h, the coefficient of p_n is E₁₃ − E₁₄/h and of p_{n+1} is E₁₄/h.
  */
@@ -109,16 +103,14 @@ export function piecewiseExactCoefficients(
 }
 
 /**
- * Frequency and damping at which a Newmark recurrence has exactly the poles of the continuous
- * oscillator (pre-warping: the step matrix's eigenvalues become exp(λh), so the method has no
- * period error and no spurious amplitude decay; the error that is left is in how the excitation
- * enters, and does not grow with the number of cycles). For average acceleration, which is the
- * trapezoidal rule (the bilinear transform s = (2/h)(z − 1)/(z + 1)), it is closed-form: with
- * τ = z₁ + z₂ = 2e^{−ζωh}cos(ω_D h) (cosh for ζ > 1) and δ = z₁z₂ = e^{−2ζωh},
- *   ω'² = (4/h²)(1 − τ + δ)/(1 + τ + δ),   2ζ'ω' = (4/h)(1 − δ)/(1 + τ + δ)
- * (pre-warping of the bilinear transform: Oppenheim and Schafer, Discrete-Time Signal Processing,
- * §7.2; Franklin, Powell and Workman, Digital Control of Dynamic Systems, §6.3). For linear
- * acceleration the same trace and determinant are matched by Newton's method.
+ * Frequency and damping at which a Newmark recurrence has exactly the poles exp(λh) of the
+ * continuous oscillator (pre-warping: no period error, no spurious decay; the error left, in how
+ * the excitation enters, does not grow with the cycles). For average acceleration (trapezoidal
+ * rule, bilinear transform s = (2/h)(z − 1)/(z + 1); Oppenheim and Schafer, Discrete-Time Signal
+ * Processing, §7.2; Franklin, Powell and Workman, Digital Control of Dynamic Systems, §6.3), with
+ * τ = z₁ + z₂ = 2e^{−ζωh}cos(ω_D h) (cosh for ζ > 1) and δ = z₁z₂ = e^{−2ζωh}:
+ *   ω'² = (4/h²)(1 − τ + δ)/(1 + τ + δ),   2ζ'ω' = (4/h)(1 − δ)/(1 + τ + δ).
+ * For linear acceleration Newton's method matches the same trace and determinant.
  */
 export function prewarpedOscillator(
   method: Method,
@@ -139,8 +131,7 @@ export function prewarpedOscillator(
   let omega = Math.sqrt(omegaSquared);
   let zeta = ((4 / h) * ((1 - determinant) / denominator)) / (2 * omega);
   if (method === 'newmark-average') return { omegaRadS: omega, damping: zeta };
-  // Newmark linear acceleration: solve trace(A(ω', ζ')) = τ, det(A(ω', ζ')) = δ from the
-  // average-acceleration values, with a finite-difference Jacobian.
+  // From the average-acceleration values, with a finite-difference Jacobian.
   const residual = (w: number, z: number): [number, number] => {
     const c = newmarkCoefficients(w, z, h, 0.5, 1 / 6);
     return [c.uu + c.vv - trace, c.uu * c.vv - c.uv * c.vu - determinant];
@@ -165,11 +156,8 @@ export function prewarpedOscillator(
 }
 
 /**
- * The map of `count` consecutive steps of `s` under an input that varies linearly from p0 to p1
- * over all of them (sub-step j runs from p0 + (p1 − p0)·j/count to p0 + (p1 − p0)·(j + 1)/count),
- * as one step in the same form. It is the sub-stepped recurrence itself, read off (readOff), so
- * a composed step gives the numbers of the sub-steps (to rounding) for the cost of one; only the
- * values between its ends are not visited.
+ * `count` steps of `s` under an input linear from p0 to p1 over all of them, as one step in the
+ * same form: the sub-stepped recurrence read off, so its ends are the sub-steps' (to rounding).
  */
 export function composeSteps(s: StepCoefficients, count: number): StepCoefficients {
   if (count === 1) return s;
@@ -187,10 +175,7 @@ export function composeSteps(s: StepCoefficients, count: number): StepCoefficien
   });
 }
 
-/**
- * The coefficients of one executed step of length `stepS` made of `composed` sub-steps of
- * `method` (composeSteps), each pre-warped to the oscillator's exact poles unless `prewarp` is false.
- */
+/** One executed step of `stepS`: `composed` sub-steps of `method` (composeSteps), pre-warped by default. */
 export function executedStepCoefficients(
   method: Method,
   omegaRadS: number,

@@ -10,14 +10,10 @@ export interface SweepOptions {
   dampings: ArrayLike<number>;
   /** Step method; Newmark-β average acceleration by default. */
   method?: Method;
-  /**
-   * Pre-warp the Newmark recurrences so that their poles are exact (default true; see
-   * prewarpedOscillator in recurrence.ts). False runs the textbook recurrences, sub-stepped more.
-   */
+  /** Pre-warp the Newmark recurrences (prewarpedOscillator; default true); false sub-steps more. */
   prewarp?: boolean;
   /** Least steps per natural period (raises the rule of substeps.ts, never lowers it). */
   stepsPerPeriod?: number;
-  /** Kernel: 'auto' (WebAssembly SIMD where the engine has it, else TypeScript), 'wasm' or 'js'. */
   kernel?: SweepKernel;
 }
 
@@ -40,12 +36,9 @@ export interface Peaks {
 export type SweepKernel = 'auto' | 'wasm' | 'js';
 
 /**
- * Run every oscillator of the grid periods × dampings over one ground-acceleration history
- * (m/s², step dtS, linearly interpolated between samples, from rest) and return their peaks.
- * Oscillators with the same sub-step count are stepped in groups (four at a time, as two f64x2
- * vectors, in the WebAssembly SIMD kernel; one at a time in the TypeScript one; both give the
- * same numbers); see recurrence.ts for the methods and substeps.ts for the sub-step rule. `plan`, when given, is
- * planSweep's for the same record and options (a caller that planned already need not plan again).
+ * Run every oscillator of the grid periods × dampings over one ground-acceleration history (m/s²,
+ * step dtS, linearly interpolated, from rest) and return their peaks; both kernels give the same
+ * numbers. `plan`, when given, is planSweep's for the same record and options.
  */
 export function sweepOscillators(
   accelMS2: Float64Array,
@@ -72,15 +65,13 @@ export function emptyPeaks(plan: SweepPlan): Peaks {
     saMS2: new Float64Array(count),
     oscillatorSteps: 0,
   };
-  for (let d = 0; d < plan.dampings.length; d++) {
-    for (let p = 0; p < plan.periodsS.length; p++) {
-      if (plan.periodsS[p] === 0) peaks.saMS2[d * plan.periodsS.length + p] = plan.bounds.pgaMS2; // rigid: moves with the ground
-    }
+  for (let i = 0; i < count; i++) {
+    if (plan.periodsS[i % plan.periodsS.length] === 0) peaks.saMS2[i] = plan.bounds.pgaMS2;
   }
   return peaks;
 }
 
-/** Copy one group's peaks (PEAK_STRIDE per oscillator, as a group runner gives them) into the result arrays. */
+/** Copy one group's peaks (PEAK_STRIDE per oscillator) into the result arrays. */
 export function storeGroup(
   peaks: Pick<Peaks, 'sdM' | 'svMS' | 'saMS2'>,
   group: PlannedOscillator[],

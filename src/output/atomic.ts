@@ -1,14 +1,12 @@
 import { closeSync, fsyncSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 /**
- * Write `contents` to `path` atomically: into a temporary file beside it, flushed, then renamed
- * into place, so a reader never sees a half-written file and a failure leaves nothing behind.
- * No checks: an output set makes them first.
+ * Write `contents` to `path` atomically: into a temporary file beside it, flushed, then renamed into
+ * place, so that no reader sees half a file and a failure leaves nothing. An output set checks first.
  */
 export function writeAtomic(path: string, contents: string | Uint8Array): void {
   const target = resolve(path);
-  // A name no other writer picks (the process, then a random tag: Math.random, since loading
-  // node:crypto for it would cost every run); 'wx' refuses to open one that exists all the same.
+  // Math.random, since loading node:crypto would cost every run; 'wx' refuses a name that exists.
   const tag = Math.random().toString(36).slice(2, 10);
   const temporary = join(dirname(target), `.${basename(target)}.${process.pid}.${tag}.tmp`);
   let fd: number | undefined;

@@ -13,11 +13,9 @@ interface PlannedFile {
 type PlannedFolder = Omit<PlannedFile, 'contents'>;
 
 /**
- * Every output of one command, checked together before any is written: no two at one path, none
- * at an input's path (real paths compared, so another spelling or a symlink is caught), every
- * file's folder existing or planned; a planned folder is created when its parent exists. Then
- * each file is written atomically, and last the text for standard output, if any. A refusal
- * leaves nothing behind.
+ * Every output of one command, checked together before any is written: no two at one path, none at
+ * an input's real path (another spelling or a symlink is caught), every file's folder existing or
+ * planned. Then each file is written atomically, and last the standard output; a refusal writes nothing.
  */
 export class OutputSet {
   private readonly files: PlannedFile[] = [];
@@ -27,7 +25,6 @@ export class OutputSet {
   /** `inputs`: the files the command read ('-' for standard input is ignored). */
   constructor(private readonly inputs: readonly string[] = []) {}
 
-  /** A file at `path`. */
   file(path: string, contents: string | Uint8Array, option = '--out'): this {
     this.files.push({ path, contents, option });
     return this;
@@ -80,27 +77,19 @@ export class OutputSet {
   /** Check everything, then create the folders and write every file and the standard output. */
   write(): void {
     this.check();
-    // recursive: a planned parent is created first anyway, and a folder made meanwhile by another
-    // thread (batch workers share the output folder) is no error.
+    // recursive: a folder made meanwhile by another thread (batch workers share one) is no error.
     for (const folder of this.folders) mkdirSync(folder.path, { recursive: true });
     for (const file of this.files) writeAtomic(file.path, file.contents);
     if (this.stdoutText !== undefined) process.stdout.write(this.stdoutText);
   }
 }
 
-/** Write one file atomically, after the checks of an output set, none of the `protect`ed inputs. */
-export function writeFileAtomic(
-  path: string,
-  contents: string | Uint8Array,
-  protect: readonly string[] = [],
-) {
-  new OutputSet(protect).file(path, contents).write();
+/** Write one file atomically, after the checks of an output set, over none of the `inputs`. */
+export function writeFileAtomic(path: string, contents: string | Uint8Array, inputs: readonly string[] = []) {
+  new OutputSet(inputs).file(path, contents).write();
 }
 
-/**
- * A folder may exist (as a folder), or be created when its parent exists or is one of the
- * `planned` folders (full paths) created before it.
- */
+/** A folder may exist (as a folder), or be created when its parent exists or is `planned` (full paths). */
 export function checkFolder({ path, option }: PlannedFolder, planned: ReadonlySet<string> = new Set()): void {
   const full = resolve(path);
   if (existsSync(full)) {

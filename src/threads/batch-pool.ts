@@ -13,10 +13,8 @@ export type BatchWorkerMessage = { index: number; outcome: RecordOutcome } | { f
 
 /**
  * Run the tasks on `jobs` threads, this one included, calling `onDone` as each finishes, and give
- * the outcomes back in the order of the tasks. Every thread claims the next record from a shared
- * counter (Atomics.add, so each runs exactly once) until none is left: no thread waits to be
- * handed work, and this one starts at once while the workers start. `here` runs a task on this
- * thread (processRecord; tests slow it down to see the workers take their share).
+ * the outcomes back in task order. Every thread claims records from a shared counter, this one at
+ * once while the workers start. `here` runs a task on this thread (tests slow it down).
  */
 export async function runTasks(
   tasks: readonly RecordTask[],

@@ -1,5 +1,4 @@
-// A batch worker thread (see runTasks in batch-pool.ts): it claims records from the shared counter until
-// none is left, posting each one's outcome as it finishes it, then says it has finished and ends.
+// A batch worker thread (runTasks in batch-pool.ts): claims records, posts each outcome, then `finished`.
 import { parentPort, workerData } from 'node:worker_threads';
 import { claimRecords } from '../batch/work.js';
 import type { BatchWorkerData, BatchWorkerMessage } from './batch-pool.js';

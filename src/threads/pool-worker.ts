@@ -1,6 +1,4 @@
-// The worker thread of SweepPool and RotDPool: for each job it is sent (a sweep's groups, or RotD's
-// cells), it claims work from the job's shared counter until none is left, and says so.
-
+// The worker thread of SweepPool and RotDPool: claims a job's groups or cells until none is left.
 import { prepareWasmKernel } from '../oscillator/kernels/wasm.js';
 import { type RotDJob, runRotDCells } from '../spectrum/rotd.js';
 import { runClaimedGroups, type SharedSweepJob } from './sweep-pool.js';

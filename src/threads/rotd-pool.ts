@@ -16,11 +16,7 @@ export interface ParallelRotDOptions extends RotDOptions {
   threads?: number;
 }
 
-/**
- * rotDSpectra on worker threads (a RotDPool of `threads`, started for the call and closed after):
- * the threads claim (damping, period) cells from a shared counter, and each cell is computed as
- * on one thread, so the numbers are the same bits.
- */
+/** rotDSpectra, bit for bit, on a RotDPool of `threads` started for the call and closed after. */
 export async function rotDSpectraParallel(
   first: GroundRecord,
   second: GroundRecord,
@@ -37,9 +33,8 @@ export async function rotDSpectraParallel(
 }
 
 /**
- * Worker threads that compute RotD spectra together with the calling thread, for many pairs or
- * large grids (starting a worker is costly next to a small job: keep a pool for a suite). Close it
- * when done so that the process can exit.
+ * Worker threads that compute RotD spectra with the calling thread, claiming (damping, period)
+ * cells; keep one for a suite (a worker is costly to start) and close it when done.
  */
 export class RotDPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {

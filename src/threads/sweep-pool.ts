@@ -12,17 +12,13 @@ import {
 import { shared, ThreadTeam, workerScript } from './team.js';
 
 export interface ParallelSweepOptions extends SweepOptions {
-  /**
-   * Threads stepping oscillators, this one included: a number (1 sweeps here alone), or 'auto'
-   * (the default): all cores from PARALLEL_MIN_OSCILLATOR_STEPS oscillator-steps, one below.
-   */
+  /** Threads, this one included: a number (1 sweeps here), or 'auto' (the default; see sweepThreads). */
   threads?: 'auto' | number;
 }
 
 /**
- * A job as the threads share it (SharedArrayBuffers): the record, the kernel, the order in which
- * groups are claimed, the counter that hands out the next group (Atomics.add, so every group runs
- * exactly once), the result arrays, and the calling thread's plan, so that no worker plans again.
+ * A job as the threads share it (SharedArrayBuffers): `order` of the groups to claim, `counter`
+ * handing out the next one, and the calling thread's plan, so that no worker plans again.
  */
 export interface SharedSweepJob {
   accelMS2: Float64Array;
@@ -33,11 +29,7 @@ export interface SharedSweepJob {
   plan: SweepPlan;
 }
 
-/**
- * Claim groups of the plan one at a time, step them with this thread's kernel and write their
- * peaks into the shared results. Each oscillator's peaks depend only on its own coefficients and
- * the record, so which thread steps a group changes no bit.
- */
+/** Claim groups one at a time and write their peaks into the shared results (the same whichever thread). */
 export function runClaimedGroups(job: SharedSweepJob): void {
   let runner: ReturnType<typeof groupRunner> | undefined;
   for (;;) {
@@ -49,19 +41,13 @@ export function runClaimedGroups(job: SharedSweepJob): void {
   }
 }
 
-/**
- * Worker threads that sweep together with the calling thread, one record after another, each
- * split over all the threads; close the pool when done so that the process can exit.
- */
+/** Worker threads that sweep records with the calling thread, one at a time; close it when done. */
 export class SweepPool extends ThreadTeam {
   constructor(threads = availableParallelism()) {
     super(threads, workerScript('pool-worker.js'));
   }
 
-  /**
-   * The peaks of sweepOscillators, bit for bit, computed by all the pool's threads (`plan`, when
-   * given, is planSweep's for the same record and options).
-   */
+  /** The peaks of sweepOscillators (with the same `plan`), bit for bit, on all the pool's threads. */
   async sweep(
     accelMS2: Float64Array,
     dtS: number,
@@ -88,10 +74,7 @@ export class SweepPool extends ThreadTeam {
   }
 }
 
-/**
- * sweepOscillators on the threads that `options.threads` asks for, on a SweepPool started for the
- * call and closed after: the same peaks, bit for bit.
- */
+/** sweepOscillators, bit for bit, on a SweepPool of `options.threads` started for the call. */
 export async function sweepOscillatorsParallel(
   accelMS2: Float64Array,
   dtS: number,

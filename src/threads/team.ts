@@ -2,10 +2,8 @@ import { parentPort, Worker } from 'node:worker_threads';
 import { inputError, QuakesweepError } from '../base/errors.js';
 
 /**
- * The worker script `file` of this folder: beside this module in dist/; the build under a test
- * runner, where modules run from their TypeScript source; and the bundled worker
- * (dist/cli/workers/, CommonJS) from the CLI bundle dist/cli/quakesweep.cjs, where every module's
- * URL is the bundle's (see scripts/build-cli.mjs).
+ * The worker script `file` of this folder: beside this module in dist/; in dist/ from TypeScript
+ * source (tests); in dist/cli/workers/ (CommonJS) from the CLI bundle (see scripts/build-cli.mjs).
  */
 export function workerScript(file: string): URL {
   const here = import.meta.url;
@@ -14,10 +12,7 @@ export function workerScript(file: string): URL {
   return new URL(`./${file}`, here);
 }
 
-/**
- * A worker thread running `script`, its output copied to this process's by a listener on each
- * stream (cheaper for the calling thread than Node's own piping of a worker's output).
- */
+/** A worker thread running `script`, its output copied by a listener (cheaper than Node's piping). */
 export function startWorker(script: URL, options: { workerData?: unknown } = {}): Worker {
   const worker = new Worker(script, { ...options, stdout: true, stderr: true });
   worker.stdout.on('data', (chunk: Buffer) => process.stdout.write(chunk));
@@ -34,9 +29,8 @@ export function shared(values: Float64Array): Float64Array {
 }
 
 /**
- * Worker threads that run the jobs they are sent alongside the calling thread (`script` answers
- * every `{ id, job }` with `{ id }`, or `{ id, error }`; see serveJobs). A job is shared memory
- * and a claim counter, from which every thread, this one included, claims work until none is left.
+ * Worker threads that run the jobs they are sent (`{ id, job }`, answered by `{ id }` or `{ id, error }`:
+ * serveJobs) alongside the calling thread, every thread claiming work from the job's shared counter.
  */
 export class ThreadTeam {
   readonly threads: number;
@@ -55,7 +49,10 @@ export class ThreadTeam {
     for (let i = 1; i < threads; i++) {
       const worker = startWorker(script);
       worker.on('message', (message: { id: number; error?: string }) => this.settle(message));
-      worker.on('error', (error) => this.failAll(error));
+      worker.on('error', (error) => {
+        for (const entry of this.pending.values()) entry.reject(error);
+        this.pending.clear();
+      });
       this.workers.push(worker);
     }
   }
@@ -63,20 +60,11 @@ export class ThreadTeam {
   private settle(message: { id: number; error?: string }): void {
     const entry = this.pending.get(message.id);
     if (entry === undefined) return;
-    if (message.error !== undefined) {
-      this.pending.delete(message.id);
-      entry.reject(new QuakesweepError('internal', `worker thread: ${message.error}`));
-      return;
-    }
-    if (--entry.left === 0) {
-      this.pending.delete(message.id);
-      entry.resolve();
-    }
-  }
-
-  private failAll(error: Error): void {
-    for (const entry of this.pending.values()) entry.reject(error);
-    this.pending.clear();
+    const failed = message.error !== undefined;
+    if (!failed && --entry.left > 0) return;
+    this.pending.delete(message.id);
+    if (failed) entry.reject(new QuakesweepError('internal', `worker thread: ${message.error}`));
+    else entry.resolve();
   }
 
   /** Send `job` to every worker, run `here` on this thread meanwhile, and wait for them all. */
@@ -94,17 +82,13 @@ export class ThreadTeam {
     }
   }
 
-  /** Stop the worker threads. */
   async close(): Promise<void> {
     await Promise.all(this.workers.map((worker) => worker.terminate()));
     this.workers.length = 0;
   }
 }
 
-/**
- * The worker side of a ThreadTeam, for its script: run every job it is sent with `run` and answer
- * `{ id }`, or `{ id, error }` when it throws.
- */
+/** The worker side of a ThreadTeam: run every job sent, answering `{ id }` or `{ id, error }`. */
 export function serveJobs<Job>(run: (job: Job) => void): void {
   parentPort?.on('message', ({ id, job }: { id: number; job: Job }) => {
     try {

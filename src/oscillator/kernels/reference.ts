@@ -2,17 +2,13 @@ import { COEFFICIENT as C } from '../layout.js';
 import { hermiteFold } from '../peak.js';
 
 /**
- * The TypeScript kernel: the fallback where WebAssembly SIMD does not run, and the oracle the
- * SIMD kernel (assembly/sweep.ts) is tested against. It steps one oscillator over the record from
- * rest and writes its peaks |u|, |v| and |s| (s = −(c·v + k·u), the absolute acceleration) to
- * peaks[at..at + 2].
- *
- * The record is stepped twice with the same arithmetic: pass 1 finds the sample peaks P; pass 2
- * folds into P the cubic Hermite peak inside every step whose new end passes the threshold
- * P·r − d of refinementThresholds (peak.ts), below which a step cannot hold a higher peak.
- * With `substeps` steps of `stepS` per sample interval the inputs are the record's linear
- * interpolation, w/substeps of the way from sample s to sample s + 1. `row` holds the
- * oscillator's packed coefficients (layout.ts).
+ * The TypeScript kernel: the fallback where WebAssembly SIMD does not run, and the oracle of the
+ * SIMD kernel (assembly/sweep.ts). It steps one oscillator (`row`: its packed coefficients,
+ * layout.ts) from rest with `substeps` steps of `stepS` per sample interval over the record's
+ * linear interpolation, and writes its peaks |u|, |v| and |s| (s = −(c·v + k·u), the absolute
+ * acceleration) to peaks[at..at + 2]. The record is stepped twice with the same arithmetic: pass
+ * 1 finds the sample peaks P; pass 2 folds into P the cubic Hermite peak inside every step whose
+ * new end passes P·r − d (refinementThresholds, peak.ts), below which no step holds a higher peak.
  */
 export function referencePeaks(
   accelMS2: Float64Array,
@@ -38,7 +34,6 @@ export function referencePeaks(
   let peakU = 0;
   let peakV = 0;
   let peakS = 0;
-  // Pass 1 refines nothing; pass 2 refines the steps that pass P·r − d.
   let limitU = Infinity;
   let limitV = Infinity;
   let limitS = Infinity;

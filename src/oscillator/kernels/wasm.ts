@@ -6,31 +6,20 @@ import { SWEEP_WASM_BASE64 } from './wasm-binary.js';
  * has WebAssembly 128-bit SIMD (the fixed-width SIMD proposal, WebAssembly 2.0 §4.3). Magic and
  * version; type section () → v128; function section; code section with v128.const 0.
  */
-const SIMD_PROBE = Uint8Array.from(
-  Buffer.from(
-    `0061736d01000000 0105016000017b 03020100 0a160114 00fd0c${'00'.repeat(16)}0b`.replace(/ /g, ''),
-    'hex',
-  ),
+const SIMD_PROBE = Buffer.from(
+  `0061736d01000000 0105016000017b 03020100 0a160114 00fd0c${'00'.repeat(16)}0b`.replace(/ /g, ''),
+  'hex',
 );
 
 let simdSupported: boolean | undefined;
 
 /** Whether this engine runs WebAssembly SIMD (detected once, by validating SIMD_PROBE). */
 export function wasmSimdSupported(): boolean {
-  if (simdSupported === undefined) {
-    try {
-      simdSupported = WebAssembly.validate(SIMD_PROBE);
-    } catch {
-      simdSupported = false;
-    }
-  }
+  simdSupported ??= typeof WebAssembly === 'object' && WebAssembly.validate(SIMD_PROBE);
   return simdSupported;
 }
 
-/**
- * The exports of assembly/sweep.ts (runGroup) and assembly/rotd.ts (rotdPeaks), whose parameters
- * (addresses in the memory, counts and values) are documented there.
- */
+/** The exports of assembly/sweep.ts (runGroup) and assembly/rotd.ts (rotdPeaks), documented there. */
 interface KernelExports {
   memory: WebAssembly.Memory;
   heapBase(): number;
@@ -40,8 +29,8 @@ interface KernelExports {
 
 /**
  * The thread's one instance of the kernel, shared by every WasmSweeper and WasmRotD (an instance
- * per record would map a fresh, cold linear memory each time, and mappings cost every thread of
- * the process); its memory grows to the largest need so far. `holder`: whose inputs it holds.
+ * per record would map a fresh, cold memory each time, at a cost to every thread of the process).
+ * `holder`: whose inputs it holds.
  */
 export interface KernelInstance {
   exports: KernelExports;
@@ -49,7 +38,7 @@ export interface KernelInstance {
   holder?: KernelInputs;
 }
 
-/** A user of the kernel that loads its inputs (a record, or two components and the angles) into its memory. */
+/** A user of the kernel, which loads its inputs (a record, or two components and angles) into its memory. */
 export interface KernelInputs {
   load(view: Float64Array): void;
 }
@@ -66,10 +55,7 @@ export function kernelInstance(): KernelInstance {
   return instance;
 }
 
-/**
- * Make this thread's instance of the kernel now, where the engine has WebAssembly SIMD: a worker
- * thread does it while it waits for its first job, so that the job starts without it.
- */
+/** Make this thread's instance of the kernel now where SIMD runs (a worker awaiting its first job). */
 export function prepareWasmKernel(): void {
   if (wasmSimdSupported()) kernelInstance();
 }
@@ -87,10 +73,7 @@ export function heapAreas<Area extends string>(
   return at;
 }
 
-/**
- * The kernel's memory as f64, grown to at least `bytes`, holding the inputs of `holder` (loaded
- * again when another user has had the instance since).
- */
+/** The kernel's memory as f64, grown to at least `bytes`, holding the inputs of `holder`. */
 export function kernelMemory(kernel: KernelInstance, bytes: number, holder: KernelInputs): Float64Array {
   const memory = kernel.exports.memory;
   const pages = Math.ceil(bytes / 65536) - memory.buffer.byteLength / 65536;
@@ -104,14 +87,10 @@ export function kernelMemory(kernel: KernelInstance, bytes: number, holder: Kern
   return kernel.view;
 }
 
-/**
- * The WebAssembly kernel with a record loaded into its memory. Groups of up to GROUP_WIDTH
- * oscillators are stepped by `run`, which takes their coefficients packed as plan.ts packs them
- * (COEFFICIENT_STRIDE per oscillator) and returns their peaks (PEAK_STRIDE per oscillator).
- */
+/** The WebAssembly kernel with a record loaded into its memory, stepping groups of up to GROUP_WIDTH. */
 export class WasmSweeper implements KernelInputs {
   private readonly kernel = kernelInstance();
-  /** The areas of the layout; pass 1's checkpoints follow them (memory grows when a group needs more). */
+  /** The areas of the layout; pass 1's checkpoints follow them. */
   private readonly at;
 
   constructor(private readonly accelMS2: Float64Array) {
@@ -132,9 +111,8 @@ export class WasmSweeper implements KernelInputs {
   }
 
   /**
-   * Step `count` (≤ GROUP_WIDTH) oscillators from rest over the record with `substeps` sub-steps of
-   * `stepS`; `packed` holds their coefficients, one row of COEFFICIENT_STRIDE after another, and
-   * their peaks are written to `out` at PEAK_STRIDE per oscillator. `symmetric` says that their
+   * Step `count` oscillators from rest with `substeps` sub-steps of `stepS`; `packed` holds their
+   * rows of coefficients (plan.ts), `out` gets their peaks (PEAK_STRIDE each). `symmetric`: their
    * forcing coefficients are equal (up0 = up1, vp0 = vp1; see assembly/sweep.ts).
    */
   run(
@@ -151,8 +129,7 @@ export class WasmSweeper implements KernelInputs {
     const { at } = this;
     const view = kernelMemory(this.kernel, at.end + blocks * GROUP_WIDTH * CHECKPOINT_STRIDE * 8, this);
     const c = at.coefficients / 8;
-    // Lanes side by side (oscillators 0 and 1 in the first vector, 2 and 3 in the second); a
-    // short group repeats its last oscillator.
+    // Lanes interleaved (0 and 1 in the first vector, 2 and 3 in the second); a short group repeats its last.
     for (let i = 0; i < GROUP_WIDTH; i++) {
       const from = Math.min(i, count - 1) * COEFFICIENT_STRIDE;
       const lane = c + (i >> 1) * COEFFICIENT_STRIDE * 2 + (i & 1);
@@ -189,9 +166,9 @@ export const STRETCH_STEPS = 8192;
 const MAX_BLOCKS = 16384;
 
 /**
- * Steps per checkpoint block for a group that takes `totalSteps` steps: a power of two from 64 (a
- * block's checkpoint costs a few stores; pass 2 steps whole blocks again) up to STRETCH_STEPS,
- * doubled while the blocks would be more than MAX_BLOCKS, so that their memory stays bounded.
+ * Steps per checkpoint block for a group of `totalSteps` steps: a power of two from 64 (a block's
+ * checkpoint costs a few stores; pass 2 steps whole blocks again) up to STRETCH_STEPS, doubled
+ * while the blocks would outnumber MAX_BLOCKS.
  */
 export function checkpointBlockSteps(totalSteps: number): number {
   let blockSteps = 64;
