@@ -1,16 +1,14 @@
 import { inputError } from '../base/errors.js';
 import { MAX_LINE_CHARACTERS, type Separator } from './separator.js';
 
-/** The separators of the whitespace separator: each space and each tab. */
+/** Each space and each tab separates for the whitespace separator. */
 const BLANK = /[ \t]/;
 
 /**
- * The fields of one line (no line break in it): the line up to a `#` (a comment), split at each
- * separator (each space or tab for the whitespace separator) and, for `,` and `;`, each field
- * trimmed of white space (String.prototype.trim); none for a line with nothing but a comment or
- * white space. No quotes: a `"` is part of a field. The tests check these against csv-parse
- * (delimiter, trim, comment '#', quote false, skip_empty_lines, max_record_size 1,000,000), its
- * limit on a line's size included (sizeLimit). `file` and `line` place the error.
+ * The fields of one line: the text before any `#`, split at each separator, fields of `,` and `;`
+ * files trimmed; none for a blank or comment line. No quotes: a `"` is part of a field. The tests
+ * check this against csv-parse (delimiter, trim, comment '#', quote false, skip_empty_lines,
+ * max_record_size 1,000,000), its size limit included.
  */
 export function lineFields(text: string, separator: Separator, file: string, line: number): string[] {
   const hash = text.indexOf('#');
@@ -24,10 +22,8 @@ export function lineFields(text: string, separator: Separator, file: string, lin
 }
 
 /**
- * csv-parse's limit on a line's size, as it counts: before each byte of a field it appends, the
- * characters of the fields before (as kept) and the UTF-8 bytes of this one so far must not pass
- * MAX_LINE_CHARACTERS. Leading white space is not appended, trailing white space is (and trimmed
- * from the field once it ends); separators and the comment are not counted.
+ * csv-parse's size limit as it counts: the characters of the fields before (as kept) and the UTF-8
+ * bytes of this one so far, leading white space not counted, trailing counted until trimmed.
  */
 function sizeLimit(spans: string[], trimmed: boolean, file: string, line: number): void {
   let before = 0;

@@ -2,12 +2,10 @@ import FFT from 'fft.js';
 import { usageError } from '../base/errors.js';
 
 /**
- * Fourier amplitude spectrum of a sampled history: the discrete Fourier transform times Δt, which
- * approximates the continuous transform ∫a(t)e^{−2πift}dt (Brigham, The Fast Fourier Transform and
- * its Applications, 1988, §6.1). The record is zero-padded to a power of two, `transformLength` N,
- * and transformed with the radix-4 FFT of fft.js (Cooley and Tukey 1965), one-sided: the
- * amplitudes |A(f)| = Δt·|Σ a_j e^{−2πi f jΔt}|, m/s (acceleration × time), at k/(N·Δt) Hz for
- * k = 0 … N/2.
+ * One-sided Fourier amplitude spectrum: Δt times the DFT, approximating ∫a(t)e^{−2πift}dt (Brigham,
+ * The Fast Fourier Transform and its Applications, 1988, §6.1), zero-padded to a power of two N
+ * (`transformLength`; fft.js, Cooley and Tukey 1965). Amplitudes in m/s (acceleration × time) at
+ * k/(N·Δt) Hz, k = 0 … N/2.
  */
 export function fourierAmplitudeSpectrum(values: Float64Array, dtS: number) {
   let size = 2;
@@ -50,9 +48,8 @@ export function konnoOhmachiWeight(
 const WINDOW_REACH = 4 * Math.PI;
 
 /**
- * Konno–Ohmachi smoothing of an amplitude spectrum: at each centre frequency, the weighted mean
- * Σ W(f_i; f_c)·A_i / Σ W(f_i; f_c) (Konno and Ohmachi 1998, eq. 4). `frequenciesHz` must be
- * ascending (as from `fourierAmplitudeSpectrum`); centres default to the positive input frequencies.
+ * Konno–Ohmachi smoothing: at each centre, Σ W(f_i; f_c)·A_i / Σ W(f_i; f_c) (Konno and Ohmachi 1998,
+ * eq. 4). `frequenciesHz` ascending; centres default to the positive input frequencies.
  */
 export function konnoOhmachiSmooth(
   frequenciesHz: Float64Array,

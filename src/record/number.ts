@@ -5,10 +5,8 @@ const FORTRAN_EXPONENT = /[dD]/;
 export const DECIMAL_COMMA = /^[+-]?(\d+,\d*|,\d+)([eEdD][+-]?\d+)?$/;
 
 /**
- * A number as NUMBER has it, with the value Number() gives (ECMAScript's correctly rounded
- * decimal conversion), Fortran exponents (1.5D-03) included; NaN for anything else, NaN and
- * ±Infinity included. The row scanner (assembly/rows.ts) gives the same values for the short
- * decimals it reads.
+ * A number as NUMBER has it, Fortran exponents (1.5D-03) included, valued as Number() (correctly
+ * rounded) values it; NaN for anything else, ±Infinity included. assembly/rows.ts agrees.
  */
 export function parseNumber(text: string): number {
   if (!NUMBER.test(text)) return Number.NaN;

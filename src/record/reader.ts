@@ -8,9 +8,8 @@ import type { RowScanner } from './rows.js';
 import type { Separator } from './separator.js';
 
 /**
- * Largest acceleration sample accepted, 10⁶ g (common practice: recorded PGAs stay below about
- * 5 g, and even a record in mm/s² read as g stays below 10⁵ g). Beyond it the value is not a
- * ground motion in any unit, and squares and sweeps of it could overflow to Infinity.
+ * Largest sample accepted, 10⁶ g (common practice: recorded PGAs stay below about 5 g, even mm/s²
+ * read as g below 10⁵ g): beyond it no unit makes it a ground motion, and its squares could overflow.
  */
 const MAX_ABS_ACCELERATION_G = 1e6;
 const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
@@ -64,9 +63,8 @@ export class RecordReader {
   }
 
   /**
-   * The rows of `text` from `from` (the start of a line) on that the row scanner reads (rows.ts:
-   * exactly those row() would take without a word), up to the line that row() must read: where
-   * it stopped and how many lines it read.
+   * Read the rows of `text` from `from` (a line's start) with the row scanner, which takes exactly
+   * those row() would take without a word: where it stopped and how many lines it read.
    */
   rowsFrom(text: string, from: number): { next: number; lines: number } {
     const scanner = this.scanner as RowScanner;
@@ -163,13 +161,11 @@ export class RecordReader {
       throw this.error(`time does not increase: ${text} s after ${this.timePreviousS} s`, line);
     }
     if (i >= 2) {
-      // Times are printed to a few decimals: allow a step one last printed digit off the mean,
-      // but never half a step, which is a real change whatever the rounding.
+      // Allow a step one last printed digit off the mean, but never half a step.
       const meanStepS = (this.timePreviousS - this.timeFirstS) / (i - 1);
       const stepS = timeS - this.timePreviousS;
       const offS = Math.abs(stepS - meanStepS);
-      // Within the last term of the tolerance the step is uniform whatever the first two (both
-      // are ≥ 0); most steps are, and the printed resolution need not be worked out for them.
+      // The first test spares working out the printed resolution for most steps.
       const uniform =
         offS <= 1e-6 * meanStepS ||
         offS <= Math.min(printedResolution(text) * 1.01, 0.5 * meanStepS) + 1e-6 * meanStepS;
@@ -262,7 +258,6 @@ export class RecordReader {
         });
       dtS = columnDtS;
     }
-    // The samples are in m/s² already: every row stored its value times the unit's factor.
     return createRecord({
       name: o.name ?? (o.source === '-' ? 'stdin' : recordName(o.source)),
       source: o.source,

@@ -9,14 +9,11 @@ export const ANTI_ALIAS_ORDER = 8;
 const ANTI_ALIAS_FRACTION = 0.8;
 
 /**
- * Resample a history from step `dtS` to step `newDtS` over the same duration (the new record has
- * floor(duration/newDtS) + 1 samples from t = 0). Band-limited interpolation with a
- * Lanczos-windowed sinc kernel of 8 lobes each side, weights normalised to sum to 1 (Duchon 1979,
- * "Lanczos filtering in one and two dimensions", J. Appl. Meteorology 18; Smith and Gossett 1984
- * for band-limited interpolation). For a coarser step the history is first low-passed by a
- * zero-phase Butterworth of order 8 at 0.8 × the new Nyquist frequency (−6 dB there, about −31 dB
- * at the new Nyquist), so content above the new Nyquist cannot fold back (anti-aliasing).
- * `antiAliasHz`: that corner, null when the step became finer (no filter needed).
+ * Resample to step `newDtS` over the same duration (floor(duration/newDtS) + 1 samples) with a
+ * Lanczos-windowed sinc, weights summing to 1 (Duchon 1979, J. Appl. Meteorology 18; Smith and
+ * Gossett 1984 for band-limited interpolation). A coarser step is first low-passed, zero-phase, at
+ * 0.8 × the new Nyquist (−6 dB there, about −31 dB at the new Nyquist) so nothing folds back;
+ * `antiAliasHz` is that corner, null for a finer step.
  */
 export function resampleHistory(values: Float64Array, dtS: number, newDtS: number) {
   if (!Number.isFinite(newDtS) || newDtS <= 0) {
