@@ -9,9 +9,8 @@ export const BASELINE_NAMES = ['mean', 'linear', 'quadratic', 'cubic'] as const;
  * conditioned, solved with partial pivoting (Golub and Van Loan, Matrix Computations, 4th ed., §3.4).
  */
 export function removePolynomialBaseline(values: Float64Array, order: number): Float64Array {
-  if (!Number.isInteger(order) || order < 0 || order > 3) {
+  if (!Number.isInteger(order) || order < 0 || order > 3)
     throw usageError(`baseline order must be 0 (mean), 1, 2 or 3, got ${order}`);
-  }
   const coefficients = fitPolynomial(values, order);
   const n = values.length;
   const out = new Float64Array(n);

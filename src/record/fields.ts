@@ -5,10 +5,9 @@ import { MAX_LINE_CHARACTERS, type Separator } from './separator.js';
 const BLANK = /[ \t]/;
 
 /**
- * The fields of one line: the text before any `#`, split at each separator, fields of `,` and `;`
- * files trimmed; none for a blank or comment line. No quotes: a `"` is part of a field. The tests
- * check this against csv-parse (delimiter, trim, comment '#', quote false, skip_empty_lines,
- * max_record_size 1,000,000), its size limit included.
+ * The fields of one line: the text before any `#`, split at each separator, trimmed for `,` and `;`;
+ * none for a blank or comment line; a `"` is part of a field. The tests check this against csv-parse
+ * (delimiter, trim, comment '#', quote false, skip_empty_lines, max_record_size 1,000,000).
  */
 export function lineFields(text: string, separator: Separator, file: string, line: number): string[] {
   const hash = text.indexOf('#');
@@ -21,10 +20,7 @@ export function lineFields(text: string, separator: Separator, file: string, lin
   return fields.length === 1 && fields[0] === '' ? [] : fields;
 }
 
-/**
- * csv-parse's size limit as it counts: the characters of the fields before (as kept) and the UTF-8
- * bytes of this one so far, leading white space not counted, trailing counted until trimmed.
- */
+/** csv-parse's size limit as it counts: the fields before as kept, and this one's UTF-8 bytes so far. */
 function sizeLimit(spans: string[], trimmed: boolean, file: string, line: number): void {
   let before = 0;
   for (const span of spans) {
@@ -46,7 +42,7 @@ export function longLineError(file: string, line: number | undefined) {
 /** A field as shown in a message: quoted, cut short, with unprintable characters escaped. */
 export function quote(text: string): string {
   const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
-  // Line and paragraph separators and the byte-order mark are escaped too, so the message stays one visible line.
+  // Line and paragraph separators and the byte-order mark are escaped too: the message stays one line.
   return `'${short.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
     const code = c.charCodeAt(0);
     return code <= 0xff

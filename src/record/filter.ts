@@ -1,19 +1,16 @@
 import { usageError } from '../base/errors.js';
 
 /**
- * Butterworth filters for ground-motion records.
+ * Butterworth filters (Butterworth 1930, Wireless Engineer 7): the analog prototype of order n,
+ * |H(jΩ)|² = 1/(1 + Ω^{2n}), in second-order sections s² + 2 sin((2k − 1)π/(2n)) s + 1 (and s + 1
+ * for odd n), made high-pass by s → 1/s, mapped to z by the bilinear transform with the corner
+ * prewarped, Ω = tan(π f Δt) / tan(π f_c Δt) (Oppenheim and Schafer, Discrete-Time Signal
+ * Processing, 3rd ed., §7.2.2 and §7.3); −3 dB at f_c exactly.
  *
- * Design: the analog prototype of order n, |H(jΩ)|² = 1/(1 + Ω^{2n}) (Butterworth 1930, Wireless
- * Engineer 7), in second-order sections s² + 2 sin((2k − 1)π/(2n)) s + 1 (and s + 1 for odd n),
- * made high-pass by s → 1/s, mapped to z by the bilinear transform with the corner prewarped,
- * Ω = tan(π f Δt) / tan(π f_c Δt) (Oppenheim and Schafer, Discrete-Time Signal Processing, 3rd ed.,
- * §7.2.2 and §7.3); −3 dB at f_c exactly.
- *
- * Filtering: the cascade (transposed direct form II) runs forward then backward (zero phase, −6 dB
- * at the corner) over zero pads of 1.5·n/f_c at each end, removed afterwards (Converse and Brady
- * 1992, as discussed by Boore 2005, BSSA 95(2); the length from memory, at each end to be cautious).
- *
- * A band-pass is an order-n high-pass then an order-n low-pass (common practice in strong-motion
+ * The cascade (transposed direct form II) runs forward then backward (zero phase, −6 dB at the
+ * corner) over zero pads of 1.5·n/f_c at each end, removed afterwards (Converse and Brady 1992, as
+ * discussed by Boore 2005, BSSA 95(2); the length from memory, at each end to be cautious). A
+ * band-pass is an order-n high-pass then an order-n low-pass (common practice in strong-motion
  * processing), not the order-2n band transform.
  */
 
@@ -67,17 +64,15 @@ export function butterworthSections(
 
 /** All sections of a specification, high-pass first, refusing one that is wrong for step `dtS`. */
 export function filterSections(spec: FilterSpec, dtS: number): Biquad[] {
-  if (!Number.isInteger(spec.order) || spec.order < 1 || spec.order > MAX_FILTER_ORDER) {
+  if (!Number.isInteger(spec.order) || spec.order < 1 || spec.order > MAX_FILTER_ORDER)
     throw usageError(`filter order must be a whole number from 1 to ${MAX_FILTER_ORDER}, got ${spec.order}`);
-  }
   const nyquistHz = 1 / (2 * dtS);
   const passes: ['highpass' | 'lowpass', string, number | undefined][] = [];
   if (spec.kind !== 'lowpass') passes.push(['highpass', 'high-pass corner', spec.lowCornerHz]);
   if (spec.kind !== 'highpass') passes.push(['lowpass', 'low-pass corner', spec.highCornerHz]);
   for (const [, label, hz] of passes) {
-    if (hz === undefined || !Number.isFinite(hz) || hz <= 0) {
+    if (hz === undefined || !Number.isFinite(hz) || hz <= 0)
       throw usageError(`the ${label} must be a positive frequency in Hz, got ${hz}`);
-    }
     if (hz >= nyquistHz) {
       throw usageError(
         `the ${label} ${hz} Hz is at or above the Nyquist frequency ${nyquistHz} Hz of a record sampled every ${dtS} s`,
@@ -113,7 +108,6 @@ export function padDurationS(spec: FilterSpec): number {
   return (1.5 * spec.order) / lowest;
 }
 
-/** Zero-phase Butterworth filtering of a sampled history. */
 export function zeroPhaseFilter(values: Float64Array, dtS: number, spec: FilterSpec): Float64Array {
   const sections = filterSections(spec, dtS);
   const pad = Math.ceil(padDurationS(spec) / dtS);
@@ -126,7 +120,6 @@ export function zeroPhaseFilter(values: Float64Array, dtS: number, spec: FilterS
   return work.slice(pad, pad + values.length);
 }
 
-/** One line for a reviewer. */
 export function describeFilter(spec: FilterSpec): string {
   const [name, corners] = {
     highpass: ['high-pass', `${spec.lowCornerHz}`],

@@ -28,15 +28,8 @@ export function fourierAmplitudeSpectrum(values: Float64Array, dtS: number) {
 /** The usual bandwidth coefficient of the Konno–Ohmachi window. */
 export const KONNO_OHMACHI_DEFAULT_B = 40;
 
-/**
- * The Konno–Ohmachi smoothing window W(f; f_c) = [sin(b·log10(f/f_c)) / (b·log10(f/f_c))]⁴
- * (Konno and Ohmachi 1998, BSSA 88(1), eq. 4): 1 at f = f_c, symmetric in log f, 0 at f ≤ 0.
- */
-export function konnoOhmachiWeight(
-  frequencyHz: number,
-  centreHz: number,
-  b = KONNO_OHMACHI_DEFAULT_B,
-): number {
+/** The Konno–Ohmachi window [sin(b·log10(f/f_c)) / (b·log10(f/f_c))]⁴ (BSSA 88(1), eq. 4); 0 at f ≤ 0. */
+export function konnoOhmachiWeight(frequencyHz: number, centreHz: number, b = KONNO_OHMACHI_DEFAULT_B) {
   if (frequencyHz <= 0 || centreHz <= 0) return 0;
   const x = b * Math.log10(frequencyHz / centreHz);
   if (x === 0) return 1;
@@ -48,8 +41,8 @@ export function konnoOhmachiWeight(
 const WINDOW_REACH = 4 * Math.PI;
 
 /**
- * Konno–Ohmachi smoothing: at each centre, Σ W(f_i; f_c)·A_i / Σ W(f_i; f_c) (Konno and Ohmachi 1998,
- * eq. 4). `frequenciesHz` ascending; centres default to the positive input frequencies.
+ * Konno and Ohmachi (1998) smoothing: Σ W(f_i; f_c)·A_i / Σ W(f_i; f_c) at each centre, by default
+ * each positive frequency of `frequenciesHz` (ascending).
  */
 export function konnoOhmachiSmooth(
   frequenciesHz: Float64Array,

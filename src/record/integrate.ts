@@ -1,7 +1,6 @@
 /**
- * Running trapezoidal integral from `initial` (common practice; e.g. Press et al., Numerical
- * Recipes, 3rd ed., §4.1): exact for histories linear between samples, as quakesweep reads a record.
- * Every running integral of quakesweep (velocity, displacement, the Husid curve) is this one.
+ * Running trapezoidal integral from `initial` (common practice; Press et al., Numerical Recipes, 3rd
+ * ed., §4.1), exact for histories linear between samples; every running integral of quakesweep.
  */
 export function cumulativeTrapezoid(values: Float64Array, dtS: number, initial = 0): Float64Array {
   const out = new Float64Array(values.length);
@@ -19,10 +18,7 @@ export function trapezoid(values: Float64Array, dtS: number): number {
   return (sum * dtS) / 2;
 }
 
-/**
- * The acceleration with the ground velocity, m/s, and displacement, m, integrated from rest (common
- * practice). No baseline is removed here: ask for it in processing, where it is recorded.
- */
+/** Acceleration, velocity, m/s, and displacement, m, from rest; no baseline removed (ask in processing). */
 export function integrateRecord(record: { accelMS2: Float64Array; dtS: number }) {
   const velocityMS = cumulativeTrapezoid(record.accelMS2, record.dtS);
   const displacementM = cumulativeTrapezoid(velocityMS, record.dtS);

@@ -6,9 +6,8 @@ import { MAX_LINE_CHARACTERS, sniffSeparator } from './separator.js';
 const MAX_MISSES = 16;
 
 /**
- * Splits decoded text into lines (at `\r\n`, `\n` or a lone `\r`, numbered from 1) for the reader:
- * runs of numeric rows go to its row scanner once it knows the layout, any other line to row().
- * Holds at most one unfinished line, refused once longer than MAX_LINE_CHARACTERS.
+ * Splits text into lines (at `\r\n`, `\n` or a lone `\r`, from 1): runs of numeric rows go to the
+ * reader's row scanner, other lines to row(); it holds at most one unfinished line.
  */
 export class LineSplitter {
   private readonly reader: RecordReader;

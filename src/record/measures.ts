@@ -58,9 +58,8 @@ export function husidCurve(accelMS2: Float64Array, dtS: number): Float64Array {
 }
 
 /**
- * First time a rising curve reaches `level`, interpolated linearly. On the Husid curve, the
- * significant duration D5–95 is timeToReach(0.95) − timeToReach(0.05) (Trifunac and Brady 1975,
- * BSSA 65(3); D5–75 as in Abrahamson and Silva 1996).
+ * First time a rising curve reaches `level`, interpolated. On the Husid curve, D5–95 is the time from
+ * 0.05 to 0.95 (Trifunac and Brady 1975, BSSA 65(3); D5–75 as in Abrahamson and Silva 1996).
  */
 export function timeToReach(curve: Float64Array, dtS: number, level: number): number {
   for (let i = 0; i < curve.length; i++) {
@@ -75,9 +74,8 @@ export function timeToReach(curve: Float64Array, dtS: number, level: number): nu
 
 /** Bracketed duration: first to last sample with |a| ≥ threshold, or 0 (Bolt 1973, Proc. 5th WCEE). */
 export function bracketedDuration(accelMS2: Float64Array, dtS: number, thresholdMS2: number) {
-  if (!Number.isFinite(thresholdMS2) || thresholdMS2 <= 0) {
+  if (!Number.isFinite(thresholdMS2) || thresholdMS2 <= 0)
     throw usageError(`the bracketed-duration threshold must be positive, got ${thresholdMS2} m/s²`);
-  }
   let first = -1;
   let last = -1;
   for (let i = 0; i < accelMS2.length; i++) {
@@ -99,10 +97,7 @@ export function cumulativeAbsoluteVelocity(accelMS2: Float64Array, dtS: number):
  * Mean period T_m = Σ (C_i²/f_i) / Σ C_i² over the Fourier amplitudes at 0.25 ≤ f_i ≤ 20 Hz, 20 Hz
  * cut to the Nyquist (Rathje, Abrahamson and Bray 1998, J. Geotech. Geoenv. Eng. 124(2), eq. 3).
  */
-export function meanPeriod(
-  accelMS2: Float64Array,
-  dtS: number,
-): { periodS: number | null; bandHz: [number, number] } {
+export function meanPeriod(accelMS2: Float64Array, dtS: number) {
   const { frequenciesHz, amplitudeMS } = fourierAmplitudeSpectrum(accelMS2, dtS);
   const bandHz: [number, number] = [0.25, Math.min(20, 1 / (2 * dtS))];
   let numerator = 0;

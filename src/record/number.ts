@@ -5,8 +5,8 @@ const FORTRAN_EXPONENT = /[dD]/;
 export const DECIMAL_COMMA = /^[+-]?(\d+,\d*|,\d+)([eEdD][+-]?\d+)?$/;
 
 /**
- * A number as NUMBER has it, Fortran exponents (1.5D-03) included, valued as Number() (correctly
- * rounded) values it; NaN for anything else, ±Infinity included. assembly/rows.ts agrees.
+ * NUMBER's finite numbers (1.5D-03 too) valued as Number() does, and as assembly/rows.ts does the
+ * short decimals it reads; NaN for anything else.
  */
 export function parseNumber(text: string): number {
   if (!NUMBER.test(text)) return Number.NaN;

@@ -19,9 +19,8 @@ export interface ProcessingPlan {
 export const PROCESSING_ORDER = ['baseline', 'taper', 'filter', 'resample'] as const;
 
 /**
- * Apply a plan in PROCESSING_ORDER, each step recorded on the record: the baseline first so the rest
- * see a centred record, the taper so the filter starts from near zero, resampling last so the filter
- * works on the samples as recorded.
+ * Apply a plan in PROCESSING_ORDER, each step recorded: the baseline first to centre the record, the
+ * taper so the filter starts near zero, resampling last so the filter sees the samples as recorded.
  */
 export function applyProcessingPlan(record: GroundRecord, plan: ProcessingPlan): GroundRecord {
   let out = record;

@@ -48,10 +48,7 @@ const SNIFF_LINES = 100;
  * the separator, stopping early at a line too long to read; then the text goes to the line splitter
  * chunk by chunk, so memory holds the samples, one chunk and at most one unfinished line.
  */
-export async function readRecordStream(
-  input: AsyncIterable<string | Uint8Array>,
-  options: ReadOptions,
-): Promise<GroundRecord> {
+export async function readRecordStream(input: AsyncIterable<string | Uint8Array>, options: ReadOptions) {
   const reader = new RecordReader(options, RowScanner.get());
   const chunks = input[Symbol.asyncIterator]();
   const decoder = new StreamText();
@@ -92,10 +89,7 @@ export async function readRecordStream(
   return reader.finish();
 }
 
-/**
- * The text of a stream of chunks, the byte-order mark kept (the line splitter removes it). While
- * every byte so far is ASCII, bytes are read as Latin-1: the same characters, much faster.
- */
+/** Chunks as text, the byte-order mark kept; bytes are read as Latin-1 (faster) while all are ASCII. */
 class StreamText {
   private decoder: TextDecoder | undefined;
   private ascii = true;
@@ -137,10 +131,7 @@ function wellFormed(text: string): string {
   return (text as unknown as { toWellFormed(): string }).toWellFormed();
 }
 
-/**
- * Warnings when the PGA read, above 5 g or below 0.0001 g, suggests the wrong unit (common
- * practice: recorded PGAs lie well inside this range).
- */
+/** Warnings when a PGA above 5 g or below 0.0001 g suggests the wrong unit (common practice). */
 export function unitWarnings(record: GroundRecord): string[] {
   const pgaMS2 = record.pgaMS2;
   const pgaG = pgaMS2 / STANDARD_GRAVITY_MS2;

@@ -20,10 +20,7 @@ const LETTER = /\p{L}/u;
 // biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is the point
 const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
 
-/**
- * Takes the rows of a record one at a time (their fields, or runs of numeric rows that the row
- * scanner reads at once) and keeps the samples, in m/s², in a Float64Array grown by doubling.
- */
+/** Takes a record's rows, one by one or in scanned runs, and keeps the samples, m/s², in a growing array. */
 export class RecordReader {
   /** The file's separator, chosen from its first lines before any row is taken. */
   separator: Separator = ',';
@@ -62,10 +59,7 @@ export class RecordReader {
       throw usageError(`--column must be a whole number ≥ 1, got ${options.column}`);
   }
 
-  /**
-   * Read the rows of `text` from `from` (a line's start) with the row scanner, which takes exactly
-   * those row() would take without a word: where it stopped and how many lines it read.
-   */
+  /** Rows from `from` (a line's start) read by the scanner, which takes exactly those row() would. */
   rowsFrom(text: string, from: number): { next: number; lines: number } {
     const scanner = this.scanner as RowScanner;
     let next = from;
@@ -98,7 +92,6 @@ export class RecordReader {
     this.scanner?.release();
   }
 
-  /** One row's fields. */
   row(rawFields: string[], line: number): void {
     const fields = this.separator === 'whitespace' ? rawFields.filter((f) => f !== '') : rawFields;
     if (fields.length === 0 || (fields.length === 1 && fields[0] === '')) return;
@@ -120,12 +113,8 @@ export class RecordReader {
       if (i === 0 || i === this.valueColumn - 1) continue;
       this.number(fields[i], line, i + 1); // columns not used must still be numbers
     }
-    if (this.columns === 1) {
-      this.add(this.number(fields[0], line, 1), line);
-    } else {
-      this.time(this.number(fields[0], line, 1), fields[0], line);
-      this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn), line);
-    }
+    if (this.columns > 1) this.time(this.number(fields[0], line, 1), fields[0], line);
+    this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn), line);
     this.lastDataLine = line;
   }
 
@@ -157,9 +146,8 @@ export class RecordReader {
   /** Check that the time column advances by one uniform step. */
   private time(timeS: number, text: string, line: number): void {
     const i = this.count;
-    if (i > 0 && !(timeS > this.timePreviousS)) {
+    if (i > 0 && !(timeS > this.timePreviousS))
       throw this.error(`time does not increase: ${text} s after ${this.timePreviousS} s`, line);
-    }
     if (i >= 2) {
       // Allow a step one last printed digit off the mean, but never half a step.
       const meanStepS = (this.timePreviousS - this.timeFirstS) / (i - 1);

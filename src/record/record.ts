@@ -37,12 +37,10 @@ export type RecordFields = Pick<GroundRecord, 'name' | 'dtS' | 'accelMS2'> &
 export function createRecord(fields: RecordFields): GroundRecord {
   const { name, dtS, accelMS2 } = fields;
   const source = fields.source ?? name;
-  if (!Number.isFinite(dtS) || dtS <= 0) {
+  if (!Number.isFinite(dtS) || dtS <= 0)
     throw inputError(`the time step must be a positive number of seconds, got ${dtS}`, { file: source });
-  }
-  if (accelMS2.length < 2) {
+  if (accelMS2.length < 2)
     throw inputError(`a record needs at least 2 samples, got ${accelMS2.length}`, { file: source });
-  }
   const pgaMS2 = peakGroundAcceleration(fields);
   if (!Number.isFinite(pgaMS2)) {
     const i = accelMS2.findIndex((a) => !Number.isFinite(a));

@@ -9,21 +9,17 @@ export const ANTI_ALIAS_ORDER = 8;
 const ANTI_ALIAS_FRACTION = 0.8;
 
 /**
- * Resample to step `newDtS` over the same duration (floor(duration/newDtS) + 1 samples) with a
- * Lanczos-windowed sinc, weights summing to 1 (Duchon 1979, J. Appl. Meteorology 18; Smith and
- * Gossett 1984 for band-limited interpolation). A coarser step is first low-passed, zero-phase, at
- * 0.8 × the new Nyquist (−6 dB there, about −31 dB at the new Nyquist) so nothing folds back;
- * `antiAliasHz` is that corner, null for a finer step.
+ * Resample to step `newDtS` over the same duration by a Lanczos-windowed sinc, weights summing to 1
+ * (Duchon 1979, J. Appl. Meteorology 18; Smith and Gossett 1984). A coarser step is low-passed first
+ * (−6 dB at `antiAliasHz`, about −31 dB at the new Nyquist; null for a finer step).
  */
 export function resampleHistory(values: Float64Array, dtS: number, newDtS: number) {
-  if (!Number.isFinite(newDtS) || newDtS <= 0) {
+  if (!Number.isFinite(newDtS) || newDtS <= 0)
     throw usageError(`the resampling step must be a positive number of seconds, got ${newDtS}`);
-  }
   const durationS = (values.length - 1) * dtS;
   const count = Math.floor(durationS / newDtS + 1e-9) + 1;
-  if (count < 2) {
+  if (count < 2)
     throw usageError(`a resampling step of ${newDtS} s leaves fewer than 2 samples in ${durationS} s`);
-  }
   let source = values;
   let antiAliasHz: number | null = null;
   if (newDtS > dtS) {

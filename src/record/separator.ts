@@ -1,17 +1,15 @@
 /** How the fields of a line are separated; `whitespace` is runs of spaces and tabs. */
 export type Separator = ',' | ';' | 'whitespace';
 
-/** A line break: `\r\n`, `\n` or a lone `\r`. */
 export const LINE_BREAK = /\r\n|\n|\r/;
 
 /** Longest line read, in characters as it stands; a longer one is refused where it is. */
 export const MAX_LINE_CHARACTERS = 1_000_000;
 
 /**
- * The separator of the first line of only numbers and separators (a header in words cannot mislead
- * it): `;` if it has one, else whitespace if it has a tab, else `,` if it has one, else whitespace.
- * `partial`: the text is cut mid-stream, its last line is not looked at. The look stops before a
- * line longer than MAX_LINE_CHARACTERS, which is refused where it stands.
+ * The separator of the first line of only numbers and separators (so a header cannot mislead it).
+ * `partial`: the text is cut mid-stream, its last line not looked at. The look stops before a line
+ * longer than MAX_LINE_CHARACTERS, which is refused where it stands.
  */
 export function sniffSeparator(text: string, skip: number, partial = false): Separator {
   let lines = text.split(LINE_BREAK, skip + 2000);

@@ -43,7 +43,6 @@ export function seededNormal(seed: number): () => number {
       while (u === 0) u = uniform();
       const v = uniform();
       const radius = Math.sqrt(-2 * Math.log(u));
-      // The cosine variate is given first, the sine one next.
       pair.push(radius * Math.sin(2 * Math.PI * v), radius * Math.cos(2 * Math.PI * v));
     }
     return pair.pop() as number;
