@@ -44,9 +44,7 @@ export function quote(text: string): string {
   const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
   // Line and paragraph separators and the byte-order mark are escaped too: the message stays one line.
   return `'${short.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
-    const code = c.charCodeAt(0);
-    return code <= 0xff
-      ? `\\x${code.toString(16).padStart(2, '0')}`
-      : `\\u${code.toString(16).padStart(4, '0')}`;
+    const hex = c.charCodeAt(0).toString(16);
+    return hex.length <= 2 ? `\\x${hex.padStart(2, '0')}` : `\\u${hex.padStart(4, '0')}`;
   })}'`;
 }

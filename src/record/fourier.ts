@@ -10,11 +10,10 @@ import { usageError } from '../base/errors.js';
 export function fourierAmplitudeSpectrum(values: Float64Array, dtS: number) {
   let size = 2;
   while (size < values.length) size *= 2;
-  const fft = new FFT(size);
   const input = new Float64Array(size);
   input.set(values);
   const out = new Float64Array(2 * size);
-  fft.realTransform(out, input);
+  new FFT(size).realTransform(out, input);
   const half = size / 2;
   const frequenciesHz = new Float64Array(half + 1);
   const amplitudeMS = new Float64Array(half + 1);

@@ -12,10 +12,9 @@ export interface Peak {
 
 /** Ground-motion measures of one record (SI units throughout). */
 export interface GroundMotionMeasures {
+  /** Peaks of acceleration, m/s², velocity, m/s, and displacement, m. */
   pga: Peak;
-  /** m/s */
   pgv: Peak;
-  /** m */
   pgd: Peak;
   /** Arias intensity, m/s. */
   ariasMS: number;
@@ -62,29 +61,21 @@ export function husidCurve(accelMS2: Float64Array, dtS: number): Float64Array {
  * 0.05 to 0.95 (Trifunac and Brady 1975, BSSA 65(3); D5–75 as in Abrahamson and Silva 1996).
  */
 export function timeToReach(curve: Float64Array, dtS: number, level: number): number {
-  for (let i = 0; i < curve.length; i++) {
-    if (curve[i] >= level) {
-      if (i === 0) return 0;
-      const rise = curve[i] - curve[i - 1];
-      return (i - 1 + (rise > 0 ? (level - curve[i - 1]) / rise : 1)) * dtS;
-    }
-  }
-  return (curve.length - 1) * dtS;
+  const i = curve.findIndex((h) => h >= level);
+  if (i === -1) return (curve.length - 1) * dtS;
+  if (i === 0) return 0;
+  const rise = curve[i] - curve[i - 1];
+  return (i - 1 + (rise > 0 ? (level - curve[i - 1]) / rise : 1)) * dtS;
 }
 
 /** Bracketed duration: first to last sample with |a| ≥ threshold, or 0 (Bolt 1973, Proc. 5th WCEE). */
 export function bracketedDuration(accelMS2: Float64Array, dtS: number, thresholdMS2: number) {
   if (!Number.isFinite(thresholdMS2) || thresholdMS2 <= 0)
     throw usageError(`the bracketed-duration threshold must be positive, got ${thresholdMS2} m/s²`);
-  let first = -1;
-  let last = -1;
-  for (let i = 0; i < accelMS2.length; i++) {
-    if (Math.abs(accelMS2[i]) >= thresholdMS2) {
-      if (first < 0) first = i;
-      last = i;
-    }
-  }
+  const first = accelMS2.findIndex((a) => Math.abs(a) >= thresholdMS2);
   if (first < 0) return { durationS: 0, startS: null, endS: null };
+  let last = accelMS2.length - 1;
+  while (!(Math.abs(accelMS2[last]) >= thresholdMS2)) last--;
   return { durationS: (last - first) * dtS, startS: first * dtS, endS: last * dtS };
 }
 

@@ -116,8 +116,7 @@ class StreamText {
     if (this.decoder === undefined) this.choose(false);
     const held = Buffer.concat(this.held);
     this.held = [];
-    const decoder = this.decoder as TextDecoder;
-    return held.length > 0 ? decoder.decode(held) : decoder.decode();
+    return (this.decoder as TextDecoder).decode(held);
   }
 
   private choose(utf16: boolean): void {

@@ -20,16 +20,11 @@ export function resampleHistory(values: Float64Array, dtS: number, newDtS: numbe
   const count = Math.floor(durationS / newDtS + 1e-9) + 1;
   if (count < 2)
     throw usageError(`a resampling step of ${newDtS} s leaves fewer than 2 samples in ${durationS} s`);
-  let source = values;
-  let antiAliasHz: number | null = null;
-  if (newDtS > dtS) {
-    antiAliasHz = ANTI_ALIAS_FRACTION / (2 * newDtS);
-    source = zeroPhaseFilter(values, dtS, {
-      kind: 'lowpass',
-      order: ANTI_ALIAS_ORDER,
-      highCornerHz: antiAliasHz,
-    });
-  }
+  const antiAliasHz = newDtS > dtS ? ANTI_ALIAS_FRACTION / (2 * newDtS) : null;
+  const source =
+    antiAliasHz === null
+      ? values
+      : zeroPhaseFilter(values, dtS, { kind: 'lowpass', order: ANTI_ALIAS_ORDER, highCornerHz: antiAliasHz });
   const out = new Float64Array(count);
   const a = LANCZOS_LOBES;
   for (let j = 0; j < count; j++) {

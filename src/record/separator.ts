@@ -7,9 +7,8 @@ export const LINE_BREAK = /\r\n|\n|\r/;
 export const MAX_LINE_CHARACTERS = 1_000_000;
 
 /**
- * The separator of the first line of only numbers and separators (so a header cannot mislead it).
- * `partial`: the text is cut mid-stream, its last line not looked at. The look stops before a line
- * longer than MAX_LINE_CHARACTERS, which is refused where it stands.
+ * The separator of the first line of only numbers and separators (so a header cannot mislead it);
+ * `partial`: the text is cut mid-stream, its last line unread. It stops before a line too long to read.
  */
 export function sniffSeparator(text: string, skip: number, partial = false): Separator {
   let lines = text.split(LINE_BREAK, skip + 2000);

@@ -7,9 +7,8 @@ import { createRecord, type GroundRecord } from './record.js';
 export interface SynthOptions {
   /** Seed of the random number generator; the same seed gives the same record, bit for bit. */
   seed: number;
-  /** Time step, s. Default 0.01. */
+  /** Time step and duration, s (defaults 0.01 and 30). */
   dtS?: number;
-  /** Duration, s. Default 30. */
   durationS?: number;
   /** Target peak ground acceleration, g; the record is scaled to it exactly. Default 0.3. */
   pgaG?: number;
@@ -53,8 +52,7 @@ export function seededNormal(seed: number): () => number {
  * A synthetic record: Gaussian white noise through the Kanai–Tajimi filter (Kanai 1957; Tajimi
  * 1960) and the Clough–Penzien high-pass (Clough and Penzien, Dynamics of Structures, 1975), times
  * the Jennings–Housner–Tsai (1968) envelope ((t/t1)² to t1 = 0.1·T, 1 to t2 = 0.45·T, then
- * exp(−(6/T)(t − t2)), T the duration), scaled to the target PGA. Each filter is an oscillator
- * stepped by the piecewise-exact recurrence:
+ * exp(−(6/T)(t − t2)), T the duration), scaled to the target PGA; oscillators stepped exactly:
  *   a_KT = −(2ζ_gω_g ẋ_g + ω_g² x_g) with ẍ_g + 2ζ_gω_g ẋ_g + ω_g² x_g = −w(t), and
  *   a = ẍ_f with ẍ_f + 2ζ_fω_f ẋ_f + ω_f² x_f = a_KT (removing long-period drift).
  * For demo and test data only: it is not a hazard-consistent ground motion.
