@@ -4,16 +4,13 @@ import { usageError } from '../base/errors.js';
 export const BASELINE_NAMES = ['mean', 'linear', 'quadratic', 'cubic'] as const;
 
 /**
- * Fit a polynomial of order 0 to 3 to `values` by least squares and subtract it (baseline
- * correction of the acceleration, common practice in strong-motion processing; order 0 removes
- * the mean). The fit is made on time mapped to [−1, 1] so the normal equations stay well
- * conditioned, and solved by Gaussian elimination with partial pivoting (Golub and Van Loan,
- * Matrix Computations, 4th ed., §3.4).
+ * Subtract the least-squares polynomial of order 0 (the mean) to 3 (baseline correction, common
+ * practice in strong-motion processing). Time is mapped to [−1, 1] to keep the normal equations well
+ * conditioned, solved with partial pivoting (Golub and Van Loan, Matrix Computations, 4th ed., §3.4).
  */
 export function removePolynomialBaseline(values: Float64Array, order: number): Float64Array {
-  if (!Number.isInteger(order) || order < 0 || order > 3) {
+  if (!Number.isInteger(order) || order < 0 || order > 3)
     throw usageError(`baseline order must be 0 (mean), 1, 2 or 3, got ${order}`);
-  }
   const coefficients = fitPolynomial(values, order);
   const n = values.length;
   const out = new Float64Array(n);

@@ -1,16 +1,13 @@
 import { inputError } from '../base/errors.js';
 import { MAX_LINE_CHARACTERS, type Separator } from './separator.js';
 
-/** The separators of the whitespace separator: each space and each tab. */
+/** Each space and each tab separates for the whitespace separator. */
 const BLANK = /[ \t]/;
 
 /**
- * The fields of one line (no line break in it): the line up to a `#` (a comment), split at each
- * separator (each space or tab for the whitespace separator) and, for `,` and `;`, each field
- * trimmed of white space (String.prototype.trim); none for a line with nothing but a comment or
- * white space. No quotes: a `"` is part of a field. The tests check these against csv-parse
- * (delimiter, trim, comment '#', quote false, skip_empty_lines, max_record_size 1,000,000), its
- * limit on a line's size included (sizeLimit). `file` and `line` place the error.
+ * The fields of one line: the text before any `#`, split at each separator, trimmed for `,` and `;`;
+ * none for a blank or comment line; a `"` is part of a field. The tests check this against csv-parse
+ * (delimiter, trim, comment '#', quote false, skip_empty_lines, max_record_size 1,000,000).
  */
 export function lineFields(text: string, separator: Separator, file: string, line: number): string[] {
   const hash = text.indexOf('#');
@@ -23,12 +20,7 @@ export function lineFields(text: string, separator: Separator, file: string, lin
   return fields.length === 1 && fields[0] === '' ? [] : fields;
 }
 
-/**
- * csv-parse's limit on a line's size, as it counts: before each byte of a field it appends, the
- * characters of the fields before (as kept) and the UTF-8 bytes of this one so far must not pass
- * MAX_LINE_CHARACTERS. Leading white space is not appended, trailing white space is (and trimmed
- * from the field once it ends); separators and the comment are not counted.
- */
+/** csv-parse's size limit as it counts: the fields before as kept, and this one's UTF-8 bytes so far. */
 function sizeLimit(spans: string[], trimmed: boolean, file: string, line: number): void {
   let before = 0;
   for (const span of spans) {
@@ -50,11 +42,9 @@ export function longLineError(file: string, line: number | undefined) {
 /** A field as shown in a message: quoted, cut short, with unprintable characters escaped. */
 export function quote(text: string): string {
   const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
-  // Line and paragraph separators and the byte-order mark are escaped too, so the message stays one visible line.
+  // Line and paragraph separators and the byte-order mark are escaped too: the message stays one line.
   return `'${short.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
-    const code = c.charCodeAt(0);
-    return code <= 0xff
-      ? `\\x${code.toString(16).padStart(2, '0')}`
-      : `\\u${code.toString(16).padStart(4, '0')}`;
+    const hex = c.charCodeAt(0).toString(16);
+    return hex.length <= 2 ? `\\x${hex.padStart(2, '0')}` : `\\u${hex.padStart(4, '0')}`;
   })}'`;
 }

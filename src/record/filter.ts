@@ -1,31 +1,21 @@
 import { usageError } from '../base/errors.js';
 
 /**
- * Butterworth filters for ground-motion records.
+ * Butterworth filters (Butterworth 1930, Wireless Engineer 7): the analog prototype of order n,
+ * |H(jΩ)|² = 1/(1 + Ω^{2n}), in second-order sections s² + 2 sin((2k − 1)π/(2n)) s + 1 (and s + 1
+ * for odd n), made high-pass by s → 1/s, mapped to z by the bilinear transform with the corner
+ * prewarped, Ω = tan(π f Δt) / tan(π f_c Δt) (Oppenheim and Schafer, Discrete-Time Signal
+ * Processing, 3rd ed., §7.2.2 and §7.3); −3 dB at f_c exactly.
  *
- * Design: the analog Butterworth prototype (Butterworth 1930, "On the theory of filter
- * amplifiers", Wireless Engineer 7) of order n, |H(jΩ)|² = 1/(1 + Ω^{2n}), is factored into
- * second-order sections s² + 2 sin((2k − 1)π/(2n)) s + 1 (and s + 1 for odd n), turned into a
- * high-pass by s → 1/s where asked, and mapped to the z-plane by the bilinear transform with the
- * corner prewarped, Ω = tan(π f Δt) / tan(π f_c Δt) (Oppenheim and Schafer, Discrete-Time Signal
- * Processing, 3rd ed., §7.2.2 and §7.3). The digital filter then meets the prototype's magnitude
- * exactly on the warped axis: |H(f)|² = 1/(1 + (tan(π f Δt)/tan(π f_c Δt))^{2n}), −3 dB at f_c.
- *
- * Filtering: the cascade of sections, each in transposed direct form II, is run forward and then
- * backward over the record (zero phase, magnitude squared: −6 dB at the corner), after zero pads
- * of 1.5·n/f_c at each end for the filter's transient (Converse and Brady 1992, as discussed by
- * Boore 2005, "On pads and filters", BSSA 95(2); the 1.5 n/f_c length from memory, applied here at
- * each end, which is the cautious reading). The pads are removed afterwards, so the record keeps its
- * time base and length.
- *
- * A band-pass is the cascade of an order-n high-pass at the low corner and an order-n low-pass at
- * the high corner (common practice in strong-motion processing), not the order-2n band transform.
+ * The cascade (transposed direct form II) runs forward then backward (zero phase, −6 dB at the
+ * corner) over zero pads of 1.5·n/f_c at each end, removed afterwards (Converse and Brady 1992, as
+ * discussed by Boore 2005, BSSA 95(2); the length from memory, at each end to be cautious). A
+ * band-pass is an order-n high-pass then an order-n low-pass (common practice in strong-motion
+ * processing), not the order-2n band transform.
  */
 
-export type FilterKind = 'highpass' | 'lowpass' | 'bandpass';
-
 export interface FilterSpec {
-  kind: FilterKind;
+  kind: 'highpass' | 'lowpass' | 'bandpass';
   /** Butterworth order n of each pass (≥ 1). */
   order: number;
   /** High-pass corner, Hz (highpass and bandpass). */
@@ -40,10 +30,7 @@ export type Biquad = { [coefficient in 'b0' | 'b1' | 'b2' | 'a1' | 'a2']: number
 /** Largest Butterworth order accepted; higher orders ring and add nothing for records. */
 export const MAX_FILTER_ORDER = 12;
 
-/**
- * Second-order sections of a digital Butterworth low-pass or high-pass of order `order`, corner
- * `cornerHz`, for step `dtS` (bilinear transform with prewarping; see the module comment).
- */
+/** Second-order sections of a digital Butterworth low-pass or high-pass (see the module comment). */
 export function butterworthSections(
   kind: 'lowpass' | 'highpass',
   order: number,
@@ -75,22 +62,17 @@ export function butterworthSections(
   return sections;
 }
 
-/**
- * All sections of a specification, high-pass first, refusing a specification that would be
- * silently wrong for a record sampled at `dtS`.
- */
+/** All sections of a specification, high-pass first, refusing one that is wrong for step `dtS`. */
 export function filterSections(spec: FilterSpec, dtS: number): Biquad[] {
-  if (!Number.isInteger(spec.order) || spec.order < 1 || spec.order > MAX_FILTER_ORDER) {
+  if (!Number.isInteger(spec.order) || spec.order < 1 || spec.order > MAX_FILTER_ORDER)
     throw usageError(`filter order must be a whole number from 1 to ${MAX_FILTER_ORDER}, got ${spec.order}`);
-  }
   const nyquistHz = 1 / (2 * dtS);
-  const corners: [string, number | undefined][] = [];
-  if (spec.kind !== 'lowpass') corners.push(['high-pass corner', spec.lowCornerHz]);
-  if (spec.kind !== 'highpass') corners.push(['low-pass corner', spec.highCornerHz]);
-  for (const [label, hz] of corners) {
-    if (hz === undefined || !Number.isFinite(hz) || hz <= 0) {
+  const passes: ['highpass' | 'lowpass', string, number | undefined][] = [];
+  if (spec.kind !== 'lowpass') passes.push(['highpass', 'high-pass corner', spec.lowCornerHz]);
+  if (spec.kind !== 'highpass') passes.push(['lowpass', 'low-pass corner', spec.highCornerHz]);
+  for (const [, label, hz] of passes) {
+    if (hz === undefined || !Number.isFinite(hz) || hz <= 0)
       throw usageError(`the ${label} must be a positive frequency in Hz, got ${hz}`);
-    }
     if (hz >= nyquistHz) {
       throw usageError(
         `the ${label} ${hz} Hz is at or above the Nyquist frequency ${nyquistHz} Hz of a record sampled every ${dtS} s`,
@@ -102,10 +84,7 @@ export function filterSections(spec: FilterSpec, dtS: number): Biquad[] {
       `a band-pass needs its low corner below its high corner, got ${spec.lowCornerHz}–${spec.highCornerHz} Hz`,
     );
   }
-  return [
-    ...(spec.kind === 'lowpass' ? [] : butterworthSections('highpass', spec.order, spec.lowCornerHz!, dtS)),
-    ...(spec.kind === 'highpass' ? [] : butterworthSections('lowpass', spec.order, spec.highCornerHz!, dtS)),
-  ];
+  return passes.flatMap(([kind, , hz]) => butterworthSections(kind, spec.order, hz!, dtS));
 }
 
 /** Run the cascade over `values` in place, from the first sample to the last, from rest. */
@@ -123,13 +102,12 @@ function runSections(sections: readonly Biquad[], values: Float64Array): void {
   }
 }
 
-/** Length of the zero pad at each end, s: 1.5·n/f_c for the lowest corner (see the module comment). */
+/** Length of the zero pad at each end, s: 1.5·n/f_c for the lowest corner. */
 export function padDurationS(spec: FilterSpec): number {
   const lowest = spec.kind === 'lowpass' ? spec.highCornerHz! : spec.lowCornerHz!;
   return (1.5 * spec.order) / lowest;
 }
 
-/** Zero-phase Butterworth filtering of a sampled history (forward and backward, zero pads). */
 export function zeroPhaseFilter(values: Float64Array, dtS: number, spec: FilterSpec): Float64Array {
   const sections = filterSections(spec, dtS);
   const pad = Math.ceil(padDurationS(spec) / dtS);
@@ -142,17 +120,14 @@ export function zeroPhaseFilter(values: Float64Array, dtS: number, spec: FilterS
   return work.slice(pad, pad + values.length);
 }
 
-/** One line for a reviewer. */
 export function describeFilter(spec: FilterSpec): string {
-  const corners =
-    spec.kind === 'highpass'
-      ? `${spec.lowCornerHz} Hz`
-      : spec.kind === 'lowpass'
-        ? `${spec.highCornerHz} Hz`
-        : `${spec.lowCornerHz}–${spec.highCornerHz} Hz`;
-  const name = { highpass: 'high-pass', lowpass: 'low-pass', bandpass: 'band-pass' }[spec.kind];
+  const [name, corners] = {
+    highpass: ['high-pass', `${spec.lowCornerHz}`],
+    lowpass: ['low-pass', `${spec.highCornerHz}`],
+    bandpass: ['band-pass', `${spec.lowCornerHz}–${spec.highCornerHz}`],
+  }[spec.kind];
   return (
-    `${name} Butterworth, order ${spec.order}, ${corners}, zero-phase (forward and backward), ` +
+    `${name} Butterworth, order ${spec.order}, ${corners} Hz, zero-phase (forward and backward), ` +
     `zero pads of ${Number(padDurationS(spec).toPrecision(3))} s at each end; bilinear transform with prewarping`
   );
 }

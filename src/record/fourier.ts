@@ -2,21 +2,18 @@ import FFT from 'fft.js';
 import { usageError } from '../base/errors.js';
 
 /**
- * Fourier amplitude spectrum of a sampled history: the discrete Fourier transform times Δt, which
- * approximates the continuous transform ∫a(t)e^{−2πift}dt (Brigham, The Fast Fourier Transform and
- * its Applications, 1988, §6.1). The record is zero-padded to a power of two, `transformLength` N,
- * and transformed with the radix-4 FFT of fft.js (Cooley and Tukey 1965), one-sided: the
- * amplitudes |A(f)| = Δt·|Σ a_j e^{−2πi f jΔt}|, m/s (acceleration × time), at k/(N·Δt) Hz for
- * k = 0 … N/2.
+ * One-sided Fourier amplitude spectrum: Δt times the DFT, approximating ∫a(t)e^{−2πift}dt (Brigham,
+ * The Fast Fourier Transform and its Applications, 1988, §6.1), zero-padded to a power of two N
+ * (`transformLength`; fft.js, Cooley and Tukey 1965). Amplitudes in m/s (acceleration × time) at
+ * k/(N·Δt) Hz, k = 0 … N/2.
  */
 export function fourierAmplitudeSpectrum(values: Float64Array, dtS: number) {
   let size = 2;
   while (size < values.length) size *= 2;
-  const fft = new FFT(size);
   const input = new Float64Array(size);
   input.set(values);
   const out = new Float64Array(2 * size);
-  fft.realTransform(out, input);
+  new FFT(size).realTransform(out, input);
   const half = size / 2;
   const frequenciesHz = new Float64Array(half + 1);
   const amplitudeMS = new Float64Array(half + 1);
@@ -30,15 +27,8 @@ export function fourierAmplitudeSpectrum(values: Float64Array, dtS: number) {
 /** The usual bandwidth coefficient of the Konno–Ohmachi window. */
 export const KONNO_OHMACHI_DEFAULT_B = 40;
 
-/**
- * The Konno–Ohmachi smoothing window W(f; f_c) = [sin(b·log10(f/f_c)) / (b·log10(f/f_c))]⁴
- * (Konno and Ohmachi 1998, BSSA 88(1), eq. 4): 1 at f = f_c, symmetric in log f, 0 at f ≤ 0.
- */
-export function konnoOhmachiWeight(
-  frequencyHz: number,
-  centreHz: number,
-  b = KONNO_OHMACHI_DEFAULT_B,
-): number {
+/** The Konno–Ohmachi window [sin(b·log10(f/f_c)) / (b·log10(f/f_c))]⁴ (BSSA 88(1), eq. 4); 0 at f ≤ 0. */
+export function konnoOhmachiWeight(frequencyHz: number, centreHz: number, b = KONNO_OHMACHI_DEFAULT_B) {
   if (frequencyHz <= 0 || centreHz <= 0) return 0;
   const x = b * Math.log10(frequencyHz / centreHz);
   if (x === 0) return 1;
@@ -50,9 +40,8 @@ export function konnoOhmachiWeight(
 const WINDOW_REACH = 4 * Math.PI;
 
 /**
- * Konno–Ohmachi smoothing of an amplitude spectrum: at each centre frequency, the weighted mean
- * Σ W(f_i; f_c)·A_i / Σ W(f_i; f_c) (Konno and Ohmachi 1998, eq. 4). `frequenciesHz` must be
- * ascending (as from `fourierAmplitudeSpectrum`); centres default to the positive input frequencies.
+ * Konno and Ohmachi (1998) smoothing: Σ W(f_i; f_c)·A_i / Σ W(f_i; f_c) at each centre, by default
+ * each positive frequency of `frequenciesHz` (ascending).
  */
 export function konnoOhmachiSmooth(
   frequenciesHz: Float64Array,

@@ -1,9 +1,6 @@
 /**
- * The running integral of `values` sampled at step `dtS`, by the trapezoidal rule, starting from
- * `initial` (0: from rest): out[0] = initial, out[i] = out[i−1] + dtS·(values[i−1] + values[i])/2.
- * Trapezoidal rule (common practice; e.g. Press et al., Numerical Recipes, 3rd ed., §4.1): exact for
- * histories that are linear between samples, which is how quakesweep reads a record. Every running
- * integral of quakesweep (velocity, displacement, the Husid curve) is this one.
+ * Running trapezoidal integral from `initial` (common practice; Press et al., Numerical Recipes, 3rd
+ * ed., §4.1), exact for histories linear between samples; every running integral of quakesweep.
  */
 export function cumulativeTrapezoid(values: Float64Array, dtS: number, initial = 0): Float64Array {
   const out = new Float64Array(values.length);
@@ -21,11 +18,7 @@ export function trapezoid(values: Float64Array, dtS: number): number {
   return (sum * dtS) / 2;
 }
 
-/**
- * The acceleration with the ground velocity, m/s, and displacement, m, by two trapezoidal
- * integrations from rest (v(0) = 0, d(0) = 0; common practice). No baseline is removed here: ask
- * for it in processing, where it is recorded.
- */
+/** Acceleration, velocity, m/s, and displacement, m, from rest; no baseline removed (ask in processing). */
 export function integrateRecord(record: { accelMS2: Float64Array; dtS: number }) {
   const velocityMS = cumulativeTrapezoid(record.accelMS2, record.dtS);
   const displacementM = cumulativeTrapezoid(velocityMS, record.dtS);

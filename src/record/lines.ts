@@ -6,17 +6,14 @@ import { MAX_LINE_CHARACTERS, sniffSeparator } from './separator.js';
 const MAX_MISSES = 16;
 
 /**
- * Splits decoded text into lines (each `\r\n`, `\n` or lone `\r` one break, numbered from 1) and
- * hands them to the reader. Once the reader knows the layout, runs of numeric rows go to its row
- * scanner (RecordReader.rowsFrom), and each line it does not read is split here (lineFields) and
- * given to row(). Holds at most one unfinished line, refused once longer than MAX_LINE_CHARACTERS.
+ * Splits text into lines (at `\r\n`, `\n` or a lone `\r`, from 1): runs of numeric rows go to the
+ * reader's row scanner, other lines to row(); it holds at most one unfinished line.
  */
 export class LineSplitter {
   private readonly reader: RecordReader;
   private readonly skip: number;
-  /** The unfinished line: the text after the last line break so far. */
+  /** The text after the last line break so far. */
   private rest = '';
-  /** Number of the line being read. */
   private line = 1;
   /** The last text ended with `\r`: a `\n` first in the next one is the second half of `\r\n`. */
   private afterCarriageReturn = false;
@@ -41,8 +38,7 @@ export class LineSplitter {
     }
     let lf = text.indexOf('\n', from);
     let cr = text.indexOf('\r', from);
-    // The scanner is offered the text at its first whole line, and again after each line it did
-    // not read; after MAX_MISSES offers in a row that read nothing, no more of this text is offered.
+    // The scanner is offered the text at its first whole line and after each line it did not read.
     let misses = 0;
     let scanned = false;
     while (lf !== -1 || cr !== -1) {
@@ -53,7 +49,6 @@ export class LineSplitter {
           scanned = true;
           this.line += lines;
           from = next;
-          // The next line break after the rows read (found again only when it is behind them).
           if (lf !== -1 && lf < from) lf = text.indexOf('\n', from);
           if (cr !== -1 && cr < from) cr = text.indexOf('\r', from);
           continue;

@@ -12,10 +12,9 @@ export interface Peak {
 
 /** Ground-motion measures of one record (SI units throughout). */
 export interface GroundMotionMeasures {
+  /** Peaks of acceleration, m/s², velocity, m/s, and displacement, m. */
   pga: Peak;
-  /** m/s */
   pgv: Peak;
-  /** m */
   pgd: Peak;
   /** Arias intensity, m/s. */
   ariasMS: number;
@@ -38,25 +37,18 @@ export interface GroundMotionMeasures {
   meanPeriodBandHz: [number, number];
 }
 
-/** Largest |x| and the time of its first occurrence (samples at step dtS from t = 0). */
 function peakOf(values: Float64Array, dtS: number): Peak {
   let index = 0;
   for (let i = 1; i < values.length; i++) if (Math.abs(values[i]) > Math.abs(values[index])) index = i;
   return { value: Math.abs(values[index]), timeS: index * dtS };
 }
 
-/**
- * Arias intensity I_a = π/(2g) ∫ a(t)² dt, m/s (Arias 1970, "A measure of earthquake intensity", in
- * Seismic Design for Nuclear Power Plants, MIT Press), the integral by the trapezoidal rule.
- */
+/** Arias intensity I_a = π/(2g) ∫ a(t)² dt, m/s (Arias 1970, in Seismic Design for Nuclear Power Plants). */
 export function ariasIntensity(accelMS2: Float64Array, dtS: number): number {
   return (Math.PI / (2 * STANDARD_GRAVITY_MS2)) * trapezoid(squares(accelMS2), dtS);
 }
 
-/**
- * The Husid curve H(t) = ∫₀ᵗ a² dτ / ∫₀ᵀ a² dτ, rising from 0 to 1 (Husid 1969), by the
- * trapezoidal rule. A record of zeros gives all zeros.
- */
+/** The Husid curve H(t) = ∫₀ᵗ a² dτ / ∫₀ᵀ a² dτ, 0 to 1 (Husid 1969); all zeros for a record of zeros. */
 export function husidCurve(accelMS2: Float64Array, dtS: number): Float64Array {
   const running = cumulativeTrapezoid(squares(accelMS2), dtS);
   const total = running[running.length - 1];
@@ -65,59 +57,38 @@ export function husidCurve(accelMS2: Float64Array, dtS: number): Float64Array {
 }
 
 /**
- * First time at which a rising curve reaches `level`, linearly interpolated between samples. On
- * the Husid curve, the significant duration between fractions a and b of the Arias intensity is
- * timeToReach(b) − timeToReach(a) (Trifunac and Brady 1975, BSSA 65(3): D5–95; D5–75 as in
- * Abrahamson and Silva 1996).
+ * First time a rising curve reaches `level`, interpolated. On the Husid curve, D5–95 is the time from
+ * 0.05 to 0.95 (Trifunac and Brady 1975, BSSA 65(3); D5–75 as in Abrahamson and Silva 1996).
  */
 export function timeToReach(curve: Float64Array, dtS: number, level: number): number {
-  for (let i = 0; i < curve.length; i++) {
-    if (curve[i] >= level) {
-      if (i === 0) return 0;
-      const rise = curve[i] - curve[i - 1];
-      return (i - 1 + (rise > 0 ? (level - curve[i - 1]) / rise : 1)) * dtS;
-    }
-  }
-  return (curve.length - 1) * dtS;
+  const i = curve.findIndex((h) => h >= level);
+  if (i === -1) return (curve.length - 1) * dtS;
+  if (i === 0) return 0;
+  const rise = curve[i] - curve[i - 1];
+  return (i - 1 + (rise > 0 ? (level - curve[i - 1]) / rise : 1)) * dtS;
 }
 
-/**
- * Bracketed duration: time from the first to the last sample with |a| ≥ threshold (Bolt 1973,
- * "Duration of strong ground motion", Proc. 5th WCEE), 0 if the threshold is never reached.
- */
+/** Bracketed duration: first to last sample with |a| ≥ threshold, or 0 (Bolt 1973, Proc. 5th WCEE). */
 export function bracketedDuration(accelMS2: Float64Array, dtS: number, thresholdMS2: number) {
-  if (!Number.isFinite(thresholdMS2) || thresholdMS2 <= 0) {
+  if (!Number.isFinite(thresholdMS2) || thresholdMS2 <= 0)
     throw usageError(`the bracketed-duration threshold must be positive, got ${thresholdMS2} m/s²`);
-  }
-  let first = -1;
-  let last = -1;
-  for (let i = 0; i < accelMS2.length; i++) {
-    if (Math.abs(accelMS2[i]) >= thresholdMS2) {
-      if (first < 0) first = i;
-      last = i;
-    }
-  }
+  const first = accelMS2.findIndex((a) => Math.abs(a) >= thresholdMS2);
   if (first < 0) return { durationS: 0, startS: null, endS: null };
+  let last = accelMS2.length - 1;
+  while (!(Math.abs(accelMS2[last]) >= thresholdMS2)) last--;
   return { durationS: (last - first) * dtS, startS: first * dtS, endS: last * dtS };
 }
 
-/**
- * Cumulative absolute velocity CAV = ∫|a(t)| dt, m/s (EPRI 1988, NP-5930; without the 0.025 g
- * window screening of later versions), by the trapezoidal rule on |a|.
- */
+/** CAV = ∫|a(t)| dt, m/s (EPRI 1988, NP-5930; without the 0.025 g screening of later versions). */
 export function cumulativeAbsoluteVelocity(accelMS2: Float64Array, dtS: number): number {
   return trapezoid(accelMS2.map(Math.abs), dtS);
 }
 
 /**
- * Mean period T_m = Σ (C_i²/f_i) / Σ C_i² over the Fourier amplitudes C_i at the discrete
- * frequencies 0.25 ≤ f_i ≤ 20 Hz (Rathje, Abrahamson and Bray 1998, J. Geotech. Geoenv. Eng.
- * 124(2), eq. 3). The upper limit is cut to the Nyquist frequency for coarse steps.
+ * Mean period T_m = Σ (C_i²/f_i) / Σ C_i² over the Fourier amplitudes at 0.25 ≤ f_i ≤ 20 Hz, 20 Hz
+ * cut to the Nyquist (Rathje, Abrahamson and Bray 1998, J. Geotech. Geoenv. Eng. 124(2), eq. 3).
  */
-export function meanPeriod(
-  accelMS2: Float64Array,
-  dtS: number,
-): { periodS: number | null; bandHz: [number, number] } {
+export function meanPeriod(accelMS2: Float64Array, dtS: number) {
   const { frequenciesHz, amplitudeMS } = fourierAmplitudeSpectrum(accelMS2, dtS);
   const bandHz: [number, number] = [0.25, Math.min(20, 1 / (2 * dtS))];
   let numerator = 0;
@@ -132,10 +103,7 @@ export function meanPeriod(
   return { periodS: denominator > 0 ? numerator / denominator : null, bandHz };
 }
 
-/**
- * All the measures of a record; velocity and displacement by trapezoidal integration from rest.
- * `bracketThresholdMS2`: the threshold of the bracketed duration, m/s²; default 0.05 g.
- */
+/** All the measures of a record; `bracketThresholdMS2`, m/s², defaults to 0.05 g. */
 export function groundMotionMeasures(
   record: GroundRecord,
   options: { bracketThresholdMS2?: number } = {},

@@ -5,10 +5,8 @@ const FORTRAN_EXPONENT = /[dD]/;
 export const DECIMAL_COMMA = /^[+-]?(\d+,\d*|,\d+)([eEdD][+-]?\d+)?$/;
 
 /**
- * A number as NUMBER has it, with the value Number() gives (ECMAScript's correctly rounded
- * decimal conversion), Fortran exponents (1.5D-03) included; NaN for anything else, NaN and
- * ±Infinity included. The row scanner (assembly/rows.ts) gives the same values for the short
- * decimals it reads.
+ * NUMBER's finite numbers (1.5D-03 too) valued as Number() does, and as assembly/rows.ts does the
+ * short decimals it reads; NaN for anything else.
  */
 export function parseNumber(text: string): number {
   if (!NUMBER.test(text)) return Number.NaN;

@@ -4,9 +4,7 @@ import { type GroundRecord, withProcessing } from './record.js';
 import { ANTI_ALIAS_ORDER, LANCZOS_LOBES, resampleHistory } from './resample.js';
 import { cosineTaper } from './taper.js';
 
-export type { FilterKind, FilterSpec } from './filter.js';
-
-/** What to do to a record. Every field is optional: nothing is done unless asked. */
+/** What to do to a record: nothing unless asked. */
 export interface ProcessingPlan {
   /** Order of the least-squares polynomial removed from the acceleration: 0 (mean) to 3. */
   baselineOrder?: number;
@@ -21,10 +19,8 @@ export interface ProcessingPlan {
 export const PROCESSING_ORDER = ['baseline', 'taper', 'filter', 'resample'] as const;
 
 /**
- * Apply a plan in the fixed order baseline → taper → filter → resample, each step recorded on the
- * record's processing list. The baseline comes first so the taper and filter see a centred record;
- * the taper before the filter so the ends start the filter from near zero; resampling last so the
- * filter works on the samples as recorded.
+ * Apply a plan in PROCESSING_ORDER, each step recorded: the baseline first to centre the record, the
+ * taper so the filter starts near zero, resampling last so the filter sees the samples as recorded.
  */
 export function applyProcessingPlan(record: GroundRecord, plan: ProcessingPlan): GroundRecord {
   let out = record;

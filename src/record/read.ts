@@ -7,9 +7,8 @@ import { RowScanner } from './rows.js';
 import { LINE_BREAK, MAX_LINE_CHARACTERS } from './separator.js';
 
 /**
- * How the values are laid out in the file. `single`: one acceleration value a line. `table`: time
- * in column 1 and one or more value columns. `wrapped`: values several to a line, read in row
- * order. `auto` tells single from table by the number of columns of the first data row.
+ * `single`: one value a line. `table`: time in column 1, then value columns. `wrapped`: values
+ * several to a line, in row order. `auto`: single or table by the columns of the first data row.
  */
 export type RecordLayout = 'auto' | 'single' | 'table' | 'wrapped';
 
@@ -29,10 +28,7 @@ export interface ReadOptions {
   source: string;
 }
 
-/**
- * Read a record from text already in memory (tests and the library API). `scanner`, not part of
- * the library API: null to read every row with the TypeScript reader (the tests compare the two).
- */
+/** Read a record from text in memory. `scanner` (for the tests): null to read without the scanner. */
 export function readRecordText(
   text: string,
   options: ReadOptions,
@@ -48,17 +44,11 @@ const SNIFF_BYTES = 64 * 1024;
 const SNIFF_LINES = 100;
 
 /**
- * Read a record from a stream of text or bytes (a file, standard input): UTF-8, or UTF-16LE when
- * it begins with the bytes FF FE. The first 64 KiB, and at least 100 lines past --skip, choose
- * the separator (lone `\r` line ends count as lines, and the look stops early at a line too long
- * to be read, so it never holds the whole of a file). Then the decoded text goes to the line
- * splitter chunk by chunk, so memory holds the samples, one chunk of text and at most one
- * unfinished line, never a list of lines.
+ * Read a record from a stream of text or bytes (UTF-8, or UTF-16LE after FF FE). The head chooses
+ * the separator, stopping early at a line too long to read; then the text goes to the line splitter
+ * chunk by chunk, so memory holds the samples, one chunk and at most one unfinished line.
  */
-export async function readRecordStream(
-  input: AsyncIterable<string | Uint8Array>,
-  options: ReadOptions,
-): Promise<GroundRecord> {
+export async function readRecordStream(input: AsyncIterable<string | Uint8Array>, options: ReadOptions) {
   const reader = new RecordReader(options, RowScanner.get());
   const chunks = input[Symbol.asyncIterator]();
   const decoder = new StreamText();
@@ -99,12 +89,7 @@ export async function readRecordStream(
   return reader.finish();
 }
 
-/**
- * The text of a stream of chunks: strings as they are, bytes as UTF-8, or as UTF-16LE when the
- * stream's first bytes are FF FE. The byte-order mark is kept (the line splitter removes the one
- * at the start). While every byte so far is ASCII, as in most records, a UTF-8 chunk is copied
- * as Latin-1, which gives the same characters and is much faster to make.
- */
+/** Chunks as text, the byte-order mark kept; bytes are read as Latin-1 (faster) while all are ASCII. */
 class StreamText {
   private decoder: TextDecoder | undefined;
   private ascii = true;
@@ -131,8 +116,7 @@ class StreamText {
     if (this.decoder === undefined) this.choose(false);
     const held = Buffer.concat(this.held);
     this.held = [];
-    const decoder = this.decoder as TextDecoder;
-    return held.length > 0 ? decoder.decode(held) : decoder.decode();
+    return (this.decoder as TextDecoder).decode(held);
   }
 
   private choose(utf16: boolean): void {
@@ -141,24 +125,16 @@ class StreamText {
   }
 }
 
-/**
- * Text as the reader takes it: a lone surrogate in a string becomes U+FFFD, the replacement
- * character, as it does when the string is written as UTF-8 and read back.
- */
+/** A lone surrogate becomes U+FFFD, as when the string is written as UTF-8 and read back. */
 function wellFormed(text: string): string {
   return (text as unknown as { toWellFormed(): string }).toWellFormed();
 }
 
-/**
- * Warnings (not errors) when the peak read looks like the wrong unit: a PGA above 5 g or below
- * 0.0001 g (common practice: recorded PGAs lie well inside this range). Returned as data; the CLI
- * prints them.
- */
+/** Warnings when a PGA above 5 g or below 0.0001 g suggests the wrong unit (common practice). */
 export function unitWarnings(record: GroundRecord): string[] {
   const pgaMS2 = record.pgaMS2;
   const pgaG = pgaMS2 / STANDARD_GRAVITY_MS2;
-  // The bounds are compared with a part in 10¹² to spare, so a PGA of exactly 5 g or 0.0001 g
-  // that went through the unit factor is not warned about.
+  // A part in 10¹² to spare, so exactly 5 g or 0.0001 g through the unit factor is not warned about.
   if (pgaG <= 5 * (1 + 1e-12) && pgaG >= 1e-4 * (1 - 1e-12)) return [];
   const readFactor = ACCELERATION_UNITS[record.unitsRead];
   const alternatives: string[] = [];

@@ -8,9 +8,8 @@ import type { RowScanner } from './rows.js';
 import type { Separator } from './separator.js';
 
 /**
- * Largest acceleration sample accepted, 10⁶ g (common practice: recorded PGAs stay below about
- * 5 g, and even a record in mm/s² read as g stays below 10⁵ g). Beyond it the value is not a
- * ground motion in any unit, and squares and sweeps of it could overflow to Infinity.
+ * Largest sample accepted, 10⁶ g (common practice: recorded PGAs stay below about 5 g, even mm/s²
+ * read as g below 10⁵ g): beyond it no unit makes it a ground motion, and its squares could overflow.
  */
 const MAX_ABS_ACCELERATION_G = 1e6;
 const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
@@ -21,10 +20,7 @@ const LETTER = /\p{L}/u;
 // biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is the point
 const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
 
-/**
- * Takes the rows of a record one at a time (their fields, or runs of numeric rows that the row
- * scanner reads at once) and keeps the samples, in m/s², in a Float64Array grown by doubling.
- */
+/** Takes a record's rows, one by one or in scanned runs, and keeps the samples, m/s², in a growing array. */
 export class RecordReader {
   /** The file's separator, chosen from its first lines before any row is taken. */
   separator: Separator = ',';
@@ -63,11 +59,7 @@ export class RecordReader {
       throw usageError(`--column must be a whole number ≥ 1, got ${options.column}`);
   }
 
-  /**
-   * The rows of `text` from `from` (the start of a line) on that the row scanner reads (rows.ts:
-   * exactly those row() would take without a word), up to the line that row() must read: where
-   * it stopped and how many lines it read.
-   */
+  /** Rows from `from` (a line's start) read by the scanner, which takes exactly those row() would. */
   rowsFrom(text: string, from: number): { next: number; lines: number } {
     const scanner = this.scanner as RowScanner;
     let next = from;
@@ -100,7 +92,6 @@ export class RecordReader {
     this.scanner?.release();
   }
 
-  /** One row's fields. */
   row(rawFields: string[], line: number): void {
     const fields = this.separator === 'whitespace' ? rawFields.filter((f) => f !== '') : rawFields;
     if (fields.length === 0 || (fields.length === 1 && fields[0] === '')) return;
@@ -122,12 +113,8 @@ export class RecordReader {
       if (i === 0 || i === this.valueColumn - 1) continue;
       this.number(fields[i], line, i + 1); // columns not used must still be numbers
     }
-    if (this.columns === 1) {
-      this.add(this.number(fields[0], line, 1), line);
-    } else {
-      this.time(this.number(fields[0], line, 1), fields[0], line);
-      this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn), line);
-    }
+    if (this.columns > 1) this.time(this.number(fields[0], line, 1), fields[0], line);
+    this.add(this.number(fields[this.valueColumn - 1], line, this.valueColumn), line);
     this.lastDataLine = line;
   }
 
@@ -159,17 +146,14 @@ export class RecordReader {
   /** Check that the time column advances by one uniform step. */
   private time(timeS: number, text: string, line: number): void {
     const i = this.count;
-    if (i > 0 && !(timeS > this.timePreviousS)) {
+    if (i > 0 && !(timeS > this.timePreviousS))
       throw this.error(`time does not increase: ${text} s after ${this.timePreviousS} s`, line);
-    }
     if (i >= 2) {
-      // Times are printed to a few decimals: allow a step one last printed digit off the mean,
-      // but never half a step, which is a real change whatever the rounding.
+      // Allow a step one last printed digit off the mean, but never half a step.
       const meanStepS = (this.timePreviousS - this.timeFirstS) / (i - 1);
       const stepS = timeS - this.timePreviousS;
       const offS = Math.abs(stepS - meanStepS);
-      // Within the last term of the tolerance the step is uniform whatever the first two (both
-      // are ≥ 0); most steps are, and the printed resolution need not be worked out for them.
+      // The first test spares working out the printed resolution for most steps.
       const uniform =
         offS <= 1e-6 * meanStepS ||
         offS <= Math.min(printedResolution(text) * 1.01, 0.5 * meanStepS) + 1e-6 * meanStepS;
@@ -262,7 +246,6 @@ export class RecordReader {
         });
       dtS = columnDtS;
     }
-    // The samples are in m/s² already: every row stored its value times the unit's factor.
     return createRecord({
       name: o.name ?? (o.source === '-' ? 'stdin' : recordName(o.source)),
       source: o.source,

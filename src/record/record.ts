@@ -11,10 +11,7 @@ export interface ProcessingStep {
   parameters: { [name: string]: number | string | boolean | null };
 }
 
-/**
- * A ground-acceleration record. (Named GroundRecord rather than Record so that it does not shadow
- * TypeScript's own `Record` type.) Acceleration is always m/s² inside the program.
- */
+/** A ground-acceleration record (not `Record`, TypeScript's own type); always m/s² inside the program. */
 export interface GroundRecord {
   /** A name for people: the file's base name unless given. */
   readonly name: string;
@@ -24,11 +21,11 @@ export interface GroundRecord {
   readonly dtS: number;
   /** Ground acceleration samples, m/s², at t = 0, dtS, 2 dtS, … */
   readonly accelMS2: Float64Array;
-  /** The unit the values were given in (for warnings and reports). */
+  /** The unit the values were given in. */
   readonly unitsRead: AccelerationUnit;
   /** What has been done to the record since it was read, in order. */
   readonly processing: readonly ProcessingStep[];
-  /** Peak |ground acceleration| of the samples, m/s² (taken by createRecord). */
+  /** Peak |ground acceleration|, m/s². */
   readonly pgaMS2: number;
 }
 
@@ -40,12 +37,10 @@ export type RecordFields = Pick<GroundRecord, 'name' | 'dtS' | 'accelMS2'> &
 export function createRecord(fields: RecordFields): GroundRecord {
   const { name, dtS, accelMS2 } = fields;
   const source = fields.source ?? name;
-  if (!Number.isFinite(dtS) || dtS <= 0) {
+  if (!Number.isFinite(dtS) || dtS <= 0)
     throw inputError(`the time step must be a positive number of seconds, got ${dtS}`, { file: source });
-  }
-  if (accelMS2.length < 2) {
+  if (accelMS2.length < 2)
     throw inputError(`a record needs at least 2 samples, got ${accelMS2.length}`, { file: source });
-  }
   const pgaMS2 = peakGroundAcceleration(fields);
   if (!Number.isFinite(pgaMS2)) {
     const i = accelMS2.findIndex((a) => !Number.isFinite(a));
@@ -72,10 +67,7 @@ export function withProcessing(
   return createRecord({ ...record, accelMS2, dtS, processing: [...record.processing, step] });
 }
 
-/**
- * Peak absolute ground acceleration, m/s² (a GroundRecord carries it as `pgaMS2`); NaN or
- * Infinity when a sample is not finite.
- */
+/** Peak absolute ground acceleration, m/s²; NaN or Infinity when a sample is not finite. */
 export function peakGroundAcceleration(record: Pick<GroundRecord, 'accelMS2'>): number {
   const a = record.accelMS2;
   let peak = 0;

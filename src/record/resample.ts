@@ -9,34 +9,22 @@ export const ANTI_ALIAS_ORDER = 8;
 const ANTI_ALIAS_FRACTION = 0.8;
 
 /**
- * Resample a history from step `dtS` to step `newDtS` over the same duration (the new record has
- * floor(duration/newDtS) + 1 samples from t = 0). Band-limited interpolation with a
- * Lanczos-windowed sinc kernel of 8 lobes each side, weights normalised to sum to 1 (Duchon 1979,
- * "Lanczos filtering in one and two dimensions", J. Appl. Meteorology 18; Smith and Gossett 1984
- * for band-limited interpolation). For a coarser step the history is first low-passed by a
- * zero-phase Butterworth of order 8 at 0.8 × the new Nyquist frequency (−6 dB there, about −31 dB
- * at the new Nyquist), so content above the new Nyquist cannot fold back (anti-aliasing).
- * `antiAliasHz`: that corner, null when the step became finer (no filter needed).
+ * Resample to step `newDtS` over the same duration by a Lanczos-windowed sinc, weights summing to 1
+ * (Duchon 1979, J. Appl. Meteorology 18; Smith and Gossett 1984). A coarser step is low-passed first
+ * (−6 dB at `antiAliasHz`, about −31 dB at the new Nyquist; null for a finer step).
  */
 export function resampleHistory(values: Float64Array, dtS: number, newDtS: number) {
-  if (!Number.isFinite(newDtS) || newDtS <= 0) {
+  if (!Number.isFinite(newDtS) || newDtS <= 0)
     throw usageError(`the resampling step must be a positive number of seconds, got ${newDtS}`);
-  }
   const durationS = (values.length - 1) * dtS;
   const count = Math.floor(durationS / newDtS + 1e-9) + 1;
-  if (count < 2) {
+  if (count < 2)
     throw usageError(`a resampling step of ${newDtS} s leaves fewer than 2 samples in ${durationS} s`);
-  }
-  let source = values;
-  let antiAliasHz: number | null = null;
-  if (newDtS > dtS) {
-    antiAliasHz = ANTI_ALIAS_FRACTION / (2 * newDtS);
-    source = zeroPhaseFilter(values, dtS, {
-      kind: 'lowpass',
-      order: ANTI_ALIAS_ORDER,
-      highCornerHz: antiAliasHz,
-    });
-  }
+  const antiAliasHz = newDtS > dtS ? ANTI_ALIAS_FRACTION / (2 * newDtS) : null;
+  const source =
+    antiAliasHz === null
+      ? values
+      : zeroPhaseFilter(values, dtS, { kind: 'lowpass', order: ANTI_ALIAS_ORDER, highCornerHz: antiAliasHz });
   const out = new Float64Array(count);
   const a = LANCZOS_LOBES;
   for (let j = 0; j < count; j++) {

@@ -20,10 +20,9 @@ export interface RowLayout {
 }
 
 /**
- * The record reader's fast path for runs of numeric rows (assembly/rows.ts): a fresh process
- * reads them at full speed from the first line, where TypeScript runs unoptimized for the first
- * tens of thousands. One instance per thread, made on first use; null where the engine has
- * no WebAssembly (the reader then reads every row itself).
+ * The reader's fast path for runs of numeric rows (assembly/rows.ts), at full speed from the first
+ * line, where TypeScript runs unoptimized for tens of thousands. One per thread, made on first use;
+ * null without WebAssembly.
  */
 export class RowScanner {
   private static instance: RowScanner | null | undefined;
@@ -65,12 +64,9 @@ export class RowScanner {
   }
 
   /**
-   * Read the rows of `source` from character `from` on, while its lines are rows the scanner
-   * reads: up to `next`, `lines` lines, their values in `values` (a view of its memory, valid
-   * until the next scan). Unless `from` lies in the text laid out already, up to TEXT_BYTES
-   * characters from `from` are laid out first, so a text is copied once however often it is
-   * offered. `refused`: it stopped before a line it does not read, rather than at the end of
-   * what is laid out (which is then laid out anew from `next` at the next scan).
+   * Read the rows of `source` from `from` up to `next`: `lines` lines, `values` a view of memory
+   * valid until the next scan. The text is laid out from `from` only when `from` lies outside what
+   * is laid out already. `refused`: it stopped before a line it does not read, not at the end.
    */
   scan(source: string, from: number, layout: RowLayout) {
     if (source !== this.laid || from < this.laidFrom || from >= this.laidFrom + this.laidLength)
@@ -109,10 +105,7 @@ export class RowScanner {
     this.laid = undefined;
   }
 
-  /**
-   * Lay out source[from, from + TEXT_BYTES) one byte a character, so that offsets in memory are
-   * offsets in the text: ASCII as itself, any other character as 0x80, which the scanner refuses.
-   */
+  /** Lay out one byte a character, so memory offsets are text offsets; non-ASCII as 0x80, refused. */
   private layOut(source: string, from: number): void {
     const piece = source.slice(from, from + TEXT_BYTES);
     const bytes = Buffer.from(this.memory.buffer, this.text, TEXT_BYTES);

@@ -1,19 +1,14 @@
 /** How the fields of a line are separated; `whitespace` is runs of spaces and tabs. */
 export type Separator = ',' | ';' | 'whitespace';
 
-/** A line break: `\r\n`, `\n` or a lone `\r`. */
 export const LINE_BREAK = /\r\n|\n|\r/;
 
 /** Longest line read, in characters as it stands; a longer one is refused where it is. */
 export const MAX_LINE_CHARACTERS = 1_000_000;
 
 /**
- * Choose the separator from the first line that holds only numbers and separators (so a header
- * written in words cannot mislead it): a semicolon if it has one, else tabs and spaces if it
- * has a tab, else a comma, else runs of spaces. When `partial`, the text is cut mid-stream and
- * its last line is not looked at. The look stops before a line longer than MAX_LINE_CHARACTERS,
- * which is refused where it stands (a stream's head stops there too). `text` starts after the
- * byte-order mark, if any.
+ * The separator of the first line of only numbers and separators (so a header cannot mislead it);
+ * `partial`: the text is cut mid-stream, its last line unread. It stops before a line too long to read.
  */
 export function sniffSeparator(text: string, skip: number, partial = false): Separator {
   let lines = text.split(LINE_BREAK, skip + 2000);

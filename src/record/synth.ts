@@ -7,9 +7,8 @@ import { createRecord, type GroundRecord } from './record.js';
 export interface SynthOptions {
   /** Seed of the random number generator; the same seed gives the same record, bit for bit. */
   seed: number;
-  /** Time step, s. Default 0.01. */
+  /** Time step and duration, s (defaults 0.01 and 30). */
   dtS?: number;
-  /** Duration, s. Default 30. */
   durationS?: number;
   /** Target peak ground acceleration, g; the record is scaled to it exactly. Default 0.3. */
   pgaG?: number;
@@ -21,10 +20,7 @@ export interface SynthOptions {
   name?: string;
 }
 
-/**
- * Mulberry32, a small seeded 32-bit generator (Tommy Ettinger, public domain, 2017): reproducible
- * across platforms because it uses only 32-bit integer arithmetic.
- */
+/** Mulberry32 (Tommy Ettinger 2017, public domain): 32-bit integer arithmetic only, so reproducible. */
 export function seededUniform(seed: number): () => number {
   let state = seed >>> 0;
   return () => {
@@ -39,31 +35,26 @@ export function seededUniform(seed: number): () => number {
 /** Standard normal variates by the Box–Muller transform (Box and Muller 1958). */
 export function seededNormal(seed: number): () => number {
   const uniform = seededUniform(seed);
-  let spare: number | undefined;
+  const pair: number[] = [];
   return () => {
-    if (spare !== undefined) {
-      const value = spare;
-      spare = undefined;
-      return value;
+    if (pair.length === 0) {
+      let u = 0;
+      while (u === 0) u = uniform();
+      const v = uniform();
+      const radius = Math.sqrt(-2 * Math.log(u));
+      pair.push(radius * Math.sin(2 * Math.PI * v), radius * Math.cos(2 * Math.PI * v));
     }
-    let u = 0;
-    while (u === 0) u = uniform();
-    const v = uniform();
-    const radius = Math.sqrt(-2 * Math.log(u));
-    spare = radius * Math.sin(2 * Math.PI * v);
-    return radius * Math.cos(2 * Math.PI * v);
+    return pair.pop() as number;
   };
 }
 
 /**
- * A synthetic ground-acceleration record: Gaussian white noise passed through the Kanai–Tajimi
- * filter (Kanai 1957; Tajimi 1960) and the Clough–Penzien high-pass filter (Clough and Penzien,
- * Dynamics of Structures, 1975), multiplied by the Jennings–Housner–Tsai (1968) intensity envelope
- * and scaled to the target PGA. The envelope rises as (t/t1)² to t1 = 0.1·T, stays at 1 to
- * t2 = 0.45·T and decays as exp(−(6/T)(t − t2)), T the duration. Each filter is a damped
- * oscillator stepped exactly (piecewise-exact recurrence), so the filters' outputs are
+ * A synthetic record: Gaussian white noise through the Kanai–Tajimi filter (Kanai 1957; Tajimi
+ * 1960) and the Clough–Penzien high-pass (Clough and Penzien, Dynamics of Structures, 1975), times
+ * the Jennings–Housner–Tsai (1968) envelope ((t/t1)² to t1 = 0.1·T, 1 to t2 = 0.45·T, then
+ * exp(−(6/T)(t − t2)), T the duration), scaled to the target PGA; oscillators stepped exactly:
  *   a_KT = −(2ζ_gω_g ẋ_g + ω_g² x_g) with ẍ_g + 2ζ_gω_g ẋ_g + ω_g² x_g = −w(t), and
- *   a = ẍ_f with ẍ_f + 2ζ_fω_f ẋ_f + ω_f² x_f = a_KT (the high-pass removes long-period drift).
+ *   a = ẍ_f with ẍ_f + 2ζ_fω_f ẋ_f + ω_f² x_f = a_KT (removing long-period drift).
  * For demo and test data only: it is not a hazard-consistent ground motion.
  */
 export function synthesizeRecord(options: SynthOptions): GroundRecord {
@@ -87,8 +78,7 @@ export function synthesizeRecord(options: SynthOptions): GroundRecord {
   if (n > 50_000_000) throw usageError(`synth: ${n} samples is too many`);
 
   const normal = seededNormal(options.seed);
-  // White noise of unit spectral density sampled at dt has variance 1/dt; the level does not
-  // matter because the record is scaled to its PGA at the end.
+  // Unit variance rather than 1/dt: the level does not matter, the record is scaled to its PGA.
   let noisePrevious = normal();
   const wg = 2 * Math.PI * fg;
   const kt = stepCoefficients('piecewise-exact', wg, zg, dtS);

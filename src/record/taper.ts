@@ -1,10 +1,8 @@
 import { usageError } from '../base/errors.js';
 
 /**
- * Multiply the first and last `fraction` of the samples by a half-cosine ramp from 0 to 1 (a
- * cosine-tapered or Tukey window; Tukey 1967, Harris 1978 "On the use of windows for harmonic
- * analysis with the discrete Fourier transform", Proc. IEEE 66(1), §V.B). `fraction` is the share
- * of the record tapered at each end, 0 ≤ fraction ≤ 0.5; the middle is left untouched.
+ * Ramp the first and last `fraction` (0 to 0.5) of the samples up from 0 by a half cosine (Tukey
+ * window; Tukey 1967, Harris 1978, Proc. IEEE 66(1), §V.B); the middle is left untouched.
  */
 export function cosineTaper(values: Float64Array, fraction: number): Float64Array {
   if (!Number.isFinite(fraction) || fraction < 0 || fraction > 0.5) {
