@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -48,6 +48,21 @@ describe('designFromOptions', () => {
     expect(() => designFromOptions({ code: 'asce7-22', multiPeriod: join(folder, 'bad.csv') })).toThrow(
       'periods must increase: 0.1 s follows 0.2 s',
     );
+  });
+
+  it('reads the invented demo table records/site-multiperiod-7-22.csv, which says it is invented', () => {
+    const file = 'records/site-multiperiod-7-22.csv';
+    expect(readFileSync(file, 'utf8').split('\n')[0]).toMatch(/^# Invented/);
+    const spectrum = designFromOptions({ code: 'asce7-22', multiPeriod: file });
+    expect([spectrum.minPeriodS, spectrum.maxPeriodS]).toEqual([0, 10]);
+    const rows = spectrum.tabulatedPeriodsS ?? new Float64Array();
+    expect(rows.length).toBeGreaterThanOrEqual(20);
+    // A plausible shape (common practice): rising from T = 0 to a peak between 0.1 and 0.5 s, then falling.
+    const values = Array.from(rows, (t) => spectrum.psaG(t));
+    const peak = values.indexOf(Math.max(...values));
+    expect(rows[peak]).toBeGreaterThan(0.1);
+    expect(rows[peak]).toBeLessThan(0.5);
+    for (let i = peak + 1; i < values.length; i++) expect(values[i]).toBeLessThan(values[i - 1]);
   });
 
   it.each([
