@@ -119,8 +119,12 @@ export function codeSpectrum(
   };
   if (code === 'asce7-16')
     return asce716Spectrum({ sdsG: number('sds'), sd1G: number('sd1'), tlS: number('tl') });
-  if (code === 'asce7-22')
+  if (code === 'asce7-22') {
+    // The multi-period form names a file, which only the caller reads (codeTarget).
+    if (fields['multi-period'] !== undefined)
+      throw usageError(`${label('multi-period')} names a file: use codeTarget`);
     return asce722TwoPeriodSpectrum({ sdsG: number('sds'), sd1G: number('sd1'), tlS: number('tl') });
+  }
   return ec8Spectrum({
     type: parseEc8Type(text('type')),
     ground: parseEc8Ground(text('ground')),

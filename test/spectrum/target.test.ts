@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { asce716Spectrum } from '../../src/spectrum/design.js';
 import type { Spectrum } from '../../src/spectrum/spectrum.js';
-import { fitTarget, parseTargetSpec } from '../../src/spectrum/target.js';
+import { codeSpectrum, fitTarget, parseTargetSpec } from '../../src/spectrum/target.js';
 
 describe('parseTargetSpec', () => {
   it('reads an ASCE 7-16 target', () => {
@@ -48,6 +48,7 @@ describe('parseTargetSpec', () => {
       "unknown key 'damping'; accepted: sds, sd1, tl, multi-period",
     );
     expect(() => parseTargetSpec('asce7-16:multi-period=mp.csv')).toThrow(/unknown key 'multi-period'/);
+    expect(() => codeSpectrum('asce7-22', { 'multi-period': 'mp.csv' }, (key) => key)).toThrow(/use codeTarget/);
   });
 
   it('takes anything else as a table path', () => {
