@@ -48,7 +48,9 @@ describe('parseTargetSpec', () => {
       "unknown key 'damping'; accepted: sds, sd1, tl, multi-period",
     );
     expect(() => parseTargetSpec('asce7-16:multi-period=mp.csv')).toThrow(/unknown key 'multi-period'/);
-    expect(() => codeSpectrum('asce7-22', { 'multi-period': 'mp.csv' }, (key) => key)).toThrow(/use codeTarget/);
+    expect(() => codeSpectrum('asce7-22', { 'multi-period': 'mp.csv' }, (key) => key)).toThrow(
+      /use codeTarget/,
+    );
   });
 
   it('takes anything else as a table path', () => {
