@@ -49,6 +49,7 @@ export {
 export { type SynthOptions, synthesizeRecord } from './record/synth.js';
 export { assembleReport, type ReportRequest } from './report/assemble.js';
 export { type ReportInput, renderReport } from './report/report.js';
+export { asce722MultiPeriodSpectrum, asce722TwoPeriodSpectrum } from './spectrum/asce722.js';
 export { compareDamping, newmarkHallFactors } from './spectrum/damping.js';
 export {
   asce716Spectrum,

@@ -5,6 +5,7 @@ import { formatValue, percentLabel, zeroPeriodNotes } from './text.js';
 
 const CODE_LABELS: Readonly<Record<DesignSpectrum['code'], string>> = {
   'asce7-16': 'ASCE/SEI 7-16 design spectrum',
+  'asce7-22': 'ASCE/SEI 7-22 design spectrum',
   ec8: 'Eurocode 8 elastic spectrum',
   table: 'tabulated design spectrum',
 };
@@ -36,7 +37,7 @@ export function designFigure(input: DesignFigureInput): string {
     y: { title: 'Pseudo-acceleration PSA (g)' },
     series: [
       {
-        label: CODE_LABELS[spectrum.code],
+        label: seriesLabel(spectrum),
         x: drawn.periodsS,
         y: drawn.psaG,
         style: overlayStyle(0),
@@ -46,14 +47,21 @@ export function designFigure(input: DesignFigureInput): string {
   });
 }
 
+/** The legend's name of the curve: the code's, with the ASCE 7-22 form. */
+function seriesLabel(spectrum: DesignSpectrum): string {
+  const form = spectrum.code === 'asce7-22' ? spectrum.parameters.form : undefined;
+  return form === undefined ? CODE_LABELS[spectrum.code] : `ASCE/SEI 7-22 ${form} design spectrum`;
+}
+
 /**
  * The curve to draw: a code spectrum is a function, so it is drawn at the periods asked for plus
- * 400 log-spaced ones over the same range, which keeps its corners sharp; a table is drawn as given.
+ * 400 log-spaced ones over the same range, which keeps its corners sharp; a table (and the ASCE
+ * 7-22 multi-period table) is drawn as given.
  */
 function densified(input: DesignFigureInput): { periodsS: number[]; psaG: number[] } {
   const given = Array.from(input.periodsS);
   const positive = given.filter((t) => t > 0);
-  if (input.spectrum.code === 'table' || positive.length < 2) {
+  if (input.spectrum.tabulatedPeriodsS !== undefined || positive.length < 2) {
     return { periodsS: given, psaG: Array.from(input.psaG) };
   }
   const low = Math.min(...positive);

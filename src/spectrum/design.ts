@@ -5,8 +5,8 @@ import { inputError, usageError } from '../base/errors.js';
  * periods where it is defined. Evaluating it outside [minPeriodS, maxPeriodS] is an error.
  */
 export interface DesignSpectrum {
-  /** Where it comes from. */
-  code: 'asce7-16' | 'ec8' | 'table';
+  /** Where it comes from (an ASCE 7-22 spectrum states its form in `parameters.form`). */
+  code: 'asce7-16' | 'asce7-22' | 'ec8' | 'table';
   /** One line for a reviewer: the standard, clause and parameters. */
   description: string;
   /** The defining parameters (g, s, fractions), as written to outputs. */
@@ -44,23 +44,43 @@ export interface Asce716Parameters {
  */
 export function asce716Spectrum(parameters: Asce716Parameters): DesignSpectrum {
   const { sdsG, sd1G, tlS } = parameters;
+  const shape = asceTwoPeriodShape(parameters, 'ASCE 7-16');
+  return {
+    code: 'asce7-16',
+    description: `ASCE/SEI 7-16 §11.4.6 design spectrum, 5% damping: S_DS = ${sdsG} g, S_D1 = ${sd1G} g, T_L = ${tlS} s (T0 = ${round(shape.t0S)} s, TS = ${round(shape.tsS)} s)`,
+    parameters: { sds_g: sdsG, sd1_g: sd1G, tl_s: tlS, t0_s: shape.t0S, ts_s: shape.tsS },
+    damping: 0.05,
+    minPeriodS: 0,
+    maxPeriodS: Number.POSITIVE_INFINITY,
+    psaG(periodS: number): number {
+      checkPeriod(this, periodS);
+      return shape.psaG(periodS);
+    },
+  };
+}
+
+/**
+ * The shape of Figure 11.4-1, shared by ASCE/SEI 7-16 §11.4.6 and the two-period spectrum of
+ * ASCE/SEI 7-22 §11.4.5.2 (the equations above): the corner periods and S_a(T) in g, without the
+ * range check. `edition` names the standard in the messages.
+ */
+export function asceTwoPeriodShape(
+  parameters: Asce716Parameters,
+  edition: string,
+): { t0S: number; tsS: number; psaG(periodS: number): number } {
+  const { sdsG, sd1G, tlS } = parameters;
   positive('S_DS', sdsG);
   positive('S_D1', sd1G);
   positive('T_L', tlS);
   const t0S = (0.2 * sd1G) / sdsG;
   const tsS = sd1G / sdsG;
   if (tlS < tsS) {
-    throw usageError(`ASCE 7-16: T_L = ${tlS} s is shorter than T_S = S_D1/S_DS = ${tsS} s`);
+    throw usageError(`${edition}: T_L = ${tlS} s is shorter than T_S = S_D1/S_DS = ${tsS} s`);
   }
   return {
-    code: 'asce7-16',
-    description: `ASCE/SEI 7-16 §11.4.6 design spectrum, 5% damping: S_DS = ${sdsG} g, S_D1 = ${sd1G} g, T_L = ${tlS} s (T0 = ${round(t0S)} s, TS = ${round(tsS)} s)`,
-    parameters: { sds_g: sdsG, sd1_g: sd1G, tl_s: tlS, t0_s: t0S, ts_s: tsS },
-    damping: 0.05,
-    minPeriodS: 0,
-    maxPeriodS: Number.POSITIVE_INFINITY,
+    t0S,
+    tsS,
     psaG(periodS: number): number {
-      checkPeriod(this, periodS);
       if (periodS < t0S) return sdsG * (0.4 + (0.6 * periodS) / t0S);
       if (periodS <= tsS) return sdsG;
       if (periodS <= tlS) return sd1G / periodS;
@@ -173,12 +193,21 @@ export function coversPeriod(spectrum: DesignSpectrum, periodS: number): boolean
   return periodS >= spectrum.minPeriodS && periodS <= spectrum.maxPeriodS;
 }
 
+/** Throw the one-line refusal of a period where the spectrum is not defined. */
 export function checkPeriod(spectrum: DesignSpectrum, periodS: number): void {
   if (!Number.isFinite(periodS) || !coversPeriod(spectrum, periodS)) {
     throw inputError(
-      `T = ${periodS} s is outside the ${spectrum.code === 'table' ? `table ${spectrum.parameters.source}` : `${spectrum.code} spectrum`}, defined from ${spectrum.minPeriodS} s to ${spectrum.maxPeriodS} s`,
+      `T = ${periodS} s is outside the ${spectrumName(spectrum)}, defined from ${spectrum.minPeriodS} s to ${spectrum.maxPeriodS} s`,
     );
   }
+}
+
+/** The spectrum as a message names it: a table by its file, a code spectrum by its code (and form and file). */
+function spectrumName(spectrum: DesignSpectrum): string {
+  const { code, parameters } = spectrum;
+  if (code === 'table') return `table ${parameters.source}`;
+  if (parameters.source !== undefined) return `${code} ${parameters.form} spectrum of ${parameters.source}`;
+  return `${code} spectrum`;
 }
 
 function positive(name: string, value: number): void {

@@ -1,6 +1,7 @@
 import { usageError } from '../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { GroundRecord } from '../record/record.js';
+import { asce722TwoPeriodSpectrum } from './asce722.js';
 import {
   asce716Spectrum,
   coversPeriod,
@@ -14,30 +15,49 @@ import type { Spectrum, SpectrumCurve } from './spectrum.js';
 
 /**
  * A target spectrum as written on the command line: a code spectrum, already built, or the path
- * of a table file, which the caller reads (the core does no I/O).
+ * of a file, which the caller reads (the core does no I/O): a table, or the site's ASCE 7-22
+ * multi-period table (read by readSpectrumTable, then asce722MultiPeriodSpectrum).
  */
-export type TargetSpec = { kind: 'code'; spectrum: DesignSpectrum } | { kind: 'table'; path: string };
+export type TargetSpec = CodeTarget | { kind: 'table'; path: string };
 
-/** The parameters of each code spectrum, by the keys a target (and the `design` command) names them with. */
+/** A code spectrum as its keys describe it: built, or the multi-period table file still to read. */
+export type CodeTarget = { kind: 'code'; spectrum: DesignSpectrum } | { kind: 'multi-period'; path: string };
+
+/**
+ * The parameters of each code spectrum, by the keys a target (and the `design` command) names them
+ * with. ASCE 7-22 takes sds, sd1, tl (two-period, §11.4.5.2) or multi-period (§11.4.5.1), not both.
+ */
 export const CODE_KEYS = {
   'asce7-16': ['sds', 'sd1', 'tl'],
+  'asce7-22': ['sds', 'sd1', 'tl', 'multi-period'],
   ec8: ['type', 'ground', 'ag', 'damping'],
 } as const;
 
 export type DesignCode = keyof typeof CODE_KEYS;
 
+export const DESIGN_CODES = Object.keys(CODE_KEYS) as DesignCode[];
+
+/** Whether `text` (lower case) names a code of CODE_KEYS. */
+export function isDesignCode(text: string): text is DesignCode {
+  return Object.hasOwn(CODE_KEYS, text);
+}
+
+/** The two-period keys of ASCE 7-22, which do not go with its multi-period table. */
+const TWO_PERIOD_KEYS = ['sds', 'sd1', 'tl'] as const;
+
 type CodeFields = { [key in (typeof CODE_KEYS)[DesignCode][number]]?: string };
 
 /**
- * Parse a target: `asce7-16:sds=1.0,sd1=0.6,tl=8`, `ec8:type=1,ground=C,ag=0.25[,damping=5%]`
- * (the parameters of codeSpectrum), or anything else, which is taken as the path of a two-column
- * table of period (s) and PSA (g).
+ * Parse a target: `asce7-16:sds=1.0,sd1=0.6,tl=8`, `asce7-22:sds=1.0,sd1=0.6,tl=8`,
+ * `asce7-22:multi-period=FILE`, `ec8:type=1,ground=C,ag=0.25[,damping=5%]` (the parameters of
+ * codeTarget), or anything else, which is taken as the path of a two-column table of period (s)
+ * and PSA (g).
  */
 export function parseTargetSpec(text: string): TargetSpec {
   const spec = text.trim();
   const colon = spec.indexOf(':');
   const code = colon > 0 ? spec.slice(0, colon).toLowerCase() : '';
-  if (code !== 'asce7-16' && code !== 'ec8') {
+  if (!isDesignCode(code)) {
     if (spec === '') throw usageError('--target is empty');
     return { kind: 'table', path: spec };
   }
@@ -52,13 +72,35 @@ export function parseTargetSpec(text: string): TargetSpec {
     }
     fields[key] = item.slice(equals + 1).trim();
   }
-  return { kind: 'code', spectrum: codeSpectrum(code, fields, (key) => `target '${spec}': ${key}=`) };
+  return codeTarget(code, fields, (key) => `target '${spec}': ${key}=`);
+}
+
+/**
+ * The code spectrum its keys describe (CODE_KEYS), as codeSpectrum builds it; for ASCE 7-22 with
+ * `multi-period`, the table file to read instead, refused beside the two-period keys.
+ */
+export function codeTarget(code: DesignCode, fields: CodeFields, label: (key: string) => string): CodeTarget {
+  const table = fields['multi-period'];
+  if (code !== 'asce7-22') return { kind: 'code', spectrum: codeSpectrum(code, fields, label) };
+  const forms =
+    "ASCE 7-22 takes S_DS, S_D1 and T_L (two-period, §11.4.5.2) or the site's multi-period table (§11.4.5.1)";
+  const twoPeriod = TWO_PERIOD_KEYS.find((key) => fields[key] !== undefined);
+  if (table === undefined) {
+    if (twoPeriod === undefined) throw usageError(`${label('sds')} is required: ${forms}`);
+    return { kind: 'code', spectrum: codeSpectrum(code, fields, label) };
+  }
+  if (twoPeriod !== undefined) {
+    throw usageError(`${label(twoPeriod)} does not go with a multi-period table: ${forms}, not both`);
+  }
+  if (table.trim() === '') throw usageError(`${label('multi-period')} needs a file`);
+  return { kind: 'multi-period', path: table.trim() };
 }
 
 /**
  * The code spectrum of its parameters, given as text by key (CODE_KEYS): accelerations in g,
- * periods in s, the Eurocode 8 damping a fraction or a percentage (5% when left out). `label`
- * names a parameter in the messages as the user wrote it.
+ * periods in s, the Eurocode 8 damping a fraction or a percentage (5% when left out); ASCE 7-22
+ * here is its two-period form (its multi-period table goes through codeTarget). `label` names a
+ * parameter in the messages as the user wrote it.
  */
 export function codeSpectrum(
   code: DesignCode,
@@ -77,6 +119,12 @@ export function codeSpectrum(
   };
   if (code === 'asce7-16')
     return asce716Spectrum({ sdsG: number('sds'), sd1G: number('sd1'), tlS: number('tl') });
+  if (code === 'asce7-22') {
+    // The multi-period form names a file, which only the caller reads (codeTarget).
+    if (fields['multi-period'] !== undefined)
+      throw usageError(`${label('multi-period')} names a file: use codeTarget`);
+    return asce722TwoPeriodSpectrum({ sdsG: number('sds'), sd1G: number('sd1'), tlS: number('tl') });
+  }
   return ec8Spectrum({
     type: parseEc8Type(text('type')),
     ground: parseEc8Ground(text('ground')),

@@ -77,6 +77,16 @@ export const GOLDEN_CASES: GoldenCase[] = [
     ),
   },
   {
+    name: 'spectrum-target-asce722-multi-period',
+    argv: w(
+      `spectrum ${H1} --units g ${GRID} --target asce7-22:multi-period=IN/site-multiperiod-7-22.csv --scale-range 0.1:3 --format json`,
+    ),
+  },
+  {
+    name: 'spectrum-target-asce722-two-period-svg',
+    argv: w(`spectrum ${H2} --units g --target asce7-22:sds=0.9,sd1=0.5,tl=8 --out OUT/t.json --svg OUT`),
+  },
+  {
     name: 'spectrum-target-table-csv',
     argv: w(`spectrum ${H2} --units g ${GRID} --target IN/target.csv --format csv`),
   },
@@ -96,6 +106,20 @@ export const GOLDEN_CASES: GoldenCase[] = [
     argv: w('design --code ec8 --type 2 --ground D --ag 0.3 --damping 10% --format csv'),
   },
   { name: 'design-table-file', argv: w('design --table IN/target.csv --format json --svg OUT') },
+  {
+    name: 'design-asce722-two-period',
+    argv: w('design --code asce7-22 --sds 1.2 --sd1 0.48 --tl 6 --svg OUT'),
+  },
+  {
+    name: 'design-asce722-multi-period',
+    argv: w('design --code asce7-22 --multi-period IN/site-multiperiod-7-22.csv --out OUT/d.json --svg OUT'),
+  },
+  {
+    name: 'design-asce722-multi-period-csv',
+    argv: w(
+      'design --code asce7-22 --multi-period IN/site-multiperiod-7-22.csv --periods 0.05:8:12 --format csv',
+    ),
+  },
   { name: 'damping-table', argv: w(`damping ${H1} --units g --damping 2%,5%,10%,20%`) },
   {
     name: 'damping-json-svg',

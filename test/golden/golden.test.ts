@@ -38,7 +38,8 @@ async function run(argv: string[], out: string, env: Record<string, string> = {}
   const saved = Object.fromEntries(Object.keys(env).map((key) => [key, process.env[key]]));
   Object.assign(process.env, env);
   try {
-    return await runMain(argv.map((arg) => arg.replace(/^IN\//, `${input}/`).replace(/^OUT/, out)));
+    // IN/ also after a key (a target's `multi-period=IN/…`).
+    return await runMain(argv.map((arg) => arg.replace(/(^|=)IN\//, `$1${input}/`).replace(/^OUT/, out)));
   } finally {
     for (const [key, value] of Object.entries(saved)) {
       if (value === undefined) delete process.env[key];

@@ -1,4 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import { designFigure } from '../../src/plot/design-figure.js';
+import { asce722MultiPeriodSpectrum, asce722TwoPeriodSpectrum } from '../../src/spectrum/asce722.js';
+import { designPsaG } from '../../src/spectrum/design.js';
+import { readSpectrumTable } from '../../src/spectrum/design-table.js';
 import { axisFromTicks, EVERY_FIGURE, parseSvg, pathVertices } from './helpers.js';
 
 describe('designFigure', () => {
@@ -13,5 +17,23 @@ describe('designFigure', () => {
     const plateau = vertices.filter(([px]) => px > x(0.15) && px < x(0.5));
     expect(plateau.length).toBeGreaterThan(3);
     for (const [, py] of plateau) expect(py).toBeCloseTo(y(1), 0);
+  });
+
+  it('names the ASCE 7-22 form in the legend; the two-period form is drawn densely, the multi-period table at its rows', () => {
+    const figure = (spectrum: ReturnType<typeof asce722TwoPeriodSpectrum>, periodsS: Float64Array) =>
+      parseSvg(designFigure({ spectrum, periodsS, psaG: designPsaG(spectrum, periodsS) }));
+    const periodsS = Float64Array.from([0.1, 0.5, 1, 5]);
+    const two = figure(asce722TwoPeriodSpectrum({ sdsG: 1, sd1G: 0.6, tlS: 8 }), periodsS);
+    expect(two.querySelector('g.legend')?.textContent).toContain('ASCE/SEI 7-22 two-period design spectrum');
+    expect(pathVertices(two.querySelector('path.curve')?.getAttribute('d') ?? '').length).toBeGreaterThan(
+      100,
+    );
+    // An invented site table of four rows.
+    const table = readSpectrumTable('0.1,0.8\n0.5,1.0\n1,0.6\n5,0.1\n', 'mp.csv');
+    const multi = figure(asce722MultiPeriodSpectrum(table, 'mp.csv'), table.periodsS);
+    expect(multi.querySelector('g.legend')?.textContent).toContain(
+      'ASCE/SEI 7-22 multi-period design spectrum',
+    );
+    expect(pathVertices(multi.querySelector('path.curve')?.getAttribute('d') ?? '')).toHaveLength(4);
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { asce716Spectrum } from '../../src/spectrum/design.js';
 import type { Spectrum } from '../../src/spectrum/spectrum.js';
-import { fitTarget, parseTargetSpec } from '../../src/spectrum/target.js';
+import { codeSpectrum, fitTarget, parseTargetSpec } from '../../src/spectrum/target.js';
 
 describe('parseTargetSpec', () => {
   it('reads an ASCE 7-16 target', () => {
@@ -20,6 +20,37 @@ describe('parseTargetSpec', () => {
     if (damped.kind !== 'code') throw new Error('expected a code target');
     expect(damped.spectrum.damping).toBe(0.1);
     expect(damped.spectrum.psaG(0.1)).toBeCloseTo(2.5 * 0.1 * Math.sqrt(10 / 15), 12); // Eq. 3.3, 3.6
+  });
+
+  it('reads an ASCE 7-22 two-period target (§11.4.5.2)', () => {
+    const spec = parseTargetSpec('asce7-22:sds=1.0,sd1=0.6,tl=8');
+    if (spec.kind !== 'code') throw new Error('expected a code target');
+    expect(spec.spectrum.code).toBe('asce7-22');
+    expect(spec.spectrum.parameters.form).toBe('two-period');
+    expect(spec.spectrum.psaG(1)).toBeCloseTo(0.6, 12); // S_D1/T at 1 s
+    expect(spec.spectrum.psaG(10)).toBeCloseTo((0.6 * 8) / 100, 12); // S_D1 T_L/T² beyond T_L
+  });
+
+  it('leaves an ASCE 7-22 multi-period target (§11.4.5.1) as the file to read', () => {
+    expect(parseTargetSpec('ASCE7-22: multi-period = site/mp.csv')).toEqual({
+      kind: 'multi-period',
+      path: 'site/mp.csv',
+    });
+  });
+
+  it('refuses an ASCE 7-22 target mixing or missing its forms', () => {
+    expect(() => parseTargetSpec('asce7-22:multi-period=mp.csv,sds=1')).toThrow(
+      "target 'asce7-22:multi-period=mp.csv,sds=1': sds= does not go with a multi-period table",
+    );
+    expect(() => parseTargetSpec('asce7-22:multi-period=')).toThrow(/multi-period= needs a file/);
+    expect(() => parseTargetSpec('asce7-22:sds=1.0,sd1=0.6')).toThrow(/tl= is required/);
+    expect(() => parseTargetSpec('asce7-22:damping=5%')).toThrow(
+      "unknown key 'damping'; accepted: sds, sd1, tl, multi-period",
+    );
+    expect(() => parseTargetSpec('asce7-16:multi-period=mp.csv')).toThrow(/unknown key 'multi-period'/);
+    expect(() => codeSpectrum('asce7-22', { 'multi-period': 'mp.csv' }, (key) => key)).toThrow(
+      /use codeTarget/,
+    );
   });
 
   it('takes anything else as a table path', () => {

@@ -9,11 +9,13 @@ import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } f
 export function registerDesign(program: Command): void {
   const command = program
     .command('design')
-    .description('a code design spectrum (ASCE 7-16, Eurocode 8) or a tabulated one, PSA in g by period');
+    .description(
+      'a code design spectrum (ASCE 7-16; ASCE 7-22 two-period or multi-period; Eurocode 8) or a tabulated one, PSA in g by period',
+    );
   addDesignOptions(command);
   command.option(
     '--periods <grid>',
-    'periods, s: a list or a:b:n (default: 0 and 0.01:10:120 where the spectrum is defined; a table’s own rows)',
+    'periods, s: a list or a:b:n (default: 0 and 0.01:10:120 where the spectrum is defined; a table’s own rows, and a multi-period table’s)',
   );
   addOutputOptions(
     command,
@@ -27,7 +29,8 @@ export async function runDesign(options: DesignCliOptions & OutputCliOptions): P
   const spectrum = designFromOptions(options);
   const periodsS = designPeriods(spectrum, options.periods);
   const psaG = designPsaG(spectrum, periodsS);
-  await writeProduct(options.table === undefined ? [] : [options.table], options, {
+  const inputs = [options.table, options.multiPeriod].filter((file): file is string => file !== undefined);
+  await writeProduct(inputs, options, {
     json: () => designToJson(spectrum, periodsS, psaG),
     csv: () => designToCsv(spectrum, periodsS, psaG),
     table: () => designTable(spectrum, periodsS, psaG),

@@ -77,7 +77,7 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
   const { fit, spectrum } =
     target === undefined ? { fit: undefined, spectrum: swept } : fitTarget(swept, target.spectrum, target);
-  const inputs = options.target === undefined ? [source] : [source, options.target];
+  const inputs = [source, ...(target?.files ?? [])];
   await writeProduct(inputs, options, {
     json: () => ({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }),
     csv: () => spectrumToCsv(spectrum, { lengthUnit, target: fit }),

@@ -70,7 +70,12 @@ export async function reportRequest(
     pair = { record: second, angleStepDeg: positiveNumber('--angle-step', options.angleStep ?? '1') };
   }
   const request: ReportRequest = { ...settings, read, processed: applyProcessing(read, options), pair };
-  const inputs = [source, ...(options.pair ? [options.pair] : []), ...equipment.map((e) => e.file)];
+  const inputs = [
+    source,
+    ...(options.pair ? [options.pair] : []),
+    ...equipment.map((e) => e.file),
+    ...(settings.target?.files ?? []),
+  ];
   return { request, inputs, out };
 }
 

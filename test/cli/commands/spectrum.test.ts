@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { CAUTION } from '../../../src/base/caution.js';
-import { type CliResult, runMain, runMainIn } from '../../helpers/run-cli.js';
+import { type CliResult, expectOneLineFailure, runMain, runMainIn } from '../../helpers/run-cli.js';
 
 // `quakesweep spectrum` on an invented record: in-process main(), and the built CLI where threads
 // and a pipe are the point.
@@ -257,5 +257,44 @@ describe('quakesweep spectrum --target', () => {
     );
     expect(csv.stdout).toMatch(/# scaling: factor/);
     expect(csv.stdout).toMatch(/,target_psa_g\n/);
+  });
+
+  it('accepts both ASCE 7-22 forms, and keeps outputs off the multi-period table it read', async () => {
+    const twoPeriod = await jsonIn(
+      'spectrum',
+      ...record,
+      '--periods',
+      '0.2,1,10',
+      '--target',
+      'asce7-22:sds=1.0,sd1=0.6,tl=8',
+    );
+    expect(twoPeriod.target.code).toBe('asce7-22');
+    expect(twoPeriod.target.psa_g[1]).toBeCloseTo(0.6, 12); // §11.4.5.2: S_D1/T at 1 s
+    // An invented site table: log–log halfway between (1, 0.8) and (4, 0.2) is √(0.8 · 0.2) = 0.4 g.
+    writeFileSync(join(folder, 'mp.csv'), '# invented\nperiod_s,sa_g\n0,0.4\n0.2,1.0\n1,0.8\n4,0.2\n');
+    const multi = await jsonIn(
+      'spectrum',
+      ...record,
+      '--periods',
+      '0.2,2,10',
+      '--target',
+      'asce7-22:multi-period=mp.csv',
+    );
+    expect(multi.target.parameters).toEqual({ form: 'multi-period', source: 'mp.csv', rows: 4 });
+    expect(multi.target.psa_g[1]).toBeCloseTo(0.4, 12);
+    expect(multi.target.psa_g[2]).toBeNull(); // 10 s is beyond the table
+    const over = await runIn(
+      'spectrum',
+      ...record,
+      '--target',
+      'asce7-22:multi-period=mp.csv',
+      '--out',
+      'mp.csv',
+    );
+    expect(expectOneLineFailure(over)).toBe(
+      'quakesweep: refusing to overwrite the input mp.csv with an output',
+    );
+    const mixed = await runIn('spectrum', ...record, '--target', 'asce7-22:multi-period=mp.csv,sds=1');
+    expect(expectOneLineFailure(mixed)).toMatch(/sds= does not go with a multi-period table/);
   });
 });

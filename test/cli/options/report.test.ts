@@ -46,6 +46,18 @@ describe('reportRequest', () => {
     );
   });
 
+  it('reads an ASCE 7-22 multi-period target and counts its table among the inputs', async () => {
+    const table = 'records/site-multiperiod-7-22.csv'; // invented
+    const { request, inputs } = await reportRequest(
+      at('main.txt'),
+      { ...base(), target: `asce7-22:multi-period=${table}` },
+      [],
+    );
+    expect(request.target?.spectrum.code).toBe('asce7-22');
+    expect(request.target?.spectrum.parameters.form).toBe('multi-period');
+    expect(inputs).toEqual([at('main.txt'), table]);
+  });
+
   it('states the time SOURCE_DATE_EPOCH gives, for a reproducible report', async () => {
     const saved = process.env['SOURCE_DATE_EPOCH'];
     process.env['SOURCE_DATE_EPOCH'] = '86400'; // one day after 1970-01-01T00:00:00Z

@@ -35,6 +35,25 @@ describe('targetFromOptions', () => {
   });
 });
 
+describe('targetFromOptions with ASCE 7-22', () => {
+  it('reads the two-period target and names no file', () => {
+    const choice = targetFromOptions({ target: 'asce7-22:sds=1.0,sd1=0.6,tl=8' })!;
+    expect(choice.spectrum.code).toBe('asce7-22');
+    expect(choice.spectrum.psaG(2)).toBeCloseTo(0.3, 12); // §11.4.5.2: S_D1/T = 0.6/2
+    expect(choice.files).toEqual([]);
+  });
+
+  it('reads the multi-period table the target names, and names it as an input', () => {
+    const file = join(folder, 'mp.csv');
+    writeFileSync(file, '# invented\nperiod_s,sa_g\n0,0.4\n0.2,1.0\n1,0.8\n4,0.2\n');
+    const choice = targetFromOptions({ target: `asce7-22:multi-period=${file}` })!;
+    expect(choice.spectrum.parameters.form).toBe('multi-period');
+    expect(choice.spectrum.psaG(1)).toBe(0.8); // a row of the table
+    expect(choice.files).toEqual([file]);
+    expect(targetFromOptions({ target: file })!.files).toEqual([file]); // a plain table too
+  });
+});
+
 describe('the target choice', () => {
   const fitWith = (options: TargetCliOptions) => {
     const choice = targetFromOptions(options)!;
