@@ -5,6 +5,7 @@ import { formatValue, percentLabel, zeroPeriodNotes } from './text.js';
 
 const CODE_LABELS: Readonly<Record<DesignSpectrum['code'], string>> = {
   'asce7-16': 'ASCE/SEI 7-16 design spectrum',
+  'asce7-22': 'ASCE/SEI 7-22 design spectrum',
   ec8: 'Eurocode 8 elastic spectrum',
   table: 'tabulated design spectrum',
 };
@@ -30,13 +31,17 @@ export function designFigure(input: DesignFigureInput): string {
   const drawn = densified(input);
   const damping = spectrum.damping === undefined ? 'not stated' : percentLabel(spectrum.damping);
   return lineChart({
-    title: 'Design spectrum, pseudo-acceleration PSA',
+    title: spectrum.vertical ? 'Vertical design spectrum S_av' : 'Design spectrum, pseudo-acceleration PSA',
     subtitle: [`Spectrum: ${spectrum.description}`, `Damping: ${damping}`],
-    x: { title: 'Period T (s)' },
-    y: { title: 'Pseudo-acceleration PSA (g)' },
+    x: { title: spectrum.vertical ? 'Vertical period T_v (s)' : 'Period T (s)' },
+    y: {
+      title: spectrum.vertical ? 'Vertical spectral acceleration S_av (g)' : 'Pseudo-acceleration PSA (g)',
+    },
     series: [
       {
-        label: CODE_LABELS[spectrum.code],
+        label: spectrum.vertical
+          ? `${CODE_LABELS[spectrum.code]}, vertical (§11.9)`
+          : CODE_LABELS[spectrum.code],
         x: drawn.periodsS,
         y: drawn.psaG,
         style: overlayStyle(0),

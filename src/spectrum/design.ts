@@ -6,7 +6,9 @@ import { inputError, usageError } from '../base/errors.js';
  */
 export interface DesignSpectrum {
   /** Where it comes from. */
-  code: 'asce7-16' | 'ec8' | 'table';
+  code: 'asce7-16' | 'asce7-22' | 'ec8' | 'table';
+  /** True for a vertical spectrum (ASCE/SEI 7 §11.9); horizontal otherwise. */
+  vertical?: boolean;
   /** One line for a reviewer: the standard, clause and parameters. */
   description: string;
   /** The defining parameters (g, s, fractions), as written to outputs. */
@@ -176,7 +178,7 @@ export function coversPeriod(spectrum: DesignSpectrum, periodS: number): boolean
 export function checkPeriod(spectrum: DesignSpectrum, periodS: number): void {
   if (!Number.isFinite(periodS) || !coversPeriod(spectrum, periodS)) {
     throw inputError(
-      `T = ${periodS} s is outside the ${spectrum.code === 'table' ? `table ${spectrum.parameters.source}` : `${spectrum.code} spectrum`}, defined from ${spectrum.minPeriodS} s to ${spectrum.maxPeriodS} s`,
+      `T = ${periodS} s is outside the ${spectrum.code === 'table' ? `table ${spectrum.parameters.source}` : `${spectrum.code}${spectrum.vertical ? ' vertical' : ''} spectrum`}, defined from ${spectrum.minPeriodS} s to ${spectrum.maxPeriodS} s`,
     );
   }
 }
