@@ -108,7 +108,7 @@ describe('anchorTable of an ASCE/SEI 7-22 file', () => {
     // each value ends at column 45: two blanks, a 30-wide label, three blanks, a 10-wide value
     for (const row of rows) {
       expect(row.slice(0, 45)).toMatch(/\d$/);
-      expect(row[45]).toBe(" ");
+      expect(row[45]).toBe(' ');
     }
   });
 });
