@@ -1,13 +1,17 @@
 import { usageError } from '../base/errors.js';
 import { type AnchorRule, type BoltGroupResult, boltGroupForces } from './bolt-group.js';
+import { counteractingDeadLoadFactor, verticalForce } from './code-force.js';
 import {
-  type CodeForce,
-  codeHorizontalForce,
-  counteractingDeadLoadFactor,
-  verticalForce,
-} from './code-force.js';
+  type ComponentForce,
+  componentForce,
+  componentForceStatements,
+  type VerticalSpectralDemand,
+  verticalSpectralDemand,
+  verticalStatements,
+} from './component-force.js';
 import type { SpectralValue } from './elastic-demand.js';
 import type { Equipment } from './equipment.js';
+import { EDITION_NAMES } from './equipment-code.js';
 
 export type DemandChoice = 'code' | 'record' | 'max';
 
@@ -25,7 +29,8 @@ export interface ElasticInput extends SpectralValue {
 /** Everything the anchorage outputs state; forces in kN, lengths in m. */
 export interface AnchorageAnalysis {
   equipment: Equipment;
-  code: CodeForce;
+  /** The code force of the edition the equipment file names. */
+  code: ComponentForce;
   /** Ω₀·F_p when Ω₀ is given, else F_p, kN. */
   codeForAnchorsKN: number;
   /** PSA·W_p, kN, or null without a record or spectrum. */
@@ -36,13 +41,15 @@ export interface AnchorageAnalysis {
   /** The horizontal force the anchors were computed for, kN. */
   horizontalForAnchorsKN: number;
   verticalKN: number;
+  /** S_av(T_v)·W_p of §11.9 where the file gives T_v, S_S and the site class: information only. */
+  verticalSpectral: VerticalSpectralDemand | null;
   deadLoadFactor: number;
   anchors: BoltGroupResult;
   assumptions: string[];
 }
 
 /**
- * Code force (ASCE/SEI 7-16 §13.3.1), elastic record demand, the user's choice between them, and
+ * Code force (ASCE/SEI 7-16 or 7-22 §13.3.1, as the equipment file says), elastic record demand, the user's choice between them, and
  * the anchor forces of the rigid base by the elastic bolt-group method (see bolt-group.ts).
  * Ω₀ multiplies the code's horizontal force only: the elastic record demand is already unreduced.
  */
@@ -56,7 +63,7 @@ export function analyseAnchorage(
       `--demand ${demand} needs a ground motion: give --record or --spectrum (or use --demand code)`,
     );
   }
-  const code = codeHorizontalForce(equipment);
+  const code = componentForce(equipment);
   const codeForAnchorsKN = (equipment.omega0 ?? 1) * code.fp;
   const elasticKN = elastic === null ? null : elastic.psaG * equipment.weightKN;
   const governing =
@@ -81,6 +88,7 @@ export function analyseAnchorage(
     governing,
     horizontalForAnchorsKN,
     verticalKN: verticalForce(equipment),
+    verticalSpectral: verticalSpectralDemand(equipment),
     deadLoadFactor,
     anchors,
   };
@@ -90,11 +98,8 @@ export function analyseAnchorage(
 function assumptionsOf(analysis: Omit<AnchorageAnalysis, 'assumptions'>): string[] {
   const { equipment, code, elastic, governing, deadLoadFactor } = analysis;
   const lines = [
-    'Code force: ASCE/SEI 7-16 §13.3.1, F_p = 0.4 a_p S_DS W_p (1 + 2z/h)/(R_p/I_p), bounded by ' +
-      '0.3 S_DS I_p W_p and 1.6 S_DS I_p W_p; a_p, R_p, I_p and S_DS are as given in the equipment file ' +
-      '(not chosen by this tool from the standard).',
-    'Vertical: E_v = 0.2 S_DS W_p (§13.3.1.2); in the anchor tension it enters through the dead load ' +
-      `(0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p of ASCE/SEI 7-16 §2.3.6, which counteracts uplift.`,
+    ...componentForceStatements(equipment, code),
+    ...verticalStatements(equipment, deadLoadFactor, analysis.verticalSpectral),
     'Anchors: rigid base, elastic bolt group about the anchors’ centroid, all anchors of equal stiffness ' +
       `in tension and compression; ${ANCHOR_RULE_TEXT[analysis.anchors.rule]} ` +
       'The base’s bearing on the support is not modelled. Horizontal force at the ' +
@@ -107,7 +112,8 @@ function assumptionsOf(analysis: Omit<AnchorageAnalysis, 'assumptions'>): string
     equipment.cgPlanGiven &&
       'Eccentric centre of mass: the counteracting dead load acts at the given plan position and is shared ' +
         'linearly over the pattern (less relief for anchors far from it); the horizontal force acts at the same point.',
-    code.heightRatioCapped && 'z exceeds h: z/h taken as 1.0 as ASCE/SEI 7-16 §13.3.1 allows; check z and h.',
+    code.heightRatioCapped &&
+      `z exceeds h: z/h taken as 1.0 as ${EDITION_NAMES[equipment.code]} §13.3.1${code.edition === 'asce7-22' ? '.1' : ''} allows; check z and h.`,
     equipment.omega0 !== null &&
       `Ω₀ = ${equipment.omega0} multiplies the code horizontal force for the anchors (not the dead load, not the record demand).`,
     elastic !== null &&

@@ -1,7 +1,13 @@
-import type { Equipment } from './equipment.js';
-
 /** The inputs of the ASCE/SEI 7-16 component force: W_p in kN, z and h in m, S_DS in g. */
-export type CodeForceInput = Pick<Equipment, 'weightKN' | 'zM' | 'hM' | 'ap' | 'rp' | 'ip' | 'sds'>;
+export interface CodeForceInput {
+  weightKN: number;
+  zM: number;
+  hM: number;
+  ap: number;
+  rp: number;
+  ip: number;
+  sds: number;
+}
 
 export interface CodeForce {
   /** The governing design horizontal force F_p, kN. */

@@ -1,5 +1,19 @@
 import { inputError } from '../base/errors.js';
 import { MIN_PERIOD_S } from '../oscillator/grid.js';
+import {
+  BUILDING_KEYS,
+  BUILDING_PERIOD_KEY,
+  type ComponentEdition,
+  type ComponentFactors,
+  checkEditionKeys,
+  EDITION_NAMES,
+  EDITION_NUMBERS,
+  readEdition,
+  readFactors,
+  readVertical,
+  VERTICAL_KEYS,
+  type VerticalInput,
+} from './equipment-code.js';
 
 /** Unit systems an equipment file may use: forces and lengths together. */
 export type EquipmentUnits = 'SI' | 'US-kip-in' | 'US-lb-in';
@@ -38,35 +52,69 @@ export interface Equipment {
   zM: number;
   /** Roof height h above the base, m. */
   hM: number;
-  // ASCE/SEI 7-16 §13.3.1 coefficients as the file gives them: a_p, R_p, I_p, S_DS (g), Ω₀ or null.
-  ap: number;
-  rp: number;
+  /** The edition of ASCE/SEI 7 of the component force ("code"; asce7-16 when the file names none). */
+  code: ComponentEdition;
+  /** The edition's own coefficients: a_p and R_p (7-16), or C_AR, R_po and the building (7-22). */
+  factors: ComponentFactors;
+  // §13.3.1 coefficients of either edition as the file gives them: I_p, S_DS (g), the anchorage's Ω₀ or null.
   ip: number;
   sds: number;
   omega0: number | null;
+  /** The vertical spectral demand's inputs (§11.9), or null when the file gives none. */
+  vertical: VerticalInput | null;
   /** What the file said, in its own units. */
   input: Readonly<Record<string, unknown>>;
 }
 
-const REQUIRED = 'name units weight cg_height anchors period_s damping z h ap rp ip sds'.split(' ');
+/** The required keys of each edition (the edition's coefficients after z and h). */
+const REQUIRED: Readonly<Record<ComponentEdition, string[]>> = {
+  'asce7-16': 'name units weight cg_height anchors period_s damping z h ap rp ip sds'.split(' '),
+  'asce7-22': 'name units weight cg_height anchors period_s damping z h car rpo ip sds'.split(' '),
+};
 type UnitSystem = (typeof EQUIPMENT_UNITS)[EquipmentUnits];
-const KNOWN = [...REQUIRED, 'omega0', 'cg_plan', 'notes'];
+const OPTIONAL = ['omega0', 'cg_plan', 'notes'];
+const EDITION_OPTIONAL = ['code', ...VERTICAL_KEYS];
+/** Every key of any edition (a key of the other edition is refused in its own words). */
+const ALL_KEYS = [
+  ...new Set([...REQUIRED['asce7-16'], ...REQUIRED['asce7-22'], ...OPTIONAL, ...EDITION_OPTIONAL]),
+  ...BUILDING_KEYS,
+  BUILDING_PERIOD_KEY,
+];
+/** The keys a file of the edition may hold, as its messages list them. */
+const KNOWN: Readonly<Record<ComponentEdition, string[]>> = {
+  'asce7-16': [...REQUIRED['asce7-16'], ...OPTIONAL, ...EDITION_OPTIONAL],
+  'asce7-22': [
+    ...REQUIRED['asce7-22'],
+    ...OPTIONAL,
+    ...EDITION_OPTIONAL,
+    ...BUILDING_KEYS,
+    BUILDING_PERIOD_KEY,
+  ],
+};
 
 /** The numeric fields: the test each value must pass and what is expected, in the file's units. */
-const NUMBERS: Record<string, [(v: number) => boolean, (u: UnitSystem) => string]> = {
+const NUMBERS: Record<string, [(v: number) => boolean, (u: UnitSystem, standard: string) => string]> = {
   weight: [(v) => v > 0, (u) => `a positive operating weight in ${u.force}`],
   cg_height: [(v) => v >= 0, (u) => `a height ≥ 0 in ${u.length}`],
   damping: [(v) => v >= 0 && v < 1, () => 'a fraction of critical, 0 ≤ ζ < 1 (0.05 for 5%)'],
   z: [
     (v) => v >= 0,
-    (u) => `a height ≥ 0 above the base in ${u.length} (0 at or below the base, ASCE 7-16 §13.3.1)`,
+    (u, standard) =>
+      `a height ≥ 0 above the base in ${u.length} (0 at or below the base, ${standard.replace('/SEI', '')} §13.3.1)`,
   ],
   h: [(v) => v > 0, (u) => `the roof height above the base, > 0, in ${u.length}`],
   ap: [(v) => v > 0, () => 'a positive amplification factor a_p'],
   rp: [(v) => v > 0, () => 'a positive response modification factor R_p'],
   ip: [(v) => v > 0, () => 'a positive importance factor I_p'],
   sds: [(v) => v > 0, () => 'a positive S_DS in g'],
-  omega0: [(v) => v >= 1, () => 'null or an overstrength factor Ω₀ ≥ 1'],
+  omega0: [
+    (v) => v >= 1,
+    (_, standard) =>
+      standard === EDITION_NAMES['asce7-16']
+        ? 'null or an overstrength factor Ω₀ ≥ 1'
+        : 'null or the component anchorage\'s overstrength factor Ω₀ ≥ 1 (the building\'s Ω₀ for R_μ is "building_omega0")',
+  ],
+  ...EDITION_NUMBERS,
 };
 
 /** The 1-based line of a character offset in a text. */
@@ -97,15 +145,19 @@ export function parseEquipment(text: string, file: string): Equipment {
     throw inputError(`"${key}" ${message}`, { file, line: match ? lineOf(text, match.index) : undefined });
   };
 
+  const code = readEdition({ object, fail });
+  const known = KNOWN[code];
   for (const key of Object.keys(object)) {
-    if (!KNOWN.includes(key)) {
-      const hint = KNOWN.find((known) => known.replace(/_/g, '') === key.replace(/_/g, '').toLowerCase());
+    if (!ALL_KEYS.includes(key)) {
+      const hint = known.find((k) => k.replace(/_/g, '') === key.replace(/_/g, '').toLowerCase());
       const suggestion = hint ? ` (did you mean "${hint}"?)` : '';
-      fail(key, `is not a known field${suggestion}; known: ${KNOWN.join(', ')}`);
+      fail(key, `is not a known field${suggestion}; known: ${known.join(', ')}`);
     }
   }
-  for (const key of REQUIRED) {
-    if (!(key in object)) throw inputError(`"${key}" is missing; required: ${REQUIRED.join(', ')}`, { file });
+  checkEditionKeys({ object, fail }, code);
+  const required = REQUIRED[code];
+  for (const key of required) {
+    if (!(key in object)) throw inputError(`"${key}" is missing; required: ${required.join(', ')}`, { file });
   }
 
   const name = object['name'];
@@ -119,8 +171,9 @@ export function parseEquipment(text: string, file: string): Equipment {
   const number = (key: string): number => {
     const [ok, expected] = NUMBERS[key];
     const value = object[key];
-    if (!Number.isFinite(value)) fail(key, `must be a number (${expected(system)})`);
-    if (!ok(value as number)) fail(key, `must be ${expected(system)}, got ${value}`);
+    const standard = EDITION_NAMES[code];
+    if (!Number.isFinite(value)) fail(key, `must be a number (${expected(system, standard)})`);
+    if (!ok(value as number)) fail(key, `must be ${expected(system, standard)}, got ${value}`);
     return value as number;
   };
 
@@ -137,8 +190,12 @@ export function parseEquipment(text: string, file: string): Equipment {
     fail('period_s', `must be a period ≥ ${MIN_PERIOD_S} s or "rigid", got ${JSON.stringify(periodS)}`);
   }
 
-  const [damping, z, h, ap, rp, ip, sds] = ['damping', 'z', 'h', 'ap', 'rp', 'ip', 'sds'].map(number);
+  const [damping, z, h] = ['damping', 'z', 'h'].map(number);
+  const reader = { object, fail, number };
+  const factors = readFactors(reader, code, z > 0);
+  const [ip, sds] = ['ip', 'sds'].map(number);
   const omega0 = object['omega0'] == null ? null : number('omega0');
+  const vertical = readVertical(reader, code);
   if (object['notes'] !== undefined && typeof object['notes'] !== 'string') fail('notes', 'must be a string');
 
   return {
@@ -153,11 +210,12 @@ export function parseEquipment(text: string, file: string): Equipment {
     damping,
     zM: z * m,
     hM: h * m,
-    ap,
-    rp,
+    code,
+    factors,
     ip,
     sds,
     omega0,
+    vertical,
     input: object,
   };
 }

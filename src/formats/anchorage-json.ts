@@ -31,8 +31,16 @@ export function anchorageToJson(analysis: AnchorageAnalysis) {
       demand: analysis.demand,
       governing: analysis.governing,
       force_for_anchors: force(analysis.horizontalForAnchorsKN),
+      ...asce722Fields(analysis),
     },
-    vertical: { ev: force(analysis.verticalKN), dead_load_factor: analysis.deadLoadFactor },
+    vertical: {
+      ev: force(analysis.verticalKN),
+      dead_load_factor: analysis.deadLoadFactor,
+      ...(e.code === 'asce7-22' && {
+        ev_clause: 'ASCE/SEI 7-22 §13.3.1 with §12.4.2.2, E_v = 0.2 S_DS W_p (clause numbers from memory)',
+      }),
+      ...verticalSpectralFields(analysis, force),
+    },
     anchors: {
       rule: a.rule,
       method:
@@ -61,3 +69,70 @@ export function anchorageToJson(analysis: AnchorageAnalysis) {
 }
 
 export type AnchorageJson = ReturnType<typeof anchorageToJson>;
+
+/** The 7-22 force's own fields, each with its clause (none for a 7-16 file, whose outputs stay as they were). */
+function asce722Fields(analysis: AnchorageAnalysis) {
+  const c = analysis.code;
+  const f = analysis.equipment.factors;
+  if (c.edition !== 'asce7-22' || f.code !== 'asce7-22') return {};
+  const hf = c.heightFactor;
+  const building = f.building;
+  return {
+    code: c.edition,
+    clauses: {
+      fp_code_formula: 'ASCE/SEI 7-22 §13.3.1, Eq. 13.3-1: F_p = 0.4 S_DS I_p W_p (H_f/R_μ)(C_AR/R_po)',
+      fp_code_max: 'ASCE/SEI 7-22 §13.3.1, Eq. 13.3-2: 1.6 S_DS I_p W_p',
+      fp_code_min: 'ASCE/SEI 7-22 §13.3.1, Eq. 13.3-3: 0.3 S_DS I_p W_p',
+    },
+    at_or_below_grade: c.atGrade,
+    height_factor: {
+      h_f: hf.hf,
+      a1: hf.a1,
+      a2: hf.a2,
+      a1_capped_at_2_5: hf.a1Capped,
+      a2_floored_at_0: hf.a2Floored,
+      building_ta_s: building?.taS ?? null,
+      clause: c.atGrade
+        ? 'ASCE/SEI 7-22 §13.3.1.1: H_f = 1 at or below grade'
+        : hf.equation === 'Eq. 13.3-4'
+          ? 'ASCE/SEI 7-22 §13.3.1.1, Eq. 13.3-4: H_f = 1 + a1(z/h) + a2(z/h)^10, a1 = 1/T_a ≤ 2.5, a2 = 1 − (0.4/T_a)² ≥ 0'
+          : 'ASCE/SEI 7-22 §13.3.1.1, Eq. 13.3-5: H_f = 1 + 2.5(z/h), T_a not given',
+    },
+    ductility_factor: {
+      r_mu: c.ductility.rmu,
+      r_mu_formula: c.ductility.formula,
+      floored_at_1_3: c.ductility.floored,
+      building_r: building?.r ?? null,
+      building_omega0: building?.omega0 ?? null,
+      building_ie: building?.ie ?? null,
+      used: !c.atGrade,
+      clause: c.atGrade
+        ? 'ASCE/SEI 7-22 §13.3.1.2: R_μ = 1 at or below grade'
+        : 'ASCE/SEI 7-22 §13.3.1.2, Eq. 13.3-6: R_μ = (1.1 R/(I_e Ω0))^½ ≥ 1.3, the building’s R, Ω0, I_e',
+    },
+    component_factors: {
+      car: f.car,
+      rpo: f.rpo,
+      clause:
+        'C_AR and R_po as given in the equipment file (ASCE/SEI 7-22 §13.3.1; not looked up by this tool)',
+    },
+  };
+}
+
+/** The §11.9 vertical spectral demand, where the file gives its inputs: for information only. */
+function verticalSpectralFields(analysis: AnchorageAnalysis, force: (kN: number) => number) {
+  const v = analysis.verticalSpectral;
+  if (v === null) return {};
+  return {
+    spectral: {
+      sav_wp: force(v.forceKN),
+      sav_g: v.savG,
+      tv_s: v.periodS,
+      rigid: v.rigid,
+      cv: v.cv,
+      spectrum: v.description,
+      clause: `${analysis.equipment.code === 'asce7-22' ? 'ASCE/SEI 7-22' : 'ASCE/SEI 7-16'} §11.9.2 (S_av = 2/3 S_aMv), C_v by Table 11.9-1 (from memory)`,
+      use: 'for information only: governs nothing; the anchor forces use E_v = 0.2 S_DS W_p',
+    },
+  };
+}

@@ -18,7 +18,7 @@ export function anchorPlanInput(analysis: AnchorageAnalysis) {
     centroid: centroid(e.anchorsM).map(l) as [number, number],
     subtitle: [
       `Horizontal force for the anchors ${(analysis.horizontalForAnchorsKN / system.kNPerForce).toPrecision(4)} ${system.force} ` +
-        `(${analysis.governing === 'code' ? 'ASCE 7-16 §13.3.1 code force' : 'record elastic demand'}) at h_cg = ${Number(l(e.cgHeightM).toPrecision(4))} ${system.length}; W_p = ${(e.weightKN / system.kNPerForce).toPrecision(4)} ${system.force}`,
+        `(${analysis.governing === 'code' ? `${e.code === 'asce7-22' ? 'ASCE 7-22' : 'ASCE 7-16'} §13.3.1 code force` : 'record elastic demand'}) at h_cg = ${Number(l(e.cgHeightM).toPrecision(4))} ${system.length}; W_p = ${(e.weightKN / system.kNPerForce).toPrecision(4)} ${system.force}`,
       `Method: rigid base, elastic bolt group, anchor rule ${a.rule}${a.rule === 'projected' ? ' (T_i = M·d_i/Σd_j² − D/n, neutral axis perpendicular to the shaking)' : ' (general elastic solution, moment equilibrium about both plan axes)'}`,
     ],
     notes: [

@@ -24,5 +24,6 @@ export function designTable(spectrum: DesignSpectrum, periodsS: Float64Array, ps
   const rows = Array.from(psaG, (psa, i) =>
     alignRight([Number(periodsS[i].toPrecision(4)).toString(), psa.toPrecision(5)], widths),
   );
-  return terminalText([spectrum.description, '', alignRight(['T (s)', 'PSA (g)'], widths), ...rows]);
+  const header = spectrum.vertical ? ['T_v (s)', 'S_av (g)'] : ['T (s)', 'PSA (g)'];
+  return terminalText([spectrum.description, '', alignRight(header, widths), ...rows]);
 }

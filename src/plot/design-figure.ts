@@ -31,10 +31,12 @@ export function designFigure(input: DesignFigureInput): string {
   const drawn = densified(input);
   const damping = spectrum.damping === undefined ? 'not stated' : percentLabel(spectrum.damping);
   return lineChart({
-    title: 'Design spectrum, pseudo-acceleration PSA',
+    title: spectrum.vertical ? 'Vertical design spectrum S_av' : 'Design spectrum, pseudo-acceleration PSA',
     subtitle: [`Spectrum: ${spectrum.description}`, `Damping: ${damping}`],
-    x: { title: 'Period T (s)' },
-    y: { title: 'Pseudo-acceleration PSA (g)' },
+    x: { title: spectrum.vertical ? 'Vertical period T_v (s)' : 'Period T (s)' },
+    y: {
+      title: spectrum.vertical ? 'Vertical spectral acceleration S_av (g)' : 'Pseudo-acceleration PSA (g)',
+    },
     series: [
       {
         label: seriesLabel(spectrum),
@@ -49,6 +51,7 @@ export function designFigure(input: DesignFigureInput): string {
 
 /** The legend's name of the curve: the code's, with the ASCE 7-22 form. */
 function seriesLabel(spectrum: DesignSpectrum): string {
+  if (spectrum.vertical) return `${CODE_LABELS[spectrum.code]}, vertical (§11.9)`;
   const form = spectrum.code === 'asce7-22' ? spectrum.parameters.form : undefined;
   return form === undefined ? CODE_LABELS[spectrum.code] : `ASCE/SEI 7-22 ${form} design spectrum`;
 }

@@ -7,6 +7,8 @@ import { inputError, usageError } from '../base/errors.js';
 export interface DesignSpectrum {
   /** Where it comes from (an ASCE 7-22 spectrum states its form in `parameters.form`). */
   code: 'asce7-16' | 'asce7-22' | 'ec8' | 'table';
+  /** True for a vertical spectrum (ASCE/SEI 7 §11.9); horizontal otherwise. */
+  vertical?: boolean;
   /** One line for a reviewer: the standard, clause and parameters. */
   description: string;
   /** The defining parameters (g, s, fractions), as written to outputs. */
@@ -207,7 +209,7 @@ function spectrumName(spectrum: DesignSpectrum): string {
   const { code, parameters } = spectrum;
   if (code === 'table') return `table ${parameters.source}`;
   if (parameters.source !== undefined) return `${code} ${parameters.form} spectrum of ${parameters.source}`;
-  return `${code} spectrum`;
+  return `${code}${spectrum.vertical ? ' vertical' : ''} spectrum`;
 }
 
 function positive(name: string, value: number): void {

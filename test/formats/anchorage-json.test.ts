@@ -93,3 +93,39 @@ describe('anchorageToJson', () => {
     expect(() => formatJson(anchorageToJson(broken))).toThrow(/\(vertical\.ev = NaN\)/);
   });
 });
+
+describe('anchorageToJson of an ASCE/SEI 7-22 file', () => {
+  const pumpFile = 'records/equipment-pump-roof-7-22.json';
+  const pump = parseEquipment(readFileSync(pumpFile, 'utf8'), pumpFile);
+  const json = anchorageToJson(analyseAnchorage(pump, { elastic: null, demand: 'code' }));
+
+  it('states the edition and the clause beside every formula (ASCE/SEI 7-22 §13.3.1)', () => {
+    const h = json.horizontal;
+    expect(h.code).toBe('asce7-22');
+    if (h.code !== 'asce7-22') return;
+    expect(h.clauses.fp_code_formula).toMatch(/§13\.3\.1, Eq\. 13\.3-1/);
+    expect(h.clauses.fp_code_max).toMatch(/Eq\. 13\.3-2: 1\.6 S_DS I_p W_p/);
+    expect(h.clauses.fp_code_min).toMatch(/Eq\. 13\.3-3: 0\.3 S_DS I_p W_p/);
+    expect(h.height_factor.clause).toMatch(/§13\.3\.1\.1, Eq\. 13\.3-4/);
+    expect(h.ductility_factor.clause).toMatch(/§13\.3\.1\.2, Eq\. 13\.3-6/);
+    // hand: H_f = 1 + 1/0.7 + 1 − (0.4/0.7)² = 3.102041; R_μ = (8.8/3)^½ = 1.712698
+    expect(h.height_factor.h_f).toBeCloseTo(3.102040816, 8);
+    expect(h.ductility_factor.r_mu).toBeCloseTo(1.712697677, 8);
+    expect(h.component_factors).toMatchObject({ car: 1.4, rpo: 1.5 });
+  });
+
+  it('adds the vertical spectral demand, marked for information (§11.9)', () => {
+    expect(json.vertical.spectral?.sav_g).toBeCloseTo(0.9072, 12); // see test/anchorage/component-force.test.ts
+    expect(json.vertical.spectral?.use).toMatch(/for information only: governs nothing/);
+    expect(json.vertical.ev_clause).toMatch(/ASCE\/SEI 7-22 §13\.3\.1/);
+    expect(json.caution).toBe(CAUTION);
+  });
+
+  it('a 7-16 file gains none of these keys (its output stays as it was)', () => {
+    const old = anchorageToJson(analyseAnchorage(generator, { elastic: null, demand: 'code' }));
+    for (const key of ['code', 'clauses', 'height_factor', 'ductility_factor', 'component_factors']) {
+      expect(key in old.horizontal).toBe(false);
+    }
+    expect(Object.keys(old.vertical)).toEqual(['ev', 'dead_load_factor']);
+  });
+});

@@ -80,3 +80,35 @@ describe('anchorTable', () => {
     expect(lines.at(-2)?.startsWith('    ') || lines.at(-2)?.startsWith('  - ')).toBe(true);
   });
 });
+
+describe('anchorTable of an ASCE/SEI 7-22 file', () => {
+  const pumpFile = 'records/equipment-pump-roof-7-22.json';
+  const pump = parseEquipment(readFileSync(pumpFile, 'utf8'), pumpFile);
+  const text = anchorTable(analyseAnchorage(pump, { elastic: null, demand: 'code' }));
+
+  it('states the edition and a clause on every line of the force', () => {
+    expectCaution(text, '! ');
+    expect(text).toContain(
+      '          ASCE/SEI 7-22: C_AR 1.4, R_po 1.5, I_p 1, S_DS 1.2 g, Ω₀ (anchorage) 2',
+    );
+    expect(text).toContain('horizontal (ASCE/SEI 7-22 §13.3.1)');
+    expect(text).toMatch(/ {2}H_f +3\.102 +§13\.3\.1\.1 Eq\. 13\.3-4: a₁ 1\.429, a₂ 0\.6735/);
+    expect(text).toMatch(/ {2}R_μ +1\.713 +§13\.3\.1\.2 Eq\. 13\.3-6/);
+    // hand: 4.08·(3.102041/1.712698)(1.4/1.5) = 6.897 kN; bounds 0.3·1.2·8.5 = 3.06, 1.6·1.2·8.5 = 16.32
+    expect(text).toMatch(/F_p \(ASCE 7-22 Eq\. 13\.3-1\) +6\.897 kN/);
+    expect(text).toContain('bounds 3.060 (Eq. 13.3-3) to 16.32 kN (Eq. 13.3-2)');
+    expect(text).toMatch(/S_av\(T_v\)·W_p = 7\.711 kN .*information only, governs nothing/);
+  });
+
+  it('keeps the values of H_f, R_μ and F_p right-aligned in one column (common practice for tables)', () => {
+    const rows = block(text, 'horizontal (ASCE/SEI 7-22 §13.3.1)')
+      .slice(1)
+      .filter((row) => /^ {2}(H_f|R_μ|F_p)/.test(row));
+    expect(rows).toHaveLength(4);
+    // each value ends at column 45: two blanks, a 30-wide label, three blanks, a 10-wide value
+    for (const row of rows) {
+      expect(row.slice(0, 45)).toMatch(/\d$/);
+      expect(row[45]).toBe(' ');
+    }
+  });
+});

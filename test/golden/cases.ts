@@ -105,6 +105,20 @@ export const GOLDEN_CASES: GoldenCase[] = [
     name: 'design-ec8-csv',
     argv: w('design --code ec8 --type 2 --ground D --ag 0.3 --damping 10% --format csv'),
   },
+  {
+    name: 'design-vertical-7-16-table',
+    argv: w('design --vertical --code asce7-16 --sds 1 --ss 1.5 --site-class D'),
+  },
+  {
+    name: 'design-vertical-7-22-json-svg',
+    argv: w(
+      'design --vertical --code asce7-22 --sds 1.2 --ss 1.8 --site-class CD --out OUT/v.json --svg OUT',
+    ),
+  },
+  {
+    name: 'design-vertical-beyond-2s',
+    argv: w('design --vertical --code asce7-16 --sds 1 --ss 1 --site-class C --periods 0.1,3'),
+  },
   { name: 'design-table-file', argv: w('design --table IN/target.csv --format json --svg OUT') },
   {
     name: 'design-asce722-two-period',
@@ -154,6 +168,13 @@ export const GOLDEN_CASES: GoldenCase[] = [
     name: 'anchor-record-json-svg',
     argv: w(
       `anchor --equipment IN/equipment-generator.json --record ${H1} --record ${H2} --units g --out OUT/a.json --svg OUT`,
+    ),
+  },
+  { name: 'anchor-7-22-table', argv: w('anchor --equipment IN/equipment-pump-roof-7-22.json') },
+  {
+    name: 'anchor-7-22-spectrum-json-svg',
+    argv: w(
+      'anchor --equipment IN/equipment-pump-roof-7-22.json --spectrum IN/floor-spectrum.json --units g --out OUT/a.json --svg OUT',
     ),
   },
   {

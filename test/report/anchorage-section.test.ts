@@ -82,3 +82,32 @@ describe('anchorageSection', () => {
     expect(chosen?.slice(1)).toEqual(['54', 'choice "max", governing: record']);
   });
 });
+
+describe('anchorageSection of an ASCE/SEI 7-22 item', () => {
+  const pumpFile = 'records/equipment-pump-roof-7-22.json';
+  const pump = parseEquipment(readFileSync(pumpFile, 'utf8'), pumpFile);
+  const json = anchorageToJson(analyseAnchorage(pump, { elastic: null, demand: 'code' }));
+  const doc = new JSDOM(
+    `<!DOCTYPE html><body>${anchorageSection({ json, file: pumpFile, motion: 'none', figures: [] }, '8.3', 13)}</body>`,
+  ).window.document;
+
+  it('states the edition, the building and H_f and R_μ with their clauses', () => {
+    const inputs = Object.fromEntries(cells(doc, 0).map(([k, v]) => [k, v]));
+    expect(inputs['Code edition']).toBe('ASCE/SEI 7-22 (§13.3.1)');
+    expect(inputs['C_AR, R_po, I_p']).toBe('1.4, 1.5, 1');
+    expect(inputs['Building R, Ω₀, I_e; T_a']).toBe('8, 3, 1; 0.7');
+    expect(inputs['Height factor H_f']).toMatch(/^3\.102: ASCE\/SEI 7-22 §13\.3\.1\.1, Eq\. 13\.3-4/);
+    expect(inputs['Structure ductility reduction factor R_μ']).toMatch(
+      /^1\.713: ASCE\/SEI 7-22 §13\.3\.1\.2, Eq\. 13\.3-6/,
+    );
+    expect(inputs['Ω₀ of the anchorage']).toBe('2');
+  });
+
+  it('names Eq. 13.3-1 to 13.3-3 on the force row, and shows the vertical spectral demand for information', () => {
+    const forces = cells(doc, 1);
+    expect(forces[0][0]).toBe('F_p by ASCE/SEI 7-22 §13.3.1, Eq. 13.3-1');
+    expect(forces[0][2]).toMatch(/Eq\. 13\.3-3.*Eq\. 13\.3-2/);
+    const vertical = forces.find((row) => row[0].startsWith('Vertical spectral demand'));
+    expect(vertical?.[2]).toMatch(/governs nothing/);
+  });
+});

@@ -26,7 +26,7 @@ export function registerAnchor(program: Command): void {
   const command = program
     .command('anchor')
     .description(
-      'preliminary anchor demands (tension, shear) of rigidly based equipment: ASCE 7-16 §13.3.1 force and/or a record’s elastic demand',
+      'preliminary anchor demands (tension, shear) of rigidly based equipment: ASCE 7-16 or 7-22 §13.3.1 force and/or a record’s elastic demand',
     )
     .option('--equipment <file>', 'equipment description (JSON; see the README)')
     .option(

@@ -43,12 +43,16 @@ export async function runDemo({ out }: { out: string }): Promise<void> {
   const scaling = spectra.scaling as { factor: number } | undefined;
   if (scaling)
     lines.push('', `scale factor to the target at 5%: ${scaling.factor.toPrecision(4)} (not applied)`);
-  lines.push('', `${'equipment'.padEnd(52)} ${'horizontal'.padStart(12)} ${'max tension'.padStart(12)}`);
-  for (const n of [1, 2]) {
+  lines.push(
+    '',
+    `${'equipment'.padEnd(52)} ${'code'.padEnd(8)} ${'horizontal'.padStart(12)} ${'max tension'.padStart(12)}`,
+  );
+  for (const n of [1, 2, 3]) {
     const a = JSON.parse(readFileSync(join(out, `anchorage-${n}.json`), 'utf8'));
     const unit = a.force_unit as string;
+    const code = String(a.horizontal.code ?? 'asce7-16');
     lines.push(
-      `${String(a.equipment.name).padEnd(52)} ${`${a.horizontal.force_for_anchors.toPrecision(4)} ${unit}`.padStart(12)} ${`${a.anchors.max_tension.toPrecision(4)} ${unit}`.padStart(12)}`,
+      `${String(a.equipment.name).padEnd(52)} ${code.padEnd(8)} ${`${a.horizontal.force_for_anchors.toPrecision(4)} ${unit}`.padStart(12)} ${`${a.anchors.max_tension.toPrecision(4)} ${unit}`.padStart(12)}`,
     );
   }
   lines.push('(anchor demands only: capacities are not checked)');

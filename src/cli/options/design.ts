@@ -5,9 +5,10 @@ import { asce722MultiPeriodSpectrum } from '../../spectrum/asce722.js';
 import type { DesignSpectrum } from '../../spectrum/design.js';
 import { readSpectrumTable, tableSpectrum } from '../../spectrum/design-table.js';
 import { CODE_KEYS, type CodeTarget, codeTarget, DESIGN_CODES, isDesignCode } from '../../spectrum/target.js';
+import { type VerticalCliOptions, verticalFromOptions } from './vertical.js';
 
 /** The options of the `design` command: the spectrum and the periods it is given at. */
-export interface DesignCliOptions {
+export interface DesignCliOptions extends VerticalCliOptions {
   code?: string;
   sds?: string;
   sd1?: string;
@@ -35,11 +36,22 @@ export function addDesignOptions(command: Command): Command {
     .option('--ground <type>', 'Eurocode 8: ground type A, B, C, D or E')
     .option('--ag <g>', 'Eurocode 8: design ground acceleration on type A ground a_g, g')
     .option('--damping <ratio>', 'Eurocode 8: viscous damping for η, fraction or percentage (default 5%)')
-    .option('--table <file>', 'a two-column CSV of period (s) and PSA (g) instead of a code');
+    .option('--table <file>', 'a two-column CSV of period (s) and PSA (g) instead of a code')
+    .option(
+      '--vertical',
+      'ASCE 7-16/7-22: the §11.9 design vertical spectrum S_av (needs --sds, --ss, --site-class)',
+    )
+    .option('--ss <g>', 'with --vertical: the MCE_R short-period S_S, g (for C_v, Table 11.9-1)')
+    .option('--site-class <class>', 'with --vertical: site class (7-16: A–F; 7-22 also BC, CD, DE)');
 }
 
 /** Build the design spectrum the options describe, reading the table file if one is named. */
 export function designFromOptions(options: DesignCliOptions): DesignSpectrum {
+  if (options.vertical) return verticalFromOptions({ ...options });
+  for (const key of ['ss', 'siteClass'] as const) {
+    if (options[key] !== undefined)
+      throw usageError(`--${key === 'ss' ? 'ss' : 'site-class'} applies to --vertical only`);
+  }
   const code = options.code?.trim().toLowerCase();
   const fields = { ...options, 'multi-period': options.multiPeriod };
   if (options.table !== undefined) {

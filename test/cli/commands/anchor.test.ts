@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { runAnchor } from '../../../src/cli/commands/anchor.js';
 import { runFloor } from '../../../src/cli/commands/floor.js';
+import { expectOneLineFailure, runMain } from '../../helpers/run-cli.js';
 
 describe('floor → anchor --spectrum (the floor JSON is the spectrum contract plus the building)', () => {
   it('round-trips, and the anchor JSON keeps the caution first', async () => {
@@ -69,5 +70,49 @@ describe('floor → anchor --spectrum (the floor JSON is the spectrum contract p
         dt: '0.01',
       }),
     ).rejects.toThrow(/does not describe its floor/);
+  });
+});
+
+describe('anchor with a 7-22 file: one line naming the file and key, exit 2', () => {
+  const folder = mkdtempSync(join(tmpdir(), 'quakesweep-anchor-7-22-'));
+  const write = (name: string, fields: object) => {
+    const path = join(folder, name);
+    writeFileSync(
+      path,
+      JSON.stringify({
+        name: 'Fan (invented)',
+        units: 'SI',
+        weight: 5,
+        cg_height: 0.4,
+        anchors: [
+          [0, 0],
+          [1, 0],
+          [0, 1],
+        ],
+        period_s: 'rigid',
+        damping: 0.05,
+        z: 6,
+        h: 12,
+        code: 'asce7-22',
+        car: 1,
+        rpo: 1.5,
+        ip: 1,
+        sds: 1,
+        ...fields,
+      }),
+    );
+    return path;
+  };
+
+  it('R_μ inputs missing above grade', async () => {
+    const file = write('no-building.json', {});
+    const line = expectOneLineFailure(await runMain(['anchor', '--equipment', file]));
+    expect(line).toContain(`${file}: "building_r" is missing: a component above grade (z > 0)`);
+  });
+
+  it('a_p in a 7-22 file', async () => {
+    const file = write('ap.json', { ap: 2.5, building_r: 8, building_omega0: 3, building_ie: 1 });
+    const line = expectOneLineFailure(await runMain(['anchor', '--equipment', file]));
+    expect(line).toMatch(/ap\.json:1: "ap" is an ASCE\/SEI 7-16 coefficient/);
   });
 });

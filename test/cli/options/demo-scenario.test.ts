@@ -26,12 +26,13 @@ describe('shown', () => {
 describe('demoReport', () => {
   const { source, options } = demoReport(recordsFolder(), 'demo-out');
 
-  it('reads H1 with H2 as its pair and the two invented pieces of equipment', () => {
+  it('reads H1 with H2 as its pair and the three invented pieces of equipment (two ASCE 7-16, one 7-22)', () => {
     expect(source).toBe(join('records', 'marrowby-h1.csv'));
     expect(options.pair).toBe(join('records', 'marrowby-h2.csv'));
     expect(options.equipment).toEqual([
       join('records', 'equipment-generator.json'),
       join('records', 'equipment-cabinet-floor4.json'),
+      join('records', 'equipment-pump-roof-7-22.json'),
     ]);
     expect(options.out).toBe('demo-out');
     expect(options.name).toMatch(/\(invented\)$/);
@@ -60,6 +61,6 @@ describe('demoReport', () => {
     expect(request.target?.spectrum.psaG(1)).toBeCloseTo(0.6, 12); // S_D1/T at 1 s (ASCE 7-16 §11.4.6)
     expect(request.building?.periodS).toBe(0.8);
     expect(request.pair?.record.dtS).toBe(request.read.dtS);
-    expect(inputs).toHaveLength(4);
+    expect(inputs).toHaveLength(5); // H1, H2 and the three equipment files
   });
 });
