@@ -17,6 +17,7 @@ export interface DesignCliOptions {
   damping?: string;
   table?: string;
   periods?: string;
+  frequencies?: string;
 }
 
 export function addDesignOptions(command: Command): Command {
