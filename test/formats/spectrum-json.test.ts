@@ -24,6 +24,7 @@ describe('spectrumToJson', () => {
       'method',
       'method_description',
       'periods_s',
+      'frequencies_hz',
       'spectra',
     ]);
     expect(json.caution).toBe(CAUTION);
