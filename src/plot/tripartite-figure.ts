@@ -106,7 +106,9 @@ function drawDiagonals(context: PanelContext, unit: string, gInUnit: number): vo
     for (const value of family.values) {
       const segment = family.segment(value);
       if (!segment) continue;
-      const [ax, ay, bx, by] = [x(segment.t0), y(segment.v0), x(segment.t1), y(segment.v1)];
+      const ends = [x(segment.t0), y(segment.v0), x(segment.t1), y(segment.v1)];
+      // Left end first, so that the label reads left to right on a frequency axis too.
+      const [ax, ay, bx, by] = ends[0] <= ends[2] ? ends : [ends[2], ends[3], ends[0], ends[1]];
       const length = Math.hypot(bx - ax, by - ay);
       const text = `${formatLogValue(value)} ${family.unit}`;
       const half = textWidthPx(text, DIAGONAL_PX) / 2 + 3;
