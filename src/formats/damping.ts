@@ -3,6 +3,7 @@ import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { DampingComparison, DampingCurveComparison } from '../spectrum/damping.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
+import { frequenciesHz } from './frequency.js';
 import {
   alignRight,
   columnsByDamping,
@@ -46,6 +47,7 @@ export function dampingToJson(spectrum: Spectrum, comparison: DampingComparison,
     reference_added: added,
     published_sources: SOURCES,
     periods_s: Array.from(comparison.periodsS),
+    frequencies_hz: frequenciesHz(comparison.periodsS),
     spectra: comparison.curves.map((curve) => ({
       damping: curve.damping,
       psa_g: toG(curve.psaMS2),

@@ -1,5 +1,6 @@
 import { CAUTION } from '../base/caution.js';
 import type { DesignSpectrum } from '../spectrum/design.js';
+import { frequenciesHz } from './frequency.js';
 import { alignRight, csvText, terminalText } from './layout.js';
 
 export function designToJson(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array) {
@@ -10,11 +11,15 @@ export function designToJson(spectrum: DesignSpectrum, periodsS: Float64Array, p
     parameters: spectrum.parameters,
     damping: spectrum.damping ?? null,
     periods_s: Array.from(periodsS),
+    frequencies_hz: frequenciesHz(periodsS),
     psa_g: Array.from(psaG),
   };
 }
 
-/** The caution and the description on `#` lines, then `period_s,psa_g` (readable again by --table). */
+/**
+ * The caution and the description on `#` lines, then `period_s,frequency_hz,psa_g` (readable
+ * again by --table, which passes the frequency over).
+ */
 export function designToCsv(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array): string {
   return csvText([`spectrum: ${spectrum.description}`], periodsS, [{ name: 'psa_g', at: (p) => psaG[p] }]);
 }

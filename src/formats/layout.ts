@@ -2,6 +2,7 @@ import { cautionLines, wrapText } from '../base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
 import { notFiniteError } from './finite.js';
+import { frequencyHz } from './frequency.js';
 
 /** Percent label of a damping ratio, e.g. 0.05 → "5%". */
 export function dampingLabel(damping: number): string {
@@ -56,16 +57,16 @@ export function columnsByDamping<Curve extends { damping: number }>(
 
 /**
  * CSV text: the caution and the `notes` on `#` lines (each kept on one line, as names from files
- * may hold line breaks), then the header and one row per period. A value that is not finite is
- * refused (see finite.ts), naming its column.
+ * may hold line breaks), then the header and one row per period, the period and its frequency
+ * f = 1/T first (empty at T = 0). A value that is not finite is refused (see finite.ts), naming its column.
  */
 export function csvText(notes: readonly string[], periodsS: Float64Array, columns: readonly PeriodColumn[]) {
-  const header = ['period_s', ...columns.map((c) => c.name)];
+  const header = ['period_s', 'frequency_hz', ...columns.map((c) => c.name)];
   const oneLineNotes = notes.map((note) => note.replace(/[\r\n]+/g, ' '));
   const lines = [...cautionLines(), ...oneLineNotes].map((line) => `# ${line}`);
   lines.push(header.join(','));
   for (let p = 0; p < periodsS.length; p++) {
-    const cells = [periodsS[p], ...columns.map((c) => c.at(p))];
+    const cells = [periodsS[p], frequencyHz(periodsS[p]), ...columns.map((c) => c.at(p))];
     const bad = cells.findIndex((cell) => cell !== null && !Number.isFinite(cell));
     if (bad >= 0) throw notFiniteError(`${header[bad]} at ${periodsS[p]} s = ${cells[bad]}`);
     lines.push(cells.join(','));

@@ -2,6 +2,7 @@ import { CAUTION } from '../base/caution.js';
 import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { RotDCurve, RotDSpectra } from '../spectrum/rotd.js';
+import { frequenciesHz } from './frequency.js';
 import { columnsByDamping, csvText, periodTable, pgaText, recordLine, terminalText } from './layout.js';
 import { recordToJson, toG } from './spectrum-json.js';
 
@@ -31,6 +32,7 @@ export function rotdToJson(spectra: RotDSpectra) {
     padded_samples: spectra.paddedSamples,
     notes: notes(spectra),
     periods_s: Array.from(spectra.periodsS),
+    frequencies_hz: frequenciesHz(spectra.periodsS),
     spectra: spectra.curves.map((curve) => ({
       damping: curve.damping,
       rotd50_g: toG(curve.rotd50MS2),

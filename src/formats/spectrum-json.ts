@@ -3,6 +3,7 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { assertFiniteResult } from './finite.js';
+import { frequenciesHz } from './frequency.js';
 
 /** Accelerations, m/s², in g. */
 export const toG = (values: Float64Array): number[] =>
@@ -28,6 +29,7 @@ export function spectrumToJson(spectrum: Spectrum) {
     method: spectrum.method,
     method_description: METHOD_DESCRIPTIONS[spectrum.method],
     periods_s: Array.from(spectrum.periodsS),
+    frequencies_hz: frequenciesHz(spectrum.periodsS),
     spectra: spectrum.curves.map((curve) => ({
       damping: curve.damping,
       sd_m: Array.from(curve.sdM),

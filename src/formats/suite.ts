@@ -3,6 +3,7 @@ import { compareText } from '../batch/glob.js';
 import type { Shard } from '../batch/shard.js';
 import { STATISTICS_METHOD, suiteStatistics } from '../batch/statistics.js';
 import type { RecordOutcome, SuiteSettings } from '../batch/work.js';
+import { frequenciesHz } from './frequency.js';
 
 /** A record of the suite that was swept, with its PSA in g (per damping, per period). */
 export interface SuiteRecord {
@@ -28,6 +29,7 @@ export function suiteJson(
     records: sorted.map((r) => r.name),
     failed: [...failed].sort((a, b) => compareText(a.file, b.file)),
     periods_s: [...settings.periodsS],
+    frequencies_hz: frequenciesHz(settings.periodsS),
     statistics: STATISTICS_METHOD,
     spectra: suiteStatistics(sorted, settings.dampings, settings.periodsS.length),
   };

@@ -58,6 +58,58 @@ export function parsePeriods(text: string): Float64Array {
   return Float64Array.from(values);
 }
 
+/** Highest frequency a grid may hold, Hz: that of MIN_PERIOD_S (10 kHz). */
+export const MAX_FREQUENCY_HZ = 1 / MIN_PERIOD_S;
+
+/**
+ * Parse a frequency grid, Hz, into the period grid the sweep runs on (T = 1/f, ascending as every
+ * period grid is, so the highest frequency comes first): a comma list (`1,2,5,10`) or `a:b:n`, n
+ * frequencies log-spaced from a to b Hz (the same periods as n log-spaced from 1/b to 1/a s).
+ * Frequencies must be finite, > 0 and at most MAX_FREQUENCY_HZ; duplicates are refused.
+ */
+export function parseFrequencies(text: string): Float64Array {
+  const spec = text.trim();
+  let values: number[];
+  if (spec.includes(':')) {
+    const parts = spec.split(':');
+    if (parts.length !== 3) throw usageError(`--frequencies '${text}': use a:b:n, e.g. 0.1:100:100`);
+    const [from, to, count] = parts.map((part) => Number(part.trim()));
+    if (!(from > 0) || !(to > from) || !Number.isFinite(to))
+      throw usageError(`--frequencies '${text}': need 0 < a < b, in Hz`);
+    if (to > MAX_FREQUENCY_HZ) throw usageError(tooHigh(text, to));
+    if (!Number.isInteger(count) || count < 2)
+      throw usageError(`--frequencies '${text}': n must be an integer ≥ 2`);
+    if (count > MAX_OSCILLATORS)
+      throw usageError(`--frequencies '${text}': n = ${count} is more than ${MAX_OSCILLATORS}`);
+    values = logSpaced(from, to, count);
+  } else {
+    values = spec.split(',').map((part) => {
+      const value = Number(part.trim());
+      if (part.trim() === '' || !Number.isFinite(value))
+        throw usageError(`--frequencies: '${part}' is not a number`);
+      if (!(value > 0))
+        throw usageError(`--frequencies: ${value} Hz is not above 0; for T = 0 (rigid) use --periods`);
+      if (value > MAX_FREQUENCY_HZ) throw usageError(tooHigh(text, value));
+      return value;
+    });
+  }
+  values.sort((a, b) => b - a);
+  for (let i = 1; i < values.length; i++) {
+    if (values[i] === values[i - 1]) throw usageError(`--frequencies: ${values[i]} Hz appears twice`);
+  }
+  const periodsS = Float64Array.from(values, (f) => 1 / f);
+  // 1/f is monotone, so only frequencies a rounding apart could meet in one period.
+  for (let i = 1; i < periodsS.length; i++) {
+    if (!(periodsS[i] > periodsS[i - 1]))
+      throw usageError(`--frequencies: ${values[i - 1]} and ${values[i]} Hz give the same period`);
+  }
+  return periodsS;
+}
+
+function tooHigh(text: string, frequencyHz: number): string {
+  return `--frequencies '${text}': ${frequencyHz} Hz is above ${MAX_FREQUENCY_HZ} Hz (T < ${MIN_PERIOD_S} s)`;
+}
+
 function tooShort(text: string, periodS: number): string {
   return `--periods '${text}': ${periodS} s is shorter than ${MIN_PERIOD_S} s; use 0 for a rigid oscillator`;
 }

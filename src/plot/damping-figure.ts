@@ -2,7 +2,8 @@ import type { DampingComparison, DampingCurveComparison } from '../spectrum/damp
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
 import { renderFigure } from './figure.js';
 import type { PanelContext, PanelSpec, Series } from './panel.js';
-import { inG, PERIOD_AXIS } from './spectrum-figure.js';
+import { type PeriodAxis, periodAxisSpec } from './period-axis.js';
+import { inG } from './spectrum-figure.js';
 import { seriesStyle, TEXT_COLOUR } from './styles.js';
 import { methodLine, percentLabel, processingLines, recordLine, zeroPeriodNotes } from './text.js';
 
@@ -11,6 +12,8 @@ export interface DampingFigureInput {
   /** How the oscillators were solved, one line. */
   methodDescription: string;
   comparison: DampingComparison;
+  /** The horizontal axis: period T (default) or frequency f = 1/T. */
+  axis?: PeriodAxis;
 }
 
 /**
@@ -98,10 +101,11 @@ export function dampingFigure(input: DampingFigureInput): string {
   const high = ratios.reduce((m, v) => Math.max(m, v), 1);
   const pad = 0.06 * (high - low || 1);
   const psaTitle = `PSA(ζ) / PSA(${reference})`;
+  const xAxis = periodAxisSpec(input.axis);
   const panels: PanelSpec[] = [
     {
       heightPx: 250,
-      x: PERIOD_AXIS,
+      x: xAxis,
       y: { title: 'PSA (g)' },
       series: curveSeries((curve) => inG(curve.psaMS2), true),
       xLabels: false,
@@ -109,7 +113,7 @@ export function dampingFigure(input: DampingFigureInput): string {
     {
       heightPx: 230,
       gapAbovePx: 16,
-      x: PERIOD_AXIS,
+      x: xAxis,
       y: { title: psaTitle, scale: 'linear', domain: [Math.max(0, low - pad), high + pad] },
       series: [...referenceSeries, ...ratioSeries, ...legendSamples],
       overlay: (context) => labelReferences(context, references, colourOf),
@@ -128,7 +132,7 @@ export function dampingFigure(input: DampingFigureInput): string {
     notes: [
       `Bottom: the record's PSA at each damping ratio divided by its PSA at ${reference}, period by period. Thin horizontal lines, in the colour of their damping ratio and dashed by source: the published ratios for that damping, labelled at the right.`,
       'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
-      ...zeroPeriodNotes(periods, ' (there every ratio is 1)'),
+      ...zeroPeriodNotes(periods, ' (there every ratio is 1)', input.axis),
     ],
   });
 }

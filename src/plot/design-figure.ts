@@ -1,5 +1,6 @@
 import type { DesignSpectrum } from '../spectrum/design.js';
 import { lineChart } from './line-chart.js';
+import { type PeriodAxis, periodAxisSpec } from './period-axis.js';
 import { overlayStyle } from './styles.js';
 import { formatValue, percentLabel, zeroPeriodNotes } from './text.js';
 
@@ -16,16 +17,22 @@ export interface DesignFigureInput {
   periodsS: ArrayLike<number>;
   /** PSA at those periods, g. */
   psaG: ArrayLike<number>;
+  /** The horizontal axis: period T (default) or frequency f = 1/T. */
+  axis?: PeriodAxis;
 }
 
 /**
- * A code design spectrum, PSA (g) against period on log–log axes, drawn as the reference curves
+ * A code design spectrum, PSA (g) against period (or frequency) on log–log axes, drawn as the reference curves
  * are drawn over record spectra. T = 0 cannot sit on a log axis: it is left off and its value stated.
  */
 export function designFigure(input: DesignFigureInput): string {
   const { spectrum } = input;
   const notes = [
-    ...zeroPeriodNotes(input.periodsS, (zero) => ` (there PSA = ${formatValue(input.psaG[zero])} g)`),
+    ...zeroPeriodNotes(
+      input.periodsS,
+      (zero) => ` (there PSA = ${formatValue(input.psaG[zero])} g)`,
+      input.axis,
+    ),
     'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',
   ];
   const drawn = densified(input);
@@ -33,7 +40,13 @@ export function designFigure(input: DesignFigureInput): string {
   return lineChart({
     title: spectrum.vertical ? 'Vertical design spectrum S_av' : 'Design spectrum, pseudo-acceleration PSA',
     subtitle: [`Spectrum: ${spectrum.description}`, `Damping: ${damping}`],
-    x: { title: spectrum.vertical ? 'Vertical period T_v (s)' : 'Period T (s)' },
+    x: spectrum.vertical
+      ? {
+          ...periodAxisSpec(input.axis),
+          title:
+            input.axis === 'frequency' ? 'Vertical frequency f_v = 1/T_v (Hz)' : 'Vertical period T_v (s)',
+        }
+      : periodAxisSpec(input.axis),
     y: {
       title: spectrum.vertical ? 'Vertical spectral acceleration S_av (g)' : 'Pseudo-acceleration PSA (g)',
     },

@@ -2,7 +2,8 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext, Series } from './panel.js';
-import { inG, PERIOD_AXIS, PSA_AXIS } from './spectrum-figure.js';
+import { type PeriodAxis, periodAxisSpec, periodLabel } from './period-axis.js';
+import { inG, PSA_AXIS } from './spectrum-figure.js';
 import { DAMPING_DASHES, MARK_LABEL, MARK_LINE, type SeriesStyle } from './styles.js';
 import {
   formatValue,
@@ -24,11 +25,14 @@ export interface FloorFigureInput {
   broadening?: number | null;
   building: { periodS: number; damping: number; modalFactor: number };
   methodDescription: string;
+  /** The horizontal axis: period T (default) or frequency f = 1/T. */
+  axis?: PeriodAxis;
 }
 
 /**
  * The in-structure (floor) PSA spectrum against the ground spectrum it came from, and the floor
- * spectrum before peak broadening when it was broadened; log–log, with the building period marked.
+ * spectrum before peak broadening when it was broadened; log–log, with the building period marked,
+ * against period or frequency.
  */
 export function floorFigure(input: FloorFigureInput): string {
   const { ground, floor } = input;
@@ -60,25 +64,27 @@ export function floorFigure(input: FloorFigureInput): string {
     ...zeroPeriodNotes(
       floor.periodsS,
       ' (there PSA is the peak acceleration, the floor and ground PGA given above)',
+      input.axis,
     ),
   ];
   return lineChart({
     title: 'Floor response spectrum against the ground spectrum, PSA',
     subtitle,
-    x: PERIOD_AXIS,
+    x: periodAxisSpec(input.axis),
     y: PSA_AXIS,
     series,
     notes,
-    underlay: (context) => markBuildingPeriod(context, b.periodS),
+    underlay: (context) => markBuildingPeriod(context, b.periodS, input.axis),
   });
 }
 
-function markBuildingPeriod(context: PanelContext, periodS: number): void {
+/** The building period as a dotted line; the context's x and xDomain are in periods on either axis. */
+function markBuildingPeriod(context: PanelContext, periodS: number, axis?: PeriodAxis): void {
   const { doc, group, x, plot, xDomain } = context;
   if (!(periodS >= xDomain[0] && periodS <= xDomain[1])) return;
   const px = x(periodS);
   const mark = doc.element(group, 'g', { class: 'building-period', 'data-period-s': periodS });
   const ends = { x1: px, x2: px, y1: plot.top, y2: plot.top + plot.height };
   doc.element(mark, 'line', { ...ends, ...MARK_LINE, 'stroke-dasharray': '1 3' });
-  doc.text(mark, `T_b = ${periodS} s`, { x: px + 4, y: plot.top + 12, ...MARK_LABEL });
+  doc.text(mark, periodLabel('_b', periodS, axis), { x: px + 4, y: plot.top + 12, ...MARK_LABEL });
 }

@@ -20,6 +20,7 @@ export {
   type PanelSpec,
   type Series,
 } from './panel.js';
+export { PERIOD_AXES, type PeriodAxis, periodAxisSpec } from './period-axis.js';
 export { type RotDFigureInput, rotdFigure } from './rotd-figure.js';
 export {
   type PsaFigureOptions,

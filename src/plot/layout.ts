@@ -11,7 +11,12 @@ export interface PanelLayout {
   series: { series: Series; style: SeriesStyle }[];
   xScale: AxisScale;
   yScale: AxisScale;
+  /** The x extent in the data's units (periods on a frequency axis). */
   xDomain: readonly [number, number];
+  /** The x extent along the axis: `xDomain`, or its reciprocal ascending on a reciprocal axis. */
+  xAxisDomain: readonly [number, number];
+  /** A data x as a value along the axis: itself, or 1/x on a reciprocal axis (f = 1/T). */
+  toXAxis: (x: number) => number;
   yDomain: readonly [number, number];
   yTicks: AxisTicks;
   yLabelWidthPx: number;
@@ -25,12 +30,21 @@ export function layoutPanel(spec: PanelSpec): PanelLayout {
   const xScale = spec.x.scale ?? 'log';
   const yScale = spec.y.scale ?? 'log';
   const series = spec.series.map((s, i) => ({ series: s, style: { ...seriesStyle(i), ...s.style } }));
-  const xDomain = spec.x.domain ?? dataDomain(spec.series, 'x', xScale, yScale);
-  const yDomain = spec.y.domain ?? yAxisDomain(dataDomain(spec.series, 'y', xScale, yScale), yScale, spec.y);
+  const toXAxis = spec.x.reciprocal ? reciprocal : identity;
+  const axes = { xScale, yScale, toXAxis };
+  const xDomain = spec.x.domain ?? dataDomain(spec.series, 'x', axes);
+  const yDomain = spec.y.domain ?? yAxisDomain(dataDomain(spec.series, 'y', axes), yScale, spec.y);
+  const xAxisDomain: readonly [number, number] = spec.x.reciprocal
+    ? [1 / Math.max(...xDomain), 1 / Math.min(...xDomain)]
+    : xDomain;
   const yTicks = axisTicks(yScale, yDomain, spec.heightPx, 'y');
   const yLabelWidthPx = Math.max(0, ...yTicks.labels.map((l) => textWidthPx(l.text, tickPx)));
-  return { spec, series, xScale, yScale, xDomain, yDomain, yTicks, yLabelWidthPx };
+  return { spec, series, xScale, yScale, xDomain, xAxisDomain, toXAxis, yDomain, yTicks, yLabelWidthPx };
 }
+
+const identity = (x: number) => x;
+/** Frequency f = 1/T of a period T (and back): 1/0 = ∞, which no axis draws. */
+const reciprocal = (x: number) => 1 / x;
 
 /** A y axis over the data's extent: widened to 1-2-5 values (log), made nice from 0 or about 0 (linear). */
 function yAxisDomain([low, high]: [number, number], scale: AxisScale, axis: AxisSpec): [number, number] {
@@ -40,19 +54,18 @@ function yAxisDomain([low, high]: [number, number], scale: AxisScale, axis: Axis
   return scaleLinear().domain(extent).nice().domain() as [number, number];
 }
 
-/** The extent of the drawable points of all series along one coordinate. */
+/** The extent of the drawable points of all series along one coordinate, in the data's units. */
 function dataDomain(
   series: readonly Series[],
   axis: 'x' | 'y',
-  xScale: AxisScale,
-  yScale: AxisScale,
+  { xScale, yScale, toXAxis }: { xScale: AxisScale; yScale: AxisScale; toXAxis: (x: number) => number },
 ): [number, number] {
   const scale = axis === 'x' ? xScale : yScale;
   let low = Number.POSITIVE_INFINITY;
   let high = Number.NEGATIVE_INFINITY;
   for (const s of series) {
     for (let i = 0; i < s.x.length; i++) {
-      if (!drawable(s.x[i], s.y[i], xScale, yScale)) continue;
+      if (!drawable(toXAxis(s.x[i]), s.y[i], xScale, yScale)) continue;
       const v = axis === 'x' ? s.x[i] : s.y[i];
       low = Math.min(low, v);
       high = Math.max(high, v);

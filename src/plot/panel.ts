@@ -24,6 +24,12 @@ export interface AxisSpec {
   domain?: readonly [number, number];
   /** Linear axes only: make the domain symmetric about zero (time histories). */
   symmetric?: boolean;
+  /**
+   * x axes only: draw the reciprocal of the data, e.g. frequency f = 1/T of series given by period
+   * T. The ticks are of 1/x (ascending to the right); `domain`, and the panel context's `x` and
+   * `xDomain`, stay in the data's units; x = 0 (f = ∞) cannot be drawn and is left out.
+   */
+  reciprocal?: boolean;
 }
 
 /** One curve: points (x[i], y[i]); points that cannot be drawn on a log axis (≤ 0) are left out. */
@@ -52,7 +58,10 @@ export interface PlotBox {
   height: number;
 }
 
-/** What a panel's decorations draw with: its spec, its settled axes, its scales and its frame. */
+/**
+ * What a panel's decorations draw with: its spec, its settled axes, its scales and its frame; `x`
+ * and `xDomain` are in the data's units (periods on a reciprocal, frequency, axis).
+ */
 export type PanelContext = Pick<PanelLayout, 'spec' | 'xScale' | 'yScale' | 'xDomain' | 'yDomain'> & {
   doc: SvgDocument;
   group: SVGElement;
@@ -78,16 +87,18 @@ export interface PanelSpec {
 
 /** Draw one panel in its frame: grid, underlay, curves, frame, ticks, axis titles, overlay. */
 export function drawPanel(doc: SvgDocument, layout: PanelLayout, plot: PlotBox, index: number): void {
-  const { spec, xScale, yScale, xDomain, yDomain, yTicks } = layout;
-  const x = makeScale(xScale, xDomain, [plot.left, plot.left + plot.width]);
+  const { spec, xScale, yScale, xDomain, yDomain, yTicks, xAxisDomain, toXAxis } = layout;
+  // xAxis places values of the axis (its ticks), x places the data (the two differ when reciprocal).
+  const xAxis = makeScale(xScale, xAxisDomain, [plot.left, plot.left + plot.width]);
+  const x = spec.x.reciprocal ? (v: number) => xAxis(toXAxis(v)) : xAxis;
   const y = makeScale(yScale, yDomain, [plot.top + plot.height, plot.top]);
   const group = doc.element(doc.root, 'g', { class: 'panel', 'data-panel': index });
   const context: PanelContext = { doc, group, spec, x, y, xDomain, yDomain, xScale, yScale, plot };
-  const xTicks = axisTicks(xScale, xDomain, plot.width, 'x');
+  const xTicks = axisTicks(xScale, xAxisDomain, plot.width, 'x');
   const bottom = plot.top + plot.height;
   const right = plot.left + plot.width;
   const vertical = (parent: Element, v: number, y1: number, y2: number, stroke?: string) =>
-    doc.element(parent, 'line', { x1: x(v), x2: x(v), y1, y2, stroke });
+    doc.element(parent, 'line', { x1: xAxis(v), x2: xAxis(v), y1, y2, stroke });
   const horizontal = (parent: Element, v: number, x1: number, x2: number, stroke?: string) =>
     doc.element(parent, 'line', { x1, x2, y1: y(v), y2: y(v), stroke });
 
@@ -107,7 +118,7 @@ export function drawPanel(doc: SvgDocument, layout: PanelLayout, plot: PlotBox, 
   const curves = doc.element(group, 'g', { class: 'curves', fill: 'none', 'clip-path': `url(#${clipId})` });
   for (const { series, style } of layout.series) {
     const count = Math.min(series.x.length, series.y.length);
-    const canDraw = (i: number) => drawable(series.x[i], series.y[i], xScale, yScale);
+    const canDraw = (i: number) => drawable(toXAxis(series.x[i]), series.y[i], xScale, yScale);
     const column = (i: number) => x(series.x[i]);
     const indices = series.decimate
       ? decimatedIndices(count, column, (i) => series.y[i], canDraw)
@@ -138,7 +149,7 @@ export function drawPanel(doc: SvgDocument, layout: PanelLayout, plot: PlotBox, 
   drawTickLabels(doc, labels, 'y', yTicks, (v) => ({ x: plot.left - 7, y: y(v) + tickPx * 0.35 }));
   drawAxisTitle(doc, group, 'y', spec.y.title, [sidePx + axisTitlePx, plot.top + plot.height / 2]);
   if (spec.xLabels !== false) {
-    drawTickLabels(doc, labels, 'x', xTicks, (v) => ({ x: x(v), y: bottom + 7 + tickPx }));
+    drawTickLabels(doc, labels, 'x', xTicks, (v) => ({ x: xAxis(v), y: bottom + 7 + tickPx }));
     drawAxisTitle(doc, group, 'x', spec.x.title, [
       plot.left + plot.width / 2,
       bottom + 7 + tickPx + 6 + axisTitlePx,

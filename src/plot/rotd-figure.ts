@@ -2,7 +2,8 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
 import { lineChart } from './line-chart.js';
 import type { Series } from './panel.js';
-import { inG, PERIOD_AXIS, PSA_AXIS } from './spectrum-figure.js';
+import { type PeriodAxis, periodAxisSpec } from './period-axis.js';
+import { inG, PSA_AXIS } from './spectrum-figure.js';
 import { DAMPING_DASHES } from './styles.js';
 import { formatValue, methodLine, percentLabel, recordLine, zeroPeriodNotes } from './text.js';
 
@@ -10,6 +11,8 @@ export interface RotDFigureInput {
   spectra: RotDSpectra;
   /** How the oscillators were solved, one line. */
   methodDescription: string;
+  /** The horizontal axis: period T (default) or frequency f = 1/T. */
+  axis?: PeriodAxis;
 }
 
 /** Colour by measure (Okabe and Ito 2008), dash by damping ratio. */
@@ -50,12 +53,13 @@ export function rotdFigure(input: RotDFigureInput): string {
     ...zeroPeriodNotes(
       spectra.periodsS,
       (zero) => ` (there RotD50 = ${inGAt(rotd50MS2, zero)} g, RotD100 = ${inGAt(rotd100MS2, zero)} g)`,
+      input.axis,
     ),
   ];
   return lineChart({
     title: 'Two-component spectra: RotD50, RotD100 and geometric mean PSA',
     subtitle,
-    x: PERIOD_AXIS,
+    x: periodAxisSpec(input.axis),
     y: PSA_AXIS,
     series,
     notes,

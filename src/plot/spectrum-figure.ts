@@ -2,6 +2,7 @@ import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/uni
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { type LineChartOptions, lineChart } from './line-chart.js';
 import type { AxisScale, Series } from './panel.js';
+import { type PeriodAxis, periodAxisSpec } from './period-axis.js';
 import { overlayStyle } from './styles.js';
 import {
   formatValue,
@@ -19,6 +20,8 @@ export interface SpectrumFigureOptions {
   lengthUnit?: LengthUnit;
   /** How the oscillators were solved, for the subtitle; default the method's name. */
   methodDescription?: string;
+  /** The horizontal axis: period T (default) or frequency f = 1/T, log-spaced either way. */
+  axis?: PeriodAxis;
 }
 
 /** A curve drawn over the data, e.g. a target design spectrum; PSA in g at periods in s. */
@@ -32,7 +35,6 @@ export interface PsaFigureOptions extends SpectrumFigureOptions {
   overlays?: readonly PsaOverlay[];
 }
 
-export const PERIOD_AXIS = { title: 'Period T (s)' };
 export const PSA_AXIS = { title: 'Pseudo-acceleration PSA (g)' };
 
 /** Accelerations in m/s² as values in g. */
@@ -86,15 +88,18 @@ export function spectrumChart(
           }),
         );
   const axes = chart.axes ?? options.axes ?? 'log';
+  const axis = options.axis ?? 'period';
   const pga = ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`;
+  // T = 0 cannot be drawn on a log period axis, nor at f = ∞ on any frequency axis.
+  const zeroLeftOff = axes === 'log' || axis === 'frequency';
   return lineChart({
     ...chart,
     subtitle: spectrumSubtitle(spectrum, options.methodDescription),
-    x: PERIOD_AXIS,
+    x: periodAxisSpec(axis),
     axes,
     legendTitle: 'Damping:',
     series: [...curves, ...overlays],
-    notes: [note, ...(axes === 'log' ? zeroPeriodNotes(spectrum.periodsS, zeroThere ?? pga) : [])],
+    notes: [note, ...(zeroLeftOff ? zeroPeriodNotes(spectrum.periodsS, zeroThere ?? pga, axis) : [])],
   });
 }
 

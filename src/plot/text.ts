@@ -48,16 +48,22 @@ export function methodLine(method: string, curves: readonly { damping: number }[
 }
 
 /**
- * The note that T = 0, when `periodsS` holds it, is left off a logarithmic axis, with its value
- * there (`there` is given the index of T = 0); none when the grid does not hold it.
+ * The note that T = 0, when `periodsS` holds it, is left off a logarithmic period axis, or a
+ * frequency axis (f = 1/T is infinite there), with its value there (`there` is given the index of
+ * T = 0); none when the grid does not hold it.
  */
 export function zeroPeriodNotes(
   periodsS: ArrayLike<number>,
   there: string | ((zero: number) => string),
+  axis: 'period' | 'frequency' = 'period',
 ): string[] {
   const zero = Array.from(periodsS).indexOf(0);
   if (zero < 0) return [];
   const value = typeof there === 'string' ? there : there(zero);
+  if (axis === 'frequency')
+    return [
+      `T = 0 s (f = ∞) is in the period grid but cannot be drawn on a frequency axis; it is left off${value}.`,
+    ];
   return [`T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off${value}.`];
 }
 

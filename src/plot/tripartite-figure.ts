@@ -29,7 +29,8 @@ type Segment = { t0: number; v0: number; t1: number; v1: number };
  * The four-way logarithmic plot (Newmark and Hall 1982, "Earthquake Spectra and Design", ch. 2):
  * PSV against T on log–log axes with diagonal grids of constant SD (PSV = 2π·SD/T, falling at
  * slope −1) and constant PSA (PSV = PSA·T/(2π), rising at slope +1), each diagonal labelled.
- * Overlays are given as PSA in g and drawn as PSV.
+ * Overlays are given as PSA in g and drawn as PSV. With `axis: 'frequency'` the same plot is drawn
+ * against f = 1/T: a log–log plot of PSV stays four-way, its diagonals mirrored.
  */
 export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions = {}): string {
   const unit = options.lengthUnit ?? 'm';
@@ -44,11 +45,18 @@ export function tripartiteFigure(spectrum: Spectrum, options: PsaFigureOptions =
     scale: perLength,
     overlayY: (psaG, t) => (psaG * gInUnit * t) / (2 * Math.PI),
     underlay: (context) => drawDiagonals(context, unit, gInUnit),
-    note: `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
+    note:
+      options.axis === 'frequency'
+        ? `Against frequency f = 1/T the diagonals turn over: rising to the right are constant SD (${unit}), PSV = 2π·f·SD; falling to the right are constant PSA (g), PSV = PSA/(2π·f). After Newmark and Hall (1982), drawn against frequency.`
+        : `Diagonals falling to the right are constant SD (${unit}), PSV = 2π·SD/T; diagonals rising to the right are constant PSA (g), PSV = PSA·T/(2π). After Newmark and Hall (1982).`,
   });
 }
 
-/** The SD and PSA diagonals, each labelled where it crosses the fewest curves and other labels. */
+/**
+ * The SD and PSA diagonals, each labelled where it crosses the fewest curves and other labels. They
+ * are worked out in periods (the context's x and xDomain are in the data's units), so on a
+ * frequency axis the same lines are drawn, mirrored.
+ */
 function drawDiagonals(context: PanelContext, unit: string, gInUnit: number): void {
   const { doc, group, x, y } = context;
   const [tLow, tHigh] = context.xDomain;
@@ -98,7 +106,9 @@ function drawDiagonals(context: PanelContext, unit: string, gInUnit: number): vo
     for (const value of family.values) {
       const segment = family.segment(value);
       if (!segment) continue;
-      const [ax, ay, bx, by] = [x(segment.t0), y(segment.v0), x(segment.t1), y(segment.v1)];
+      const ends = [x(segment.t0), y(segment.v0), x(segment.t1), y(segment.v1)];
+      // Left end first, so that the label reads left to right on a frequency axis too.
+      const [ax, ay, bx, by] = ends[0] <= ends[2] ? ends : [ends[2], ends[3], ends[0], ends[1]];
       const length = Math.hypot(bx - ax, by - ay);
       const text = `${formatLogValue(value)} ${family.unit}`;
       const half = textWidthPx(text, DIAGONAL_PX) / 2 + 3;

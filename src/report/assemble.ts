@@ -4,7 +4,7 @@ import { spectrumToCsv } from '../formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../formats/spectrum-json.js';
 import { targetToJson } from '../formats/target.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import { dampingFigure, rotdFigure } from '../plot/index.js';
+import { dampingFigure, type PeriodAxis, rotdFigure } from '../plot/index.js';
 import { groundMotionMeasures } from '../record/measures.js';
 import type { GroundRecord } from '../record/record.js';
 import { compareDamping } from '../spectrum/damping.js';
@@ -32,6 +32,11 @@ export interface ReportRequest
   /** A target spectrum to fit (over `rangeS`), the fit applied to every output with `apply`. */
   target?: { spectrum: DesignSpectrum; rangeS?: [number, number]; apply?: boolean };
   axes?: 'log' | 'linear';
+  /**
+   * The x axis of every spectrum figure. Unset, each figure takes its own: frequency for the floor
+   * spectra of equipment (as equipment is specified and tested by frequency), period for the others.
+   */
+  axis?: PeriodAxis;
   /** The second horizontal component, processed alike: adds RotD50 and RotD100. */
   pair?: { record: GroundRecord; angleStepDeg: number };
   /** Equipment for anchorage demands, each with the file it was read from. */
@@ -60,7 +65,8 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
   files.set('spectra.json', formatJson({ ...spectrumToJson(spectrum), ...(fit && targetToJson(fit)) }));
   files.set('spectra.csv', spectrumToCsv(spectrum, { lengthUnit, target: fit }));
   const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
-  const shared = { axes: request.axes ?? 'log', lengthUnit, methodDescription, overlays };
+  const axis = request.axis;
+  const shared = { axes: request.axes ?? 'log', axis, lengthUnit, methodDescription, overlays };
   const input: ReportInput = {
     title: request.title ?? `Response spectra of ${record.name}`,
     notes: request.notes ?? [],
@@ -80,7 +86,7 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
   const isFivePercent = (damping: number) => Math.abs(damping - 0.05) < 1e-12;
   if (spectrum.curves.length > 1 && spectrum.curves.some((c) => isFivePercent(c.damping))) {
     const comparison = compareDamping(spectrum);
-    const svg = dampingFigure({ record: spectrum.record, methodDescription, comparison });
+    const svg = dampingFigure({ record: spectrum.record, methodDescription, comparison, axis });
     const caption = 'PSA at each damping ratio relative to 5%';
     input.damping = { comparison, figure: { file: 'damping.svg', caption, svg } };
   }
@@ -95,7 +101,7 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       angleStepDeg: request.pair.angleStepDeg,
       threads: rotdThreads(grid.periodsS.length, 1, samples),
     });
-    const svg = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] });
+    const svg = rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method], axis });
     input.rotd = {
       spectra,
       figure: { file: 'rotd.svg', caption: 'RotD50, RotD100 and geometric mean', svg },
@@ -109,6 +115,11 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
     files.set(`anchorage-${i + 1}.json`, formatJson(anchorage.json));
     input.anchorage.push(anchorage);
   });
+  const axisLine = figureAxisStatement(
+    axis,
+    input.anchorage.some((a) => a.figures.some((f) => f.file.startsWith('floor-'))),
+  );
+  if (axisLine !== undefined) input.methods.push(axisLine);
   const figures = [
     input.spectrumFigures,
     input.damping?.figure ?? [],
@@ -131,4 +142,13 @@ export function methodStatements(method: Method): string[] {
       .map(([key, text]) => `${key[0].toUpperCase()}${key.slice(1).replace(/_/g, ' ')}: ${text}.`),
     'Units: SI inside the program (m, s, m/s², kN); g = 9.80665 m/s² at the edges.',
   ];
+}
+
+/** What the report says of its figures' x axes when any is of frequency; none when all are of period. */
+export function figureAxisStatement(axis: PeriodAxis | undefined, floorFigures: boolean): string | undefined {
+  if (axis === 'frequency')
+    return 'Figures: spectra drawn against frequency f = 1/T (Hz); T = 0 (the PGA) is left off and its value stated under each figure.';
+  if (axis === undefined && floorFigures)
+    return 'Figures: spectra against period T; the floor spectra of equipment against frequency f = 1/T (Hz), as equipment is specified by frequency.';
+  return undefined;
 }

@@ -6,7 +6,7 @@ import { anchorageToJson } from '../formats/anchorage-json.js';
 import { anchorPlanInput } from '../formats/anchorage-plan.js';
 import { floorAssumptions } from '../formats/floor.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import { anchorPlanSvg, psaFigure } from '../plot/index.js';
+import { anchorPlanSvg, type PeriodAxis, psaFigure } from '../plot/index.js';
 import type { GroundRecord } from '../record/record.js';
 import { type BuildingMode, floorSpectrum } from '../spectrum/floor.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
@@ -27,6 +27,8 @@ export interface DemandMotion {
   grid: { periodsS: Float64Array; method: Method };
   building?: BuildingMode | null;
   broadening?: number | null;
+  /** The floor spectrum figure's x axis; default frequency. */
+  axis?: PeriodAxis;
 }
 
 /**
@@ -65,6 +67,7 @@ export function equipmentDemand(e: Equipment, record: GroundRecord, motion: Dema
   const abovePeriodZero = <T>(values: T[]) => values.filter((_, i) => periodsS[i] > 0);
   const figure = psaFigure(floor.spectrum, {
     methodDescription: METHOD_DESCRIPTIONS[method],
+    axis: motion.axis ?? 'frequency',
     overlays: [
       {
         label: `ground PSA, ζ = ${e.damping * 100}%`,

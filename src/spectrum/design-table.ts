@@ -13,7 +13,9 @@ const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
 /**
  * Read a two-column table of period (s) and PSA (g). Blank lines and lines starting with `#` are
- * skipped, and one header line is allowed before the first row. Periods must be ≥ 0 and strictly
+ * skipped, and one header line is allowed before the first row; when that header names a
+ * `frequency_hz` column (as the CSV of `quakesweep design` does, empty at T = 0), the rows are
+ * read as comma-separated and that column is passed over. Periods must be ≥ 0 and strictly
  * increasing (T = 0 only as the first row); PSA must be positive, since it is interpolated on a
  * log scale. Errors name `source` and the line.
  */
@@ -21,15 +23,23 @@ export function readSpectrumTable(text: string, source: string): SpectrumTable {
   const periods: number[] = [];
   const values: number[] = [];
   let headerSeen = false;
+  let frequencyColumn = -1;
   const lines = text.replace(/^\uFEFF/, '').split('\n');
   for (let index = 0; index < lines.length; index++) {
     const place = { file: source, line: index + 1 };
     const trimmed = lines[index].trim();
     if (trimmed === '' || trimmed.startsWith('#')) continue;
-    const fields = trimmed.split(SEPARATOR).filter((field) => field !== '');
+    const fields =
+      frequencyColumn < 0
+        ? trimmed.split(SEPARATOR).filter((field) => field !== '')
+        : trimmed
+            .split(',')
+            .map((field) => field.trim())
+            .filter((_, i) => i !== frequencyColumn);
     if (!fields.every((field) => NUMBER.test(field))) {
       if (periods.length === 0 && !headerSeen) {
         headerSeen = true;
+        frequencyColumn = fields.indexOf('frequency_hz');
         continue;
       }
       const bad = fields.find((field) => !NUMBER.test(field));

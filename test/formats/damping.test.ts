@@ -33,6 +33,7 @@ describe('dampingToJson', () => {
       'reference_added',
       'published_sources',
       'periods_s',
+      'frequencies_hz',
       'spectra',
     ]);
     expect(json.reference_damping).toBe(0.05);
@@ -63,6 +64,7 @@ describe('dampingToCsv', () => {
     const csv = readCsv(dampingToCsv(spectrum, undefinedRatio));
     expect(csv.header).toEqual([
       'period_s',
+      'frequency_hz',
       'psa_g@2%',
       'psa_g@5%',
       'psa_g@10%',
@@ -72,9 +74,9 @@ describe('dampingToCsv', () => {
     ]);
     csv.rows.forEach((row, p) => {
       expect(row[0]).toBe(spectrum.periodsS[p]);
-      for (let d = 0; d < 3; d++) expect(row[1 + d]).toBe(spectrum.curves[d].psaMS2[p] / G);
+      for (let d = 0; d < 3; d++) expect(row[2 + d]).toBe(spectrum.curves[d].psaMS2[p] / G);
     });
-    expect(csv.rows[1].slice(4)).toEqual([null, null, null]);
+    expect(csv.rows[1].slice(5)).toEqual([null, null, null]);
   });
 
   it('opens with the caution, the record, the reference damping and the published ratios', () => {

@@ -16,6 +16,9 @@ describe('design outputs', () => {
     expect(json.code).toBe(spectrum.code);
     expect(json.damping).toBe(0.05); // the ASCE 7-16 spectrum is for 5% damping (§11.4)
     expect(json.periods_s).toEqual([0, 0.12, 1, 10]);
+    // f = 1/T: none at T = 0, 1/0.12 = 8.333… Hz, 1 Hz, 0.1 Hz (by hand).
+    expect(json.frequencies_hz[0]).toBeNull();
+    expect(json.frequencies_hz.slice(1).map((f) => Number(f?.toPrecision(6)))).toEqual([8.33333, 1, 0.1]);
     // ASCE 7-16 §11.4.6 by hand: 0.4 S_DS at 0; S_DS on the plateau; S_D1/T; S_D1·T_L/T².
     const expected = [0.4, 1, 0.6, 0.048];
     for (const [i, value] of json.psa_g.entries()) expect(value).toBeCloseTo(expected[i], 12);

@@ -40,15 +40,16 @@ describe('floorToJson', () => {
   );
 
   it('is the floor spectrum JSON with the building, the broadening, the ground and the assumptions', () => {
-    expect(Object.keys(json).slice(0, 6)).toEqual([
+    expect(Object.keys(json).slice(0, 7)).toEqual([
       'caution',
       'record',
       'method',
       'method_description',
       'periods_s',
+      'frequencies_hz',
       'spectra',
     ]);
-    expect(Object.keys(json).slice(6)).toEqual([
+    expect(Object.keys(json).slice(7)).toEqual([
       'building',
       'broadening',
       'unbroadened_psa_g',

@@ -41,11 +41,12 @@ describe('csvText', () => {
 
   it('reads back to the same numbers, null as an empty cell, under the header', () => {
     const csv = readCsv(text);
-    expect(csv.header).toEqual(['period_s', 'a_g@5%', 'b_m']);
+    expect(csv.header).toEqual(['period_s', 'frequency_hz', 'a_g@5%', 'b_m']);
     expect(csv.rows).toEqual([
-      [0, 0.1, 0],
-      [0.5, 0.2, null],
-      [1, 0.3, 2e-7],
+      // f = 1/T: empty at T = 0, 1/0.5 = 2 Hz, 1/1 = 1 Hz (by hand).
+      [0, null, 0.1, 0],
+      [0.5, 2, 0.2, null],
+      [1, 1, 0.3, 2e-7],
     ]);
   });
 

@@ -28,6 +28,7 @@ describe('rotdToJson', () => {
       'padded_samples',
       'notes',
       'periods_s',
+      'frequencies_hz',
       'spectra',
     ]);
     expect(json.records.map((r) => r.name)).toEqual(['north (invented)', 'east (invented)']);
@@ -47,13 +48,13 @@ describe('rotdToCsv', () => {
 
   it('reads back to the same numbers under headers naming quantity, unit and damping', () => {
     const csv = readCsv(text);
-    expect(csv.header).toEqual(['period_s', 'rotd50_g@5%', 'rotd100_g@5%', 'geomean_g@5%']);
+    expect(csv.header).toEqual(['period_s', 'frequency_hz', 'rotd50_g@5%', 'rotd100_g@5%', 'geomean_g@5%']);
     expect(csv.rows.map((row) => row[0])).toEqual(grid.periodsS);
     const curve = spectra.curves[0];
     csv.rows.forEach((row, p) => {
-      expect(row[1]).toBe(curve.rotd50MS2[p] / G);
-      expect(row[2]).toBeCloseTo(psa1G[p], 10);
-      expect(row[3]).toBe(0);
+      expect(row[2]).toBe(curve.rotd50MS2[p] / G);
+      expect(row[3]).toBeCloseTo(psa1G[p], 10);
+      expect(row[4]).toBe(0);
     });
   });
 

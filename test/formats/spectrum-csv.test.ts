@@ -31,6 +31,7 @@ describe('spectrumToCsv', () => {
     const header = table[0].split(',');
     expect(header).toEqual([
       'period_s',
+      'frequency_hz',
       ...['2%', '5%'].flatMap((d) => [
         `sd_mm@${d}`,
         `psv_mm_s@${d}`,
@@ -44,9 +45,11 @@ describe('spectrumToCsv', () => {
       const cells = row.split(',').map(Number);
       expect(cells).toHaveLength(header.length);
       expect(cells[0]).toBe(periods[p]);
+      // f = 1/T by hand for T = 0, 0.2, 0.5, 1 s: none (empty cell), 5, 2, 1 Hz.
+      expect(row.split(',')[1]).toBe(['', '5', '2', '1'][p]);
       // SD in mm is SD in m × 1000; PSA in g is PSA in m/s² over 9.80665 (definitions).
-      expect(cells[6]).toBeCloseTo(spectrum.curves[1].sdM[p] * 1000, 9);
-      expect(cells[8]).toBeCloseTo(spectrum.curves[1].psaMS2[p] / 9.80665, 12);
+      expect(cells[7]).toBeCloseTo(spectrum.curves[1].sdM[p] * 1000, 9);
+      expect(cells[9]).toBeCloseTo(spectrum.curves[1].psaMS2[p] / 9.80665, 12);
     }
   });
 

@@ -24,6 +24,7 @@ describe('spectrumToJson', () => {
       'method',
       'method_description',
       'periods_s',
+      'frequencies_hz',
       'spectra',
     ]);
     expect(json.caution).toBe(CAUTION);
@@ -32,6 +33,8 @@ describe('spectrumToJson', () => {
     // so the largest sample is 0.2·sin(2π·0.24) = 0.2·cos(0.02π) g (closed form).
     expect(json.record.pga_g).toBeCloseTo(0.2 * Math.cos(0.02 * Math.PI), 12);
     expect(json.periods_s).toEqual([0, 0.5]);
+    // f = 1/T beside each period: none at T = 0, 1/0.5 = 2 Hz (by hand).
+    expect(json.frequencies_hz).toEqual([null, 2]);
     expect(json.spectra.map((curve) => curve.damping)).toEqual([0.05, 0.1]);
     for (const curve of json.spectra) {
       // PSA in g is PSA in m/s² over standard gravity; at T = 0 it is the PGA (common practice).

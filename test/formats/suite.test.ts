@@ -23,7 +23,15 @@ describe('suiteJson', () => {
   const json = suiteJson(records, failed, settings);
 
   it('opens with the caution and lists records by name and failures by file', () => {
-    expect(Object.keys(json)).toEqual(['caution', 'records', 'failed', 'periods_s', 'statistics', 'spectra']);
+    expect(Object.keys(json)).toEqual([
+      'caution',
+      'records',
+      'failed',
+      'periods_s',
+      'frequencies_hz',
+      'statistics',
+      'spectra',
+    ]);
     expect(json.caution).toBe(CAUTION);
     expect(json.records).toEqual(['a (invented)', 'b (invented)']);
     expect(json.failed.map((f) => f.file)).toEqual(['in/c.csv', 'in/z.csv']);

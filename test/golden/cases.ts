@@ -163,6 +163,40 @@ export const GOLDEN_CASES: GoldenCase[] = [
       `floor IN/gen-b.csv --units g ${GRID} --building-period 1.2 --modal-factor 1.2 --broaden 0.1 --format csv`,
     ),
   },
+  {
+    name: 'spectrum-svg-frequency',
+    argv: w(`spectrum ${H1} --units g --damping 2%,5% --axis frequency --svg OUT --out OUT/s.json`),
+  },
+  {
+    name: 'spectrum-frequencies-csv',
+    argv: w(`spectrum ${H2} --units g --frequencies 0.5,1,2,5,10,20 --format csv`),
+  },
+  {
+    name: 'spectrum-error-periods-and-frequencies',
+    argv: w(`spectrum ${H1} --units g ${GRID} --frequencies 1:10:5`),
+  },
+  {
+    name: 'design-svg-frequency',
+    argv: w(
+      'design --code asce7-16 --sds 1.2 --sd1 0.5 --tl 6 --frequencies 0.1:100:40 --axis frequency --format csv --out OUT/d.csv --svg OUT',
+    ),
+  },
+  {
+    name: 'damping-svg-frequency',
+    argv: w(
+      `damping ${H2} --units g ${GRID} --damping 2%,5%,10% --axis frequency --out OUT/k.json --svg OUT`,
+    ),
+  },
+  {
+    name: 'rotd-svg-frequency',
+    argv: w(`rotd ${H1} ${H2} --units g ${GRID} --axis frequency --format csv --out OUT/r.csv --svg OUT`),
+  },
+  {
+    name: 'floor-svg-frequency',
+    argv: w(
+      `floor ${H1} --units g --frequencies 0.2:50:60 --building-period 0.45 --modal-factor 1.4 --broaden --axis frequency --out OUT/f.json --svg OUT`,
+    ),
+  },
   { name: 'anchor-code-table', argv: w('anchor --equipment IN/equipment-generator.json --units g') },
   {
     name: 'anchor-record-json-svg',
@@ -216,6 +250,11 @@ export const GOLDEN_CASES: GoldenCase[] = [
       'Golden report (invented)',
       ...w('--length-unit mm --out OUT/report'),
     ],
+    env: FIXED_DATE,
+  },
+  {
+    name: 'report-frequency',
+    argv: w(`report IN/gen-a.csv --units g ${GRID} --damping 2%,5% --axis frequency --out OUT/report`),
     env: FIXED_DATE,
   },
   { name: 'demo', argv: w('demo --out OUT/demo'), env: FIXED_DATE },

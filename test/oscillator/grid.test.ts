@@ -2,9 +2,11 @@ import { describe, expect, it } from 'vitest';
 import {
   defaultPeriodsS,
   logSpaced,
+  MAX_FREQUENCY_HZ,
   MAX_OSCILLATORS,
   MIN_PERIOD_S,
   parseDampings,
+  parseFrequencies,
   parsePeriods,
 } from '../../src/oscillator/grid.js';
 
@@ -63,5 +65,47 @@ describe('damping lists', () => {
     ['5%,0.05', '--damping: 0.05 appears twice'],
   ])('refuses --damping %s', (text, message) => {
     expect(() => parseDampings(text)).toThrow(message);
+  });
+});
+
+describe('frequency grids', () => {
+  it('a list in Hz gives the periods T = 1/f, ascending (highest frequency first)', () => {
+    // 0.5, 4 and 10 Hz are 2, 0.25 and 0.1 s (by hand).
+    expect(Array.from(parseFrequencies(' 4, 0.5 ,10 '))).toEqual([0.1, 0.25, 2]);
+  });
+
+  it('a:b:n: n log-spaced frequencies from a to b Hz, ends exact, as periods from 1/b to 1/a', () => {
+    const periods = parseFrequencies('0.1:100:4');
+    expect(periods).toHaveLength(4);
+    // Ends: 1/100 = 0.01 s and 1/0.1 = 10 s (by hand); three decades in three steps, so the
+    // inner frequencies are 10 and 1 Hz, periods 0.1 and 1 s, a ratio of 10 between neighbours.
+    expect(periods[0]).toBeCloseTo(0.01, 15);
+    expect(periods[3]).toBeCloseTo(10, 13);
+    expect(periods[1]).toBeCloseTo(0.1, 14);
+    expect(periods[2]).toBeCloseTo(1, 14);
+    for (let i = 1; i < 4; i++) expect(periods[i] / periods[i - 1]).toBeCloseTo(10, 12);
+    // Log spacing: the frequencies 1/T have equal steps in log f.
+    const logF = Array.from(periods, (t) => Math.log10(1 / t));
+    for (let i = 1; i < 4; i++) expect(logF[i - 1] - logF[i]).toBeCloseTo(1, 12);
+  });
+
+  it('the highest frequency is that of the shortest period, 10 kHz', () => {
+    expect(MAX_FREQUENCY_HZ).toBe(1 / MIN_PERIOD_S);
+    expect(Array.from(parseFrequencies('10000'))).toEqual([1e-4]);
+    expect(() => parseFrequencies('10001')).toThrow("--frequencies '10001': 10001 Hz is above 10000 Hz");
+  });
+
+  it.each([
+    ['0', '--frequencies: 0 Hz is not above 0; for T = 0 (rigid) use --periods'],
+    ['-1', '--frequencies: -1 Hz is not above 0; for T = 0 (rigid) use --periods'],
+    ['1,,2', "--frequencies: '' is not a number"],
+    ['1:2', "--frequencies '1:2': use a:b:n, e.g. 0.1:100:100"],
+    ['0:10:5', "--frequencies '0:10:5': need 0 < a < b, in Hz"],
+    ['10:1:5', "--frequencies '10:1:5': need 0 < a < b, in Hz"],
+    ['1:10:1', "--frequencies '1:10:1': n must be an integer ≥ 2"],
+    ['1:10:2000000', "--frequencies '1:10:2000000': n = 2000000 is more than 1000000"],
+    ['2,1,2', '--frequencies: 2 Hz appears twice'],
+  ])('refuses %s', (text, message) => {
+    expect(() => parseFrequencies(text)).toThrow(message);
   });
 });

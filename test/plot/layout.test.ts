@@ -16,6 +16,24 @@ describe('layoutPanel', () => {
     expect(layout.yDomain).toEqual([0.1, 5]);
   });
 
+  it('a reciprocal x axis spans 1/x of the drawable points, ascending; x = 0 (f = ∞) is left out', () => {
+    // Periods 0, 0.02, 0.5 and 4 s: T = 0 cannot be drawn at f = ∞; the others are 50, 2 and 0.25 Hz (by hand).
+    const layout = layoutPanel({
+      heightPx: 200,
+      x: { title: 'f', reciprocal: true },
+      y: { title: 'y' },
+      series: [{ label: 'a', x: [0, 0.02, 0.5, 4], y: [9, 0.3, 0.7, 0.2] }],
+    });
+    expect(layout.xDomain).toEqual([0.02, 4]);
+    expect(layout.xAxisDomain).toEqual([0.25, 50]);
+    expect(layout.toXAxis(0.5)).toBe(2);
+    // y = 9 belongs to T = 0, which is not drawn: the y axis spans 0.2 to 0.7 → 0.2 to 1 (1-2-5 values).
+    expect(layout.yDomain).toEqual([0.2, 1]);
+    const plain = layoutPanel({ heightPx: 200, x: { title: 'T' }, y: { title: 'y' }, series: [] });
+    expect(plain.xAxisDomain).toBe(plain.xDomain);
+    expect(plain.toXAxis(0.5)).toBe(0.5);
+  });
+
   it('a linear y axis starts at 0 with 4% headroom, or is symmetric with 8%, then rounded to whole steps', () => {
     // 7.3 × 1.04 = 7.59 → 8 with steps of 1; ±2.3 × 1.08 = ±2.48 → ±2.5 with steps of 0.5 (d3's 1-2-5 rule).
     const linear = (y: number[], symmetric: boolean) =>

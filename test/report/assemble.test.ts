@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
 import { formatJson, spectrumToJson } from '../../src/formats/spectrum-json.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
-import { assembleReport } from '../../src/report/assemble.js';
+import { assembleReport, figureAxisStatement } from '../../src/report/assemble.js';
 import { asce716Spectrum } from '../../src/spectrum/design.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
 
@@ -46,5 +46,39 @@ describe('assembleReport', () => {
     expect(json.scaling.applied).toBe(true);
     const unscaled = responseSpectrum(record, grid).curves[1].psaMS2[3] / 9.80665; // standard g
     expect(json.spectra[1].psa_g[3]).toBeCloseTo(unscaled * json.scaling.factor, 9);
+  });
+});
+
+describe('figureAxisStatement', () => {
+  it('says which figures are against frequency, and nothing when all are against period', () => {
+    expect(figureAxisStatement(undefined, false)).toBeUndefined();
+    expect(figureAxisStatement('period', true)).toBeUndefined();
+    expect(figureAxisStatement(undefined, true)).toMatch(
+      /^Figures: spectra against period T; the floor spectra of equipment against frequency f = 1\/T \(Hz\)/,
+    );
+    expect(figureAxisStatement('frequency', false)).toMatch(/^Figures: spectra drawn against frequency/);
+  });
+});
+
+describe('assembleReport --axis', () => {
+  it('frequency: every spectrum figure is drawn against frequency, and the report says so', async () => {
+    const files = await assembleReport({
+      read: record,
+      processed: record,
+      grid,
+      axis: 'frequency',
+      generatedAt: '2026-01-01T00:00:00Z',
+    });
+    for (const name of ['psa.svg', 'sd.svg', 'psv.svg', 'tripartite.svg', 'damping.svg'])
+      expect(files.get(name)).toContain('Frequency f = 1/T (Hz)');
+    expect(files.get('histories.svg')).not.toContain('Frequency f = 1/T (Hz)');
+    expect(files.get('report.html')).toContain('Figures: spectra drawn against frequency f = 1/T (Hz)');
+  });
+
+  it('unset: the spectra against period, and no word on axes without floor figures', async () => {
+    const files = await assembleReport({ read: record, processed: record, grid, generatedAt: 'now' });
+    expect(files.get('psa.svg')).toContain('Period T (s)');
+    expect(files.get('psa.svg')).not.toContain('(Hz)');
+    expect(files.get('report.html')).not.toContain('Figures: spectra');
   });
 });

@@ -89,6 +89,19 @@ describe('equipmentDemand above the base', () => {
     expect(demand.floor).toContain('ground PSA, ζ = 5%');
   });
 
+  it('draws the floor spectrum against frequency unless the axis is given', () => {
+    const building = { periodS: 0.5, damping: 0.05, modalFactor: 1.3 };
+    const title = (axis?: 'period' | 'frequency') => {
+      const svg = equipmentDemand(equipment({ z: 12 }), step, { grid, building, axis }).floor ?? '';
+      return new JSDOM(svg, { contentType: 'image/svg+xml' }).window.document.querySelector('.x-title')
+        ?.textContent;
+    };
+    // Equipment is specified and tested by frequency (common practice): the default.
+    expect(title()).toBe('Frequency f = 1/T (Hz)');
+    expect(title('frequency')).toBe('Frequency f = 1/T (Hz)');
+    expect(title('period')).toBe('Period T (s)');
+  });
+
   it('says so when the floor spectrum was broadened', () => {
     const building = { periodS: 0.5, damping: 0.05, modalFactor: 1.3 };
     const demand = equipmentDemand(equipment({ z: 12, period_s: 0.3 }), step, {

@@ -20,6 +20,16 @@ describe('tabulated spectrum', () => {
       expect(spectrum.psaG(table.periodsS[i])).toBe(table.psaG[i]);
   });
 
+  it('reads the CSV of `quakesweep design` back, passing over its frequency_hz column (empty at T = 0)', () => {
+    const csv = '# caution\nperiod_s,frequency_hz,psa_g\n0,,0.4\n0.2,5,1\n1,1,0.5\n';
+    const table = readSpectrumTable(csv, 'design.csv');
+    expect(Array.from(table.periodsS)).toEqual([0, 0.2, 1]);
+    expect(Array.from(table.psaG)).toEqual([0.4, 1, 0.5]);
+    expect(() => readSpectrumTable(`${csv}2,0.5\n`, 'design.csv')).toThrow(
+      'expected 2 columns (period in s, PSA in g), found 1',
+    );
+  });
+
   it('interpolates in log–log between rows (closed form: geometric means at the log midpoint)', () => {
     // Between (1, 0.5) and (10, 0.05): at T = √10, PSA = √(0.5 · 0.05).
     expect(spectrum.psaG(Math.sqrt(10))).toBeCloseTo(Math.sqrt(0.5 * 0.05), 12);

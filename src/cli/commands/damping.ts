@@ -4,11 +4,16 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { dampingFigure } from '../../plot/damping-figure.js';
 import { compareDamping } from '../../spectrum/damping.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
+import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
-export interface DampingCliOptions extends RecordCliOptions, GridCliOptions, OutputCliOptions {}
+export interface DampingCliOptions
+  extends RecordCliOptions,
+    GridCliOptions,
+    OutputCliOptions,
+    AxisCliOptions {}
 
 /** Damping ratios compared when --damping is not given. */
 export const DEFAULT_DAMPING_LIST = '2%,5%,10%,20%';
@@ -25,6 +30,7 @@ export function registerDamping(program: Command): void {
     .argument('<record>', 'record file, or - for standard input');
   addRecordOptions(command);
   addGridOptions(command);
+  addAxisOption(command);
   addOutputOptions(
     command,
     'json or csv (default: a table on the terminal, or json with --out)',
@@ -37,6 +43,7 @@ export function registerDamping(program: Command): void {
 
 export async function runDamping(source: string, options: DampingCliOptions): Promise<void> {
   outputFormat(options, 'json or csv');
+  const axis = svgAxisFromOptions(options);
   const grid = gridFromOptions(options);
   const added = !Array.from(grid.dampings).some((d) => Math.abs(d - REFERENCE_DAMPING) < 1e-12);
   const dampings = added ? Float64Array.from([...grid.dampings, REFERENCE_DAMPING]).sort() : grid.dampings;
@@ -49,7 +56,7 @@ export async function runDamping(source: string, options: DampingCliOptions): Pr
     csv: () => dampingToCsv(spectrum, comparison),
     table: () => dampingTable(spectrum, comparison, added),
     figures: () => [
-      ['damping.svg', dampingFigure({ record: spectrum.record, methodDescription, comparison })],
+      ['damping.svg', dampingFigure({ record: spectrum.record, methodDescription, comparison, axis })],
     ],
   });
 }

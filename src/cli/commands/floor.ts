@@ -5,6 +5,7 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { floorSpectrum } from '../../spectrum/floor.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
+import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
@@ -14,7 +15,8 @@ export interface FloorCliOptions
   extends RecordCliOptions,
     GridCliOptions,
     BuildingCliOptions,
-    OutputCliOptions {}
+    OutputCliOptions,
+    AxisCliOptions {}
 
 export function registerFloor(program: Command): void {
   const command = program
@@ -31,6 +33,7 @@ export function registerFloor(program: Command): void {
       'Γφ at the floor: participation factor times mode shape there (required)',
     )
     .option('--broaden [fraction]', 'broaden peaks over [T(1−b), T/(1−b)], b = 0.15 unless given');
+  addAxisOption(command);
   addOutputOptions(
     command,
     'json or csv (default: a summary table on the terminal, or json with --out)',
@@ -43,6 +46,7 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
   const building = { ...buildingFromOptions(options), method: grid.method };
   const broadening = broadeningFromOptions(options.broaden);
   outputFormat(options, 'json or csv');
+  const axis = svgAxisFromOptions(options);
   const ground = await loadRecord(source, options);
   const result = floorSpectrum(ground, building, grid, broadening);
   const groundSpectrum = responseSpectrum(ground, grid);
@@ -55,6 +59,7 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
       broadening: result.broadening,
       building,
       methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
+      axis,
     });
   await writeProduct([source], options, {
     json: () => floorToJson(result, groundSpectrum, building, assumptions),

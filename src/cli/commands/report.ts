@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
 import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
+import { addAxisOption } from '../options/axis.js';
 import { addGridOptions } from '../options/grid.js';
 import { addProcessingOptions } from '../options/processing.js';
 import { addRecordOptions } from '../options/record.js';
@@ -31,7 +32,11 @@ export function registerReport(program: Command): void {
     )
     .option('--title <text>', 'title of the report (default: "Response spectra of <record name>")')
     .option('--length-unit <unit>', 'length unit of SD and PSV in tables and figures: m, cm, mm, in, ft', 'm')
-    .option('--axes <axes>', 'axes of the PSA, SD and PSV figures: log or linear', 'log')
+    .option('--axes <axes>', 'axes of the PSA, SD and PSV figures: log or linear', 'log');
+  addAxisOption(
+    command,
+    'x axis of every spectrum figure: period or frequency (default: frequency for the floor spectra of equipment, period for the others)',
+  )
     .option('--pair <record>', 'second horizontal component, at right angles: adds RotD50 and RotD100')
     .option('--angle-step <degrees>', 'with --pair: rotation step, at most 1° and a divisor of 180', '1')
     .option(

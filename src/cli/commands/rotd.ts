@@ -5,12 +5,13 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { rotdThreads } from '../../spectrum/spectrum.js';
 import { rotDSpectraParallel } from '../../threads/rotd-pool.js';
+import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
 import { parseThreads } from '../options/threads.js';
 
-export interface RotDCliOptions extends RecordCliOptions, GridCliOptions, OutputCliOptions {
+export interface RotDCliOptions extends RecordCliOptions, GridCliOptions, OutputCliOptions, AxisCliOptions {
   angleStep?: string;
   threads?: string;
 }
@@ -24,6 +25,7 @@ export function registerRotD(program: Command): void {
   addRecordOptions(command);
   addGridOptions(command);
   command.option('--angle-step <degrees>', 'rotation step over 0–180°, at most 1° and a divisor of 180', '1');
+  addAxisOption(command);
   addOutputOptions(
     command,
     'json or csv (default: a table on the terminal, or json with --out)',
@@ -35,6 +37,7 @@ export function registerRotD(program: Command): void {
 
 export async function runRotD(first: string, second: string, options: RotDCliOptions): Promise<void> {
   outputFormat(options, 'json or csv');
+  const axis = svgAxisFromOptions(options);
   if (first === '-' && second === '-')
     throw usageError('only one of the two components can be standard input');
   const grid = gridFromOptions(options);
@@ -52,7 +55,7 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
     csv: () => rotdToCsv(spectra),
     table: () => rotdTable(spectra),
     figures: () => [
-      ['rotd.svg', rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method] })],
+      ['rotd.svg', rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method], axis })],
     ],
   });
 }

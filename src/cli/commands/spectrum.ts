@@ -9,6 +9,7 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { checkFolder } from '../../output/output-set.js';
 import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
 import { fitTarget, targetOverlay, targetRecord } from '../../spectrum/target.js';
+import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import {
   addOutputOptions,
   figureAxes,
@@ -27,7 +28,8 @@ export interface SpectrumCliOptions
     ProcessingCliOptions,
     GridCliOptions,
     TargetCliOptions,
-    OutputCliOptions {
+    OutputCliOptions,
+    AxisCliOptions {
   lengthUnit?: string;
   axes?: string;
   histories?: boolean;
@@ -44,6 +46,7 @@ export function registerSpectrum(program: Command): void {
   addProcessingOptions(command);
   addGridOptions(command);
   addTargetOptions(command);
+  addAxisOption(command);
   addOutputOptions(command, 'json or csv (default: a summary table on the terminal, or json with --out)')
     .option(
       '--length-unit <unit>',
@@ -69,6 +72,7 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
   outputFormat(options, 'json or csv');
   const axes = figureAxes(options.axes);
+  const axis = svgAxisFromOptions(options);
   if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
   if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
   const target = targetFromOptions(options);
@@ -86,7 +90,8 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
       // The figure modules load only for --svg.
       const { spectrumFigures } = await import('../../report/spectrum-figures.js');
       const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
-      const shared = { axes, lengthUnit, overlays, methodDescription: METHOD_DESCRIPTIONS[spectrum.method] };
+      const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
+      const shared = { axes, axis, lengthUnit, overlays, methodDescription };
       const figures = spectrumFigures(
         targetRecord(processed, fit),
         spectrum,

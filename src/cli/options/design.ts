@@ -20,6 +20,7 @@ export interface DesignCliOptions extends VerticalCliOptions {
   damping?: string;
   table?: string;
   periods?: string;
+  frequencies?: string;
 }
 
 export function addDesignOptions(command: Command): Command {

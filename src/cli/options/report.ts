@@ -4,6 +4,7 @@ import { usageError } from '../../base/errors.js';
 import { parseLengthUnit } from '../../base/units.js';
 import { checkFolder } from '../../output/output-set.js';
 import type { ReportRequest } from '../../report/assemble.js';
+import { type AxisCliOptions, periodAxisFromOptions } from './axis.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from './building.js';
 import { figureAxes } from './format.js';
 import { generationTime } from './generation-time.js';
@@ -18,7 +19,8 @@ export interface ReportCliOptions
     ProcessingCliOptions,
     GridCliOptions,
     TargetCliOptions,
-    BuildingCliOptions {
+    BuildingCliOptions,
+    AxisCliOptions {
   out?: string;
   lengthUnit?: string;
   axes?: string;
@@ -51,6 +53,7 @@ export async function reportRequest(
     grid: gridFromOptions(options),
     lengthUnit: parseLengthUnit(options.lengthUnit ?? 'm'),
     axes: figureAxes(options.axes),
+    axis: periodAxisFromOptions(options),
     target: targetFromOptions(options),
     equipment,
     building: aboveBase ? buildingFromOptions(options) : null,

@@ -79,7 +79,7 @@ describe('quakesweep design', () => {
       'ec8.csv',
     );
     expect(written.code).toBe(0);
-    expect(readFileSync(join(folder.path, 'ec8.csv'), 'utf8')).toContain('period_s,psa_g');
+    expect(readFileSync(join(folder.path, 'ec8.csv'), 'utf8')).toContain('period_s,frequency_hz,psa_g');
     const original = await json('design', '--code', 'ec8', '--type', '2', '--ground', 'D', '--ag', '0.2');
     const back = await json('design', '--table', 'ec8.csv');
     expect(back.periods_s).toEqual(original.periods_s);

@@ -70,6 +70,7 @@ describe('quakesweep spectrum', () => {
     const header = lines.find((line) => line.startsWith('period_s'))!;
     expect(header.split(',')).toEqual([
       'period_s',
+      'frequency_hz',
       'sd_mm@5%',
       'psv_mm_s@5%',
       'psa_g@5%',
@@ -79,7 +80,7 @@ describe('quakesweep spectrum', () => {
     const rows = lines.filter((line) => !line.startsWith('#') && line !== header);
     expect(rows).toHaveLength(5);
     const json = JSON.parse((await run('--format', 'json', '--periods', '0.2:2:5')).stdout);
-    expect(Number(rows[2].split(',')[1])).toBeCloseTo(json.spectra[0].sd_m[2] * 1000, 9);
+    expect(Number(rows[2].split(',')[2])).toBeCloseTo(json.spectra[0].sd_m[2] * 1000, 9);
   });
 
   it('prints a summary table that starts with the caution', async () => {

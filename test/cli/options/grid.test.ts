@@ -21,6 +21,12 @@ describe('period grids and damping lists that make no sense are refused on every
     ['--periods', '0.01:10:2000000', /more than 1000000/],
     ['--periods', '0.1,0.1', /appears twice/],
     ['--periods', 'abc', /not a number/],
+    ['--frequencies', '0', /0 Hz is not above 0/],
+    ['--frequencies', '-2,1', /-2 Hz is not above 0/],
+    ['--frequencies', '0:10:5', /need 0 < a < b, in Hz/],
+    ['--frequencies', '1:20000:5', /20000 Hz is above 10000 Hz/],
+    ['--frequencies', '2,2', /2 Hz appears twice/],
+    ['--frequencies', 'x', /not a number/],
     ['--damping', '-5%', /negative/],
     ['--damping', '5', /above 1/],
     ['--damping', '', /not a number/],
@@ -42,10 +48,12 @@ describe('period grids and damping lists that make no sense are refused on every
         await runMain([...command, '--periods', '0.01:10:600000', '--damping', '1%,2%']),
       );
       expect(many).toMatch(/add --force/);
+      const both = expectOneLineFailure(await runMain([...command, '--periods', '1', '--frequencies', '1']));
+      expect(both).toBe('quakesweep: give --periods or --frequencies, not both');
     });
   }
   it('design', async () => {
-    for (const [option, value, reason] of bad.filter(([o]) => o === '--periods')) {
+    for (const [option, value, reason] of bad.filter(([o]) => o !== '--damping')) {
       const line = expectOneLineFailure(
         await runMain([
           'design',
@@ -84,6 +92,14 @@ describe('period grids and damping lists that make no sense are refused on every
 });
 
 describe('gridFromOptions', () => {
+  it('takes --frequencies as periods T = 1/f, ascending as --periods gives them', () => {
+    // 1, 2 and 5 Hz are 1, 0.5 and 0.2 s (by hand), the highest frequency first.
+    expect(Array.from(gridFromOptions({ frequencies: '1,5,2' }).periodsS)).toEqual([0.2, 0.5, 1]);
+    expect(() => gridFromOptions({ periods: '1', frequencies: '1' })).toThrow(
+      'give --periods or --frequencies, not both',
+    );
+  });
+
   it('defaults to T = 0 and 120 periods from 0.01 s to 10 s, 5%, Newmark average acceleration', () => {
     const grid = gridFromOptions({});
     expect(grid.periodsS).toHaveLength(121);

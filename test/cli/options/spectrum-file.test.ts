@@ -33,6 +33,14 @@ describe('readSpectrumFile', () => {
     expect(read.floorNote).toBe('');
   });
 
+  it('reads files with frequencies_hz beside periods_s (null at T = 0) as those without', () => {
+    const withFrequencies = { ...spectrum, frequencies_hz: [null, 10, 1] };
+    const read = readSpectrumFile(file('new.json', withFrequencies), at(0.1));
+    expect(read.value.psaG).toBe(0.7);
+    expect(read.value.how).toBe('PSA at T = 0.1 s, a point of the grid');
+    expect(readSpectrumFile(file('new-rigid.json', withFrequencies), at('rigid')).value.psaG).toBe(0.3);
+  });
+
   it('a rigid component takes T = 0, or record.pga_g when the grid has no T = 0', () => {
     expect(readSpectrumFile(file('rigid.json', spectrum), at('rigid')).value.psaG).toBe(0.3);
     const noZero = { ...spectrum, periods_s: [0.05, 0.1, 1], record: { pga_g: 0.25 } };
