@@ -73,7 +73,8 @@ export function floorFigure(input: FloorFigureInput): string {
   });
 }
 
-function markBuildingPeriod(context: PanelContext, periodS: number): void {
+/** The building period T_b as a dotted vertical line with its label, where it lies on the axis. */
+export function markBuildingPeriod(context: PanelContext, periodS: number): void {
   const { doc, group, x, plot, xDomain } = context;
   if (!(periodS >= xDomain[0] && periodS <= xDomain[1])) return;
   const px = x(periodS);
