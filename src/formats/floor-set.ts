@@ -146,10 +146,13 @@ export function floorSetToCsv(set: FloorSpectrumSet, assumptions: string[]): str
 }
 
 /** The largest value of a curve and its period (the first where it is reached). */
-export function peakOf(periodsS: Float64Array, values: Float64Array): { value: number; periodS: number } {
+export function peakOf(
+  periodsS: Float64Array,
+  values: Float64Array,
+): { value: number; periodS: number; index: number } {
   let best = 0;
   for (let p = 1; p < values.length; p++) if (values[p] > values[best]) best = p;
-  return { value: values[best], periodS: periodsS[best] };
+  return { value: values[best], periodS: periodsS[best], index: best };
 }
 
 /**
@@ -169,18 +172,17 @@ export function floorSetTable(set: FloorSpectrumSet, building: BuildingMode, ass
     const d = dampingLabel(c.damping);
     return [`peak PSA g @${d}`, `at T (s)`];
   });
-  const table = rows.map((row) =>
-    [
-      row.label.padEnd(first),
-      alignRight(
-        row.curves.flatMap((c) => {
-          const peak = peakOf(set.periodsS, c.psaMS2);
-          return [(peak.value / G).toPrecision(4), formatPeriod(peak.periodS)];
-        }),
-        widths.slice(1),
-      ),
-    ].join(' '),
-  );
+  const by = governing(set, labels);
+  const peakLabels = set.envelope.curves.map((c, d) => by[d][peakOf(set.periodsS, c.psaMS2).index]);
+  const from = [...new Set(peakLabels)].join(', ');
+  const table = rows.map((row, r) => {
+    const cells = row.curves.flatMap((c) => {
+      const peak = peakOf(set.periodsS, c.psaMS2);
+      return [(peak.value / G).toPrecision(4), formatPeriod(peak.periodS)];
+    });
+    const line = [row.label.padEnd(first), alignRight(cells, widths.slice(1))].join(' ');
+    return r === rows.length - 1 ? `${line}  (from ${from})` : line;
+  });
   const n = set.members.length;
   return terminalText([
     `records   ${n} ground records through the same building`,
