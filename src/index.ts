@@ -10,6 +10,7 @@ export { CAUTION, cautionLines } from './base/caution.js';
 export { type ErrorKind, inputError, isQuakesweepError, QuakesweepError, usageError } from './base/errors.js';
 export * from './base/units.js';
 export { VERSION } from './base/version.js';
+export { floorSetTable, floorSetToCsv, floorSetToJson } from './formats/floor-set.js';
 export { spectrumToCsv } from './formats/spectrum-csv.js';
 export { formatJson, type SpectrumJson, spectrumToJson } from './formats/spectrum-json.js';
 export { defaultPeriodsS, logSpaced, parseDampings, parsePeriods } from './oscillator/grid.js';
@@ -60,6 +61,16 @@ export {
 } from './spectrum/design.js';
 export { readSpectrumTable, tableSpectrum } from './spectrum/design-table.js';
 export { broadenSpectrum, floorRecord, floorSpectrum } from './spectrum/floor.js';
+export {
+  type CombinedSpectrum,
+  combineSpectra,
+  envelopeCurve,
+  type FloorSpectrumSet,
+  floorSpectrumSet,
+  meanCurve,
+  recordLabels,
+  type SpectrumSet,
+} from './spectrum/floor-set.js';
 export { type RotDOptions, type RotDSpectra, rotDSpectra } from './spectrum/rotd.js';
 export { scaleToTarget } from './spectrum/scale.js';
 export {

@@ -79,7 +79,7 @@ export function floorFigure(input: FloorFigureInput): string {
 }
 
 /** The building period as a dotted line; the context's x and xDomain are in periods on either axis. */
-function markBuildingPeriod(context: PanelContext, periodS: number, axis?: PeriodAxis): void {
+export function markBuildingPeriod(context: PanelContext, periodS: number, axis?: PeriodAxis): void {
   const { doc, group, x, plot, xDomain } = context;
   if (!(periodS >= xDomain[0] && periodS <= xDomain[1])) return;
   const px = x(periodS);

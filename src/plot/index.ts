@@ -3,6 +3,7 @@ export { type DampingFigureInput, dampingFigure } from './damping-figure.js';
 export { type DesignFigureInput, designFigure } from './design-figure.js';
 export { type FigureSpec, renderFigure } from './figure.js';
 export { type FloorFigureInput, floorFigure } from './floor-figure.js';
+export { type FloorSetFigureInput, floorSetFigure } from './floor-set-figure.js';
 export { type FourierFigureInput, fourierFigure } from './fourier-figure.js';
 export {
   type HistoriesFigureInput,

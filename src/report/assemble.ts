@@ -44,6 +44,11 @@ export interface ReportRequest
   /** The one-mode building of equipment above the base, and the floor spectrum's peak broadening. */
   building?: BuildingMode | null;
   broadening?: number | null;
+  /**
+   * With `pair`: equipment above the base takes the envelope of the floor spectra of the record
+   * and of the pair (the pair scaled by the record's target factor when the fit is applied).
+   */
+  floorEnvelope?: boolean;
 }
 
 /**
@@ -110,8 +115,11 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       `RotD spectra: at ζ = ${damping * 100}% only; both components processed alike and unscaled (a target scaling is not applied to them).`,
     );
   }
+  // Both horizontals alike: the pair takes the record's scale factor (one factor for the pair).
+  const floorRecords =
+    request.floorEnvelope && request.pair !== undefined ? [targetRecord(request.pair.record, fit)] : [];
   (request.equipment ?? []).forEach((equipment, i) => {
-    const anchorage = equipmentAnchorage(i + 1, equipment, record, request);
+    const anchorage = equipmentAnchorage(i + 1, equipment, record, { ...request, floorRecords });
     files.set(`anchorage-${i + 1}.json`, formatJson(anchorage.json));
     input.anchorage.push(anchorage);
   });

@@ -11,6 +11,7 @@ import type { GroundRecord } from '../record/record.js';
 import { type BuildingMode, floorSpectrum } from '../spectrum/floor.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
 import type { ReportAnchorage } from './anchorage-section.js';
+import { floorEnvelopeDemand } from './floor-envelope-demand.js';
 import type { ReportFigure } from './html.js';
 
 /** The elastic demand of one item of equipment in a report, with the motion it came from. */
@@ -20,6 +21,8 @@ export interface EquipmentDemand {
   notes: string[];
   /** The floor spectrum figure (SVG), for equipment above the base in a described building. */
   floor?: string;
+  /** Its caption, when it is not the one floor spectrum's. */
+  floorCaption?: string;
 }
 
 /** Where the demand of equipment comes from: the grid, and the building of equipment above the base. */
@@ -29,6 +32,11 @@ export interface DemandMotion {
   broadening?: number | null;
   /** The floor spectrum figure's x axis; default frequency. */
   axis?: PeriodAxis;
+  /**
+   * Further ground records (e.g. the second horizontal, processed and scaled alike): equipment
+   * above the base then takes the envelope of the floor spectra of the record and of these.
+   */
+  floorRecords?: readonly GroundRecord[];
 }
 
 /**
@@ -53,6 +61,8 @@ export function equipmentDemand(e: Equipment, record: GroundRecord, motion: Dema
       ],
     };
   }
+  if ((motion.floorRecords ?? []).length > 0)
+    return floorEnvelopeDemand(e, [record, ...(motion.floorRecords ?? [])], building, motion);
   const grid = { periodsS, dampings: [e.damping], method };
   const floor = floorSpectrum(record, { ...building, method }, grid, motion.broadening ?? null);
   const psa = Array.from(floor.spectrum.curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
@@ -112,7 +122,9 @@ export function equipmentAnchorage(
     },
   ];
   if (demand.floor !== undefined) {
-    const caption = `Floor spectrum for equipment ${n}, with the ground PSA`;
+    const caption =
+      demand.floorCaption?.replace('the equipment', `equipment ${n}`) ??
+      `Floor spectrum for equipment ${n}, with the ground PSA`;
     figures.unshift({ file: `floor-${n}.svg`, caption, svg: demand.floor });
   }
   return { json: anchorageToJson(analysis), file: equipment.file, motion: demand.motion, figures };

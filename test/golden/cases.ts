@@ -197,6 +197,28 @@ export const GOLDEN_CASES: GoldenCase[] = [
       `floor ${H1} --units g --frequencies 0.2:50:60 --building-period 0.45 --modal-factor 1.4 --broaden --axis frequency --out OUT/f.json --svg OUT`,
     ),
   },
+  {
+    name: 'floor-set-table',
+    argv: w(
+      `floor ${H1} ${H2} IN/gen-a.csv --units g ${GRID} --building-period 0.5 --modal-factor 1.3 --broaden`,
+    ),
+  },
+  {
+    name: 'floor-set-json-svg',
+    argv: w(
+      `floor ${H1} ${H2} --units g --damping 2%,5% --building-period 0.8 --modal-factor 1.3 --broaden --out OUT/f.json --svg OUT`,
+    ),
+  },
+  {
+    name: 'floor-set-csv',
+    argv: w(
+      `floor ${H1} ${H2} IN/gen-a.csv --units g ${GRID} --building-period 0.5 --modal-factor 1.3 --format csv`,
+    ),
+  },
+  {
+    name: 'floor-set-error-twice',
+    argv: w(`floor ${H1} ${H2} ${H1} --units g --building-period 0.5 --modal-factor 1.3`),
+  },
   { name: 'anchor-code-table', argv: w('anchor --equipment IN/equipment-generator.json --units g') },
   {
     name: 'anchor-record-json-svg',
@@ -221,6 +243,12 @@ export const GOLDEN_CASES: GoldenCase[] = [
     name: 'anchor-floor-spectrum',
     argv: w(
       'anchor --equipment IN/equipment-cabinet-floor4.json --spectrum IN/floor-spectrum.json --units g --demand max',
+    ),
+  },
+  {
+    name: 'anchor-floor-envelope',
+    argv: w(
+      'anchor --equipment IN/equipment-cabinet-floor4.json --spectrum IN/floor-envelope.json --units g --demand max --format json',
     ),
   },
   { name: 'synth-stdout', argv: w('synth --seed 11 --duration 3 --dt 0.02') },

@@ -48,7 +48,7 @@ async function run(argv: string[], out: string, env: Record<string, string> = {}
   }
 }
 
-/** The inputs: the demo records and equipment, seeded synth records, a target table, a floor spectrum. */
+/** The inputs: the demo records and equipment, seeded synth records, a target table, a floor spectrum and a floor envelope. */
 async function writeInputs(): Promise<void> {
   for (const file of readdirSync(RECORDS)) copyFileSync(join(RECORDS, file), join(input, file));
   const synth = async (argv: string[], file: string) => {
@@ -113,6 +113,17 @@ async function writeInputs(): Promise<void> {
     input,
   );
   if (floor.code !== 0) throw new Error(`floor failed: ${floor.stderr}`);
+  // The floor envelope of the demo's two horizontals and a generated record, for anchor --spectrum.
+  const envelope = await run(
+    [
+      'floor',
+      ...['marrowby-h1.csv', 'marrowby-h2.csv', 'gen-a.csv'].map((f) => `${input}/${f}`),
+      ...['--units', 'g', '--building-period', '0.5', '--modal-factor', '1.3', '--broaden'],
+      ...['--out', join(input, 'floor-envelope.json')],
+    ],
+    input,
+  );
+  if (envelope.code !== 0) throw new Error(`floor failed: ${envelope.stderr}`);
 }
 
 /** Every file below `dir`, by its path relative to `dir` (sorted), with <TMP> for the folder. */

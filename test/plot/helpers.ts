@@ -5,6 +5,7 @@ import { anchorPlanSvg } from '../../src/plot/anchor-plan-figure.js';
 import { dampingFigure } from '../../src/plot/damping-figure.js';
 import { designFigure } from '../../src/plot/design-figure.js';
 import { floorFigure } from '../../src/plot/floor-figure.js';
+import { floorSetFigure } from '../../src/plot/floor-set-figure.js';
 import { fourierFigure } from '../../src/plot/fourier-figure.js';
 import { historiesFigure } from '../../src/plot/histories-figure.js';
 import { husidFigure } from '../../src/plot/husid-figure.js';
@@ -18,6 +19,7 @@ import { createRecord } from '../../src/record/record.js';
 import { compareDamping } from '../../src/spectrum/damping.js';
 import { asce716Spectrum, designPsaG } from '../../src/spectrum/design.js';
 import { floorSpectrum } from '../../src/spectrum/floor.js';
+import { floorSpectrumSet, recordLabels } from '../../src/spectrum/floor-set.js';
 import { rotDSpectra } from '../../src/spectrum/rotd.js';
 import { responseSpectrum, type Spectrum, type SpectrumOptions } from '../../src/spectrum/spectrum.js';
 
@@ -153,6 +155,24 @@ export const EVERY_FIGURE: Record<string, () => DrawnFigure> = {
       methodDescription: 'test',
     });
     return { svg, curves: 3 };
+  },
+  floorSet: () => {
+    const { record, grid } = inputs();
+    const building = { periodS: 0.5, damping: 0.05, modalFactor: 1.4 };
+    // Two records by two dampings: one panel per damping, each with 2 records, the mean and the envelope.
+    const set = floorSpectrumSet(
+      [record, inventedRecord(12, 1)],
+      building,
+      { ...grid, dampings: [0.02, 0.05] },
+      0.15,
+    );
+    const svg = floorSetFigure({
+      set,
+      labels: recordLabels(set.grounds),
+      building,
+      methodDescription: 'test',
+    });
+    return { svg, curves: 8 };
   },
   histories: () => {
     const { record } = inputs();

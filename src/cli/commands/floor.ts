@@ -1,9 +1,20 @@
+import { realpathSync } from 'node:fs';
+import { resolve } from 'node:path';
 import type { Command } from 'commander';
+import { usageError } from '../../base/errors.js';
 import { floorAssumptions, floorTable, floorToJson } from '../../formats/floor.js';
+import {
+  floorSetAssumptions,
+  floorSetTable,
+  floorSetToCsv,
+  floorSetToJson,
+} from '../../formats/floor-set.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { floorFigure } from '../../plot/floor-figure.js';
+import { floorSetFigure } from '../../plot/floor-set-figure.js';
 import { floorSpectrum } from '../../spectrum/floor.js';
+import { floorSpectrumSet, recordLabels } from '../../spectrum/floor-set.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
@@ -21,8 +32,13 @@ export interface FloorCliOptions
 export function registerFloor(program: Command): void {
   const command = program
     .command('floor')
-    .description('in-structure (floor) response spectra from a ground record and a one-mode building')
-    .argument('<record>', 'ground record file, or - for standard input');
+    .description(
+      'in-structure (floor) response spectra from ground records and a one-mode building; with several records also their mean and envelope',
+    )
+    .argument(
+      '<records...>',
+      'ground record files (read alike), - for standard input once; several give each floor spectrum, their mean and envelope',
+    );
   addRecordOptions(command);
   addGridOptions(command);
   command
@@ -37,11 +53,15 @@ export function registerFloor(program: Command): void {
   addOutputOptions(
     command,
     'json or csv (default: a summary table on the terminal, or json with --out)',
-    'also draw the floor spectrum against the ground spectrum, DIR/floor.svg',
+    'also draw the floor spectrum against the ground spectrum (several records: each, the mean and the envelope), DIR/floor.svg',
   ).action(runFloor);
 }
 
-export async function runFloor(source: string, options: FloorCliOptions): Promise<void> {
+/** `quakesweep floor`: one record (a path, or a list of one) as ever, several as a set. */
+export async function runFloor(records: string | string[], options: FloorCliOptions): Promise<void> {
+  const sources = typeof records === 'string' ? [records] : records;
+  if (sources.length > 1) return runFloorSet(sources, options);
+  const [source] = sources;
   const grid = gridFromOptions(options);
   const building = { ...buildingFromOptions(options), method: grid.method };
   const broadening = broadeningFromOptions(options.broaden);
@@ -67,4 +87,55 @@ export async function runFloor(source: string, options: FloorCliOptions): Promis
     table: () => floorTable(result.spectrum, groundSpectrum, building, assumptions),
     figures: () => [['floor.svg', figure()]],
   });
+}
+
+/** Several records: each floor spectrum (broadened first when asked), their mean and their envelope. */
+async function runFloorSet(sources: string[], options: FloorCliOptions): Promise<void> {
+  checkSources(sources);
+  if (options.name !== undefined)
+    throw usageError('--name names one record; with several records each keeps its file name');
+  const grid = gridFromOptions(options);
+  const building = { ...buildingFromOptions(options), method: grid.method };
+  const broadening = broadeningFromOptions(options.broaden);
+  outputFormat(options, 'json or csv');
+  const axis = svgAxisFromOptions(options);
+  const grounds = [];
+  for (const source of sources) grounds.push(await loadRecord(source, options));
+  const set = floorSpectrumSet(grounds, building, grid, broadening);
+  const assumptions = floorSetAssumptions(set, building);
+  const labels = recordLabels(set.grounds);
+  const figure = () =>
+    floorSetFigure({ set, labels, building, methodDescription: METHOD_DESCRIPTIONS[set.method], axis });
+  await writeProduct(sources, options, {
+    json: () => floorSetToJson(set, building, assumptions),
+    csv: () => floorSetToCsv(set, assumptions),
+    table: () => floorSetTable(set, building, assumptions),
+    figures: () => [['floor.svg', figure()]],
+  });
+}
+
+/** Standard input at most once, and no file twice (it would count twice in the mean and envelope). */
+function checkSources(sources: string[]): void {
+  if (sources.filter((s) => s === '-').length > 1)
+    throw usageError('standard input (-) can be given only once');
+  const seen = new Map<string, string>();
+  for (const source of sources) {
+    if (source === '-') continue;
+    const key = samePath(source);
+    const before = seen.get(key);
+    if (before !== undefined)
+      throw usageError(
+        `${source}: given twice${before === source ? '' : ` (as ${before})`}; give each record once, or it counts twice in the mean`,
+      );
+    seen.set(key, source);
+  }
+}
+
+/** A path by the file it names: its real path when it exists (links followed), else as resolved. */
+function samePath(path: string): string {
+  try {
+    return realpathSync(path);
+  } catch {
+    return resolve(path);
+  }
 }

@@ -49,6 +49,10 @@ export function registerReport(program: Command): void {
     .option('--building-damping <ratio>', "for equipment above the base: the building's modal damping", '5%')
     .option('--modal-factor <value>', 'for equipment above the base: Γφ at its floor')
     .option('--broaden [fraction]', 'broaden the floor spectrum peaks, b = 0.15 unless given')
+    .option(
+      '--floor-envelope',
+      'with --pair: equipment above the base takes the envelope of both components’ floor spectra',
+    )
     .action(async (source: string, options: ReportCliOptions, cmd: Command) => {
       const words =
         (cmd.parent as unknown as { rawArgs?: string[] } | null)?.rawArgs ?? process.argv.slice(2);

@@ -29,6 +29,7 @@ export interface ReportCliOptions
   angleStep?: string;
   title?: string;
   note?: string[];
+  floorEnvelope?: boolean;
 }
 
 /**
@@ -49,6 +50,8 @@ export async function reportRequest(
   const aboveBase = options.buildingPeriod !== undefined || options.modalFactor !== undefined;
   if (aboveBase && !equipment.some((e) => e.value.zM > 0))
     throw usageError('--building-period and --modal-factor apply to equipment above the base (z > 0)');
+  if (options.floorEnvelope && (options.pair === undefined || !aboveBase))
+    throw usageError('--floor-envelope needs --pair and a building (--building-period, --modal-factor)');
   const settings = {
     grid: gridFromOptions(options),
     lengthUnit: parseLengthUnit(options.lengthUnit ?? 'm'),
@@ -58,6 +61,7 @@ export async function reportRequest(
     equipment,
     building: aboveBase ? buildingFromOptions(options) : null,
     broadening: broadeningFromOptions(options.broaden),
+    floorEnvelope: options.floorEnvelope === true,
     title: options.title,
     notes: options.note,
     commandLine,

@@ -6,7 +6,8 @@ import { inputError } from '../../base/errors.js';
 
 /**
  * Read the component's PSA from a spectrum JSON file, checking the fields it needs; a floor
- * spectrum's note states its building.
+ * spectrum's note states its building. A floor JSON of several records (`quakesweep floor REC1
+ * REC2 …`) gives its envelope, which the note says.
  */
 export function readSpectrumFile(
   file: string,
@@ -21,7 +22,9 @@ export function readSpectrumFile(
   }
   const object = data as Record<string, unknown>;
   const periods = object?.['periods_s'];
-  const spectra = object?.['spectra'];
+  const envelope = floorEnvelope(object, file);
+  const spectra = envelope ? envelope['spectra'] : object?.['spectra'];
+  const where = envelope ? 'envelope.spectra' : 'spectra';
   if (!Array.isArray(periods) || !periods.every((t) => typeof t === 'number')) {
     throw inputError('"periods_s" must be a list of periods (s); is this spectrum JSON?', { file });
   }
@@ -39,26 +42,54 @@ export function readSpectrumFile(
   }
   const psa = (spectra[index] as Record<string, unknown>)['psa_g'];
   if (!Array.isArray(psa) || psa.length !== periods.length || !psa.every((v) => typeof v === 'number')) {
-    throw inputError(`"spectra[${index}].psa_g" must be a list of ${periods.length} numbers`, { file });
+    throw inputError(`"${where}[${index}].psa_g" must be a list of ${periods.length} numbers`, { file });
   }
   const building = object['building'] as Record<string, unknown> | undefined;
   const isFloor = building !== undefined && building !== null;
   let value: ElasticInput;
   if (equipment.periodS === 'rigid') {
     const zero = periods.indexOf(0);
-    const pga = (object['record'] as Record<string, unknown> | undefined)?.['pga_g'];
+    const pga = envelope
+      ? envelope['pga_g']
+      : (object['record'] as Record<string, unknown> | undefined)?.['pga_g'];
+    const pgaKey = envelope ? 'envelope.pga_g' : 'record.pga_g';
     if (zero >= 0)
       value = { psaG: psa[zero], how: 'PSA at T = 0 (PGA) of the spectrum, rigid component', source: file };
     else if (typeof pga === 'number')
-      value = { psaG: pga, how: '"record.pga_g" of the spectrum file, rigid component', source: file };
-    else throw inputError('has neither T = 0 nor "record.pga_g" for a rigid component', { file });
+      value = { psaG: pga, how: `"${pgaKey}" of the spectrum file, rigid component`, source: file };
+    else throw inputError(`has neither T = 0 nor "${pgaKey}" for a rigid component`, { file });
   } else {
     value = { ...psaAtPeriod(periods, psa, equipment.periodS, file), source: file };
   }
   const broadening = object['broadening'] as Record<string, unknown> | null | undefined;
   const floorNote = isFloor
-    ? `Floor spectrum: building T_b = ${building['period_s']} s, ζ_b = ${building['damping']}, Γφ = ${building['modal_factor']}` +
-      `${broadening ? `, peaks broadened ±${broadening['fraction']}` : ', not broadened'}; this tool does not check that Γφ belongs to the floor at z.`
+    ? `${envelope ? envelopeWords(object) : 'Floor spectrum'}: building T_b = ${building['period_s']} s, ζ_b = ${building['damping']}, Γφ = ${building['modal_factor']}` +
+      `${broadening ? `, peaks broadened ±${broadening['fraction']}${envelope ? ' (each record before the envelope)' : ''}` : ', not broadened'}; this tool does not check that Γφ belongs to the floor at z.`
     : '';
   return { value, isFloor, floorNote };
+}
+
+/**
+ * The "envelope" of a floor JSON of several records, checked; undefined for a spectrum JSON or a
+ * floor JSON of one record (they have "spectra" at the top).
+ */
+function floorEnvelope(object: Record<string, unknown>, file: string): Record<string, unknown> | undefined {
+  if (object === null || typeof object !== 'object' || object['spectra'] !== undefined) return undefined;
+  const envelope = object['envelope'];
+  if (envelope === undefined) return undefined;
+  if (envelope === null || typeof envelope !== 'object' || !Array.isArray(object['records']))
+    throw inputError(
+      '"envelope" must be an object beside "records"; is this the JSON of `quakesweep floor`?',
+      {
+        file,
+      },
+    );
+  return envelope as Record<string, unknown>;
+}
+
+/** "Floor envelope of N records (a, b, …)", from the records' labels. */
+function envelopeWords(object: Record<string, unknown>): string {
+  const records = object['records'] as unknown[];
+  const labels = records.map((r) => String((r as Record<string, unknown>)?.['label'] ?? '?'));
+  return `Floor envelope of ${records.length} records (${labels.join(', ')}); the envelope is used, not the mean nor one record`;
 }

@@ -1,4 +1,4 @@
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { useCliFolder } from '../../helpers/cli-folder.js';
@@ -76,5 +76,71 @@ describe('quakesweep floor', () => {
     [[...building('1.3'), '--format', 'svg'], /--format 'svg': use json or csv/],
   ])('refuses %j with exit 2 and one line naming the option', async (args, message) => {
     expect(expectOneLineFailure(await folder.run('floor', ...record, ...args))).toMatch(message);
+  });
+
+  describe('several records', () => {
+    const several = ['sine.txt', 'half.txt', '--units', 'g', '--dt', '0.005', '--periods', '0,0.2,0.5,1'];
+    const writeHalf = () => {
+      // Another invented motion: every other sample of sine.txt, halved.
+      const lines = readFileSync(join(folder.path, 'sine.txt'), 'utf8').trim().split('\n');
+      const half = lines.filter((_, i) => i % 2 === 0).map((v) => String(Number(v) / 2));
+      writeFileSync(join(folder.path, 'half.txt'), `${half.join('\n')}\n`);
+    };
+
+    it('JSON: each record labelled, their mean and their envelope (the larger and the average, by definition)', async () => {
+      writeHalf();
+      const run = await folder.run(
+        'floor',
+        'sine.txt',
+        'half.txt',
+        '--units',
+        'g',
+        '--dt',
+        '0.005',
+        '--periods',
+        '0,0.2,0.5,1',
+        ...building('1.3'),
+        '--format',
+        'json',
+      );
+      // half.txt is read with the same --dt 0.005 as sine.txt (the same options apply to each),
+      // so it is simply a second, different record here.
+      expect(run.code).toBe(0);
+      const out = JSON.parse(run.stdout);
+      expect(out.records.map((r: { label: string }) => r.label)).toEqual(['sine', 'half']);
+      const [a, b] = out.records.map((r: { spectra: { psa_g: number[] }[] }) => r.spectra[0].psa_g);
+      for (let p = 0; p < 4; p++) {
+        expect(out.envelope.spectra[0].psa_g[p]).toBe(Math.max(a[p], b[p]));
+        expect(out.mean.spectra[0].psa_g[p]).toBeCloseTo((a[p] + b[p]) / 2, 12);
+      }
+      expect(out.spectra).toBeUndefined(); // no single-record curves at the top: readers must choose
+    });
+
+    it('CSV: a row per period, a PSA column per record, the mean and the envelope; the table and the figure', async () => {
+      writeHalf();
+      const csv = await folder.run('floor', ...several, ...building('1.3'), '--format', 'csv');
+      expect(csv.code).toBe(0);
+      expect(csv.stdout.split('\n').find((l) => l.startsWith('period_s'))).toBe(
+        'period_s,psa_g@5%:sine,psa_g@5%:half,psa_g@5%:mean,psa_g@5%:envelope',
+      );
+      const table = await folder.run('floor', ...several, ...building('1.3'), '--svg', 'figs');
+      expect(table.code).toBe(0);
+      expect(table.stdout).toMatch(/^envelope +\S+ +\S+ {2}\(from (sine|half)\)$/m);
+      const svg = readFileSync(join(folder.path, 'figs', 'floor.svg'), 'utf8');
+      expect(svg).toContain('class="envelope"');
+      expect(svg).toContain('Preliminary engineering aid only.');
+    });
+
+    it.each([
+      [['sine.txt', 'sine.txt'], /^quakesweep: sine\.txt: given twice; give each record once/],
+      [['sine.txt', './sine.txt'], /^quakesweep: \.\/sine\.txt: given twice \(as sine\.txt\)/],
+      [['-', 'sine.txt', '-'], /standard input \(-\) can be given only once/],
+      [['sine.txt', 'half.txt', '--name', 'x'], /--name names one record/],
+      [['sine.txt', 'absent.txt'], /absent\.txt/],
+    ])('refuses %j with exit 2 and one line', async (args, message) => {
+      writeHalf();
+      const result = await folder.run('floor', ...args, '--units', 'g', '--dt', '0.005', ...building('1.3'));
+      expect(expectOneLineFailure(result)).toMatch(message);
+    });
   });
 });

@@ -44,6 +44,12 @@ describe('reportRequest', () => {
     await expect(reportRequest(at('main.txt'), { ...options, equipment: [generator] }, [])).rejects.toThrow(
       '--building-period and --modal-factor apply to equipment above the base (z > 0)',
     );
+    const envelope = { ...options, floorEnvelope: true };
+    const paired = await reportRequest(at('main.txt'), { ...envelope, pair: at('second.txt') }, []);
+    expect(paired.request.floorEnvelope).toBe(true);
+    await expect(reportRequest(at('main.txt'), envelope, [])).rejects.toThrow(
+      '--floor-envelope needs --pair and a building (--building-period, --modal-factor)',
+    );
   });
 
   it('reads an ASCE 7-22 multi-period target and counts its table among the inputs', async () => {

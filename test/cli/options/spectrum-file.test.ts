@@ -62,6 +62,37 @@ describe('readSpectrumFile', () => {
     );
   });
 
+  it('a floor JSON of several records gives its envelope, and the note says so; a rigid component takes its T = 0 or envelope.pga_g', () => {
+    const floorSet = {
+      periods_s: [0.05, 0.1, 1],
+      building: { period_s: 0.5, damping: 0.05, modal_factor: 1.3 },
+      broadening: { fraction: 0.15 },
+      records: [{ label: 'h1', spectra: [{ damping: 0.05, psa_g: [9, 9, 9] }] }, { label: 'h2' }],
+      mean: { pga_g: 0.3, spectra: [{ damping: 0.05, psa_g: [0.4, 0.5, 0.2] }] },
+      envelope: { pga_g: 0.35, spectra: [{ damping: 0.05, psa_g: [0.5, 0.8, 0.3] }] },
+    };
+    const read = readSpectrumFile(file('floor-set.json', floorSet), at(0.1));
+    expect(read.value.psaG).toBe(0.8);
+    expect(read.isFloor).toBe(true);
+    expect(read.floorNote).toMatch(
+      /^Floor envelope of 2 records \(h1, h2\); the envelope is used, not the mean nor one record: building T_b = 0\.5 s, .*peaks broadened ±0\.15 \(each record before the envelope\)/,
+    );
+    const rigid = readSpectrumFile(file('floor-set.json', floorSet), at('rigid'));
+    expect(rigid.value).toMatchObject({
+      psaG: 0.35,
+      how: '"envelope.pga_g" of the spectrum file, rigid component',
+    });
+    expect(() =>
+      readSpectrumFile(
+        file('bad-set.json', { ...floorSet, envelope: { spectra: [{ damping: 0.05, psa_g: [1] }] } }),
+        at(0.1),
+      ),
+    ).toThrow(/"envelope\.spectra\[0\]\.psa_g" must be a list of 3 numbers/);
+    expect(() =>
+      readSpectrumFile(file('no-records.json', { ...floorSet, records: undefined }), at(0.1)),
+    ).toThrow(/"envelope" must be an object beside "records"/);
+  });
+
   it('refuses files that are not a spectrum, naming the file and the field', () => {
     const refuse = (name: string, content: unknown, message: RegExp) =>
       expect(() => readSpectrumFile(file(name, content), at(0.1))).toThrow(message);

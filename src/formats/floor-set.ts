@@ -1,0 +1,201 @@
+import { CAUTION } from '../base/caution.js';
+import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
+import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
+import type { BuildingMode } from '../spectrum/floor.js';
+import { type FloorSpectrumSet, recordLabels } from '../spectrum/floor-set.js';
+import type { SpectrumCurve } from '../spectrum/spectrum.js';
+import { floorAssumptions } from './floor.js';
+import {
+  alignRight,
+  assumptionLines,
+  csvText,
+  dampingLabel,
+  formatPeriod,
+  type PeriodColumn,
+  pgaText,
+  terminalText,
+} from './layout.js';
+import { recordToJson, toG } from './spectrum-json.js';
+
+/** The order of the operations, for every output of a set of floor spectra. */
+function combinationLine(set: FloorSpectrumSet): string {
+  const n = set.members.length;
+  const first =
+    set.broadening === null
+      ? `Mean and envelope of ${n} floor spectra (one per ground record, none broadened)`
+      : `Mean and envelope of ${n} floor spectra taken after broadening: each record's floor spectrum broadened on its own first`;
+  return `${first}, then at each period and damping their arithmetic mean and their envelope (the largest of them); SD, PSV, PSA, SV and SA each combined on its own.`;
+}
+
+/**
+ * The assumptions of a set of floor spectra: those of one floor spectrum (for the coarsest time
+ * step, so that its sampling warning is not missed), then how the set is combined.
+ */
+export function floorSetAssumptions(set: FloorSpectrumSet, building: BuildingMode): string[] {
+  const coarsest = set.members.reduce((a, b) => (b.floor.dtS > a.floor.dtS ? b : a));
+  return [...floorAssumptions(coarsest, building, coarsest.floor.dtS), combinationLine(set)];
+}
+
+/** For each damping and period, the label of the record whose PSA is the envelope's (the first such). */
+function governing(set: FloorSpectrumSet, labels: string[]): string[][] {
+  return set.envelope.curves.map((curve, d) =>
+    Array.from(curve.psaMS2, (value, p) => {
+      const i = set.members.findIndex((m) => m.spectrum.curves[d].psaMS2[p] === value);
+      return labels[Math.max(i, 0)];
+    }),
+  );
+}
+
+const curvesToJson = (curves: readonly SpectrumCurve[]) =>
+  curves.map((curve) => ({
+    damping: curve.damping,
+    sd_m: Array.from(curve.sdM),
+    psv_m_s: Array.from(curve.psvMS),
+    psa_g: toG(curve.psaMS2),
+    sv_m_s: Array.from(curve.svMS),
+    sa_g: toG(curve.saMS2),
+  }));
+
+/**
+ * The JSON of `quakesweep floor` with several records: each record's floor spectrum by its label,
+ * then "mean" and "envelope" with the same curves (the envelope naming the record that governs
+ * each period's PSA), the building, the broadening and the assumptions.
+ */
+export function floorSetToJson(
+  set: FloorSpectrumSet,
+  building: BuildingMode & { method: Method },
+  assumptions: string[],
+) {
+  const labels = recordLabels(set.members.map((m) => m.spectrum.record));
+  const by = governing(set, labels);
+  return {
+    caution: CAUTION,
+    method: set.method,
+    method_description: METHOD_DESCRIPTIONS[set.method],
+    periods_s: Array.from(set.periodsS),
+    building: {
+      period_s: building.periodS,
+      damping: building.damping,
+      modal_factor: building.modalFactor,
+      method: building.method,
+    },
+    broadening:
+      set.broadening === null
+        ? null
+        : {
+            fraction: set.broadening,
+            window: 'max over [T(1-b), T/(1-b)]',
+            source: 'US NRC Regulatory Guide 1.122 (from memory)',
+            applied: 'to each record before the mean and the envelope',
+          },
+    records: set.members.map((member, i) => ({
+      label: labels[i],
+      record: recordToJson(member.spectrum.record),
+      ground_pga_g: set.grounds[i].pgaMS2 / G,
+      spectra: curvesToJson(member.spectrum.curves),
+      unbroadened_psa_g: member.unbroadened.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2) })),
+    })),
+    mean: {
+      label: 'mean',
+      records: set.members.length,
+      pga_g: set.mean.pgaMS2 / G,
+      spectra: curvesToJson(set.mean.curves),
+    },
+    envelope: {
+      label: 'envelope',
+      records: set.members.length,
+      pga_g: set.envelope.pgaMS2 / G,
+      spectra: curvesToJson(set.envelope.curves).map((curve, d) => ({ ...curve, psa_governed_by: by[d] })),
+    },
+    assumptions,
+  };
+}
+
+/** A CSV header cell, quoted (RFC 4180) when a record's label holds a comma, a quote or a line break. */
+const csvCell = (text: string) => (/[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
+
+/**
+ * The CSV of several floor spectra: one row per period and, for each damping, a PSA column (g)
+ * per record, then the mean and the envelope (`psa_g@5%:marrowby-h1`, …, `psa_g@5%:mean`,
+ * `psa_g@5%:envelope`). Wide rather than long so that a spreadsheet plots it as it stands (the
+ * period column against the others) and reads one period across a row; PSA only, since SD = PSA/ω²
+ * and PSV = PSA/ω follow from it at each period and the JSON holds every quantity.
+ */
+export function floorSetToCsv(set: FloorSpectrumSet, assumptions: string[]): string {
+  const labels = recordLabels(set.members.map((m) => m.spectrum.record));
+  const notes = [
+    ...set.members.map(
+      (m, i) =>
+        `record: ${labels[i]}; ${m.spectrum.record.source}; npts ${m.floor.accelMS2.length}; dt ${m.floor.dtS} s`,
+    ),
+    `method: ${set.method}`,
+    `building: ${set.members[0].floor.processing.at(-1)?.description ?? ''}`,
+    'columns: floor PSA (g) of each record, their mean and their envelope, per damping',
+    ...assumptions.slice(-2),
+  ];
+  const columns: PeriodColumn[] = set.envelope.curves.flatMap((curve, d) => {
+    const name = (label: string) => csvCell(`psa_g@${dampingLabel(curve.damping)}:${label}`);
+    const psaG = (c: SpectrumCurve) => (p: number) => c.psaMS2[p] / G;
+    return [
+      ...set.members.map((m, i) => ({ name: name(labels[i]), at: psaG(m.spectrum.curves[d]) })),
+      { name: name('mean'), at: psaG(set.mean.curves[d]) },
+      { name: name('envelope'), at: psaG(curve) },
+    ];
+  });
+  return csvText(notes, set.periodsS, columns);
+}
+
+/** The largest value of a curve and its period (the first where it is reached). */
+export function peakOf(
+  periodsS: Float64Array,
+  values: Float64Array,
+): { value: number; periodS: number; index: number } {
+  let best = 0;
+  for (let p = 1; p < values.length; p++) if (values[p] > values[best]) best = p;
+  return { value: values[best], periodS: periodsS[best], index: best };
+}
+
+/**
+ * The terminal summary of several floor spectra: the records and the building, then the peak floor
+ * PSA of each record, of the mean and of the envelope with the period where it is reached, per damping.
+ */
+export function floorSetTable(set: FloorSpectrumSet, building: BuildingMode, assumptions: string[]): string {
+  const labels = recordLabels(set.members.map((m) => m.spectrum.record));
+  const rows: { label: string; curves: readonly SpectrumCurve[] }[] = [
+    ...set.members.map((m, i) => ({ label: labels[i], curves: m.spectrum.curves })),
+    { label: 'mean', curves: set.mean.curves },
+    { label: 'envelope', curves: set.envelope.curves },
+  ];
+  const first = Math.max(14, ...rows.map((r) => r.label.length));
+  const widths = [first, ...set.envelope.curves.flatMap(() => [17, 10])];
+  const heading = set.envelope.curves.flatMap((c) => {
+    const d = dampingLabel(c.damping);
+    return [`peak PSA g @${d}`, `at T (s)`];
+  });
+  const by = governing(set, labels);
+  const peakLabels = set.envelope.curves.map((c, d) => by[d][peakOf(set.periodsS, c.psaMS2).index]);
+  const from = [...new Set(peakLabels)].join(', ');
+  const table = rows.map((row, r) => {
+    const cells = row.curves.flatMap((c) => {
+      const peak = peakOf(set.periodsS, c.psaMS2);
+      return [(peak.value / G).toPrecision(4), formatPeriod(peak.periodS)];
+    });
+    const line = [row.label.padEnd(first), alignRight(cells, widths.slice(1))].join(' ');
+    return r === rows.length - 1 ? `${line}  (from ${from})` : line;
+  });
+  const n = set.members.length;
+  return terminalText([
+    `records   ${n} ground records through the same building`,
+    ...set.members.map(
+      (m, i) =>
+        `  ${labels[i]} (${m.spectrum.record.source}), ground ${pgaText(set.grounds[i].pgaMS2)}; floor ${pgaText(m.floor.pgaMS2)}`,
+    ),
+    `building  T_b ${building.periodS} s, ζ_b ${building.damping}, Γφ ${building.modalFactor}`,
+    `method    ${METHOD_DESCRIPTIONS[set.method]}`,
+    '',
+    [''.padEnd(first), alignRight(heading, widths.slice(1))].join(' '),
+    ...table,
+    `(${set.periodsS.length} periods; --format json or csv for every period of every record, the mean and the envelope)`,
+    ...assumptionLines(assumptions),
+  ]);
+}
