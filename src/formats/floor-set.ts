@@ -5,6 +5,7 @@ import type { BuildingMode } from '../spectrum/floor.js';
 import { type FloorSpectrumSet, recordLabels } from '../spectrum/floor-set.js';
 import type { SpectrumCurve } from '../spectrum/spectrum.js';
 import { floorAssumptions } from './floor.js';
+import { frequenciesHz } from './frequency.js';
 import {
   alignRight,
   assumptionLines,
@@ -73,6 +74,7 @@ export function floorSetToJson(
     method: set.method,
     method_description: METHOD_DESCRIPTIONS[set.method],
     periods_s: Array.from(set.periodsS),
+    frequencies_hz: frequenciesHz(set.periodsS),
     building: {
       period_s: building.periodS,
       damping: building.damping,

@@ -43,6 +43,8 @@ describe('floorSetToJson', () => {
     expect(json.records[1].record.dt_s).toBe(0.02);
     expect(json.records[0].ground_pga_g).toBeCloseTo(one.pgaMS2 / G, 12);
     expect(json.mean.records).toBe(2);
+    // f = 1/T beside the periods, null at T = 0 (JSON has no infinity)
+    expect(json.frequencies_hz).toEqual([null, 10, 1 / 0.3, 1]);
     expect(json.envelope.spectra.map((c) => c.damping)).toEqual([0.02, 0.05]);
     expect(json.broadening?.applied).toBe('to each record before the mean and the envelope');
     expect(json.assumptions).toEqual(assumptions);
@@ -70,6 +72,7 @@ describe('floorSetToCsv', () => {
     expectCaution(csv, '# ');
     expect(header).toEqual([
       'period_s',
+      'frequency_hz',
       'psa_g@2%:east, "yard" (invented)',
       'psa_g@2%:north (invented)',
       'psa_g@2%:mean',
@@ -81,7 +84,8 @@ describe('floorSetToCsv', () => {
     ]);
     expect(rows.map((r) => r[0])).toEqual(grid.periodsS);
     for (const row of rows) {
-      const [, a, b, mean, envelope] = row as number[];
+      const [t, f, a, b, mean, envelope] = row as number[];
+      if (t > 0) expect(f).toBeCloseTo(1 / t, 12); // f = 1/T, empty at T = 0
       expect(envelope).toBe(Math.max(a, b));
       expect(mean).toBeCloseTo((a + b) / 2, 12);
     }

@@ -121,7 +121,7 @@ describe('quakesweep floor', () => {
       const csv = await folder.run('floor', ...several, ...building('1.3'), '--format', 'csv');
       expect(csv.code).toBe(0);
       expect(csv.stdout.split('\n').find((l) => l.startsWith('period_s'))).toBe(
-        'period_s,psa_g@5%:sine,psa_g@5%:half,psa_g@5%:mean,psa_g@5%:envelope',
+        'period_s,frequency_hz,psa_g@5%:sine,psa_g@5%:half,psa_g@5%:mean,psa_g@5%:envelope',
       );
       const table = await folder.run('floor', ...several, ...building('1.3'), '--svg', 'figs');
       expect(table.code).toBe(0);
