@@ -250,7 +250,11 @@ export class RecordReader {
       name: o.name ?? (o.source === '-' ? 'stdin' : recordName(o.source)),
       source: o.source,
       dtS: dtS as number,
-      accelMS2: this.values.slice(0, this.count),
+      // A view when little of the array is spare (a copy would hold the samples twice at the peak).
+      accelMS2:
+        this.count > 0.75 * this.values.length
+          ? this.values.subarray(0, this.count)
+          : this.values.slice(0, this.count),
       unitsRead: o.units,
     });
   }
