@@ -26,7 +26,7 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
     out.push(
       '',
       'horizontal',
-      force('F_p code (ASCE 7-16 Eq. 13.3-1)', c.fpFormula, `bounds ${f(c.fpMin)} to ${f(c.fpMax)} ${unit}`),
+      force('F_p (ASCE 7-16 Eq. 13.3-1)', c.fpFormula, `bounds ${f(c.fpMin)} to ${f(c.fpMax)} ${unit}`),
       force('F_p code, bounded', c.fp, `(${c.bound}; z/h = ${c.heightRatio.toFixed(3)})`),
     );
   } else out.push(...asce722Lines(analysis, force));
