@@ -163,7 +163,7 @@ export function parseEquipment(text: string, file: string): Equipment {
   const name = object['name'];
   if (typeof name !== 'string' || name.trim() === '') fail('name', 'must be a non-empty string');
   const units = object['units'];
-  if (typeof units !== 'string' || !(units in EQUIPMENT_UNITS)) {
+  if (typeof units !== 'string' || !Object.hasOwn(EQUIPMENT_UNITS, units)) {
     fail('units', `must be one of ${Object.keys(EQUIPMENT_UNITS).join(', ')}, got ${JSON.stringify(units)}`);
   }
   const system = EQUIPMENT_UNITS[units as EquipmentUnits];

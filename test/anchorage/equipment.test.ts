@@ -87,6 +87,9 @@ describe('parseEquipment', () => {
     expect(refusal({ ...base, units: 'metric' }).message).toMatch(
       /"units" must be one of SI, US-kip-in, US-lb-in/,
     );
+    // a name every object has (Object.prototype's) is not a unit system
+    for (const units of ['toString', 'constructor', '__proto__'])
+      expect(refusal({ ...base, units }).message).toMatch(/"units" must be one of/);
     expect(refusal({ ...base, period_s: 0 }).message).toMatch(/"period_s"/);
     expect(
       refusal({
