@@ -29,16 +29,13 @@ export function registerDamping(program: Command): void {
     )
     .argument('<record>', 'record file, or - for standard input');
   addRecordOptions(command);
-  addGridOptions(command);
+  addGridOptions(command, DEFAULT_DAMPING_LIST);
   addAxisOption(command);
   addOutputOptions(
     command,
     'json or csv (default: a table on the terminal, or json with --out)',
     'also draw the spectra and their ratios to 5%, DIR/damping.svg',
-  ).action(async (source: string, options: DampingCliOptions) => {
-    const fromDefault = command.getOptionValueSource('damping') === 'default';
-    await runDamping(source, { ...options, damping: fromDefault ? DEFAULT_DAMPING_LIST : options.damping });
-  });
+  ).action(runDamping);
 }
 
 export async function runDamping(source: string, options: DampingCliOptions): Promise<void> {

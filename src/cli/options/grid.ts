@@ -18,14 +18,14 @@ export interface GridCliOptions {
 }
 
 /** Add --periods (or --frequencies), --damping, --method and --force. */
-export function addGridOptions(command: Command): Command {
+export function addGridOptions(command: Command, defaultDamping = '5%'): Command {
   return command
     .option(
       '--periods <grid>',
       'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01:10:120)',
     )
     .option('--frequencies <grid>', FREQUENCIES_HELP)
-    .option('--damping <list>', 'damping ratios as fractions or percentages, e.g. 0.02,5%', '5%')
+    .option('--damping <list>', 'damping ratios as fractions or percentages, e.g. 0.02,5%', defaultDamping)
     .option('--method <method>', 'newmark-average, newmark-linear or piecewise-exact', 'newmark-average')
     .option('--force', `allow more than ${thousands(MAX_OSCILLATORS)} oscillators`);
 }

@@ -1,10 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { useCliFolder } from '../../helpers/cli-folder.js';
+import { runMain } from '../../helpers/run-cli.js';
 
 const folder = useCliFolder('quakesweep-damping-', (f) => f.writeWindowedSine('h1.txt', 1.6));
 const { json } = folder;
 
 describe('quakesweep damping', () => {
+  it('--help states the damping ratios used when --damping is not given', async () => {
+    const help = await runMain(['damping', '--help']);
+    expect(help.stdout.replace(/\s+/g, ' ')).toContain('(default: "2%,5%,10%,20%")');
+  });
+
   it('--damping 2%,5%,10%,20%: ratios to 5% and published factors', async () => {
     const out = await json(
       'damping',
