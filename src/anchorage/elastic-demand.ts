@@ -41,6 +41,25 @@ export function psaAtPeriod(
 }
 
 /**
+ * The component's PSA, g, on a curve of floor PSA (m/s²) by period: at its period, or for a rigid
+ * component the curve's value at T = 0 or else `pgaMS2`. `curve` and `pga` name them in the note.
+ */
+export function componentPsaOnCurve(
+  periodS: number | 'rigid',
+  periodsS: ArrayLike<number>,
+  psaMS2: ArrayLike<number>,
+  pgaMS2: number,
+  names: { curve: string; pga: string },
+): SpectralValue {
+  const psaG = Array.from(psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
+  if (periodS !== 'rigid') return psaAtPeriod(periodsS, psaG, periodS, `the ${names.curve}`);
+  const zero = Array.from(periodsS).indexOf(0);
+  return zero >= 0
+    ? { psaG: psaG[zero], how: `PSA at T = 0 of the ${names.curve} (${names.pga}), rigid component` }
+    : { psaG: pgaMS2 / STANDARD_GRAVITY_MS2, how: `${names.pga}, rigid component` };
+}
+
+/**
  * The PSA of one record for the component itself: the response spectrum at the component's period
  * and damping alone (no interpolation); the record's PGA for a rigid component.
  */

@@ -1,5 +1,5 @@
 import { analyseAnchorage, type ElasticInput } from '../anchorage/anchorage.js';
-import { psaAtPeriod, recordPsaForComponent } from '../anchorage/elastic-demand.js';
+import { componentPsaOnCurve, recordPsaForComponent } from '../anchorage/elastic-demand.js';
 import type { Equipment } from '../anchorage/equipment.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { anchorageToJson } from '../formats/anchorage-json.js';
@@ -65,14 +65,11 @@ export function equipmentDemand(e: Equipment, record: GroundRecord, motion: Dema
     return floorEnvelopeDemand(e, [record, ...(motion.floorRecords ?? [])], building, motion);
   const grid = { periodsS, dampings: [e.damping], method };
   const floor = floorSpectrum(record, { ...building, method }, grid, motion.broadening ?? null);
-  const psa = Array.from(floor.spectrum.curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
-  const zero = Array.from(periodsS).indexOf(0);
-  const value =
-    e.periodS !== 'rigid'
-      ? psaAtPeriod(periodsS, psa, e.periodS, 'the floor spectrum')
-      : zero >= 0
-        ? { psaG: psa[zero], how: 'PSA at T = 0 of the floor spectrum (floor PGA), rigid component' }
-        : { psaG: floor.spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2, how: 'floor PGA, rigid component' };
+  const curve = floor.spectrum.curves[0].psaMS2;
+  const value = componentPsaOnCurve(e.periodS, periodsS, curve, floor.spectrum.record.pgaMS2, {
+    curve: 'floor spectrum',
+    pga: 'floor PGA',
+  });
   const ground = Array.from(responseSpectrum(record, grid).curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
   const abovePeriodZero = <T>(values: T[]) => values.filter((_, i) => periodsS[i] > 0);
   const figure = psaFigure(floor.spectrum, {

@@ -1,7 +1,6 @@
 import type { ElasticInput } from '../anchorage/anchorage.js';
-import { psaAtPeriod } from '../anchorage/elastic-demand.js';
+import { componentPsaOnCurve } from '../anchorage/elastic-demand.js';
 import type { Equipment } from '../anchorage/equipment.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { floorSetAssumptions } from '../formats/floor-set.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
@@ -40,14 +39,10 @@ export function floorEnvelopeDemand(
   const { periodsS, method } = motion.grid;
   const grid = { periodsS, dampings: [e.damping], method };
   const set = floorSpectrumSet(records, { ...building, method }, grid, motion.broadening ?? null);
-  const psa = Array.from(set.envelope.curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
-  const zero = Array.from(periodsS).indexOf(0);
-  const value =
-    e.periodS !== 'rigid'
-      ? psaAtPeriod(periodsS, psa, e.periodS, 'the floor envelope')
-      : zero >= 0
-        ? { psaG: psa[zero], how: 'PSA at T = 0 of the floor envelope (largest floor PGA), rigid component' }
-        : { psaG: set.envelope.pgaMS2 / STANDARD_GRAVITY_MS2, how: 'largest floor PGA, rigid component' };
+  const value = componentPsaOnCurve(e.periodS, periodsS, set.envelope.curves[0].psaMS2, set.envelope.pgaMS2, {
+    curve: 'floor envelope',
+    pga: 'largest floor PGA',
+  });
   const labels = recordLabels(set.grounds);
   const broadened =
     set.broadening === null ? '' : `, peaks broadened ±${set.broadening} on each record first`;

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { psaAtPeriod, recordPsaForComponent } from '../../src/anchorage/elastic-demand.js';
+import {
+  componentPsaOnCurve,
+  psaAtPeriod,
+  recordPsaForComponent,
+} from '../../src/anchorage/elastic-demand.js';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { createRecord } from '../../src/record/record.js';
 
@@ -44,5 +48,30 @@ describe('recordPsaForComponent', () => {
     const record = createRecord({ name: 'sine', dtS: dt, accelMS2: accel });
     const value = recordPsaForComponent(record, period, 0.05, 'piecewise-exact');
     expect(value.psaG).toBeCloseTo(1.0, 2);
+  });
+});
+
+describe('componentPsaOnCurve', () => {
+  const g = STANDARD_GRAVITY_MS2;
+  const periodsS = [0, 0.1, 1];
+  const psaMS2 = [0.5 * g, 1.0 * g, 0.25 * g];
+
+  it('reads the curve at the period, log–log between grid periods (hand calculation)', () => {
+    expect(componentPsaOnCurve(0.1, periodsS, psaMS2, 0, { curve: 'c', pga: 'p' }).psaG).toBeCloseTo(1, 12);
+    // log–log between (0.1 s, 1 g) and (1 s, 0.25 g): at √0.1 s, √(1·0.25) = 0.5 g
+    const mid = componentPsaOnCurve(Math.sqrt(0.1), periodsS, psaMS2, 0, { curve: 'c', pga: 'p' });
+    expect(mid.psaG).toBeCloseTo(0.5, 12);
+  });
+
+  it('a rigid component takes the curve at T = 0, or the PGA given when the grid has no T = 0', () => {
+    const names = { curve: 'floor envelope', pga: 'largest floor PGA' };
+    const atZero = componentPsaOnCurve('rigid', periodsS, psaMS2, 9 * g, names);
+    expect(atZero).toEqual({
+      psaG: 0.5,
+      how: 'PSA at T = 0 of the floor envelope (largest floor PGA), rigid component',
+    });
+    const noZero = componentPsaOnCurve('rigid', [0.1, 1], [g, 0.25 * g], 0.3 * g, names);
+    expect(noZero.psaG).toBeCloseTo(0.3, 12);
+    expect(noZero.how).toBe('largest floor PGA, rigid component');
   });
 });
