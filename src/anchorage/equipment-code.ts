@@ -120,7 +120,7 @@ export function readFactors(reader: Reader, code: ComponentEdition, zAboveGrade:
   const list = BUILDING_KEYS.map((k) => `"${k}"`).join(', ');
   if (present.length > 0 && present.length < BUILDING_KEYS.length) {
     const absent = BUILDING_KEYS.find((key) => !given(object, key)) as string;
-    fail(absent, `is missing: R_μ (ASCE/SEI 7-22 §13.3.1.2, Eq. 13.3-6) needs ${list} together`);
+    fail(absent, `is missing: R_μ (ASCE/SEI 7-22 §13.3.1.2, Eq. 13.3-6) needs all three of ${list}`);
   }
   if (present.length === 0) {
     if (zAboveGrade) {
@@ -150,7 +150,7 @@ export function readVertical(reader: Reader, code: ComponentEdition): VerticalIn
     const absent = VERTICAL_KEYS.find((key) => !given(object, key)) as string;
     fail(
       absent,
-      `is missing: the vertical spectral demand (§11.9) needs ${VERTICAL_KEYS.map((k) => `"${k}"`).join(', ')} together`,
+      `is missing: the vertical spectral demand (§11.9) needs all three of ${VERTICAL_KEYS.map((k) => `"${k}"`).join(', ')}`,
     );
   }
   const periodS = object['vertical_period_s'];

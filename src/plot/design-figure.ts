@@ -30,7 +30,7 @@ export function designFigure(input: DesignFigureInput): string {
   const notes = [
     ...zeroPeriodNotes(
       input.periodsS,
-      (zero) => ` (there PSA = ${formatValue(input.psaG[zero])} g)`,
+      (zero) => ` (there ${spectrum.vertical ? 'S_av' : 'PSA'} = ${formatValue(input.psaG[zero])} g)`,
       input.axis,
     ),
     'A code design spectrum is a smoothed envelope for design, not the response to any one record; its parameters are as given, not chosen by this tool.',

@@ -101,7 +101,7 @@ describe('refusals name the file and the key', () => {
       /^pump\.json: "building_r" is missing: a component above grade \(z > 0\) needs the building's R, Ω₀ and I_e for R_μ \(ASCE\/SEI 7-22 §13\.3\.1\.2\).*not the anchorage "omega0"/,
     );
     const { building_ie: _, ...part } = building;
-    expect(refusal({ ...v722, z: 5, ...part }).message).toMatch(/^"building_ie" is missing: R_μ .* together/);
+    expect(refusal({ ...v722, z: 5, ...part }).message).toMatch(/^"building_ie" is missing: R_μ .* needs all three of/);
     expect(refusal({ ...v722, ...part }).message).toMatch(/^"building_ie" is missing/); // at grade too
   });
 
@@ -129,7 +129,7 @@ describe('refusals name the file and the key', () => {
     });
     const { ss: _, ...noSs } = vertical;
     expect(refusal({ ...v716, ...noSs }).describe()).toMatch(
-      /^pump\.json: "ss" is missing: the vertical spectral demand \(§11\.9\) needs "vertical_period_s", "ss", "site_class" together/,
+      /^pump\.json: "ss" is missing: the vertical spectral demand \(§11\.9\) needs all three of "vertical_period_s", "ss", "site_class"/,
     );
     expect(refusal({ ...v716, ...vertical, vertical_period_s: 2.5 }).message).toMatch(
       /"vertical_period_s" must be the component's vertical period T_v in s, 0 to 2/,
