@@ -101,7 +101,9 @@ describe('refusals name the file and the key', () => {
       /^pump\.json: "building_r" is missing: a component above grade \(z > 0\) needs the building's R, Ω₀ and I_e for R_μ \(ASCE\/SEI 7-22 §13\.3\.1\.2\).*not the anchorage "omega0"/,
     );
     const { building_ie: _, ...part } = building;
-    expect(refusal({ ...v722, z: 5, ...part }).message).toMatch(/^"building_ie" is missing: R_μ .* needs all three of/);
+    expect(refusal({ ...v722, z: 5, ...part }).message).toMatch(
+      /^"building_ie" is missing: R_μ .* needs all three of/,
+    );
     expect(refusal({ ...v722, ...part }).message).toMatch(/^"building_ie" is missing/); // at grade too
   });
 
