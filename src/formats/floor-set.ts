@@ -4,7 +4,7 @@ import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
 import type { BuildingMode } from '../spectrum/floor.js';
 import { type FloorSpectrumSet, recordLabels } from '../spectrum/floor-set.js';
 import type { SpectrumCurve } from '../spectrum/spectrum.js';
-import { floorAssumptions } from './floor.js';
+import { broadeningToJson, buildingToJson, floorAssumptions } from './floor.js';
 import { frequenciesHz } from './frequency.js';
 import {
   alignRight,
@@ -16,7 +16,7 @@ import {
   pgaText,
   terminalText,
 } from './layout.js';
-import { recordToJson, toG } from './spectrum-json.js';
+import { curvesToJson, recordToJson, toG } from './spectrum-json.js';
 
 /** The order of the operations, for every output of a set of floor spectra. */
 function combinationLine(set: FloorSpectrumSet): string {
@@ -47,16 +47,6 @@ function governing(set: FloorSpectrumSet, labels: string[]): string[][] {
   );
 }
 
-const curvesToJson = (curves: readonly SpectrumCurve[]) =>
-  curves.map((curve) => ({
-    damping: curve.damping,
-    sd_m: Array.from(curve.sdM),
-    psv_m_s: Array.from(curve.psvMS),
-    psa_g: toG(curve.psaMS2),
-    sv_m_s: Array.from(curve.svMS),
-    sa_g: toG(curve.saMS2),
-  }));
-
 /**
  * The JSON of `quakesweep floor` with several records: each record's floor spectrum by its label,
  * then "mean" and "envelope" with the same curves (the envelope naming the record that governs
@@ -75,21 +65,10 @@ export function floorSetToJson(
     method_description: METHOD_DESCRIPTIONS[set.method],
     periods_s: Array.from(set.periodsS),
     frequencies_hz: frequenciesHz(set.periodsS),
-    building: {
-      period_s: building.periodS,
-      damping: building.damping,
-      modal_factor: building.modalFactor,
-      method: building.method,
-    },
-    broadening:
-      set.broadening === null
-        ? null
-        : {
-            fraction: set.broadening,
-            window: 'max over [T(1-b), T/(1-b)]',
-            source: 'US NRC Regulatory Guide 1.122 (from memory)',
-            applied: 'to each record before the mean and the envelope',
-          },
+    building: buildingToJson(building),
+    broadening: broadeningToJson(set.broadening, {
+      applied: 'to each record before the mean and the envelope',
+    }),
     records: set.members.map((member, i) => ({
       label: labels[i],
       record: recordToJson(member.spectrum.record),

@@ -53,6 +53,30 @@ export function floorTable(
 const psaCurvesG = (spectrum: Spectrum) =>
   spectrum.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2) }));
 
+/** The one-mode building as the floor JSONs state it. */
+export function buildingToJson(building: BuildingMode & { method: Method }) {
+  return {
+    period_s: building.periodS,
+    damping: building.damping,
+    modal_factor: building.modalFactor,
+    method: building.method,
+  };
+}
+
+/** The broadening as the floor JSONs state it (null when none); `extra` adds fields. */
+export function broadeningToJson<Extra extends { [key: string]: string }>(
+  fraction: number | null,
+  extra: Extra = {} as Extra,
+) {
+  if (fraction === null) return null;
+  return {
+    fraction,
+    window: 'max over [T(1-b), T/(1-b)]',
+    source: 'US NRC Regulatory Guide 1.122 (from memory)',
+    ...extra,
+  };
+}
+
 /** The JSON of `quakesweep floor`: the floor spectrum's, with the building, the ground and the assumptions. */
 export function floorToJson(
   result: FloorSpectra,
@@ -62,20 +86,8 @@ export function floorToJson(
 ) {
   return {
     ...spectrumToJson(result.spectrum),
-    building: {
-      period_s: building.periodS,
-      damping: building.damping,
-      modal_factor: building.modalFactor,
-      method: building.method,
-    },
-    broadening:
-      result.broadening === null
-        ? null
-        : {
-            fraction: result.broadening,
-            window: 'max over [T(1-b), T/(1-b)]',
-            source: 'US NRC Regulatory Guide 1.122 (from memory)',
-          },
+    building: buildingToJson(building),
+    broadening: broadeningToJson(result.broadening),
     unbroadened_psa_g: psaCurvesG(result.unbroadened),
     ground: {
       name: ground.record.name,

@@ -1,7 +1,7 @@
 import { CAUTION } from '../base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
-import type { Spectrum } from '../spectrum/spectrum.js';
+import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
 import { assertFiniteResult } from './finite.js';
 import { frequenciesHz } from './frequency.js';
 
@@ -30,15 +30,20 @@ export function spectrumToJson(spectrum: Spectrum) {
     method_description: METHOD_DESCRIPTIONS[spectrum.method],
     periods_s: Array.from(spectrum.periodsS),
     frequencies_hz: frequenciesHz(spectrum.periodsS),
-    spectra: spectrum.curves.map((curve) => ({
-      damping: curve.damping,
-      sd_m: Array.from(curve.sdM),
-      psv_m_s: Array.from(curve.psvMS),
-      psa_g: toG(curve.psaMS2),
-      sv_m_s: Array.from(curve.svMS),
-      sa_g: toG(curve.saMS2),
-    })),
+    spectra: curvesToJson(spectrum.curves),
   };
+}
+
+/** The curves of a spectrum as JSON: SD and PSV as computed, PSA and SA in g. */
+export function curvesToJson(curves: readonly SpectrumCurve[]) {
+  return curves.map((curve) => ({
+    damping: curve.damping,
+    sd_m: Array.from(curve.sdM),
+    psv_m_s: Array.from(curve.psvMS),
+    psa_g: toG(curve.psaMS2),
+    sv_m_s: Array.from(curve.svMS),
+    sa_g: toG(curve.saMS2),
+  }));
 }
 
 export type SpectrumJson = ReturnType<typeof spectrumToJson>;
