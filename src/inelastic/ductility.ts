@@ -1,0 +1,295 @@
+import { usageError } from '../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { recordRoughness } from '../oscillator/record-statistics.js';
+import type { GroundRecord } from '../record/record.js';
+import { recordInfo, type SpectrumRecordInfo } from '../spectrum/spectrum.js';
+import { checkHysteresis, type Hysteresis } from './hysteresis.js';
+import {
+  DUCTILITY_TOLERANCE,
+  STRENGTH_CONVENTION,
+  strengthCell,
+  strengthsForDuctilities,
+} from './strength-search.js';
+import { YIELDING_RECORD_FACTOR, YIELDING_STEPS_PER_PERIOD, yieldingPeak } from './yielding.js';
+
+/** What a rigid oscillator (T = 0) is given in a constant-ductility spectrum. */
+export const RIGID_CONVENTION =
+  'T = 0 (rigid): it does not deform before it yields, so any strength below m·PGA lets it slide ' +
+  'without bound and any strength at or above it keeps it elastic; Ay = PGA, Ry = 1, uy = um = 0 ' +
+  'and achieved ductility 1 for every target';
+
+/** How the yielding oscillator is stepped, for outputs. */
+export const YIELDING_METHOD =
+  `Newmark average acceleration (γ = 1/2, β = 1/4) with Newton–Raphson iterations, steps split at ` +
+  `yielding and unloading; sub-steps per record step max(1, ⌈${YIELDING_STEPS_PER_PERIOD}·Δt/T⌉, ` +
+  `⌈${YIELDING_RECORD_FACTOR}·R²⌉), R the record's roughness`;
+
+/** One target ductility at one damping ratio; arrays indexed by period. */
+export interface DuctilityCurve {
+  damping: number;
+  /** Target ductility μ. */
+  ductility: number;
+  /** Yield pseudo-acceleration A_y = f_y/m = ω²·u_y, g (PGA at T = 0). */
+  ayG: Float64Array;
+  /** Yield displacement u_y, m. */
+  uyM: Float64Array;
+  /** Peak displacement u_m, m. */
+  umM: Float64Array;
+  /** Strength reduction factor R_y = f_o/f_y = 1/f̄_y. */
+  ry: Float64Array;
+  /** Normalised strength f̄_y = f_y/f_o. */
+  strengthRatio: Float64Array;
+  /** Ductility achieved at the reported strength, u_m/u_y. */
+  achievedDuctility: Float64Array;
+}
+
+/** The elastic oscillators the strengths are normalised by; arrays indexed by period. */
+export interface ElasticPeaks {
+  damping: number;
+  /** Elastic peak displacement u_o, m (0 at T = 0). */
+  sdM: Float64Array;
+  /** Elastic pseudo-acceleration ω²·u_o, g (PGA at T = 0). */
+  psaG: Float64Array;
+}
+
+export interface DuctilitySpectra {
+  record: SpectrumRecordInfo;
+  model: Hysteresis;
+  method: string;
+  /** Which strength is reported where several give the target, and what T = 0 gets. */
+  convention: string;
+  /** The search's tolerance on the achieved ductility, as a fraction of the target. */
+  tolerance: number;
+  periodsS: Float64Array;
+  elastic: ElasticPeaks[];
+  /** Damping-major: every ductility of the first damping, then the next. */
+  curves: DuctilityCurve[];
+  /** Oscillator runs of the whole search (a measure of the work). */
+  oscillatorRuns: number;
+}
+
+export interface DuctilitySpectraOptions {
+  periodsS: ArrayLike<number>;
+  dampings: ArrayLike<number>;
+  /** Target ductilities μ ≥ 1. */
+  ductilities: ArrayLike<number>;
+  model: Hysteresis;
+}
+
+/**
+ * Constant-ductility spectra (Veletsos and Newmark 1960; Chopra, Dynamics of Structures, §7.5,
+ * from memory): for each period, damping ratio and target ductility μ, the yield strength of the
+ * yielding oscillator (yielding.ts) whose peak ductility demand is μ, found by strengthsForDuctilities
+ * (STRENGTH_CONVENTION). f_o = k·u_o is the elastic strength of the same oscillator, u_o its peak.
+ */
+export function constantDuctilitySpectra(
+  record: GroundRecord,
+  options: DuctilitySpectraOptions,
+): DuctilitySpectra {
+  const model = checkHysteresis(options.model);
+  const periodsS = checkPeriods(options.periodsS);
+  const dampings = checkDampings(options.dampings);
+  const ductilities = Array.from(options.ductilities);
+  if (ductilities.length === 0) throw usageError('--ductility: give at least one ductility ratio');
+  for (const mu of ductilities) {
+    if (!(mu >= 1) || !Number.isFinite(mu))
+      throw usageError(`--ductility ${mu}: ductility ratios are finite and ≥ 1`);
+  }
+  const roughness = recordRoughness(record.accelMS2);
+  const nPeriods = periodsS.length;
+  const pgaG = record.pgaMS2 / STANDARD_GRAVITY_MS2;
+  const elastic: ElasticPeaks[] = [];
+  const curves: DuctilityCurve[] = [];
+  let runs = 0;
+  for (const damping of dampings) {
+    const peaks: ElasticPeaks = {
+      damping,
+      sdM: new Float64Array(nPeriods),
+      psaG: new Float64Array(nPeriods),
+    };
+    const rows = ductilities.map((ductility) => emptyCurve(damping, ductility, nPeriods));
+    for (let p = 0; p < nPeriods; p++) {
+      const periodS = periodsS[p];
+      if (periodS === 0) {
+        peaks.psaG[p] = pgaG;
+        for (const row of rows) {
+          row.ayG[p] = pgaG;
+          row.ry[p] = 1;
+          row.strengthRatio[p] = 1;
+          row.achievedDuctility[p] = 1;
+        }
+        continue;
+      }
+      const omega2 = ((2 * Math.PI) / periodS) ** 2;
+      const cell = strengthCell(periodS, damping, model, record.dtS, roughness);
+      const found = strengthsForDuctilities(record.accelMS2, record.dtS, cell, ductilities);
+      runs += found.runs;
+      peaks.sdM[p] = found.elasticPeakM;
+      peaks.psaG[p] = (omega2 * found.elasticPeakM) / STANDARD_GRAVITY_MS2;
+      rows.forEach((row, d) => {
+        const uyM = found.strengthRatio[d] * found.elasticPeakM;
+        row.uyM[p] = uyM;
+        row.umM[p] = found.peakM[d];
+        row.ayG[p] = (omega2 * uyM) / STANDARD_GRAVITY_MS2;
+        row.strengthRatio[p] = found.strengthRatio[d];
+        row.ry[p] = 1 / found.strengthRatio[d];
+        row.achievedDuctility[p] = found.achieved[d];
+      });
+    }
+    elastic.push(peaks);
+    curves.push(...rows);
+  }
+  return {
+    record: recordInfo(record),
+    model,
+    method: YIELDING_METHOD,
+    convention: `${STRENGTH_CONVENTION}. ${RIGID_CONVENTION}`,
+    tolerance: DUCTILITY_TOLERANCE,
+    periodsS,
+    elastic,
+    curves,
+    oscillatorRuns: runs,
+  };
+}
+
+function emptyCurve(damping: number, ductility: number, n: number): DuctilityCurve {
+  return {
+    damping,
+    ductility,
+    ayG: new Float64Array(n),
+    uyM: new Float64Array(n),
+    umM: new Float64Array(n),
+    ry: new Float64Array(n),
+    strengthRatio: new Float64Array(n),
+    achievedDuctility: new Float64Array(n),
+  };
+}
+
+/** One given strength at one damping ratio; arrays indexed by period. */
+export interface DemandCurve {
+  damping: number;
+  /** The strength as given: R_y = f_o/f_y for every period, or A_y (g) for every period. */
+  strength: { ry: number } | { ayG: number };
+  /** Peak ductility demand u_m/u_y (below 1 where the oscillator stays elastic). */
+  ductility: Float64Array;
+  ayG: Float64Array;
+  uyM: Float64Array;
+  umM: Float64Array;
+  ry: Float64Array;
+  /** Yield excursions of the run. */
+  yieldEvents: Float64Array;
+}
+
+export interface DuctilityDemandSpectra {
+  record: SpectrumRecordInfo;
+  model: Hysteresis;
+  method: string;
+  periodsS: Float64Array;
+  elastic: ElasticPeaks[];
+  /** Damping-major: every strength of the first damping, then the next. */
+  curves: DemandCurve[];
+}
+
+export interface DemandSpectraOptions {
+  /** Periods > 0, s: a rigid oscillator's demand is unbounded below the PGA and is refused. */
+  periodsS: ArrayLike<number>;
+  dampings: ArrayLike<number>;
+  model: Hysteresis;
+  /** Strength reduction factors R_y > 0 (one curve each); or */
+  ry?: ArrayLike<number>;
+  /** yield pseudo-accelerations A_y > 0, g (one curve each); exactly one of the two. */
+  ayG?: ArrayLike<number>;
+}
+
+/**
+ * Ductility demand spectra: the peak ductility u_m/u_y of the yielding oscillator (yielding.ts)
+ * for a given strength, as R_y (u_y = u_o/R_y, u_o the elastic peak) or as A_y (u_y = A_y/ω²).
+ */
+export function ductilityDemandSpectra(
+  record: GroundRecord,
+  options: DemandSpectraOptions,
+): DuctilityDemandSpectra {
+  const model = checkHysteresis(options.model);
+  const periodsS = checkPeriods(options.periodsS);
+  if (periodsS.includes(0))
+    throw usageError('ductility demand: T = 0 (rigid) has no finite demand below the PGA; use periods > 0');
+  const dampings = checkDampings(options.dampings);
+  if ((options.ry === undefined) === (options.ayG === undefined))
+    throw usageError('ductility demand: give the strength as R_y or as A_y, not both nor neither');
+  const strengths: DemandCurve['strength'][] =
+    options.ry !== undefined
+      ? Array.from(options.ry, (ry) => ({ ry }))
+      : Array.from(options.ayG ?? [], (ayG) => ({ ayG }));
+  if (strengths.length === 0) throw usageError('ductility demand: give at least one strength');
+  for (const strength of strengths) {
+    const value = 'ry' in strength ? strength.ry : strength.ayG;
+    if (!(value > 0) || !Number.isFinite(value))
+      throw usageError(`strength ${value}: ${'ry' in strength ? 'R_y' : 'A_y'} must be finite and > 0`);
+  }
+  const roughness = recordRoughness(record.accelMS2);
+  const n = periodsS.length;
+  const elastic: ElasticPeaks[] = [];
+  const curves: DemandCurve[] = [];
+  for (const damping of dampings) {
+    const peaks: ElasticPeaks = { damping, sdM: new Float64Array(n), psaG: new Float64Array(n) };
+    const rows = strengths.map((strength) => emptyDemand(damping, strength, n));
+    for (let p = 0; p < n; p++) {
+      const periodS = periodsS[p];
+      const omega2 = ((2 * Math.PI) / periodS) ** 2;
+      const cell = strengthCell(periodS, damping, model, record.dtS, roughness);
+      const base = { periodS, damping, model, substeps: cell.substeps };
+      const uo = yieldingPeak(record.accelMS2, record.dtS, {
+        ...base,
+        yieldDisplacementM: Number.POSITIVE_INFINITY,
+      }).peakDisplacementM;
+      peaks.sdM[p] = uo;
+      peaks.psaG[p] = (omega2 * uo) / STANDARD_GRAVITY_MS2;
+      for (const row of rows) {
+        const uyM =
+          'ry' in row.strength ? uo / row.strength.ry : (row.strength.ayG * STANDARD_GRAVITY_MS2) / omega2;
+        const peak = yieldingPeak(record.accelMS2, record.dtS, { ...base, yieldDisplacementM: uyM });
+        row.ductility[p] = peak.ductility;
+        row.uyM[p] = uyM;
+        row.umM[p] = peak.peakDisplacementM;
+        row.ayG[p] = (omega2 * uyM) / STANDARD_GRAVITY_MS2;
+        row.ry[p] = uo / uyM;
+        row.yieldEvents[p] = peak.yieldEvents;
+      }
+    }
+    elastic.push(peaks);
+    curves.push(...rows);
+  }
+  return { record: recordInfo(record), model, method: YIELDING_METHOD, periodsS, elastic, curves };
+}
+
+function emptyDemand(damping: number, strength: DemandCurve['strength'], n: number): DemandCurve {
+  const array = () => new Float64Array(n);
+  return {
+    damping,
+    strength,
+    ductility: array(),
+    ayG: array(),
+    uyM: array(),
+    umM: array(),
+    ry: array(),
+    yieldEvents: array(),
+  };
+}
+
+function checkPeriods(values: ArrayLike<number>): Float64Array {
+  const periodsS = Float64Array.from(values);
+  if (periodsS.length === 0) throw usageError('--periods: give at least one period');
+  for (const t of periodsS) {
+    if (!(t >= 0) || !Number.isFinite(t)) throw usageError(`--periods: ${t} is not a period ≥ 0 s`);
+  }
+  return periodsS;
+}
+
+function checkDampings(values: ArrayLike<number>): Float64Array {
+  const dampings = Float64Array.from(values);
+  if (dampings.length === 0) throw usageError('--damping: give at least one damping ratio');
+  for (const z of dampings) {
+    if (!(z >= 0) || !Number.isFinite(z)) throw usageError(`--damping: ${z} is not a damping ratio ≥ 0`);
+  }
+  return dampings;
+}
