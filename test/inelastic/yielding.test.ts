@@ -101,3 +101,29 @@ describe('the yielding oscillator', () => {
     expect(() => yieldingPeak(record.accelMS2, record.dtS, options as never)).toThrow(message);
   });
 });
+
+describe('whole elastic record steps', () => {
+  // The whole step is the same n sub-steps composed (closed form of a linear recurrence), taken only
+  // where an energy bound shows no sub-step can yield or pass the peak; so the results must equal
+  // stepping every sub-step, to rounding, yield excursions included.
+  const record = testRecord(47, 0.01, 10);
+  const roughness = recordRoughness(record.accelMS2);
+  it.each([
+    [0.01, 0.02, { kind: 'elastoplastic' } as const],
+    [0.04, 0.05, { kind: 'elastoplastic' } as const],
+    [0.12, 0, { kind: 'bilinear', alpha: 0.05 } as const],
+    [0.3, 0.05, { kind: 'bilinear', alpha: 0.3 } as const],
+    [0.9, 0.1, { kind: 'elastoplastic' } as const],
+  ])('T = %s s, ζ = %s: the same peaks as every sub-step on its own', (periodS, damping, model) => {
+    const base = { periodS, damping, model, roughness, yieldDisplacementM: Number.POSITIVE_INFINITY };
+    const uo = yieldingPeak(record.accelMS2, record.dtS, base).peakDisplacementM;
+    for (const ry of [1, 1.3, 2, 4, 8]) {
+      const options = { ...base, yieldDisplacementM: uo / ry };
+      const whole = yieldingPeak(record.accelMS2, record.dtS, options);
+      const each = yieldingPeak(record.accelMS2, record.dtS, { ...options, wholeSteps: false });
+      expect(whole.substeps).toBeGreaterThan(1);
+      expect(whole.yieldEvents).toBe(each.yieldEvents);
+      expect(Math.abs(whole.peakDisplacementM / each.peakDisplacementM - 1)).toBeLessThan(1e-9);
+    }
+  });
+});
