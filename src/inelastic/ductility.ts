@@ -2,7 +2,7 @@ import { usageError } from '../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
 import type { GroundRecord } from '../record/record.js';
-import { recordInfo, type SpectrumRecordInfo } from '../spectrum/spectrum.js';
+import { recordInfo, responseSpectrum, type SpectrumRecordInfo } from '../spectrum/spectrum.js';
 import { checkHysteresis, type Hysteresis } from './hysteresis.js';
 import {
   DUCTILITY_TOLERANCE,
@@ -98,10 +98,11 @@ export function constantDuctilitySpectra(
   const roughness = recordRoughness(record.accelMS2);
   const nPeriods = periodsS.length;
   const pgaG = record.pgaMS2 / STANDARD_GRAVITY_MS2;
+  const elasticSd = elasticPeaks(record, periodsS, dampings);
   const elastic: ElasticPeaks[] = [];
   const curves: DuctilityCurve[] = [];
   let runs = 0;
-  for (const damping of dampings) {
+  for (const [z, damping] of dampings.entries()) {
     const peaks: ElasticPeaks = {
       damping,
       sdM: new Float64Array(nPeriods),
@@ -121,7 +122,7 @@ export function constantDuctilitySpectra(
         continue;
       }
       const omega2 = ((2 * Math.PI) / periodS) ** 2;
-      const cell = strengthCell(periodS, damping, model, record.dtS, roughness);
+      const cell = strengthCell(periodS, damping, model, record.dtS, roughness, elasticSd[z][p]);
       const found = strengthsForDuctilities(record.accelMS2, record.dtS, cell, ductilities);
       runs += found.runs;
       peaks.sdM[p] = found.elasticPeakM;
@@ -150,6 +151,16 @@ export function constantDuctilitySpectra(
     curves,
     oscillatorRuns: runs,
   };
+}
+
+/**
+ * The elastic peaks u_o (SD, m) the strengths are normalised by, [damping][period], from the elastic
+ * engine (newmark-average, pre-warped: within 0.3% of the exact peak; see oscillator/substeps.ts),
+ * so that μ = 1 is the elastic spectrum itself. 0 at T = 0.
+ */
+function elasticPeaks(record: GroundRecord, periodsS: Float64Array, dampings: Float64Array): Float64Array[] {
+  const spectrum = responseSpectrum(record, { periodsS, dampings, method: 'newmark-average' });
+  return spectrum.curves.map((curve) => Float64Array.from(curve.sdM));
 }
 
 function emptyCurve(damping: number, ductility: number, n: number): DuctilityCurve {
@@ -228,9 +239,10 @@ export function ductilityDemandSpectra(
   }
   const roughness = recordRoughness(record.accelMS2);
   const n = periodsS.length;
+  const elasticSd = elasticPeaks(record, periodsS, dampings);
   const elastic: ElasticPeaks[] = [];
   const curves: DemandCurve[] = [];
-  for (const damping of dampings) {
+  for (const [z, damping] of dampings.entries()) {
     const peaks: ElasticPeaks = { damping, sdM: new Float64Array(n), psaG: new Float64Array(n) };
     const rows = strengths.map((strength) => emptyDemand(damping, strength, n));
     for (let p = 0; p < n; p++) {
@@ -238,10 +250,7 @@ export function ductilityDemandSpectra(
       const omega2 = ((2 * Math.PI) / periodS) ** 2;
       const cell = strengthCell(periodS, damping, model, record.dtS, roughness);
       const base = { periodS, damping, model, substeps: cell.substeps };
-      const uo = yieldingPeak(record.accelMS2, record.dtS, {
-        ...base,
-        yieldDisplacementM: Number.POSITIVE_INFINITY,
-      }).peakDisplacementM;
+      const uo = elasticSd[z][p];
       peaks.sdM[p] = uo;
       peaks.psaG[p] = (omega2 * uo) / STANDARD_GRAVITY_MS2;
       for (const row of rows) {

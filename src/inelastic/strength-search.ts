@@ -25,6 +25,12 @@ export interface StrengthCell {
   model: Hysteresis;
   /** Sub-steps per record step (substepsFor), the same for every run of the cell. */
   substeps: number;
+  /**
+   * The elastic peak u_o the strengths are normalised by, m; default the yielding oscillator's own
+   * never-yielding run. The spectra pass the elastic engine's (pre-warped, within 0.3% of exact),
+   * since R_y = u_o/u_y carries any error of u_o whole.
+   */
+  elasticPeakM?: number;
 }
 
 /** The strengths found for each target ductility of one cell (arrays indexed like `ductilities`). */
@@ -48,8 +54,9 @@ export function strengthCell(
   model: Hysteresis,
   dtS: number,
   roughness: number,
+  elasticPeakM?: number,
 ): StrengthCell {
-  return { periodS, damping, model, substeps: substepsFor(periodS, dtS, roughness) };
+  return { periodS, damping, model, substeps: substepsFor(periodS, damping, dtS, roughness), elasticPeakM };
 }
 
 /**
@@ -84,7 +91,8 @@ export function strengthsForDuctilities(
       stopAboveM: stopDuctility * uy,
     });
   };
-  found.elasticPeakM = run(Number.POSITIVE_INFINITY, Number.POSITIVE_INFINITY).peakDisplacementM;
+  found.elasticPeakM =
+    cell.elasticPeakM ?? run(Number.POSITIVE_INFINITY, Number.POSITIVE_INFINITY).peakDisplacementM;
   if (!(found.elasticPeakM > 0))
     throw inputError('the record does not move the oscillator: no strength to find');
 

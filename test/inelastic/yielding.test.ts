@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { substepsFor, YIELDING_STEPS_PER_PERIOD, yieldingPeak } from '../../src/inelastic/yielding.js';
+import {
+  substepsFor,
+  YIELDING_STEPS_PER_PERIOD,
+  yieldingPeak,
+  yieldingStepsPerPeriod,
+} from '../../src/inelastic/yielding.js';
 import { recordRoughness } from '../../src/oscillator/record-statistics.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
 import { testRecord } from '../helpers/records.js';
@@ -74,17 +79,23 @@ describe('the yielding oscillator', () => {
     expect(stopped.peakDisplacementM).toBeLessThanOrEqual(full.peakDisplacementM);
   });
 
-  it('sub-steps by the rule: N per period, ⌈5R²⌉ per record step, at least 1', () => {
-    expect(substepsFor(10, 0.01, 0)).toBe(1);
-    expect(substepsFor(0.1, 0.01, 0)).toBe(Math.ceil((YIELDING_STEPS_PER_PERIOD * 0.01) / 0.1));
-    expect(substepsFor(10, 0.01, 1)).toBe(5);
+  it('sub-steps by the rule: N(ζ) per period, ⌈5R²⌉ per record step, at least 1', () => {
+    expect(substepsFor(10, 0.05, 0.01, 0)).toBe(1);
+    expect(substepsFor(0.1, 0.05, 0.01, 0)).toBe(Math.ceil((YIELDING_STEPS_PER_PERIOD * 0.01) / 0.1));
+    expect(substepsFor(10, 0.05, 0.01, 1)).toBe(5);
+    // N(ζ) = min(800, max(120, 120·√(0.025/ζ))): 120 from 2.5% up, 240 at 0.625%, 800 undamped.
+    expect(yieldingStepsPerPeriod(0.05)).toBe(120);
+    expect(yieldingStepsPerPeriod(0.025)).toBe(120);
+    expect(yieldingStepsPerPeriod(0.00625)).toBeCloseTo(240, 9);
+    expect(yieldingStepsPerPeriod(0)).toBe(800);
+    expect(substepsFor(0.1, 0, 0.01, 0)).toBe(80);
     const peak = yieldingPeak(record.accelMS2, record.dtS, {
       periodS: 0.1,
       damping: 0.05,
       model: elastoplastic,
       yieldDisplacementM: 1,
     });
-    expect(peak.substeps).toBe(substepsFor(0.1, 0.01, recordRoughness(record.accelMS2)));
+    expect(peak.substeps).toBe(substepsFor(0.1, 0.05, 0.01, recordRoughness(record.accelMS2)));
   });
 
   it.each([
