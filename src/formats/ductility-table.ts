@@ -108,7 +108,7 @@ export function ductilityTable(spectra: DuctilitySpectra): string {
   out.push(
     ...assumptionLines([
       `Yielding oscillator: ${describeHysteresis(spectra.model)}, mass-proportional viscous damping at the elastic frequency, at rest at the start; ${spectra.method}.`,
-      `Strength: ${spectra.convention}.`,
+      `Strength reported: ${spectra.convention}.`,
       `Achieved ductility within ${spectra.tolerance * 100}% of the target except where it jumps; R_y = f_o/f_y, f_o the elastic strength of the same oscillator.`,
     ]),
   );
