@@ -15,6 +15,7 @@ const COMMANDS: [string, () => Promise<Register>][] = [
   ['damping', async () => (await import('./commands/damping.js')).registerDamping],
   ['rotd', async () => (await import('./commands/rotd.js')).registerRotD],
   ['floor', async () => (await import('./commands/floor.js')).registerFloor],
+  ['ductility', async () => (await import('./commands/ductility.js')).registerDuctility],
   ['anchor', async () => (await import('./commands/anchor.js')).registerAnchor],
   ['synth', async () => (await import('./commands/synth.js')).registerSynth],
   ['report', async () => (await import('./commands/report.js')).registerReport],

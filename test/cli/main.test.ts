@@ -110,6 +110,22 @@ const CASES: Record<string, [string[], RegExp][]> = {
     [['floor', f.h1, '--units', 'g', '--building-period', '0.4', '--modal-factor', 'x'], /--modal-factor/],
     [['floor', missing, '--units', 'g', ...bldg], /no such file/],
   ],
+  ductility: [
+    [['ductility'], /missing required argument/],
+    [['ductility', f.h1], /units are required/],
+    [['ductility', missing, '--units', 'g'], /no such file/],
+    [['ductility', f.dir, '--units', 'g'], /is a folder/],
+    [['ductility', f.h1, '--units', 'g', '--ductility', '0.9'], /below 1/],
+    [['ductility', f.h1, '--units', 'g', '--model', 'bilinear:1.2'], /--model/],
+    [['ductility', f.h1, '--units', 'g', '--strength', '0'], /--strength/],
+    [['ductility', f.h1, '--units', 'g', '--strength', '2', '--ductility', '2'], /not both/],
+    [['ductility', f.h1, '--units', 'g', '--method', 'piecewise-exact'], /newmark-average only/],
+    [
+      ['ductility', f.h1, '--units', 'g', '--periods', '0.5', '--out', join(missing, 'd.json')],
+      /does not exist/,
+    ],
+    [['ductility', f.h1, '--units', 'g', '--svg', f.dir], /unknown option/],
+  ],
   anchor: [
     [['anchor'], /--equipment/],
     [['anchor', '--equipment', missing], /no such file/],

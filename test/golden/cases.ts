@@ -219,6 +219,30 @@ export const GOLDEN_CASES: GoldenCase[] = [
     name: 'floor-set-error-twice',
     argv: w(`floor ${H1} ${H2} ${H1} --units g --building-period 0.5 --modal-factor 1.3`),
   },
+  // Inelastic spectra: a few periods and ductilities (the yielding search is the costly part).
+  { name: 'ductility-table', argv: w(`ductility ${H1} --units g --periods 0,0.2,1 --ductility 1,2,4`) },
+  {
+    name: 'ductility-json-bilinear',
+    argv: w(
+      'ductility IN/gen-a.csv --units g --periods 0,0.2,1 --ductility 1,2,4 --model bilinear:0.05 --damping 2%,5% --out OUT/d.json',
+    ),
+  },
+  {
+    name: 'ductility-csv',
+    argv: w(`ductility ${H2} --units g --periods 0,0.2,1 --ductility 1,2,4 --baseline linear --format csv`),
+  },
+  {
+    name: 'ductility-strength-json',
+    argv: w(`ductility ${H1} --units g --periods 0.2,1 --strength 2,4 --format json`),
+  },
+  {
+    name: 'ductility-strength-ay-table',
+    argv: w(`ductility ${H1} --units g --frequencies 1,5 --strength 0.2g,0.5g`),
+  },
+  {
+    name: 'ductility-error-both',
+    argv: w(`ductility ${H1} --units g --strength 2 --ductility 1,2`),
+  },
   { name: 'anchor-code-table', argv: w('anchor --equipment IN/equipment-generator.json --units g') },
   {
     name: 'anchor-record-json-svg',
