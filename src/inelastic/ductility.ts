@@ -10,7 +10,12 @@ import {
   strengthCell,
   strengthsForDuctilities,
 } from './strength-search.js';
-import { YIELDING_RECORD_FACTOR, YIELDING_STEPS_PER_PERIOD, yieldingPeak } from './yielding.js';
+import {
+  YIELDING_MAX_STEPS_PER_PERIOD,
+  YIELDING_RECORD_FACTOR,
+  YIELDING_STEPS_PER_PERIOD,
+  yieldingPeak,
+} from './yielding.js';
 
 /** What a rigid oscillator (T = 0) is given in a constant-ductility spectrum. */
 export const RIGID_CONVENTION =
@@ -21,8 +26,10 @@ export const RIGID_CONVENTION =
 /** How the yielding oscillator is stepped, for outputs. */
 export const YIELDING_METHOD =
   `Newmark average acceleration (γ = 1/2, β = 1/4) with Newton–Raphson iterations, steps split at ` +
-  `yielding and unloading; sub-steps per record step max(1, ⌈${YIELDING_STEPS_PER_PERIOD}·Δt/T⌉, ` +
-  `⌈${YIELDING_RECORD_FACTOR}·R²⌉), R the record's roughness`;
+  `yielding and unloading; sub-steps per record step max(1, ⌈N·Δt/T⌉, ⌈${YIELDING_RECORD_FACTOR}·R²⌉), ` +
+  `R the record's roughness, N = min(${YIELDING_MAX_STEPS_PER_PERIOD}, max(${YIELDING_STEPS_PER_PERIOD}, ` +
+  `${YIELDING_STEPS_PER_PERIOD}·√(0.025/ζ))) steps per elastic period; R_y = u_o/u_y with u_o the ` +
+  `elastic spectrum's SD (newmark-average, pre-warped)`;
 
 /** One target ductility at one damping ratio; arrays indexed by period. */
 export interface DuctilityCurve {
