@@ -10,9 +10,22 @@ export { CAUTION, cautionLines } from './base/caution.js';
 export { type ErrorKind, inputError, isQuakesweepError, QuakesweepError, usageError } from './base/errors.js';
 export * from './base/units.js';
 export { VERSION } from './base/version.js';
+export { ductilityDemandToCsv, ductilityToCsv } from './formats/ductility-csv.js';
+export { ductilityDemandToJson, ductilityToJson } from './formats/ductility-json.js';
+export { ductilityDemandTable, ductilityTable } from './formats/ductility-table.js';
 export { floorSetTable, floorSetToCsv, floorSetToJson } from './formats/floor-set.js';
 export { spectrumToCsv } from './formats/spectrum-csv.js';
 export { formatJson, type SpectrumJson, spectrumToJson } from './formats/spectrum-json.js';
+export {
+  constantDuctilitySpectra,
+  type DemandSpectraOptions,
+  type DuctilityDemandSpectra,
+  type DuctilitySpectra,
+  type DuctilitySpectraOptions,
+  ductilityDemandSpectra,
+} from './inelastic/ductility.js';
+export { describeHysteresis, type Hysteresis, parseHysteresis } from './inelastic/hysteresis.js';
+export { type YieldingOptions, type YieldingPeak, yieldingPeak } from './inelastic/yielding.js';
 export { defaultPeriodsS, logSpaced, parseDampings, parsePeriods } from './oscillator/grid.js';
 export { wasmSimdSupported } from './oscillator/kernels/wasm.js';
 export { hermitePeak } from './oscillator/peak.js';
