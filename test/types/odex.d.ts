@@ -4,9 +4,11 @@
 declare module 'odex' {
   export class Solver {
     constructor(n: number);
-    absoluteTolerance: number;
-    relativeTolerance: number;
+    absoluteTolerance: number | number[];
+    relativeTolerance: number | number[];
     denseOutput: boolean;
+    initialStepSize: number;
+    maxSteps: number;
     grid(step: number, output: (x: number, y: number[]) => void): unknown;
     solve(
       f: (x: number, y: number[]) => number[],
