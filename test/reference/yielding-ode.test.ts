@@ -34,14 +34,29 @@ interface Case {
 }
 
 /**
- * Cases the default rule misses today (measured 2026-12-03): the demo record at T = 0.3 s, ζ = 2%,
- * elastoplastic, R = 2 peaks 0.54% high (4 sub-steps of 0.0025 s, T/h = 120; the error falls as
- * 1/h², 0.13% with 8 sub-steps). They are checked on their own below, as known exceedances.
+ * The cases with the largest errors in the full run (measured 2026-12-03), run in the quick run too
+ * (`record` indexes `records`, `model` indexes `models`). One misses the claim: the demo record at
+ * T = 0.3 s, ζ = 2%, elastoplastic, R = 2 peaks 0.54% high (4 sub-steps of 0.0025 s, T/h = 120;
+ * the error falls as 1/h², 0.13% with 8 sub-steps); it is held to `limit` 0.6% until the rule is
+ * tightened (then drop its limit).
  */
-const known = [{ record: 2, periodS: 0.3, damping: 0.02, model: 0, ratio: 2 }];
+const hardest: {
+  record: number;
+  periodS: number;
+  damping: number;
+  model: number;
+  ratio: number;
+  limit?: number;
+}[] = [
+  { record: 2, periodS: 0.3, damping: 0.02, model: 0, ratio: 2, limit: 0.006 },
+  { record: 2, periodS: 0.1, damping: 0.02, model: 0, ratio: 2 },
+  { record: 2, periodS: 0.1, damping: 0.02, model: 1, ratio: 2 },
+  { record: 0, periodS: 0.3, damping: 0.02, model: 0, ratio: 2 },
+  { record: 1, periodS: 0.1, damping: 0.02, model: 0, ratio: 2 },
+];
 
-function isKnown(r: number, periodS: number, damping: number, m: number, ratio: number): boolean {
-  return known.some(
+function isHardest(r: number, periodS: number, damping: number, m: number, ratio: number): boolean {
+  return hardest.some(
     (k) =>
       k.record === r && k.periodS === periodS && k.damping === damping && k.model === m && k.ratio === ratio,
   );
@@ -101,14 +116,22 @@ function compare(c: Case, uyM: number) {
   return figures;
 }
 
+const elasticPeaks = new Map<string, number>();
+
+/** u_o, the elastic peak, from ODEX (kept: several cases share it). */
 function elasticPeak(record: ShortRecord, periodS: number, damping: number): number {
-  const elastic = odeYieldingPeak(record.accelMS2, record.dtS, {
-    periodS,
-    damping,
-    alpha: 0,
-    yieldDisplacementM: Number.POSITIVE_INFINITY,
-  });
-  return elastic.peakDisplacementM;
+  const key = `${record.name} ${periodS} ${damping}`;
+  let peak = elasticPeaks.get(key);
+  if (peak === undefined) {
+    peak = odeYieldingPeak(record.accelMS2, record.dtS, {
+      periodS,
+      damping,
+      alpha: 0,
+      yieldDisplacementM: Number.POSITIVE_INFINITY,
+    }).peakDisplacementM;
+    elasticPeaks.set(key, peak);
+  }
+  return peak;
 }
 
 describe('yieldingPeak against ODEX with event location (peaks within 0.5%)', () => {
@@ -116,7 +139,7 @@ describe('yieldingPeak against ODEX with event location (peaks within 0.5%)', ()
     const record = records[r];
     const periodS = periods[p];
     const damping = dampings[d];
-    const cases = picks.filter(([m, q]) => !isKnown(r, periodS, damping, m, ratios[q]));
+    const cases = picks.filter(([m, q]) => !isHardest(r, periodS, damping, m, ratios[q]));
     if (cases.length === 0) continue;
     const label = cases.map(([m, q]) => `${m === 0 ? 'EP' : 'BL'} R=${ratios[q]}`).join(', ');
     it(`${record.name}, T = ${periodS} s, ζ = ${damping}: ${label}`, () => {
@@ -132,31 +155,44 @@ describe('yieldingPeak against ODEX with event location (peaks within 0.5%)', ()
     });
   }
 
-  for (const k of known) {
+  for (const k of hardest) {
     const record = records[k.record];
-    // Marked as failing: when the rule is tightened this starts to pass, and vitest says so;
-    // then drop the entry from `known`.
-    it.fails(`known exceedance: ${record.name}, T = ${k.periodS} s, ζ = ${k.damping}, R = ${k.ratio}`, () => {
+    const model = models[k.model];
+    const limit = k.limit ?? TOLERANCE;
+    const name = `${record.name}, T = ${k.periodS} s, ζ = ${k.damping}, ${model.kind}, R = ${k.ratio}`;
+    const claim = limit === TOLERANCE ? 'within 0.5%' : `known to miss 0.5%, within ${limit * 100}%`;
+    it(`one of the hardest: ${name}: ${claim}`, () => {
       const uoM = elasticPeak(record, k.periodS, k.damping);
-      const c = { record, periodS: k.periodS, damping: k.damping, model: models[k.model], ratio: k.ratio };
+      const c = { record, periodS: k.periodS, damping: k.damping, model, ratio: k.ratio };
       const figures = compare(c, uoM / k.ratio);
-      expect(Math.abs(figures.displacementError)).toBeLessThan(TOLERANCE);
+      expect(figures.referenceDuctility).toBeGreaterThan(1.2);
+      expect(Math.abs(figures.displacementError)).toBeLessThan(limit);
+      expect(Math.abs(figures.ductilityError)).toBeLessThan(limit);
     });
   }
 
-  it('the reference itself: the step-load closed form μ = R/(2(R − 1)) to 1e-9 (Chopra §7.x)', () => {
-    // Undamped elastoplastic, constant a_g = −a0 from rest, f_y = R·m·a0: energy balance gives
-    // μ = R/(2(R − 1)) for 1 < R < 2 (closed form; see test/reference/step-load.test.ts).
+  it('the reference itself: the step-load closed form to 1e-9 (Chopra §7.x)', () => {
+    // Undamped, constant a_g = −a0 from rest, f_y = R·m·a0, kinematic bilinear (α = 0:
+    // elastoplastic): at the first peak the work of the load equals the energy in the spring,
+    // ½α(μ − 1)² + (1 − 1/R)μ − ½ = 0, so μ = R/(2(R − 1)) when α = 0 (closed form; derived in
+    // test/reference/step-load.test.ts).
     const accel = new Float64Array(201).fill(-2);
     const staticM = 2 / (2 * Math.PI) ** 2;
-    for (const ratio of [1.25, 1.6]) {
+    for (const [ratio, alpha] of [
+      [1.25, 0],
+      [1.6, 0],
+      [1.25, 0.1],
+      [1.1, 0.3],
+    ]) {
+      const b = 1 - 1 / ratio;
+      const mu = alpha === 0 ? 1 / (2 * b) : 1 + (-b + Math.sqrt(b * b - 2 * alpha * (b - 0.5))) / alpha;
       const peak = odeYieldingPeak(accel, 0.01, {
         periodS: 1,
         damping: 0,
-        alpha: 0,
+        alpha,
         yieldDisplacementM: ratio * staticM,
       });
-      expect(Math.abs(peak.ductility / (ratio / (2 * (ratio - 1))) - 1)).toBeLessThan(1e-9);
+      expect(Math.abs(peak.ductility / mu - 1)).toBeLessThan(1e-9);
       expect(peak.yieldEvents).toBe(1);
     }
   });
