@@ -5,7 +5,7 @@
 // Asserted: the 0.5% claim at the default sub-step rule, at every step. Measured and reported
 // (QUAKESWEEP_REFERENCE_REPORT), not asserted: the error with one Newmark step per record step,
 // and with 1, 2, 4, … 32 sub-steps at 0.02 s, which shows the method's order (2: the error falls
-// about four times per halving once the step is below about T/30).
+// about four times per halving once the step is below about T/20).
 import { describe, expect, it } from 'vitest';
 import type { Hysteresis } from '../../src/inelastic/hysteresis.js';
 import { yieldingPeak } from '../../src/inelastic/yielding.js';
