@@ -38,7 +38,7 @@ describe('ductilityStrengthSvg', () => {
       .map((t, p) => (t > 0 ? (((2 * Math.PI) / t) ** 2 * elastic.sdM[p]) / 9.80665 : Number.NaN))
       .filter(Number.isFinite);
     expect(ys).toHaveLength(expected.length);
-    ys.forEach((py, i) => expect(py).toBeCloseTo(y(expected[i]), 1));
+    for (const [i, py] of ys.entries()) expect(py).toBeCloseTo(y(expected[i]), 1);
   });
 
   it('draws against frequency on --axis frequency', () => {
