@@ -133,9 +133,9 @@ export function ductilitySection(d: ReportDuctility, lengthUnit: LengthUnit, tab
   ].join('\n');
 }
 
-/** The method statement of the inelastic section. */
+/** The method statement of the inelastic section (its table states the method and rule in full). */
 export function ductilityMethodStatement(spectra: DuctilitySpectra): string {
-  return `Inelastic response: ${describeHysteresis(spectra.model)} oscillators at ζ = ${dampingLabel(spectra.elastic[0].damping)}, stepped by ${spectra.method}; the yield strength for each target ductility found by ${spectra.convention}.`;
+  return `Inelastic response: ${describeHysteresis(spectra.model)} oscillators at ζ = ${dampingLabel(spectra.elastic[0].damping)}, Newmark average acceleration with Newton–Raphson iterations; for each target ductility the largest yield strength whose ductility demand is within ${formatNumber(spectra.tolerance * 100)}% of it (the method and the search in full in the Inelastic response section).`;
 }
 
 /** The limit of use the inelastic section adds. */
