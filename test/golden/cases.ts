@@ -309,6 +309,13 @@ export const GOLDEN_CASES: GoldenCase[] = [
     argv: w(`report IN/gen-a.csv --units g ${GRID} --damping 2%,5% --axis frequency --out OUT/report`),
     env: FIXED_DATE,
   },
+  {
+    name: 'report-ductility',
+    argv: w(
+      `report IN/gen-a.csv --units g ${GRID} --ductility 1,2,4 --model bilinear:0.05 --ductility-periods 0.1,0.3,1,3 --out OUT/report`,
+    ),
+    env: FIXED_DATE,
+  },
   { name: 'demo', argv: w('demo --out OUT/demo'), env: FIXED_DATE },
   {
     name: 'batch',
