@@ -6,7 +6,6 @@ import {
   nassarKrawinklerReduction,
   newmarkHallCorners,
   newmarkHallReduction,
-  referenceReductions,
 } from '../../src/inelastic/r-mu-t.js';
 
 describe('Newmark–Hall R_μ (Newmark and Hall 1982; Chopra, Dynamics of Structures, §7.11, from memory)', () => {
@@ -78,25 +77,5 @@ describe('T_c from an elastic spectrum (common practice: 2π·PSV_max/PSA_max)',
   });
   it('is 2π·V/A = 0.6407 s for the two flat regions (closed form)', () => {
     expect(cornerPeriodFromSpectrum(periodsS, sdM)).toBeCloseTo((2 * Math.PI) / STANDARD_GRAVITY_MS2, 12);
-  });
-  it('gives both relations for every μ > 1, Newmark–Hall with its corners on the grid', () => {
-    const spectra = {
-      periodsS: Float64Array.from(periodsS),
-      model: { kind: 'elastoplastic' as const },
-      elastic: [{ damping: 0.05, sdM: Float64Array.from(sdM), psaG: new Float64Array(periodsS.length) }],
-      curves: [1, 2, 4].map((ductility) => ({ damping: 0.05, ductility })),
-    } as unknown as Parameters<typeof referenceReductions>[0];
-    const refs = referenceReductions(spectra);
-    expect(refs.curves.map((c) => `${c.relation} ${c.ductility}`)).toEqual([
-      'newmark-hall 2',
-      'nassar-krawinkler 2',
-      'newmark-hall 4',
-      'nassar-krawinkler 4',
-    ]);
-    const nh4 = refs.curves[2];
-    const tc = (2 * Math.PI) / STANDARD_GRAVITY_MS2;
-    expect(nh4.periodsS).toContain(tc);
-    expect(nh4.ry[nh4.periodsS.indexOf(tc)]).toBeCloseTo(4, 12);
-    expect(refs.notes.join(' ')).toMatch(/Newmark and Hall \(1982\).*Nassar and Krawinkler \(1991\)/);
   });
 });
