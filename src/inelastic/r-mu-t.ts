@@ -203,7 +203,7 @@ function referenceNotes(
   return [
     `${NEWMARK_HALL_LABEL}: R = 1 for T ≤ T_a = 1/33 s, √(2μ−1) from T_b = 0.125 s to T_c' = T_c·√(2μ−1)/μ, μ from T_c, log–log between. T_c ${givenTcS === undefined ? `= 2π·PSV_max/PSA_max of the elastic spectrum (common practice)` : 'as given'}: ${tc}. Source: ${NEWMARK_HALL_SOURCE}.`,
     `${NASSAR_KRAWINKLER_LABEL}: R = [c(μ−1)+1]^(1/c), c = T^a/(1+T^a) + b/T, ${nkAlpha}: a = ${Number(nk.a.toPrecision(4))}, b = ${Number(nk.b.toPrecision(4))}. Source: ${NASSAR_KRAWINKLER_SOURCE}.`,
-    'Both are smoothed fits over many recorded motions (about 5% damping); they are drawn at the damping of each curve as references, not as predictions for this record.',
+    'Both are smoothed fits over many recorded motions at about 5% damping: references for the record’s R_y, not predictions of it.',
   ];
 }
 

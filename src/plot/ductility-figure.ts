@@ -8,6 +8,7 @@ import type { PanelContext, Series } from './panel.js';
 import { type PeriodAxis, periodAxisSpec } from './period-axis.js';
 import { DAMPING_DASHES, MARK_LINE, type SeriesStyle, seriesStyle, TEXT_COLOUR } from './styles.js';
 import { formatValue, percentLabel, processingLines, recordLine, zeroPeriodNotes } from './text.js';
+import { textWidthPx } from './ticks.js';
 
 export interface DuctilityFigureOptions {
   /** The horizontal axis: period T (default) or frequency f = 1/T, log-spaced either way. */
@@ -85,6 +86,11 @@ function offTargetNote(spectra: DuctilitySpectra): string[] {
   ];
 }
 
+/** Room right of the plot for the end labels, px: the longest label, its leader and a margin. */
+function endLabelMarginPx(texts: readonly string[]): number {
+  return Math.max(48, ...texts.map((t) => Math.ceil(textWidthPx(t, LABEL_PX) + 14)));
+}
+
 /** Labels at the right edge of the plot, one a curve, at its rightmost point, pushed apart. */
 function labelCurveEnds(
   context: PanelContext,
@@ -154,7 +160,7 @@ export function ductilityStrengthSvg(
     y: { title: 'Yield pseudo-acceleration A_y (g)' },
     legendTitle: 'Target ductility:',
     series,
-    rightMarginPx: 64,
+    rightMarginPx: endLabelMarginPx(endLabels),
     overlay: (context) =>
       labelCurveEnds(
         context,
@@ -181,15 +187,19 @@ export function ductilityReductionSvg(spectra: DuctilitySpectra, options: Ductil
       label: ductilityLabel(curve, several),
       x: spectra.periodsS,
       y: curve.ry,
-      // Solid and heavier than the published curves, which carry the dashes here.
-      style: { ...style(curve), dash: 'none', widthPx: 1.9 },
+      // Heavier than the published curves, which carry the dashes; solid unless dashed by damping.
+      style: { ...style(curve), dash: several ? style(curve).dash : 'none', widthPx: 1.9 },
     }),
   );
   const colourOf = (r: ReferenceReduction) =>
     style(spectra.curves.find((c) => c.ductility === r.ductility && c.damping === r.damping) ?? r).color;
-  const references = options.references.curves.map(
+  // The relations are fits at about 5% damping: drawn once per μ, at 5% where it is drawn.
+  const dampings = spectra.elastic.map((e) => e.damping);
+  const referenceDamping = dampings.find((z) => Math.abs(z - 0.05) < 1e-12) ?? dampings[0];
+  const drawn = options.references.curves.filter((r) => r.damping === referenceDamping);
+  const references = drawn.map(
     (r): Series => ({
-      label: `${r.label}, ${ductilityLabel(r, several)}`,
+      label: `${r.label}, μ = ${formatValue(r.ductility)}`,
       x: r.periodsS,
       y: r.ry,
       style: { color: colourOf(r), dash: RELATION_DASH[r.relation], widthPx: REFERENCE_WIDTH_PX },
@@ -198,7 +208,7 @@ export function ductilityReductionSvg(spectra: DuctilitySpectra, options: Ductil
     }),
   );
   const samples = (['newmark-hall', 'nassar-krawinkler'] as const).flatMap((relation): Series[] => {
-    const first = options.references.curves.find((r) => r.relation === relation);
+    const first = drawn.find((r) => r.relation === relation);
     if (first === undefined) return [];
     const sample = { color: '#444444', dash: RELATION_DASH[relation], widthPx: REFERENCE_WIDTH_PX };
     return [{ label: first.label, x: [], y: [], style: sample, kind: 'legend-only' }];
@@ -211,7 +221,7 @@ export function ductilityReductionSvg(spectra: DuctilitySpectra, options: Ductil
     axes: 'log',
     legendTitle: 'Target ductility:',
     series: [...references, ...data, ...samples],
-    rightMarginPx: 64,
+    rightMarginPx: endLabelMarginPx(data.map((s) => s.label)),
     overlay: (context) =>
       labelCurveEnds(
         context,
@@ -219,6 +229,11 @@ export function ductilityReductionSvg(spectra: DuctilitySpectra, options: Ductil
       ),
     notes: [
       "R_y = f_o/f_y: the record's elastic strength f_o = k·u_o over the yield strength f_y that keeps the peak ductility at μ (thick curves, labelled at the right). Thin curves, in the colour of their μ: the published relations for the same μ, dashed by relation.",
+      ...(several
+        ? [
+            `The published relations are drawn at ζ = ${percentLabel(referenceDamping)} only, in the colour of its curves.`,
+          ]
+        : []),
       ...options.references.notes,
       ...offTargetNote(spectra),
       ...zeroPeriodNotes(spectra.periodsS, ' (there R_y = 1 for every μ)', options.axis),
@@ -257,7 +272,7 @@ export function ductilityDemandSvg(
     y: { title: 'Ductility demand μ = u_m/u_y' },
     legendTitle: 'Strength:',
     series,
-    rightMarginPx: 80,
+    rightMarginPx: endLabelMarginPx(endLabels),
     underlay: (context) => markElasticLimit(context),
     overlay: (context) =>
       labelCurveEnds(

@@ -1,12 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
+import { constantDuctilitySpectra } from '../../src/inelastic/ductility.js';
 import { referenceReductions } from '../../src/inelastic/r-mu-t.js';
 import {
   ductilityFigures,
   ductilityReductionSvg,
   ductilityStrengthSvg,
 } from '../../src/plot/ductility-figure.js';
-import { axisFromTicks, ductilityInputs, parseSvg, pathVertices } from './helpers.js';
+import { axisFromTicks, ductilityInputs, inventedRecord, parseSvg, pathVertices } from './helpers.js';
 
 const text = (doc: Document, selector: string) =>
   [...doc.querySelectorAll(selector)].map((t) => t.textContent).join(' ');
@@ -88,6 +89,33 @@ describe('ductilityReductionSvg', () => {
     const last = pathVertices(nh4?.getAttribute('d') ?? '').at(-1);
     expect(references.cornerPeriodsS[0].tcS).toBeLessThan(2);
     expect(last?.[1]).toBeCloseTo(y(4), 1);
+  });
+});
+
+describe('ductilityReductionSvg with two damping ratios', () => {
+  it('dashes the record curves by damping and draws the published relations once per μ, at 5%', () => {
+    const record = inventedRecord(4);
+    const model = { kind: 'elastoplastic' } as const;
+    const periodsS = [0.1, 0.5, 2];
+    const spectra = constantDuctilitySpectra(record, {
+      periodsS,
+      dampings: [0.02, 0.05],
+      ductilities: [1, 3],
+      model,
+    });
+    const doc = parseSvg(ductilityReductionSvg(spectra, { references: referenceReductions(spectra) }));
+    const curves = [...doc.querySelectorAll('path.curve')];
+    expect(curves.map((p) => p.getAttribute('data-label'))).toEqual([
+      'μ = 1, ζ = 2%',
+      'μ = 3, ζ = 2%',
+      'μ = 1, ζ = 5%',
+      'μ = 3, ζ = 5%',
+    ]);
+    expect(curves[1].getAttribute('stroke')).toBe(curves[3].getAttribute('stroke'));
+    expect(curves[1].getAttribute('stroke-dasharray')).not.toBe(curves[3].getAttribute('stroke-dasharray'));
+    const refs = [...doc.querySelectorAll('path.reference')].map((p) => p.getAttribute('data-label'));
+    expect(refs).toEqual(['Newmark–Hall (1982), μ = 3', 'Nassar–Krawinkler (1991), μ = 3']);
+    expect(text(doc, 'g.notes text')).toContain('drawn at ζ = 5% only');
   });
 });
 
