@@ -312,14 +312,9 @@ export function ductilityFigures(
 ): NamedFigure[] {
   if (!('convention' in spectra))
     return [{ name: 'ductility-demand.svg', svg: ductilityDemandSvg(spectra, options) }];
-  const references = options.references ?? {
-    curves: [],
-    cornerPeriodsS: [],
-    notes: [],
-    nassarKrawinkler: { alpha: 0, a: 0, b: 0, clamped: false },
-  };
   return [
     { name: 'ductility-ay.svg', svg: ductilityStrengthSvg(spectra, options) },
-    { name: 'ductility-ry.svg', svg: ductilityReductionSvg(spectra, { ...options, references }) },
+    // The overloads give constant-ductility spectra their references.
+    { name: 'ductility-ry.svg', svg: ductilityReductionSvg(spectra, options as DuctilityReductionOptions) },
   ];
 }
