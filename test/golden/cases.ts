@@ -240,6 +240,10 @@ export const GOLDEN_CASES: GoldenCase[] = [
     argv: w(`ductility ${H1} --units g --frequencies 1,5 --strength 0.2g,0.5g`),
   },
   {
+    name: 'ductility-svg',
+    argv: w(`ductility ${H1} --units g --periods 0.1,0.3,1,3 --ductility 1,2,4 --svg OUT/figs`),
+  },
+  {
     name: 'ductility-error-both',
     argv: w(`ductility ${H1} --units g --strength 2 --ductility 1,2`),
   },
