@@ -25,6 +25,16 @@ export {
   ductilityDemandSpectra,
 } from './inelastic/ductility.js';
 export { describeHysteresis, type Hysteresis, parseHysteresis } from './inelastic/hysteresis.js';
+export {
+  cornerPeriodFromSpectrum,
+  NASSAR_KRAWINKLER_LABEL,
+  NEWMARK_HALL_LABEL,
+  nassarKrawinklerReduction,
+  newmarkHallReduction,
+  type ReferenceReduction,
+  type ReferenceReductions,
+  referenceReductions,
+} from './inelastic/r-mu-t.js';
 export { type YieldingOptions, type YieldingPeak, yieldingPeak } from './inelastic/yielding.js';
 export { defaultPeriodsS, logSpaced, parseDampings, parsePeriods } from './oscillator/grid.js';
 export { wasmSimdSupported } from './oscillator/kernels/wasm.js';

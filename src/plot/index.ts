@@ -1,6 +1,15 @@
 export { type AnchorPlanInput, anchorPlanSvg } from './anchor-plan-figure.js';
 export { type DampingFigureInput, dampingFigure } from './damping-figure.js';
 export { type DesignFigureInput, designFigure } from './design-figure.js';
+export {
+  type DuctilityFigureOptions,
+  type DuctilityReductionOptions,
+  ductilityDemandSvg,
+  ductilityFigures,
+  ductilityReductionSvg,
+  ductilityStrengthSvg,
+  type NamedFigure,
+} from './ductility-figure.js';
 export { type FigureSpec, renderFigure } from './figure.js';
 export { type FloorFigureInput, floorFigure } from './floor-figure.js';
 export { type FloorSetFigureInput, floorSetFigure } from './floor-set-figure.js';

@@ -13,6 +13,7 @@ import type { BuildingMode } from '../spectrum/floor.js';
 import { responseSpectrum, rotdThreads } from '../spectrum/spectrum.js';
 import { fitTarget, targetOverlay, targetRecord } from '../spectrum/target.js';
 import { rotDSpectraParallel } from '../threads/rotd-pool.js';
+import { type DuctilityRequest, ductilityMethodStatement, reportDuctility } from './ductility-section.js';
 import { equipmentAnchorage } from './equipment-demand.js';
 import { type ReportInput, renderReport } from './report.js';
 import { spectrumFigures } from './spectrum-figures.js';
@@ -49,6 +50,8 @@ export interface ReportRequest
    * and of the pair (the pair scaled by the record's target factor when the fit is applied).
    */
   floorEnvelope?: boolean;
+  /** Constant-ductility spectra at one damping ratio (5% where the grid has it): the inelastic section. */
+  ductility?: DuctilityRequest;
 }
 
 /**
@@ -115,6 +118,12 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
       `RotD spectra: at ζ = ${damping * 100}% only; both components processed alike and unscaled (a target scaling is not applied to them).`,
     );
   }
+  if (request.ductility !== undefined) {
+    // One damping ratio, as for RotD: the strength search runs the oscillator tens of times a cell.
+    const damping = grid.dampings.find(isFivePercent) ?? grid.dampings[0];
+    input.ductility = reportDuctility(record, request.ductility, { periodsS: grid.periodsS, damping }, axis);
+    input.methods.push(ductilityMethodStatement(input.ductility.spectra));
+  }
   // Both horizontals alike: the pair takes the record's scale factor (one factor for the pair).
   const floorRecords =
     request.floorEnvelope && request.pair !== undefined ? [targetRecord(request.pair.record, fit)] : [];
@@ -132,6 +141,7 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
     input.spectrumFigures,
     input.damping?.figure ?? [],
     input.rotd?.figure ?? [],
+    input.ductility?.figures ?? [],
     input.anchorage.flatMap((a) => a.figures),
   ].flat();
   for (const f of figures) files.set(f.file, f.svg);

@@ -7,6 +7,7 @@ import type { RotDSpectra } from '../spectrum/rotd.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
 import { anchorageSection, type ReportAnchorage } from './anchorage-section.js';
+import { DUCTILITY_LIMIT, ductilitySection, type ReportDuctility } from './ductility-section.js';
 import type { ReportFigure } from './html.js';
 import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';
@@ -36,6 +37,8 @@ export interface ReportInput {
   target?: TargetFit;
   damping?: { comparison: DampingComparison; figure: ReportFigure };
   rotd?: { spectra: RotDSpectra; figure: ReportFigure };
+  /** Constant-ductility spectra, when asked for (report --ductility). */
+  ductility?: ReportDuctility;
   anchorage: ReportAnchorage[];
   /** Method statements from the rest of the program (oscillator, spectra). */
   methods: string[];
@@ -103,6 +106,16 @@ export function renderReport(input: ReportInput): string {
     const table = rotdSection(rotd.spectra, tableNumber++);
     add('rotd', 'Two horizontal components: RotD50 and RotD100', table, figure(rotd.figure, 'rotd'));
   }
+  if (input.ductility !== undefined) {
+    const section = ductilitySection(input.ductility, input.lengthUnit, tableNumber);
+    tableNumber += 2;
+    add(
+      'inelastic',
+      'Inelastic response',
+      section,
+      ...input.ductility.figures.map((f) => figure(f, 'inelastic')),
+    );
+  }
   if (input.anchorage.length > 0) {
     const parts: string[] = [paragraph(CAUTION, 'caution-inline')];
     input.anchorage.forEach((item, i) => {
@@ -113,7 +126,7 @@ export function renderReport(input: ReportInput): string {
     add('anchorage', 'Equipment anchorage demands', ...parts);
   }
   add('method', 'Method and assumptions', list(input.methods));
-  add('limits', 'Limits of use', list(LIMITS_OF_USE));
+  add('limits', 'Limits of use', list([...LIMITS_OF_USE, ...(input.ductility ? [DUCTILITY_LIMIT] : [])]));
   add('reproduce', 'Reproducing this report', reproduceSection(input, tableNumber));
 
   return `<!DOCTYPE html>

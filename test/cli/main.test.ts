@@ -124,7 +124,11 @@ const CASES: Record<string, [string[], RegExp][]> = {
       ['ductility', f.h1, '--units', 'g', '--periods', '0.5', '--out', join(missing, 'd.json')],
       /does not exist/,
     ],
-    [['ductility', f.h1, '--units', 'g', '--svg', f.dir], /unknown option/],
+    [
+      ['ductility', f.h1, '--units', 'g', '--periods', '0.5', '--svg', join(missing, 'figs')],
+      /parent folder does not exist/,
+    ],
+    [['ductility', f.h1, '--units', 'g', '--axis', 'frequency'], /add --svg/],
   ],
   anchor: [
     [['anchor'], /--equipment/],

@@ -240,6 +240,10 @@ export const GOLDEN_CASES: GoldenCase[] = [
     argv: w(`ductility ${H1} --units g --frequencies 1,5 --strength 0.2g,0.5g`),
   },
   {
+    name: 'ductility-svg',
+    argv: w(`ductility ${H1} --units g --periods 0.1,0.3,1,3 --ductility 1,2,4 --svg OUT/figs`),
+  },
+  {
     name: 'ductility-error-both',
     argv: w(`ductility ${H1} --units g --strength 2 --ductility 1,2`),
   },
@@ -307,6 +311,13 @@ export const GOLDEN_CASES: GoldenCase[] = [
   {
     name: 'report-frequency',
     argv: w(`report IN/gen-a.csv --units g ${GRID} --damping 2%,5% --axis frequency --out OUT/report`),
+    env: FIXED_DATE,
+  },
+  {
+    name: 'report-ductility',
+    argv: w(
+      `report IN/gen-a.csv --units g ${GRID} --ductility 1,2,4 --model bilinear:0.05 --ductility-periods 0.1,0.3,1,3 --out OUT/report`,
+    ),
     env: FIXED_DATE,
   },
   { name: 'demo', argv: w('demo --out OUT/demo'), env: FIXED_DATE },

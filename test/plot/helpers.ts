@@ -1,9 +1,16 @@
 import { JSDOM } from 'jsdom';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
+import { constantDuctilitySpectra, ductilityDemandSpectra } from '../../src/inelastic/ductility.js';
+import { referenceReductions } from '../../src/inelastic/r-mu-t.js';
 import { logSpaced } from '../../src/oscillator/grid.js';
 import { anchorPlanSvg } from '../../src/plot/anchor-plan-figure.js';
 import { dampingFigure } from '../../src/plot/damping-figure.js';
 import { designFigure } from '../../src/plot/design-figure.js';
+import {
+  ductilityDemandSvg,
+  ductilityReductionSvg,
+  ductilityStrengthSvg,
+} from '../../src/plot/ductility-figure.js';
 import { floorFigure } from '../../src/plot/floor-figure.js';
 import { floorSetFigure } from '../../src/plot/floor-set-figure.js';
 import { fourierFigure } from '../../src/plot/fourier-figure.js';
@@ -206,6 +213,12 @@ export const EVERY_FIGURE: Record<string, () => DrawnFigure> = {
     });
     return { svg, curves: 2 };
   },
+  'ductility-ay': () => ({ svg: ductilityStrengthSvg(ductilityInputs().spectra), curves: 3 }),
+  'ductility-ry': () => {
+    const { spectra } = ductilityInputs();
+    return { svg: ductilityReductionSvg(spectra, { references: referenceReductions(spectra) }), curves: 3 };
+  },
+  'ductility-demand': () => ({ svg: ductilityDemandSvg(ductilityInputs().demand), curves: 2 }),
   'anchor-plan': () => ({
     svg: anchorPlanSvg({
       title: `${NASTY}: anchor plan`,
@@ -239,4 +252,38 @@ function inputs() {
     shared = { record, grid, spectrum: responseSpectrum(record, grid) };
   }
   return shared;
+}
+
+let ductility:
+  | {
+      spectra: ReturnType<typeof constantDuctilitySpectra>;
+      demand: ReturnType<typeof ductilityDemandSpectra>;
+    }
+  | undefined;
+
+/**
+ * Constant-ductility (μ = 1, 2, 4) and demand (R_y = 2, 4) spectra of a short invented record (600
+ * samples) at 5% damping on six periods, T = 0 among them: the yielding engine is slow.
+ */
+export function ductilityInputs() {
+  if (!ductility) {
+    const record = inventedRecord(6);
+    const model = { kind: 'elastoplastic' } as const;
+    const periodsS = [0, 0.1, 0.2, 0.5, 1, 2];
+    ductility = {
+      spectra: constantDuctilitySpectra(record, {
+        periodsS,
+        dampings: [0.05],
+        ductilities: [1, 2, 4],
+        model,
+      }),
+      demand: ductilityDemandSpectra(record, {
+        periodsS: periodsS.slice(1),
+        dampings: [0.05],
+        model,
+        ry: [2, 4],
+      }),
+    };
+  }
+  return ductility;
 }

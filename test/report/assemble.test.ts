@@ -82,3 +82,26 @@ describe('assembleReport --axis', () => {
     expect(files.get('report.html')).not.toContain('Figures: spectra');
   });
 });
+
+describe('assembleReport with ductility', () => {
+  it('adds the inelastic section and its two figures, at 5% on its own periods', async () => {
+    const files = await assembleReport({
+      read: record,
+      processed: record,
+      grid,
+      generatedAt: 'now',
+      ductility: {
+        ductilities: [1, 4],
+        model: { kind: 'bilinear', alpha: 0.05 },
+        periodsS: Float64Array.of(0.3, 1),
+      },
+    });
+    const names = [...files.keys()];
+    expect(names.slice(-3)).toEqual(['ductility-ay.svg', 'ductility-ry.svg', 'report.html']);
+    const html = files.get('report.html') ?? '';
+    expect(html).toContain('<a href="#inelastic">');
+    expect(html).toContain('Inelastic response: bilinear:0.05 oscillators at ζ = 5%');
+    // Nassar–Krawinkler between the table's α = 0.02 and 0.10, said so.
+    expect(html).toContain('the coefficients linear in α');
+  });
+});

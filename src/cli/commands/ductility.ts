@@ -14,8 +14,12 @@ import {
   ductilityDemandSpectra,
 } from '../../inelastic/ductility.js';
 import type { Hysteresis } from '../../inelastic/hysteresis.js';
+import { referenceReductions } from '../../inelastic/r-mu-t.js';
 import { MAX_OSCILLATORS } from '../../oscillator/grid.js';
+import { ductilityFigures } from '../../plot/ductility-figure.js';
+import type { PeriodAxis } from '../../plot/period-axis.js';
 import type { GroundRecord } from '../../record/record.js';
+import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { FREQUENCIES_HELP, type GridCliOptions, gridFromOptions } from '../options/grid.js';
 import {
@@ -34,7 +38,8 @@ export interface DuctilityCliOptions
     ProcessingCliOptions,
     GridCliOptions,
     InelasticCliOptions,
-    OutputCliOptions {
+    OutputCliOptions,
+    AxisCliOptions {
   threads?: string;
 }
 
@@ -63,9 +68,13 @@ export function registerDuctility(program: Command): void {
       `allow more than ${String(MAX_OSCILLATORS).replace(/\B(?=(\d{3})+(?!\d))/g, ',')} oscillators (periods × dampings)`,
     )
     .option('--threads <n>', 'threads for the strength search (default: all cores)');
-  addOutputOptions(command, 'json or csv (default: a table on the terminal, or json with --out)').action(
-    (source: string, options: DuctilityCliOptions, self: Command) =>
-      runDuctility(source, options, self.getOptionValueSource('ductility') === 'cli'),
+  addAxisOption(command);
+  addOutputOptions(
+    command,
+    'json or csv (default: a table on the terminal, or json with --out)',
+    'also draw the figures: DIR/ductility-ay.svg and DIR/ductility-ry.svg, or with --strength DIR/ductility-demand.svg',
+  ).action((source: string, options: DuctilityCliOptions, self: Command) =>
+    runDuctility(source, options, self.getOptionValueSource('ductility') === 'cli'),
   );
 }
 
@@ -90,6 +99,7 @@ export async function runDuctility(
   const request = requestFromOptions(options, ductilityGiven);
   const threads = options.threads === undefined ? 'auto' : parseThreads(options.threads);
   outputFormat(options, 'json or csv');
+  const axis = svgAxisFromOptions(options);
   const record = applyProcessing(await loadRecord(source, options), options);
   const result = computeSpectra(record, request, threads);
   await writeProduct([source], options, {
@@ -99,8 +109,20 @@ export async function runDuctility(
       'ductility' in result ? ductilityToCsv(result.ductility) : ductilityDemandToCsv(result.demand),
     table: () =>
       'ductility' in result ? ductilityTable(result.ductility) : ductilityDemandTable(result.demand),
-    figures: () => [],
+    figures: () => figuresOf(result, axis),
   });
+}
+
+/** The figures of the result as [file name, SVG]; R_y beside the published R–μ–T relations. */
+function figuresOf(
+  result: { ductility: DuctilitySpectra } | { demand: DuctilityDemandSpectra },
+  axis: PeriodAxis | undefined,
+): [string, string][] {
+  const figures =
+    'ductility' in result
+      ? ductilityFigures(result.ductility, { references: referenceReductions(result.ductility), axis })
+      : ductilityFigures(result.demand, { axis });
+  return figures.map(({ name, svg }) => [name, svg]);
 }
 
 function requestFromOptions(options: DuctilityCliOptions, ductilityGiven: boolean): DuctilityRequest {

@@ -50,6 +50,15 @@ export function registerReport(program: Command): void {
     .option('--modal-factor <value>', 'for equipment above the base: Γφ at its floor')
     .option('--broaden [fraction]', 'broaden the floor spectrum peaks, b = 0.15 unless given')
     .option(
+      '--ductility <list>',
+      'adds constant-ductility spectra at these target ductilities μ ≥ 1 (e.g. 1,2,4,8), at 5% damping where the grid has it',
+    )
+    .option('--model <model>', 'with --ductility: elastoplastic (default) or bilinear:α (0 ≤ α < 1)')
+    .option(
+      '--ductility-periods <grid>',
+      "with --ductility: its periods, as --periods takes them (default: the report's periods; the search is slow)",
+    )
+    .option(
       '--floor-envelope',
       'with --pair: equipment above the base takes the envelope of both components’ floor spectra',
     )

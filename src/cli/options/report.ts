@@ -1,7 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { parseEquipment } from '../../anchorage/equipment.js';
-import { usageError } from '../../base/errors.js';
+import { isQuakesweepError, usageError } from '../../base/errors.js';
 import { parseLengthUnit } from '../../base/units.js';
+import { parsePeriods } from '../../oscillator/grid.js';
 import { checkFolder } from '../../output/output-set.js';
 import type { ReportRequest } from '../../report/assemble.js';
 import { type AxisCliOptions, periodAxisFromOptions } from './axis.js';
@@ -9,6 +10,7 @@ import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } f
 import { figureAxes } from './format.js';
 import { generationTime } from './generation-time.js';
 import { type GridCliOptions, gridFromOptions } from './grid.js';
+import { type InelasticCliOptions, modelFromOptions, parseDuctilities } from './inelastic.js';
 import { applyProcessing, type ProcessingCliOptions } from './processing.js';
 import { loadRecord, positiveNumber, type RecordCliOptions } from './record.js';
 import { type TargetCliOptions, targetFromOptions } from './target.js';
@@ -20,7 +22,9 @@ export interface ReportCliOptions
     GridCliOptions,
     TargetCliOptions,
     BuildingCliOptions,
-    AxisCliOptions {
+    AxisCliOptions,
+    Pick<InelasticCliOptions, 'ductility' | 'model'> {
+  ductilityPeriods?: string;
   out?: string;
   lengthUnit?: string;
   axes?: string;
@@ -62,6 +66,7 @@ export async function reportRequest(
     building: aboveBase ? buildingFromOptions(options) : null,
     broadening: broadeningFromOptions(options.broaden),
     floorEnvelope: options.floorEnvelope === true,
+    ductility: ductilityFromOptions(options),
     title: options.title,
     notes: options.note,
     commandLine,
@@ -84,6 +89,24 @@ export async function reportRequest(
     ...(settings.target?.files ?? []),
   ];
   return { request, inputs, out };
+}
+
+/** The inelastic section of --ductility, --model and --ductility-periods; none without --ductility. */
+export function ductilityFromOptions(options: ReportCliOptions): ReportRequest['ductility'] {
+  if (options.ductility === undefined) {
+    if (options.model !== undefined || options.ductilityPeriods !== undefined)
+      throw usageError('--model and --ductility-periods apply with --ductility');
+    return undefined;
+  }
+  const ductilities = parseDuctilities(options.ductility);
+  const model = modelFromOptions(options);
+  if (options.ductilityPeriods === undefined) return { ductilities, model };
+  try {
+    return { ductilities, model, periodsS: parsePeriods(options.ductilityPeriods) };
+  } catch (error) {
+    if (!isQuakesweepError(error)) throw error;
+    throw usageError(error.message.replace(/^--periods/, '--ductility-periods'));
+  }
 }
 
 /** The words of a command line that gives `options` (camelCase keys as --kebab-case flags). */

@@ -26,10 +26,13 @@ describe('quakesweep demo', () => {
       'Damping comparison',
       'Generator G-1 (invented)',
       'floor spectrum',
+      'Inelastic response',
+      'Newmark–Hall (1982)',
       'invented',
     ]) {
       expect(html).toContain(text);
     }
     expect(existsSync(join(folder, 'demo-output', 'rotd.svg'))).toBe(true);
+    expect(existsSync(join(folder, 'demo-output', 'ductility-ry.svg'))).toBe(true);
   });
 });

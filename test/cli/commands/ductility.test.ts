@@ -98,7 +98,41 @@ describe('quakesweep ductility', () => {
     expect(out.spectra).toEqual(one.spectra);
   });
 
+  it('--svg draws A_y and R_y (beside the published relations), or with --strength the demand, each with the caution', async () => {
+    const both = await run(
+      'ductility',
+      ...record,
+      ...periods,
+      '--ductility',
+      '1,2',
+      '--svg',
+      'figs',
+      '--axis',
+      'frequency',
+    );
+    expect(both).toMatchObject({ code: 0, stderr: '' });
+    const ry = readFileSync(join(folder.path, 'figs', 'ductility-ry.svg'), 'utf8');
+    expect(ry).toContain('Newmark–Hall (1982)');
+    expect(ry).toContain('Nassar–Krawinkler (1991)');
+    expect(ry).toContain('Frequency f = 1/T (Hz)');
+    const ay = readFileSync(join(folder.path, 'figs', 'ductility-ay.svg'), 'utf8');
+    expect(ay.replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ')).toContain(CAUTION.slice(0, 60));
+    const demand = await run(
+      'ductility',
+      ...record,
+      '--periods',
+      '0.2,1',
+      '--strength',
+      '2',
+      '--svg',
+      'demand',
+    );
+    expect(demand).toMatchObject({ code: 0, stderr: '' });
+    expect(readFileSync(join(folder.path, 'demand', 'ductility-demand.svg'), 'utf8')).toContain('R_y = 2');
+  });
+
   it.each([
+    [['--axis', 'frequency'], '--axis sets the axis of the figures; add --svg <dir>'],
     [['--ductility', '0.5'], '--ductility: 0.5 is below 1'],
     [['--model', 'bilinear:1'], "--model 'bilinear:1': use elastoplastic or bilinear:α with 0 ≤ α < 1"],
     [['--model', 'bilinear:-0.1'], "--model 'bilinear:-0.1'"],

@@ -1,6 +1,11 @@
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { optionWords, type ReportCliOptions, reportRequest } from '../../../src/cli/options/report.js';
+import {
+  ductilityFromOptions,
+  optionWords,
+  type ReportCliOptions,
+  reportRequest,
+} from '../../../src/cli/options/report.js';
 import { useCliFolder } from '../../helpers/cli-folder.js';
 
 const folder = useCliFolder('quakesweep-report-options-', (f) => {
@@ -105,5 +110,34 @@ describe('optionWords', () => {
       '--angle-step',
       '0.5',
     ]);
+  });
+});
+
+describe('ductilityFromOptions', () => {
+  it('reads --ductility (sorted), --model and --ductility-periods; none without --ductility', () => {
+    expect(ductilityFromOptions({})).toBeUndefined();
+    expect(ductilityFromOptions({ ductility: '4,1,2' })).toEqual({
+      ductilities: [1, 2, 4],
+      model: { kind: 'elastoplastic' },
+    });
+    const own = ductilityFromOptions({ ductility: '2', model: 'bilinear:0.05', ductilityPeriods: '0.1,1' });
+    expect(own?.model).toEqual({ kind: 'bilinear', alpha: 0.05 });
+    expect(Array.from(own?.periodsS ?? [])).toEqual([0.1, 1]);
+  });
+
+  it('refuses bad values and the options that need --ductility, naming the option', () => {
+    expect(() => ductilityFromOptions({ ductility: '0.5' })).toThrow(/--ductility: 0.5 is below 1/);
+    expect(() => ductilityFromOptions({ ductility: '2', model: 'bilinear:1' })).toThrow(/--model/);
+    expect(() => ductilityFromOptions({ ductility: '2', ductilityPeriods: '0:1:5' })).toThrow(
+      /^--ductility-periods '0:1:5'/,
+    );
+    expect(() => ductilityFromOptions({ model: 'elastoplastic' })).toThrow(
+      '--model and --ductility-periods apply with --ductility',
+    );
+  });
+
+  it('gives the request its inelastic section', async () => {
+    const { request } = await reportRequest(at('main.txt'), { ...base(), ductility: '1,2' }, []);
+    expect(request.ductility?.ductilities).toEqual([1, 2]);
   });
 });
