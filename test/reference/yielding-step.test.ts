@@ -81,10 +81,11 @@ describe('yieldingPeak converges to the ODE reference as the step shrinks', () =
 describe('second order, which only holds with the steps split at yield and unloading', () => {
   // Newmark average acceleration is second order (Newmark 1959): once the step is well below the
   // period, halving it divides the error by about 4. A step that yields or turns inside without
-  // being split at the event loses that (measured: the ratio then wanders, e.g. 0.029% → 0.0020%
-  // → 0.0081%), so the observed order guards the event location. Reference: ODEX with events.
-  it.each([cases[0], cases[3]])(
-    '$label: the error falls 3.5–4.5 times a halving from 8 to 32 sub-steps',
+  // being split at the event loses that (measured with the splitting switched off: on these three
+  // cases the ratios wander from 0.8 to 6.6; with it they are 3.97–4.02), so the observed order
+  // guards the event location. Reference: ODEX with events.
+  it.each([cases[1], cases[2], cases[4]])(
+    '$label: the error falls 3.5–4.5 times a halving from 4 to 64 sub-steps',
     ({ record, periodS, damping, model, ratio }) => {
       const alpha = model.kind === 'bilinear' ? model.alpha : 0;
       const base = { periodS, damping };
@@ -99,7 +100,7 @@ describe('second order, which only holds with the steps split at yield and unloa
         alpha,
         yieldDisplacementM: uyM,
       });
-      const errors = [8, 16, 32].map(
+      const errors = [4, 8, 16, 32, 64].map(
         (substeps) =>
           yieldingPeak(record.accelMS2, record.dtS, { ...base, model, yieldDisplacementM: uyM, substeps })
             .peakDisplacementM /
