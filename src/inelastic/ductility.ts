@@ -3,18 +3,21 @@ import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
 import type { GroundRecord } from '../record/record.js';
 import { recordInfo, responseSpectrum, type SpectrumRecordInfo } from '../spectrum/spectrum.js';
-import { checkHysteresis, type Hysteresis } from './hysteresis.js';
 import {
-  DUCTILITY_TOLERANCE,
-  STRENGTH_CONVENTION,
-  strengthCell,
-  strengthsForDuctilities,
-} from './strength-search.js';
+  type DemandPlan,
+  type DemandStrength,
+  type DuctilityPlan,
+  demandCell,
+  demandCellLength,
+  ductilityCell,
+  ductilityCellLength,
+} from './cells.js';
+import { checkHysteresis, type Hysteresis } from './hysteresis.js';
+import { DUCTILITY_TOLERANCE, STRENGTH_CONVENTION } from './strength-search.js';
 import {
   YIELDING_MAX_STEPS_PER_PERIOD,
   YIELDING_RECORD_FACTOR,
   YIELDING_STEPS_PER_PERIOD,
-  yieldingPeak,
 } from './yielding.js';
 
 /** What a rigid oscillator (T = 0) is given in a constant-ductility spectrum. */
@@ -88,11 +91,21 @@ export interface DuctilitySpectraOptions {
  * from memory): for each period, damping ratio and target ductility μ, the yield strength of the
  * yielding oscillator (yielding.ts) whose peak ductility demand is μ, found by strengthsForDuctilities
  * (STRENGTH_CONVENTION). f_o = k·u_o is the elastic strength of the same oscillator, u_o its peak.
+ * Cell by cell (ductilityCell), then assembled; threads/ductility-pool.ts deals the cells out.
  */
 export function constantDuctilitySpectra(
   record: GroundRecord,
   options: DuctilitySpectraOptions,
 ): DuctilitySpectra {
+  const plan = planDuctilitySpectra(record, options);
+  const cells = plan.dampings.length * plan.periodsS.length;
+  const results = new Float64Array(cells * ductilityCellLength(plan));
+  for (let cell = 0; cell < cells; cell++) ductilityCell(record.accelMS2, record.dtS, plan, cell, results);
+  return assembleDuctilitySpectra(record, plan, results);
+}
+
+/** Check the options of constantDuctilitySpectra (usage errors) and plan its cells. */
+export function planDuctilitySpectra(record: GroundRecord, options: DuctilitySpectraOptions): DuctilityPlan {
   const model = checkHysteresis(options.model);
   const periodsS = checkPeriods(options.periodsS);
   const dampings = checkDampings(options.dampings);
@@ -103,13 +116,30 @@ export function constantDuctilitySpectra(
       throw usageError(`--ductility ${mu}: ductility ratios are finite and ≥ 1`);
   }
   const roughness = recordRoughness(record.accelMS2);
+  return {
+    model,
+    periodsS,
+    dampings,
+    ductilities,
+    roughness,
+    elasticSdM: elasticPeaks(record, periodsS, dampings),
+  };
+}
+
+/** The spectra of a plan from its cells' results (ductilityCell). */
+export function assembleDuctilitySpectra(
+  record: GroundRecord,
+  plan: DuctilityPlan,
+  results: Float64Array,
+): DuctilitySpectra {
+  const { periodsS, ductilities } = plan;
   const nPeriods = periodsS.length;
+  const length = ductilityCellLength(plan);
   const pgaG = record.pgaMS2 / STANDARD_GRAVITY_MS2;
-  const elasticSd = elasticPeaks(record, periodsS, dampings);
   const elastic: ElasticPeaks[] = [];
   const curves: DuctilityCurve[] = [];
   let runs = 0;
-  for (const [z, damping] of dampings.entries()) {
+  plan.dampings.forEach((damping, d) => {
     const peaks: ElasticPeaks = {
       damping,
       sdM: new Float64Array(nPeriods),
@@ -129,27 +159,28 @@ export function constantDuctilitySpectra(
         continue;
       }
       const omega2 = ((2 * Math.PI) / periodS) ** 2;
-      const cell = strengthCell(periodS, damping, model, record.dtS, roughness, elasticSd[z][p]);
-      const found = strengthsForDuctilities(record.accelMS2, record.dtS, cell, ductilities);
-      runs += found.runs;
-      peaks.sdM[p] = found.elasticPeakM;
-      peaks.psaG[p] = (omega2 * found.elasticPeakM) / STANDARD_GRAVITY_MS2;
-      rows.forEach((row, d) => {
-        const uyM = found.strengthRatio[d] * found.elasticPeakM;
+      const at = (d * nPeriods + p) * length;
+      const elasticPeakM = results[at];
+      runs += results[at + 1];
+      peaks.sdM[p] = elasticPeakM;
+      peaks.psaG[p] = (omega2 * elasticPeakM) / STANDARD_GRAVITY_MS2;
+      rows.forEach((row, k) => {
+        const strengthRatio = results[at + 2 + 3 * k];
+        const uyM = strengthRatio * elasticPeakM;
         row.uyM[p] = uyM;
-        row.umM[p] = found.peakM[d];
+        row.umM[p] = results[at + 3 + 3 * k];
         row.ayG[p] = (omega2 * uyM) / STANDARD_GRAVITY_MS2;
-        row.strengthRatio[p] = found.strengthRatio[d];
-        row.ry[p] = 1 / found.strengthRatio[d];
-        row.achievedDuctility[p] = found.achieved[d];
+        row.strengthRatio[p] = strengthRatio;
+        row.ry[p] = 1 / strengthRatio;
+        row.achievedDuctility[p] = results[at + 4 + 3 * k];
       });
     }
     elastic.push(peaks);
     curves.push(...rows);
-  }
+  });
   return {
     record: recordInfo(record),
-    model,
+    model: plan.model,
     method: YIELDING_METHOD,
     convention: `${STRENGTH_CONVENTION}. ${RIGID_CONVENTION}`,
     tolerance: DUCTILITY_TOLERANCE,
@@ -161,13 +192,15 @@ export function constantDuctilitySpectra(
 }
 
 /**
- * The elastic peaks u_o (SD, m) the strengths are normalised by, [damping][period], from the elastic
- * engine (newmark-average, pre-warped: within 0.3% of the exact peak; see oscillator/substeps.ts),
- * so that μ = 1 is the elastic spectrum itself. 0 at T = 0.
+ * The elastic peaks u_o (SD, m) the strengths are normalised by, damping-major like the cells, from
+ * the elastic engine (newmark-average, pre-warped: within 0.3% of the exact peak; see
+ * oscillator/substeps.ts), so that μ = 1 is the elastic spectrum itself. 0 at T = 0.
  */
-function elasticPeaks(record: GroundRecord, periodsS: Float64Array, dampings: Float64Array): Float64Array[] {
+function elasticPeaks(record: GroundRecord, periodsS: Float64Array, dampings: Float64Array): Float64Array {
   const spectrum = responseSpectrum(record, { periodsS, dampings, method: 'newmark-average' });
-  return spectrum.curves.map((curve) => Float64Array.from(curve.sdM));
+  const sdM = new Float64Array(dampings.length * periodsS.length);
+  for (const [d, curve] of spectrum.curves.entries()) sdM.set(curve.sdM, d * periodsS.length);
+  return sdM;
 }
 
 function emptyCurve(damping: number, ductility: number, n: number): DuctilityCurve {
@@ -187,7 +220,7 @@ function emptyCurve(damping: number, ductility: number, n: number): DuctilityCur
 export interface DemandCurve {
   damping: number;
   /** The strength as given: R_y = f_o/f_y for every period, or A_y (g) for every period. */
-  strength: { ry: number } | { ayG: number };
+  strength: DemandStrength;
   /** Peak ductility demand u_m/u_y (below 1 where the oscillator stays elastic). */
   ductility: Float64Array;
   ayG: Float64Array;
@@ -222,11 +255,21 @@ export interface DemandSpectraOptions {
 /**
  * Ductility demand spectra: the peak ductility u_m/u_y of the yielding oscillator (yielding.ts)
  * for a given strength, as R_y (u_y = u_o/R_y, u_o the elastic peak) or as A_y (u_y = A_y/ω²).
+ * Cell by cell (demandCell), then assembled; threads/ductility-pool.ts deals the cells out.
  */
 export function ductilityDemandSpectra(
   record: GroundRecord,
   options: DemandSpectraOptions,
 ): DuctilityDemandSpectra {
+  const plan = planDemandSpectra(record, options);
+  const cells = plan.dampings.length * plan.periodsS.length;
+  const results = new Float64Array(cells * demandCellLength(plan));
+  for (let cell = 0; cell < cells; cell++) demandCell(record.accelMS2, record.dtS, plan, cell, results);
+  return assembleDemandSpectra(record, plan, results);
+}
+
+/** Check the options of ductilityDemandSpectra (usage errors) and plan its cells. */
+export function planDemandSpectra(record: GroundRecord, options: DemandSpectraOptions): DemandPlan {
   const model = checkHysteresis(options.model);
   const periodsS = checkPeriods(options.periodsS);
   if (periodsS.includes(0))
@@ -234,7 +277,7 @@ export function ductilityDemandSpectra(
   const dampings = checkDampings(options.dampings);
   if ((options.ry === undefined) === (options.ayG === undefined))
     throw usageError('ductility demand: give the strength as R_y or as A_y, not both nor neither');
-  const strengths: DemandCurve['strength'][] =
+  const strengths: DemandStrength[] =
     options.ry !== undefined
       ? Array.from(options.ry, (ry) => ({ ry }))
       : Array.from(options.ayG ?? [], (ayG) => ({ ayG }));
@@ -245,40 +288,60 @@ export function ductilityDemandSpectra(
       throw usageError(`strength ${value}: ${'ry' in strength ? 'R_y' : 'A_y'} must be finite and > 0`);
   }
   const roughness = recordRoughness(record.accelMS2);
+  return {
+    model,
+    periodsS,
+    dampings,
+    strengths,
+    roughness,
+    elasticSdM: elasticPeaks(record, periodsS, dampings),
+  };
+}
+
+/** The demand spectra of a plan from its cells' results (demandCell). */
+export function assembleDemandSpectra(
+  record: GroundRecord,
+  plan: DemandPlan,
+  results: Float64Array,
+): DuctilityDemandSpectra {
+  const { periodsS } = plan;
   const n = periodsS.length;
-  const elasticSd = elasticPeaks(record, periodsS, dampings);
+  const length = demandCellLength(plan);
   const elastic: ElasticPeaks[] = [];
   const curves: DemandCurve[] = [];
-  for (const [z, damping] of dampings.entries()) {
+  plan.dampings.forEach((damping, d) => {
     const peaks: ElasticPeaks = { damping, sdM: new Float64Array(n), psaG: new Float64Array(n) };
-    const rows = strengths.map((strength) => emptyDemand(damping, strength, n));
+    const rows = plan.strengths.map((strength) => emptyDemand(damping, strength, n));
     for (let p = 0; p < n; p++) {
-      const periodS = periodsS[p];
-      const omega2 = ((2 * Math.PI) / periodS) ** 2;
-      const cell = strengthCell(periodS, damping, model, record.dtS, roughness);
-      const base = { periodS, damping, model, substeps: cell.substeps };
-      const uo = elasticSd[z][p];
+      const omega2 = ((2 * Math.PI) / periodsS[p]) ** 2;
+      const at = (d * n + p) * length;
+      const uo = results[at];
       peaks.sdM[p] = uo;
       peaks.psaG[p] = (omega2 * uo) / STANDARD_GRAVITY_MS2;
-      for (const row of rows) {
-        const uyM =
-          'ry' in row.strength ? uo / row.strength.ry : (row.strength.ayG * STANDARD_GRAVITY_MS2) / omega2;
-        const peak = yieldingPeak(record.accelMS2, record.dtS, { ...base, yieldDisplacementM: uyM });
-        row.ductility[p] = peak.ductility;
+      rows.forEach((row, k) => {
+        const uyM = results[at + 1 + 4 * k];
+        row.ductility[p] = results[at + 2 + 4 * k];
         row.uyM[p] = uyM;
-        row.umM[p] = peak.peakDisplacementM;
+        row.umM[p] = results[at + 3 + 4 * k];
         row.ayG[p] = (omega2 * uyM) / STANDARD_GRAVITY_MS2;
         row.ry[p] = uo / uyM;
-        row.yieldEvents[p] = peak.yieldEvents;
-      }
+        row.yieldEvents[p] = results[at + 4 + 4 * k];
+      });
     }
     elastic.push(peaks);
     curves.push(...rows);
-  }
-  return { record: recordInfo(record), model, method: YIELDING_METHOD, periodsS, elastic, curves };
+  });
+  return {
+    record: recordInfo(record),
+    model: plan.model,
+    method: YIELDING_METHOD,
+    periodsS,
+    elastic,
+    curves,
+  };
 }
 
-function emptyDemand(damping: number, strength: DemandCurve['strength'], n: number): DemandCurve {
+function emptyDemand(damping: number, strength: DemandStrength, n: number): DemandCurve {
   const array = () => new Float64Array(n);
   return {
     damping,
