@@ -69,7 +69,9 @@ await build({ ...common, entryPoints: [join(root, 'dist/cli/main.js')], outfile:
 // when it is called from the bundle).
 await build({
   ...common,
-  entryPoints: ['threads/pool-worker.js', 'threads/batch-worker.js'].map((file) => join(root, 'dist', file)),
+  entryPoints: ['threads/pool-worker.js', 'threads/batch-worker.js', 'threads/ductility-worker.js'].map(
+    (file) => join(root, 'dist', file),
+  ),
   outdir: join(root, 'dist/cli/workers'),
   entryNames: '[name]',
   outExtension: { '.js': '.cjs' },

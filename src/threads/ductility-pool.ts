@@ -1,0 +1,190 @@
+import { availableParallelism } from 'node:os';
+import { inputError, QuakesweepError } from '../base/errors.js';
+import {
+  type DemandPlan,
+  type DuctilityPlan,
+  demandCell,
+  demandCellLength,
+  ductilityCell,
+  ductilityCellLength,
+} from '../inelastic/cells.js';
+import {
+  assembleDemandSpectra,
+  assembleDuctilitySpectra,
+  constantDuctilitySpectra,
+  type DemandSpectraOptions,
+  type DuctilityDemandSpectra,
+  type DuctilitySpectra,
+  type DuctilitySpectraOptions,
+  ductilityDemandSpectra,
+  planDemandSpectra,
+  planDuctilitySpectra,
+} from '../inelastic/ductility.js';
+import { substepsFor } from '../inelastic/yielding.js';
+import type { GroundRecord } from '../record/record.js';
+import { shared, ThreadTeam, workerScript } from './team.js';
+
+/** The cells of one job: a constant-ductility search or a demand run per (damping, period). */
+type CellWork = { kind: 'ductility'; plan: DuctilityPlan } | { kind: 'demand'; plan: DemandPlan };
+
+/**
+ * A job as the threads share it (SharedArrayBuffers): `order` of the cells to claim, costliest
+ * first, `counter` handing out the next one, `results` written cell by cell (ductilityCell,
+ * demandCell) and `failed`, the lowest cell that threw (the cell count while none has).
+ */
+export type DuctilityJob = CellWork & {
+  accelMS2: Float64Array;
+  dtS: number;
+  order: Int32Array;
+  counter: Int32Array;
+  failed: Int32Array;
+  results: Float64Array;
+};
+
+/**
+ * Claim cells one at a time and write their results (the same whichever thread). A cell that
+ * throws lowers `failed` to itself, and cells above `failed` are skipped: those below are still
+ * computed, so `failed` ends at the lowest failing cell, the one a single thread stops at.
+ */
+export function runDuctilityCells(job: DuctilityJob): void {
+  for (;;) {
+    const next = Atomics.add(job.counter, 0, 1);
+    if (next >= job.order.length) return;
+    const cell = job.order[next];
+    if (cell > Atomics.load(job.failed, 0)) continue;
+    try {
+      runCell(job, cell, job.results);
+    } catch {
+      for (let seen = Atomics.load(job.failed, 0); cell < seen; ) {
+        const was = Atomics.compareExchange(job.failed, 0, seen, cell);
+        if (was === seen) break;
+        seen = was;
+      }
+    }
+  }
+}
+
+function runCell(job: CellWork & Pick<DuctilityJob, 'accelMS2' | 'dtS'>, cell: number, into: Float64Array) {
+  if (job.kind === 'ductility') ductilityCell(job.accelMS2, job.dtS, job.plan, cell, into);
+  else demandCell(job.accelMS2, job.dtS, job.plan, cell, into);
+}
+
+/**
+ * Worker threads that compute constant-ductility and ductility demand spectra with the calling
+ * thread, claiming (damping, period) cells; keep one for a suite (a worker is costly to start)
+ * and close it when done.
+ */
+export class DuctilityPool extends ThreadTeam {
+  constructor(threads = availableParallelism()) {
+    super(threads, workerScript('ductility-worker.js'));
+  }
+
+  /** constantDuctilitySpectra, bit for bit (and its errors), computed by all the pool's threads. */
+  async spectra(record: GroundRecord, options: DuctilitySpectraOptions): Promise<DuctilitySpectra> {
+    return spectraOnTeam(this, record, planDuctilitySpectra(record, options));
+  }
+
+  /** ductilityDemandSpectra, bit for bit (and its errors), computed by all the pool's threads. */
+  async demand(record: GroundRecord, options: DemandSpectraOptions): Promise<DuctilityDemandSpectra> {
+    return demandOnTeam(this, record, planDemandSpectra(record, options));
+  }
+}
+
+async function spectraOnTeam(team: ThreadTeam, record: GroundRecord, plan: DuctilityPlan) {
+  const results = await cellsOnTeam(team, record, { kind: 'ductility', plan }, ductilityCellLength(plan));
+  return assembleDuctilitySpectra(record, plan, results);
+}
+
+async function demandOnTeam(team: ThreadTeam, record: GroundRecord, plan: DemandPlan) {
+  const results = await cellsOnTeam(team, record, { kind: 'demand', plan }, demandCellLength(plan));
+  return assembleDemandSpectra(record, plan, results);
+}
+
+/**
+ * Every cell of `work` on the team's threads. Costliest first: a cell's cost is about its sub-step
+ * count (substepsFor: max(1, 120·Δt/T, …)), so the last cells claimed are short ones; rigid cells
+ * (T = 0) have no work and are not dealt out.
+ */
+async function cellsOnTeam(
+  team: ThreadTeam,
+  record: GroundRecord,
+  work: CellWork,
+  length: number,
+): Promise<Float64Array> {
+  const { periodsS, dampings, roughness } = work.plan;
+  const count = periodsS.length * dampings.length;
+  const costs = Array.from({ length: count }, (_, cell) => {
+    const periodS = periodsS[cell % periodsS.length];
+    return periodS === 0 ? 0 : substepsFor(periodS, record.dtS, roughness);
+  });
+  const cells = costs.flatMap((cost, cell) => (cost > 0 ? [cell] : []));
+  const order = new Int32Array(new SharedArrayBuffer(4 * cells.length));
+  order.set(cells.sort((a, b) => costs[b] - costs[a] || a - b));
+  const failed = new Int32Array(new SharedArrayBuffer(4));
+  failed[0] = count;
+  const job: DuctilityJob = {
+    ...work,
+    accelMS2: shared(record.accelMS2),
+    dtS: record.dtS,
+    order,
+    counter: new Int32Array(new SharedArrayBuffer(4)),
+    failed,
+    results: shared(new Float64Array(count * length)),
+  };
+  await team.run(job, () => runDuctilityCells(job));
+  if (failed[0] < count) {
+    // The failing cell again, here: its error reaches the caller as it was thrown (a worker's
+    // would come back as text), and it is the one a single thread stops at.
+    runCell(job, failed[0], new Float64Array(count * length));
+    throw new QuakesweepError('internal', `cell ${failed[0]} failed on a worker thread but not on this one`);
+  }
+  return job.results;
+}
+
+/** Threads for a job of `cells` cells: `threads` (a whole number ≥ 1), at most one a cell. */
+function teamSize(threads: number, cells: number): number {
+  if (!Number.isInteger(threads) || threads < 1) {
+    throw inputError(`the thread count must be a whole number ≥ 1, got ${threads}`);
+  }
+  return Math.max(1, Math.min(threads, cells));
+}
+
+/**
+ * constantDuctilitySpectra, bit for bit (and its errors), on `threads` threads (this one
+ * included) started for the call and closed after; 1 computes here alone.
+ */
+export async function ductilitySpectraOnThreads(
+  record: GroundRecord,
+  options: DuctilitySpectraOptions,
+  threads: number,
+): Promise<DuctilitySpectra> {
+  const plan = planDuctilitySpectra(record, options);
+  const size = teamSize(threads, plan.dampings.length * plan.periodsS.filter((t) => t > 0).length);
+  if (size === 1) return constantDuctilitySpectra(record, options);
+  const team = new DuctilityPool(size);
+  try {
+    return await spectraOnTeam(team, record, plan);
+  } finally {
+    await team.close();
+  }
+}
+
+/**
+ * ductilityDemandSpectra, bit for bit (and its errors), on `threads` threads (this one included)
+ * started for the call and closed after; 1 computes here alone.
+ */
+export async function ductilityDemandOnThreads(
+  record: GroundRecord,
+  options: DemandSpectraOptions,
+  threads: number,
+): Promise<DuctilityDemandSpectra> {
+  const plan = planDemandSpectra(record, options);
+  const size = teamSize(threads, plan.dampings.length * plan.periodsS.length);
+  if (size === 1) return ductilityDemandSpectra(record, options);
+  const team = new DuctilityPool(size);
+  try {
+    return await demandOnTeam(team, record, plan);
+  } finally {
+    await team.close();
+  }
+}
