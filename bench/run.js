@@ -1,5 +1,5 @@
 // The sweep benchmark (`npm run bench`, after `npm run build`): the standard job, a RotD job, a
-// 50-record batch and the memory of a 2,000,000-sample record. Every figure is the median of
+// 50-record batch, the constant-ductility search and the memory of a 2,000,000-sample record. Every figure is the median of
 // REPEAT runs; the machine may be shared, so read the figures as indications. Nothing here is a
 // test: speed is measured here and never asserted in the test suite.
 import { execFileSync, spawnSync } from 'node:child_process';
@@ -8,12 +8,14 @@ import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { loadRecord } from '../dist/cli/options/record.js';
 import { formatJson, spectrumToJson } from '../dist/formats/spectrum-json.js';
+import { constantDuctilitySpectra } from '../dist/inelastic/ductility.js';
 import { defaultPeriodsS, logSpaced } from '../dist/oscillator/grid.js';
 import { sweepOscillators } from '../dist/oscillator/sweep.js';
 import { writeFileAtomic } from '../dist/output/output-set.js';
 import { synthesizeRecord } from '../dist/record/synth.js';
 import { rotDSpectra } from '../dist/spectrum/rotd.js';
 import { assembleSpectrum } from '../dist/spectrum/spectrum.js';
+import { ductilitySpectraOnThreads } from '../dist/threads/ductility-pool.js';
 import { RotDPool } from '../dist/threads/rotd-pool.js';
 import { SweepPool } from '../dist/threads/sweep-pool.js';
 
@@ -249,6 +251,38 @@ for (const kernel of ['wasm', 'js']) {
       note: `peak ${peakKb(args) ?? '?'} KB (main process; workers are threads of it)`,
     });
   }
+}
+
+// Constant-ductility spectra: the default grid (T = 0 and 120 periods 0.01–10 s, μ = 1, 1.5, 2,
+// 4, 6, 8, elastoplastic, 5%) on a 40,000-sample record at 0.01 s, on one thread and with the
+// (damping, period) cells dealt out over all cores; each threaded call starts its threads and
+// closes them, as a command does. Target: under 5 s on all cores.
+{
+  const record = synthesizeRecord({ seed: 1818, dtS: 0.01, durationS: 399.99, name: 'bench-ductility' });
+  const options = {
+    periodsS: defaultPeriodsS(),
+    dampings: [0.05],
+    ductilities: [1, 1.5, 2, 4, 6, 8],
+    model: { kind: 'elastoplastic' },
+  };
+  const repeat = QUICK ? 1 : REPEAT;
+  // Warm-up on the record's first 2,000 samples: every code path, a twentieth of the work.
+  const head = { ...record, accelMS2: record.accelMS2.subarray(0, 2000) };
+  constantDuctilitySpectra(head, options);
+  await ductilitySpectraOnThreads(head, options, cores);
+  const variant = (threads) =>
+    `default grid (120 periods × 6 μ × 5%), ${record.accelMS2.length} samples, ${threads} thread${threads === 1 ? '' : 's'}`;
+  const alone = await timed(() => constantDuctilitySpectra(record, options), repeat);
+  const runs = alone.result.oscillatorRuns;
+  row('ductility', variant(1), {
+    ms: alone.ms,
+    note: `${runs} oscillator runs; CPU ${alone.cpuMs.toFixed(0)} ms`,
+  });
+  const all = await timed(() => ductilitySpectraOnThreads(record, options, cores), repeat);
+  row('ductility', variant(cores), {
+    ms: all.ms,
+    note: `×${(alone.ms / all.ms).toFixed(2)} (target < 5000 ms); threads started per call; CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
+  });
 }
 
 // Memory: a 2,000,000-sample record with the default grid, through the CLI.
