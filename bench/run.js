@@ -1,7 +1,7 @@
 // The sweep benchmark (`npm run bench`, after `npm run build`): the standard job, a RotD job, a
-// 50-record batch, the constant-ductility search and the memory of a 2,000,000-sample record. Every figure is the median of
-// REPEAT runs; the machine may be shared, so read the figures as indications. Nothing here is a
-// test: speed is measured here and never asserted in the test suite.
+// 50-record batch, the constant-ductility search and the memory of a 2,000,000-sample record.
+// Every figure is the median of REPEAT runs; the machine may be shared, so read the figures as
+// indications. Nothing here is a test: speed is measured here and never asserted in the test suite.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
