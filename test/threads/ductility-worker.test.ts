@@ -19,6 +19,7 @@ import { shared, ThreadTeam, workerScript } from '../../src/threads/team.js';
 const record = synthesizeRecord({ seed: 19, dtS: 0.01, durationS: 2.99 }); // invented, 300 samples
 const model = { kind: 'elastoplastic' } as const;
 const grid = { periodsS: [0.08, 0.4, 2], dampings: [0.05], model };
+
 /** One shared 32-bit integer. */
 function shared32(value: number): Int32Array {
   const array = new Int32Array(new SharedArrayBuffer(4));
