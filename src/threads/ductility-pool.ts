@@ -111,12 +111,8 @@ async function cellsOnTeam(
   work: CellWork,
   length: number,
 ): Promise<Float64Array> {
-  const { periodsS, dampings, roughness } = work.plan;
-  const count = periodsS.length * dampings.length;
-  const costs = Array.from({ length: count }, (_, cell) => {
-    const periodS = periodsS[cell % periodsS.length];
-    return periodS === 0 ? 0 : substepsFor(periodS, record.dtS, roughness);
-  });
+  const costs = cellCosts(work.plan, record.dtS);
+  const count = costs.length;
   const cells = costs.flatMap((cost, cell) => (cost > 0 ? [cell] : []));
   const order = new Int32Array(new SharedArrayBuffer(4 * cells.length));
   order.set(cells.sort((a, b) => costs[b] - costs[a] || a - b));
@@ -141,25 +137,60 @@ async function cellsOnTeam(
   return job.results;
 }
 
-/** Threads for a job of `cells` cells: `threads` (a whole number ≥ 1), at most one a cell. */
-function teamSize(threads: number, cells: number): number {
-  if (!Number.isInteger(threads) || threads < 1) {
+/** Each cell's sub-steps per record step (substepsFor), its cost; 0 for a rigid cell (T = 0). */
+function cellCosts(plan: DuctilityPlan | DemandPlan, dtS: number): number[] {
+  const { periodsS, roughness } = plan;
+  return Array.from({ length: periodsS.length * plan.dampings.length }, (_, cell) => {
+    const periodS = periodsS[cell % periodsS.length];
+    return periodS === 0 ? 0 : substepsFor(periodS, dtS, roughness);
+  });
+}
+
+/** Oscillator runs of one cell's strength search, about: 32.7 a cell on the bench's record. */
+const SEARCH_RUNS_PER_CELL = 33;
+
+/**
+ * Oscillator sub-steps (over the cells, runs × sub-steps per record step × samples; a search
+ * counted as SEARCH_RUNS_PER_CELL runs) from which `'auto'` deals a job out over all cores.
+ * Measured on the bench's 40,000-sample default grid: 22.6 s on one thread for 2.9·10⁹ such
+ * sub-steps (8 ns each; runs stop early), and a team of two threads starts and answers in about
+ * 80 ms, the price of some 10⁷ of them; the limit, some 0.4 s of work on one thread today, leaves
+ * room for a faster engine.
+ */
+export const DUCTILITY_PARALLEL_MIN_STEPS = 50_000_000;
+
+/**
+ * Threads for a job: `threads` if a number (a whole number ≥ 1), else (`'auto'`) all `cores` from
+ * DUCTILITY_PARALLEL_MIN_STEPS oscillator sub-steps and one below; at most one a cell with work.
+ */
+export function ductilityThreads(
+  plan: DuctilityPlan | DemandPlan,
+  record: Pick<GroundRecord, 'dtS' | 'accelMS2'>,
+  threads: number | 'auto',
+  cores = availableParallelism(),
+): number {
+  if (threads !== 'auto' && (!Number.isInteger(threads) || threads < 1)) {
     throw inputError(`the thread count must be a whole number ≥ 1, got ${threads}`);
   }
-  return Math.max(1, Math.min(threads, cells));
+  const costs = cellCosts(plan, record.dtS);
+  const cells = costs.filter((cost) => cost > 0).length;
+  const runs = 'ductilities' in plan ? SEARCH_RUNS_PER_CELL : 1 + plan.strengths.length;
+  const steps = runs * costs.reduce((sum, cost) => sum + cost, 0) * record.accelMS2.length;
+  const wanted = threads !== 'auto' ? threads : steps >= DUCTILITY_PARALLEL_MIN_STEPS ? cores : 1;
+  return Math.max(1, Math.min(wanted, cells));
 }
 
 /**
  * constantDuctilitySpectra, bit for bit (and its errors), on `threads` threads (this one
- * included) started for the call and closed after; 1 computes here alone.
+ * included; 'auto': ductilityThreads) started for the call and closed after; 1 computes here alone.
  */
 export async function ductilitySpectraOnThreads(
   record: GroundRecord,
   options: DuctilitySpectraOptions,
-  threads: number,
+  threads: number | 'auto',
 ): Promise<DuctilitySpectra> {
   const plan = planDuctilitySpectra(record, options);
-  const size = teamSize(threads, plan.dampings.length * plan.periodsS.filter((t) => t > 0).length);
+  const size = ductilityThreads(plan, record, threads);
   if (size === 1) return constantDuctilitySpectra(record, options);
   const team = new DuctilityPool(size);
   try {
@@ -170,16 +201,16 @@ export async function ductilitySpectraOnThreads(
 }
 
 /**
- * ductilityDemandSpectra, bit for bit (and its errors), on `threads` threads (this one included)
- * started for the call and closed after; 1 computes here alone.
+ * ductilityDemandSpectra, bit for bit (and its errors), on `threads` threads (this one included;
+ * 'auto': ductilityThreads) started for the call and closed after; 1 computes here alone.
  */
 export async function ductilityDemandOnThreads(
   record: GroundRecord,
   options: DemandSpectraOptions,
-  threads: number,
+  threads: number | 'auto',
 ): Promise<DuctilityDemandSpectra> {
   const plan = planDemandSpectra(record, options);
-  const size = teamSize(threads, plan.dampings.length * plan.periodsS.length);
+  const size = ductilityThreads(plan, record, threads);
   if (size === 1) return ductilityDemandSpectra(record, options);
   const team = new DuctilityPool(size);
   try {

@@ -12,10 +12,12 @@ import {
 } from '../../src/inelastic/ductility.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
 import {
+  DUCTILITY_PARALLEL_MIN_STEPS,
   type DuctilityJob,
   DuctilityPool,
   ductilityDemandOnThreads,
   ductilitySpectraOnThreads,
+  ductilityThreads,
   runDuctilityCells,
 } from '../../src/threads/ductility-pool.js';
 
@@ -131,6 +133,39 @@ describe('DuctilityPool', () => {
       rmSync(folder, { recursive: true, force: true });
     }
     expect(output.trim()).toBe('1 input');
+  });
+});
+
+describe('ductilityThreads', () => {
+  const plan = (periodsS: number[], dampings = [0.05]) => ({
+    model,
+    periodsS: Float64Array.from(periodsS),
+    dampings: Float64Array.from(dampings),
+    roughness: 0.3,
+  });
+  const samples = (n: number) => ({ dtS: 0.01, accelMS2: new Float64Array(n) });
+
+  it("takes a number as given, at most one thread a cell with work, and 'auto' by the job's size", () => {
+    const grid = plan([0, 0.05, 0.5, 5]);
+    const search = { ...grid, ductilities: [2] };
+    expect(ductilityThreads(search, samples(400), 2, 8)).toBe(2);
+    expect(ductilityThreads(search, samples(400), 16, 8)).toBe(3); // T = 0 has no work
+    expect(ductilityThreads(search, samples(400), 'auto', 8)).toBe(1);
+    // The limit in oscillator sub-steps: runs × Σ sub-steps per record step × samples.
+    // Sub-steps at Δt = 0.01 s, R = 0.3: max(1, ⌈120·Δt/T⌉, ⌈5·R²⌉) = 24, 3, 1 (substepsFor).
+    const perSample = 33 * (24 + 3 + 1);
+    const enough = Math.ceil(DUCTILITY_PARALLEL_MIN_STEPS / perSample);
+    expect(ductilityThreads(search, samples(enough), 'auto', 8)).toBe(3);
+    expect(ductilityThreads(search, samples(enough - 1), 'auto', 8)).toBe(1);
+    // A demand cell is one run and one a strength, a small fraction of a search.
+    const demand = { ...plan([0.05, 0.5, 5], [0.02, 0.05]), strengths: [{ ry: 2 }] };
+    expect(ductilityThreads(demand, samples(enough), 'auto', 8)).toBe(1);
+    expect(ductilityThreads(demand, samples(40 * enough), 'auto', 8)).toBe(6);
+  });
+
+  it('refuses a thread count that is not a whole number ≥ 1', () => {
+    for (const threads of [0, 1.5, Number.NaN])
+      expect(() => ductilityThreads(plan([1]) as never, samples(10), threads)).toThrow(/thread count/);
   });
 });
 
