@@ -102,7 +102,7 @@ async function demandOnTeam(team: ThreadTeam, record: GroundRecord, plan: Demand
 
 /**
  * Every cell of `work` on the team's threads. Costliest first: a cell's cost is about its sub-step
- * count (substepsFor: max(1, 120·Δt/T, …)), so the last cells claimed are short ones; rigid cells
+ * count (substepsFor: max(1, N(ζ)·Δt/T, …)), so the last cells claimed are short ones; rigid cells
  * (T = 0) have no work and are not dealt out.
  */
 async function cellsOnTeam(
@@ -137,12 +137,17 @@ async function cellsOnTeam(
   return job.results;
 }
 
+/** What the cost of a job's cells depends on: its grid, the record's roughness and its kind. */
+export type CellCostPlan = Pick<DuctilityPlan, 'periodsS' | 'dampings' | 'roughness'> &
+  (Pick<DuctilityPlan, 'ductilities'> | Pick<DemandPlan, 'strengths'>);
+
 /** Each cell's sub-steps per record step (substepsFor), its cost; 0 for a rigid cell (T = 0). */
-function cellCosts(plan: DuctilityPlan | DemandPlan, dtS: number): number[] {
-  const { periodsS, roughness } = plan;
-  return Array.from({ length: periodsS.length * plan.dampings.length }, (_, cell) => {
+function cellCosts(plan: CellCostPlan, dtS: number): number[] {
+  const { periodsS, dampings, roughness } = plan;
+  return Array.from({ length: periodsS.length * dampings.length }, (_, cell) => {
     const periodS = periodsS[cell % periodsS.length];
-    return periodS === 0 ? 0 : substepsFor(periodS, dtS, roughness);
+    const damping = dampings[Math.floor(cell / periodsS.length)];
+    return periodS === 0 ? 0 : substepsFor(periodS, damping, dtS, roughness);
   });
 }
 
@@ -164,7 +169,7 @@ export const DUCTILITY_PARALLEL_MIN_STEPS = 50_000_000;
  * DUCTILITY_PARALLEL_MIN_STEPS oscillator sub-steps and one below; at most one a cell with work.
  */
 export function ductilityThreads(
-  plan: DuctilityPlan | DemandPlan,
+  plan: CellCostPlan,
   record: Pick<GroundRecord, 'dtS' | 'accelMS2'>,
   threads: number | 'auto',
   cores = availableParallelism(),

@@ -1,13 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import {
-  type DemandPlan,
-  type DuctilityPlan,
   demandCell,
   demandCellLength,
   ductilityCell,
   ductilityCellLength,
 } from '../../src/inelastic/cells.js';
+import { planDemandSpectra, planDuctilitySpectra } from '../../src/inelastic/ductility.js';
 import { strengthCell, strengthsForDuctilities } from '../../src/inelastic/strength-search.js';
 import { yieldingPeak } from '../../src/inelastic/yielding.js';
 import { recordRoughness } from '../../src/oscillator/record-statistics.js';
@@ -18,14 +17,15 @@ const record = synthesizeRecord({ seed: 18, dtS: 0.01, durationS: 3.99 });
 const { accelMS2, dtS } = record;
 const model = { kind: 'elastoplastic' } as const;
 const roughness = recordRoughness(accelMS2);
-const periodsS = Float64Array.from([0, 0.3, 1.1]);
-const dampings = Float64Array.from([0.02, 0.05]);
+const periodsS = [0, 0.3, 1.1];
+const dampings = [0.02, 0.05];
 
 /** A results array of `cells` cells, every number NaN until a cell writes it. */
 const unwritten = (cells: number, length: number) => new Float64Array(cells * length).fill(Number.NaN);
 
 describe('ductilityCell', () => {
-  const plan: DuctilityPlan = { model, periodsS, dampings, ductilities: [1, 2, 5], roughness };
+  // The plan of ductility.ts: its elastic peaks u_o are the elastic engine's SD.
+  const plan = planDuctilitySpectra(record, { model, periodsS, dampings, ductilities: [1, 2, 5] });
   const length = ductilityCellLength(plan);
 
   it('writes the strength search of its own (damping, period) and nothing else', () => {
@@ -35,7 +35,7 @@ describe('ductilityCell', () => {
     const found = strengthsForDuctilities(
       accelMS2,
       dtS,
-      strengthCell(1.1, 0.05, model, dtS, roughness),
+      strengthCell(1.1, 0.05, model, dtS, roughness, plan.elasticSdM[5]),
       plan.ductilities,
     );
     const expected = [found.elasticPeakM, found.runs];
@@ -53,19 +53,20 @@ describe('ductilityCell', () => {
 });
 
 describe('demandCell', () => {
-  const base = { model, periodsS: periodsS.subarray(1), dampings, roughness };
+  const base = { model, periodsS: periodsS.slice(1), dampings };
 
   it('writes u_o, then u_y = u_o/R_y, μ, u_m and the yield events of each strength', () => {
-    const plan: DemandPlan = { ...base, strengths: [{ ry: 2 }, { ry: 5 }] };
+    const plan = planDemandSpectra(record, { ...base, ry: [2, 5] });
     const length = demandCellLength(plan);
     const results = unwritten(4, length);
     demandCell(accelMS2, dtS, plan, 1, results); // damping 0 (2%), period 1 (1.1 s)
     const cell = results.subarray(length, 2 * length);
     const options = { periodS: 1.1, damping: 0.02, model };
-    const uo = yieldingPeak(accelMS2, dtS, { ...options, yieldDisplacementM: Number.POSITIVE_INFINITY });
-    expect(cell[0]).toBe(uo.peakDisplacementM);
+    const uo = plan.elasticSdM[1]; // the elastic engine's SD (planDemandSpectra)
+    expect(uo).toBeGreaterThan(0);
+    expect(cell[0]).toBe(uo);
     for (const [k, ry] of [2, 5].entries()) {
-      const uyM = uo.peakDisplacementM / ry;
+      const uyM = uo / ry;
       const peak = yieldingPeak(accelMS2, dtS, { ...options, yieldDisplacementM: uyM });
       expect(Array.from(cell.subarray(1 + 4 * k, 5 + 4 * k))).toEqual([
         uyM,
@@ -81,7 +82,7 @@ describe('demandCell', () => {
   });
 
   it('takes a strength given as A_y in g as u_y = A_y·g/ω² (closed form: f_y = m·A_y, k = mω²)', () => {
-    const plan: DemandPlan = { ...base, strengths: [{ ayG: 0.1 }] };
+    const plan = planDemandSpectra(record, { ...base, ayG: [0.1] });
     const results = unwritten(4, demandCellLength(plan));
     demandCell(accelMS2, dtS, plan, 2, results); // damping 1 (5%), period 0 (0.3 s)
     const omega = (2 * Math.PI) / 0.3;

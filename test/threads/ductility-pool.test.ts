@@ -152,7 +152,8 @@ describe('ductilityThreads', () => {
     expect(ductilityThreads(search, samples(400), 16, 8)).toBe(3); // T = 0 has no work
     expect(ductilityThreads(search, samples(400), 'auto', 8)).toBe(1);
     // The limit in oscillator sub-steps: runs × Σ sub-steps per record step × samples.
-    // Sub-steps at Δt = 0.01 s, R = 0.3: max(1, ⌈120·Δt/T⌉, ⌈5·R²⌉) = 24, 3, 1 (substepsFor).
+    // Sub-steps at Δt = 0.01 s, R = 0.3, ζ = 5% (N = 120): max(1, ⌈N·Δt/T⌉, ⌈5·R²⌉) = 24, 3, 1
+    // (substepsFor).
     const perSample = 33 * (24 + 3 + 1);
     const enough = Math.ceil(DUCTILITY_PARALLEL_MIN_STEPS / perSample);
     expect(ductilityThreads(search, samples(enough), 'auto', 8)).toBe(3);
