@@ -4,21 +4,14 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { QuakesweepError } from '../../src/base/errors.js';
-import { type DuctilityPlan, ductilityCellLength } from '../../src/inelastic/cells.js';
-import {
-  constantDuctilitySpectra,
-  ductilityDemandSpectra,
-  planDuctilitySpectra,
-} from '../../src/inelastic/ductility.js';
+import { constantDuctilitySpectra, ductilityDemandSpectra } from '../../src/inelastic/ductility.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
 import {
   DUCTILITY_PARALLEL_MIN_STEPS,
-  type DuctilityJob,
   DuctilityPool,
   ductilityDemandOnThreads,
   ductilitySpectraOnThreads,
   ductilityThreads,
-  runDuctilityCells,
 } from '../../src/threads/ductility-pool.js';
 
 // Worker threads run the built library (dist/), which the global setup builds. Each (damping,
@@ -167,31 +160,5 @@ describe('ductilityThreads', () => {
   it('refuses a thread count that is not a whole number ≥ 1', () => {
     for (const threads of [0, 1.5, Number.NaN])
       expect(() => ductilityThreads(plan([1]) as never, samples(10), threads)).toThrow(/thread count/);
-  });
-});
-
-describe('runDuctilityCells', () => {
-  it('ends at the lowest failing cell, whatever the order, and skips the cells above it', () => {
-    // On this thread alone, claiming the failing cells from the top: cells 4 and 3 (T = 3 and 2 s)
-    // fail, in that order, then cell 2 (T = 1 s) succeeds; cells 8 and 9 (ζ = 5%) are skipped.
-    const plan: DuctilityPlan = planDuctilitySpectra(record, failing);
-    const length = ductilityCellLength(plan);
-    const cells = 10;
-    const order = Int32Array.from([4, 9, 3, 8, 2]);
-    const job: DuctilityJob = {
-      kind: 'ductility',
-      plan,
-      accelMS2: record.accelMS2,
-      dtS: record.dtS,
-      order,
-      counter: new Int32Array(1),
-      failed: Int32Array.from([cells]),
-      results: new Float64Array(cells * length),
-    };
-    runDuctilityCells(job);
-    expect(job.failed[0]).toBe(3);
-    expect(job.counter[0]).toBeGreaterThanOrEqual(order.length);
-    expect(job.results[2 * length]).toBeGreaterThan(0); // cell 2's elastic peak
-    for (const skipped of [8, 9]) expect(job.results[skipped * length]).toBe(0);
   });
 });

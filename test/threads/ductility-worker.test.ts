@@ -9,7 +9,7 @@ import {
   planDuctilitySpectra,
 } from '../../src/inelastic/ductility.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
-import type { DuctilityJob } from '../../src/threads/ductility-pool.js';
+import type { DuctilityJob } from '../../src/threads/ductility-job.js';
 import { shared, ThreadTeam, workerScript } from '../../src/threads/team.js';
 
 // The worker script of DuctilityPool (dist/, and its CLI bundle in dist/cli/workers/, both built
