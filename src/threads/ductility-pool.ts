@@ -105,18 +105,18 @@ function cellCosts(plan: CellCostPlan, dtS: number): number[] {
   });
 }
 
-/** Oscillator runs of one cell's strength search, about: 32.7 a cell on the bench's record. */
+/** Oscillator runs of one cell's strength search, about: 32 to 34 a cell on the bench's records. */
 const SEARCH_RUNS_PER_CELL = 33;
 
 /**
  * Oscillator sub-steps (over the cells, runs × sub-steps per record step × samples; a search
  * counted as SEARCH_RUNS_PER_CELL runs) from which `'auto'` deals a job out over all cores.
- * Measured on the bench's 40,000-sample default grid: 22.6 s on one thread for 2.9·10⁹ such
- * sub-steps (8 ns each; runs stop early), and a team of two threads starts and answers in about
- * 80 ms, the price of some 10⁷ of them; the limit, some 0.4 s of work on one thread today, leaves
- * room for a faster engine.
+ * Measured on the default grid (5%, 6 ductilities) of the bench's kind of record, 2 cores: about
+ * 1 ns a sub-step (runs stop early; 550 ms on one thread for 8,000 samples), a worker answering
+ * its first job in about 45 ms; two threads were no faster at 1,000 samples (7·10⁷ sub-steps,
+ * 100 ms) and faster from 2,000 (1.4·10⁸) on. Raise it if the engine gets faster again.
  */
-export const DUCTILITY_PARALLEL_MIN_STEPS = 50_000_000;
+export const DUCTILITY_PARALLEL_MIN_STEPS = 150_000_000;
 
 /**
  * Threads for a job: `threads` if a number (a whole number ≥ 1), else (`'auto'`) all `cores` from
