@@ -7,18 +7,14 @@ import {
   YIELDING_METHOD_NAME,
 } from '../../formats/ductility-json.js';
 import { ductilityDemandTable, ductilityTable } from '../../formats/ductility-table.js';
-import {
-  constantDuctilitySpectra,
-  type DuctilityDemandSpectra,
-  type DuctilitySpectra,
-  ductilityDemandSpectra,
-} from '../../inelastic/ductility.js';
+import type { DuctilityDemandSpectra, DuctilitySpectra } from '../../inelastic/ductility.js';
 import type { Hysteresis } from '../../inelastic/hysteresis.js';
 import { referenceReductions } from '../../inelastic/r-mu-t.js';
 import { MAX_OSCILLATORS } from '../../oscillator/grid.js';
 import { ductilityFigures } from '../../plot/ductility-figure.js';
 import type { PeriodAxis } from '../../plot/period-axis.js';
 import type { GroundRecord } from '../../record/record.js';
+import { ductilityDemandOnThreads, ductilitySpectraOnThreads } from '../../threads/ductility-pool.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { FREQUENCIES_HELP, type GridCliOptions, gridFromOptions } from '../options/grid.js';
@@ -101,7 +97,7 @@ export async function runDuctility(
   outputFormat(options, 'json or csv');
   const axis = svgAxisFromOptions(options);
   const record = applyProcessing(await loadRecord(source, options), options);
-  const result = computeSpectra(record, request, threads);
+  const result = await computeSpectra(record, request, threads);
   await writeProduct([source], options, {
     json: () =>
       'ductility' in result ? ductilityToJson(result.ductility) : ductilityDemandToJson(result.demand),
@@ -143,24 +139,17 @@ function requestFromOptions(options: DuctilityCliOptions, ductilityGiven: boolea
   return { periodsS, dampings: grid.dampings, model, ductilities, strengths };
 }
 
-/**
- * The one library call of the command. The search runs on this thread for now; the threaded
- * variant of the search takes `threads` here.
- */
-function computeSpectra(
+/** The one library call of the command, its (damping, period) cells dealt out over `threads`. */
+async function computeSpectra(
   record: GroundRecord,
   request: DuctilityRequest,
-  _threads: number | 'auto',
-): { ductility: DuctilitySpectra } | { demand: DuctilityDemandSpectra } {
+  threads: number | 'auto',
+): Promise<{ ductility: DuctilitySpectra } | { demand: DuctilityDemandSpectra }> {
   const { periodsS, dampings, model, strengths } = request;
-  if (strengths === undefined)
-    return {
-      ductility: constantDuctilitySpectra(record, {
-        periodsS,
-        dampings,
-        model,
-        ductilities: request.ductilities,
-      }),
-    };
-  return { demand: ductilityDemandSpectra(record, { periodsS, dampings, model, ...strengths }) };
+  if (strengths === undefined) {
+    const options = { periodsS, dampings, model, ductilities: request.ductilities };
+    return { ductility: await ductilitySpectraOnThreads(record, options, threads) };
+  }
+  const options = { periodsS, dampings, model, ...strengths };
+  return { demand: await ductilityDemandOnThreads(record, options, threads) };
 }
