@@ -283,6 +283,28 @@ for (const kernel of ['wasm', 'js']) {
     ms: all.ms,
     note: `×${(alone.ms / all.ms).toFixed(2)} (target < 5000 ms); threads started per call; CPU ${all.cpuMs.toFixed(0)} ms, all threads`,
   });
+  // The whole command on the same record and grid (its defaults: the grid above), as a child
+  // process: reading the CSV, the search, the JSON.
+  const path = join(folder, 'ductility.csv');
+  writeCsv(path, record);
+  for (const threads of ['1', String(cores)]) {
+    const args = [
+      cli,
+      'ductility',
+      path,
+      '--units',
+      'g',
+      '--threads',
+      threads,
+      '--out',
+      join(folder, 'ductility.json'),
+    ];
+    const runs = Array.from({ length: repeat }, () => childMs(args));
+    row('ductility CLI', `quakesweep ductility (defaults) --threads ${threads}`, {
+      ms: median(runs),
+      note: `peak ${peakKb(args) ?? '?'} KB`,
+    });
+  }
 }
 
 // Memory: a 2,000,000-sample record with the default grid, through the CLI.
