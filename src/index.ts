@@ -108,5 +108,10 @@ export {
   type SpectrumOptions,
 } from './spectrum/spectrum.js';
 export { fitTarget, type TargetFit, targetOverlay, targetRecord } from './spectrum/target.js';
+export {
+  DuctilityPool,
+  ductilityDemandOnThreads,
+  ductilitySpectraOnThreads,
+} from './threads/ductility-pool.js';
 export { type ParallelRotDOptions, RotDPool, rotDSpectraParallel } from './threads/rotd-pool.js';
 export { type ParallelSweepOptions, SweepPool, sweepOscillatorsParallel } from './threads/sweep-pool.js';
