@@ -43,9 +43,11 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const context = { durationS, prewarp, roughness, stepsPerPeriod: options.stepsPerPeriod };
   const runOf = (periodS: number, damping: number) => {
     const substeps = substepCount(method, periodS, dtS, { ...context, damping });
-    return executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod);
+    return executionPlan(substeps, periodS, dtS, roughness, options.stepsPerPeriod, damping);
   };
-  // Pre-warped, the rule does not depend on the damping: once a period.
+  // Pre-warped, the rule depends on the damping only through linear acceleration's record rule
+  // and the fastest pole, both above ζ = 1/2 (substeps.ts): once a period for the others.
+  const dampingFree = (damping: number) => damping <= 0.5;
   const runs = prewarp
     ? Array.from(periodsS, (periodS) => (periodS === 0 ? undefined : runOf(periodS, 0)))
     : [];
@@ -55,7 +57,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
     for (let p = 0; p < periodsS.length; p++) {
       const periodS = periodsS[p];
       if (periodS === 0) continue;
-      const run = runs[p] ?? runOf(periodS, dampings[d]);
+      const run = (dampingFree(dampings[d]) ? runs[p] : undefined) ?? runOf(periodS, dampings[d]);
       const index = d * periodsS.length + p;
       const planned = { index, periodS, damping: dampings[d], substeps: run.steps, composed: run.composed };
       const bucket = buckets.get(run.steps);

@@ -136,8 +136,10 @@ export function prewarpedOscillator(
     const c = newmarkCoefficients(w, z, h, 0.5, 1 / 6);
     return [c.uu + c.vv - trace, c.uu * c.vv - c.uv * c.vu - determinant];
   };
+  // Stopped where a step no longer lowers the residual: for very small ωh the finite differences
+  // sink into rounding, and a Newton step on them would throw the pair away from the start.
+  let [f1, f2] = residual(omega, zeta);
   for (let iteration = 0; iteration < 30; iteration++) {
-    const [f1, f2] = residual(omega, zeta);
     if (Math.abs(f1) < 1e-15 && Math.abs(f2) < 1e-15) break;
     const dw = omega * 1e-7;
     const dz = Math.max(zeta, 1e-3) * 1e-7;
@@ -149,8 +151,14 @@ export function prewarpedOscillator(
     const j22 = (b2 - f2) / dz;
     const det = j11 * j22 - j12 * j21;
     if (det === 0) break;
-    omega -= (j22 * f1 - j12 * f2) / det;
-    zeta -= (-j21 * f1 + j11 * f2) / det;
+    const nextOmega = omega - (j22 * f1 - j12 * f2) / det;
+    const nextZeta = zeta - (-j21 * f1 + j11 * f2) / det;
+    const [g1, g2] = residual(nextOmega, nextZeta);
+    if (!(Math.abs(g1) + Math.abs(g2) < Math.abs(f1) + Math.abs(f2))) break;
+    omega = nextOmega;
+    zeta = nextZeta;
+    f1 = g1;
+    f2 = g2;
   }
   return { omegaRadS: omega, damping: zeta };
 }

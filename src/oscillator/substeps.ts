@@ -15,26 +15,61 @@ import type { Method } from './recurrence.js';
  */
 export const MIN_STEPS_PER_PERIOD = 10;
 
+/** The share of the 0.5% that the record rule leaves to how a Newmark method takes in the excitation. */
+export const RECORD_ERROR = 0.001;
+
 /**
  * Each method's rule: `prewarped` N; the textbook rule's K and N₀ (`k`, `baseSteps`); `recordFactor`
- * F, for ⌈F·R²⌉ sub-steps per record step whatever the period (R the roughness). Average
- * acceleration takes in the excitation as the mean of its ends, an error of order (Ωh)²: on sines
- * of 5–24.5 Hz at Δt = 0.02 s its long-period peaks were 12–40% off with no sub-steps, within 0.4%
- * with ⌈5R²⌉. The others take in the linear interpolation exactly; piecewise-exact takes ⌈R²/2⌉
- * so that its Hermite refinement follows content near the Nyquist frequency.
+ * F, for ⌈F·ρ⌉ sub-steps per record step whatever the period, ρ = inputFrequency(R) (R the
+ * roughness; see recordSubsteps for the derivation of each F).
  */
 export const SUBSTEP_RULE: Readonly<
   Record<Method, { prewarped: number; k: number; baseSteps: number; recordFactor: number }>
 > = {
-  'newmark-average': { prewarped: 66, k: 2100, baseSteps: 71, recordFactor: 5 },
-  'newmark-linear': { prewarped: 38, k: 1050, baseSteps: 39, recordFactor: 0 },
+  'newmark-average': { prewarped: 66, k: 2100, baseSteps: 71, recordFactor: newmarkRecordFactor() },
+  'newmark-linear': { prewarped: 38, k: 1050, baseSteps: 39, recordFactor: newmarkRecordFactor() },
   'piecewise-exact': {
     prewarped: MIN_STEPS_PER_PERIOD,
     k: 0,
     baseSteps: MIN_STEPS_PER_PERIOD,
-    recordFactor: 0.5,
+    recordFactor: 1 / 1.25,
   },
 };
+
+/** F = 1/√(12·RECORD_ERROR) ≈ 9.13: (Ωh)²/12 ≤ RECORD_ERROR when h ≤ dt/(F·Ωdt) (see recordSubsteps). */
+function newmarkRecordFactor(): number {
+  return 1 / Math.sqrt(12 * RECORD_ERROR);
+}
+
+/**
+ * ρ = R·√(1 + R²/2), a bound on Ω·dt for the fastest content a record of roughness R carries
+ * (recordRoughness in record-statistics.ts). For a sine at Ω, R = 2 sin(Ωdt/2), so
+ * Ωdt = 2 arcsin(R/2) ≤ ρ (equal to first order, π against ρ = √12 at R = 2). The bound is
+ * taken larger than 2 arcsin(R/2) near R = 2 because there the linearly interpolated record is a
+ * zigzag whose kinks carry content above Ω: for a zigzag of amplitude A the displacement it drives
+ * in a long-period oscillator peaks at A·dt²/12 and its acceleration at A, so its (Ωdt)² in the
+ * error below is effectively dt²·A/(A·dt²/12) = 12 = ρ².
+ */
+export function inputFrequency(roughness: number): number {
+  const r = Math.min(roughness, 2);
+  return r * Math.sqrt(1 + (r * r) / 2);
+}
+
+/**
+ * A bound on |λ_max|/ω, the oscillator's fastest pole over its natural frequency: 1 up to ζ = 1/2,
+ * 2ζ above (≥ ζ + √(ζ² − 1), the overdamped oscillator's fast mode, which decays in
+ * 1/(ω(ζ + √(ζ² − 1))) and must be stepped as finely as a natural period is at light damping; the
+ * steps-per-period rule is multiplied by it). Taken as 2ζ from ζ = 1/2 rather than from critical
+ * damping: with the bare rule the worst errors were at ζ = 1 (0.36–0.48% in SV).
+ */
+export function fastestPoleRatio(damping: number): number {
+  return Math.max(1, 2 * damping);
+}
+
+/** √max(1, 2ζ) for linear acceleration, whose error in the damping force grows as 2ζ (see recordSubsteps); 1 otherwise. */
+export function dampingScale(method: Method, damping: number): number {
+  return method === 'newmark-linear' ? Math.sqrt(Math.max(1, 2 * damping)) : 1;
+}
 
 export interface SubstepContext {
   damping: number;
@@ -48,9 +83,33 @@ export interface SubstepContext {
   stepsPerPeriod?: number;
 }
 
-/** Sub-steps per record step that `method` needs whatever the period (see SUBSTEP_RULE). */
-export function recordSubsteps(method: Method, roughness: number): number {
-  return Math.max(1, Math.ceil(SUBSTEP_RULE[method].recordFactor * roughness * roughness - 1e-9));
+/**
+ * Sub-steps per record step that `method` needs whatever the period, for a record of roughness R
+ * (ρ = inputFrequency(R) bounds Ωdt, Ω the fastest content of the record), derived from each
+ * method's error for the forced response:
+ * - Newmark average acceleration takes in the excitation as the mean of each sub-step's ends. For
+ *   content well above the natural frequency (the forced, mass-like part u'' ≈ −a_g), one sub-step
+ *   h gives u_{n+1} = u_n + h·v_n + h²(a_n + a_{n+1})/4 where the exact value for a linear
+ *   acceleration is u_n + h·v_n + h²(2a_n + a_{n+1})/6, v being exact (the trapezoidal rule): an error
+ *   of h²(a_{n+1} − a_n)/12 per sub-step, which telescopes to h²·a(t)/12. On a forced response
+ *   u = a_g/Ω² that is a relative error −(Ωh)²/12 (the issue's measured −1.6% for 3.5 Hz at 0.02 s,
+ *   h = dt). Keeping it below RECORD_ERROR = 0.1% asks h ≤ dt/(F·ρ), F = 1/√(12·0.001) ≈ 9.13:
+ *   k = ⌈F·ρ⌉ (3 for the 3.5 Hz sine at 0.02 s, R = 0.44; 32 for content at the Nyquist frequency).
+ *   The earlier ⌈5R²⌉, calibrated on broadband records, gave k = 1 there, and is below ⌈F·ρ⌉ for
+ *   every R. These sub-steps are composed (executionPlan), so they cost almost nothing.
+ * - Newmark linear acceleration takes in a linear excitation exactly for the mass-like part, but
+ *   not the damping force 2ζωu', whose forced part is of relative size 2ζω/Ω and varies over the
+ *   sub-step as the excitation does: an error about 2ζ(ω/Ω)(Ωh)²/12, at most (Ωh)²/12 for ζ ≤ 0.5
+ *   (ω ≤ Ω; above, the period rule holds the step), and 2ζ times that above: k = ⌈F·ρ·√max(1, 2ζ)⌉.
+ * - Piecewise-exact is exact at the steps, so only the Hermite search between them needs the
+ *   record's fastest content resolved; its error on sines up to the Nyquist frequency at 0.02 s was
+ *   0.9%, 0.2% and 0.1% of the peak with Ωh = π, π/2 and π/3 (measured against the exact
+ *   reference, test/reference/exact-response.ts), so Ωh ≤ 1.25: k = ⌈ρ/1.25⌉ (3 at the Nyquist frequency).
+ */
+export function recordSubsteps(method: Method, roughness: number, damping = 0): number {
+  const needed =
+    SUBSTEP_RULE[method].recordFactor * inputFrequency(roughness) * dampingScale(method, damping);
+  return Math.max(1, Math.ceil(needed - 1e-9));
 }
 
 /** Steps per natural period the rule asks of `method` for this oscillator. */
@@ -64,14 +123,15 @@ export function stepsPerPeriod(method: Method, periodS: number, context: Substep
     );
     rule = Math.max(MIN_STEPS_PER_PERIOD, Math.sqrt(k * cyclesRemembered + baseSteps * baseSteps));
   }
-  return Math.max(rule, context.stepsPerPeriod ?? 0);
+  const scale = fastestPoleRatio(context.damping) * dampingScale(method, context.damping);
+  return Math.max(rule * scale, context.stepsPerPeriod ?? 0);
 }
 
 /** How many equal sub-steps each record step is divided into for an oscillator of period T. */
 export function substepCount(method: Method, periodS: number, dtS: number, context: SubstepContext): number {
   if (periodS <= 0) return 1;
   return Math.max(
-    recordSubsteps(method, context.roughness ?? 0),
+    recordSubsteps(method, context.roughness ?? 0, context.damping),
     Math.ceil((dtS * stepsPerPeriod(method, periodS, context)) / periodS - 1e-9),
   );
 }
@@ -79,11 +139,10 @@ export function substepCount(method: Method, periodS: number, dtS: number, conte
 /**
  * How a sweep runs `substeps` sub-steps per record step: as `steps` executed steps, each composing
  * `composed` sub-steps (composeSteps), steps × composed ≥ substeps. The Hermite refinement between
- * executed steps needs MIN_STEPS_PER_PERIOD a period and ⌈R²⌉ a record step (R the roughness);
- * only the sub-steps beyond that are composed. Against the exact method at 400 steps a period
- * (stochastic records at 0.02 and 0.005 s, sines of 5–24.5 Hz at 0.02 s) the worst errors were
- * 0.24% and 0.41% for Newmark average, 0.26% and 0.24% for linear; ⌈R²/2⌉ took the sines to 0.48%.
- * The user's `stepsPerPeriod` are executed, not composed: they ask for a finer peak search too.
+ * executed steps needs MIN_STEPS_PER_PERIOD a period (times fastestPoleRatio(ζ) above ζ = 1/2
+ * damping) and, a record step, ⌈R²⌉ and piecewise-exact's ⌈ρ/1.25⌉ (recordSubsteps; R the
+ * roughness); only the sub-steps beyond that are composed. The user's `stepsPerPeriod` are
+ * executed, not composed: they ask for a finer peak search too.
  */
 export function executionPlan(
   substeps: number,
@@ -91,10 +150,13 @@ export function executionPlan(
   dtS: number,
   roughness: number,
   stepsPerPeriod = 0,
+  damping = 0,
 ): { steps: number; composed: number } {
+  const perPeriod = Math.max(MIN_STEPS_PER_PERIOD * fastestPoleRatio(damping), stepsPerPeriod);
   const hermite = Math.max(
-    Math.max(1, Math.ceil(roughness * roughness - 1e-9)),
-    Math.ceil((dtS * Math.max(MIN_STEPS_PER_PERIOD, stepsPerPeriod)) / periodS - 1e-9),
+    Math.ceil(roughness * roughness - 1e-9),
+    recordSubsteps('piecewise-exact', roughness),
+    Math.ceil((dtS * perPeriod) / periodS - 1e-9),
   );
   const steps = Math.min(substeps, hermite);
   return { steps, composed: Math.ceil(substeps / steps) };

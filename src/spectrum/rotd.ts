@@ -216,6 +216,8 @@ function oscillatorPeaks(
     periodS,
     dtS,
     roughness,
+    0,
+    damping,
   );
   const substeps = run.steps;
   const h = dtS / substeps;
