@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
+  dampingScale,
   executionPlan,
+  fastestPoleRatio,
+  inputFrequency,
   MIN_STEPS_PER_PERIOD,
   recordSubsteps,
   SUBSTEP_RULE,
@@ -39,13 +42,39 @@ describe('sub-steps per record step', () => {
     expect(substepCount('newmark-linear', 0.038, 0.01, context)).toBe(10); // 10 exactly, not 11
   });
 
-  it('for rough records: ⌈5R²⌉ for average acceleration, none for linear, ⌈R²/2⌉ for piecewise-exact', () => {
-    expect(recordSubsteps('newmark-average', 0.62)).toBe(2); // 5 × 0.3844 = 1.92
-    expect(recordSubsteps('newmark-average', 2)).toBe(20);
-    expect(recordSubsteps('newmark-linear', 2)).toBe(1);
-    expect(recordSubsteps('piecewise-exact', 2)).toBe(2);
+  it('for rough records: ⌈9.13·ρ⌉ for Newmark, ⌈ρ/1.25⌉ for piecewise-exact, ρ = R√(1 + R²/2)', () => {
+    // The derivation in recordSubsteps: (Ωh)²/12 ≤ 0.1% asks h ≤ dt/(ρ/√0.012).
+    expect(SUBSTEP_RULE['newmark-average'].recordFactor).toBeCloseTo(1 / Math.sqrt(0.012), 12);
+    expect(inputFrequency(2)).toBeCloseTo(Math.sqrt(12), 12); // the zigzag at the Nyquist frequency
+    expect(inputFrequency(0.1)).toBeCloseTo(0.1 * Math.sqrt(1.005), 12);
+    // A sine at Ω: R = 2 sin(Ωdt/2), and ρ is never below Ωdt = 2 arcsin(R/2).
+    for (let r = 0.05; r <= 2; r += 0.05)
+      expect(inputFrequency(r)).toBeGreaterThanOrEqual(2 * Math.asin(r / 2));
+    expect(recordSubsteps('newmark-average', 0.62)).toBe(7); // 9.13 × 0.677 = 6.18
+    expect(recordSubsteps('newmark-average', 2)).toBe(32); // 9.13 × 3.46 = 31.6
+    expect(recordSubsteps('newmark-linear', 2)).toBe(32);
+    expect(recordSubsteps('newmark-linear', 2, 2)).toBe(64); // × √(2ζ) = 2
+    expect(recordSubsteps('newmark-average', 2, 2)).toBe(32);
+    expect(recordSubsteps('piecewise-exact', 2)).toBe(3); // 3.46 / 1.25 = 2.77
     expect(recordSubsteps('newmark-average', 0)).toBe(1);
-    expect(substepCount('newmark-average', 10, 0.02, { ...context, roughness: 2 })).toBe(20);
+    expect(substepCount('newmark-average', 10, 0.02, { ...context, roughness: 2 })).toBe(32);
+    // The ramped 3.5 Hz sine at 0.02 s (R = 0.436): 5 sub-steps, where ⌈5R²⌉ gave 1.
+    expect(recordSubsteps('newmark-average', 2 * Math.sin(Math.PI * 3.5 * 0.02))).toBe(5);
+  });
+});
+
+describe('high damping', () => {
+  it('multiplies every steps-per-period count by 2ζ above ζ = 1/2 (the fastest pole), linear acceleration by √(2ζ) more', () => {
+    expect(fastestPoleRatio(0.5)).toBe(1);
+    expect(fastestPoleRatio(2)).toBe(4);
+    for (const z of [1.01, 2, 5, 10])
+      expect(fastestPoleRatio(z)).toBeGreaterThanOrEqual(z + Math.sqrt(z * z - 1));
+    expect(stepsPerPeriod('newmark-average', 1, { damping: 2, durationS: 20 })).toBe(66 * 4);
+    expect(stepsPerPeriod('newmark-linear', 1, { damping: 2, durationS: 20 })).toBe(38 * 4 * 2);
+    expect(stepsPerPeriod('piecewise-exact', 1, { damping: 0.3, durationS: 20 })).toBe(10);
+    expect(dampingScale('newmark-average', 5)).toBe(1);
+    // The Hermite search too: 10 × 4 steps a period of 0.01 s at 0.01 s.
+    expect(executionPlan(400, 0.01, 0.01, 0.3, 0, 2)).toEqual({ steps: 40, composed: 10 });
   });
 });
 
