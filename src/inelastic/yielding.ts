@@ -1,5 +1,6 @@
 import { usageError } from '../base/errors.js';
 import { recordRoughness } from '../oscillator/record-statistics.js';
+import { executedStepCoefficients } from '../oscillator/recurrence.js';
 import { checkHysteresis, type Hysteresis, postYieldRatio } from './hysteresis.js';
 
 /**
@@ -85,7 +86,7 @@ export function substepsFor(periodS: number, damping: number, dtS: number, rough
  * its velocity reaches zero) and the rest of it is stepped on the new branch, so the result
  * converges with the step. The peak between steps is taken from the step's quadratic motion.
  * An elastic record step that no sub-step of can yield or pass the peak so far (an energy bound)
- * is taken whole, its n sub-steps composed into one (elasticRecordStep): the same numbers, five
+ * is taken whole, its n sub-steps composed into one (executedStepCoefficients, not pre-warped): the same numbers, five
  * times faster on the default grid, since most steps of a search run are such steps.
  * The recurrence is the textbook one, not pre-warped as the elastic engine's: a warped stiffness
  * moves the yield force or the yield displacement by as much as the period error it removes, and
@@ -124,15 +125,19 @@ export function yieldingPeak(accelMS2: Float64Array, dtS: number, options: Yield
   let peak = 0;
   let events = 0;
   const last = accelMS2.length - 1;
+  // n elastic sub-steps composed into one record step (the same map the elastic engine composes):
+  // s and v at its end from s, v and the ground acceleration at its ends.
   const whole =
-    n > 1 && options.wholeSteps !== false ? elasticRecordStep(n, stepS, stiffness, viscous) : undefined;
+    n > 1 && options.wholeSteps !== false
+      ? executedStepCoefficients('newmark-average', omega, damping, dtS, n, false)
+      : undefined;
   const centre = alpha / (1 - alpha);
   for (let i = 0; i < last; i++) {
     const ag0 = accelMS2[i];
     const ag1 = accelMS2[i + 1];
     if (whole !== undefined && side === 0) {
       // An elastic record step that can neither yield nor pass the peak so far is stepped whole
-      // (elasticRecordStep): the same n sub-steps, composed. The spring's motion is the ramp's
+      // (executedStepCoefficients): the same n sub-steps, composed. The spring's motion is the ramp's
       // quasi-static response q(t) = Q + Q'·t plus a free motion whose energy norm
       // √(d² + (d'/ω)²) the average-acceleration recurrence never increases, so every sub-step's
       // spring lies within r of the ramp's ends.
@@ -147,8 +152,8 @@ export function yieldingPeak(accelMS2: Float64Array, dtS: number, options: Yield
       const reach = Math.max(Math.abs(rampStart - c), Math.abs(rampEnd - c)) + r;
       const far = Math.abs(offset) + Math.max(Math.abs(rampStart), Math.abs(rampEnd)) + r;
       if (reach < uy * ELASTIC_MARGIN && far * PEAK_MARGIN < peak) {
-        const sNew = whole[0] * s + whole[1] * v + whole[2] * ag0 + whole[3] * ag1;
-        v = whole[4] * s + whole[5] * v + whole[6] * ag0 + whole[7] * ag1;
+        const sNew = whole.uu * s + whole.uv * v + whole.up0 * ag0 + whole.up1 * ag1;
+        v = whole.vu * s + whole.vv * v + whole.vp0 * ag0 + whole.vp1 * ag1;
         s = sNew;
         u = offset + sNew;
         a = -ag1 - viscous * v - stiffness * sNew;
@@ -226,40 +231,6 @@ export function yieldingPeak(accelMS2: Float64Array, dtS: number, options: Yield
 const ELASTIC_MARGIN = 1 - 1e-9;
 /** A whole step's bound on |u| is raised by this before it is compared with the peak so far. */
 const PEAK_MARGIN = 1.01;
-
-/**
- * n elastic average-acceleration sub-steps of length h composed into one record step, as the
- * coefficients of (s, v) at its end in (s, v) at its start and the ground acceleration at its ends:
- * [s·s, s·v, s·ag0, s·ag1, v·s, v·v, v·ag0, v·ag1]. Found by stepping the four unit cases.
- */
-function elasticRecordStep(n: number, h: number, stiffness: number, viscous: number): Float64Array {
-  const A = 4 / (h * h) + (2 * viscous) / h;
-  const pivot = 1 / (A + stiffness);
-  const whole = new Float64Array(8);
-  const cases = [
-    [1, 0, 0, 0],
-    [0, 1, 0, 0],
-    [0, 0, 1, 0],
-    [0, 0, 0, 1],
-  ];
-  cases.forEach(([s0, v0, ag0, ag1], column) => {
-    let s = s0;
-    let v = v0;
-    let a = -ag0 - viscous * v - stiffness * s;
-    for (let j = 0; j < n; j++) {
-      const ag = ag0 + ((ag1 - ag0) * (j + 1)) / n;
-      const B = ag - (4 / h) * v - a - viscous * v;
-      const du = -(B + stiffness * s) * pivot;
-      const vNew = (2 / h) * du - v;
-      a = (4 / (h * h)) * (du - h * v) - a;
-      v = vNew;
-      s += du;
-    }
-    whole[column] = s;
-    whole[4 + column] = v;
-  });
-  return whole;
-}
 
 /** The ground acceleration `substeps` sub-steps into a record step. */
 function agEnd(ag0: number, slope: number, substeps: number): number {
