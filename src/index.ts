@@ -74,6 +74,7 @@ export { type SynthOptions, synthesizeRecord } from './record/synth.js';
 export { assembleReport, type ReportRequest } from './report/assemble.js';
 export { type ReportInput, renderReport } from './report/report.js';
 export { asce722MultiPeriodSpectrum, asce722TwoPeriodSpectrum } from './spectrum/asce722.js';
+export { broadenByEvaluation, broadenSpectrum } from './spectrum/broaden.js';
 export { compareDamping, newmarkHallFactors } from './spectrum/damping.js';
 export {
   asce716Spectrum,
@@ -83,7 +84,12 @@ export {
   ec8Spectrum,
 } from './spectrum/design.js';
 export { readSpectrumTable, tableSpectrum } from './spectrum/design-table.js';
-export { broadenSpectrum, floorRecord, floorSpectrum } from './spectrum/floor.js';
+export {
+  FLOOR_METHOD_DESCRIPTION,
+  floorCascadeSpectrum,
+  floorRecord,
+  floorSpectrum,
+} from './spectrum/floor.js';
 export {
   type CombinedSpectrum,
   combineSpectra,

@@ -1,7 +1,6 @@
 import { CAUTION } from '../base/caution.js';
 import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
-import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import type { BuildingMode } from '../spectrum/floor.js';
+import { type BuildingMode, FLOOR_METHOD_DESCRIPTION } from '../spectrum/floor.js';
 import { type FloorSpectrumSet, recordLabels } from '../spectrum/floor-set.js';
 import type { SpectrumCurve } from '../spectrum/spectrum.js';
 import { broadeningToJson, buildingToJson, floorAssumptions } from './floor.js';
@@ -32,9 +31,8 @@ function combinationLine(set: FloorSpectrumSet): string {
  * The assumptions of a set of floor spectra: those of one floor spectrum (for the coarsest time
  * step, so that its sampling warning is not missed), then how the set is combined.
  */
-export function floorSetAssumptions(set: FloorSpectrumSet, building: BuildingMode): string[] {
-  const coarsest = set.members.reduce((a, b) => (b.floor.dtS > a.floor.dtS ? b : a));
-  return [...floorAssumptions(coarsest, building, coarsest.floor.dtS), combinationLine(set)];
+export function floorSetAssumptions(set: FloorSpectrumSet): string[] {
+  return [...floorAssumptions(set.members[0]), combinationLine(set)];
 }
 
 /** For each damping and period, the label of the record whose PSA is the envelope's (the first such). */
@@ -52,17 +50,13 @@ function governing(set: FloorSpectrumSet, labels: string[]): string[][] {
  * then "mean" and "envelope" with the same curves (the envelope naming the record that governs
  * each period's PSA), the building, the broadening and the assumptions.
  */
-export function floorSetToJson(
-  set: FloorSpectrumSet,
-  building: BuildingMode & { method: Method },
-  assumptions: string[],
-) {
+export function floorSetToJson(set: FloorSpectrumSet, building: BuildingMode, assumptions: string[]) {
   const labels = recordLabels(set.members.map((m) => m.spectrum.record));
   const by = governing(set, labels);
   return {
     caution: CAUTION,
     method: set.method,
-    method_description: METHOD_DESCRIPTIONS[set.method],
+    method_description: FLOOR_METHOD_DESCRIPTION,
     periods_s: Array.from(set.periodsS),
     frequencies_hz: frequenciesHz(set.periodsS),
     building: buildingToJson(building),
@@ -169,10 +163,10 @@ export function floorSetTable(set: FloorSpectrumSet, building: BuildingMode, ass
     `records   ${n} ground records through the same building`,
     ...set.members.map(
       (m, i) =>
-        `  ${labels[i]} (${m.spectrum.record.source}), ground ${pgaText(set.grounds[i].pgaMS2)}; floor ${pgaText(m.floor.pgaMS2)}`,
+        `  ${labels[i]} (${m.spectrum.record.source}), ground ${pgaText(set.grounds[i].pgaMS2)}; floor ${pgaText(m.unbroadened.record.pgaMS2)}`,
     ),
     `building  T_b ${building.periodS} s, ζ_b ${building.damping}, Γφ ${building.modalFactor}`,
-    `method    ${METHOD_DESCRIPTIONS[set.method]}`,
+    `method    ${FLOOR_METHOD_DESCRIPTION}`,
     '',
     [''.padEnd(first), alignRight(heading, widths.slice(1))].join(' '),
     ...table,

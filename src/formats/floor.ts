@@ -1,28 +1,27 @@
 import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
-import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import type { BuildingMode, FloorSpectra } from '../spectrum/floor.js';
+import { type BuildingMode, FLOOR_METHOD_DESCRIPTION, type FloorSpectra } from '../spectrum/floor.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { assumptionLines, columnsByDamping, periodTable, pgaText, terminalText } from './layout.js';
 import { spectrumToJson, toG } from './spectrum-json.js';
 
-export function floorAssumptions(result: FloorSpectra, building: BuildingMode, dtS: number): string[] {
+export function floorAssumptions(result: FloorSpectra): string[] {
   const out = [
     "Building idealised by its fundamental mode: q'' + 2ζ_b ω_b q' + ω_b² q = −a_g; floor absolute acceleration " +
       "a_g + Γφ·q''. Higher modes, soil–structure interaction, nonlinear building response and the equipment's " +
       'feedback on the floor are not represented.',
-    'Floor acceleration sampled at the record’s own times; the component oscillators take it as linear between samples.',
-    'Component spectra of the floor record by the same sweep as `quakesweep spectrum`.',
+    'Component spectra from the cascade: the building mode and each component oscillator stepped together, exactly ' +
+      'for the ground record linear between samples (matrix exponential of the joint system, Van Loan 1978), so the ' +
+      'floor motion is never sampled and re-interpolated; peaks by cubic Hermite search between sub-steps, under ' +
+      'the accuracy rule of `quakesweep spectrum`. Floor PGA (PSA at T = 0): the peak over continuous time.',
   ];
-  if (building.periodS < 10 * dtS) {
-    out.push(
-      `T_b = ${building.periodS} s is under 10 record steps (${dtS} s): the floor history is coarsely sampled; resample the record finer.`,
-    );
-  }
+  const dense = result.dense;
   out.push(
-    result.broadening === null
+    result.broadening === null || dense === null
       ? 'Peaks not broadened (--broaden to widen them for uncertain building frequencies).'
       : `Peaks broadened (US NRC Regulatory Guide 1.122, from memory: ±15% of frequency): value at T = largest over ` +
           `[T(1−b), T/(1−b)], b = ${result.broadening}, which covers ±b in period and in frequency; ` +
+          `windows searched on an internal grid of ${dense.densePeriods} periods (the building period and every window's ends among them) ` +
+          `with ${dense.refinedPeaks} local peaks refined between its points, then reported on the output periods; ` +
           'PSA broadened and SD, PSV derived from it; SV, SA broadened on their own; valleys not smoothed.',
   );
   return out;
@@ -42,7 +41,7 @@ export function floorTable(
   return terminalText([
     `record    ${ground.record.name} (${ground.record.source}), ${pgaText(ground.record.pgaMS2)}`,
     `building  T_b ${building.periodS} s, ζ_b ${building.damping}, Γφ ${building.modalFactor}; floor ${pgaText(floor.record.pgaMS2)}`,
-    `method    ${METHOD_DESCRIPTIONS[floor.method]}`,
+    `method    ${FLOOR_METHOD_DESCRIPTION}`,
     '',
     ...periodTable(floor.periodsS, columns, true),
     `(${floor.periodsS.length} periods; --format json for all of them)`,
@@ -54,12 +53,12 @@ const psaCurvesG = (spectrum: Spectrum) =>
   spectrum.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2) }));
 
 /** The one-mode building as the floor JSONs state it. */
-export function buildingToJson(building: BuildingMode & { method: Method }) {
+export function buildingToJson(building: BuildingMode) {
   return {
     period_s: building.periodS,
     damping: building.damping,
     modal_factor: building.modalFactor,
-    method: building.method,
+    method: 'piecewise-exact',
   };
 }
 
@@ -81,11 +80,12 @@ export function broadeningToJson<Extra extends { [key: string]: string }>(
 export function floorToJson(
   result: FloorSpectra,
   ground: Spectrum,
-  building: BuildingMode & { method: Method },
+  building: BuildingMode,
   assumptions: string[],
 ) {
   return {
     ...spectrumToJson(result.spectrum),
+    method_description: FLOOR_METHOD_DESCRIPTION,
     building: buildingToJson(building),
     broadening: broadeningToJson(result.broadening),
     unbroadened_psa_g: psaCurvesG(result.unbroadened),

@@ -8,7 +8,7 @@ import { floorAssumptions } from '../formats/floor.js';
 import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
 import { anchorPlanSvg, type PeriodAxis, psaFigure } from '../plot/index.js';
 import type { GroundRecord } from '../record/record.js';
-import { type BuildingMode, floorSpectrum } from '../spectrum/floor.js';
+import { type BuildingMode, FLOOR_METHOD_DESCRIPTION, floorSpectrum } from '../spectrum/floor.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
 import type { ReportAnchorage } from './anchorage-section.js';
 import { floorEnvelopeDemand } from './floor-envelope-demand.js';
@@ -64,7 +64,7 @@ export function equipmentDemand(e: Equipment, record: GroundRecord, motion: Dema
   if ((motion.floorRecords ?? []).length > 0)
     return floorEnvelopeDemand(e, [record, ...(motion.floorRecords ?? [])], building, motion);
   const grid = { periodsS, dampings: [e.damping], method };
-  const floor = floorSpectrum(record, { ...building, method }, grid, motion.broadening ?? null);
+  const floor = floorSpectrum(record, building, grid, motion.broadening ?? null);
   const curve = floor.spectrum.curves[0].psaMS2;
   const value = componentPsaOnCurve(e.periodS, periodsS, curve, floor.spectrum.record.pgaMS2, {
     curve: 'floor spectrum',
@@ -73,7 +73,7 @@ export function equipmentDemand(e: Equipment, record: GroundRecord, motion: Dema
   const ground = Array.from(responseSpectrum(record, grid).curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
   const abovePeriodZero = <T>(values: T[]) => values.filter((_, i) => periodsS[i] > 0);
   const figure = psaFigure(floor.spectrum, {
-    methodDescription: METHOD_DESCRIPTIONS[method],
+    methodDescription: FLOOR_METHOD_DESCRIPTION,
     axis: motion.axis ?? 'frequency',
     overlays: [
       {
@@ -87,10 +87,7 @@ export function equipmentDemand(e: Equipment, record: GroundRecord, motion: Dema
   return {
     elastic: { ...value, source: 'floor spectrum' },
     motion: `floor spectrum of ${record.name}: T_b = ${building.periodS} s, ζ_b = ${building.damping}, Γφ = ${building.modalFactor}${broadened}`,
-    notes: [
-      ...floorAssumptions(floor, building, record.dtS),
-      'This tool does not check that Γφ belongs to the floor at z.',
-    ],
+    notes: [...floorAssumptions(floor), 'This tool does not check that Γφ belongs to the floor at z.'],
     floor: figure,
   };
 }

@@ -3,11 +3,10 @@ import { componentPsaOnCurve } from '../anchorage/elastic-demand.js';
 import type { Equipment } from '../anchorage/equipment.js';
 import { floorSetAssumptions } from '../formats/floor-set.js';
 import type { Method } from '../oscillator/recurrence.js';
-import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import { floorSetFigure } from '../plot/floor-set-figure.js';
 import type { PeriodAxis } from '../plot/period-axis.js';
 import type { GroundRecord } from '../record/record.js';
-import type { BuildingMode } from '../spectrum/floor.js';
+import { type BuildingMode, FLOOR_METHOD_DESCRIPTION } from '../spectrum/floor.js';
 import { floorSpectrumSet, recordLabels } from '../spectrum/floor-set.js';
 
 /** The elastic demand of equipment above the base from the envelope of several floor spectra. */
@@ -38,7 +37,7 @@ export function floorEnvelopeDemand(
 ): FloorEnvelopeDemand {
   const { periodsS, method } = motion.grid;
   const grid = { periodsS, dampings: [e.damping], method };
-  const set = floorSpectrumSet(records, { ...building, method }, grid, motion.broadening ?? null);
+  const set = floorSpectrumSet(records, building, grid, motion.broadening ?? null);
   const value = componentPsaOnCurve(e.periodS, periodsS, set.envelope.curves[0].psaMS2, set.envelope.pgaMS2, {
     curve: 'floor envelope',
     pga: 'largest floor PGA',
@@ -50,15 +49,12 @@ export function floorEnvelopeDemand(
   return {
     elastic: { ...value, source: 'floor envelope' },
     motion: `floor envelope of ${n} records (${labels.join(', ')}): T_b = ${building.periodS} s, ζ_b = ${building.damping}, Γφ = ${building.modalFactor}${broadened}`,
-    notes: [
-      ...floorSetAssumptions(set, building),
-      'This tool does not check that Γφ belongs to the floor at z.',
-    ],
+    notes: [...floorSetAssumptions(set), 'This tool does not check that Γφ belongs to the floor at z.'],
     floor: floorSetFigure({
       set,
       labels,
       building,
-      methodDescription: METHOD_DESCRIPTIONS[method],
+      methodDescription: FLOOR_METHOD_DESCRIPTION,
       axis: motion.axis ?? 'frequency',
     }),
     floorCaption: `Floor spectra of ${n} records for the equipment: each, their mean and their envelope`,

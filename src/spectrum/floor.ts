@@ -1,10 +1,9 @@
 import { inputError } from '../base/errors.js';
-import { recordRoughness } from '../oscillator/record-statistics.js';
-import { executedStepCoefficients, type Method } from '../oscillator/recurrence.js';
-import { substepCount } from '../oscillator/substeps.js';
+import { type CascadePeak, cascadePeak, cascadeRecord } from '../oscillator/cascade.js';
+import { piecewiseExactCoefficients } from '../oscillator/recurrence.js';
 import { type GroundRecord, withProcessing } from '../record/record.js';
-import { interpolateSpectrum } from './interpolate.js';
-import { responseSpectrum, type Spectrum, type SpectrumCurve, type SpectrumOptions } from './spectrum.js';
+import { broadenByEvaluation, type DenseBroadening, denseSpacing } from './broaden.js';
+import { recordInfo, type Spectrum, type SpectrumCurve, type SpectrumOptions } from './spectrum.js';
 
 /** A building idealised by its fundamental mode, as seen from one floor. */
 export interface BuildingMode {
@@ -14,9 +13,11 @@ export interface BuildingMode {
   damping: number;
   /** Modal factor at the floor, Γ·φ(floor) (participation factor times mode shape at the floor). */
   modalFactor: number;
-  /** Step method for the building's response (default Newmark-β average acceleration). */
-  method?: Method;
 }
+
+/** How floor spectra are computed, as outputs state it. */
+export const FLOOR_METHOD_DESCRIPTION =
+  'exact cascade: building mode and component oscillator stepped together by the matrix exponential (Van Loan 1978), ground linear between samples';
 
 /**
  * The floor's absolute acceleration history for a building idealised by one mode (modal
@@ -26,22 +27,16 @@ export interface BuildingMode {
  *
  *   a_floor(t) = a_g(t) + Γφ·q''(t),   q'' = −a_g − 2ζ_b ω_b q' − ω_b² q.
  *
- * q is stepped with the sweep's pre-warped recurrences (executedStepCoefficients, substepCount,
- * ground acceleration linear between samples) and a_floor is sampled at the record's own times.
- * Higher modes, soil–structure interaction, nonlinear response of the building and feedback of
- * the equipment on the floor are not represented.
+ * q is stepped exactly for the ground acceleration linear between samples (piecewise-exact,
+ * Nigam and Jennings 1969) and a_floor is given at the record's own times. Floor spectra are not
+ * computed from this sampled history but from the cascade (floorCascadeSpectrum), since the floor
+ * motion is not linear between samples. Higher modes, soil–structure interaction, nonlinear
+ * response of the building and feedback of the equipment on the floor are not represented.
  */
 export function floorRecord(ground: GroundRecord, building: BuildingMode): GroundRecord {
   checkBuilding(building);
-  const method = building.method ?? 'newmark-average';
   const omega = (2 * Math.PI) / building.periodS;
-  const durationS = (ground.accelMS2.length - 1) * ground.dtS;
-  const substeps = substepCount(method, building.periodS, ground.dtS, {
-    damping: building.damping,
-    durationS,
-    roughness: recordRoughness(ground.accelMS2),
-  });
-  const k = executedStepCoefficients(method, omega, building.damping, ground.dtS / substeps);
+  const k = piecewiseExactCoefficients(omega, building.damping, ground.dtS);
   const ag = ground.accelMS2;
   const floor = new Float64Array(ag.length);
   const c = 2 * building.damping * omega;
@@ -50,15 +45,9 @@ export function floorRecord(ground: GroundRecord, building: BuildingMode): Groun
   let v = 0;
   floor[0] = ag[0] + building.modalFactor * -ag[0];
   for (let i = 1; i < ag.length; i++) {
-    const p0 = ag[i - 1];
-    const dp = (ag[i] - p0) / substeps;
-    for (let s = 0; s < substeps; s++) {
-      const a = p0 + dp * s;
-      const b = s === substeps - 1 ? ag[i] : p0 + dp * (s + 1);
-      const qNext = k.uu * q + k.uv * v + k.up0 * a + k.up1 * b;
-      v = k.vu * q + k.vv * v + k.vp0 * a + k.vp1 * b;
-      q = qNext;
-    }
+    const qNext = k.uu * q + k.uv * v + k.up0 * ag[i - 1] + k.up1 * ag[i];
+    v = k.vu * q + k.vv * v + k.vp0 * ag[i - 1] + k.vp1 * ag[i];
+    q = qNext;
     const relative = -ag[i] - c * v - stiffness * q;
     floor[i] = ag[i] + building.modalFactor * relative;
   }
@@ -66,15 +55,75 @@ export function floorRecord(ground: GroundRecord, building: BuildingMode): Groun
     operation: 'floor',
     description:
       `floor absolute acceleration a_g + Γφ·q'' of a one-mode building: T_b = ${building.periodS} s, ` +
-      `ζ_b = ${building.damping}, Γφ = ${building.modalFactor}, ${method}`,
+      `ζ_b = ${building.damping}, Γφ = ${building.modalFactor}, stepped exactly`,
     parameters: {
       building_period_s: building.periodS,
       building_damping: building.damping,
       modal_factor: building.modalFactor,
-      method,
-      substeps,
+      method: 'piecewise-exact',
     },
   });
+}
+
+/**
+ * The component spectra on a floor, from the cascade (oscillator/cascade.ts): building mode and
+ * component oscillator as one linear system driven by the ground record linear between samples.
+ * PSV = ωSD, PSA = ω²SD; at T = 0 PSA and SA are the floor's peak acceleration over continuous
+ * time, which is also the record PGA the spectrum states (the sampled floor history can miss it
+ * between samples).
+ */
+export function floorCascadeSpectrum(
+  ground: GroundRecord,
+  building: BuildingMode,
+  grid: Pick<SpectrumOptions, 'periodsS' | 'dampings'> & { stepsPerPeriod?: number },
+  floor: GroundRecord = floorRecord(ground, building),
+): Spectrum {
+  checkBuilding(building);
+  const record = cascadeRecord(ground.accelMS2, ground.dtS);
+  const periods = Float64Array.from(grid.periodsS);
+  let steps = 0;
+  let floorPeak = 0;
+  const curves = Array.from(grid.dampings, (damping): SpectrumCurve => {
+    const n = periods.length;
+    const curve = {
+      damping,
+      sdM: new Float64Array(n),
+      psvMS: new Float64Array(n),
+      psaMS2: new Float64Array(n),
+      svMS: new Float64Array(n),
+      saMS2: new Float64Array(n),
+    };
+    for (let p = 0; p < n; p++) {
+      const t = periods[p];
+      const peak = cascadePeak(record, building, t, damping, grid.stepsPerPeriod);
+      steps += peak.substeps * (ground.accelMS2.length - 1);
+      writePeak(curve, p, t, peak);
+      if (t === 0) floorPeak = peak.saMS2;
+    }
+    return curve;
+  });
+  if (!periods.includes(0)) floorPeak = cascadePeak(record, building, 0, 0).saMS2;
+  return {
+    record: { ...recordInfo(floor), pgaMS2: floorPeak },
+    method: 'piecewise-exact',
+    periodsS: periods,
+    curves,
+    oscillatorSteps: steps,
+  };
+}
+
+/** Store one cascade peak at index p of a curve, with PSV and PSA from SD (PSA = SA at T = 0). */
+export function writePeak(curve: SpectrumCurve, p: number, periodS: number, peak: CascadePeak): void {
+  curve.sdM[p] = peak.sdM;
+  curve.svMS[p] = peak.svMS;
+  curve.saMS2[p] = peak.saMS2;
+  if (periodS === 0) {
+    curve.psaMS2[p] = peak.saMS2;
+    return;
+  }
+  const omega = (2 * Math.PI) / periodS;
+  curve.psvMS[p] = omega * peak.sdM;
+  curve.psaMS2[p] = omega * omega * peak.sdM;
 }
 
 function checkBuilding(building: BuildingMode): void {
@@ -89,69 +138,6 @@ function checkBuilding(building: BuildingMode): void {
   }
 }
 
-/**
- * Peak broadening of an in-structure spectrum (US NRC Regulatory Guide 1.122, from memory: each
- * peak is widened by ±15% of its frequency to cover uncertainty in the structure's frequencies).
- * Reading used here: the broadened value at T is the largest value of the unbroadened spectrum
- * over the window [T(1 − b), T/(1 − b)], b = 0.15 by default. A peak at T_p then becomes a plateau
- * from T_p(1 − b) to T_p/(1 − b), which covers ±b both in period and in frequency (a little wider
- * than either alone). The window's end values are interpolated log–log so that a coarse grid does
- * not narrow it. The guide's further smoothing of valleys is not done. T = 0 is left as is.
- * The result is never below the unbroadened spectrum (T itself lies in its window).
- */
-export function broadenCurve(
-  periodsS: ArrayLike<number>,
-  values: ArrayLike<number>,
-  fraction = 0.15,
-): Float64Array {
-  if (!(fraction >= 0) || !(fraction < 1))
-    throw inputError(`the broadening must be a fraction 0 ≤ b < 1, got ${fraction}`);
-  return Float64Array.from(periodsS, (t, i) => {
-    if (t === 0) return values[i];
-    const low = t * (1 - fraction);
-    const high = t / (1 - fraction);
-    let peak = values[i];
-    for (let j = 0; j < periodsS.length; j++) {
-      if (periodsS[j] >= low && periodsS[j] <= high && values[j] > peak) peak = values[j];
-    }
-    return Math.max(peak, valueAt(periodsS, values, low), valueAt(periodsS, values, high));
-  });
-}
-
-/** The spectrum at a window's end, on the positive part of the grid; −∞ elsewhere (so it never wins a max). */
-function valueAt(periodsS: ArrayLike<number>, values: ArrayLike<number>, t: number): number {
-  const found = interpolateSpectrum(periodsS, values, t);
-  return found && periodsS[found.lo] > 0 ? found.value : Number.NEGATIVE_INFINITY;
-}
-
-/**
- * Broaden a spectrum's curves: PSA is broadened and SD = PSA/ω², PSV = PSA/ω are taken from it so
- * that the three stay consistent; SV and SA are broadened on their own.
- */
-export function broadenSpectrum(spectrum: Spectrum, fraction = 0.15): Spectrum {
-  const periods = spectrum.periodsS;
-  const curves: SpectrumCurve[] = spectrum.curves.map((curve) => {
-    const psaMS2 = broadenCurve(periods, curve.psaMS2, fraction);
-    const sdM = new Float64Array(periods.length);
-    const psvMS = new Float64Array(periods.length);
-    for (let p = 0; p < periods.length; p++) {
-      if (periods[p] === 0) continue;
-      const omega = (2 * Math.PI) / periods[p];
-      psvMS[p] = psaMS2[p] / omega;
-      sdM[p] = psaMS2[p] / (omega * omega);
-    }
-    return {
-      damping: curve.damping,
-      sdM,
-      psvMS,
-      psaMS2,
-      svMS: broadenCurve(periods, curve.svMS, fraction),
-      saMS2: broadenCurve(periods, curve.saMS2, fraction),
-    };
-  });
-  return { ...spectrum, curves };
-}
-
 export interface FloorSpectra {
   floor: GroundRecord;
   /** The floor spectrum as computed (unbroadened). */
@@ -159,17 +145,31 @@ export interface FloorSpectra {
   /** The broadened floor spectrum, or the unbroadened one when no broadening was asked for. */
   spectrum: Spectrum;
   broadening: number | null;
+  /** How the broadening searched its windows (null when none). */
+  dense: DenseBroadening | null;
 }
 
-/** The in-structure spectrum of one floor: floorRecord, then responseSpectrum, then optional broadening. */
+/**
+ * The in-structure spectrum of one floor: floorCascadeSpectrum, then, when asked, broadening on a
+ * dense internal grid holding the building period (broadenByEvaluation), reported on the grid's periods.
+ */
 export function floorSpectrum(
   ground: GroundRecord,
   building: BuildingMode,
-  grid: SpectrumOptions,
+  grid: Pick<SpectrumOptions, 'periodsS' | 'dampings'> & { stepsPerPeriod?: number },
   broadening: number | null = null,
 ): FloorSpectra {
-  const floor = floorRecord(ground, { method: grid.method, ...building });
-  const unbroadened = responseSpectrum(floor, grid);
-  const spectrum = broadening === null ? unbroadened : broadenSpectrum(unbroadened, broadening);
-  return { floor, unbroadened, spectrum, broadening };
+  const floor = floorRecord(ground, building);
+  const unbroadened = floorCascadeSpectrum(ground, building, grid, floor);
+  if (broadening === null) return { floor, unbroadened, spectrum: unbroadened, broadening, dense: null };
+  const record = cascadeRecord(ground.accelMS2, ground.dtS);
+  const lightest = Math.min(...Array.from(grid.dampings));
+  const { spectrum, dense } = broadenByEvaluation(
+    unbroadened,
+    broadening,
+    (t, damping) => cascadePeak(record, building, t, damping, grid.stepsPerPeriod),
+    [building.periodS],
+    denseSpacing(lightest),
+  );
+  return { floor, unbroadened, spectrum, broadening, dense };
 }

@@ -21,7 +21,7 @@ const two = createRecord({
   accelMS2: Float64Array.from({ length: 151 }, (_, i) => 0.5 * one.accelMS2[2 * i]),
 });
 const set = floorSpectrumSet([one, two], building, grid, 0.15);
-const assumptions = floorSetAssumptions(set, building);
+const assumptions = floorSetAssumptions(set);
 
 describe('floorSetAssumptions', () => {
   it("are one floor spectrum's, then the order: broadened first, then mean and envelope", () => {
@@ -30,12 +30,12 @@ describe('floorSetAssumptions', () => {
       /^Mean and envelope of 2 floor spectra taken after broadening: each record's floor spectrum broadened on its own first/,
     );
     const plain = floorSpectrumSet([one, two], building, grid);
-    expect(floorSetAssumptions(plain, building).at(-1)).toContain('none broadened');
+    expect(floorSetAssumptions(plain).at(-1)).toContain('none broadened');
   });
 });
 
 describe('floorSetToJson', () => {
-  const json = floorSetToJson(set, { ...building, method: 'newmark-average' }, assumptions);
+  const json = floorSetToJson(set, building, assumptions);
 
   it('labels each record, and holds "mean" and "envelope" with the same curves; the caution first', () => {
     expect(Object.keys(json)[0]).toBe('caution');
@@ -60,7 +60,7 @@ describe('floorSetToJson', () => {
         expect(json.envelope.spectra[d].psa_governed_by[p]).toBe(json.records[a >= b ? 0 : 1].label);
       }
     }
-    expect(json.envelope.pga_g).toBe(Math.max(...set.members.map((m) => m.floor.pgaMS2)) / G);
+    expect(json.envelope.pga_g).toBe(Math.max(...set.members.map((m) => m.spectrum.record.pgaMS2)) / G);
   });
 });
 

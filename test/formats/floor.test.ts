@@ -14,30 +14,25 @@ const broadened = floorSpectrum(ground, building, grid, 0.15);
 
 describe('floorAssumptions', () => {
   it('states the one-mode idealisation, and whether and how the peaks are broadened', () => {
-    const plainText = floorAssumptions(plain, building, ground.dtS);
+    const plainText = floorAssumptions(plain);
     expect(plainText[0]).toMatch(/^Building idealised by its fundamental mode/);
     expect(plainText.at(-1)).toMatch(/^Peaks not broadened/);
-    const broad = floorAssumptions(broadened, building, ground.dtS).at(-1);
+    const broad = floorAssumptions(broadened).at(-1);
     expect(broad).toContain('Regulatory Guide 1.122');
     expect(broad).toContain('b = 0.15');
   });
 
-  it('warns when the building period is under 10 record steps (common practice for sampling a response)', () => {
-    expect(floorAssumptions(plain, building, 0.01).join(' ')).not.toContain('coarsely sampled');
-    expect(floorAssumptions(plain, { ...building, periodS: 0.05 }, 0.01).join(' ')).toContain(
-      'T_b = 0.05 s is under 10 record steps (0.01 s)',
-    );
+  it('states the cascade, and the internal grid the broadening searched', () => {
+    expect(floorAssumptions(plain).join(' ')).toContain('never sampled and re-interpolated');
+    const broad = floorAssumptions(broadened).at(-1) ?? '';
+    expect(broad).toContain(`internal grid of ${broadened.dense?.densePeriods} periods`);
+    expect(broadened.dense?.densePeriods).toBeGreaterThan(100);
   });
 });
 
 describe('floorToJson', () => {
-  const assumptions = floorAssumptions(broadened, building, ground.dtS);
-  const json = floorToJson(
-    broadened,
-    groundSpectrum,
-    { ...building, method: 'newmark-average' },
-    assumptions,
-  );
+  const assumptions = floorAssumptions(broadened);
+  const json = floorToJson(broadened, groundSpectrum, building, assumptions);
 
   it('is the floor spectrum JSON with the building, the broadening, the ground and the assumptions', () => {
     expect(Object.keys(json).slice(0, 7)).toEqual([
@@ -60,12 +55,10 @@ describe('floorToJson', () => {
       period_s: 0.3,
       damping: 0.05,
       modal_factor: 1.3,
-      method: 'newmark-average',
+      method: 'piecewise-exact',
     });
     expect(json.broadening).toMatchObject({ fraction: 0.15 });
-    expect(
-      floorToJson(plain, groundSpectrum, { ...building, method: 'newmark-average' }, []).broadening,
-    ).toBeNull();
+    expect(floorToJson(plain, groundSpectrum, building, []).broadening).toBeNull();
     expect(json.assumptions).toBe(assumptions);
   });
 
@@ -81,7 +74,7 @@ describe('floorToJson', () => {
 });
 
 describe('floorTable', () => {
-  const text = floorTable(plain.spectrum, groundSpectrum, building, floorAssumptions(plain, building, 0.01));
+  const text = floorTable(plain.spectrum, groundSpectrum, building, floorAssumptions(plain));
 
   it('opens with the caution, the record, the building and the method', () => {
     expectCaution(text, '! ');

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { createRecord } from '../../src/record/record.js';
-import { broadenCurve, floorSpectrum } from '../../src/spectrum/floor.js';
+import { broadenCurve } from '../../src/spectrum/broaden.js';
+import { floorSpectrum } from '../../src/spectrum/floor.js';
 import {
   combineSpectra,
   envelopeCurve,
@@ -116,10 +117,12 @@ describe('broadening before combining (constructed cases, hand calculation)', ()
     };
     const building = { periodS: 0.3, damping: 0.05, modalFactor: 1.3 };
     const set = floorSpectrumSet([sineRecord('one', 2.5), sineRecord('two', 4)], building, grid, 0.15);
-    const broadened = set.members.map((m) =>
-      broadenCurve(grid.periodsS, m.unbroadened.curves[0].psaMS2, 0.15),
-    );
+    const broadened = set.members.map((m) => m.spectrum.curves[0].psaMS2);
     expect(Array.from(set.envelope.curves[0].psaMS2)).toEqual(Array.from(envelopeCurve(broadened)));
+    // Each member is broadened on its own (never below its own unbroadened spectrum).
+    for (const m of set.members)
+      for (const [p, v] of m.spectrum.curves[0].psaMS2.entries())
+        expect(v).toBeGreaterThanOrEqual(m.unbroadened.curves[0].psaMS2[p]);
   });
 });
 
@@ -155,7 +158,7 @@ describe('combineSpectra and floorSpectrumSet', () => {
         }
       }
     }
-    expect(set.envelope.pgaMS2).toBe(Math.max(...set.members.map((m) => m.floor.pgaMS2)));
+    expect(set.envelope.pgaMS2).toBe(Math.max(...set.members.map((m) => m.spectrum.record.pgaMS2)));
     expect(set.grounds.map((g) => g.name)).toEqual(['one', 'two', 'three']);
     // PSA = ω²·SD is kept by the envelope (ω fixed at each period): at T = 0.6 s.
     const omega = (2 * Math.PI) / 0.6;

@@ -10,10 +10,9 @@ import {
   floorSetToJson,
 } from '../../formats/floor-set.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
-import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { floorSetFigure } from '../../plot/floor-set-figure.js';
-import { floorSpectrum } from '../../spectrum/floor.js';
+import { FLOOR_METHOD_DESCRIPTION, floorSpectrum } from '../../spectrum/floor.js';
 import { floorSpectrumSet, recordLabels } from '../../spectrum/floor-set.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
@@ -63,14 +62,14 @@ export async function runFloor(records: string | string[], options: FloorCliOpti
   if (sources.length > 1) return runFloorSet(sources, options);
   const [source] = sources;
   const grid = gridFromOptions(options);
-  const building = { ...buildingFromOptions(options), method: grid.method };
+  const building = buildingFromOptions(options);
   const broadening = broadeningFromOptions(options.broaden);
   outputFormat(options, 'json or csv');
   const axis = svgAxisFromOptions(options);
   const ground = await loadRecord(source, options);
   const result = floorSpectrum(ground, building, grid, broadening);
   const groundSpectrum = responseSpectrum(ground, grid);
-  const assumptions = floorAssumptions(result, building, ground.dtS);
+  const assumptions = floorAssumptions(result);
   const figure = () =>
     floorFigure({
       ground: groundSpectrum,
@@ -78,7 +77,7 @@ export async function runFloor(records: string | string[], options: FloorCliOpti
       unbroadened: result.broadening === null ? undefined : result.unbroadened,
       broadening: result.broadening,
       building,
-      methodDescription: METHOD_DESCRIPTIONS[result.spectrum.method],
+      methodDescription: FLOOR_METHOD_DESCRIPTION,
       axis,
     });
   await writeProduct([source], options, {
@@ -95,17 +94,17 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
   if (options.name !== undefined)
     throw usageError('--name names one record; with several records each keeps its file name');
   const grid = gridFromOptions(options);
-  const building = { ...buildingFromOptions(options), method: grid.method };
+  const building = buildingFromOptions(options);
   const broadening = broadeningFromOptions(options.broaden);
   outputFormat(options, 'json or csv');
   const axis = svgAxisFromOptions(options);
   const grounds = [];
   for (const source of sources) grounds.push(await loadRecord(source, options));
   const set = floorSpectrumSet(grounds, building, grid, broadening);
-  const assumptions = floorSetAssumptions(set, building);
+  const assumptions = floorSetAssumptions(set);
   const labels = recordLabels(set.grounds);
   const figure = () =>
-    floorSetFigure({ set, labels, building, methodDescription: METHOD_DESCRIPTIONS[set.method], axis });
+    floorSetFigure({ set, labels, building, methodDescription: FLOOR_METHOD_DESCRIPTION, axis });
   await writeProduct(sources, options, {
     json: () => floorSetToJson(set, building, assumptions),
     csv: () => floorSetToCsv(set, assumptions),

@@ -42,7 +42,7 @@ describe('floor → anchor --spectrum (the floor JSON is the spectrum contract p
       period_s: 0.5,
       damping: 0.05,
       modal_factor: 1.3,
-      method: 'newmark-average',
+      method: 'piecewise-exact',
     });
     const out = join(dir, 'anchor.json');
     await runAnchor({
