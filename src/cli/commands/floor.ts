@@ -16,14 +16,17 @@ import { floorSetFigure } from '../../plot/floor-set-figure.js';
 import { floorSpectrum } from '../../spectrum/floor.js';
 import { floorSpectrumSet, recordLabels } from '../../spectrum/floor-set.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
+import { gridWords } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
 export interface FloorCliOptions
   extends RecordCliOptions,
+    ProcessingCliOptions,
     GridCliOptions,
     BuildingCliOptions,
     OutputCliOptions,
@@ -40,6 +43,7 @@ export function registerFloor(program: Command): void {
       'ground record files (read alike), - for standard input once; several give each floor spectrum, their mean and envelope',
     );
   addRecordOptions(command);
+  addProcessingOptions(command);
   addGridOptions(command);
   command
     .option('--building-period <seconds>', "the building's fundamental period T_b, s (required)")
@@ -52,7 +56,6 @@ export function registerFloor(program: Command): void {
   addAxisOption(command);
   addOutputOptions(
     command,
-    'json or csv (default: a summary table on the terminal, or json with --out)',
     'also draw the floor spectrum against the ground spectrum (several records: each, the mean and the envelope), DIR/floor.svg',
   ).action(runFloor);
 }
@@ -65,9 +68,9 @@ export async function runFloor(records: string | string[], options: FloorCliOpti
   const grid = gridFromOptions(options);
   const building = { ...buildingFromOptions(options), method: grid.method };
   const broadening = broadeningFromOptions(options.broaden);
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axis = svgAxisFromOptions(options);
-  const ground = await loadRecord(source, options);
+  const ground = applyProcessing(await loadRecord(source, options), options);
   const result = floorSpectrum(ground, building, grid, broadening);
   const groundSpectrum = responseSpectrum(ground, grid);
   const assumptions = floorAssumptions(result, building, ground.dtS);
@@ -86,6 +89,7 @@ export async function runFloor(records: string | string[], options: FloorCliOpti
     csv: () => spectrumToCsv(result.spectrum, { lengthUnit: 'm' }),
     table: () => floorTable(result.spectrum, groundSpectrum, building, assumptions),
     figures: () => [['floor.svg', figure()]],
+    summary: `floor spectrum of ${ground.name} (T_b ${building.periodS} s), ${gridWords(grid.periodsS.length, grid.dampings.length)}`,
   });
 }
 
@@ -97,10 +101,10 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
   const grid = gridFromOptions(options);
   const building = { ...buildingFromOptions(options), method: grid.method };
   const broadening = broadeningFromOptions(options.broaden);
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axis = svgAxisFromOptions(options);
   const grounds = [];
-  for (const source of sources) grounds.push(await loadRecord(source, options));
+  for (const source of sources) grounds.push(applyProcessing(await loadRecord(source, options), options));
   const set = floorSpectrumSet(grounds, building, grid, broadening);
   const assumptions = floorSetAssumptions(set, building);
   const labels = recordLabels(set.grounds);
@@ -111,6 +115,7 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
     csv: () => floorSetToCsv(set, assumptions),
     table: () => floorSetTable(set, building, assumptions),
     figures: () => [['floor.svg', figure()]],
+    summary: `floor spectra of ${grounds.length} records with their mean and envelope (T_b ${building.periodS} s), ${gridWords(grid.periodsS.length, grid.dampings.length)}`,
   });
 }
 

@@ -1,3 +1,4 @@
+import { announceSuccess } from '../announce.js';
 import { existsSync, readdirSync, readFileSync, realpathSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
@@ -77,7 +78,5 @@ export function runMerge(dirs: string[], { out }: { out: string }): void {
   const failed = shards.flatMap((shard) => shard.json.failed);
   const suite = join(out, 'suite.json');
   outputs.file(suite, formatJson(suiteJson(records, failed, first.settings))).write();
-  process.stderr.write(
-    `quakesweep: merged ${count} shards: ${records.length} records, ${failed.length} failed; ${suite}\n`,
-  );
+  announceSuccess(`merged ${count} shards: ${records.length} records, ${failed.length} failed`, [suite]);
 }

@@ -1,3 +1,4 @@
+import { announceSuccess } from '../announce.js';
 import { type Command, Option } from 'commander';
 import { CAUTION } from '../../base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
@@ -45,6 +46,9 @@ export function registerSynth(program: Command): void {
         synth[field] = positiveNumber(option.long as string, options[option.attributeName()]);
       }
       new OutputSet().text(options.out, synthText(synth)).write();
+      announceSuccess(`seeded stochastic record (seed ${synth.seed}), not for design`, [
+        options.out ?? 'csv on standard output',
+      ]);
     });
 }
 
