@@ -1,5 +1,5 @@
-import type { InfoJson } from './info.js';
 import { type CsvCell, csvRows } from './csv-rows.js';
+import type { InfoJson } from './info.js';
 
 /** The measures of info.ts's JSON, one a row, and the unit each JSON key carries. */
 const MEASURES: [keyof InfoJson, string][] = [

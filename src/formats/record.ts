@@ -1,7 +1,7 @@
 import { CAUTION } from '../base/caution.js';
 import { ACCELERATION_UNITS, type AccelerationUnit, LENGTH_UNITS, type LengthUnit } from '../base/units.js';
-import { PROCESSING_ORDER } from '../record/process.js';
 import { integrateRecord } from '../record/integrate.js';
+import { PROCESSING_ORDER } from '../record/process.js';
 import type { GroundRecord } from '../record/record.js';
 import { exactDecimal } from './exact-decimal.js';
 import { notFiniteError } from './finite.js';
@@ -34,7 +34,8 @@ function recordColumns(record: GroundRecord, o: RecordOutputOptions): Column[] {
     { name: `accel_${o.accelUnit}`, values: record.accelMS2, factor: ACCELERATION_UNITS[o.accelUnit] },
   ];
   if (o.velocity) columns.push({ name: `velocity_${o.lengthUnit}_s`, values: velocityMS, factor: lengthM });
-  if (o.displacement) columns.push({ name: `displacement_${o.lengthUnit}`, values: displacementM, factor: lengthM });
+  if (o.displacement)
+    columns.push({ name: `displacement_${o.lengthUnit}`, values: displacementM, factor: lengthM });
   return columns;
 }
 
@@ -43,7 +44,11 @@ function recordColumns(record: GroundRecord, o: RecordOutputOptions): Column[] {
  * takes them from a header finds them there), then source, every processing step in order, the
  * units of each column, how to read the file back, and the caution.
  */
-export function recordHeader(record: GroundRecord, o: RecordOutputOptions, columns: readonly string[]): string[] {
+export function recordHeader(
+  record: GroundRecord,
+  o: RecordOutputOptions,
+  columns: readonly string[],
+): string[] {
   const steps = record.processing.map((step, i) => `step ${i + 1}: ${step.description}`);
   return [
     `processed ground-acceleration record ${record.name}, written by quakesweep record`,

@@ -65,7 +65,8 @@ const CASES: Record<string, [string[], RegExp][]> = {
   info: [
     [['info'], /missing required argument/],
     [['info', f.h1], /units are required/],
-    [['info', f.h1, '--units', 'g', '--format', 'csv'], /--format/],
+    [['info', f.h1, '--units', 'g', '--format', 'xml'], /--format/],
+    [['info', f.h1, '--units', 'g', '--format', 'json', '--out', 'x.csv'], /contradicts/],
     [['info', f.h1, '--units', 'g', '--bracket-threshold', '-1'], /--bracket-threshold/],
     [['info', f.h1, '--units', 'g', '--smoothing', 'wide'], /--smoothing/],
     [['info', missing, '--units', 'g'], /no such file/],
@@ -141,7 +142,7 @@ const CASES: Record<string, [string[], RegExp][]> = {
     [['anchor', '--equipment', f.equipment, '--record', f.h1], /units are required/],
     [['anchor', '--equipment', f.equipment, '--spectrum', f.h1], /./],
     [['anchor', '--equipment', f.equipment, '--spectrum', missing], /no such file/],
-    [['anchor', '--equipment', f.equipment, '--format', 'csv'], /--format/],
+    [['anchor', '--equipment', f.equipment, '--format', 'xml'], /--format/],
   ],
   synth: [
     [['synth', '--dt', '0'], /--dt/],

@@ -89,3 +89,8 @@ export async function runMainIn(cwd: string, argv: string[]): Promise<CliResult>
     process.chdir(before);
   }
 }
+
+/** Standard error without the two lines every success ends with (what was written, the caution). */
+export function besidesSuccess(stderr: string): string {
+  return stderr.replace(/^quakesweep: (done|caution): .*\n/gm, '');
+}

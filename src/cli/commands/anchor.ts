@@ -54,10 +54,7 @@ export function registerAnchor(program: Command): void {
     );
   addRecordOptions(command);
   addProcessingOptions(command);
-  addOutputOptions(
-    command,
-    'also write the anchor plan view, DIR/anchor-plan.svg',
-  ).action(runAnchor);
+  addOutputOptions(command, 'also write the anchor plan view, DIR/anchor-plan.svg').action(runAnchor);
 }
 
 export async function runAnchor(options: AnchorCliOptions): Promise<void> {

@@ -38,10 +38,9 @@ export function registerDamping(program: Command): void {
   addGridOptions(command, DEFAULT_DAMPING_LIST);
   addThreadOptions(command);
   addAxisOption(command);
-  addOutputOptions(
-    command,
-    'also draw the spectra and their ratios to 5%, DIR/damping.svg',
-  ).action(runDamping);
+  addOutputOptions(command, 'also draw the spectra and their ratios to 5%, DIR/damping.svg').action(
+    runDamping,
+  );
 }
 
 export async function runDamping(source: string, options: DampingCliOptions): Promise<void> {

@@ -23,10 +23,9 @@ export function registerDesign(program: Command): void {
     )
     .option('--frequencies <grid>', FREQUENCIES_HELP);
   addAxisOption(command);
-  addOutputOptions(
-    command,
-    'also draw the spectrum, DIR/design.svg (PSA against T or f, log–log)',
-  ).action(runDesign);
+  addOutputOptions(command, 'also draw the spectrum, DIR/design.svg (PSA against T or f, log–log)').action(
+    runDesign,
+  );
 }
 
 export async function runDesign(
@@ -43,7 +42,7 @@ export async function runDesign(
     csv: () => designToCsv(spectrum, periodsS, psaG),
     table: () => designTable(spectrum, periodsS, psaG),
     figures: () => [['design.svg', designFigure({ spectrum, periodsS, psaG, axis })]],
-    summary: `${spectrum.vertical ? "vertical " : ""}design spectrum (${spectrum.code}), ${count(periodsS.length, 'period')}`,
+    summary: `${spectrum.vertical ? 'vertical ' : ''}design spectrum (${spectrum.code}), ${count(periodsS.length, 'period')}`,
   });
 }
 

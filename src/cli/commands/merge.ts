@@ -1,4 +1,3 @@
-import { announceSuccess } from '../announce.js';
 import { existsSync, readdirSync, readFileSync, realpathSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
@@ -7,6 +6,7 @@ import { sanitiseName } from '../../batch/names.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { SHARD_FORMAT, type ShardJson, suiteJson } from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
+import { announceSuccess } from '../announce.js';
 
 export function registerMerge(program: Command): void {
   program

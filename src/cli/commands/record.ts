@@ -45,7 +45,11 @@ export function registerRecord(program: Command): void {
   addThreadOptions(command);
   command
     .option('--accel-unit <unit>', 'unit of the acceleration written (default: the --units read)')
-    .option('--length-unit <unit>', 'length unit of velocity (per second) and displacement: m, cm, mm, in, ft', 'm')
+    .option(
+      '--length-unit <unit>',
+      'length unit of velocity (per second) and displacement: m, cm, mm, in, ft',
+      'm',
+    )
     .option('--with <list>', 'also write these histories: velocity, displacement or velocity,displacement');
   addOutputOptions(command).action(runRecord);
 }
@@ -61,7 +65,9 @@ export async function runRecord(source: string, options: RecordCommandCliOptions
   if (target !== undefined && options.scale !== undefined)
     throw usageError('give --scale or --target, not both');
   if (target !== undefined && !target.apply)
-    throw usageError('--target only scales the record written with --apply-scale; add it, or leave out --target');
+    throw usageError(
+      '--target only scales the record written with --apply-scale; add it, or leave out --target',
+    );
   const factor = options.scale === undefined ? undefined : positiveNumber('--scale', options.scale);
   // Checked before the record is read, as every command checks its options first.
   const grid = target === undefined ? undefined : gridFromOptions(options);

@@ -1,7 +1,7 @@
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
-import { join } from 'node:path';
 import { announceSuccess, count } from '../announce.js';
 import { addAxisOption } from '../options/axis.js';
 import { addGridOptions } from '../options/grid.js';

@@ -1,9 +1,9 @@
-import { announceSuccess } from '../announce.js';
 import { type Command, Option } from 'commander';
 import { CAUTION } from '../../base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { OutputSet } from '../../output/output-set.js';
 import { type SynthOptions, synthesizeRecord } from '../../record/synth.js';
+import { announceSuccess } from '../announce.js';
 import { positiveNumber, wholeNumber } from '../options/record.js';
 
 type SynthNumber =

@@ -89,7 +89,9 @@ export async function writeProduct(
   outputs.text(options.out, text).write();
   const written = [
     options.out === undefined ? `${format} on standard output` : `${options.out} (${format})`,
-    ...(options.svg === undefined ? [] : [`${figures.length} figure${figures.length === 1 ? '' : 's'} in ${options.svg}`]),
+    ...(options.svg === undefined
+      ? []
+      : [`${figures.length} figure${figures.length === 1 ? '' : 's'} in ${options.svg}`]),
   ];
   announceSuccess(product.summary, written);
 }

@@ -45,7 +45,9 @@ export async function elasticFromOptions(
   for (const source of records) {
     const record = applyProcessing(await loadRecord(source, options), options);
     if (record.processing.length > 0)
-      processed.push(`Record ${record.name} processed: ${record.processing.map((s) => s.description).join('; ')}.`);
+      processed.push(
+        `Record ${record.name} processed: ${record.processing.map((s) => s.description).join('; ')}.`,
+      );
     const value = recordPsaForComponent(record, equipment.periodS, equipment.damping, method);
     if (elastic === null || value.psaG > elastic.psaG) elastic = { ...value, source };
   }

@@ -16,7 +16,11 @@ export const THREADS_HELP = 'threads, 1 to 256 (default: all cores for a large j
 export function addThreadOptions(command: Command, kernel = true): Command {
   command.option('--threads <n>', THREADS_HELP);
   if (kernel)
-    command.option('--kernel <kernel>', 'sweep kernel: auto (WebAssembly SIMD where available), wasm or js', 'auto');
+    command.option(
+      '--kernel <kernel>',
+      'sweep kernel: auto (WebAssembly SIMD where available), wasm or js',
+      'auto',
+    );
   return command;
 }
 

@@ -73,7 +73,7 @@ describe('quakesweep floor', () => {
     [[...building('1.3'), '--building-damping', '120%'], /--building-damping/],
     [[...building('x')], /--modal-factor must be a number, got 'x'/],
     [[...building('1.3'), '--broaden', '1.5'], /--broaden must be a fraction/],
-    [[...building('1.3'), '--format', 'svg'], /--format 'svg': use json or csv/],
+    [[...building('1.3'), '--format', 'svg'], /--format 'svg': use table, json or csv/],
   ])('refuses %j with exit 2 and one line naming the option', async (args, message) => {
     expect(expectOneLineFailure(await folder.run('floor', ...record, ...args))).toMatch(message);
   });
