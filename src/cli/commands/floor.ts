@@ -13,6 +13,7 @@ import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { floorSetFigure } from '../../plot/floor-set-figure.js';
+import type { GroundRecord } from '../../record/record.js';
 import { floorSpectrum } from '../../spectrum/floor.js';
 import { floorSpectrumSet, recordLabels } from '../../spectrum/floor-set.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
@@ -73,7 +74,7 @@ export async function runFloor(records: string | string[], options: FloorCliOpti
   const ground = applyProcessing(await loadRecord(source, options), options);
   const result = floorSpectrum(ground, building, grid, broadening);
   const groundSpectrum = responseSpectrum(ground, grid);
-  const assumptions = floorAssumptions(result, building, ground.dtS);
+  const assumptions = [...floorAssumptions(result, building, ground.dtS), ...processingNotes([ground])];
   const figure = () =>
     floorFigure({
       ground: groundSpectrum,
@@ -106,7 +107,7 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
   const grounds = [];
   for (const source of sources) grounds.push(applyProcessing(await loadRecord(source, options), options));
   const set = floorSpectrumSet(grounds, building, grid, broadening);
-  const assumptions = floorSetAssumptions(set, building);
+  const assumptions = [...floorSetAssumptions(set, building), ...processingNotes(grounds)];
   const labels = recordLabels(set.grounds);
   const figure = () =>
     floorSetFigure({ set, labels, building, methodDescription: METHOD_DESCRIPTIONS[set.method], axis });
@@ -117,6 +118,15 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
     figures: () => [['floor.svg', figure()]],
     summary: `floor spectra of ${grounds.length} records with their mean and envelope (T_b ${building.periodS} s), ${gridWords(grid.periodsS.length, grid.dampings.length)}`,
   });
+}
+
+/** The processing of each ground record before the building, one line a record that had any. */
+function processingNotes(grounds: readonly GroundRecord[]): string[] {
+  return grounds
+    .filter((g) => g.processing.length > 0)
+    .map(
+      (g) => `Ground record ${g.name} processed: ${g.processing.map((step) => step.description).join('; ')}.`,
+    );
 }
 
 /** Standard input at most once, and no file twice (it would count twice in the mean and envelope). */

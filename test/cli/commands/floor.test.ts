@@ -143,4 +143,15 @@ describe('quakesweep floor', () => {
       expect(expectOneLineFailure(result)).toMatch(message);
     });
   });
+
+  it('takes the processing options on the ground record, stated in the assumptions', async () => {
+    const plain = await folder.json('floor', ...record, ...building('1'));
+    const filtered = await folder.json('floor', ...record, ...building('1'), '--filter', 'highpass:6');
+    expect(filtered.record.processing.map((s: { operation: string }) => s.operation)).toContain('filter');
+    expect(filtered.assumptions.join(' ')).toMatch(/Ground record sine processed: high-pass Butterworth/);
+    // An order-4 high-pass at 6 Hz keeps (1/6)^4 ≈ 0.08% of the 1 Hz sine in each pass (closed
+    // form); the record's abrupt end keeps some higher frequencies, so only well under a tenth is asked.
+    expect(filtered.ground.pga_g).toBeLessThan(0.1 * plain.ground.pga_g);
+    expect(filtered.spectra[0].psa_g[0]).toBeLessThan(0.1 * plain.spectra[0].psa_g[0]);
+  });
 });
