@@ -3,7 +3,6 @@ import { ACCELERATION_UNITS, type AccelerationUnit, LENGTH_UNITS, type LengthUni
 import { integrateRecord } from '../record/integrate.js';
 import { PROCESSING_ORDER } from '../record/process.js';
 import type { GroundRecord } from '../record/record.js';
-import { exactDecimal } from './exact-decimal.js';
 import { notFiniteError } from './finite.js';
 
 /** What `quakesweep record` writes: the acceleration in `accelUnit`, and on request its integrals. */
@@ -22,7 +21,7 @@ export const INTEGRATION_NOTE =
 interface Column {
   name: string;
   values: Float64Array;
-  /** Factor from SI to the unit written (the text written reads back to the same SI double when it can). */
+  /** SI units in one unit written. */
   factor: number;
 }
 
@@ -65,6 +64,16 @@ export function recordHeader(
   ].map((line) => line.replace(/[\r\n]+/g, ' '));
 }
 
+/**
+ * A value in SI written in a unit of `factor` SI units: the shortest text that reads back to the
+ * same double in that unit (ECMA-262 Number::toString). It reads back to the same SI double
+ * (text × factor) in m/s² always, and in other units for values as they were read; a processed
+ * value in g may come back one rounding away (about 1e-16 relative), as no decimal may give it.
+ */
+function decimalIn(si: number, factor: number): string {
+  return String(factor === 1 ? si : si / factor);
+}
+
 /** Time of sample i at 12 significant digits, so that the column reads back with one uniform step. */
 function timeText(i: number, dtS: number): string {
   return String(Number((i * dtS).toPrecision(12)));
@@ -78,7 +87,7 @@ function rowTexts(record: GroundRecord, columns: readonly Column[]): string[][] 
     for (const c of columns) {
       const value = c.values[i];
       if (!Number.isFinite(value)) throw notFiniteError(`${c.name} at sample ${i + 1} = ${value}`);
-      row.push(exactDecimal(value, c.factor));
+      row.push(decimalIn(value, c.factor));
     }
     rows.push(row);
   }
@@ -125,7 +134,7 @@ export function recordToJson(record: GroundRecord, o: RecordOutputOptions) {
     length_unit: o.lengthUnit,
     ...(o.velocity || o.displacement ? { integration: INTEGRATION_NOTE } : {}),
     ...Object.fromEntries(
-      columns.map((c) => [c.name, Array.from(c.values, (value) => Number(exactDecimal(value, c.factor)))]),
+      columns.map((c) => [c.name, Array.from(c.values, (value) => Number(decimalIn(value, c.factor)))]),
     ),
   };
 }
