@@ -69,7 +69,7 @@ function checkHelpTopic(argv: string[]): void {
   const [first, topic] = argv;
   if (first !== 'help' || topic === undefined || topic.startsWith('-')) return;
   const names = COMMANDS.map(([name]) => name);
-  if (names.includes(topic) || topic === 'help') return;
+  if (names.includes(topic)) return;
   const near = closestName(topic, names);
   const hint = near === undefined ? `the commands are ${names.join(', ')}` : `did you mean '${near}'?`;
   throw usageError(`no command '${topic}' to explain; ${hint}`);
