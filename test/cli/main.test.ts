@@ -6,8 +6,8 @@
 import { chmodSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { writeFixtures } from '../helpers/fixtures.js';
 import { CAUTION } from '../../src/base/caution.js';
+import { writeFixtures } from '../helpers/fixtures.js';
 import { expectOneLineFailure, runMain } from '../helpers/run-cli.js';
 
 const f = writeFixtures();
