@@ -63,9 +63,9 @@ describe('recordToCsv', () => {
     expect(exact.accelMS2.length).toBe(processed.accelMS2.length);
     expect(Math.abs(exact.dtS - processed.dtS)).toBeLessThan(1e-12 * processed.dtS);
     const inG = read(recordToCsv(processed, asRead), 'g');
-    processed.accelMS2.forEach((a, i) =>
-      expect(Math.abs(inG.accelMS2[i] - a)).toBeLessThanOrEqual(2 * Number.EPSILON * Math.abs(a)),
-    );
+    processed.accelMS2.forEach((a, i) => {
+      expect(Math.abs(inG.accelMS2[i] - a)).toBeLessThanOrEqual(2 * Number.EPSILON * Math.abs(a));
+    });
     // Values as read in g come back bit for bit.
     const gRecord = readRecordText(recordToCsv(small, asRead), { source: 'x', units: 'g' });
     expect(gRecord.accelMS2).toEqual(small.accelMS2);

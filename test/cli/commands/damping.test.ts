@@ -62,8 +62,8 @@ describe('quakesweep damping', () => {
     expect(two.spectra).toEqual(one.spectra); // the same bits on any number of threads
     const js = await json(...args, '--kernel', 'js');
     // Both kernels give the same peaks to 1e-12 (DEVELOPERS.md, "The sweep kernel").
-    js.spectra[1].psa_g.forEach((v: number, i: number) =>
-      expect(Math.abs(v - one.spectra[1].psa_g[i])).toBeLessThan(1e-11 * one.spectra[1].psa_g[i]),
-    );
+    js.spectra[1].psa_g.forEach((v: number, i: number) => {
+      expect(Math.abs(v - one.spectra[1].psa_g[i])).toBeLessThan(1e-11 * one.spectra[1].psa_g[i]);
+    });
   });
 });

@@ -32,9 +32,9 @@ describe('quakesweep record', () => {
     expect(again.record.npts).toBe(direct.record.npts);
     expect(again.record.dt_s).toBeCloseTo(direct.record.dt_s, 15);
     // The same samples (to one rounding in g), so the same spectrum to 1e-12.
-    direct.spectra[0].psa_g.forEach((v: number, i: number) =>
-      expect(Math.abs(again.spectra[0].psa_g[i] - v)).toBeLessThan(1e-12 * v),
-    );
+    direct.spectra[0].psa_g.forEach((v: number, i: number) => {
+      expect(Math.abs(again.spectra[0].psa_g[i] - v)).toBeLessThan(1e-12 * v);
+    });
   });
 
   it('round trip: the file read back with quakesweep gives the same record, bit for bit in m/s²', async () => {
@@ -80,9 +80,9 @@ describe('quakesweep record', () => {
   it('--scale multiplies the processed record and states it', async () => {
     const plain = await json('record', ...read);
     const scaled = await json('record', ...read, '--scale', '2.5');
-    scaled.accel_g.forEach((value: number, i: number) =>
-      expect(value).toBeCloseTo(2.5 * plain.accel_g[i], 14),
-    );
+    scaled.accel_g.forEach((value: number, i: number) => {
+      expect(value).toBeCloseTo(2.5 * plain.accel_g[i], 14);
+    });
     expect(scaled.processing.map((s: { operation: string }) => s.operation)).toEqual(['scale']);
     expect(scaled.processing[0].description).toBe('amplitude × 2.5 (given with --scale)');
   });
