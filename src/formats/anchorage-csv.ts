@@ -11,13 +11,15 @@ export function anchorageToCsv(analysis: AnchorageAnalysis): string {
   const e = analysis.equipment;
   const { force, length, kNPerForce, mPerLength } = EQUIPMENT_UNITS[e.units];
   const f = (kN: number) => kN / kNPerForce;
+  // Notes are read by people: six significant figures there, every digit in the rows.
+  const shown = (kN: number) => String(Number(f(kN).toPrecision(6)));
   const a = analysis.anchors;
   const notes = [
     `equipment: ${e.name}; units ${e.units} (${force}, ${length})`,
-    `horizontal force for the anchors: ${f(analysis.horizontalForAnchorsKN)} ${force} (--demand ${analysis.demand}; governing ${analysis.governing})`,
-    `code force for the anchors: ${f(analysis.codeForAnchorsKN)} ${force}`,
-    ...(analysis.elasticKN === null ? [] : [`record elastic demand: ${f(analysis.elasticKN)} ${force}`]),
-    `vertical: ${f(analysis.verticalKN)} ${force}`,
+    `horizontal force for the anchors: ${shown(analysis.horizontalForAnchorsKN)} ${force} (--demand ${analysis.demand}; governing ${analysis.governing})`,
+    `code force for the anchors: ${shown(analysis.codeForAnchorsKN)} ${force}`,
+    ...(analysis.elasticKN === null ? [] : [`record elastic demand: ${shown(analysis.elasticKN)} ${force}`]),
+    `vertical: ${shown(analysis.verticalKN)} ${force}`,
     `anchor rule: ${a.rule}; directions in degrees counter-clockwise from +x`,
     ...analysis.assumptions.map((text) => `assumption: ${text}`),
   ];

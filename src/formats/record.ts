@@ -1,4 +1,4 @@
-import { CAUTION } from '../base/caution.js';
+import { CAUTION, cautionLines } from '../base/caution.js';
 import { ACCELERATION_UNITS, type AccelerationUnit, LENGTH_UNITS, type LengthUnit } from '../base/units.js';
 import { integrateRecord } from '../record/integrate.js';
 import { PROCESSING_ORDER } from '../record/process.js';
@@ -60,7 +60,7 @@ export function recordHeader(
     `columns: ${columns.join(', ')}; time in s from the first sample`,
     ...(o.velocity || o.displacement ? [INTEGRATION_NOTE] : []),
     `read back: quakesweep spectrum FILE --units ${o.accelUnit}${columns.length > 2 ? ' --column 2' : ''}`,
-    CAUTION,
+    ...cautionLines(),
   ].map((line) => line.replace(/[\r\n]+/g, ' '));
 }
 
