@@ -1,6 +1,7 @@
 import { Command, CommanderError } from 'commander';
-import { isQuakesweepError } from '../base/errors.js';
+import { isQuakesweepError, usageError } from '../base/errors.js';
 import { VERSION } from '../base/version.js';
+import { closestName } from './suggest.js';
 
 type Register = (program: Command) => void;
 
@@ -11,6 +12,7 @@ type Register = (program: Command) => void;
 const COMMANDS: [string, () => Promise<Register>][] = [
   ['spectrum', async () => (await import('./commands/spectrum.js')).registerSpectrum],
   ['info', async () => (await import('./commands/info.js')).registerInfo],
+  ['record', async () => (await import('./commands/record.js')).registerRecord],
   ['design', async () => (await import('./commands/design.js')).registerDesign],
   ['damping', async () => (await import('./commands/damping.js')).registerDamping],
   ['rotd', async () => (await import('./commands/rotd.js')).registerRotD],
@@ -54,11 +56,23 @@ export async function buildProgram(only?: string): Promise<Command> {
 /** Run the CLI; every failure becomes one line on stderr and an exit code, never a stack trace. */
 export async function main(argv: string[]): Promise<number> {
   try {
+    checkHelpTopic(argv);
     await (await buildProgram(argv[0])).parseAsync(argv, { from: 'user' });
     return 0;
   } catch (error) {
     return reportError(error);
   }
+}
+
+/** `help <topic>` names a command; anything else is refused (exit 2) with the nearest name, if any. */
+function checkHelpTopic(argv: string[]): void {
+  const [first, topic] = argv;
+  if (first !== 'help' || topic === undefined || topic.startsWith('-')) return;
+  const names = COMMANDS.map(([name]) => name);
+  if (names.includes(topic)) return;
+  const near = closestName(topic, names);
+  const hint = near === undefined ? `the commands are ${names.join(', ')}` : `did you mean '${near}'?`;
+  throw usageError(`no command '${topic}' to explain; ${hint}`);
 }
 
 /** What a failed file operation says, by its error code. */

@@ -65,6 +65,7 @@ export function dampingToJson(spectrum: Spectrum, comparison: DampingComparison,
 export function dampingToCsv(spectrum: Spectrum, comparison: DampingComparison): string {
   const notes = [
     `record: ${spectrum.record.name}; method: ${spectrum.method}`,
+    ...spectrum.record.processing.map((step) => `processing: ${step.description}`),
     `reference damping: ${dampingLabel(comparison.referenceDamping)}`,
     ...comparison.curves.map(({ damping, published }) => {
       const nh = published.newmarkHall;
@@ -82,6 +83,7 @@ export function dampingTable(spectrum: Spectrum, comparison: DampingComparison, 
   const widths = [7, 8, 8, 8, 8, 8];
   const out = [
     recordLine(spectrum.record),
+    ...spectrum.record.processing.map((step) => `        processed: ${step.description}`),
     `method  ${METHOD_DESCRIPTIONS[spectrum.method]}`,
     `ratios  PSA(ξ)/PSA(5%)${added ? ' (5% added as the reference)' : ''}`,
     '',

@@ -44,7 +44,10 @@ export function rotdToJson(spectra: RotDSpectra) {
 
 export function rotdToCsv(spectra: RotDSpectra): string {
   const header = [
-    ...spectra.records.map((r) => `record: ${r.name}; npts ${r.npts}; dt ${r.dtS} s`),
+    ...spectra.records.flatMap((r) => [
+      `record: ${r.name}; npts ${r.npts}; dt ${r.dtS} s`,
+      ...r.processing.map((step) => `processing of ${r.name}: ${step.description}`),
+    ]),
     `method: ${spectra.method}`,
     ...notes(spectra),
   ];
@@ -53,7 +56,10 @@ export function rotdToCsv(spectra: RotDSpectra): string {
 
 export function rotdTable(spectra: RotDSpectra): string {
   return terminalText([
-    ...spectra.records.map((r) => `${recordLine(r)}, ${pgaText(r.pgaMS2)}`),
+    ...spectra.records.flatMap((r) => [
+      `${recordLine(r)}, ${pgaText(r.pgaMS2)}`,
+      ...r.processing.map((step) => `        processed: ${step.description}`),
+    ]),
     `method  ${METHOD_DESCRIPTIONS[spectra.method]}`,
     ...notes(spectra).map((note) => `note    ${note}`),
     '',

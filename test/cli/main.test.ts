@@ -6,6 +6,7 @@
 import { chmodSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { CAUTION } from '../../src/base/caution.js';
 import { writeFixtures } from '../helpers/fixtures.js';
 import { expectOneLineFailure, runMain } from '../helpers/run-cli.js';
 
@@ -65,7 +66,8 @@ const CASES: Record<string, [string[], RegExp][]> = {
   info: [
     [['info'], /missing required argument/],
     [['info', f.h1], /units are required/],
-    [['info', f.h1, '--units', 'g', '--format', 'csv'], /--format/],
+    [['info', f.h1, '--units', 'g', '--format', 'xml'], /--format/],
+    [['info', f.h1, '--units', 'g', '--format', 'json', '--out', 'x.csv'], /contradicts/],
     [['info', f.h1, '--units', 'g', '--bracket-threshold', '-1'], /--bracket-threshold/],
     [['info', f.h1, '--units', 'g', '--smoothing', 'wide'], /--smoothing/],
     [['info', missing, '--units', 'g'], /no such file/],
@@ -141,7 +143,7 @@ const CASES: Record<string, [string[], RegExp][]> = {
     [['anchor', '--equipment', f.equipment, '--record', f.h1], /units are required/],
     [['anchor', '--equipment', f.equipment, '--spectrum', f.h1], /./],
     [['anchor', '--equipment', f.equipment, '--spectrum', missing], /no such file/],
-    [['anchor', '--equipment', f.equipment, '--format', 'csv'], /--format/],
+    [['anchor', '--equipment', f.equipment, '--format', 'xml'], /--format/],
   ],
   synth: [
     [['synth', '--dt', '0'], /--dt/],
@@ -149,9 +151,21 @@ const CASES: Record<string, [string[], RegExp][]> = {
     [['synth', '--duration', 'long'], /--duration/],
     [['synth', '--out', join(missing, 'x.csv')], /does not exist/],
   ],
+  record: [
+    [['record'], /missing required argument/],
+    [['record', f.h1], /units are required/],
+    [['record', f.h1, '--units', 'g', '--with', 'jerk'], /--with/],
+    [['record', f.h1, '--units', 'g', '--format', 'xml'], /--format/],
+    [['record', f.h1, '--units', 'g', '--out', join(missing, 'x.csv')], /does not exist/],
+    [['record', f.h1, '--units', 'g', '--out', f.h1], /refusing to overwrite the input/],
+    [['record', missing, '--units', 'g'], /no such file/],
+  ],
   program: [
     [['bogus'], /unknown command/],
     [['--frobnicate'], /unknown option/],
+    [['help', 'spectrun'], /^quakesweep: no command 'spectrun' to explain; did you mean 'spectrum'\?$/],
+    [['help', 'flor'], /did you mean 'floor'\?/],
+    [['help', 'xyzzy'], /no command 'xyzzy' to explain; the commands are spectrum, info, record, /],
   ],
 };
 
@@ -169,6 +183,43 @@ describe('every bad invocation gives exit 2 and one line', () => {
         }
       }
       expect(wrong).toEqual([]);
+    });
+  }
+});
+
+describe('help', () => {
+  it('explains a command by name, and the program without one (exit 0)', async () => {
+    const one = await runMain(['help', 'record']);
+    expect(one.code).toBe(0);
+    expect(one.stdout).toMatch(/Usage: quakesweep record/);
+    expect((await runMain(['help'])).code).toBe(0);
+  });
+});
+
+/** One successful run of every command here (batch and merge have their own tests). */
+const SUCCESSES: Record<string, string[]> = {
+  spectrum: ['spectrum', f.h1, '--units', 'g', '--periods', '0,0.5'],
+  info: ['info', f.h1, '--units', 'g', '--format', 'csv'],
+  record: ['record', f.h1, '--units', 'g', '--format', 'csv'],
+  design: ['design', ...asce, '--periods', '0.5,1'],
+  damping: ['damping', f.h1, '--units', 'g', '--periods', '0.5'],
+  rotd: ['rotd', f.h1, f.h2, '--units', 'g', '--periods', '0.5', '--format', 'json'],
+  floor: ['floor', f.h1, '--units', 'g', ...bldg, '--periods', '0.5', '--format', 'csv'],
+  ductility: ['ductility', f.h1, '--units', 'g', '--periods', '0.5', '--ductility', '2'],
+  anchor: ['anchor', '--equipment', f.equipment, '--format', 'csv'],
+  synth: ['synth', '--duration', '2'],
+  report: ['report', f.h1, '--units', 'g', '--periods', '0.2,0.5', '--out', join(f.dir, 'report')],
+};
+
+describe('every command ends a success with a summary and the caution on stderr', () => {
+  for (const [command, argv] of Object.entries(SUCCESSES)) {
+    it(command, async () => {
+      const result = await runMain(argv);
+      expect(result.code).toBe(0);
+      const lines = result.stderr.split('\n').filter((line) => line !== '');
+      expect(lines).toHaveLength(2);
+      expect(lines[0]).toMatch(/^quakesweep: done: \S.*; wrote \S/);
+      expect(lines[1]).toBe(`quakesweep: caution: ${CAUTION}`);
     });
   }
 });

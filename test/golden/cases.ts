@@ -91,6 +91,21 @@ export const GOLDEN_CASES: GoldenCase[] = [
     argv: w(`spectrum ${H2} --units g ${GRID} --target IN/target.csv --format csv`),
   },
   { name: 'info-table', argv: w(`info ${H1} --units g`) },
+  { name: 'info-csv-by-extension', argv: w(`info ${H1} --units g --baseline linear --out OUT/i.csv`) },
+  {
+    name: 'record-csv-processed-with-histories',
+    argv: w(
+      `record IN/gen-a.csv --units g --baseline linear --filter highpass:0.1 --with velocity,displacement --length-unit cm --out OUT/p.csv`,
+    ),
+  },
+  { name: 'record-txt-resampled', argv: w(`record IN/gen-b.csv --units g --resample 0.01 --out OUT/p.txt`) },
+  {
+    name: 'record-json-scaled-to-target',
+    argv: w(
+      `record IN/gen-a.csv --units g ${GRID} --target asce7-16:sds=1.0,sd1=0.6,tl=8 --apply-scale --accel-unit m/s2 --format json`,
+    ),
+  },
+  { name: 'record-wrapped-stdout', argv: w(`record ${WRAPPED} --scale 0.5`) },
   { name: 'info-json-svg', argv: w(`info ${H2} --units g --out OUT/i.json --svg OUT`) },
   {
     name: 'info-wrapped-json',
@@ -248,6 +263,10 @@ export const GOLDEN_CASES: GoldenCase[] = [
     argv: w(`ductility ${H1} --units g --strength 2 --ductility 1,2`),
   },
   { name: 'anchor-code-table', argv: w('anchor --equipment IN/equipment-generator.json --units g') },
+  {
+    name: 'anchor-code-csv',
+    argv: w('anchor --equipment IN/equipment-cabinet-floor4.json --demand code --out OUT/a.csv'),
+  },
   {
     name: 'anchor-record-json-svg',
     argv: w(

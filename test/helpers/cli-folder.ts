@@ -7,7 +7,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, expect } from 'vitest';
-import { type CliResult, runMainIn } from './run-cli.js';
+import { besidesSuccess, type CliResult, runMainIn } from './run-cli.js';
 
 export interface CliFolder {
   /** The folder's path (empty until the file's beforeAll ran). */
@@ -27,7 +27,7 @@ export function useCliFolder(prefix: string, setup: (folder: CliFolder) => void 
     run: (...args) => runMainIn(path, args),
     async json(...args) {
       const result = await runMainIn(path, [...args, '--format', 'json']);
-      expect(result.stderr).toBe('');
+      expect(besidesSuccess(result.stderr)).toBe('');
       expect(result.code).toBe(0);
       return JSON.parse(result.stdout);
     },

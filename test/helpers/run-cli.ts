@@ -57,9 +57,11 @@ export function runChild(
   };
 }
 
-/** The lines of stderr that are not warnings. */
+/** The lines of stderr that are neither warnings nor the two lines of a success. */
 export function errorLines(stderr: string): string[] {
-  return stderr.split('\n').filter((line) => line !== '' && !line.startsWith('quakesweep: warning: '));
+  return besidesSuccess(stderr)
+    .split('\n')
+    .filter((line) => line !== '' && !line.startsWith('quakesweep: warning: '));
 }
 
 /** What a stack trace or a raw exception looks like on stderr. */
@@ -88,4 +90,9 @@ export async function runMainIn(cwd: string, argv: string[]): Promise<CliResult>
   } finally {
     process.chdir(before);
   }
+}
+
+/** Standard error without the two lines every success ends with (what was written, the caution). */
+export function besidesSuccess(stderr: string): string {
+  return stderr.replace(/^quakesweep: (done|caution): .*\n/gm, '');
 }

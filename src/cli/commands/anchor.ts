@@ -4,13 +4,16 @@ import { analyseAnchorage, parseDemandChoice } from '../../anchorage/anchorage.j
 import { parseAnchorRule } from '../../anchorage/bolt-group.js';
 import { parseEquipment } from '../../anchorage/equipment.js';
 import { usageError } from '../../base/errors.js';
+import { anchorageToCsv } from '../../formats/anchorage-csv.js';
 import { anchorageToJson } from '../../formats/anchorage-json.js';
 import { anchorPlanInput } from '../../formats/anchorage-plan.js';
 import { anchorTable } from '../../formats/anchorage-table.js';
 import { parseMethod } from '../../oscillator/recurrence.js';
 import { anchorPlanSvg } from '../../plot/anchor-plan-figure.js';
+import { count } from '../announce.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { elasticFromOptions, type MotionCliOptions } from '../options/motion.js';
+import { addProcessingOptions } from '../options/processing.js';
 import { addRecordOptions } from '../options/record.js';
 
 export interface AnchorCliOptions extends MotionCliOptions, OutputCliOptions {
@@ -50,16 +53,13 @@ export function registerAnchor(program: Command): void {
       'projected',
     );
   addRecordOptions(command);
-  addOutputOptions(
-    command,
-    'json or table (default: table on the terminal, json with --out)',
-    'also write the anchor plan view, DIR/anchor-plan.svg',
-  ).action(runAnchor);
+  addProcessingOptions(command);
+  addOutputOptions(command, 'also write the anchor plan view, DIR/anchor-plan.svg').action(runAnchor);
 }
 
 export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   if (options.equipment === undefined) throw usageError('--equipment <file> is required');
-  outputFormat(options, 'json or table');
+  outputFormat(options);
   const records = options.record ?? [];
   if (records.length > 0 && options.spectrum !== undefined)
     throw usageError('give --record or --spectrum, not both');
@@ -75,7 +75,9 @@ export async function runAnchor(options: AnchorCliOptions): Promise<void> {
   const inputs = [options.equipment, ...records, ...(options.spectrum ? [options.spectrum] : [])];
   await writeProduct(inputs, options, {
     json: () => anchorageToJson(analysis),
+    csv: () => anchorageToCsv(analysis),
     table: () => anchorTable(analysis),
     figures: () => [['anchor-plan.svg', anchorPlanSvg(anchorPlanInput(analysis))]],
+    summary: `anchor demands of ${analysis.equipment.name}, ${count(analysis.anchors.perAnchor.length, 'anchor')} (${analysis.governing} force governs)`,
   });
 }

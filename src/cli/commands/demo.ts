@@ -4,6 +4,7 @@ import type { Command } from 'commander';
 import { cautionLines } from '../../base/caution.js';
 import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
+import { announceSuccess, count } from '../announce.js';
 import { demoReport, recordsFolder, shown } from '../options/demo-scenario.js';
 import { optionWords, reportRequest } from '../options/report.js';
 
@@ -21,7 +22,8 @@ export async function runDemo({ out }: { out: string }): Promise<void> {
   // The report states the report command that makes the same report.
   const words = ['report', source, ...optionWords(options)];
   const { request, inputs } = await reportRequest(source, options, words);
-  new OutputSet(inputs).folder(out, await assembleReport(request)).write();
+  const files = Array.from(await assembleReport(request));
+  new OutputSet(inputs).folder(out, files).write();
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   const spectra = JSON.parse(readFileSync(join(out, 'spectra.json'), 'utf8'));
   const lines = cautionLines(92).map((line) => `! ${line}`);
@@ -59,4 +61,5 @@ export async function runDemo({ out }: { out: string }): Promise<void> {
   lines.push('', `report written in ${seconds} s: ${shown(resolve(out, 'report.html'))}`);
   lines.push('open it in a browser; it needs no network and prints on A4 or letter.');
   process.stdout.write(`${lines.join('\n')}\n`);
+  announceSuccess('report of the invented demo scenario', [`${count(files.length, 'file')} in ${out}`]);
 }

@@ -3,6 +3,7 @@ import { designTable, designToCsv, designToJson } from '../../formats/design.js'
 import { defaultPeriodsS } from '../../oscillator/grid.js';
 import { designFigure } from '../../plot/design-figure.js';
 import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
+import { count } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../options/design.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
@@ -22,17 +23,15 @@ export function registerDesign(program: Command): void {
     )
     .option('--frequencies <grid>', FREQUENCIES_HELP);
   addAxisOption(command);
-  addOutputOptions(
-    command,
-    'json or csv (default: a table on the terminal, or json with --out)',
-    'also draw the spectrum, DIR/design.svg (PSA against T or f, log–log)',
-  ).action(runDesign);
+  addOutputOptions(command, 'also draw the spectrum, DIR/design.svg (PSA against T or f, log–log)').action(
+    runDesign,
+  );
 }
 
 export async function runDesign(
   options: DesignCliOptions & OutputCliOptions & AxisCliOptions,
 ): Promise<void> {
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axis = svgAxisFromOptions(options);
   const spectrum = designFromOptions(options);
   const periodsS = designPeriods(spectrum, options);
@@ -43,6 +42,7 @@ export async function runDesign(
     csv: () => designToCsv(spectrum, periodsS, psaG),
     table: () => designTable(spectrum, periodsS, psaG),
     figures: () => [['design.svg', designFigure({ spectrum, periodsS, psaG, axis })]],
+    summary: `${spectrum.vertical ? 'vertical ' : ''}design spectrum (${spectrum.code}), ${count(periodsS.length, 'period')}`,
   });
 }
 

@@ -15,6 +15,7 @@ import { ductilityFigures } from '../../plot/ductility-figure.js';
 import type { PeriodAxis } from '../../plot/period-axis.js';
 import type { GroundRecord } from '../../record/record.js';
 import { ductilityDemandOnThreads, ductilitySpectraOnThreads } from '../../threads/ductility-pool.js';
+import { gridWords } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { FREQUENCIES_HELP, type GridCliOptions, gridFromOptions } from '../options/grid.js';
@@ -27,7 +28,7 @@ import {
 } from '../options/inelastic.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
-import { parseThreads } from '../options/threads.js';
+import { addThreadOptions, parseThreads } from '../options/threads.js';
 
 export interface DuctilityCliOptions
   extends RecordCliOptions,
@@ -62,12 +63,11 @@ export function registerDuctility(program: Command): void {
     .option(
       '--force',
       `allow more than ${String(MAX_OSCILLATORS).replace(/\B(?=(\d{3})+(?!\d))/g, ',')} oscillators (periods × dampings)`,
-    )
-    .option('--threads <n>', 'threads for the strength search (default: all cores)');
+    );
+  addThreadOptions(command, false);
   addAxisOption(command);
   addOutputOptions(
     command,
-    'json or csv (default: a table on the terminal, or json with --out)',
     'also draw the figures: DIR/ductility-ay.svg and DIR/ductility-ry.svg, or with --strength DIR/ductility-demand.svg',
   ).action((source: string, options: DuctilityCliOptions, self: Command) =>
     runDuctility(source, options, self.getOptionValueSource('ductility') === 'cli'),
@@ -94,7 +94,7 @@ export async function runDuctility(
 ): Promise<void> {
   const request = requestFromOptions(options, ductilityGiven);
   const threads = options.threads === undefined ? 'auto' : parseThreads(options.threads);
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axis = svgAxisFromOptions(options);
   const record = applyProcessing(await loadRecord(source, options), options);
   const result = await computeSpectra(record, request, threads);
@@ -106,6 +106,7 @@ export async function runDuctility(
     table: () =>
       'ductility' in result ? ductilityTable(result.ductility) : ductilityDemandTable(result.demand),
     figures: () => figuresOf(result, axis),
+    summary: `${'ductility' in result ? 'constant-ductility spectra' : 'ductility demand'} of ${record.name}, ${gridWords(request.periodsS.length, request.dampings.length)}`,
   });
 }
 

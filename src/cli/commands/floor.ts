@@ -12,17 +12,21 @@ import {
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { floorSetFigure } from '../../plot/floor-set-figure.js';
+import type { GroundRecord } from '../../record/record.js';
 import { FLOOR_METHOD_DESCRIPTION, floorSpectrum } from '../../spectrum/floor.js';
 import { floorSpectrumSet, recordLabels } from '../../spectrum/floor-set.js';
 import { responseSpectrum } from '../../spectrum/spectrum.js';
+import { gridWords } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from '../options/building.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 
 export interface FloorCliOptions
   extends RecordCliOptions,
+    ProcessingCliOptions,
     GridCliOptions,
     BuildingCliOptions,
     OutputCliOptions,
@@ -39,6 +43,7 @@ export function registerFloor(program: Command): void {
       'ground record files (read alike), - for standard input once; several give each floor spectrum, their mean and envelope',
     );
   addRecordOptions(command);
+  addProcessingOptions(command);
   addGridOptions(command);
   command
     .option('--building-period <seconds>', "the building's fundamental period T_b, s (required)")
@@ -51,7 +56,6 @@ export function registerFloor(program: Command): void {
   addAxisOption(command);
   addOutputOptions(
     command,
-    'json or csv (default: a summary table on the terminal, or json with --out)',
     'also draw the floor spectrum against the ground spectrum (several records: each, the mean and the envelope), DIR/floor.svg',
   ).action(runFloor);
 }
@@ -64,12 +68,12 @@ export async function runFloor(records: string | string[], options: FloorCliOpti
   const grid = gridFromOptions(options);
   const building = buildingFromOptions(options);
   const broadening = broadeningFromOptions(options.broaden);
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axis = svgAxisFromOptions(options);
-  const ground = await loadRecord(source, options);
+  const ground = applyProcessing(await loadRecord(source, options), options);
   const result = floorSpectrum(ground, building, grid, broadening);
   const groundSpectrum = responseSpectrum(ground, grid);
-  const assumptions = floorAssumptions(result);
+  const assumptions = [...floorAssumptions(result), ...processingNotes([ground])];
   const figure = () =>
     floorFigure({
       ground: groundSpectrum,
@@ -85,6 +89,7 @@ export async function runFloor(records: string | string[], options: FloorCliOpti
     csv: () => spectrumToCsv(result.spectrum, { lengthUnit: 'm' }),
     table: () => floorTable(result.spectrum, groundSpectrum, building, assumptions),
     figures: () => [['floor.svg', figure()]],
+    summary: `floor spectrum of ${ground.name} (T_b ${building.periodS} s), ${gridWords(grid.periodsS.length, grid.dampings.length)}`,
   });
 }
 
@@ -96,12 +101,12 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
   const grid = gridFromOptions(options);
   const building = buildingFromOptions(options);
   const broadening = broadeningFromOptions(options.broaden);
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axis = svgAxisFromOptions(options);
   const grounds = [];
-  for (const source of sources) grounds.push(await loadRecord(source, options));
+  for (const source of sources) grounds.push(applyProcessing(await loadRecord(source, options), options));
   const set = floorSpectrumSet(grounds, building, grid, broadening);
-  const assumptions = floorSetAssumptions(set);
+  const assumptions = [...floorSetAssumptions(set), ...processingNotes(grounds)];
   const labels = recordLabels(set.grounds);
   const figure = () =>
     floorSetFigure({ set, labels, building, methodDescription: FLOOR_METHOD_DESCRIPTION, axis });
@@ -110,7 +115,17 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
     csv: () => floorSetToCsv(set, assumptions),
     table: () => floorSetTable(set, building, assumptions),
     figures: () => [['floor.svg', figure()]],
+    summary: `floor spectra of ${grounds.length} records with their mean and envelope (T_b ${building.periodS} s), ${gridWords(grid.periodsS.length, grid.dampings.length)}`,
   });
+}
+
+/** The processing of each ground record before the building, one line a record that had any. */
+function processingNotes(grounds: readonly GroundRecord[]): string[] {
+  return grounds
+    .filter((g) => g.processing.length > 0)
+    .map(
+      (g) => `Ground record ${g.name} processed: ${g.processing.map((step) => step.description).join('; ')}.`,
+    );
 }
 
 /** Standard input at most once, and no file twice (it would count twice in the mean and envelope). */

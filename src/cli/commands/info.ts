@@ -1,10 +1,12 @@
 import type { Command } from 'commander';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { infoTable, infoToJson } from '../../formats/info.js';
+import { infoToCsv } from '../../formats/info-csv.js';
 import { KONNO_OHMACHI_DEFAULT_B } from '../../record/fourier.js';
 import { groundMotionMeasures } from '../../record/measures.js';
 import { recordFigures } from '../../report/record-figures.js';
 import { predominantPeriod } from '../../spectrum/predominant.js';
+import { count } from '../announce.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
@@ -21,8 +23,7 @@ export function registerInfo(program: Command): void {
     .argument('<record>', 'record file, or - for standard input');
   addRecordOptions(command);
   addProcessingOptions(command);
-  addOutputOptions(command, 'table or json (default: table on the terminal, json with --out)')
-    .option('--svg <dir>', 'also draw histories.svg, husid.svg and fourier.svg into this folder')
+  addOutputOptions(command, 'also draw histories.svg, husid.svg and fourier.svg into this folder')
     .option('--bracket-threshold <g>', 'threshold of the bracketed duration, g', '0.05')
     .option(
       '--smoothing <b>',
@@ -33,7 +34,7 @@ export function registerInfo(program: Command): void {
 }
 
 export async function runInfo(source: string, options: InfoCliOptions): Promise<void> {
-  outputFormat(options, 'table or json');
+  outputFormat(options);
   const thresholdG = positiveNumber('--bracket-threshold', options.bracketThreshold ?? '0.05');
   const smoothingText = options.smoothing ?? String(KONNO_OHMACHI_DEFAULT_B);
   const smoothing =
@@ -44,7 +45,9 @@ export async function runInfo(source: string, options: InfoCliOptions): Promise<
   const json = infoToJson(record, measures, predominant);
   await writeProduct([source], options, {
     json: () => json,
+    csv: () => infoToCsv(json),
     table: () => infoTable(json),
     figures: () => recordFigures(record, measures, smoothing),
+    summary: `ground-motion measures of ${record.name}, ${count(record.accelMS2.length, 'sample')} at ${record.dtS} s`,
   });
 }

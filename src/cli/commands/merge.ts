@@ -6,6 +6,7 @@ import { sanitiseName } from '../../batch/names.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { SHARD_FORMAT, type ShardJson, suiteJson } from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
+import { announceSuccess } from '../announce.js';
 
 export function registerMerge(program: Command): void {
   program
@@ -77,7 +78,5 @@ export function runMerge(dirs: string[], { out }: { out: string }): void {
   const failed = shards.flatMap((shard) => shard.json.failed);
   const suite = join(out, 'suite.json');
   outputs.file(suite, formatJson(suiteJson(records, failed, first.settings))).write();
-  process.stderr.write(
-    `quakesweep: merged ${count} shards: ${records.length} records, ${failed.length} failed; ${suite}\n`,
-  );
+  announceSuccess(`merged ${count} shards: ${records.length} records, ${failed.length} failed`, [suite]);
 }

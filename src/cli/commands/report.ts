@@ -1,6 +1,8 @@
+import { join } from 'node:path';
 import type { Command } from 'commander';
 import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
+import { announceSuccess, count } from '../announce.js';
 import { addAxisOption } from '../options/axis.js';
 import { addGridOptions } from '../options/grid.js';
 import { addProcessingOptions } from '../options/processing.js';
@@ -75,5 +77,9 @@ export async function runReport(
   commandLine: string[],
 ): Promise<void> {
   const { request, inputs, out } = await reportRequest(source, options, commandLine);
-  new OutputSet(inputs).folder(out, await assembleReport(request)).write();
+  const files = Array.from(await assembleReport(request));
+  new OutputSet(inputs).folder(out, files).write();
+  announceSuccess(`calculation report of ${request.read.name}`, [
+    `${count(files.length, 'file')} in ${out} (open ${join(out, 'report.html')})`,
+  ]);
 }

@@ -5,13 +5,20 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { rotdFigure } from '../../plot/rotd-figure.js';
 import { rotdThreads } from '../../spectrum/spectrum.js';
 import { rotDSpectraParallel } from '../../threads/rotd-pool.js';
+import { gridWords } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addOutputOptions, type OutputCliOptions, outputFormat, writeProduct } from '../options/format.js';
 import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options/grid.js';
+import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, positiveNumber, type RecordCliOptions } from '../options/record.js';
-import { parseThreads } from '../options/threads.js';
+import { addThreadOptions, parseThreads } from '../options/threads.js';
 
-export interface RotDCliOptions extends RecordCliOptions, GridCliOptions, OutputCliOptions, AxisCliOptions {
+export interface RotDCliOptions
+  extends RecordCliOptions,
+    ProcessingCliOptions,
+    GridCliOptions,
+    OutputCliOptions,
+    AxisCliOptions {
   angleStep?: string;
   threads?: string;
 }
@@ -23,27 +30,24 @@ export function registerRotD(program: Command): void {
     .argument('<first>', 'first horizontal component, or - for standard input')
     .argument('<second>', 'second horizontal component (same time step), at right angles to the first');
   addRecordOptions(command);
+  addProcessingOptions(command);
   addGridOptions(command);
   command.option('--angle-step <degrees>', 'rotation step over 0–180°, at most 1° and a divisor of 180', '1');
   addAxisOption(command);
-  addOutputOptions(
-    command,
-    'json or csv (default: a table on the terminal, or json with --out)',
-    'also draw RotD50, RotD100 and the geometric mean, DIR/rotd.svg',
-  )
-    .option('--threads <n>', 'threads (default: all cores for a large job; small ones use one)')
-    .action(runRotD);
+  addOutputOptions(command, 'also draw RotD50, RotD100 and the geometric mean, DIR/rotd.svg').action(runRotD);
+  addThreadOptions(command, false);
 }
 
 export async function runRotD(first: string, second: string, options: RotDCliOptions): Promise<void> {
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axis = svgAxisFromOptions(options);
   if (first === '-' && second === '-')
     throw usageError('only one of the two components can be standard input');
   const grid = gridFromOptions(options);
   const angleStepDeg = positiveNumber('--angle-step', options.angleStep ?? '1');
-  const one = await loadRecord(first, options);
-  const two = await loadRecord(second, options);
+  // The same processing on both components, each step stated with its record.
+  const one = applyProcessing(await loadRecord(first, options), options);
+  const two = applyProcessing(await loadRecord(second, options), options);
   const samples = Math.max(one.accelMS2.length, two.accelMS2.length);
   const threads =
     options.threads === undefined
@@ -57,5 +61,6 @@ export async function runRotD(first: string, second: string, options: RotDCliOpt
     figures: () => [
       ['rotd.svg', rotdFigure({ spectra, methodDescription: METHOD_DESCRIPTIONS[spectra.method], axis })],
     ],
+    summary: `RotD50, RotD100 and geometric mean of ${spectra.records[0].name} and ${spectra.records[1].name}, ${gridWords(spectra.periodsS.length, spectra.curves.length)}`,
   });
 }

@@ -9,6 +9,7 @@ import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { checkFolder } from '../../output/output-set.js';
 import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
 import { fitTarget, targetOverlay, targetRecord } from '../../spectrum/target.js';
+import { gridWords } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import {
   addOutputOptions,
@@ -21,7 +22,7 @@ import { addGridOptions, type GridCliOptions, gridFromOptions } from '../options
 import { addProcessingOptions, applyProcessing, type ProcessingCliOptions } from '../options/processing.js';
 import { addRecordOptions, loadRecord, type RecordCliOptions } from '../options/record.js';
 import { addTargetOptions, type TargetCliOptions, targetFromOptions } from '../options/target.js';
-import { sweepFromOptions } from '../options/threads.js';
+import { addThreadOptions, sweepFromOptions } from '../options/threads.js';
 
 export interface SpectrumCliOptions
   extends RecordCliOptions,
@@ -47,7 +48,7 @@ export function registerSpectrum(program: Command): void {
   addGridOptions(command);
   addTargetOptions(command);
   addAxisOption(command);
-  addOutputOptions(command, 'json or csv (default: a summary table on the terminal, or json with --out)')
+  addOutputOptions(command)
     .option(
       '--length-unit <unit>',
       'length unit for CSV, figures and the terminal summary: m, cm, mm, in, ft',
@@ -62,15 +63,14 @@ export function registerSpectrum(program: Command): void {
       '--histories',
       'with --svg, also write histories.svg (ground acceleration, velocity, displacement)',
     )
-    .option('--threads <n>', 'threads for a large sweep (default: all cores; small sweeps use one)')
-    .option('--kernel <kernel>', 'sweep kernel: auto (WebAssembly SIMD where available), wasm or js', 'auto')
     .action(runSpectrum);
+  addThreadOptions(command);
 }
 
 export async function runSpectrum(source: string, options: SpectrumCliOptions): Promise<void> {
   const grid = gridFromOptions(options);
   const lengthUnit = parseLengthUnit(options.lengthUnit ?? 'm');
-  outputFormat(options, 'json or csv');
+  outputFormat(options);
   const axes = figureAxes(options.axes);
   const axis = svgAxisFromOptions(options);
   if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
@@ -100,5 +100,6 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
       );
       return figures.map((f): [string, string] => [f.file, f.svg]);
     },
+    summary: `spectra of ${spectrum.record.name}, ${gridWords(spectrum.periodsS.length, spectrum.curves.length)}${fit === undefined ? '' : ', fitted to the target'}`,
   });
 }

@@ -3,6 +3,7 @@ import { CAUTION } from '../../base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { OutputSet } from '../../output/output-set.js';
 import { type SynthOptions, synthesizeRecord } from '../../record/synth.js';
+import { announceSuccess } from '../announce.js';
 import { positiveNumber, wholeNumber } from '../options/record.js';
 
 type SynthNumber =
@@ -45,6 +46,9 @@ export function registerSynth(program: Command): void {
         synth[field] = positiveNumber(option.long as string, options[option.attributeName()]);
       }
       new OutputSet().text(options.out, synthText(synth)).write();
+      announceSuccess(`seeded stochastic record (seed ${synth.seed}), not for design`, [
+        options.out ?? 'csv on standard output',
+      ]);
     });
 }
 

@@ -1,7 +1,9 @@
+import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { OutputSet } from '../../output/output-set.js';
+import { announceSuccess } from '../announce.js';
 
 /** --format, --out and --svg as commander hands them over. */
 export interface OutputCliOptions {
@@ -10,27 +12,45 @@ export interface OutputCliOptions {
   svg?: string;
 }
 
-/** Add --format (described by `formatHelp`), --out and, when `svgHelp` is given, --svg <dir>. */
-export function addOutputOptions(command: Command, formatHelp: string, svgHelp?: string): Command {
+/** The formats of a command's main product; every command writes all three. */
+export type OutputFormat = 'table' | 'json' | 'csv';
+
+/** The format a file name's extension stands for, when --format is not given. */
+const FORMAT_BY_EXTENSION: ReadonlyMap<string, OutputFormat> = new Map([
+  ['.csv', 'csv'],
+  ['.json', 'json'],
+  ['.txt', 'table'],
+]);
+
+/** The help of --format, the same on every command. */
+export const FORMAT_HELP =
+  'table, json or csv (default: a table on the terminal; with --out, by its extension .csv, .json or .txt, else json)';
+
+/** Add --format, --out and, when `svgHelp` is given, --svg <dir>. */
+export function addOutputOptions(command: Command, svgHelp?: string): Command {
   command
-    .option('--format <format>', formatHelp)
+    .option('--format <format>', FORMAT_HELP)
     .option('--out <path>', 'write to this file instead of standard output');
   return svgHelp === undefined ? command : command.option('--svg <dir>', svgHelp);
 }
 
 /**
- * Check --format: by default a table on the terminal, or json with --out; else the table or one of
- * the formats `offered` lists, in the command's words ("json or csv"), which the refusal repeats.
+ * The format of the main product: --format when given (it must agree with the extension of --out,
+ * when that names a format), else the one the extension of --out names, else json into a file and
+ * a table on the terminal.
  */
-export function outputFormat(options: OutputCliOptions, offered: string): string {
-  const format = chosenFormat(options);
-  if (format !== 'table' && !offered.split(' or ').includes(format))
-    throw usageError(`--format '${format}': use ${offered}`);
+export function outputFormat(options: OutputCliOptions): OutputFormat {
+  const byExtension =
+    options.out === undefined ? undefined : FORMAT_BY_EXTENSION.get(extname(options.out).toLowerCase());
+  if (options.format === undefined) return byExtension ?? (options.out === undefined ? 'table' : 'json');
+  const format = options.format.trim().toLowerCase();
+  if (format !== 'table' && format !== 'json' && format !== 'csv')
+    throw usageError(`--format '${options.format}': use table, json or csv`);
+  if (byExtension !== undefined && byExtension !== format)
+    throw usageError(
+      `--format ${format} contradicts --out ${options.out} (a ${byExtension} name); change one of them`,
+    );
   return format;
-}
-
-function chosenFormat(options: OutputCliOptions): string {
-  return options.format ?? (options.out === undefined ? 'table' : 'json');
 }
 
 /** The value of --axes: log or linear. */
@@ -43,28 +63,35 @@ export function figureAxes(axes = 'log'): 'log' | 'linear' {
 export interface Product {
   /** The JSON value (written by formatJson). */
   json(): unknown;
-  csv?(): string;
+  csv(): string;
   table(): string;
   figures(): Iterable<[string, string]> | Promise<Iterable<[string, string]>>;
+  /** What was made, in a few words for the line on standard error ("PSA of h1, 61 periods × 1 damping"). */
+  summary: string;
 }
 
 /**
- * Write a command's product, in the format checked by outputFormat, to --out (or standard output)
- * and, with --svg, its figures, after checking them all against each other and the `inputs`.
+ * Write a command's product, in the format of outputFormat, to --out (or standard output) and,
+ * with --svg, its figures, after checking them all against each other and the `inputs`; then say
+ * on standard error what was written, with the caution.
  */
 export async function writeProduct(
   inputs: readonly string[],
   options: OutputCliOptions,
   product: Product,
 ): Promise<void> {
-  const format = chosenFormat(options);
+  const format = outputFormat(options);
   const outputs = new OutputSet(inputs);
-  if (options.svg !== undefined) outputs.folder(options.svg, await product.figures(), '--svg');
+  const figures = options.svg === undefined ? [] : Array.from(await product.figures());
+  if (options.svg !== undefined) outputs.folder(options.svg, figures, '--svg');
   const text =
-    format === 'json'
-      ? formatJson(product.json())
-      : format === 'csv' && product.csv
-        ? product.csv()
-        : product.table();
+    format === 'json' ? formatJson(product.json()) : format === 'csv' ? product.csv() : product.table();
   outputs.text(options.out, text).write();
+  const written = [
+    options.out === undefined ? `${format} on standard output` : `${options.out} (${format})`,
+    ...(options.svg === undefined
+      ? []
+      : [`${figures.length} figure${figures.length === 1 ? '' : 's'} in ${options.svg}`]),
+  ];
+  announceSuccess(product.summary, written);
 }

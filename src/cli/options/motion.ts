@@ -3,11 +3,12 @@ import { recordPsaForComponent } from '../../anchorage/elastic-demand.js';
 import { EQUIPMENT_UNITS, type Equipment } from '../../anchorage/equipment.js';
 import { usageError } from '../../base/errors.js';
 import type { Method } from '../../oscillator/recurrence.js';
+import { applyProcessing, type ProcessingCliOptions } from './processing.js';
 import { loadRecord, type RecordCliOptions } from './record.js';
 import { readSpectrumFile } from './spectrum-file.js';
 
 /** The ground motion of `quakesweep anchor`: ground records or a spectrum file. */
-export interface MotionCliOptions extends RecordCliOptions {
+export interface MotionCliOptions extends RecordCliOptions, ProcessingCliOptions {
   record?: string[];
   spectrum?: string;
 }
@@ -40,11 +41,16 @@ export async function elasticFromOptions(
   }
   if (file !== undefined) return { elastic: file.value, notes: file.isFloor ? [file.floorNote] : [] };
   let elastic: ElasticInput | null = null;
+  const processed: string[] = [];
   for (const source of records) {
-    const record = await loadRecord(source, options);
+    const record = applyProcessing(await loadRecord(source, options), options);
+    if (record.processing.length > 0)
+      processed.push(
+        `Record ${record.name} processed: ${record.processing.map((s) => s.description).join('; ')}.`,
+      );
     const value = recordPsaForComponent(record, equipment.periodS, equipment.damping, method);
     if (elastic === null || value.psaG > elastic.psaG) elastic = { ...value, source };
   }
   const largest = `Record demand: the largest of ${records.length} records (${records.join(', ')}).`;
-  return { elastic, notes: records.length > 1 ? [largest] : [] };
+  return { elastic, notes: [...processed, ...(records.length > 1 ? [largest] : [])] };
 }

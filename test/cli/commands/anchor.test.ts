@@ -116,3 +116,29 @@ describe('anchor with a 7-22 file: one line naming the file and key, exit 2', ()
     expect(line).toMatch(/ap\.json:1: "ap" is an ASCE\/SEI 7-16 coefficient/);
   });
 });
+
+describe('anchor --record with the processing options', () => {
+  it('processes the record before its elastic demand, and says so in the assumptions', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'quakesweep-anchor-processing-'));
+    const recordFile = join(dir, 'invented.txt');
+    // An invented 2 Hz ground motion of 0.2 g, ramped in over 2 s, 15 s at 0.01 s.
+    const lines = Array.from({ length: 1500 }, (_, i) =>
+      (0.2 * Math.sin(2 * Math.PI * 2 * i * 0.01) * Math.min(1, i / 200)).toFixed(6),
+    );
+    writeFileSync(recordFile, `${lines.join('\n')}\n`);
+    const args = ['anchor', '--equipment', 'records/equipment-generator.json', '--record', recordFile];
+    const reading = ['--units', 'g', '--dt', '0.01', '--format', 'json'];
+    const plain = await runMain([...args, ...reading]);
+    const filtered = await runMain([...args, ...reading, '--filter', 'highpass:10']);
+    expect(plain.code).toBe(0);
+    expect(filtered.code).toBe(0);
+    const a = JSON.parse(plain.stdout);
+    const b = JSON.parse(filtered.stdout);
+    // Order-4 Butterworth high-pass at 10 Hz keeps (2/10)^4 ≈ 0.16% of a 2 Hz sine in each pass
+    // (closed form); the record's abrupt start and end of the ramp keep some higher frequencies, so
+    // the test asks only that well under a tenth of the PGA (the rigid generator's demand) remains.
+    expect(b.horizontal.elastic_psa_g).toBeLessThan(0.1 * a.horizontal.elastic_psa_g);
+    expect(a.assumptions.join(' ')).not.toMatch(/processed/);
+    expect(b.assumptions.join(' ')).toMatch(/Record invented processed: high-pass Butterworth/);
+  });
+});

@@ -41,4 +41,29 @@ describe('quakesweep damping', () => {
     );
     expect(added.reference_added).toBe(true);
   });
+
+  it('takes the processing options: a high-pass far above the motion removes it, and the step is stated', async () => {
+    const args = ['damping', 'h1.txt', '--units', 'g', '--dt', '0.01', '--periods', '0.3,0.6'];
+    const plain = await json(...args);
+    const filtered = await json(...args, '--filter', 'highpass:8');
+    expect(plain.record.processing).toEqual([]);
+    expect(filtered.record.processing.map((s: { operation: string }) => s.operation)).toEqual(['filter']);
+    // Butterworth magnitude |H| = 1/√(1 + (f_c/f)^(2n)) (closed form): order 4 at 8 Hz keeps
+    // (1.6/8)^4 ≈ 0.0016 of a 1.6 Hz motion, squared by the forward-backward pass.
+    expect(filtered.spectra[1].psa_g[1]).toBeLessThan(0.01 * plain.spectra[1].psa_g[1]);
+    const csv = await folder.run(...args, '--filter', 'highpass:8', '--format', 'csv');
+    expect(csv.stdout).toMatch(/^# processing: high-pass Butterworth/m);
+  });
+
+  it('--threads and --kernel give the same numbers as one thread', async () => {
+    const args = ['damping', 'h1.txt', '--units', 'g', '--dt', '0.01', '--periods', '0.01:5:40'];
+    const one = await json(...args, '--threads', '1');
+    const two = await json(...args, '--threads', '2');
+    expect(two.spectra).toEqual(one.spectra); // the same bits on any number of threads
+    const js = await json(...args, '--kernel', 'js');
+    // Both kernels give the same peaks to 1e-12 (DEVELOPERS.md, "The sweep kernel").
+    js.spectra[1].psa_g.forEach((v: number, i: number) => {
+      expect(Math.abs(v - one.spectra[1].psa_g[i])).toBeLessThan(1e-11 * one.spectra[1].psa_g[i]);
+    });
+  });
 });

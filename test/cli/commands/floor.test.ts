@@ -83,7 +83,7 @@ describe('quakesweep floor', () => {
     [[...building('1.3'), '--building-damping', '120%'], /--building-damping/],
     [[...building('x')], /--modal-factor must be a number, got 'x'/],
     [[...building('1.3'), '--broaden', '1.5'], /--broaden must be a fraction/],
-    [[...building('1.3'), '--format', 'svg'], /--format 'svg': use json or csv/],
+    [[...building('1.3'), '--format', 'svg'], /--format 'svg': use table, json or csv/],
   ])('refuses %j with exit 2 and one line naming the option', async (args, message) => {
     expect(expectOneLineFailure(await folder.run('floor', ...record, ...args))).toMatch(message);
   });
@@ -152,5 +152,16 @@ describe('quakesweep floor', () => {
       const result = await folder.run('floor', ...args, '--units', 'g', '--dt', '0.005', ...building('1.3'));
       expect(expectOneLineFailure(result)).toMatch(message);
     });
+  });
+
+  it('takes the processing options on the ground record, stated in the assumptions', async () => {
+    const plain = await folder.json('floor', ...record, ...building('1'));
+    const filtered = await folder.json('floor', ...record, ...building('1'), '--filter', 'highpass:6');
+    expect(filtered.record.processing.map((s: { operation: string }) => s.operation)).toContain('filter');
+    expect(filtered.assumptions.join(' ')).toMatch(/Ground record sine processed: high-pass Butterworth/);
+    // An order-4 high-pass at 6 Hz keeps (1/6)^4 ≈ 0.08% of the 1 Hz sine in each pass (closed
+    // form); the record's abrupt end keeps some higher frequencies, so only well under a tenth is asked.
+    expect(filtered.ground.pga_g).toBeLessThan(0.1 * plain.ground.pga_g);
+    expect(filtered.spectra[0].psa_g[0]).toBeLessThan(0.1 * plain.spectra[0].psa_g[0]);
   });
 });

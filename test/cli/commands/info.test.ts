@@ -126,4 +126,19 @@ describe('quakesweep info', () => {
       expect(svg).toContain('Preliminary engineering aid only.');
     }
   });
+
+  it('--out info.csv writes CSV (the format from the extension), the same values as the JSON', async () => {
+    const base = ['info', recordPath, '--units', 'g', '--dt', '0.01'];
+    const csvPath = join(folder, 'measures.csv');
+    const written = await run([...base, '--out', csvPath]);
+    expect(written.code).toBe(0);
+    expect(written.stderr).toMatch(
+      /^quakesweep: done: ground-motion measures of invented, 2000 samples at 0.01 s; wrote .*measures\.csv \(csv\)$/m,
+    );
+    const json = JSON.parse((await run([...base, '--format', 'json'])).stdout);
+    const csv = readFileSync(csvPath, 'utf8');
+    expect(csv).toContain('measure,value,unit');
+    expect(csv).toContain(`\npga_g,${json.pga_g},g\n`);
+    expect(csv).toContain(`\nd5_95_s,${json.d5_95_s},s\n`);
+  });
 });

@@ -57,4 +57,19 @@ describe('quakesweep rotd', () => {
     expect(out.code).toBe(2);
     expect(out.stderr).toMatch(/angle step/);
   });
+
+  it('takes the processing options, applied to both components and stated for each', async () => {
+    const args = ['rotd', 'h1.txt', 'h2.txt', '--units', 'g', '--dt', '0.01', '--periods', '0.5,1'];
+    const plain = await json(...args);
+    const filtered = await json(...args, '--baseline', 'linear', '--filter', 'highpass:5');
+    for (const record of filtered.records)
+      expect(record.processing.map((s: { operation: string }) => s.operation)).toEqual([
+        'baseline',
+        'filter',
+      ]);
+    // A 5 Hz order-4 high-pass keeps under (1.6/5)^4 ≈ 1% of motions at 0.9 and 1.6 Hz (Butterworth, closed form).
+    expect(filtered.spectra[0].rotd50_g[1]).toBeLessThan(0.05 * plain.spectra[0].rotd50_g[1]);
+    const table = await folder.run(...args, '--filter', 'highpass:5');
+    expect(table.stdout.match(/processed: high-pass/g)).toHaveLength(2);
+  });
 });

@@ -11,3 +11,14 @@ describe('parseThreads', () => {
     expect(() => parseThreads(text)).toThrow(`--threads must be a whole number from 1 to 256, got '${text}'`);
   });
 });
+
+describe('addThreadOptions', () => {
+  it('adds --threads with one help everywhere, and --kernel unless told not to', async () => {
+    const { Command } = await import('commander');
+    const { addThreadOptions, THREADS_HELP } = await import('../../../src/cli/options/threads.js');
+    const sweep = addThreadOptions(new Command('a'));
+    expect(sweep.options.map((o) => o.long)).toEqual(['--threads', '--kernel']);
+    expect(sweep.options[0].description).toBe(THREADS_HELP);
+    expect(addThreadOptions(new Command('b'), false).options.map((o) => o.long)).toEqual(['--threads']);
+  });
+});
