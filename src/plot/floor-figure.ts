@@ -59,7 +59,7 @@ export function floorFigure(input: FloorFigureInput): string {
   const notes = [
     "Floor absolute acceleration a_g + Γφ·q'' of the building's fundamental mode; higher modes, soil–structure interaction, nonlinear building response and the equipment's feedback on the floor are not represented.",
     unbroadened
-      ? `Peaks broadened: the value at T is the largest over [T(1−b), T/(1−b)], b = ${input.broadening} (US NRC Regulatory Guide 1.122, from memory).`
+      ? `Peaks broadened: the value at T is the largest over [T(1−b), T/(1−b)], b = ${input.broadening} (US NRC Regulatory Guide 1.122, Rev. 1 (1978)).`
       : 'Peaks not broadened.',
     ...zeroPeriodNotes(
       floor.periodsS,

