@@ -14,10 +14,22 @@ export function textWidthPx(text: string, fontSizePx: number): number {
 
 const SUPERSCRIPT_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 
-/** A tick value for a log axis: plain decimals from 0.001 to 10 000, powers of ten beyond. */
-export function formatLogValue(value: number): string {
+/** How the labels of one log axis are written: plain decimals, or powers of ten throughout. */
+export type LogLabelStyle = 'plain' | 'power';
+
+/**
+ * The label style of a log axis over `domain`: plain decimals when every decade in it lies from
+ * 0.001 to 10 000, powers of ten for every label otherwise, so one axis never mixes 10⁻⁴ with 0.001.
+ */
+export function logLabelStyle(domain: readonly [number, number]): LogLabelStyle {
+  const exponents = domain.map((v) => Math.floor(Math.log10(v) + 1e-9));
+  return exponents.every((e) => e >= -3 && e <= 4) ? 'plain' : 'power';
+}
+
+/** A tick value for a log axis, in the axis' style (by default the style of the value alone). */
+export function formatLogValue(value: number, style: LogLabelStyle = logLabelStyle([value, value])): string {
   const exponent = Math.floor(Math.log10(value) + 1e-9);
-  if (exponent >= -3 && exponent <= 4) return String(Number(value.toPrecision(6)));
+  if (style === 'plain') return String(Number(value.toPrecision(6)));
   const mantissa = Number((value / 10 ** exponent).toPrecision(3));
   const superscript = (c: string) => (c === '-' ? '⁻' : SUPERSCRIPT_DIGITS[Number(c)]);
   const power = `10${String(exponent).split('').map(superscript).join('')}`;
@@ -46,7 +58,8 @@ function clear(spans: LabelSpan[]): boolean {
 /**
  * Decade ticks with minor ticks at 2…9 × 10ᵏ on a log axis (common practice). Decades are labelled,
  * thinned to every second or third decade when their labels would touch; 2 and 5 × 10ᵏ are labelled
- * too when the axis spans less than about two decades and there is room.
+ * too when the axis spans less than about two decades and there is room. Every label of the axis
+ * is written in one style (`logLabelStyle`).
  */
 export function logTicks(
   domain: readonly [number, number],
@@ -62,7 +75,8 @@ export function logTicks(
     if (inside(decade)) major.push(decade);
     for (let m = 2; m <= 9; m++) if (inside(m * decade)) minor.push(m * decade);
   }
-  const span = (value: number) => labelSpan(value, formatLogValue(value), toPixel, labelExtentPx);
+  const style = logLabelStyle([low, high]);
+  const span = (value: number) => labelSpan(value, formatLogValue(value, style), toPixel, labelExtentPx);
   let placed: LabelSpan[] = [];
   for (let stride = 1; stride <= Math.max(1, major.length); stride++) {
     placed = major.filter((_, i) => i % stride === 0).map(span);
