@@ -132,3 +132,18 @@ export function niceCeil125(value: number): number {
   for (const s of [1, 2, 5, 10]) if (s * decade >= value * (1 - 1e-12)) return s * decade;
   return 10 * decade;
 }
+
+/** Room kept above the highest curve of a log axis: a tenth of its value, about 0.04 decade. */
+export const LOG_HEADROOM = 1.1;
+
+/**
+ * The top of a log axis over data as high as `value` (> 0): the first of 1, 1.5, 2, 3, 5, 7 × 10ᵏ
+ * at or above `value` × LOG_HEADROOM, so a curve (a design plateau at 1 g) never lies on the frame.
+ */
+export function niceCeilWithHeadroom(value: number): number {
+  const wanted = value * LOG_HEADROOM;
+  const decade = 10 ** Math.floor(Math.log10(wanted) + 1e-12);
+  const step = [1, 1.5, 2, 3, 5, 7, 10].find((s) => s * decade >= wanted * (1 - 1e-12)) ?? 10;
+  return Number((step * decade).toPrecision(12));
+}
+
