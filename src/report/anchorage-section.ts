@@ -111,7 +111,8 @@ export function anchorageSection(item: ReportAnchorage, number: string, tableNum
       `Largest tension ${formatNumber(j.anchors.max_tension)} ${f} (anchor ${j.anchors.governing_anchor}, force direction ${formatNumber(j.anchors.max_tension_direction_deg)}°); largest shear ${formatNumber(j.anchors.max_shear)} ${f}. Directions are those of the horizontal force on the equipment, degrees counter-clockwise from +x.`,
     ),
     `<h4>Method and assumptions of this anchorage</h4>`,
-    list([`Anchor forces: ${j.anchors.method}.`, ...j.assumptions]),
+    // The assumptions state the anchor method ("Anchors: …") once; it is not repeated before them.
+    list(j.assumptions),
     paragraph(j.scope, 'note'),
   ].join('\n');
 }
