@@ -15,15 +15,16 @@ const CLEARANCE_PX = 2;
 
 /**
  * The first of `spots` where a label `widthPx` wide and `heightPx` high stays inside the plot
- * and clear of every curve of the panel (the segments between its drawable points); the first
- * spot when none is clear.
+ * and clear of every curve of the panel (the segments between its drawable points) and of the
+ * `obstacles` (other marks, segments in px); the first spot when none is clear.
  */
 export function clearLabelSpot(
   context: PanelContext,
   spots: readonly LabelSpot[],
   { widthPx, heightPx }: { widthPx: number; heightPx: number },
+  obstacles: readonly Segment[] = [],
 ): LabelSpot {
-  const segments = curveSegments(context);
+  const segments = [...curveSegments(context), ...obstacles];
   const { plot } = context;
   const fits = (box: Box) =>
     box[0] >= plot.left &&
@@ -57,7 +58,8 @@ export function spotsBesideMark(context: PanelContext, px: number, lineHeightPx:
   return spots;
 }
 
-type Segment = [number, number, number, number];
+/** A straight piece of a line, px: x1, y1, x2, y2. */
+export type Segment = [number, number, number, number];
 
 /** Every curve of the panel as segments in px, between consecutive points that can be drawn. */
 function curveSegments({ spec, x, y }: PanelContext): Segment[] {
