@@ -73,7 +73,8 @@ export function broadeningToJson<Extra extends { [key: string]: string }>(
     fraction,
     window: 'max over [T(1-b), T/(1-b)]',
     // The guide's ±15% is from memory (docs/methods-and-verification.md); outputs name it plainly.
-    source: 'US NRC Regulatory Guide 1.122, Rev. 1 (1978), Development of Floor Design Response Spectra for Seismic Design of Floor-Supported Equipment or Components',
+    source:
+      'US NRC Regulatory Guide 1.122, Rev. 1 (1978), Development of Floor Design Response Spectra for Seismic Design of Floor-Supported Equipment or Components',
     ...extra,
   };
 }

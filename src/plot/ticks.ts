@@ -146,4 +146,3 @@ export function niceCeilWithHeadroom(value: number): number {
   const step = [1, 1.5, 2, 3, 5, 7, 10].find((s) => s * decade >= wanted * (1 - 1e-12)) ?? 10;
   return Number((step * decade).toPrecision(12));
 }
-

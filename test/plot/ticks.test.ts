@@ -34,7 +34,11 @@ describe('logTicks', () => {
     const domain: [number, number] = [2e-5, 5];
     expect(logLabelStyle(domain)).toBe('power');
     expect(logLabelStyle([0.01, 10])).toBe('plain');
-    const ticks = logTicks(domain, (v) => 60 * Math.log10(v / 2e-5), (t) => t.length * 6);
+    const ticks = logTicks(
+      domain,
+      (v) => 60 * Math.log10(v / 2e-5),
+      (t) => t.length * 6,
+    );
     const texts = ticks.labels.map((l) => l.text);
     expect(texts).toEqual(expect.arrayContaining(['10⁻⁴', '10⁻³', '10⁻²', '10⁻¹', '10⁰']));
     expect(texts.some((t) => /^[0-9.]+$/.test(t))).toBe(false);
