@@ -232,11 +232,9 @@ export function titleBlockTable(block: TitleBlock, generatedAt: string): string 
 export function inputFilesTable(files: readonly InputFile[], tableNumber: number): string {
   if (files.length === 0)
     return paragraph('Input files: none named (the inputs were given to the library directly).');
-  return table(
-    `Table ${tableNumber}. Input files and their SHA-256 (of the bytes read)`,
-    ['Input', 'File', 'SHA-256'],
-    files.map((f) => [f.role, f.path, f.sha256]),
-  );
+  const rows = files.map((f) => [f.role, f.path, f.sha256]);
+  const caption = `Table ${tableNumber}. Input files and their SHA-256 (of the bytes read)`;
+  return `<div class="input-hashes">\n${table(caption, ['Input', 'File', 'SHA-256'], rows)}\n</div>`;
 }
 
 /** The spectra section's note of the usable period band, when the record was filtered. */

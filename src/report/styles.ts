@@ -39,6 +39,7 @@ table.title-block th { background: #f6f6f6; font-weight: 600; width: 9em; }
 table.title-block td { min-width: 14em; }
 span.blank { display: inline-block; min-width: 14em; border-bottom: 1px solid #111; height: 1.1em; vertical-align: bottom; }
 td.signature span.blank { min-width: 10em; }
+.input-hashes td:last-child { font-family: "DejaVu Sans Mono", "Liberation Mono", Consolas, monospace; font-size: 8pt; overflow-wrap: anywhere; }
 @page {
   margin: 16mm 14mm 16mm 14mm;
   @bottom-right { content: "Page " counter(page) " of " counter(pages); font-family: sans-serif; font-size: 8pt; color: #333; }
