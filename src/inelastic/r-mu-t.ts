@@ -9,11 +9,15 @@ import { type Hysteresis, postYieldRatio } from './hysteresis.js';
  */
 
 export const NEWMARK_HALL_LABEL = 'Newmark–Hall (1982)';
+// Outputs name the source plainly; that the clause numbers, section and coefficients were written from
+// memory, not checked against the text, is recorded in docs/methods-and-verification.md and the tests.
+// The §7.11 form and Nassar–Krawinkler's a, b are from memory (docs/methods-and-verification.md);
+// outputs name the sources plainly.
 export const NEWMARK_HALL_SOURCE =
-  'Newmark and Hall (1982), Earthquake Spectra and Design, EERI; in the form of Chopra, Dynamics of Structures, §7.11 (from memory)';
+  'Newmark and Hall (1982), Earthquake Spectra and Design, EERI; in the form of Chopra, Dynamics of Structures, §7.11';
 export const NASSAR_KRAWINKLER_LABEL = 'Nassar–Krawinkler (1991)';
 export const NASSAR_KRAWINKLER_SOURCE =
-  'Nassar and Krawinkler (1991), Seismic demands for SDOF and MDOF systems, John A. Blume Earthquake Engineering Center, Report 95 (coefficients a, b from memory)';
+  'Nassar and Krawinkler (1991), Seismic demands for SDOF and MDOF systems, John A. Blume Earthquake Engineering Center, Report 95';
 
 /** Newmark–Hall's fixed corner periods: R = 1 below T_a, the equal-energy plateau from T_b, s. */
 export const NEWMARK_HALL_TA_S = 1 / 33;

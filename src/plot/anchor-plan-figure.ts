@@ -28,6 +28,60 @@ const ANCHOR = '#0072B2';
 const MASS = '#111111';
 /** The plan's square plot, px. */
 const PLOT_PX = 400;
+/** Font size of the labels on the plan, px. */
+const LABEL_PX = 9.5;
+
+/** A box on the page, px: left, top, right, bottom. */
+type Box = [number, number, number, number];
+
+/** The box of a one-line label of LABEL_PX starting at `left` with its baseline at `y`. */
+function textBox(left: number, y: number, widthPx: number): Box {
+  return [left, y - LABEL_PX * 0.8, left + widthPx, y + LABEL_PX * 0.25];
+}
+
+function boxesMeet(a: Box, b: Box, gapPx = 3): boolean {
+  return a[0] < b[2] + gapPx && b[0] < a[2] + gapPx && a[1] < b[3] + gapPx && b[1] < a[3] + gapPx;
+}
+
+/**
+ * Where the direction's label goes: beside the arrow's tip (past it, then above or below it, on the
+ * arrow's side and then the other), the first place inside the frame that meets none of the
+ * `taken` boxes (anchors and their labels, the centre of mass, the arrow); the first place when
+ * none is free.
+ */
+export function directionLabelSpot(
+  text: string,
+  [tipX, tipY]: [number, number],
+  [ux, uy]: [number, number],
+  taken: readonly Box[],
+  frame: Box,
+): { x: number; y: number; anchor: 'start' | 'end' } {
+  const width = textWidthPx(text, LABEL_PX);
+  const ahead = ux >= 0 ? 'start' : 'end';
+  const behind = ux >= 0 ? 'end' : 'start';
+  const beyond = uy <= 0 ? -6 : 14;
+  const offsets: [number, number, 'start' | 'end'][] = [
+    [6, beyond, ahead],
+    [6, beyond - 14, ahead],
+    [6, beyond + 14, ahead],
+    [-6, beyond, behind],
+    [6, beyond - 28, ahead],
+    [6, beyond + 28, ahead],
+    [-6, beyond - 14, behind],
+    [-6, beyond + 14, behind],
+  ];
+  const spots = offsets.map(([dx, dy, anchor]) => {
+    const x0 = tipX + (ux >= 0 ? dx : -dx);
+    const left = anchor === 'start' ? x0 : x0 - width;
+    // Kept in the frame, as the label always was.
+    const shift = Math.max(frame[0] + 4 - left, Math.min(0, frame[2] - 4 - (left + width)));
+    const y = Math.min(frame[3] - 6, Math.max(frame[1] + 12, tipY + dy));
+    return { x: x0 + shift, y, anchor, box: textBox(left + shift, y, width) };
+  });
+  const free = spots.find((s) => !taken.some((b) => boxesMeet(s.box, b)));
+  const { x, y, anchor } = free ?? spots[0];
+  return { x, y, anchor };
+}
 
 /**
  * Plan view of an anchor pattern as SVG text: each anchor with its worst tension (circle area in
@@ -90,23 +144,44 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
   const [h1x, h1y] = head(a - 0.38);
   const [h2x, h2y] = head(a + 0.38);
   doc.element(arrow, 'path', { d: `M${tipX},${tipY}L${h1x},${h1y}L${h2x},${h2y}Z`, fill: GOVERNING });
+  // Each anchor's label centred above the anchors of the upper half, below those of the lower half,
+  // kept in the frame; the direction's label then goes where it meets none of them.
+  const maxTension = Math.max(...input.anchors.map((p) => p.tension), 0);
+  const placed = input.anchors.map((p, i) => {
+    const governing = i === input.governingAnchor && maxTension > 0;
+    const r = 4 + (maxTension > 0 ? 8 * Math.sqrt(p.tension / maxTension) : 0);
+    const [cx, cy] = [px(p.x), py(p.y)];
+    const label = `${i + 1}: T = ${Number(p.tension.toPrecision(4))} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
+    const halfWidth = textWidthPx(label, LABEL_PX) / 2;
+    const x = Math.min(plotRight - halfWidth - 3, Math.max(plot.left + halfWidth + 3, cx));
+    const y = cy + (p.y >= input.centroid[1] ? -r - 4 : r + 12);
+    const boxes: Box[] = [textBox(x - halfWidth, y, 2 * halfWidth), [cx - r, cy - r, cx + r, cy + r]];
+    return { p, i, governing, r, cx, cy, label, x, y, boxes };
+  });
   const arrowText = `force direction ${input.directionDeg.toFixed(1)}°`;
-  const arrowTextWidth = textWidthPx(arrowText, 9.5);
-  const textX = Math.min(plotRight - 4 - (ux >= 0 ? arrowTextWidth : 0), tipX + (ux >= 0 ? 6 : -6));
+  // The arrow's shaft, in short pieces, is taken too.
+  const shaft = Array.from({ length: 15 }, (_, k): Box => {
+    const t = -0.4 + (1.4 * k) / 14;
+    const [sx, sy] = [gx + ux * length * t, gy + uy * length * t];
+    return [sx - 2, sy - 2, sx + 2, sy + 2];
+  });
+  const taken = [...placed.flatMap((a) => a.boxes), [gx - 8, gy - 8, gx + 8, gy + 8] as Box, ...shaft];
+  const spot = directionLabelSpot(arrowText, [tipX, tipY], [ux, uy], taken, [
+    plot.left,
+    plot.top,
+    plotRight,
+    plotBottom,
+  ]);
   doc.text(arrow, arrowText, {
-    x: Math.max(plot.left + 4 + (ux < 0 ? arrowTextWidth : 0), textX),
-    y: Math.min(plotBottom - 6, Math.max(plot.top + 12, tipY + (uy <= 0 ? -6 : 14))),
-    'text-anchor': ux >= 0 ? 'start' : 'end',
-    'font-size': 9.5,
+    x: spot.x,
+    y: spot.y,
+    'text-anchor': spot.anchor,
+    'font-size': LABEL_PX,
     fill: GOVERNING,
     ...HALO,
   });
 
-  const maxTension = Math.max(...input.anchors.map((p) => p.tension), 0);
-  input.anchors.forEach((p, i) => {
-    const governing = i === input.governingAnchor && maxTension > 0;
-    const r = 4 + (maxTension > 0 ? 8 * Math.sqrt(p.tension / maxTension) : 0);
-    const [cx, cy] = [px(p.x), py(p.y)];
+  for (const { p, i, governing, r, cx, cy, label, x, y } of placed) {
     const anchor = doc.element(marks, 'g', {
       class: 'anchor',
       'data-tension': p.tension,
@@ -121,18 +196,15 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
       stroke: '#ffffff',
       'stroke-width': 1,
     });
-    // Centred above the anchors of the upper half, below those of the lower half, kept in the frame.
-    const label = `${i + 1}: T = ${Number(p.tension.toPrecision(4))} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
-    const halfWidth = textWidthPx(label, 9.5) / 2;
     doc.text(anchor, label, {
-      x: Math.min(plotRight - halfWidth - 3, Math.max(plot.left + halfWidth + 3, cx)),
-      y: cy + (p.y >= input.centroid[1] ? -r - 4 : r + 12),
+      x,
+      y,
       'text-anchor': 'middle',
-      'font-size': 9.5,
+      'font-size': LABEL_PX,
       fill: TEXT_COLOUR,
       ...HALO,
     });
-  });
+  }
   const [kx, ky] = [px(input.centroid[0]), py(input.centroid[1])];
   doc.element(marks, 'path', { class: 'centroid', ...centroidMark(kx, ky) });
   doc.element(marks, 'path', { class: 'centre-of-mass', ...massMark(gx, gy, 7) });

@@ -16,24 +16,15 @@ export interface DampingFigureInput {
   axis?: PeriodAxis;
 }
 
-/**
- * The published ratios, one dash pattern per source: its line's label at the right end of the line
- * and its sample in the legend, grey there so the data curves keep the colours.
- */
+/** The published ratios by source: the label at the right end of each line names its source. */
 const REFERENCES = {
-  ec8: { dash: 'none', label: 'EC8 η', legend: 'EC8 η ratio' },
-  acceleration: { dash: '6 3', label: 'NH acc.', legend: 'Newmark–Hall acc.' },
-  velocity: { dash: '2 2', label: 'NH vel.', legend: 'Newmark–Hall vel.' },
-  displacement: { dash: '8 2 2 2', label: 'NH disp.', legend: 'Newmark–Hall disp.' },
+  ec8: { label: 'EC8 η' },
+  acceleration: { label: 'NH acc.' },
+  velocity: { label: 'NH vel.' },
+  displacement: { label: 'NH disp.' },
 } as const;
 
 type ReferenceKind = keyof typeof REFERENCES;
-
-const referenceStyle = (kind: ReferenceKind, color = '#444444') => ({
-  color,
-  dash: REFERENCES[kind].dash,
-  widthPx: 0.9,
-});
 
 /** A published ratio for one damping ratio, drawn as a horizontal line. */
 type Reference = { kind: ReferenceKind; damping: number; value: number };
@@ -50,8 +41,6 @@ export function dampingFigure(input: DampingFigureInput): string {
   const positive = Array.from(periods).filter((t) => t > 0);
   const periodRange = [Math.min(...positive), Math.max(...positive)];
   const reference = percentLabel(comparison.referenceDamping);
-  const colourOf = (damping: number) =>
-    seriesStyle(comparison.curves.findIndex((c) => c.damping === damping)).color;
   const curveSeries = (y: (curve: DampingCurveComparison) => ArrayLike<number>, legend: boolean) =>
     comparison.curves.map(
       (curve, i): Series => ({
@@ -72,28 +61,19 @@ export function dampingFigure(input: DampingFigureInput): string {
       if (value !== null) references.push({ kind, damping, value });
     }
   }
-  // Each published line in the colour of its damping ratio; the legend shows the dash of each source.
+  // Dashes mean one thing in both panels, the damping ratio: each published line is thin, in the
+  // colour and dash of its damping ratio, and named by its label at the right.
+  const styleOf = (damping: number) => seriesStyle(comparison.curves.findIndex((c) => c.damping === damping));
   const referenceSeries = references.map(
     (r): Series => ({
-      label: REFERENCES[r.kind].legend,
+      label: `${REFERENCES[r.kind].label}, ζ = ${percentLabel(r.damping)}`,
       x: periodRange,
       y: [r.value, r.value],
-      style: referenceStyle(r.kind, colourOf(r.damping)),
+      style: { ...styleOf(r.damping), widthPx: 0.9 },
       legend: false,
       kind: 'reference',
     }),
   );
-  const legendSamples = (Object.keys(REFERENCES) as ReferenceKind[])
-    .filter((kind) => references.some((r) => r.kind === kind))
-    .map(
-      (kind): Series => ({
-        label: REFERENCES[kind].legend,
-        x: [],
-        y: [],
-        style: referenceStyle(kind),
-        kind: 'legend-only',
-      }),
-    );
   const ratios = [...ratioSeries, ...referenceSeries].flatMap((s) =>
     Array.from(s.y).filter((v, i) => s.x[i] > 0 && Number.isFinite(v)),
   );
@@ -115,8 +95,8 @@ export function dampingFigure(input: DampingFigureInput): string {
       gapAbovePx: 16,
       x: xAxis,
       y: { title: psaTitle, scale: 'linear', domain: [Math.max(0, low - pad), high + pad] },
-      series: [...referenceSeries, ...ratioSeries, ...legendSamples],
-      overlay: (context) => labelReferences(context, references, colourOf),
+      series: [...referenceSeries, ...ratioSeries],
+      overlay: (context) => labelReferences(context, references, (d) => styleOf(d).color),
     },
   ];
   return renderFigure({
@@ -130,8 +110,8 @@ export function dampingFigure(input: DampingFigureInput): string {
     legendTitle: 'Damping:',
     rightMarginPx: 104,
     notes: [
-      `Bottom: the record's PSA at each damping ratio divided by its PSA at ${reference}, period by period. Thin horizontal lines, in the colour of their damping ratio and dashed by source: the published ratios for that damping, labelled at the right.`,
-      'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (coefficients from memory); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
+      `Bottom: the record's PSA at each damping ratio divided by its PSA at ${reference}, period by period. Thin horizontal lines, in the colour and dash of their damping ratio as in both panels: the published ratios for that damping, each named by its label at the right.`,
+      'EC8 η: η(ξ)/η(5%) with η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent (EN 1998-1:2004 §3.2.2.2, Eq. 3.6). NH: Newmark and Hall (1982) median amplification factors 3.21 − 0.68 ln ξ (acc.), 2.31 − 0.41 ln ξ (vel.), 1.82 − 0.27 ln ξ (disp.), each at ξ over at 5% (Earthquake Spectra and Design, EERI); they apply in the acceleration-, velocity- and displacement-sensitive period ranges respectively.',
       ...zeroPeriodNotes(periods, ' (there every ratio is 1)', input.axis),
     ],
   });

@@ -1,5 +1,6 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
+import { clearLabelSpot, spotsBesideMark } from './label-spot.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext, Series } from './panel.js';
 import { type PeriodAxis, periodAxisSpec, periodLabel } from './period-axis.js';
@@ -13,6 +14,7 @@ import {
   recordLine,
   zeroPeriodNotes,
 } from './text.js';
+import { textWidthPx } from './ticks.js';
 
 export interface FloorFigureInput {
   /** The ground record's spectrum. */
@@ -59,7 +61,7 @@ export function floorFigure(input: FloorFigureInput): string {
   const notes = [
     "Floor absolute acceleration a_g + Γφ·q'' of the building's fundamental mode; higher modes, soil–structure interaction, nonlinear building response and the equipment's feedback on the floor are not represented.",
     unbroadened
-      ? `Peaks broadened: the value at T is the largest over [T(1−b), T/(1−b)], b = ${input.broadening} (US NRC Regulatory Guide 1.122, from memory).`
+      ? `Peaks broadened: the value at T is the largest over [T(1−b), T/(1−b)], b = ${input.broadening} (US NRC Regulatory Guide 1.122, Rev. 1 (1978)).`
       : 'Peaks not broadened.',
     ...zeroPeriodNotes(
       floor.periodsS,
@@ -78,7 +80,10 @@ export function floorFigure(input: FloorFigureInput): string {
   });
 }
 
-/** The building period as a dotted line; the context's x and xDomain are in periods on either axis. */
+/**
+ * The building period as a dotted line, labelled beside it where no curve passes (the broadened
+ * peak sits on it); the context's x and xDomain are in periods on either axis.
+ */
 export function markBuildingPeriod(context: PanelContext, periodS: number, axis?: PeriodAxis): void {
   const { doc, group, x, plot, xDomain } = context;
   if (!(periodS >= xDomain[0] && periodS <= xDomain[1])) return;
@@ -86,5 +91,11 @@ export function markBuildingPeriod(context: PanelContext, periodS: number, axis?
   const mark = doc.element(group, 'g', { class: 'building-period', 'data-period-s': periodS });
   const ends = { x1: px, x2: px, y1: plot.top, y2: plot.top + plot.height };
   doc.element(mark, 'line', { ...ends, ...MARK_LINE, 'stroke-dasharray': '1 3' });
-  doc.text(mark, periodLabel('_b', periodS, axis), { x: px + 4, y: plot.top + 12, ...MARK_LABEL });
+  const text = periodLabel('_b', periodS, axis);
+  const size = {
+    widthPx: textWidthPx(text, MARK_LABEL['font-size']),
+    heightPx: MARK_LABEL['font-size'] * 1.2,
+  };
+  const spot = clearLabelSpot(context, spotsBesideMark(context, px, 12), size);
+  doc.text(mark, text, { x: spot.x, y: spot.y, 'text-anchor': spot.anchor, ...MARK_LABEL });
 }

@@ -88,7 +88,7 @@ export function floorSetFigure(input: FloorSetFigureInput): string {
   const broadened =
     set.broadening === null
       ? 'Peaks not broadened.'
-      : `Peaks broadened on each record's floor spectrum before the mean and the envelope were taken: the value at T is the largest over [T(1−b), T/(1−b)], b = ${set.broadening} (US NRC Regulatory Guide 1.122, from memory).`;
+      : `Peaks broadened on each record's floor spectrum before the mean and the envelope were taken: the value at T is the largest over [T(1−b), T/(1−b)], b = ${set.broadening} (US NRC Regulatory Guide 1.122, Rev. 1 (1978)).`;
   const notes = [
     "Floor absolute acceleration a_g + Γφ·q'' of the building's fundamental mode, for each ground record; higher modes, soil–structure interaction, nonlinear building response and the equipment's feedback on the floor are not represented.",
     broadened,

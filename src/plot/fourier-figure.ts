@@ -15,6 +15,8 @@ export interface FourierFigureInput {
   smoothedMS?: ArrayLike<number>;
   /** e.g. "Konno–Ohmachi 1998, b = 40". */
   smoothingLabel?: string;
+  /** A note on where the smoothed curve is drawn, e.g. where it starts. */
+  smoothingNote?: string;
   /** How the transform was taken, one line. */
   methodDescription?: string;
   processing?: readonly { description: string }[];
@@ -66,6 +68,7 @@ export function fourierFigure(input: FourierFigureInput): string {
     series,
     notes: [
       `Amplitudes more than ${AMPLITUDE_DECADES} decades below the largest are cut off at the bottom of the plot; the unsmoothed line is drawn by the lowest and highest value of each pixel column.`,
+      ...(input.smoothingNote !== undefined && input.smoothedHz !== undefined ? [input.smoothingNote] : []),
     ],
   });
 }

@@ -1,7 +1,9 @@
+import { clearLabelSpot, type LabelSpot, type Segment } from './label-spot.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
 import { MARK_LABEL, MARK_LINE } from './styles.js';
 import { processingLines, recordNameLine } from './text.js';
+import { textWidthPx } from './ticks.js';
 
 export interface HusidFigureInput {
   /** The record's name and where it came from. */
@@ -39,7 +41,8 @@ export function husidFigure(input: HusidFigureInput): string {
     title: 'Husid curve: normalised Arias intensity',
     subtitle,
     x: { title: 'Time t (s)', domain: [0, durationS] },
-    y: { title: 'Normalised Arias intensity', domain: [0, 1] },
+    // Headroom above 1, where the curve ends, so it does not run along the frame.
+    y: { title: 'Normalised Arias intensity', domain: [0, 1.05] },
     axes: 'linear',
     heightPx: 300,
     series: [
@@ -61,14 +64,34 @@ export function husidFigure(input: HusidFigureInput): string {
 
 function markLevels(context: PanelContext, levels: readonly [number, number][]): void {
   const { doc, group, x, y, plot } = context;
+  const bottom = plot.top + plot.height;
   const marks = doc.element(group, 'g', { class: 'levels', fill: 'none' });
-  for (const [level, timeS] of levels) {
+  // Each level's dashed line: across to the curve, then down to the time axis.
+  const lines = levels.map(([level, timeS]): Segment[] => [
+    [plot.left, y(level), x(timeS), y(level)],
+    [x(timeS), y(level), x(timeS), bottom],
+  ]);
+  levels.forEach(([level, timeS], i) => {
     const px = x(timeS);
     const py = y(level);
     const mark = doc.element(marks, 'g', { class: 'level', 'data-level': level, 'data-time': timeS });
-    const d = `M${plot.left},${py}H${px}V${plot.top + plot.height}`;
+    const d = `M${plot.left},${py}H${px}V${bottom}`;
     doc.element(mark, 'path', { d, ...MARK_LINE, 'stroke-dasharray': '4 3' });
     const label = `${level * 100}% at t = ${timeS.toFixed(2)} s`;
-    doc.text(mark, label, { x: px + 5, y: py + (level > 0.5 ? 12 : -5), ...MARK_LABEL });
-  }
+    const size = {
+      widthPx: textWidthPx(label, MARK_LABEL['font-size']),
+      heightPx: MARK_LABEL['font-size'] * 1.2,
+    };
+    // Beside the point where the curve reaches the level, clear of the curve and of the other marks.
+    const spots: LabelSpot[] = [
+      { x: px + 5, y: py + 12, anchor: 'start' },
+      { x: px - 5, y: py - 5, anchor: 'end' },
+      { x: px + 5, y: py - 5, anchor: 'start' },
+      { x: px + 5, y: py + 24, anchor: 'start' },
+      { x: px - 5, y: py + 12, anchor: 'end' },
+    ];
+    const others = lines.filter((_, j) => j !== i).flat();
+    const spot = clearLabelSpot(context, spots, size, others);
+    doc.text(mark, label, { x: spot.x, y: spot.y, 'text-anchor': spot.anchor, ...MARK_LABEL });
+  });
 }

@@ -1,7 +1,14 @@
 import { scaleLinear, scaleLog } from 'd3-scale';
 import type { AxisScale, AxisSpec, PanelSpec, Series } from './panel.js';
 import { FIGURE_TEXT, type SeriesStyle, seriesStyle } from './styles.js';
-import { type AxisTicks, linearTicks, logTicks, niceCeil125, niceFloor125, textWidthPx } from './ticks.js';
+import {
+  type AxisTicks,
+  linearTicks,
+  logTicks,
+  niceCeilWithHeadroom,
+  niceFloor125,
+  textWidthPx,
+} from './ticks.js';
 
 const { tickPx } = FIGURE_TEXT;
 
@@ -24,7 +31,7 @@ export interface PanelLayout {
 
 /**
  * Settle a panel: each series' style, and the axis domains (the data's extent unless fixed; a log
- * y axis widened to 1-2-5 values, a linear one made nice, symmetric about zero where asked for).
+ * y axis widened to round values with headroom at the top, a linear one made nice, symmetric about zero where asked for).
  */
 export function layoutPanel(spec: PanelSpec): PanelLayout {
   const xScale = spec.x.scale ?? 'log';
@@ -46,9 +53,12 @@ const identity = (x: number) => x;
 /** Frequency f = 1/T of a period T (and back): 1/0 = ∞, which no axis draws. */
 const reciprocal = (x: number) => 1 / x;
 
-/** A y axis over the data's extent: widened to 1-2-5 values (log), made nice from 0 or about 0 (linear). */
+/**
+ * A y axis over the data's extent: from a 1-2-5 value up to a round value with headroom above the
+ * highest curve (log), made nice from 0 or about 0 (linear).
+ */
 function yAxisDomain([low, high]: [number, number], scale: AxisScale, axis: AxisSpec): [number, number] {
-  if (scale === 'log') return [niceFloor125(low), niceCeil125(high)];
+  if (scale === 'log') return [niceFloor125(low), niceCeilWithHeadroom(high)];
   const m = Math.max(Math.abs(low), Math.abs(high)) * 1.08 || 1;
   const extent = axis.symmetric ? [-m, m] : [Math.min(0, low), high * 1.04 || 1];
   return scaleLinear().domain(extent).nice().domain() as [number, number];

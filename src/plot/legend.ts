@@ -1,4 +1,4 @@
-import type { Series } from './panel.js';
+import { drawMarkers, type Series } from './panel.js';
 import { FIGURE_TEXT, type SeriesStyle, TEXT_COLOUR } from './styles.js';
 import type { SvgDocument } from './svg.js';
 import { textWidthPx } from './ticks.js';
@@ -40,6 +40,7 @@ export function drawLegend(
         'stroke-width': style.widthPx,
         'stroke-dasharray': style.dash,
       });
+      if (style.marker) drawMarkers(doc, legend, style, [[textX + SAMPLE_PX / 2, middle]]);
       textX += SAMPLE_PX + 5;
     }
     doc.text(legend, label, { x: textX, y: middle + tickPx * 0.35 });

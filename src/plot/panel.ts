@@ -4,6 +4,8 @@ import {
   FIGURE_TEXT,
   FRAME_COLOUR,
   GRID_COLOUR,
+  MARKER_RADIUS_PX,
+  MARKER_SPACING_PX,
   MINOR_GRID_COLOUR,
   type SeriesStyle,
   TEXT_COLOUR,
@@ -137,6 +139,10 @@ export function drawPanel(doc: SvgDocument, layout: PanelLayout, plot: PlotBox, 
       'stroke-dasharray': style.dash,
       'stroke-linejoin': 'round',
     });
+    if (style.marker) {
+      const points = indices.filter(canDraw).map((i): [number, number] => [column(i), y(series.y[i])]);
+      drawMarkers(doc, curves, style, spacedPoints(points, MARKER_SPACING_PX));
+    }
   }
   drawFrame(doc, group, plot);
 
@@ -156,6 +162,37 @@ export function drawPanel(doc: SvgDocument, layout: PanelLayout, plot: PlotBox, 
     ]);
   }
   if (spec.overlay) spec.overlay({ ...context, group: doc.element(group, 'g', { class: 'marks' }) });
+}
+
+/** Points of a curve, px, no two consecutive ones closer than `spacingPx` (the first always kept). */
+export function spacedPoints(points: readonly [number, number][], spacingPx: number): [number, number][] {
+  const out: [number, number][] = [];
+  for (const p of points) {
+    const last = out[out.length - 1];
+    if (!last || Math.hypot(p[0] - last[0], p[1] - last[1]) >= spacingPx) out.push(p);
+  }
+  return out;
+}
+
+/** Hollow markers of a style at points, px (white-filled, so they read over grid and curves). */
+export function drawMarkers(
+  doc: SvgDocument,
+  parent: Element,
+  style: SeriesStyle,
+  points: readonly [number, number][],
+): void {
+  const group = doc.element(parent, 'g', {
+    class: 'markers',
+    fill: '#ffffff',
+    stroke: style.color,
+    'stroke-width': 1.1,
+  });
+  const r = MARKER_RADIUS_PX;
+  for (const [cx, cy] of points) {
+    if (style.marker === 'square')
+      doc.element(group, 'rect', { x: cx - r, y: cy - r, width: 2 * r, height: 2 * r });
+    else doc.element(group, 'circle', { cx, cy, r });
+  }
 }
 
 /** A plot's frame as the attributes of an SVG rect. */

@@ -15,16 +15,21 @@ export interface RotDFigureInput {
   axis?: PeriodAxis;
 }
 
-/** Colour by measure (Okabe and Ito 2008), dash by damping ratio. */
+/**
+ * Colour by measure (Okabe and Ito 2008), and the geometric mean, which runs close to RotD50, also
+ * dashed and marked with hollow circles so the two part in greyscale; with several damping ratios
+ * the dash is the damping's and the circles alone mark the geometric mean.
+ */
 const MEASURES = [
-  { key: 'rotd100MS2', label: 'RotD100', color: '#D55E00' },
-  { key: 'rotd50MS2', label: 'RotD50', color: '#0072B2' },
-  { key: 'geomeanMS2', label: 'geometric mean', color: '#009E73' },
+  { key: 'rotd100MS2', label: 'RotD100', color: '#D55E00', dash: 'none', marker: undefined },
+  { key: 'rotd50MS2', label: 'RotD50', color: '#0072B2', dash: 'none', marker: undefined },
+  { key: 'geomeanMS2', label: 'geometric mean', color: '#009E73', dash: '7 3', marker: 'circle' },
 ] as const;
 
 /**
  * RotD50, RotD100 (Boore 2010) and the geometric mean of the two components as recorded, PSA (g)
- * against period on log–log axes; one colour per measure, one dash pattern per damping ratio.
+ * against period on log–log axes; one colour per measure (the geometric mean also marked), one dash
+ * pattern per damping ratio when there are several.
  */
 export function rotdFigure(input: RotDFigureInput): string {
   const { spectra } = input;
@@ -35,7 +40,12 @@ export function rotdFigure(input: RotDFigureInput): string {
           spectra.curves.length > 1 ? `${measure.label}, ζ = ${percentLabel(curve.damping)}` : measure.label,
         x: spectra.periodsS,
         y: inG(curve[measure.key]),
-        style: { color: measure.color, dash: DAMPING_DASHES[d % DAMPING_DASHES.length], widthPx: 1.6 },
+        style: {
+          color: measure.color,
+          dash: spectra.curves.length > 1 ? DAMPING_DASHES[d % DAMPING_DASHES.length] : measure.dash,
+          widthPx: 1.6,
+          marker: measure.marker,
+        },
       }),
     ),
   );

@@ -5,7 +5,14 @@ export interface SeriesStyle {
   /** SVG stroke-dasharray, or 'none' for a solid line. */
   dash: string;
   widthPx: number;
+  /** Hollow markers along the curve (every MARKER_SPACING_PX or so), for curves a dash cannot part. */
+  marker?: 'circle' | 'square';
 }
+
+/** Least distance between two markers along a curve, px. */
+export const MARKER_SPACING_PX = 26;
+/** Half the size of a marker, px. */
+export const MARKER_RADIUS_PX = 2.6;
 
 /**
  * Curve colours: the colour-blind-safe set of Okabe and Ito (2008), yellow left out because it is

@@ -14,10 +14,22 @@ export function textWidthPx(text: string, fontSizePx: number): number {
 
 const SUPERSCRIPT_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 
-/** A tick value for a log axis: plain decimals from 0.001 to 10 000, powers of ten beyond. */
-export function formatLogValue(value: number): string {
+/** How the labels of one log axis are written: plain decimals, or powers of ten throughout. */
+export type LogLabelStyle = 'plain' | 'power';
+
+/**
+ * The label style of a log axis over `domain`: plain decimals when every decade in it lies from
+ * 0.001 to 10 000, powers of ten for every label otherwise, so one axis never mixes 10⁻⁴ with 0.001.
+ */
+export function logLabelStyle(domain: readonly [number, number]): LogLabelStyle {
+  const exponents = domain.map((v) => Math.floor(Math.log10(v) + 1e-9));
+  return exponents.every((e) => e >= -3 && e <= 4) ? 'plain' : 'power';
+}
+
+/** A tick value for a log axis, in the axis' style (by default the style of the value alone). */
+export function formatLogValue(value: number, style: LogLabelStyle = logLabelStyle([value, value])): string {
   const exponent = Math.floor(Math.log10(value) + 1e-9);
-  if (exponent >= -3 && exponent <= 4) return String(Number(value.toPrecision(6)));
+  if (style === 'plain') return String(Number(value.toPrecision(6)));
   const mantissa = Number((value / 10 ** exponent).toPrecision(3));
   const superscript = (c: string) => (c === '-' ? '⁻' : SUPERSCRIPT_DIGITS[Number(c)]);
   const power = `10${String(exponent).split('').map(superscript).join('')}`;
@@ -46,7 +58,8 @@ function clear(spans: LabelSpan[]): boolean {
 /**
  * Decade ticks with minor ticks at 2…9 × 10ᵏ on a log axis (common practice). Decades are labelled,
  * thinned to every second or third decade when their labels would touch; 2 and 5 × 10ᵏ are labelled
- * too when the axis spans less than about two decades and there is room.
+ * too when the axis spans less than about two decades and there is room. Every label of the axis
+ * is written in one style (`logLabelStyle`).
  */
 export function logTicks(
   domain: readonly [number, number],
@@ -62,7 +75,8 @@ export function logTicks(
     if (inside(decade)) major.push(decade);
     for (let m = 2; m <= 9; m++) if (inside(m * decade)) minor.push(m * decade);
   }
-  const span = (value: number) => labelSpan(value, formatLogValue(value), toPixel, labelExtentPx);
+  const style = logLabelStyle([low, high]);
+  const span = (value: number) => labelSpan(value, formatLogValue(value, style), toPixel, labelExtentPx);
   let placed: LabelSpan[] = [];
   for (let stride = 1; stride <= Math.max(1, major.length); stride++) {
     placed = major.filter((_, i) => i % stride === 0).map(span);
@@ -117,4 +131,18 @@ export function niceCeil125(value: number): number {
   const decade = 10 ** Math.floor(Math.log10(value) + 1e-12);
   for (const s of [1, 2, 5, 10]) if (s * decade >= value * (1 - 1e-12)) return s * decade;
   return 10 * decade;
+}
+
+/** Room kept above the highest curve of a log axis: a tenth of its value, about 0.04 decade. */
+export const LOG_HEADROOM = 1.1;
+
+/**
+ * The top of a log axis over data as high as `value` (> 0): the first of 1, 1.5, 2, 3, 5, 7 × 10ᵏ
+ * at or above `value` × LOG_HEADROOM, so a curve (a design plateau at 1 g) never lies on the frame.
+ */
+export function niceCeilWithHeadroom(value: number): number {
+  const wanted = value * LOG_HEADROOM;
+  const decade = 10 ** Math.floor(Math.log10(wanted) + 1e-12);
+  const step = [1, 1.5, 2, 3, 5, 7, 10].find((s) => s * decade >= wanted * (1 - 1e-12)) ?? 10;
+  return Number((step * decade).toPrecision(12));
 }

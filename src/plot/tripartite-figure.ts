@@ -4,7 +4,7 @@ import type { PanelContext } from './panel.js';
 import { type PsaFigureOptions, spectrumChart } from './spectrum-figure.js';
 import { HALO } from './styles.js';
 import { formatCoordinate } from './svg.js';
-import { formatLogValue, textWidthPx } from './ticks.js';
+import { formatLogValue, logLabelStyle, textWidthPx } from './ticks.js';
 
 const DIAGONAL_COLOUR = '#b8b8b8';
 const DIAGONAL_TEXT = '#555555';
@@ -103,6 +103,8 @@ function drawDiagonals(context: PanelContext, unit: string, gInUnit: number): vo
   const lines = doc.element(group, 'g', { class: 'diagonals', fill: 'none' });
   const labels: { cx: number; cy: number; half: number }[] = [];
   for (const family of families) {
+    // One label style for the family, as on an axis: no 10⁻⁴ m beside 0.001 m.
+    const style = logLabelStyle([Math.min(...family.values), Math.max(...family.values)]);
     for (const value of family.values) {
       const segment = family.segment(value);
       if (!segment) continue;
@@ -110,7 +112,7 @@ function drawDiagonals(context: PanelContext, unit: string, gInUnit: number): vo
       // Left end first, so that the label reads left to right on a frequency axis too.
       const [ax, ay, bx, by] = ends[0] <= ends[2] ? ends : [ends[2], ends[3], ends[0], ends[1]];
       const length = Math.hypot(bx - ax, by - ay);
-      const text = `${formatLogValue(value)} ${family.unit}`;
+      const text = `${formatLogValue(value, style)} ${family.unit}`;
       const half = textWidthPx(text, DIAGONAL_PX) / 2 + 3;
       const item = doc.element(lines, 'g', {
         class: `diagonal ${family.kind}`,
@@ -153,7 +155,7 @@ function chooseSpot(
 ): number {
   const ux = (bx - ax) / length;
   const uy = (by - ay) / length;
-  const candidates = [0.5, 0.15, 0.85, 0.3, 0.7].map((f) =>
+  const candidates = [0.5, 0.15, 0.85, 0.3, 0.7, 0.4, 0.6, 0.2, 0.8, 0.1, 0.9, 0.05, 0.95].map((f) =>
     Math.min(length - half - 4, Math.max(half + 4, f * length)),
   );
   let best = candidates[0];

@@ -73,7 +73,7 @@ export function anchorageSection(item: ReportAnchorage, number: string, tableNum
         [
           'Vertical E_v = 0.2 S_DS W_p',
           j.vertical.ev,
-          `dead load factor ${formatNumber(j.vertical.dead_load_factor, 3)}${h.code === 'asce7-22' ? '; ASCE/SEI 7-22 §13.3.1 with §12.4.2.2 (from memory)' : ''}`,
+          `dead load factor ${formatNumber(j.vertical.dead_load_factor, 3)}${h.code === 'asce7-22' ? '; ASCE/SEI 7-22 §13.3.1 with §12.4.2.2' : ''}`,
         ],
         ...(j.vertical.spectral === undefined
           ? []
@@ -111,7 +111,8 @@ export function anchorageSection(item: ReportAnchorage, number: string, tableNum
       `Largest tension ${formatNumber(j.anchors.max_tension)} ${f} (anchor ${j.anchors.governing_anchor}, force direction ${formatNumber(j.anchors.max_tension_direction_deg)}°); largest shear ${formatNumber(j.anchors.max_shear)} ${f}. Directions are those of the horizontal force on the equipment, degrees counter-clockwise from +x.`,
     ),
     `<h4>Method and assumptions of this anchorage</h4>`,
-    list([`Anchor forces: ${j.anchors.method}.`, ...j.assumptions]),
+    // The assumptions state the anchor method ("Anchors: …") once; it is not repeated before them.
+    list(j.assumptions),
     paragraph(j.scope, 'note'),
   ].join('\n');
 }

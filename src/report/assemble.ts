@@ -23,7 +23,12 @@ import { spectrumFigures } from './spectrum-figures.js';
  * The command line, folder and time the report states are the caller's: the library reads none.
  */
 export interface ReportRequest
-  extends Partial<Pick<ReportInput, 'title' | 'notes' | 'lengthUnit' | 'commandLine' | 'workingDirectory'>>,
+  extends Partial<
+      Pick<
+        ReportInput,
+        'title' | 'notes' | 'lengthUnit' | 'commandLine' | 'workingDirectory' | 'titleBlock' | 'inputFiles'
+      >
+    >,
     Pick<ReportInput, 'generatedAt'> {
   /** The record as read (its facts are shown as read). */
   read: GroundRecord;
@@ -90,6 +95,8 @@ export async function assembleReport(request: ReportRequest): Promise<Map<string
     workingDirectory: request.workingDirectory ?? '',
     generatedAt: request.generatedAt,
     files: [],
+    titleBlock: request.titleBlock,
+    inputFiles: request.inputFiles,
   };
   const isFivePercent = (damping: number) => Math.abs(damping - 0.05) < 1e-12;
   if (spectrum.curves.length > 1 && spectrum.curves.some((c) => isFivePercent(c.damping))) {

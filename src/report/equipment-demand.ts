@@ -1,12 +1,12 @@
 import { analyseAnchorage, type ElasticInput } from '../anchorage/anchorage.js';
 import { componentPsaOnCurve, recordPsaForComponent } from '../anchorage/elastic-demand.js';
 import type { Equipment } from '../anchorage/equipment.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { anchorageToJson } from '../formats/anchorage-json.js';
 import { anchorPlanInput } from '../formats/anchorage-plan.js';
 import { floorAssumptions } from '../formats/floor.js';
-import { METHOD_DESCRIPTIONS, type Method } from '../oscillator/recurrence.js';
-import { anchorPlanSvg, type PeriodAxis, psaFigure } from '../plot/index.js';
+import type { Method } from '../oscillator/recurrence.js';
+import { floorFigure } from '../plot/floor-figure.js';
+import { anchorPlanSvg, type PeriodAxis } from '../plot/index.js';
 import type { GroundRecord } from '../record/record.js';
 import { type BuildingMode, FLOOR_METHOD_DESCRIPTION, floorSpectrum } from '../spectrum/floor.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
@@ -70,18 +70,15 @@ export function equipmentDemand(e: Equipment, record: GroundRecord, motion: Dema
     curve: 'floor spectrum',
     pga: 'floor PGA',
   });
-  const ground = Array.from(responseSpectrum(record, grid).curves[0].psaMS2, (v) => v / STANDARD_GRAVITY_MS2);
-  const abovePeriodZero = <T>(values: T[]) => values.filter((_, i) => periodsS[i] > 0);
-  const figure = psaFigure(floor.spectrum, {
+  // The same figure as `quakesweep floor` makes (floor.svg).
+  const figure = floorFigure({
+    ground: responseSpectrum(record, grid),
+    floor: floor.spectrum,
+    unbroadened: floor.broadening === null ? undefined : floor.unbroadened,
+    broadening: floor.broadening,
+    building,
     methodDescription: FLOOR_METHOD_DESCRIPTION,
     axis: motion.axis ?? 'frequency',
-    overlays: [
-      {
-        label: `ground PSA, ζ = ${e.damping * 100}%`,
-        periodsS: abovePeriodZero(Array.from(periodsS)),
-        psaG: abovePeriodZero(ground),
-      },
-    ],
   });
   const broadened = floor.broadening === null ? '' : `, peaks broadened ±${floor.broadening}`;
   return {

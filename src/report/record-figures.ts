@@ -8,9 +8,25 @@ import { integrateRecord } from '../record/integrate.js';
 import { type GroundMotionMeasures, husidCurve } from '../record/measures.js';
 import type { GroundRecord } from '../record/record.js';
 
+/** Spectral lines the smoothing window's main lobe must hold for its average to mean anything. */
+export const SMOOTHING_LINES = 3;
+
+/**
+ * The lowest centre frequency, Hz, at which the Konno–Ohmachi window of bandwidth b holds
+ * SMOOTHING_LINES spectral lines `dfHz` apart in its main lobe, |b·log10(f/f_c)| < π, that is
+ * f_c·(10^(π/b) − 10^(−π/b)) = SMOOTHING_LINES·Δf (Konno and Ohmachi 1998, eq. 4; the count of
+ * lines is common practice). Below it the smoothed value is that of the nearest line alone: the
+ * curve steps from line to line.
+ */
+export function smoothingStartHz(dfHz: number, bandwidth: number): number {
+  const lobe = 10 ** (Math.PI / bandwidth) - 10 ** (-Math.PI / bandwidth);
+  return (SMOOTHING_LINES * dfHz) / lobe;
+}
+
 /**
  * The figures of `quakesweep info` by file name: histories.svg, husid.svg and fourier.svg, the
- * Fourier amplitudes smoothed by Konno–Ohmachi with bandwidth `smoothingB` unless it is null.
+ * Fourier amplitudes smoothed by Konno–Ohmachi with bandwidth `smoothingB` unless it is null,
+ * from `smoothingStartHz` up.
  */
 export function recordFigures(
   record: GroundRecord,
@@ -20,8 +36,9 @@ export function recordFigures(
   const fas = fourierAmplitudeSpectrum(record.accelMS2, record.dtS);
   let smoothed: Partial<FourierFigureInput> = {};
   if (smoothingB !== null) {
-    const fLow = fas.frequenciesHz[1];
+    const dfHz = fas.frequenciesHz[1];
     const fHigh = fas.frequenciesHz[fas.frequenciesHz.length - 1];
+    const fLow = Math.min(fHigh / 2, Math.max(dfHz, smoothingStartHz(dfHz, smoothingB)));
     const count = Math.max(2, Math.ceil(60 * Math.log10(fHigh / fLow)));
     const centresHz = Float64Array.from(logSpaced(fLow, fHigh, count));
     smoothed = {
@@ -31,6 +48,7 @@ export function recordFigures(
         centresHz,
       }),
       smoothingLabel: `Konno–Ohmachi 1998, b = ${smoothingB}`,
+      smoothingNote: `The smoothed curve starts at ${Number(fLow.toPrecision(2))} Hz: below it the window's main lobe holds fewer than ${SMOOTHING_LINES} spectral lines (spacing ${Number(dfHz.toPrecision(3))} Hz), and its average is one line's value, a staircase.`,
     };
   }
   const histories = { ...integrateRecord(record), integrationDescription: INFO_METHODS.integration };

@@ -22,6 +22,7 @@ import {
   targetSection,
 } from './sections.js';
 import { REPORT_CSS } from './styles.js';
+import { usableBand, usableBandText } from './usable-band.js';
 
 /** Everything one report shows. The function that renders it does no I/O. */
 export interface ReportInput {
@@ -50,6 +51,24 @@ export interface ReportInput {
   generatedAt: string;
   /** The other files written beside report.html. */
   files: string[];
+  /** The title block's names; each left as a blank line to fill in by hand when not given. */
+  titleBlock?: TitleBlock;
+  /** Every input file (records, targets, equipment, spectra) with its SHA-256, as the caller read them. */
+  inputFiles?: readonly InputFile[];
+}
+
+/** Who the report is for, who prepared it and who checked it. */
+export interface TitleBlock {
+  project?: string;
+  preparedBy?: string;
+  checkedBy?: string;
+}
+
+/** One input file of the report: what it is, its path as given, its SHA-256 (hex). */
+export interface InputFile {
+  role: string;
+  path: string;
+  sha256: string;
 }
 
 /** Quote a word for a POSIX shell, only where it needs it. */
@@ -95,6 +114,7 @@ export function renderReport(input: ReportInput): string {
     'Response spectra',
     peaksSection(spectrum, input.lengthUnit, tableNumber++),
     paragraph('All values for every period are in spectra.json and spectra.csv beside this report.', 'note'),
+    ...usableBandNote(spectrum.record.processing),
     ...input.spectrumFigures.map((f) => figure(f, 'spectra')),
   );
   if (target) add('target', 'Comparison with the target spectrum', targetSection(target, tableNumber++));
@@ -142,6 +162,7 @@ export function renderReport(input: ReportInput): string {
 <header class="title">
 <h1>${escapeHtml(input.title)}</h1>
 <p>Response spectrum calculation · quakesweep ${escapeHtml(VERSION)} · record ${escapeHtml(input.read.name)}</p>
+${titleBlockTable(input.titleBlock ?? {}, input.generatedAt)}
 </header>
 <div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
 ${input.notes.map((note) => paragraph(note, 'intro')).join('\n')}
@@ -178,5 +199,52 @@ function reproduceSection(input: ReportInput, tableNumber: number): string {
         ['Step method', method],
       ],
     ),
+    inputFilesTable(input.inputFiles ?? [], tableNumber + 2),
   ].join('\n');
+}
+
+/** A line to fill in by hand, for a name or a signature left blank. */
+const BLANK = '<span class="blank" aria-label="blank, to be filled in"></span>';
+
+/**
+ * The title block: project, prepared by, checked by, each with a line to sign, and the date of
+ * generation (the date of `generatedAt`); names not given are left as blank lines.
+ */
+export function titleBlockTable(block: TitleBlock, generatedAt: string): string {
+  const name = (value: string | undefined) =>
+    value === undefined || value.trim() === '' ? BLANK : escapeHtml(value);
+  const rows = [
+    ['Project', name(block.project), ''],
+    ['Prepared by', name(block.preparedBy), BLANK],
+    ['Checked by', name(block.checkedBy), BLANK],
+    ['Date', escapeHtml(generatedAt.slice(0, 10)), ''],
+  ];
+  const body = rows
+    .map(([label, value, signature]) => {
+      const sign = signature === '' ? '<td></td>' : `<td class="signature">Signature ${signature}</td>`;
+      return `<tr><th scope="row">${label}</th><td>${value}</td>${sign}</tr>`;
+    })
+    .join('\n');
+  return `<table class="title-block">\n${body}\n</table>`;
+}
+
+/** The input files and their SHA-256, so a reader can tell that the files at hand are these. */
+export function inputFilesTable(files: readonly InputFile[], tableNumber: number): string {
+  if (files.length === 0)
+    return paragraph('Input files: none named (the inputs were given to the library directly).');
+  const rows = files.map((f) => [f.role, f.path, f.sha256]);
+  const caption = `Table ${tableNumber}. Input files and their SHA-256 (of the bytes read)`;
+  return `<div class="input-hashes">\n${table(caption, ['Input', 'File', 'SHA-256'], rows)}\n</div>`;
+}
+
+/** The spectra section's note of the usable period band, when the record was filtered. */
+function usableBandNote(steps: ReportInput['spectrum']['record']['processing']): string[] {
+  const band = usableBand(steps);
+  if (band === null) return [];
+  return [
+    paragraph(
+      `Usable period band after filtering: ${usableBandText(band)} (section "Processing applied" states the rule); values outside it are shown but reflect the filter.`,
+      'note usable-band',
+    ),
+  ];
 }

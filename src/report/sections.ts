@@ -9,6 +9,7 @@ import type { Spectrum } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
 import type { Cell } from './html.js';
 import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
+import { USABLE_BAND_RULE, usableBand, usableBandText } from './usable-band.js';
 
 /** What the report says of the record as it was read (before processing). */
 export type RecordFacts = Pick<GroundRecord, 'name' | 'source' | 'dtS' | 'accelMS2' | 'unitsRead'>;
@@ -32,12 +33,23 @@ export function recordSection(read: RecordFacts, processed: { dtS: number; npts:
   return definitionTable('Table 1. The record', rows);
 }
 
-export function processingSection(steps: readonly { operation: string; description: string }[]): string {
+export function processingSection(
+  steps: readonly { operation: string; description: string; parameters?: Record<string, unknown> }[],
+): string {
   const none = 'None: the record is used as read (no baseline correction, taper, filter or resampling).';
-  if (steps.length === 0) return paragraph(none);
+  const noFilter =
+    'Usable period band after filtering: not limited by a filter (the record was not filtered).';
+  if (steps.length === 0) return [paragraph(none), paragraph(noFilter, 'usable-band')].join('\n');
+  const band = usableBand(steps);
   return [
     paragraph(`Applied in this order (the program's fixed order is ${PROCESSING_ORDER.join(' → ')}):`),
     `<ol>\n${steps.map((s) => `<li><strong>${escapeHtml(s.operation)}</strong>: ${escapeHtml(s.description)}</li>`).join('\n')}\n</ol>`,
+    paragraph(
+      band === null
+        ? noFilter
+        : `Usable period band after filtering: ${usableBandText(band)}, by the rule ${USABLE_BAND_RULE}.`,
+      'usable-band',
+    ),
   ].join('\n');
 }
 
@@ -146,7 +158,7 @@ export function dampingSection(comparison: DampingComparison, tableNumber: numbe
     ),
     list([
       'EC8: EN 1998-1:2004 §3.2.2.2, Eq. 3.6, η = √(10/(5 + ξ)) ≥ 0.55, ξ in percent.',
-      'Newmark and Hall (1982) median amplification factors, ratio at ζ to that at 5% (coefficients from memory).',
+      'Newmark and Hall (1982), Earthquake Spectra and Design, EERI: median amplification factors, ratio at ζ to that at 5%.',
       'The record ratio is the geometric mean over the grid periods above 0 s; it varies with period (see the figure).',
     ]),
   ].join('\n');

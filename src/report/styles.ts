@@ -2,7 +2,8 @@
  * The report's style sheet, inlined into the page. Screen: one column of about the printed width.
  * Print: margins that fit both A4 (210 × 297 mm) and US letter (215.9 × 279.4 mm), so the page
  * prints on whichever paper the printer holds; each figure starts a new page and is scaled to the
- * narrower printable area of the two (182 × 247 mm).
+ * narrower printable area of the two (182 × 247 mm). Printed pages are numbered "Page n of N" in
+ * the bottom margin (CSS paged media: @page margin boxes with the page and pages counters).
  */
 export const REPORT_CSS = `
 :root { color-scheme: light; }
@@ -33,7 +34,16 @@ figcaption { font-size: 9.5pt; margin-top: 4px; }
 .note { color: #444; font-size: 9.5pt; }
 .nondeterministic { border-left: 3px solid #999; padding-left: 8px; }
 footer { margin-top: 24px; border-top: 1px solid #999; padding-top: 6px; font-size: 9pt; color: #333; }
-@page { margin: 16mm 14mm 16mm 14mm; }
+table.title-block { width: auto; min-width: 60%; margin: 8px 0 0; }
+table.title-block th { background: #f6f6f6; font-weight: 600; width: 9em; }
+table.title-block td { min-width: 14em; }
+span.blank { display: inline-block; min-width: 14em; border-bottom: 1px solid #111; height: 1.1em; vertical-align: bottom; }
+td.signature span.blank { min-width: 10em; }
+.input-hashes td:last-child { font-family: "DejaVu Sans Mono", "Liberation Mono", Consolas, monospace; font-size: 8pt; overflow-wrap: anywhere; }
+@page {
+  margin: 16mm 14mm 16mm 14mm;
+  @bottom-right { content: "Page " counter(page) " of " counter(pages); font-family: sans-serif; font-size: 8pt; color: #333; }
+}
 @media print {
   html { font-size: 9.5pt; }
   body { max-width: none; padding: 0; }

@@ -18,4 +18,19 @@ describe('dampingFigure', () => {
     expect(labels).toContain(`10%: EC8 η ${Math.sqrt(10 / 15).toFixed(2)}`);
     expect(doc.querySelectorAll('g.panel')).toHaveLength(2);
   });
+
+  it('dashes mean the damping ratio alone: each published line has the dash of its damping curve', () => {
+    const doc = parseSvg(EVERY_FIGURE.damping().svg);
+    const dashOf = (path: Element) => path.getAttribute('stroke-dasharray');
+    const lower = doc.querySelectorAll('g.panel')[1];
+    const curves = new Map(
+      [...lower.querySelectorAll('path.curve')].map((p) => [p.getAttribute('data-label'), dashOf(p)]),
+    );
+    for (const line of lower.querySelectorAll('path.reference')) {
+      const damping = (line.getAttribute('data-label') ?? '').split(', ')[1];
+      expect(dashOf(line)).toBe(curves.get(damping));
+    }
+    // No legend entry of a dash that means a source.
+    expect(doc.querySelector('g.legend')?.textContent).not.toMatch(/Newmark–Hall|EC8/);
+  });
 });

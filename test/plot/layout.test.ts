@@ -51,6 +51,21 @@ describe('layoutPanel', () => {
     expect(symmetric.yLabelWidthPx).toBeCloseTo(12, 9);
   });
 
+  it('a log y axis keeps headroom above the highest curve: a 1 g plateau is not drawn on the frame', () => {
+    // 1.0 × 1.1 = 1.1 → 1.5; 1.8 × 1.1 = 1.98 → 2; 8.7 × 1.1 = 9.57 → 10 (1, 1.5, 2, 3, 5, 7 × 10ᵏ).
+    const top = (high: number) =>
+      layoutPanel({
+        heightPx: 200,
+        x: { title: 'T' },
+        y: { title: 'PSA' },
+        series: [{ label: 'a', x: [0.1, 1], y: [0.2, high] }],
+      }).yDomain[1];
+    expect(top(1)).toBe(1.5);
+    expect(top(1.8)).toBe(2);
+    expect(top(8.7)).toBe(10);
+    expect(top(0.5)).toBe(0.7);
+  });
+
   it('a fixed domain is kept; no data gives a default decade', () => {
     const fixed = layoutPanel({
       heightPx: 100,

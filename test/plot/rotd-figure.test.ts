@@ -91,4 +91,20 @@ describe('rotdFigure', () => {
     expect(dash[0]).not.toBe(dash[3]);
     expect(doc.querySelector('g.notes')?.textContent).toContain('padded with 120 zero samples');
   });
+
+  it('parts RotD50 and the geometric mean in greyscale: the mean dashed and marked, in the legend too', () => {
+    const one = parseSvg(rotdFigure({ spectra: identicalComponents([0.05]), methodDescription: 'test' }));
+    const path = (label: string) => one.querySelector(`path.curve[data-label="${label}"]`);
+    expect(path('RotD50')?.getAttribute('stroke-dasharray')).toBe('none');
+    expect(path('geometric mean')?.getAttribute('stroke-dasharray')).not.toBe('none');
+    // Markers on the curve (none on the others) and one in the legend's sample.
+    expect(one.querySelectorAll('g.curves g.markers')).toHaveLength(1);
+    expect(one.querySelectorAll('g.curves g.markers circle').length).toBeGreaterThan(1);
+    expect(one.querySelectorAll('g.legend g.markers circle')).toHaveLength(1);
+    // Several damping ratios: the dash is the damping's, the circles still mark each geometric mean.
+    const two = parseSvg(
+      rotdFigure({ spectra: identicalComponents([0.02, 0.05]), methodDescription: 'test' }),
+    );
+    expect(two.querySelectorAll('g.curves g.markers')).toHaveLength(2);
+  });
 });

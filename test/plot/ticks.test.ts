@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatLogValue, logTicks } from '../../src/plot/ticks.js';
+import { formatLogValue, logLabelStyle, logTicks } from '../../src/plot/ticks.js';
 
 describe('logTicks', () => {
   const toPixel = (v: number) => 100 * Math.log10(v / 0.01);
@@ -28,5 +28,19 @@ describe('logTicks', () => {
     expect(formatLogValue(0.001)).toBe('0.001');
     expect(formatLogValue(1e-5)).toBe('10⁻⁵');
     expect(formatLogValue(2e-5)).toBe('2×10⁻⁵');
+  });
+  it('writes every label of one axis in one style: no 10⁻⁴ beside 0.001', () => {
+    // The Fourier figure's amplitude axis, five decades below a peak of 2.6 m/s.
+    const domain: [number, number] = [2e-5, 5];
+    expect(logLabelStyle(domain)).toBe('power');
+    expect(logLabelStyle([0.01, 10])).toBe('plain');
+    const ticks = logTicks(
+      domain,
+      (v) => 60 * Math.log10(v / 2e-5),
+      (t) => t.length * 6,
+    );
+    const texts = ticks.labels.map((l) => l.text);
+    expect(texts).toEqual(expect.arrayContaining(['10⁻⁴', '10⁻³', '10⁻²', '10⁻¹', '10⁰']));
+    expect(texts.some((t) => /^[0-9.]+$/.test(t))).toBe(false);
   });
 });

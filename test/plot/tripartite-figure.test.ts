@@ -66,4 +66,14 @@ describe('four-way logarithmic plot', () => {
       expect(toV(vertex[1]) / (spectrum.curves[0].psvMS[p] * perMetre)).toBeCloseTo(1, 2);
     });
   }
+
+  it('writes the labels of one family of diagonals in one style: no 10⁻⁴ m beside 0.001 m', () => {
+    const doc = parseSvg(tripartiteFigure(spectrum, { lengthUnit: 'm' }));
+    for (const kind of ['sd', 'psa']) {
+      const texts = [...doc.querySelectorAll(`g.diagonal.${kind} text`)].map((t) => t.textContent ?? '');
+      const powers = texts.filter((t) => /10[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]/.test(t));
+      const plain = texts.filter((t) => /^[\d.]+ /.test(t));
+      expect(powers.length === 0 || plain.length === 0, `${kind}: ${texts.join(', ')}`).toBe(true);
+    }
+  });
 });

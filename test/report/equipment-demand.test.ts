@@ -86,7 +86,12 @@ describe('equipmentDemand above the base', () => {
     expect(demand.notes.join(' ')).toMatch(/does not check that Γφ belongs to the floor/);
     const svg = new JSDOM(demand.floor ?? '', { contentType: 'image/svg+xml' }).window.document;
     expect(svg.documentElement.localName).toBe('svg');
-    expect(demand.floor).toContain('ground PSA, ζ = 5%');
+    // The figure of `quakesweep floor` (floorFigure): the building period marked, ground and floor named.
+    expect(svg.querySelector('g.building-period')?.getAttribute('data-period-s')).toBe('0.5');
+    expect(svg.querySelector('title')?.textContent).toBe(
+      'Floor response spectrum against the ground spectrum, PSA',
+    );
+    expect(svg.querySelector('g.legend')?.textContent).toContain('ground');
   });
 
   it('draws the floor spectrum against frequency unless the axis is given', () => {
@@ -110,6 +115,8 @@ describe('equipmentDemand above the base', () => {
       broadening: 0.15,
     });
     expect(demand.motion).toMatch(/, peaks broadened ±0\.15$/);
+    // As in floor.svg, the floor spectrum before broadening is drawn too.
+    expect(demand.floor).toContain('floor, not broadened');
     expect(demand.elastic?.how).toMatch(/^PSA at T = 0.3 s, a point of the grid/);
   });
 });

@@ -1,6 +1,8 @@
+import { createHash } from 'node:crypto';
 import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { JSDOM } from 'jsdom';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
@@ -8,6 +10,7 @@ import { runReport } from '../../src/cli/commands/report.js';
 import { runSpectrum } from '../../src/cli/commands/spectrum.js';
 import { escapeHtml } from '../../src/report/html.js';
 import { inlineSvg } from '../../src/report/inline-svg.js';
+import { titleBlockTable } from '../../src/report/report.js';
 import { launchChromium } from '../helpers/chromium.js';
 
 // An invented record (a decaying 2 Hz sine), an invented generator on grade, a coarse grid.
@@ -125,6 +128,45 @@ describe('the HTML report', () => {
     );
     expect(clipsResolve).toBe(true);
     await page.close();
+  });
+
+  it('opens with a title block: blank lines to fill in and sign when no names are given, and the date', () => {
+    const doc = new JSDOM(html).window.document;
+    const rows = [...doc.querySelectorAll('header table.title-block tr')];
+    expect(rows.map((r) => r.querySelector('th')?.textContent)).toEqual([
+      'Project',
+      'Prepared by',
+      'Checked by',
+      'Date',
+    ]);
+    expect(rows[0].querySelector('td span.blank')).not.toBeNull();
+    expect(rows[1].querySelectorAll('span.blank')).toHaveLength(2); // the name and the signature
+    expect(rows[3].querySelector('td')?.textContent).toMatch(/^\d{4}-\d{2}-\d{2}$/);
+    const named = titleBlockTable(
+      { project: 'Yard <7>', preparedBy: 'A. Person', checkedBy: '' },
+      '2026-03-11T10:00:00Z',
+    );
+    expect(named).toContain('<td>Yard &lt;7&gt;</td>');
+    expect(named).toContain('<td>A. Person</td>');
+    expect(named).toContain('<td>2026-03-11</td>');
+    expect(named.match(/class="blank"/g)).toHaveLength(3); // the checker's name, both signatures
+  });
+
+  it('numbers printed pages "Page n of N" with the paged-media counters', () => {
+    expect(html).toMatch(/@bottom-right \{ content: "Page " counter\(page\) " of " counter\(pages\)/);
+  });
+
+  it('lists every input file with the SHA-256 of its bytes', () => {
+    const doc = new JSDOM(html).window.document;
+    const caption = [...doc.querySelectorAll('caption')].find((c) => /SHA-256/.test(c.textContent ?? ''));
+    const rows = [...(caption?.parentElement?.querySelectorAll('tbody tr') ?? [])].map((r) =>
+      [...r.querySelectorAll('td')].map((td) => td.textContent),
+    );
+    const hash = (file: string) => createHash('sha256').update(readFileSync(file)).digest('hex');
+    expect(rows).toEqual([
+      ['record', recordFile, hash(recordFile)],
+      ['equipment', equipmentFile, hash(equipmentFile)],
+    ]);
   });
 
   it('states the target scaling, anchorage, version, command line and the generation time', () => {

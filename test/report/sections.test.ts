@@ -77,6 +77,22 @@ describe('processingSection', () => {
     expect(items[0].querySelector('strong')?.textContent).toBe('taper');
     expect(items[1].textContent).toBe(`${HOSTILE}: ${HOSTILE}`);
   });
+
+  it('states the usable period band after filtering and its rule, or that no filter limits it', () => {
+    const filtered = [
+      {
+        operation: 'filter',
+        description: 'band-pass',
+        parameters: { low_corner_hz: 0.2, high_corner_hz: 20 },
+      },
+    ];
+    // 1/20 = 0.05 s to 0.8/0.2 = 4 s (common practice, by hand).
+    const band = page(processingSection(filtered)).querySelector('p.usable-band')?.textContent ?? '';
+    expect(band).toMatch(/^Usable period band after filtering: 0\.05–4 s, by the rule periods from 1\/f_lp/);
+    expect(page(processingSection([])).querySelector('p.usable-band')?.textContent).toMatch(
+      /not limited by a filter/,
+    );
+  });
 });
 
 describe('measuresSection', () => {

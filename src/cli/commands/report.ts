@@ -33,6 +33,9 @@ export function registerReport(program: Command): void {
       [],
     )
     .option('--title <text>', 'title of the report (default: "Response spectra of <record name>")')
+    .option('--project <text>', 'project named in the title block (default: a blank line to fill in)')
+    .option('--prepared-by <name>', 'who prepared the report, in the title block (default: a blank line)')
+    .option('--checked-by <name>', 'who checked the report, in the title block (default: a blank line)')
     .option('--length-unit <unit>', 'length unit of SD and PSV in tables and figures: m, cm, mm, in, ft', 'm')
     .option('--axes <axes>', 'axes of the PSA, SD and PSV figures: log or linear', 'log');
   addAxisOption(

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { parseEquipment } from '../../anchorage/equipment.js';
 import { isQuakesweepError, usageError } from '../../base/errors.js';
@@ -33,6 +34,9 @@ export interface ReportCliOptions
   angleStep?: string;
   title?: string;
   note?: string[];
+  project?: string;
+  preparedBy?: string;
+  checkedBy?: string;
   floorEnvelope?: boolean;
 }
 
@@ -69,6 +73,7 @@ export async function reportRequest(
     ductility: ductilityFromOptions(options),
     title: options.title,
     notes: options.note,
+    titleBlock: { project: options.project, preparedBy: options.preparedBy, checkedBy: options.checkedBy },
     commandLine,
     workingDirectory: process.cwd(),
     generatedAt: generationTime(),
@@ -82,13 +87,20 @@ export async function reportRequest(
     pair = { record: second, angleStepDeg: positiveNumber('--angle-step', options.angleStep ?? '1') };
   }
   const request: ReportRequest = { ...settings, read, processed: applyProcessing(read, options), pair };
-  const inputs = [
-    source,
-    ...(options.pair ? [options.pair] : []),
-    ...equipment.map((e) => e.file),
-    ...(settings.target?.files ?? []),
+  const roles: [string, string][] = [
+    ['record', source],
+    ...(options.pair ? [['second component', options.pair] as [string, string]] : []),
+    ...equipment.map((e): [string, string] => ['equipment', e.file]),
+    ...(settings.target?.files ?? []).map((file): [string, string] => ['target spectrum', file]),
   ];
-  return { request, inputs, out };
+  request.inputFiles = roles.map(([role, path]) => ({ role, path, sha256: sha256OfFile(path) }));
+  return { request, inputs: roles.map(([, path]) => path), out };
+}
+
+/** The SHA-256 of a file's bytes, hex, as the report states it beside the file; none of standard input. */
+export function sha256OfFile(path: string): string {
+  if (path === '-') return 'not computed (standard input)';
+  return createHash('sha256').update(readFileSync(path)).digest('hex');
 }
 
 /** The inelastic section of --ductility, --model and --ductility-periods; none without --ductility. */

@@ -1,3 +1,4 @@
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import {
@@ -5,6 +6,7 @@ import {
   optionWords,
   type ReportCliOptions,
   reportRequest,
+  sha256OfFile,
 } from '../../../src/cli/options/report.js';
 import { useCliFolder } from '../../helpers/cli-folder.js';
 
@@ -67,6 +69,35 @@ describe('reportRequest', () => {
     expect(request.target?.spectrum.code).toBe('asce7-22');
     expect(request.target?.spectrum.parameters.form).toBe('multi-period');
     expect(inputs).toEqual([at('main.txt'), table]);
+  });
+
+  it('gives the title block its names and every input its SHA-256', async () => {
+    const options = {
+      ...base(),
+      project: 'Invented yard',
+      preparedBy: 'A. Person (invented)',
+      pair: at('second.txt'),
+    };
+    const { request } = await reportRequest(at('main.txt'), options, []);
+    expect(request.titleBlock).toEqual({
+      project: 'Invented yard',
+      preparedBy: 'A. Person (invented)',
+      checkedBy: undefined,
+    });
+    expect(request.inputFiles?.map((f) => [f.role, f.path])).toEqual([
+      ['record', at('main.txt')],
+      ['second component', at('second.txt')],
+    ]);
+    for (const f of request.inputFiles ?? []) expect(f.sha256).toMatch(/^[0-9a-f]{64}$/);
+  });
+
+  it('sha256OfFile: the FIPS 180-2 example "abc"', () => {
+    writeFileSync(at('abc.txt'), 'abc');
+    // FIPS 180-2, Appendix B.1: SHA-256("abc").
+    expect(sha256OfFile(at('abc.txt'))).toBe(
+      'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad',
+    );
+    expect(sha256OfFile('-')).toMatch(/standard input/);
   });
 
   it('states the time SOURCE_DATE_EPOCH gives, for a reproducible report', async () => {
