@@ -40,16 +40,19 @@ export function readingStep(f: ReadingFacts): ProcessingStep {
   return {
     operation: 'read',
     description: `as read: ${parts.join('; ')}`,
+    // Keys that do not apply are left out (no nulls in outputs).
     parameters: {
       dt_s: f.dtS,
       dt_from: f.dtFrom,
       units: f.units,
       units_from: f.unitsFrom,
       layout: f.layout,
-      column: f.column?.index ?? null,
+      ...(f.column === undefined ? {} : { column: f.column.index }),
+      ...(f.column?.name === undefined ? {} : { column_name: f.column.name }),
       header_lines: f.headerLines,
-      header_points: f.headerPoints ?? null,
-      fixed_widths: f.fixed ?? null,
+      ...(f.headerPoints === undefined ? {} : { header_points: f.headerPoints }),
+      ...(f.fixed === undefined ? {} : { fields: f.fixed }),
+      ...(f.timeUnit === undefined ? {} : { time_unit: f.timeUnit }),
     },
   };
 }
