@@ -30,6 +30,8 @@ const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
 /** A letter of any script, which a header line has and a row of numbers has not. */
 const LETTER = /\p{L}/u;
 const DIGIT = /\d/;
+/** Only what numbers are written with: a field of these is a malformed number, not a word. */
+const NUMERIC_CHARACTERS = /^[\d.,eEdD+-]+$/;
 /** Control characters and the replacement character that stands for bytes that are not UTF-8. */
 // biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is the point
 const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
@@ -184,7 +186,11 @@ export class RecordReader {
   private choose(): void {
     const held = this.held as HeldRow[];
     this.held = undefined;
-    this.layout = firstColumnIsTime(held) ? 'table' : 'wrapped';
+    // A header's point count tells, when the file holds no more rows than looked at; else the first column.
+    const points = this.keys.points?.value;
+    const values = held.reduce((n, row) => n + row.fields.length, 0);
+    const table = points === held.length ? true : points === values ? false : firstColumnIsTime(held);
+    this.layout = table ? 'table' : 'wrapped';
     this.begin(held[0].fields.length, held[0].line);
     for (const row of held) this.dataRow(row.fields, row.line);
   }
@@ -203,7 +209,9 @@ export class RecordReader {
     }
     if (this.layout === 'single' && o.column !== undefined && o.column !== 1)
       throw usageError(`--column ${o.column}: ${o.source} has one value a line`);
-    this.valueColumn = this.layout === 'table' ? this.sources.valueColumn(columns, this.names) : 1;
+    const wrapped =
+      this.options.layout === 'auto' || this.options.layout === undefined ? this.seen : undefined;
+    this.valueColumn = this.layout === 'table' ? this.sources.valueColumn(columns, this.names, wrapped) : 1;
     this.unitMS2 =
       ACCELERATION_UNITS[this.sources.units(this.layout === 'table' ? this.valueColumn : 0, this.names)];
     // Decimal commas and declared widths are read by row() alone; the scanner reads neither.
@@ -279,7 +287,9 @@ export class RecordReader {
    */
   private isHeader(fields: string[]): boolean {
     if (fields.every((f) => this.isNumber(f))) return false;
-    return fields.some((f) => LETTER.test(f)) || !fields.some((f) => DIGIT.test(f));
+    // The E of `1.0E-022.0E-02` (values touching without a sign) is no word: that is a row, refused.
+    const word = (f: string) => LETTER.test(f) && !NUMERIC_CHARACTERS.test(f);
+    return fields.some(word) || !fields.some((f) => DIGIT.test(f));
   }
 
   private isNumber(text: string): boolean {

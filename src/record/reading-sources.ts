@@ -1,6 +1,7 @@
 import { inputError, usageError } from '../base/errors.js';
 import { ACCELERATION_UNIT_NAMES, ACCELERATION_UNITS, type AccelerationUnit } from '../base/units.js';
 import { columnNameUnit, type HeaderKeys, timeNameInMs } from './header.js';
+import { type LayoutSeen, wrappedHint } from './layout-choice.js';
 import { checkTimeScale, plausibilityWarnings } from './plausibility.js';
 import type { ReadOptions } from './read.js';
 import { readingStep, warningStep } from './reading.js';
@@ -48,7 +49,7 @@ export class ReadingSources {
   }
 
   /** The table's 1-based value column: --column by number or name, else the one value column. */
-  valueColumn(columns: number, names: Names): number {
+  valueColumn(columns: number, names: Names, seen?: LayoutSeen): number {
     const o = this.options;
     const named = names !== undefined && names.fields.length === columns ? names.fields : undefined;
     const listed = named === undefined ? '' : `; its columns: ${named.join(', ')}`;
@@ -69,8 +70,10 @@ export class ReadingSources {
     } else {
       const which =
         named === undefined ? `time, then ${columns - 1} value columns with no names` : named.join(', ');
+      // With no names the columns may be values wrapped several a line.
+      const or = named === undefined && seen !== undefined ? `; or, if it ${wrappedHint(seen)}` : '';
       throw usageError(
-        `${o.source} has ${columns} columns (${which}): choose the acceleration with --column (a name or a number from 2 to ${columns})`,
+        `${o.source} has ${columns} columns (${which}): choose the acceleration with --column (a name or a number from 2 to ${columns})${or}`,
       );
     }
     if (column === 1 || column > columns)
