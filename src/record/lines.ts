@@ -1,5 +1,6 @@
 import { lineFields, longLineError } from './fields.js';
 import { fixedFields } from './fixed.js';
+import { NUMBER } from './number.js';
 import type { RecordReader } from './reader.js';
 import { MAX_LINE_CHARACTERS, sniffFields } from './separator.js';
 
@@ -102,7 +103,11 @@ export class LineSplitter {
     // Lines to skip are split too, so that the limit on a line's size in bytes holds there.
     let fields = lineFields(line, reader.separator, source, number);
     const widths = reader.options.fixed;
-    if (widths !== undefined && fields.length > 0) fields = fixedFields(uncommented(line), widths);
+    if (widths !== undefined && fields.length > 0) {
+      // Header lines are split as written, not cut into widths; the data from its first row on.
+      const cut = fixedFields(uncommented(line), widths);
+      if (!reader.inHeader || cut.every((f) => NUMBER.test(f))) fields = cut;
+    }
     if (number > this.skip && fields.length > 0) reader.row(fields, number);
   }
 }

@@ -74,6 +74,8 @@ export class RecordReader {
   private held: HeldRow[] | undefined;
   private seen: LayoutSeen | undefined;
   private touchingLine = 0;
+  /** The last line that stated a header key: a line of keys names no columns. */
+  private keyLine = 0;
   readonly sources: ReadingSources;
 
   /** `scanner`: the fast path for runs of numeric rows, none to read every row with row(). */
@@ -99,7 +101,9 @@ export class RecordReader {
 
   /** A line before the data, as written: read for the header's keys. */
   headerText(text: string, line: number): void {
+    const before = Object.keys(this.keys).length;
     scanHeaderLine(text, line, this.keys);
+    if (Object.keys(this.keys).length > before) this.keyLine = line;
   }
 
   /** Rows from `from` (a line's start) read by the scanner, which takes exactly those row() would. */
@@ -167,7 +171,7 @@ export class RecordReader {
         `no row of values in the first ${MAX_HEADER_LINES} lines of text: is this a record?`,
         line,
       );
-    this.names = { fields, line };
+    this.names = line === this.keyLine ? undefined : { fields, line };
   }
 
   /** The first row of values: the layout is chosen now, or after a few rows when it cannot be yet. */
