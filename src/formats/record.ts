@@ -2,6 +2,7 @@ import { CAUTION, cautionLines } from '../base/caution.js';
 import { ACCELERATION_UNITS, type AccelerationUnit, LENGTH_UNITS, type LengthUnit } from '../base/units.js';
 import { integrateRecord } from '../record/integrate.js';
 import { PROCESSING_ORDER } from '../record/process.js';
+import { appliedSteps } from '../record/reading.js';
 import type { GroundRecord } from '../record/record.js';
 import { notFiniteError } from './finite.js';
 
@@ -48,13 +49,17 @@ export function recordHeader(
   o: RecordOutputOptions,
   columns: readonly string[],
 ): string[] {
-  const steps = record.processing.map((step, i) => `step ${i + 1}: ${step.description}`);
+  const reading = record.processing
+    .filter((step) => !appliedSteps([step]).length)
+    .map((step) => step.description);
+  const steps = appliedSteps(record.processing).map((step, i) => `step ${i + 1}: ${step.description}`);
   return [
     `processed ground-acceleration record ${record.name}, written by quakesweep record`,
     `dt: ${record.dtS} s`,
     `npts: ${record.accelMS2.length}`,
     `units: ${o.accelUnit} (acceleration)`,
     `source: ${record.source} (read in ${record.unitsRead})`,
+    ...reading,
     `processing (applied in the order ${[...PROCESSING_ORDER, 'scale'].join(', ')}): ${steps.length === 0 ? 'none, the record as read' : `${steps.length} step${steps.length === 1 ? '' : 's'}`}`,
     ...steps,
     `columns: ${columns.join(', ')}; time in s from the first sample`,

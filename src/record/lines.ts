@@ -1,6 +1,8 @@
 import { lineFields, longLineError } from './fields.js';
+import { fixedFields } from './fixed.js';
+import { NUMBER } from './number.js';
 import type { RecordReader } from './reader.js';
-import { MAX_LINE_CHARACTERS, sniffSeparator } from './separator.js';
+import { MAX_LINE_CHARACTERS, sniffFields } from './separator.js';
 
 /** Offers of a text to the row scanner that may read nothing before it is offered no more of it. */
 const MAX_MISSES = 16;
@@ -24,7 +26,9 @@ export class LineSplitter {
     this.skip = reader.options.skip ?? 0;
     // One byte-order mark is removed, at the start of the text only; any other is a character.
     const text = head.charCodeAt(0) === 0xfeff ? head.slice(1) : head;
-    reader.separator = sniffSeparator(text, this.skip, partial);
+    const sniffed = sniffFields(text, this.skip, partial);
+    reader.separator = sniffed.separator;
+    reader.tabDecimalCommas = sniffed.tabDecimalCommas;
     this.push(text);
   }
 
@@ -84,7 +88,9 @@ export class LineSplitter {
 
   /** The end of the text: its last line, if it has no line break after it. */
   end(): void {
-    if (this.rest !== '') this.take(this.rest);
+    if (this.rest === '') return;
+    this.reader.endedWithoutBreak = true;
+    this.take(this.rest);
   }
 
   private take(line: string): void {
@@ -92,8 +98,22 @@ export class LineSplitter {
     const { source } = this.reader.options;
     if (line.length > MAX_LINE_CHARACTERS) throw longLineError(source, number);
     if (line.length === 0) return;
-    const fields = lineFields(line, this.reader.separator, source, number);
+    const reader = this.reader;
+    if (reader.inHeader) reader.headerText(line, number);
     // Lines to skip are split too, so that the limit on a line's size in bytes holds there.
-    if (number > this.skip && fields.length > 0) this.reader.row(fields, number);
+    let fields = lineFields(line, reader.separator, source, number);
+    const widths = reader.options.fixed;
+    if (widths !== undefined && fields.length > 0) {
+      // Header lines are split as written, not cut into widths; the data from its first row on.
+      const cut = fixedFields(uncommented(line), widths);
+      if (!reader.inHeader || cut.every((f) => NUMBER.test(f))) fields = cut;
+    }
+    if (number > this.skip && fields.length > 0) reader.row(fields, number);
   }
+}
+
+/** The text of a line before any `#`. */
+function uncommented(line: string): string {
+  const hash = line.indexOf('#');
+  return hash === -1 ? line : line.slice(0, hash);
 }

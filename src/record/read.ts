@@ -1,7 +1,8 @@
 import { isAscii } from 'node:buffer';
-import { ACCELERATION_UNITS, type AccelerationUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import type { AccelerationUnit } from '../base/units.js';
 import { LineSplitter } from './lines.js';
 import { RecordReader } from './reader.js';
+import { readingWarnings } from './reading.js';
 import type { GroundRecord } from './record.js';
 import { RowScanner } from './rows.js';
 import { LINE_BREAK, MAX_LINE_CHARACTERS } from './separator.js';
@@ -13,12 +14,25 @@ import { LINE_BREAK, MAX_LINE_CHARACTERS } from './separator.js';
 export type RecordLayout = 'auto' | 'single' | 'table' | 'wrapped';
 
 export interface ReadOptions {
-  /** The unit of the acceleration values; required, never guessed. */
-  units: AccelerationUnit;
-  /** Time step, s, for files without a time column (single and wrapped layouts). */
+  /**
+   * The unit of the acceleration values; never guessed: when left out, the header must state it
+   * (header.ts); when given and the header says otherwise, it is used and a warning says so.
+   */
+  units?: AccelerationUnit;
+  /** Time step, s, for files without a time column (single and wrapped layouts); else the header's. */
   dtS?: number;
-  /** 1-based column holding the acceleration in a table (column 1 is time; default: the last). */
-  column?: number;
+  /**
+   * The table's acceleration column: 1-based (column 1 is time) or a name of the header row, in
+   * any case. Default: column 2 when it is the only value column; with more, it must be given.
+   */
+  column?: number | string;
+  /** Declared fixed-width fields, the widths in characters (the last repeats); see fixed.ts. */
+  fixed?: number[];
+  /**
+   * The time column's unit. Left out, seconds, and a step of 1 s or more or a record longer than a
+   * day is refused as plainly not seconds (plausibility.ts); given, it is taken as told.
+   */
+  timeUnit?: 's' | 'ms';
   /** Lines to skip before the data (headers of fixed length). */
   skip?: number;
   layout?: RecordLayout;
@@ -130,22 +144,11 @@ function wellFormed(text: string): string {
   return (text as unknown as { toWellFormed(): string }).toWellFormed();
 }
 
-/** Warnings when a PGA above 5 g or below 0.0001 g suggests the wrong unit (common practice). */
-export function unitWarnings(record: GroundRecord): string[] {
-  const pgaMS2 = record.pgaMS2;
-  const pgaG = pgaMS2 / STANDARD_GRAVITY_MS2;
-  // A part in 10¹² to spare, so exactly 5 g or 0.0001 g through the unit factor is not warned about.
-  if (pgaG <= 5 * (1 + 1e-12) && pgaG >= 1e-4 * (1 - 1e-12)) return [];
-  const readFactor = ACCELERATION_UNITS[record.unitsRead];
-  const alternatives: string[] = [];
-  for (const [unit, factor] of Object.entries(ACCELERATION_UNITS)) {
-    if (unit === 'gal' || factor === readFactor) continue;
-    const altG = (pgaMS2 / readFactor) * (factor / STANDARD_GRAVITY_MS2);
-    if (altG >= 0.01 && altG <= 2) alternatives.push(`in ${unit} it would be ${altG.toPrecision(3)} g`);
-  }
-  const bound = pgaG > 5 ? 'above 5 g' : 'below 0.0001 g';
-  const hint = alternatives.length > 0 ? `; ${alternatives.join(', ')}` : '';
-  return [
-    `PGA ${pgaG.toPrecision(3)} g read in ${record.unitsRead} is ${bound}: are the units right?${hint}`,
-  ];
+/**
+ * The warnings found while reading the record: implausible PGA, PGV, PGD or duration for the unit
+ * (plausibility.ts), a unit that contradicts the header, a file cut short. They are also entries of
+ * the record's processing list (reading.ts), so every output carries them.
+ */
+export function unitWarnings(record: Pick<GroundRecord, 'processing'>): string[] {
+  return readingWarnings(record);
 }

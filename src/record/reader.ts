@@ -1,9 +1,22 @@
 import { inputError, usageError } from '../base/errors.js';
 import { ACCELERATION_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { quote } from './fields.js';
+import { expandTouching, fieldWidth } from './fixed.js';
+import type { HeaderKeys } from './header.js';
+import { scanHeaderLine } from './header.js';
+import {
+  countHint,
+  firstColumnIsTime,
+  fixedHint,
+  type HeldRow,
+  type LayoutSeen,
+  ROWS_TO_CHOOSE,
+  wrappedHint,
+} from './layout-choice.js';
 import { DECIMAL_COMMA, NUMBER, parseNumber, printedResolution } from './number.js';
 import type { ReadOptions, RecordLayout } from './read.js';
-import { createRecord, type GroundRecord, recordName } from './record.js';
+import { ReadingSources } from './reading-sources.js';
+import type { GroundRecord } from './record.js';
 import type { RowScanner } from './rows.js';
 import type { Separator } from './separator.js';
 
@@ -14,33 +27,56 @@ import type { Separator } from './separator.js';
 const MAX_ABS_ACCELERATION_G = 1e6;
 const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
 
-/** A letter of any script, which a header row of names has and a row of numbers has not. */
+/** A letter of any script, which a header line has and a row of numbers has not. */
 const LETTER = /\p{L}/u;
+const DIGIT = /\d/;
+/** Only what numbers are written with: a field of these is a malformed number, not a word. */
+const NUMERIC_CHARACTERS = /^[\d.,eEdD+-]+$/;
 /** Control characters and the replacement character that stands for bytes that are not UTF-8. */
 // biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is the point
 const BINARY = /[\u0000-\u0008\u000e-\u001f\ufffd]/;
+/** Lines of header read before the first row of values at most: past them it is no record. */
+const MAX_HEADER_LINES = 1000;
 
-/** Takes a record's rows, one by one or in scanned runs, and keeps the samples, m/s², in a growing array. */
+/**
+ * Takes a record's lines, one by one or in scanned runs of rows, and keeps the samples, m/s², in a
+ * growing array. Lines before the first row of values are its header: skipped, and read for the
+ * keys of header.ts; the last of them, as wide as the rows, names the columns.
+ */
 export class RecordReader {
   /** The file's separator, chosen from its first lines before any row is taken. */
   separator: Separator = ',';
-  private readonly layout: RecordLayout;
+  /** Decimal commas in a tab-separated file, told with the separator. */
+  tabDecimalCommas = false;
+  /** Whether the text ended without a line break after its last line (set by the line splitter). */
+  endedWithoutBreak = false;
+  private layout: RecordLayout;
   private values = new Float64Array(16384);
   private count = 0;
-  private headerLine = 0;
   /** The line of the last row of values that row() read. */
   private lastDataLine = 0;
   private columns = 0;
   private valueColumn = 0;
-  /** In a semicolon file, whether decimals are written with `.` or `,` (a file may not mix them). */
+  /** In a file with decimal commas, whether decimals are written with `.` or `,` (a file may not mix them). */
   private decimalMark: '.' | ',' | undefined;
   private decimalMarkLine = 0;
   private timeFirstS = 0;
   private timePreviousS = 0;
   /** Whether rowsFrom may read rows: the first data row is read and the layout allows it. */
   readsRows = false;
-  /** m/s² per unit of the values. */
-  private readonly unitMS2: number;
+  /** m/s² per unit of the values, known once the first row of values is read. */
+  private unitMS2 = 1;
+  private readonly keys: HeaderKeys = {};
+  /** The last header line's fields and line (the names of the columns when as wide as the rows). */
+  private names: { fields: string[]; line: number } | undefined;
+  private headerLineCount = 0;
+  /** Rows held while an `auto` file of several values a line is told to be a table or wrapped. */
+  private held: HeldRow[] | undefined;
+  private seen: LayoutSeen | undefined;
+  private touchingLine = 0;
+  /** The last line that stated a header key: a line of keys names no columns. */
+  private keyLine = 0;
+  readonly sources: ReadingSources;
 
   /** `scanner`: the fast path for runs of numeric rows, none to read every row with row(). */
   constructor(
@@ -48,15 +84,26 @@ export class RecordReader {
     private readonly scanner: RowScanner | null,
   ) {
     this.layout = options.layout ?? 'auto';
-    this.unitMS2 = ACCELERATION_UNITS[options.units];
-    if ((this.layout === 'single' || this.layout === 'wrapped') && options.dtS === undefined)
-      throw usageError(`the ${this.layout} layout has no time column: give the time step with --dt`);
     if (options.dtS !== undefined && !(options.dtS > 0 && Number.isFinite(options.dtS)))
       throw usageError(`--dt must be a positive number of seconds, got ${options.dtS}`);
     if (this.layout === 'wrapped' && options.column !== undefined)
       throw usageError('--column does not apply to the wrapped layout (values are read in row order)');
-    if (options.column !== undefined && !(Number.isInteger(options.column) && options.column >= 1))
-      throw usageError(`--column must be a whole number ≥ 1, got ${options.column}`);
+    const c = options.column;
+    if (typeof c === 'number' && !(Number.isInteger(c) && c >= 1))
+      throw usageError(`--column must be a whole number ≥ 1 or a column's name, got ${c}`);
+    this.sources = new ReadingSources(options, this.keys);
+  }
+
+  /** Whether the first row of values is still to come: lines so far are header, read for its keys. */
+  get inHeader(): boolean {
+    return this.seen === undefined;
+  }
+
+  /** A line before the data, as written: read for the header's keys. */
+  headerText(text: string, line: number): void {
+    const before = Object.keys(this.keys).length;
+    scanHeaderLine(text, line, this.keys);
+    if (Object.keys(this.keys).length > before) this.keyLine = line;
   }
 
   /** Rows from `from` (a line's start) read by the scanner, which takes exactly those row() would. */
@@ -93,22 +140,108 @@ export class RecordReader {
   }
 
   row(rawFields: string[], line: number): void {
-    const fields = this.separator === 'whitespace' ? rawFields.filter((f) => f !== '') : rawFields;
+    const whitespace = this.separator === 'whitespace';
+    let fields = whitespace ? rawFields.filter((f) => f !== '') : rawFields;
     if (fields.length === 0 || (fields.length === 1 && fields[0] === '')) return;
     for (const field of fields)
       if (BINARY.test(field)) throw this.error('binary data, not a text record', line);
+    if (whitespace && this.options.fixed === undefined) {
+      const split = expandTouching(fields);
+      if (split !== fields && this.touchingLine === 0) this.touchingLine = line;
+      fields = split;
+    }
+    if (this.seen === undefined) {
+      if (this.isHeader(fields)) {
+        this.header(fields, line);
+        return;
+      }
+      this.start(fields, line, whitespace ? rawFields.join(' ') : undefined);
+    }
+    if (this.held !== undefined) {
+      this.held.push({ fields, line });
+      if (this.held.length >= ROWS_TO_CHOOSE) this.choose();
+      return;
+    }
+    this.dataRow(fields, line);
+  }
+
+  private header(fields: string[], line: number): void {
+    if (++this.headerLineCount > MAX_HEADER_LINES)
+      throw this.error(
+        `no row of values in the first ${MAX_HEADER_LINES} lines of text: is this a record?`,
+        line,
+      );
+    this.names = line === this.keyLine ? undefined : { fields, line };
+  }
+
+  /** The first row of values: the layout is chosen now, or after a few rows when it cannot be yet. */
+  private start(fields: string[], line: number, text: string | undefined): void {
+    const declared = this.options.fixed;
+    const width = declared !== undefined ? declared[0] : text === undefined ? undefined : fieldWidth(text);
+    this.seen = { firstLine: line, perLine: fields.length, width };
+    const named = this.names !== undefined && this.names.fields.length === fields.length;
+    // Without a time step known, several values a line can only be a table: no need to wait.
+    const dtKnown = this.options.dtS !== undefined || this.keys.dtS !== undefined;
+    if (this.layout === 'auto' && fields.length > 1 && !named && dtKnown) this.held = [];
+    else this.begin(fields.length, line);
+  }
+
+  /** Table or wrapped, by the held rows (held only when a time step is known for wrapped values). */
+  private choose(): void {
+    const held = this.held as HeldRow[];
+    this.held = undefined;
+    // A header's point count tells, when the file holds no more rows than looked at; else the first column.
+    const points = this.keys.points?.value;
+    const values = held.reduce((n, row) => n + row.fields.length, 0);
+    const table = points === held.length ? true : points === values ? false : firstColumnIsTime(held);
+    this.layout = table ? 'table' : 'wrapped';
+    this.begin(held[0].fields.length, held[0].line);
+    for (const row of held) this.dataRow(row.fields, row.line);
+  }
+
+  private begin(columns: number, line: number): void {
+    const o = this.options;
+    this.columns = columns;
+    if (this.layout === 'auto') this.layout = columns === 1 ? 'single' : 'table';
+    if (this.layout === 'single' && columns !== 1)
+      throw this.error(`the single layout has one value a line, found ${columns} columns`, line);
+    if (this.layout === 'table' && columns < 2)
+      throw this.error('the table layout needs a time column and a value column, found 1 column', line);
+    if (this.layout !== 'table' && o.dtS === undefined && this.keys.dtS === undefined) {
+      const what = this.layout === 'single' ? `${o.source} has one value a line` : 'the wrapped layout has';
+      throw usageError(`${what} and no time column: give the time step with --dt (the header states none)`);
+    }
+    if (this.layout === 'single' && o.column !== undefined && o.column !== 1)
+      throw usageError(`--column ${o.column}: ${o.source} has one value a line`);
+    const wrapped =
+      this.options.layout === 'auto' || this.options.layout === undefined ? this.seen : undefined;
+    this.valueColumn = this.layout === 'table' ? this.sources.valueColumn(columns, this.names, wrapped) : 1;
+    this.unitMS2 =
+      ACCELERATION_UNITS[this.sources.units(this.layout === 'table' ? this.valueColumn : 0, this.names)];
+    // Decimal commas and declared widths are read by row() alone; the scanner reads neither.
+    this.readsRows =
+      this.scanner !== null &&
+      this.layout === 'table' &&
+      this.separator !== ';' &&
+      !this.tabDecimalCommas &&
+      o.fixed === undefined;
+  }
+
+  private dataRow(fields: string[], line: number): void {
     if (this.layout === 'wrapped') {
       for (let i = 0; i < fields.length; i++) this.add(this.number(fields[i], line, i + 1), line);
       this.lastDataLine = line;
       return;
     }
-    if (this.columns === 0 && this.headerLine === 0 && this.isHeader(fields)) {
-      this.headerLine = line; // one header row of names is allowed before the data
-      return;
+    if (fields.length !== this.columns) {
+      const seen = this.seen as LayoutSeen;
+      const more = this.count <= 1 && fields.length > seen.perLine;
+      const hint = more ? ` (${countHint(seen, fields.length)})` : '';
+      throw this.error(
+        `expected ${columnCount(this.columns)}, found ${columnCount(fields.length)}${hint}`,
+        line,
+      );
     }
-    if (this.columns === 0) this.firstRow(fields.length, line);
-    if (fields.length !== this.columns)
-      throw this.error(`expected ${columnCount(this.columns)}, found ${columnCount(fields.length)}`, line);
     for (let i = 0; i < fields.length; i++) {
       if (i === 0 || i === this.valueColumn - 1) continue;
       this.number(fields[i], line, i + 1); // columns not used must still be numbers
@@ -118,36 +251,14 @@ export class RecordReader {
     this.lastDataLine = line;
   }
 
-  private firstRow(columns: number, line: number): void {
-    const o = this.options;
-    this.columns = columns;
-    // Semicolon files may write decimal commas, which number() tracks and the scanner does not.
-    this.readsRows = this.scanner !== null && this.layout !== 'wrapped' && this.separator !== ';';
-    if (this.layout === 'single' && columns !== 1)
-      throw this.error(`the single layout has one value a line, found ${columns} columns`, line);
-    if (this.layout === 'table' && columns < 2)
-      throw this.error('the table layout needs a time column and a value column, found 1 column', line);
-    if (columns === 1) {
-      if (o.column !== undefined && o.column !== 1)
-        throw usageError(`--column ${o.column}: ${o.source} has one value a line`);
-      if (o.dtS === undefined)
-        throw usageError(`${o.source} has one value a line and no time column: give the time step with --dt`);
-      this.valueColumn = 1;
-      return;
-    }
-    const column = o.column ?? columns;
-    if (column === 1 || column > columns)
-      throw usageError(
-        `--column ${column}: ${o.source} has ${columns} columns; column 1 is time, so choose 2 to ${columns}`,
-      );
-    this.valueColumn = column;
-  }
-
   /** Check that the time column advances by one uniform step. */
   private time(timeS: number, text: string, line: number): void {
     const i = this.count;
     if (i > 0 && !(timeS > this.timePreviousS))
-      throw this.error(`time does not increase: ${text} s after ${this.timePreviousS} s`, line);
+      throw this.error(
+        `time does not increase: ${text} s after ${this.timePreviousS} s${this.wrappedHint()}`,
+        line,
+      );
     if (i >= 2) {
       // Allow a step one last printed digit off the mean, but never half a step.
       const meanStepS = (this.timePreviousS - this.timeFirstS) / (i - 1);
@@ -157,38 +268,59 @@ export class RecordReader {
       const uniform =
         offS <= 1e-6 * meanStepS ||
         offS <= Math.min(printedResolution(text) * 1.01, 0.5 * meanStepS) + 1e-6 * meanStepS;
-      if (!uniform) {
-        const hint =
-          this.layout === 'auto' ? ' (if the values are wrapped several a line, use --layout wrapped)' : '';
+      if (!uniform)
         throw this.error(
-          `the time step changes here: ${formatS(stepS)} s after ${formatS(meanStepS)} s; the step must be uniform${hint}`,
+          `the time step changes here: ${formatS(stepS)} s after ${formatS(meanStepS)} s; the step must be uniform${this.wrappedHint()}`,
           line,
         );
-      }
     }
     if (i === 0) this.timeFirstS = timeS;
     this.timePreviousS = timeS;
   }
 
-  /** A row of names: not all numbers, and some letters (so `0\t0,5` is refused as data, not skipped). */
+  /** Near the start of an `auto` file, the hint that its values may be wrapped several a line. */
+  private wrappedHint(): string {
+    if (this.options.layout !== undefined && this.options.layout !== 'auto') return '';
+    if (this.count > ROWS_TO_CHOOSE) return '';
+    return ` (${wrappedHint(this.seen as LayoutSeen)})`;
+  }
+
+  /**
+   * A header line: not all numbers, and some letters or no digits at all (so `0\t0,5` is refused
+   * as data, not skipped, while `-----` and `time,accel` are skipped).
+   */
   private isHeader(fields: string[]): boolean {
-    const number = (f: string) => NUMBER.test(f) || (this.separator === ';' && DECIMAL_COMMA.test(f));
-    return !fields.every(number) && fields.some((f) => LETTER.test(f));
+    if (fields.every((f) => this.isNumber(f))) return false;
+    // The E of `1.0E-022.0E-02` (values touching without a sign) is no word: that is a row, refused.
+    const word = (f: string) => LETTER.test(f) && !NUMERIC_CHARACTERS.test(f);
+    return fields.some(word) || !fields.some((f) => DIGIT.test(f));
+  }
+
+  private isNumber(text: string): boolean {
+    return NUMBER.test(text) || (this.decimalCommas() && DECIMAL_COMMA.test(text));
+  }
+
+  /** Whether decimal commas may be read: where a comma cannot separate fields. */
+  private decimalCommas(): boolean {
+    return this.separator === ';' || this.tabDecimalCommas;
   }
 
   private number(text: string, line: number, column: number): number {
     let value = parseNumber(text);
-    if (Number.isNaN(value) && this.separator === ';' && DECIMAL_COMMA.test(text)) {
+    const commas = this.decimalCommas();
+    if (Number.isNaN(value) && commas && DECIMAL_COMMA.test(text)) {
       this.mark(',', line);
       value = parseNumber(text.replace(',', '.'));
-    } else if (this.separator === ';' && text.includes('.')) {
+    } else if (commas && text.includes('.')) {
       this.mark('.', line);
     }
     if (!Number.isNaN(value)) return value;
     if (text === '') throw this.error(`empty value in column ${column}`, line);
-    const hint = /^[+-]?\d*,\d+$/.test(text)
-      ? ' (decimal commas are read only in files separated by semicolons)'
-      : '';
+    let hint = '';
+    if (/^[+-]?\d*,\d+$/.test(text))
+      hint = ' (decimal commas are read only in files separated by semicolons or tabs)';
+    else if (/^[+-]?[\d.]+[eEdD][+-]?\d+[+-]?[\d.]/.test(text))
+      hint = ` (${fixedHint(this.seen as LayoutSeen)})`;
     throw this.error(`${quote(text)} is not a number${hint}`, line);
   }
 
@@ -207,7 +339,7 @@ export class RecordReader {
   private add(value: number, line: number): void {
     if (Math.abs(value) * this.unitMS2 > MAX_ABS_ACCELERATION_MS2) {
       throw this.error(
-        `${value} ${this.options.units} is above ${MAX_ABS_ACCELERATION_G.toExponential(0)} g, which no ground motion reaches in any unit`,
+        `${value} ${this.sources.unitsRead} is above ${MAX_ABS_ACCELERATION_G.toExponential(0)} g, which no ground motion reaches in any unit`,
         line,
       );
     }
@@ -229,33 +361,33 @@ export class RecordReader {
 
   /** The record read, named as the options say or after its source (`stdin` for `-`). */
   finish(): GroundRecord {
+    if (this.held !== undefined) this.choose();
     const o = this.options;
     if (this.count === 0) {
-      if (this.headerLine > 0) throw this.error('a header row but no values after it', this.headerLine);
+      if (this.names !== undefined && this.seen === undefined && this.headerLineCount === 1)
+        throw this.error('a header row but no values after it', this.names.line);
       const skipped = (o.skip ?? 0) > 0 ? ` after skipping ${o.skip} lines` : '';
-      const message = `no values found${skipped}: the file is empty or holds only comments and blank lines`;
+      const header = this.headerLineCount > 0 ? `, or only ${this.headerLineCount} lines of header text` : '';
+      const message = `no values found${skipped}: the file is empty or holds only comments and blank lines${header}`;
       throw inputError(message, { file: o.source });
     }
     if (this.count < 2) throw this.error('only 1 sample; a record needs at least 2', this.lastDataLine);
-    let dtS = o.dtS;
-    if (this.columns > 1) {
-      const columnDtS = (this.timePreviousS - this.timeFirstS) / (this.count - 1);
-      if (dtS !== undefined && Math.abs(dtS - columnDtS) > 1e-4 * columnDtS)
-        throw inputError(`--dt ${dtS} disagrees with the time column's step, ${formatS(columnDtS)} s`, {
-          file: o.source,
-        });
-      dtS = columnDtS;
-    }
-    return createRecord({
-      name: o.name ?? (o.source === '-' ? 'stdin' : recordName(o.source)),
-      source: o.source,
-      dtS: dtS as number,
-      // A view when little of the array is spare (a copy would hold the samples twice at the peak).
-      accelMS2:
-        this.count > 0.75 * this.values.length
-          ? this.values.subarray(0, this.count)
-          : this.values.slice(0, this.count),
-      unitsRead: o.units,
+    const samples =
+      this.count > 0.75 * this.values.length
+        ? this.values.subarray(0, this.count)
+        : this.values.slice(0, this.count);
+    return this.sources.record({
+      accelMS2: samples,
+      layout: this.layout as 'single' | 'table' | 'wrapped',
+      columnStepS:
+        this.columns > 1 && this.layout === 'table'
+          ? (this.timePreviousS - this.timeFirstS) / (this.count - 1)
+          : undefined,
+      firstLine: (this.seen as LayoutSeen).firstLine,
+      width: this.options.fixed === undefined && this.touchingLine > 0 ? this.seen?.width : undefined,
+      touchingLine: this.touchingLine,
+      endedWithoutBreak: this.endedWithoutBreak,
+      valueColumn: this.valueColumn,
     });
   }
 }

@@ -309,7 +309,11 @@ export const GOLDEN_CASES: GoldenCase[] = [
       ...w('--out OUT/g.csv'),
     ],
   },
-  { name: 'error-missing-units', argv: w(`spectrum ${H1}`) },
+  // --skip 5 skips the names row, whose 'accel_g' would state the unit.
+  { name: 'error-missing-units', argv: w(`spectrum ${H1} --skip 5`) },
+  { name: 'info-fixed-header', argv: w(`info IN/marrowby-h1-fixed.txt --format json`) },
+  { name: 'spectrum-wrapped-header', argv: w(`spectrum IN/marrowby-h2-wrapped.txt ${GRID}`) },
+  { name: 'info-units-contradict', argv: w(`info ${H1} --units cm/s2`) },
   { name: 'error-unknown-option', argv: w(`info ${H1} --units g --smoothnig 20`) },
   {
     name: 'report-plain',

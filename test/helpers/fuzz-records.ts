@@ -192,6 +192,10 @@ export const wellFormedRecord: fc.Arbitrary<WrittenRecord> = fc
         dtS: noTime ? plainNumber(dtText) : undefined,
         skip: g.skipLines.length,
         layout,
+        // Steps of any size are seconds as told (else a step of 1 s or more is refused as not seconds).
+        timeUnit: 's' as const,
+        // Of several value columns one must be chosen (the reader takes none by default).
+        ...(columns === 3 ? { column: 3 } : {}),
       },
       expectedMS2,
       expectedDtS,

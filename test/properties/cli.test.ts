@@ -19,7 +19,14 @@ afterAll(() => rmSync(folder, { recursive: true, force: true }));
 
 interface Case {
   text: string;
-  options: { units: string; dtS?: number; skip?: number; layout?: string };
+  options: {
+    units?: string;
+    dtS?: number;
+    skip?: number;
+    layout?: string;
+    column?: number | string;
+    timeUnit?: string;
+  };
   /** Known only for well-formed files. */
   expected?: { npts: number; pgaG: number };
   csv: boolean;
@@ -28,7 +35,10 @@ interface Case {
 let serial = 0;
 
 function argvFor(c: Case, file: string, out: string): string[] {
-  const argv = ['spectrum', file, '--units', c.options.units, '--periods', '0,0.05,0.2,1,3', '--out', out];
+  const argv = ['spectrum', file, '--periods', '0,0.05,0.2,1,3', '--out', out];
+  if (c.options.units !== undefined) argv.push('--units', c.options.units);
+  if (c.options.column !== undefined) argv.push('--column', String(c.options.column));
+  if (c.options.timeUnit !== undefined) argv.push('--time-unit', c.options.timeUnit);
   if (c.options.dtS !== undefined) argv.push('--dt', String(c.options.dtS));
   if (c.options.skip) argv.push('--skip', String(c.options.skip));
   if (c.options.layout !== undefined && c.options.layout !== 'auto') argv.push('--layout', c.options.layout);

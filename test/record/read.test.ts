@@ -4,7 +4,8 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { isQuakesweepError } from '../../src/base/errors.js';
 import { parseNumber } from '../../src/record/number.js';
-import { type ReadOptions, readRecordStream, readRecordText, unitWarnings } from '../../src/record/read.js';
+import { plausibilityWarnings } from '../../src/record/plausibility.js';
+import { type ReadOptions, readRecordStream, readRecordText } from '../../src/record/read.js';
 import { createRecord } from '../../src/record/record.js';
 
 // Every record in these tests is invented for the test.
@@ -72,11 +73,15 @@ describe('layouts', () => {
     expect(values(read('time, accel\n0\t1\n0.5\t2\n'))).toEqual([1, 2]);
   });
 
-  it('picks the acceleration column with --column (1-based, column 1 is time), the last by default', () => {
+  it('picks the acceleration column with --column (1-based, column 1 is time, or a name), none by default of several', () => {
     const text = 't,a,b,c\n0,1,10,100\n0.02,2,20,200\n0.04,3,30,300\n';
     expect(values(read(text, { column: 2 }))).toEqual([1, 2, 3]);
     expect(values(read(text, { column: 3 }))).toEqual([10, 20, 30]);
-    expect(values(read(text))).toEqual([100, 200, 300]);
+    expect(values(read(text, { column: 'C' }))).toEqual([100, 200, 300]); // names in any case
+    expect(failure(() => read(text)).message).toBe(
+      'rec.csv has 4 columns (t, a, b, c): choose the acceleration with --column (a name or a number from 2 to 4)',
+    );
+    expect(values(read('t,a\n0,1\n0.02,2\n'))).toEqual([1, 2]); // one value column: no need to choose
   });
 
   it('reads values wrapped several a line, in row order, after --skip header lines', () => {
@@ -147,12 +152,18 @@ describe('decimal commas', () => {
     expect(error.message).toMatch(/decimal '\.'.*line 1 used ','/);
   });
 
-  it('refuses a comma value in a tab file rather than guess', () => {
-    const error = failure(() => read('0\t0,5\n0.01\t1,5\n'));
-    expect(error.line).toBe(1);
-    expect(error.message).toMatch(
-      /'0,5' is not a number \(decimal commas are read only in files separated by semicolons\)/,
-    );
+  it('reads decimal commas in a tab-separated file (a comma cannot separate there), one mark a file', () => {
+    const record = read('0,0000\t0,0000\n0,0125\t-0,0031\n0,0250\t0,0100\n');
+    expect(values(record)).toEqual([0, -0.0031, 0.01]); // the values as written
+    expect(record.dtS).toBeCloseTo(0.0125, 15); // (0.025 − 0) / 2
+    const mixed = failure(() => read('0,0\t0,5\n0.01\t1.5\n'));
+    expect(mixed.line).toBe(2);
+    expect(mixed.message).toMatch(/a decimal '\.' here, but line 1 used ','/);
+  });
+
+  it('still refuses a comma value where commas may separate, naming where they are read', () => {
+    const error = failure(() => read('0 0,5\n0.01 1,5\n'));
+    expect(error.message).toMatch(/not a number/);
   });
 });
 
@@ -214,17 +225,19 @@ describe('unit warnings', () => {
 
   it('warns above 5 g, naming the unit read and a unit that would fit', () => {
     // 981 read in g: the same numbers in cm/s2 would be 981 / 980.665 ≈ 1.00 g (closed form).
-    const warnings = unitWarnings(record(981, 'g', 9.80665));
-    expect(warnings).toHaveLength(1);
+    const warnings = plausibilityWarnings(record(981, 'g', 9.80665));
+    // and PGV: a jump to 981 g within 0.01 s is ½·9620·0.01 ≈ 48 m/s (trapezoid, closed form)
+    expect(warnings).toHaveLength(2);
+    expect(warnings[1]).toMatch(/^PGV 48\.1 m\/s is above 5 m\/s/);
     expect(warnings[0]).toMatch(/read in g is above 5 g/);
     expect(warnings[0]).toMatch(/in cm\/s2 it would be 1\.00 g/);
   });
 
-  it('warns below 0.0001 g and not inside the range (common practice thresholds)', () => {
-    expect(unitWarnings(record(0.5e-4, 'g', 9.80665))[0]).toMatch(/below 0\.0001 g/);
-    expect(unitWarnings(record(300, 'gal', 0.01))).toEqual([]); // 3 m/s² ≈ 0.31 g
-    expect(unitWarnings(record(5, 'g', 9.80665))).toEqual([]); // the bound itself
-    expect(unitWarnings(record(1e-4, 'g', 9.80665))).toEqual([]);
+  it('warns below 0.001 g and not inside the range (common practice thresholds)', () => {
+    expect(plausibilityWarnings(record(0.5e-3, 'g', 9.80665))[0]).toMatch(/below 0\.001 g/);
+    expect(plausibilityWarnings(record(300, 'gal', 0.01))).toEqual([]); // 3 m/s² ≈ 0.31 g
+    expect(plausibilityWarnings(record(5, 'g', 9.80665))).toEqual([]); // the bound itself
+    expect(plausibilityWarnings(record(1e-3, 'g', 9.80665))).toEqual([]);
   });
 });
 
@@ -236,10 +249,10 @@ describe('bad input is refused with the line', () => {
     ['-Infinity', '0,1\n0.01,-Infinity\n', 2, /'-Infinity' is not a number/],
     ['an overflow', '0.1\n1e999\n', 2, /'1e999' is not a number/],
     ['an empty value', '0,1\n0.01,\n0.02,3\n', 2, /empty value in column 2/],
-    ['an empty value mid-line', 't,a,b\n0,1,2\n0.01,,2\n', 3, /empty value in column 2/],
+    ['an empty value', 't,a\n0,1\n0.01,\n', 3, /empty value in column 2/],
     ['too few columns', '0,1\n0.01,2\n0.02\n', 3, /expected 2 columns, found 1 column/],
     ['too many columns', '0 1\n0.01 2\n0.02 3 4\n', 3, /expected 2 columns, found 3 columns/],
-    ['a second header row', 'time,a\nseconds,g\n0,1\n', 2, /'seconds' is not a number/],
+    ['a header line of words among the values', 'time,a\n0,1\nseconds,g\n', 3, /'seconds' is not a number/],
     ['a header row only', 'time,accel\n', 1, /a header row but no values after it/],
     ['a header row and comments only', '# x\n\ntime,accel\n# y\n', 3, /a header row but no values/],
     ['one sample', 'time,a\n0,1\n', 2, /only 1 sample/],

@@ -83,7 +83,7 @@ describe('refusals: the file, the line, and the kind that makes the CLI exit 2',
         ['0', '1'],
         ['0.01', '2', '3'],
       ],
-      `${SOURCE}:2: expected 2 columns, found 3 columns`,
+      `${SOURCE}:2: expected 2 columns, found 3 columns (line 1 has 2 values and this line 3; if line 1 is part of the header, try --skip 1)`,
     ],
     [
       'a time that goes back',
@@ -92,7 +92,7 @@ describe('refusals: the file, the line, and the kind that makes the CLI exit 2',
         ['0.01', '2'],
         ['0.005', '3'],
       ],
-      `${SOURCE}:3: time does not increase: 0.005 s after 0.01 s`,
+      `${SOURCE}:3: time does not increase: 0.005 s after 0.01 s (looks like 2 values a line with no time column; try --layout wrapped --dt STEP (or state the step in the header, e.g. 'dt = 0.01 s'))`,
     ],
     [
       // The step 0.01 s, then 0.02 s: off the mean by far more than a last printed digit.
@@ -102,7 +102,7 @@ describe('refusals: the file, the line, and the kind that makes the CLI exit 2',
         ['0.01', '2'],
         ['0.03', '3'],
       ],
-      `${SOURCE}:3: the time step changes here: 0.02 s after 0.01 s; the step must be uniform (if the values are wrapped several a line, use --layout wrapped)`,
+      `${SOURCE}:3: the time step changes here: 0.02 s after 0.01 s; the step must be uniform (looks like 2 values a line with no time column; try --layout wrapped --dt STEP (or state the step in the header, e.g. 'dt = 0.01 s'))`,
     ],
     [
       'a value beyond 10⁶ g',
@@ -145,13 +145,15 @@ describe('refusals: the file, the line, and the kind that makes the CLI exit 2',
     expect(table(lines)).toEqual({ kind: 'input', text });
   });
 
-  it('refuses a second header row as data, and a file with no row at all without a line', () => {
+  it('skips header lines before the data, and refuses a file with no row at all without a line', () => {
     expect(
       table([
         ['time', 'accel'],
         ['t', 'a'],
       ]).text,
-    ).toBe(`${SOURCE}:2: 't' is not a number`);
+    ).toBe(
+      `${SOURCE}: no values found: the file is empty or holds only comments and blank lines, or only 2 lines of header text`,
+    );
     expect(table([])).toEqual({
       kind: 'input',
       text: `${SOURCE}: no values found: the file is empty or holds only comments and blank lines`,
@@ -159,8 +161,9 @@ describe('refusals: the file, the line, and the kind that makes the CLI exit 2',
   });
 
   it('refuses options that cannot apply as usage errors', () => {
-    expect(refusal(() => new RecordReader({ units: 'g', layout: 'single', source: SOURCE }, null)).kind).toBe(
-      'usage',
+    // Without --dt a single layout needs the header's step: refused at the first row when it states none.
+    expect(table([['1'], ['2']], { layout: 'single' }).text).toBe(
+      `${SOURCE} has one value a line and no time column: give the time step with --dt (the header states none)`,
     );
     expect(refusal(() => new RecordReader({ units: 'g', dtS: -1, source: SOURCE }, null)).text).toBe(
       '--dt must be a positive number of seconds, got -1',

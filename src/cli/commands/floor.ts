@@ -12,6 +12,7 @@ import {
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { floorFigure } from '../../plot/floor-figure.js';
 import { floorSetFigure } from '../../plot/floor-set-figure.js';
+import { appliedSteps } from '../../record/reading.js';
 import type { GroundRecord } from '../../record/record.js';
 import { FLOOR_METHOD_DESCRIPTION, floorSpectrum } from '../../spectrum/floor.js';
 import { floorSpectrumSet, recordLabels } from '../../spectrum/floor-set.js';
@@ -122,9 +123,12 @@ async function runFloorSet(sources: string[], options: FloorCliOptions): Promise
 /** The processing of each ground record before the building, one line a record that had any. */
 function processingNotes(grounds: readonly GroundRecord[]): string[] {
   return grounds
-    .filter((g) => g.processing.length > 0)
+    .filter((g) => appliedSteps(g.processing).length > 0)
     .map(
-      (g) => `Ground record ${g.name} processed: ${g.processing.map((step) => step.description).join('; ')}.`,
+      (g) =>
+        `Ground record ${g.name} processed: ${appliedSteps(g.processing)
+          .map((step) => step.description)
+          .join('; ')}.`,
     );
 }
 

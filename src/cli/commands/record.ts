@@ -2,6 +2,7 @@ import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
 import { parseAccelerationUnit, parseLengthUnit } from '../../base/units.js';
 import { type RecordOutputOptions, recordToCsv, recordToJson, recordToText } from '../../formats/record.js';
+import { appliedSteps } from '../../record/reading.js';
 import type { GroundRecord } from '../../record/record.js';
 import { scaleRecord } from '../../spectrum/scale.js';
 import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
@@ -79,7 +80,7 @@ export async function runRecord(source: string, options: RecordCommandCliOptions
     const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });
     record = targetRecord(processed, fitTarget(swept, target.spectrum, target).fit);
   }
-  const steps = record.processing.map((step) => step.operation);
+  const steps = appliedSteps(record.processing).map((step) => step.operation);
   await writeProduct([source, ...(target?.files ?? [])], options, {
     json: () => recordToJson(record, output),
     csv: () => recordToCsv(record, output),

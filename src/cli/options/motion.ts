@@ -3,6 +3,7 @@ import { recordPsaForComponent } from '../../anchorage/elastic-demand.js';
 import { EQUIPMENT_UNITS, type Equipment } from '../../anchorage/equipment.js';
 import { usageError } from '../../base/errors.js';
 import type { Method } from '../../oscillator/recurrence.js';
+import { appliedSteps } from '../../record/reading.js';
 import { applyProcessing, type ProcessingCliOptions } from './processing.js';
 import { loadRecord, type RecordCliOptions } from './record.js';
 import { readSpectrumFile } from './spectrum-file.js';
@@ -44,10 +45,9 @@ export async function elasticFromOptions(
   const processed: string[] = [];
   for (const source of records) {
     const record = applyProcessing(await loadRecord(source, options), options);
-    if (record.processing.length > 0)
-      processed.push(
-        `Record ${record.name} processed: ${record.processing.map((s) => s.description).join('; ')}.`,
-      );
+    const applied = appliedSteps(record.processing);
+    if (applied.length > 0)
+      processed.push(`Record ${record.name} processed: ${applied.map((s) => s.description).join('; ')}.`);
     const value = recordPsaForComponent(record, equipment.periodS, equipment.damping, method);
     if (elastic === null || value.psaG > elastic.psaG) elastic = { ...value, source };
   }

@@ -2,6 +2,7 @@ import { closeSync, openSync, readSync } from 'node:fs';
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
 import { parseAccelerationUnit } from '../../base/units.js';
+import { parseFixedWidths } from '../../record/fixed.js';
 import { type ReadOptions, type RecordLayout, readRecordStream, unitWarnings } from '../../record/read.js';
 import type { GroundRecord } from '../../record/record.js';
 
@@ -13,6 +14,8 @@ export interface RecordCliOptions {
   skip?: string;
   layout?: string;
   name?: string;
+  fixed?: string;
+  timeUnit?: string;
 }
 
 /** Add the reading options to a command. */
@@ -20,14 +23,25 @@ export function addRecordOptions(command: Command): Command {
   return command
     .option(
       '--units <unit>',
-      'unit of the acceleration values: g, m/s2, cm/s2 (gal), mm/s2, in/s2, ft/s2 (required)',
+      "unit of the acceleration values: g, m/s2, cm/s2 (gal), mm/s2, in/s2, ft/s2 (required unless the file's header states it; overrides the header)",
     )
-    .option('--dt <seconds>', 'time step, s, for files without a time column (single and wrapped layouts)')
     .option(
-      '--column <n>',
-      '1-based column holding the acceleration in a table; column 1 is time (default: the last)',
+      '--dt <seconds>',
+      "time step, s, for files without a time column (single and wrapped layouts); overrides the header's",
     )
-    .option('--skip <n>', 'header lines to skip before the data', '0')
+    .option(
+      '--column <n|name>',
+      "the table's acceleration column: a number (column 1 is time) or a header name, any case (needed when there are several value columns)",
+    )
+    .option('--skip <n>', 'lines to skip before the data (text header lines are skipped without it)', '0')
+    .option(
+      '--fixed <widths>',
+      'fixed-width fields: COUNTxWIDTH (e.g. 8x10) or widths separated by commas (e.g. 10,10,12)',
+    )
+    .option(
+      '--time-unit <unit>',
+      'unit of the time column, s or ms; given, a step of 1 s or more or a record longer than a day is taken as told',
+    )
     .option(
       '--layout <layout>',
       'auto, single (one value a line), table (time, then values), wrapped (several values a line, row order)',
@@ -41,20 +55,32 @@ export function recordReadOptions(source: string, options: RecordCliOptions): Re
   if (!['auto', 'single', 'table', 'wrapped'].includes(layout)) {
     throw usageError(`--layout '${layout}': use auto, single, table or wrapped`);
   }
+  const timeUnit = options.timeUnit;
+  if (timeUnit !== undefined && timeUnit !== 's' && timeUnit !== 'ms')
+    throw usageError(`--time-unit '${timeUnit}': use s or ms`);
   return {
     source,
-    units: parseAccelerationUnit(options.units),
+    units: options.units === undefined ? undefined : parseAccelerationUnit(options.units),
     dtS: options.dt === undefined ? undefined : positiveNumber('--dt', options.dt),
-    column: options.column === undefined ? undefined : wholeNumber('--column', options.column, 1),
+    column: options.column === undefined ? undefined : columnOption(options.column),
+    fixed: options.fixed === undefined ? undefined : parseFixedWidths(options.fixed),
+    timeUnit,
     skip: options.skip === undefined ? 0 : wholeNumber('--skip', options.skip, 0),
     layout: layout as RecordLayout,
     name: options.name,
   };
 }
 
+/** `--column`: a whole number, or else a column's name. */
+function columnOption(text: string): number | string {
+  if (/^\s*[+-]?\d+(\.\d*)?\s*$/.test(text)) return wholeNumber('--column', text, 1);
+  if (text.trim() === '') throw usageError("--column must be a column's number or name, got ''");
+  return text.trim();
+}
+
 /**
- * Open the file (or standard input for `-`) and read it as a record, printing on stderr any
- * warning that the units look wrong.
+ * Open the file (or standard input for `-`) and read it as a record, printing on stderr the
+ * warnings of reading (which the record's outputs carry too).
  */
 export async function loadRecord(source: string, options: RecordCliOptions): Promise<GroundRecord> {
   const readOptions = recordReadOptions(source, options);

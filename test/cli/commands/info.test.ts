@@ -80,6 +80,7 @@ describe('quakesweep info', () => {
     expect(json.caution).toBe(CAUTION);
     expect(json.record).toMatchObject({ name: 'invented', npts: 2000, dt_s: 0.01 });
     expect(json.processing.steps.map((s: { operation: string }) => s.operation)).toEqual([
+      'read',
       'baseline',
       'filter',
     ]);

@@ -83,8 +83,8 @@ describe('quakesweep record', () => {
     scaled.accel_g.forEach((value: number, i: number) => {
       expect(value).toBeCloseTo(2.5 * plain.accel_g[i], 14);
     });
-    expect(scaled.processing.map((s: { operation: string }) => s.operation)).toEqual(['scale']);
-    expect(scaled.processing[0].description).toBe('amplitude × 2.5 (given with --scale)');
+    expect(scaled.processing.map((s: { operation: string }) => s.operation)).toEqual(['read', 'scale']);
+    expect(scaled.processing[1].description).toBe('amplitude × 2.5 (given with --scale)');
   });
 
   it('--target --apply-scale writes the record scaled to the target, and its spectrum then fits with factor 1', async () => {

@@ -64,6 +64,7 @@ describe('quakesweep rotd', () => {
     const filtered = await json(...args, '--baseline', 'linear', '--filter', 'highpass:5');
     for (const record of filtered.records)
       expect(record.processing.map((s: { operation: string }) => s.operation)).toEqual([
+        'read',
         'baseline',
         'filter',
       ]);

@@ -53,7 +53,7 @@ describe('batchPlan', () => {
     [{ jobs: '0' }, "--jobs must be a whole number ≥ 1, got '0'"],
     [{ jobs: '1.5' }, "--jobs must be a whole number ≥ 1, got '1.5'"],
     [{ shard: '2/3', shardCount: '3' }, '--shard-count goes with --shard auto'],
-    [{ units: undefined }, '--units'],
+    [{ units: 'furlongs' }, 'furlongs'],
     [{ periods: '0,-1' }, '--periods'],
     [{ filter: 'notch:5' }, "--filter 'notch:5'"],
   ])('refuses %o, naming the option', (options, message) => {

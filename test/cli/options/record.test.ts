@@ -175,7 +175,7 @@ describe('never silently wrong', () => {
     }
   });
 
-  it('warns, naming the unit, when the PGA looks like the wrong unit (5 g and 0.0001 g, common practice)', async () => {
+  it('warns, naming the unit, when the PGA looks like the wrong unit (5 g and 0.001 g, common practice)', async () => {
     const small = await run([
       file('small.csv', table(20).join('\n')),
       '--units',
@@ -184,7 +184,7 @@ describe('never silently wrong', () => {
       '0,1',
     ]);
     expect(small.code).toBe(0);
-    expect(small.stderr).toMatch(/warning: small\.csv: PGA .* read in mm\/s2 is below 0\.0001 g/);
+    expect(small.stderr).toMatch(/warning: small\.csv: PGA .* read in mm\/s2 is below 0\.001 g/);
     const big = join(folder, file('mm.txt', '1000\n-3000\n500\n'));
     const info = await runMain([
       'info',
