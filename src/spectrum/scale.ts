@@ -73,12 +73,12 @@ export function scaleToTarget(
   };
 }
 
-/** Parse `a:b`, a period range in seconds with 0 ≤ a < b. */
-export function parseScaleRange(text: string): [number, number] {
+/** Parse `a:b`, a period range in seconds with 0 ≤ a < b, given as `option` (named in the refusal). */
+export function parseScaleRange(text: string, option = '--scale-range'): [number, number] {
   const parts = text.split(':');
   const [from, to] = parts.map((part) => (part.trim() === '' ? Number.NaN : Number(part)));
   if (parts.length !== 2 || !(from >= 0) || !(to > from) || !Number.isFinite(to)) {
-    throw usageError(`--scale-range '${text}': use a:b in seconds with 0 ≤ a < b, e.g. 0.2:1.5`);
+    throw usageError(`${option} '${text}': use a:b in seconds with 0 ≤ a < b, e.g. 0.2:1.5`);
   }
   return [from, to];
 }
