@@ -116,6 +116,7 @@ export function suiteFigure(input: SuiteFigureInput): string {
   }
   const subtitle = [
     `Suite of ${count} record${count === 1 ? '' : 's'}${input.scaled ? ', each amplitude-scaled to the target' : ', as read and processed'}; damping ζ = ${percentLabel(input.damping)}`,
+    recordsLine(input.members.map((m) => m.name)),
     `Method: ${input.methodDescription}`,
   ];
   if (target !== undefined) subtitle.push(`Target: ${target.description}`);
@@ -138,6 +139,17 @@ export function suiteFigure(input: SuiteFigureInput): string {
     },
     overlay: check === undefined ? undefined : (context) => markWorst(context, check, curve.mean_psa_g),
   });
+}
+
+/** "Records: a, b, c", cut after about two lines with the number left out. */
+export function recordsLine(names: readonly string[], maxChars = 200): string {
+  let line = 'Records:';
+  for (const [i, name] of names.entries()) {
+    const rest = names.length - i;
+    if (i > 0 && line.length + name.length + 2 > maxChars) return `${line} and ${rest} more`;
+    line += `${i === 0 ? ' ' : ', '}${name}`;
+  }
+  return line;
 }
 
 /** The check's result in one line: pass or fail, the range, the least ratio and where. */

@@ -7,7 +7,7 @@ import type { SuiteSettings } from '../../batch/work.js';
 import { parseScaleRange } from '../../spectrum/scale.js';
 import { type GridCliOptions, gridFromOptions } from './grid.js';
 import { type ProcessingCliOptions, processingPlanFromOptions } from './processing.js';
-import { type RecordCliOptions, recordReadOptions } from './record.js';
+import { type RecordCliOptions, recordReadOptions, wholeNumber } from './record.js';
 import { targetFromOptions } from './target.js';
 import { parseThreads } from './threads.js';
 
@@ -62,8 +62,8 @@ export function batchThreads(options: Pick<BatchCliOptions, 'threads' | 'jobs'>)
   const { threads, jobs } = options;
   if (threads !== undefined && jobs !== undefined && threads !== jobs)
     throw usageError('--jobs is the old name of --threads: give one of them');
-  const text = threads ?? jobs;
-  return text === undefined ? availableParallelism() : parseThreads(text);
+  if (threads !== undefined) return parseThreads(threads);
+  return jobs === undefined ? availableParallelism() : wholeNumber('--jobs', jobs, 1, 256);
 }
 
 /**
