@@ -102,7 +102,13 @@ export function spectrumChart(
     : [];
   return lineChart({
     ...chart,
-    underlay: ranged ? (context) => shadePeriods(context, ranged) : undefined,
+    underlay:
+      ranged === undefined
+        ? chart.underlay
+        : (context) => {
+            shadePeriods(context, ranged);
+            chart.underlay?.(context);
+          },
     subtitle: spectrumSubtitle(spectrum, options.methodDescription),
     x: periodAxisSpec(axis),
     axes,
