@@ -121,3 +121,33 @@ export function targetDampingIndex(dampings: readonly number[], target: DesignSp
     );
   return index;
 }
+
+/**
+ * Refuse, before any record is swept, what analyseSuite would refuse once they are: a target whose
+ * damping is not swept, and a scaling or check range that holds no grid period or reaches a grid
+ * period where the target is not defined.
+ */
+export function checkSuitePlan(
+  settings: { periodsS: readonly number[]; dampings: readonly number[] },
+  options: SuiteAnalysisOptions,
+): void {
+  const target = options.target;
+  if (target === undefined) return;
+  targetDampingIndex(settings.dampings, target);
+  const ranges: [string, readonly [number, number] | undefined][] = [
+    ['scaling', options.scaleEach ? options.scaleRangeS : undefined],
+    ['check', options.check?.rangeS],
+  ];
+  for (const [what, range] of ranges) {
+    if (range === undefined) continue;
+    const inside = settings.periodsS.filter((t) => t >= range[0] && t <= range[1]);
+    const [from, to] = range.map((t) => Number(t.toPrecision(4)));
+    if (inside.length === 0)
+      throw usageError(`no period of the grid lies in the ${what} range ${from}–${to} s`);
+    const outside = inside.find((t) => !coversPeriod(target, t));
+    if (outside !== undefined)
+      throw usageError(
+        `the ${what} range ${from}–${to} s reaches T = ${Number(outside.toPrecision(4))} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
+      );
+  }
+}

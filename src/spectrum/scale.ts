@@ -53,7 +53,7 @@ export function scaleToTarget(
     const t = periodsS[i];
     if (!coversPeriod(target, t)) {
       throw inputError(
-        `the scaling range reaches T = ${t} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
+        `the scaling range reaches T = ${Number(t.toPrecision(4))} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
       );
     }
     if (!(recordPsaG[i] > 0))

@@ -1,7 +1,7 @@
 import { availableParallelism } from 'node:os';
 import { usageError } from '../../base/errors.js';
 import { parseShard } from '../../batch/shard.js';
-import type { SuiteAnalysisOptions } from '../../batch/suite.js';
+import { checkSuitePlan, type SuiteAnalysisOptions } from '../../batch/suite.js';
 import { structurePeriodRange } from '../../batch/suite-check.js';
 import type { SuiteSettings } from '../../batch/work.js';
 import { parseScaleRange } from '../../spectrum/scale.js';
@@ -54,6 +54,7 @@ export function batchPlan(options: BatchCliOptions) {
     throw usageError(
       '--target does not go with --shard yet: run the whole suite in one batch to scale and check it',
     );
+  checkSuitePlan(settings, suite.options);
   return { out, settings, threads: batchThreads(options), shard, ...suite };
 }
 

@@ -106,6 +106,16 @@ describe('batchPlan', () => {
     [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', checkFraction: '0' }, "--check-fraction '0'"],
     [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', checkFraction: 'most' }, "--check-fraction 'most'"],
     [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', shard: '1/2' }, '--target does not go with --shard yet'],
+    // Refused before any record is swept (base grid: 0, 0.5, 2 s; 2% and 5%).
+    [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', damping: '2%' }, 'the target is for 5% damping'],
+    [
+      { target: 'asce7-16:sds=1,sd1=0.6,tl=8', checkRange: '0.6:1.9' },
+      'no period of the grid lies in the check range 0.6–1.9 s',
+    ],
+    [
+      { target: 'ec8:type=1,ground=C,ag=0.25', periods: '0,1,5', scaleEach: true, structurePeriod: '2.5' },
+      'the scaling range 0.5–5 s reaches T = 5 s, outside the target (defined from 0 s to 4 s)',
+    ],
     [{ shard: '2/3', shardCount: '3' }, '--shard-count goes with --shard auto'],
     [{ units: undefined }, '--units'],
     [{ periods: '0,-1' }, '--periods'],
