@@ -10,6 +10,9 @@ export { CAUTION, cautionLines } from './base/caution.js';
 export { type ErrorKind, inputError, isQuakesweepError, QuakesweepError, usageError } from './base/errors.js';
 export * from './base/units.js';
 export { VERSION } from './base/version.js';
+// Suites: each record scaled to a target, the check of the suite mean against a fraction of it.
+export { analyseSuite, type SuiteAnalysis } from './batch/suite.js';
+export { checkSuite, structurePeriodRange } from './batch/suite-check.js';
 export { ductilityDemandToCsv, ductilityToCsv } from './formats/ductility-csv.js';
 export { ductilityDemandToJson, ductilityToJson } from './formats/ductility-json.js';
 export { ductilityDemandTable, ductilityTable } from './formats/ductility-table.js';
@@ -53,6 +56,7 @@ export { substepCount } from './oscillator/substeps.js';
 export { type Peaks, type SweepKernel, type SweepOptions, sweepOscillators } from './oscillator/sweep.js';
 export { OutputSet, writeFileAtomic } from './output/output-set.js';
 export * from './plot/index.js';
+export { suiteFigure } from './plot/suite-figure.js';
 export { fourierAmplitudeSpectrum, konnoOhmachiSmooth, konnoOhmachiWeight } from './record/fourier.js';
 export { integrateRecord } from './record/integrate.js';
 export {
@@ -73,6 +77,7 @@ export {
 export { type SynthOptions, synthesizeRecord } from './record/synth.js';
 export { assembleReport, type ReportRequest } from './report/assemble.js';
 export { type ReportInput, renderReport } from './report/report.js';
+export { renderSuiteReport } from './report/suite-report.js';
 export { asce722MultiPeriodSpectrum, asce722TwoPeriodSpectrum } from './spectrum/asce722.js';
 export { broadenByEvaluation, broadenSpectrum } from './spectrum/broaden.js';
 export { compareDamping, newmarkHallFactors } from './spectrum/damping.js';

@@ -2,7 +2,7 @@ import { recordName } from '../record/record.js';
 import { compareText } from './glob.js';
 
 /** File names the suite itself writes in its folder, which a record folder must not take. */
-const RESERVED = /^(suite\.json|shard-.*\.json)$/i;
+const RESERVED = /^(suite\.(json|csv|svg|html)|shard-.*\.json)$/i;
 
 /**
  * A folder name that stays inside the output folder whatever the record is called: letters,

@@ -11,6 +11,8 @@ export interface SuiteCurve {
   damping: number;
   mean_psa_g: number[];
   median_psa_g: (number | null)[];
+  /** The sample standard deviation (n − 1) of ln PSA over the records. */
+  sigma_ln_psa: (number | null)[];
   p16_psa_g: (number | null)[];
   p84_psa_g: (number | null)[];
 }
@@ -18,8 +20,8 @@ export interface SuiteCurve {
 /** How the statistics are computed, stated in suite.json. */
 export const STATISTICS_METHOD =
   'mean: arithmetic mean of PSA; median, p16, p84: log-normal fit, exp(m), exp(m − s), exp(m + s) with m the mean ' +
-  'and s the sample standard deviation (n − 1) of ln PSA over the records; records taken in order of name; null ' +
-  'where a PSA is 0 or, for p16 and p84, with fewer than two records';
+  'and s (sigma_ln_psa) the sample standard deviation (n − 1) of ln PSA over the records; records taken in order ' +
+  'of name; null where a PSA is 0 or, for s, p16 and p84, with fewer than two records';
 
 /**
  * Mean, median and 16th/84th percentiles of PSA across records at every period and damping, from a
@@ -35,7 +37,14 @@ export function suiteStatistics(
   const sorted = [...records].sort((a, b) => compareText(a.name, b.name));
   const n = sorted.length;
   return dampings.map((damping, d) => {
-    const curve: SuiteCurve = { damping, mean_psa_g: [], median_psa_g: [], p16_psa_g: [], p84_psa_g: [] };
+    const curve: SuiteCurve = {
+      damping,
+      mean_psa_g: [],
+      median_psa_g: [],
+      sigma_ln_psa: [],
+      p16_psa_g: [],
+      p84_psa_g: [],
+    };
     if (n === 0) return curve;
     for (let p = 0; p < periodCount; p++) {
       const values = sorted.map((record) => record.psaG[d][p]);
@@ -45,6 +54,7 @@ export function suiteStatistics(
       const m = sum(logs) / n;
       curve.median_psa_g.push(positive ? Math.exp(m) : null);
       const s = positive && n >= 2 ? Math.sqrt(sum(logs.map((l) => (l - m) * (l - m))) / (n - 1)) : null;
+      curve.sigma_ln_psa.push(s);
       curve.p16_psa_g.push(s === null ? null : Math.exp(m - s));
       curve.p84_psa_g.push(s === null ? null : Math.exp(m + s));
     }

@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { isQuakesweepError } from '../base/errors.js';
+import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { formatJson, spectrumToJson, toG } from '../formats/spectrum-json.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { OutputSet } from '../output/output-set.js';
@@ -26,7 +27,7 @@ export interface RecordTask {
 }
 
 export type RecordOutcome =
-  | { ok: true; file: string; name: string; psaG: number[][]; warnings: string[] }
+  | { ok: true; file: string; name: string; psaG: number[][]; pgaG: number; warnings: string[] }
   | { ok: false; file: string; name: string; error: string };
 
 /** One line for a person from whatever a record's reading or sweeping threw. */
@@ -57,7 +58,8 @@ export function processRecord(task: RecordTask): RecordOutcome {
       .folder(join(task.outDir, name), [['spectra.json', spectra]])
       .write();
     const psaG = spectrum.curves.map((curve) => toG(curve.psaMS2));
-    return { ok: true, file, name, psaG, warnings: unitWarnings(record) };
+    const pgaG = spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2;
+    return { ok: true, file, name, psaG, pgaG, warnings: unitWarnings(record) };
   } catch (error) {
     return { ok: false, file, name, error: describeError(error, file) };
   }

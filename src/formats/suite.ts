@@ -1,7 +1,9 @@
 import { CAUTION } from '../base/caution.js';
 import { compareText } from '../batch/glob.js';
 import type { Shard } from '../batch/shard.js';
-import { STATISTICS_METHOD, suiteStatistics } from '../batch/statistics.js';
+import { STATISTICS_METHOD } from '../batch/statistics.js';
+import { analyseSuite, type SuiteAnalysis } from '../batch/suite.js';
+import { SUITE_CHECK_NOTE } from '../batch/suite-check.js';
 import type { RecordOutcome, SuiteSettings } from '../batch/work.js';
 import { frequenciesHz } from './frequency.js';
 
@@ -10,6 +12,8 @@ export interface SuiteRecord {
   name: string;
   file: string;
   psaG: number[][];
+  /** PGA as read and processed, g (absent in shard files of older versions). */
+  pgaG?: number;
 }
 
 export interface SuiteFailure {
@@ -17,21 +21,81 @@ export interface SuiteFailure {
   error: string;
 }
 
-/** suite.json of a set of records: names and failures sorted, statistics over the records by name. */
+/**
+ * suite.json of a set of records: names and failures sorted, statistics over the records by name
+ * (of the scaled spectra when the analysis scaled them), each record's PGA and factor, and the
+ * target, the scaling and the check when the analysis has them.
+ */
 export function suiteJson(
   records: readonly SuiteRecord[],
   failed: readonly SuiteFailure[],
   settings: Pick<SuiteSettings, 'periodsS' | 'dampings'>,
+  analysis: SuiteAnalysis = analyseSuite(records, settings),
 ) {
-  const sorted = [...records].sort((a, b) => compareText(a.name, b.name));
+  const { members, factors } = analysis;
   return {
     caution: CAUTION,
-    records: sorted.map((r) => r.name),
+    records: members.map((r) => r.name),
     failed: [...failed].sort((a, b) => compareText(a.file, b.file)),
     periods_s: [...settings.periodsS],
     frequencies_hz: frequenciesHz(settings.periodsS),
     statistics: STATISTICS_METHOD,
-    spectra: suiteStatistics(sorted, settings.dampings, settings.periodsS.length),
+    spectra_scaled: analysis.scaling !== undefined,
+    spectra: analysis.statistics,
+    per_record: members.map((r, i) => ({
+      name: r.name,
+      file: r.file,
+      pga_g: r.pgaG ?? null,
+      scale_factor: factors[i],
+      pga_scaled_g: r.pgaG === undefined ? null : r.pgaG * factors[i],
+    })),
+    ...suiteTargetJson(analysis),
+  };
+}
+
+/** The keys a target adds to suite.json: the target, each record's scaling and the suite check. */
+export function suiteTargetJson({ target, scaling, check }: SuiteAnalysis) {
+  if (target === undefined) return {};
+  return {
+    target: {
+      code: target.spectrum.code,
+      description: target.spectrum.description,
+      parameters: target.spectrum.parameters,
+      damping: target.damping,
+      psa_g: target.psaG,
+    },
+    ...(scaling && {
+      scaling: {
+        criterion: scaling.criterion,
+        damping: target.damping,
+        records: scaling.records.map((r) => ({
+          name: r.name,
+          factor: r.factor,
+          range_s: r.rangeS,
+          period_count: r.periodCount,
+          mean_ratio: r.meanRatio,
+          min_ratio: r.minRatio,
+          max_ratio: r.maxRatio,
+        })),
+      },
+    }),
+    ...(check && {
+      check: {
+        result: check.pass ? 'pass' : 'fail',
+        note: SUITE_CHECK_NOTE,
+        criterion: check.criterion,
+        fraction: check.fraction,
+        range_s: check.rangeS,
+        range_source: check.rangeSource,
+        checked_range_s: check.checkedRangeS,
+        period_count: check.periodCount,
+        damping: target.damping,
+        worst_ratio: check.worstRatio,
+        worst_period_s: check.worstPeriodS,
+        ratio_mean_to_target: check.ratios,
+        warnings: check.warnings,
+      },
+    }),
   };
 }
 
@@ -65,7 +129,8 @@ export function suiteOutcomes(outcomes: readonly RecordOutcome[], unmatched: rea
     error: `${pattern}: no file matches`,
   }));
   for (const outcome of outcomes) {
-    if (outcome.ok) records.push({ name: outcome.name, file: outcome.file, psaG: outcome.psaG });
+    if (outcome.ok)
+      records.push({ name: outcome.name, file: outcome.file, psaG: outcome.psaG, pgaG: outcome.pgaG });
     else failed.push({ file: outcome.file, error: outcome.error });
   }
   return { records, failed };

@@ -1,7 +1,7 @@
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { type LineChartOptions, lineChart } from './line-chart.js';
-import type { AxisScale, Series } from './panel.js';
+import type { AxisScale, PanelContext, Series } from './panel.js';
 import { type PeriodAxis, periodAxisSpec } from './period-axis.js';
 import { overlayStyle } from './styles.js';
 import {
@@ -29,6 +29,8 @@ export interface PsaOverlay {
   label: string;
   periodsS: ArrayLike<number>;
   psaG: ArrayLike<number>;
+  /** A period range to shade under the curves (e.g. where a record was fitted to the target), s. */
+  rangeS?: readonly [number, number];
 }
 
 export interface PsaFigureOptions extends SpectrumFigureOptions {
@@ -92,14 +94,49 @@ export function spectrumChart(
   const pga = ` (there PSA = PGA = ${formatValue(spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2)} g)`;
   // T = 0 cannot be drawn on a log period axis, nor at f = ∞ on any frequency axis.
   const zeroLeftOff = axes === 'log' || axis === 'frequency';
+  const ranged = overlayY === undefined ? undefined : options.overlays?.find((o) => o.rangeS)?.rangeS;
+  const rangeNote = ranged
+    ? [
+        `Shaded: the periods over which the record was fitted to the target, ${formatValue(ranged[0])} to ${formatValue(ranged[1])} s.`,
+      ]
+    : [];
   return lineChart({
     ...chart,
+    underlay:
+      ranged === undefined
+        ? chart.underlay
+        : (context) => {
+            shadePeriods(context, ranged);
+            chart.underlay?.(context);
+          },
     subtitle: spectrumSubtitle(spectrum, options.methodDescription),
     x: periodAxisSpec(axis),
     axes,
     legendTitle: 'Damping:',
     series: [...curves, ...overlays],
-    notes: [note, ...(zeroLeftOff ? zeroPeriodNotes(spectrum.periodsS, zeroThere ?? pga, axis) : [])],
+    notes: [
+      note,
+      ...rangeNote,
+      ...(zeroLeftOff ? zeroPeriodNotes(spectrum.periodsS, zeroThere ?? pga, axis) : []),
+    ],
+  });
+}
+
+/** A period range shaded over the plot's height, a grey veil that lets the grid show through. */
+function shadePeriods(context: PanelContext, [fromS, toS]: readonly [number, number]): void {
+  const { doc, group, x, plot, xDomain } = context;
+  const from = Math.max(fromS, xDomain[0]);
+  const to = Math.min(toS, xDomain[1]);
+  if (!(to > from)) return;
+  const [a, b] = [x(from), x(to)].sort((p, q) => p - q);
+  doc.element(group, 'rect', {
+    class: 'fit-range',
+    x: a,
+    y: plot.top,
+    width: b - a,
+    height: plot.height,
+    fill: '#000000',
+    'fill-opacity': 0.07,
   });
 }
 

@@ -53,7 +53,7 @@ export function scaleToTarget(
     const t = periodsS[i];
     if (!coversPeriod(target, t)) {
       throw inputError(
-        `the scaling range reaches T = ${t} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
+        `the scaling range reaches T = ${Number(t.toPrecision(4))} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
       );
     }
     if (!(recordPsaG[i] > 0))
@@ -73,12 +73,12 @@ export function scaleToTarget(
   };
 }
 
-/** Parse `a:b`, a period range in seconds with 0 ≤ a < b. */
-export function parseScaleRange(text: string): [number, number] {
+/** Parse `a:b`, a period range in seconds with 0 ≤ a < b, given as `option` (named in the refusal). */
+export function parseScaleRange(text: string, option = '--scale-range'): [number, number] {
   const parts = text.split(':');
   const [from, to] = parts.map((part) => (part.trim() === '' ? Number.NaN : Number(part)));
   if (parts.length !== 2 || !(from >= 0) || !(to > from) || !Number.isFinite(to)) {
-    throw usageError(`--scale-range '${text}': use a:b in seconds with 0 ≤ a < b, e.g. 0.2:1.5`);
+    throw usageError(`${option} '${text}': use a:b in seconds with 0 ≤ a < b, e.g. 0.2:1.5`);
   }
   return [from, to];
 }
@@ -87,7 +87,7 @@ export function parseScaleRange(text: string): [number, number] {
 export function scaleStep(result: ScaleResult, target: DesignSpectrum): ProcessingStep {
   return {
     operation: 'scale',
-    description: `amplitude × ${Number(result.factor.toPrecision(6))} to match the ${target.code} target over ${result.rangeS[0]}–${result.rangeS[1]} s (least squares in ln PSA)`,
+    description: `amplitude × ${Number(result.factor.toPrecision(6))} to match the ${target.code} target over ${Number(result.rangeS[0].toPrecision(4))}–${Number(result.rangeS[1].toPrecision(4))} s (least squares in ln PSA)`,
     parameters: {
       factor: result.factor,
       range_from_s: result.rangeS[0],
@@ -131,4 +131,47 @@ export function scaleSpectrum(spectrum: Spectrum, factor: number, step: Processi
     },
     curves,
   };
+}
+
+/** A curve for the PSA figure of a scaled record: PSA in g at periods in s, with the range it was fitted over. */
+export interface ScaleOverlay {
+  label: string;
+  periodsS: number[];
+  psaG: number[];
+  /** The fitting range, s, for the figure to shade (the target's overlay carries it). */
+  rangeS?: [number, number];
+}
+
+/**
+ * What the PSA figure draws for a fit: the target over the periods it covers, with the fitting
+ * range; and, when the factor was not applied, the record's curve at the fit's damping times the
+ * factor, so that the fit can be seen (when applied, the record's curves are already scaled).
+ */
+export function scaleOverlays(
+  periodsS: ArrayLike<number>,
+  recordPsaG: ArrayLike<number>,
+  fit: ScaleResult & {
+    psaG: readonly (number | null)[];
+    description: string;
+    applied: boolean;
+    damping: number;
+  },
+): ScaleOverlay[] {
+  const covered = Array.from(periodsS, (_, i) => i).filter((i) => fit.psaG[i] !== null);
+  const overlays: ScaleOverlay[] = [
+    {
+      label: `target: ${fit.description.split(': ')[0]}`,
+      periodsS: covered.map((i) => periodsS[i]),
+      psaG: covered.map((i) => fit.psaG[i] as number),
+      rangeS: fit.rangeS,
+    },
+  ];
+  if (!fit.applied) {
+    overlays.push({
+      label: `record × ${Number(fit.factor.toPrecision(4))} (ζ = ${Number((100 * fit.damping).toPrecision(6))}%, not applied)`,
+      periodsS: Array.from(periodsS),
+      psaG: Array.from(recordPsaG, (value) => value * fit.factor),
+    });
+  }
+  return overlays;
 }

@@ -12,7 +12,8 @@ describe('record folder names (common practice: a name from outside never choose
     expect(sanitiseName('../../etc/passwd')).not.toMatch(/[/\\]|\.\./);
     expect(sanitiseName('.hidden').startsWith('.')).toBe(false);
     expect(sanitiseName('')).toMatch(/^record/);
-    expect(sanitiseName('suite.json')).not.toBe('suite.json');
+    for (const own of ['suite.json', 'suite.csv', 'SUITE.svg', 'suite.html'])
+      expect(sanitiseName(own)).toBe(`record-${own}`);
     expect(sanitiseName('shard-1-of-2.json')).not.toBe('shard-1-of-2.json');
   });
 

@@ -41,6 +41,7 @@ describe('processRecord', () => {
       expect(outcome.warnings).toEqual([]); // PGAs of 0.1 g and 0.2 g: inside 0.0001–5 g
       // PSA at T = 0 is the PGA (a rigid oscillator moves with the ground; common practice).
       for (const curve of outcome.psaG) expect(curve[0]).toBeCloseTo(0.1 * (k + 1), 12);
+      expect(outcome.pgaG).toBeCloseTo(0.1 * (k + 1), 12); // PSA(0) = PGA, and the records' PGA by construction
       const written = JSON.parse(readFileSync(join(folder, 'out', `r${k + 1}`, 'spectra.json'), 'utf8'));
       expect(written.spectra.map((curve: { psa_g: number[] }) => curve.psa_g)).toEqual(outcome.psaG);
     }

@@ -30,7 +30,14 @@ describe('suiteJson', () => {
       'periods_s',
       'frequencies_hz',
       'statistics',
+      'spectra_scaled',
       'spectra',
+      'per_record',
+    ]);
+    expect(json.spectra_scaled).toBe(false);
+    expect(json.per_record).toEqual([
+      { name: 'a (invented)', file: 'in/a.csv', pga_g: null, scale_factor: 1, pga_scaled_g: null },
+      { name: 'b (invented)', file: 'in/b.csv', pga_g: null, scale_factor: 1, pga_scaled_g: null },
     ]);
     expect(json.caution).toBe(CAUTION);
     expect(json.records).toEqual(['a (invented)', 'b (invented)']);
@@ -49,6 +56,7 @@ describe('suiteJson', () => {
     const s = Math.log(4) / Math.SQRT2;
     expect(curve.p84_psa_g[0]).toBeCloseTo(0.2 * Math.exp(s), 12);
     expect(curve.p16_psa_g[1]).toBeCloseTo(0.2 * Math.exp(-s), 12);
+    expect(curve.sigma_ln_psa[0]).toBeCloseTo(s, 14);
   });
 
   it('is the same whatever order the records came in', () => {
@@ -75,12 +83,12 @@ describe('suiteOutcomes', () => {
   it('keeps the records that were swept and lists the patterns that matched nothing first', () => {
     const { records: swept, failed: failures } = suiteOutcomes(
       [
-        { ok: true, file: 'in/a.csv', name: 'a', psaG: [[0.1]], warnings: [] },
+        { ok: true, file: 'in/a.csv', name: 'a', psaG: [[0.1]], pgaG: 0.1, warnings: [] },
         { ok: false, file: 'in/b.csv', name: 'b', error: 'in/b.csv: no values' },
       ],
       ['in/*.txt'],
     );
-    expect(swept).toEqual([{ name: 'a', file: 'in/a.csv', psaG: [[0.1]] }]);
+    expect(swept).toEqual([{ name: 'a', file: 'in/a.csv', psaG: [[0.1]], pgaG: 0.1 }]);
     expect(failures).toEqual([
       { file: 'in/*.txt', error: 'in/*.txt: no file matches' },
       { file: 'in/b.csv', error: 'in/b.csv: no values' },

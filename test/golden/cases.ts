@@ -349,6 +349,12 @@ export const GOLDEN_CASES: GoldenCase[] = [
     argv: w(`batch IN/gen-*.csv ${H1} --units g ${GRID} --damping 2%,5% --jobs 2 --out OUT/suite`),
   },
   {
+    name: 'batch-scaled-check',
+    argv: w(
+      `batch IN/gen-*.csv ${H1} ${H2} --units g ${GRID} --target asce7-16:sds=1.0,sd1=0.6,tl=8 --scale-each --structure-period 1 --threads 2 --out OUT/suite`,
+    ),
+  },
+  {
     name: 'batch-shards-merge',
     argv: w(`batch IN/gen-*.csv ${H1} ${H2} --units g ${GRID} --jobs 1 --shard 1/2 --out OUT/s1`),
   },

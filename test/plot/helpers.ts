@@ -1,5 +1,6 @@
 import { JSDOM } from 'jsdom';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
+import { analyseSuite } from '../../src/batch/suite.js';
 import { constantDuctilitySpectra, ductilityDemandSpectra } from '../../src/inelastic/ductility.js';
 import { referenceReductions } from '../../src/inelastic/r-mu-t.js';
 import { logSpaced } from '../../src/oscillator/grid.js';
@@ -18,6 +19,7 @@ import { historiesFigure } from '../../src/plot/histories-figure.js';
 import { husidFigure } from '../../src/plot/husid-figure.js';
 import { rotdFigure } from '../../src/plot/rotd-figure.js';
 import { psaFigure, psvFigure, sdFigure } from '../../src/plot/spectrum-figure.js';
+import { suiteFigure } from '../../src/plot/suite-figure.js';
 import { tripartiteFigure } from '../../src/plot/tripartite-figure.js';
 import { fourierAmplitudeSpectrum } from '../../src/record/fourier.js';
 import { integrateRecord } from '../../src/record/integrate.js';
@@ -180,6 +182,41 @@ export const EVERY_FIGURE: Record<string, () => DrawnFigure> = {
       methodDescription: 'test',
     });
     return { svg, curves: 8 };
+  },
+  suite: () => {
+    const { grid, spectrum } = inputs();
+    // Three invented records (one of them with the nasty name), each scaled to an ASCE 7-16 target.
+    const periodsS = Array.from(grid.periodsS);
+    const records = [0, 1, 2].map((k) => ({
+      name: k === 0 ? NASTY : `invented-${k}`,
+      file: `in/${k}.csv`,
+      pgaG: 0.3,
+      psaG: spectrum.curves.map((c) =>
+        Array.from(c.psaMS2, (v, i) => (v / 9.80665) * (1 + 0.3 * Math.sin(i + k))),
+      ),
+    }));
+    const analysis = analyseSuite(
+      records,
+      { periodsS, dampings: grid.dampings as number[] },
+      {
+        target: asce716Spectrum({ sdsG: 1, sd1G: 0.6, tlS: 8 }),
+        scaleEach: true,
+        check: { fraction: 0.9, rangeS: [0.2, 2], rangeSource: 'test' },
+      },
+    );
+    const d = analysis.target?.dampingIndex ?? 0;
+    const svg = suiteFigure({
+      periodsS,
+      damping: grid.dampings[d],
+      members: analysis.members.map((m) => ({ name: m.name, psaG: m.psaG[d] })),
+      curve: analysis.statistics[d],
+      scaled: true,
+      target: { description: 'ASCE/SEI 7-16 (invented parameters)', psaG: analysis.target?.psaG ?? [] },
+      check: analysis.check,
+      methodDescription: 'test',
+    });
+    // 3 records, 2 band edges, median, mean, target, 0.9 × target.
+    return { svg, curves: 9 };
   },
   histories: () => {
     const { record } = inputs();

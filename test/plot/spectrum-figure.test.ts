@@ -72,4 +72,23 @@ describe('spectrum figures (PSA, SD, PSV and the four-way plot)', () => {
       expect(doc.querySelector('g.legend')?.textContent).toContain('invented target');
     }
   });
+
+  it("shades an overlay's fitting range on the PSA plot, from its first to its last period, and says so", () => {
+    const overlays = [
+      { label: 'invented target', periodsS: [0.1, 1, 2], psaG: [0.5, 0.5, 0.25], rangeS: [0.2, 1] as const },
+    ];
+    const doc = parseSvg(psaFigure(handSpectrum(), { overlays }));
+    const rect = doc.querySelector('g.underlay rect.fit-range');
+    const x = axisFromTicks(doc, 0, 'x', 'log');
+    expect(Number(rect?.getAttribute('x'))).toBeCloseTo(x(0.2), 0);
+    expect(Number(rect?.getAttribute('x')) + Number(rect?.getAttribute('width'))).toBeCloseTo(x(1), 0);
+    expect(doc.documentElement.textContent).toContain(
+      'Shaded: the periods over which the record was fitted to the target, 0.2 to 1 s.',
+    );
+    expect(
+      parseSvg(
+        psaFigure(handSpectrum(), { overlays: [{ ...overlays[0], rangeS: undefined }] }),
+      ).querySelector('rect.fit-range'),
+    ).toBeNull();
+  });
 });

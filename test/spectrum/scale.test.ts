@@ -3,6 +3,7 @@ import { createRecord } from '../../src/record/record.js';
 import { readSpectrumTable, tableSpectrum } from '../../src/spectrum/design-table.js';
 import {
   parseScaleRange,
+  scaleOverlays,
   scaleRecord,
   scaleSpectrum,
   scaleStep,
@@ -85,5 +86,40 @@ describe('scaling to a target (least squares in ln PSA)', () => {
     expect(scaled.record.pgaMS2).toBeCloseTo(again.record.pgaMS2, 12);
     expect(scaled.record.processing.map((s) => s.operation)).toEqual(['scale']);
     expect(again.record.processing[0].parameters.factor).toBe(result.factor);
+  });
+});
+
+describe('scaleOverlays', () => {
+  // An invented fit: factor 2 over 0.2–1 s; the target is not defined at 3 s.
+  const fit = {
+    factor: 2,
+    rangeS: [0.2, 1] as [number, number],
+    periodCount: 2,
+    meanRatio: 1,
+    minRatio: 1,
+    maxRatio: 1,
+    criterion: '',
+    psaG: [0.4, 1, 0.6, null],
+    description: 'invented target: its parameters',
+    applied: false,
+    damping: 0.05,
+  };
+  const periods = [0, 0.2, 1, 3];
+
+  it('gives the target over the periods it covers, with the fitting range, and the record times the factor', () => {
+    const [target, scaled] = scaleOverlays(periods, [0.1, 0.5, 0.3, 0.05], fit);
+    expect(target).toEqual({
+      label: 'target: invented target',
+      periodsS: [0, 0.2, 1],
+      psaG: [0.4, 1, 0.6],
+      rangeS: [0.2, 1],
+    });
+    expect(scaled.label).toBe('record × 2 (ζ = 5%, not applied)');
+    expect(scaled.psaG).toEqual([0.2, 1, 0.6, 0.1]);
+    expect(scaled.rangeS).toBeUndefined();
+  });
+
+  it('leaves the scaled curve out when the factor was applied (the record is drawn scaled)', () => {
+    expect(scaleOverlays(periods, [0.1, 0.5, 0.3, 0.05], { ...fit, applied: true })).toHaveLength(1);
   });
 });

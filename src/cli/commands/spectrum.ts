@@ -1,14 +1,15 @@
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
-import { parseLengthUnit } from '../../base/units.js';
+import { parseLengthUnit, STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { spectrumToCsv } from '../../formats/spectrum-csv.js';
 import { spectrumToJson } from '../../formats/spectrum-json.js';
 import { summaryTable } from '../../formats/spectrum-table.js';
 import { targetToJson } from '../../formats/target.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { checkFolder } from '../../output/output-set.js';
-import { responseSpectrumParallel } from '../../spectrum/spectrum.js';
-import { fitTarget, targetOverlay, targetRecord } from '../../spectrum/target.js';
+import { scaleOverlays } from '../../spectrum/scale.js';
+import { responseSpectrumParallel, type Spectrum } from '../../spectrum/spectrum.js';
+import { fitTarget, targetRecord } from '../../spectrum/target.js';
 import { gridWords } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import {
@@ -89,7 +90,8 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
     async figures() {
       // The figure modules load only for --svg.
       const { spectrumFigures } = await import('../../report/spectrum-figures.js');
-      const overlays = fit === undefined ? [] : [targetOverlay(spectrum.periodsS, fit)];
+      const overlays =
+        fit === undefined ? [] : scaleOverlays(spectrum.periodsS, fitCurvePsaG(spectrum, fit), fit);
       const methodDescription = METHOD_DESCRIPTIONS[spectrum.method];
       const shared = { axes, axis, lengthUnit, overlays, methodDescription };
       const figures = spectrumFigures(
@@ -102,4 +104,10 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
     },
     summary: `spectra of ${spectrum.record.name}, ${gridWords(spectrum.periodsS.length, spectrum.curves.length)}${fit === undefined ? '' : ', fitted to the target'}`,
   });
+}
+
+/** The PSA, g, of the curve a fit compared with the target (the one at the fit's damping). */
+function fitCurvePsaG(spectrum: Spectrum, fit: { damping: number }): number[] {
+  const curve = spectrum.curves.find((c) => c.damping === fit.damping) ?? spectrum.curves[0];
+  return Array.from(curve.psaMS2, (value) => value / STANDARD_GRAVITY_MS2);
 }

@@ -104,6 +104,63 @@ describe('quakesweep batch', () => {
     expect(missing.stderr).toMatch(/shard 1 of 3 missing/);
   });
 
+  it('--scale-each: each record scaled to the target, the suite checked, suite.csv, .svg and .html beside suite.json', async () => {
+    const target = 'asce7-16:sds=1.0,sd1=0.6,tl=8';
+    const args = ['batch', 'in/rec*.txt', ...grid, '--target', target, '--scale-each'];
+    const result = await run([...args, '--structure-period', '0.5', '--threads', '2', '--out', 'scaled']);
+    expect(result.code).toBe(0);
+    expect(result.stderr).toContain('Preliminary engineering aid only.');
+    expect(result.stderr).toMatch(
+      /quakesweep: 5 of 5 records done; suite check (PASS|FAIL) \(least mean\/target [\d.]+ at [\d.]+ s, needs 0\.9; preliminary\); scaled\/suite\.json\n/,
+    );
+    expect(result.stderr).toMatch(/warning: suite check: only 5 grid periods in the check range/);
+    const out = join(folder, 'scaled');
+    expect(
+      readdirSync(out)
+        .filter((f) => f.startsWith('suite'))
+        .sort(),
+    ).toEqual(['suite.csv', 'suite.html', 'suite.json', 'suite.svg']);
+    const suite = JSON.parse(readFileSync(join(out, 'suite.json'), 'utf8'));
+    expect(suite.spectra_scaled).toBe(true);
+    expect(suite.check.range_s).toEqual([0.1, 1]); // 0.2T–2T, T = 0.5 s
+    expect(suite.check.period_count).toBe(5); // 0.1, 0.2, 0.3, 0.5, 0.8 s
+    // ASCE/SEI 7-16 §11.4.6, written out here: T0 = 0.2·S_D1/S_DS, T_S = S_D1/S_DS.
+    const asce = (t: number) => (t < 0.12 ? 1 * (0.4 + (0.6 * t) / 0.12) : t <= 0.6 ? 1 : 0.6 / t);
+    const periods: number[] = suite.periods_s;
+    const used = periods.map((t, i) => [t, i]).filter(([t]) => t >= 0.1 && t <= 1);
+    const means = periods.map(() => 0);
+    for (const [k, name] of suite.records.entries()) {
+      const own = JSON.parse(readFileSync(join(out, name, 'spectra.json'), 'utf8'));
+      const psa: number[] = own.spectra[0].psa_g; // 5%: the target's damping
+      // Least squares in ln PSA: ln c = mean(ln target − ln PSA) over the range (closed form).
+      const lnC = used.reduce((sum, [t, i]) => sum + Math.log(asce(t)) - Math.log(psa[i]), 0) / used.length;
+      expect(suite.per_record[k].scale_factor).toBeCloseTo(Math.exp(lnC), 10);
+      expect(suite.per_record[k].pga_scaled_g).toBeCloseTo(own.record.pga_g * Math.exp(lnC), 10);
+      for (const [i] of periods.entries()) means[i] += (Math.exp(lnC) * psa[i]) / suite.records.length;
+    }
+    for (const [i] of periods.entries()) expect(suite.spectra[0].mean_psa_g[i]).toBeCloseTo(means[i], 10);
+    const worst = Math.min(...used.map(([t, i]) => means[i] / asce(t)));
+    expect(suite.check.worst_ratio).toBeCloseTo(worst, 10);
+    expect(suite.check.result).toBe(worst >= 0.9 ? 'pass' : 'fail');
+    const csv = readFileSync(join(out, 'suite.csv'), 'utf8');
+    expect(csv).toContain('rec5_psa_g@10%');
+    expect(readFileSync(join(out, 'suite.svg'), 'utf8')).toContain('class="check-range"');
+    expect(readFileSync(join(out, 'suite.html'), 'utf8')).toContain('Suite check (preliminary)');
+  });
+
+  it('takes --jobs, the old name of --threads, without listing it in the help; refuses target options alone', async () => {
+    const old = await run(['batch', 'in/rec1.txt', ...grid, '--jobs', '1', '--out', 'old-name']);
+    expect(old.code).toBe(0);
+    expect(old.stderr).toMatch(/1 of 1 records done; old-name\/suite\.json/);
+    const help = await run(['batch', '--help']);
+    expect(help.stdout).toContain('--threads <n>');
+    expect(help.stdout).not.toContain('--jobs');
+    const alone = await run(['batch', 'in/rec1.txt', ...grid, '--scale-each', '--out', 'alone']);
+    expect(alone.code).toBe(2);
+    expect(alone.stderr).toMatch(/--scale-each needs --target/);
+    expect(existsSync(join(folder, 'alone'))).toBe(false);
+  });
+
   it('never writes outside DIR whatever the record is called', async () => {
     const evil = join(folder, 'evil');
     mkdirSync(join(evil, 'sub'), { recursive: true });
@@ -116,9 +173,9 @@ describe('quakesweep batch', () => {
     expect(result.code).toBe(0);
     expect(readdirSync(evil).sort()).toEqual([...before, 'out'].sort());
     const out = readdirSync(join(evil, 'out'));
-    expect(out).toContain('suite.json');
+    expect(out).toEqual(expect.arrayContaining(['suite.json', 'suite.csv', 'suite.svg', 'suite.html']));
     for (const name of out)
       expect(name.startsWith('.') || name.includes('..') || /[/\\]/.test(name)).toBe(false);
-    expect(out).toHaveLength(files.length + 1);
+    expect(out).toHaveLength(files.length + 4);
   });
 });
