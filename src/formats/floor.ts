@@ -20,7 +20,7 @@ export function floorAssumptions(result: FloorSpectra): string[] {
       ? 'Peaks not broadened (--broaden to widen them for uncertain building frequencies).'
       : `Peaks broadened (US NRC Regulatory Guide 1.122, Rev. 1 (1978): ±15% of frequency): value at T = largest over ` +
           `[T(1−b), T/(1−b)], b = ${result.broadening}, which covers ±b in period and in frequency; ` +
-          `windows searched on an internal grid of ${dense.densePeriods} periods (the building period and every window's ends among them) ` +
+          `windows searched on an internal grid of up to ${dense.densePeriods} periods (the building period and every window's ends among them) ` +
           `with ${dense.refinedPeaks} local peaks refined between its points, then reported on the output periods; ` +
           'PSA broadened and SD, PSV derived from it; SV, SA broadened on their own; valleys not smoothed.',
   );

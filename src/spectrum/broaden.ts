@@ -85,7 +85,7 @@ export type PeakEvaluator = (
 ) => { sdM: number; svMS: number; saMS2: number };
 
 export interface DenseBroadening {
-  /** Periods > 0 of the internal grid the windows were searched on. */
+  /** Periods > 0 of the internal grid the windows were searched on (the finest, for the lightest damping). */
   densePeriods: number;
   /** Local peaks refined between internal grid points (all curves and quantities). */
   refinedPeaks: number;
@@ -110,7 +110,8 @@ type Quantity = (typeof quantities)[number];
 /**
  * Broadening (checkBroadening for the rule) of a spectrum that can be computed at any period: the
  * windows are searched on a dense internal grid — the user's periods, every window's two ends,
- * `extraPeriods` (the building period), and log-spaced points `spacing` apart in ln T — and every
+ * `extraPeriods` (the building period), and log-spaced points `spacing(ζ)` apart in ln T, one grid
+ * per damping ratio — and every
  * local peak of the internal grid that could decide a window is refined between its neighbours
  * (broadenedOnGrid), so that the broadened value is the window's true maximum to the accuracy of
  * `evaluate`, whatever the user's grid.
@@ -121,14 +122,16 @@ export function broadenByEvaluation(
   fraction: number,
   evaluatePeak: PeakEvaluator,
   extraPeriods: readonly number[],
-  spacing: number,
+  spacing: (damping: number) => number,
 ): { spectrum: Spectrum; dense: DenseBroadening } {
   checkBroadening(fraction);
   const periods = spectrum.periodsS;
   const positive = Array.from(periods).filter((t) => t > 0);
   const dense: DenseBroadening = { densePeriods: 0, refinedPeaks: 0 };
   if (positive.length === 0 || fraction === 0) return { spectrum: withBroadened(spectrum, (c) => c), dense };
-  const grid = internalGrid(positive, fraction, extraPeriods, spacing);
+  const grids = spectrum.curves.map((curve) =>
+    internalGrid(positive, fraction, extraPeriods, spacing(curve.damping)),
+  );
   // The quantities of one damping refine the same local peaks from the same scan points.
   const memo = new Map<string, ReturnType<PeakEvaluator>>();
   const evaluate = (t: number, damping: number) => {
@@ -140,13 +143,13 @@ export function broadenByEvaluation(
     }
     return peak;
   };
-  dense.densePeriods = grid.length;
-  const values = spectrum.curves.map((curve) => denseValues(grid, curve.damping, evaluate));
+  dense.densePeriods = Math.max(...grids.map((g) => g.length));
+  const values = spectrum.curves.map((curve, d) => denseValues(grids[d], curve.damping, evaluate));
   const result = withBroadened(spectrum, (curve, d) => {
     const out = {} as Record<Quantity, Float64Array>;
     for (const quantity of quantities) {
       const at = (t: number) => quantityOf(evaluate(t, curve.damping), t, quantity);
-      const found = broadenedOnGrid(periods, curve[quantity], fraction, grid, values[d][quantity], at);
+      const found = broadenedOnGrid(periods, curve[quantity], fraction, grids[d], values[d][quantity], at);
       dense.refinedPeaks += found.refined;
       out[quantity] = found.values;
     }

@@ -163,13 +163,12 @@ export function floorSpectrum(
   const unbroadened = floorCascadeSpectrum(ground, building, grid, floor);
   if (broadening === null) return { floor, unbroadened, spectrum: unbroadened, broadening, dense: null };
   const record = cascadeRecord(ground.accelMS2, ground.dtS);
-  const lightest = Math.min(...Array.from(grid.dampings));
   const { spectrum, dense } = broadenByEvaluation(
     unbroadened,
     broadening,
     (t, damping) => cascadePeak(record, building, t, damping, grid.stepsPerPeriod),
     [building.periodS],
-    denseSpacing(lightest),
+    denseSpacing,
   );
   return { floor, unbroadened, spectrum, broadening, dense };
 }

@@ -56,7 +56,7 @@ describe('broadenByEvaluation (the window maximum on a dense internal grid, cons
     b,
     evaluate,
     [],
-    denseSpacing(0.002),
+    () => denseSpacing(0.002),
   );
 
   it('finds peaks the user grid does not hold, within 1e-4 of the true window maximum', () => {
@@ -80,7 +80,7 @@ describe('broadenByEvaluation (the window maximum on a dense internal grid, cons
   });
 
   it('a broadening of 0 changes nothing', () => {
-    const none = broadenByEvaluation(coarseSpectrum(periods), 0, evaluate, [], 0.01).spectrum;
+    const none = broadenByEvaluation(coarseSpectrum(periods), 0, evaluate, [], () => 0.01).spectrum;
     expect(Array.from(none.curves[0].psaMS2)).toEqual(Array.from(coarseSpectrum(periods).curves[0].psaMS2));
   });
 
