@@ -51,12 +51,8 @@ function coarseSpectrum(periods: number[]): Spectrum {
 describe('broadenByEvaluation (the window maximum on a dense internal grid, constructed case)', () => {
   const periods = [0, 0.1, 0.2, 0.3, 0.45, 0.7, 1, 1.5, 2];
   const b = 0.15;
-  const { spectrum, dense } = broadenByEvaluation(
-    coarseSpectrum(periods),
-    b,
-    evaluate,
-    [],
-    () => denseSpacing(0.002),
+  const { spectrum, dense } = broadenByEvaluation(coarseSpectrum(periods), b, evaluate, [], () =>
+    denseSpacing(0.002),
   );
 
   it('finds peaks the user grid does not hold, within 1e-4 of the true window maximum', () => {

@@ -47,7 +47,10 @@ describe('quakesweep damping', () => {
     const plain = await json(...args);
     const filtered = await json(...args, '--filter', 'highpass:8');
     expect(plain.record.processing.map((s: { operation: string }) => s.operation)).toEqual(['read']);
-    expect(filtered.record.processing.map((s: { operation: string }) => s.operation)).toEqual(['read', 'filter']);
+    expect(filtered.record.processing.map((s: { operation: string }) => s.operation)).toEqual([
+      'read',
+      'filter',
+    ]);
     // Butterworth magnitude |H| = 1/√(1 + (f_c/f)^(2n)) (closed form): order 4 at 8 Hz keeps
     // (1.6/8)^4 ≈ 0.0016 of a 1.6 Hz motion, squared by the forward-backward pass.
     expect(filtered.spectra[1].psa_g[1]).toBeLessThan(0.01 * plain.spectra[1].psa_g[1]);
