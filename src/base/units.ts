@@ -3,6 +3,22 @@ import { usageError } from './errors.js';
 /** Standard gravity, m/s² (CGPM 1901; exact by definition). */
 export const STANDARD_GRAVITY_MS2 = 9.80665;
 
+/**
+ * An acceleration in m/s² as g, for outputs: the shortest decimal whose conversion to m/s² gives
+ * back exactly this value. A record read in g keeps the values it was given (0.42 g, not
+ * 0.41999999999999993, which is 0.42·g/g in floating point); any other value is within one unit
+ * in the last place of a/g and converts back to the same m/s².
+ */
+export function gFromMS2(accelMS2: number): number {
+  const quotient = accelMS2 / STANDARD_GRAVITY_MS2;
+  if (!Number.isFinite(quotient)) return quotient;
+  for (let digits = 1; digits < 17; digits++) {
+    const candidate = Number(quotient.toPrecision(digits));
+    if (candidate * STANDARD_GRAVITY_MS2 === accelMS2) return candidate;
+  }
+  return quotient;
+}
+
 /** Acceleration units a record may be given in, with the factor that converts each to m/s². */
 export const ACCELERATION_UNITS = {
   g: STANDARD_GRAVITY_MS2,

@@ -1,5 +1,5 @@
 import { CAUTION } from '../base/caution.js';
-import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
+import { STANDARD_GRAVITY_MS2 as G, gFromMS2 } from '../base/units.js';
 import { type BuildingMode, FLOOR_METHOD_DESCRIPTION } from '../spectrum/floor.js';
 import { type FloorSpectrumSet, recordLabels } from '../spectrum/floor-set.js';
 import type { SpectrumCurve } from '../spectrum/spectrum.js';
@@ -66,20 +66,20 @@ export function floorSetToJson(set: FloorSpectrumSet, building: BuildingMode, as
     records: set.members.map((member, i) => ({
       label: labels[i],
       record: recordToJson(member.spectrum.record),
-      ground_pga_g: set.grounds[i].pgaMS2 / G,
+      ground_pga_g: gFromMS2(set.grounds[i].pgaMS2),
       spectra: curvesToJson(member.spectrum.curves),
       unbroadened_psa_g: member.unbroadened.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2) })),
     })),
     mean: {
       label: 'mean',
       records: set.members.length,
-      pga_g: set.mean.pgaMS2 / G,
+      pga_g: gFromMS2(set.mean.pgaMS2),
       spectra: curvesToJson(set.mean.curves),
     },
     envelope: {
       label: 'envelope',
       records: set.members.length,
-      pga_g: set.envelope.pgaMS2 / G,
+      pga_g: gFromMS2(set.envelope.pgaMS2),
       spectra: curvesToJson(set.envelope.curves).map((curve, d) => ({ ...curve, psa_governed_by: by[d] })),
     },
     assumptions,

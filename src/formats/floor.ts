@@ -1,4 +1,4 @@
-import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
+import { STANDARD_GRAVITY_MS2 as G, gFromMS2 } from '../base/units.js';
 import { type BuildingMode, FLOOR_METHOD_DESCRIPTION, type FloorSpectra } from '../spectrum/floor.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
 import { assumptionLines, columnsByDamping, periodTable, pgaText, terminalText } from './layout.js';
@@ -94,7 +94,7 @@ export function floorToJson(
     ground: {
       name: ground.record.name,
       source: ground.record.source,
-      pga_g: ground.record.pgaMS2 / G,
+      pga_g: gFromMS2(ground.record.pgaMS2),
       spectra: psaCurvesG(ground),
     },
     assumptions,

@@ -1,5 +1,5 @@
 import { CAUTION } from '../base/caution.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { gFromMS2, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
 import type { GroundRecord } from '../record/record.js';
@@ -35,7 +35,7 @@ export function infoToJson(record: GroundRecord, m: GroundMotionMeasures, predom
       order: PROCESSING_ORDER.join(' → '),
       steps: record.processing.map((step) => ({ ...step })),
     },
-    pga_g: m.pga.value / g,
+    pga_g: gFromMS2(m.pga.value),
     pga_time_s: m.pga.timeS,
     pgv_m_s: m.pgv.value,
     pgv_time_s: m.pgv.timeS,

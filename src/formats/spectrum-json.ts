@@ -1,5 +1,5 @@
 import { CAUTION } from '../base/caution.js';
-import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { gFromMS2, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
 import { assertFiniteResult } from './finite.js';
@@ -16,7 +16,7 @@ export function recordToJson(record: Spectrum['record']) {
     source: record.source,
     npts: record.npts,
     dt_s: record.dtS,
-    pga_g: record.pgaMS2 / STANDARD_GRAVITY_MS2,
+    pga_g: gFromMS2(record.pgaMS2),
     processing: record.processing.map((step) => ({ ...step })),
   };
 }

@@ -1,4 +1,5 @@
 import { inputError, usageError } from '../base/errors.js';
+import { defaultPeriodsS } from '../oscillator/grid.js';
 
 /**
  * A design spectrum: pseudo-spectral acceleration in g as a function of the period, over the
@@ -188,6 +189,19 @@ export function ec8Spectrum(parameters: Ec8Parameters): DesignSpectrum {
 /** The spectrum at every period of a grid, g. */
 export function designPsaG(spectrum: DesignSpectrum, periodsS: ArrayLike<number>): Float64Array {
   return Float64Array.from(periodsS, (periodS) => spectrum.psaG(periodS));
+}
+
+/**
+ * The periods a design spectrum is given at by default: a table's own rows; otherwise the default
+ * grid (defaultPeriodsS) where the spectrum is defined, and the last period where it is defined
+ * when that is finite and not on the grid (Eurocode 8's 4 s), so the curve runs to its end.
+ */
+export function defaultDesignPeriodsS(spectrum: DesignSpectrum): Float64Array {
+  if (spectrum.tabulatedPeriodsS !== undefined) return spectrum.tabulatedPeriodsS;
+  const periodsS = Array.from(defaultPeriodsS()).filter((t) => coversPeriod(spectrum, t));
+  const endS = spectrum.maxPeriodS;
+  if (Number.isFinite(endS) && periodsS[periodsS.length - 1] < endS) periodsS.push(endS);
+  return Float64Array.from(periodsS);
 }
 
 /** Whether `periodS` lies where the spectrum is defined. */

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   ACCELERATION_UNITS,
+  gFromMS2,
   LENGTH_UNITS,
   parseAccelerationUnit,
   parseLengthUnit,
@@ -68,5 +69,28 @@ describe('parseLengthUnit', () => {
     expect(parseLengthUnit('ft')).toBe('ft');
     expect(() => parseLengthUnit('yd')).toThrow("unknown length unit 'yd'; accepted: m, cm, mm, in, ft");
     expect(() => parseLengthUnit('constructor')).toThrow(/unknown length unit/);
+  });
+});
+
+describe('gFromMS2', () => {
+  it('gives back the value a record in g was read with, where a/g does not', () => {
+    // 0.42·9.80665/9.80665 is not 0.42 in binary floating point (IEEE 754 rounding).
+    const readMS2 = 0.42 * STANDARD_GRAVITY_MS2;
+    expect(readMS2 / STANDARD_GRAVITY_MS2).not.toBe(0.42);
+    expect(gFromMS2(readMS2)).toBe(0.42);
+  });
+
+  it('converts back to the same m/s² and stays within an ulp of a/g', () => {
+    for (const given of [0.3, 1.234567, 1, 3.14159e-4, 4.2000001]) {
+      const a = given * STANDARD_GRAVITY_MS2;
+      const g = gFromMS2(a);
+      expect(g * STANDARD_GRAVITY_MS2).toBe(a);
+      expect(Math.abs(g - a / STANDARD_GRAVITY_MS2)).toBeLessThanOrEqual(
+        Number.EPSILON * (a / STANDARD_GRAVITY_MS2),
+      );
+    }
+    expect(gFromMS2(0)).toBe(0);
+    // A value no g value converts to exactly keeps a/g.
+    expect(gFromMS2(42.000001)).toBe(42.000001 / STANDARD_GRAVITY_MS2);
   });
 });

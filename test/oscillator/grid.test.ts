@@ -20,13 +20,24 @@ describe('period grids', () => {
     expect(logSpaced(0.5, 2, 1)).toEqual([0.5]);
   });
 
-  it('the default grid is T = 0 and 120 log-spaced periods from 0.01 s to 10 s', () => {
+  it('the default grid is T = 0 and 121 periods from 0.01 s to 10 s, 40 a decade', () => {
     const grid = defaultPeriodsS();
-    expect(grid).toHaveLength(121);
+    expect(grid).toHaveLength(122);
     expect(grid[0]).toBe(0);
     expect(grid[1]).toBe(0.01);
-    expect(grid[120]).toBe(10);
-    expect(grid[2] / grid[1]).toBeCloseTo(1000 ** (1 / 119), 12);
+    expect(grid[121]).toBe(10);
+    // 40 a decade evenly in log T: a ratio of 10^(1/40) between neighbours (closed form), but
+    // where a round period replaced its neighbour, within a quarter of a percent of it.
+    for (let i = 2; i < grid.length; i++) {
+      expect(Math.abs(grid[i] / grid[i - 1] / 10 ** (1 / 40) - 1)).toBeLessThan(0.0025);
+    }
+    expect(grid[3] / grid[2]).toBeCloseTo(10 ** (1 / 40), 12);
+  });
+
+  it('the default grid holds the round periods of a 1-2-5 series exactly (common practice)', () => {
+    const grid = Array.from(defaultPeriodsS());
+    for (const t of [0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1, 2, 5, 10]) expect(grid).toContain(t);
+    expect([...grid].sort((a, b) => a - b)).toEqual(grid);
   });
 
   it('parses a list, sorted, and a:b:n', () => {

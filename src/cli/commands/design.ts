@@ -1,8 +1,12 @@
 import type { Command } from 'commander';
 import { designTable, designToCsv, designToJson } from '../../formats/design.js';
-import { defaultPeriodsS } from '../../oscillator/grid.js';
 import { designFigure } from '../../plot/design-figure.js';
-import { checkPeriod, coversPeriod, type DesignSpectrum, designPsaG } from '../../spectrum/design.js';
+import {
+  checkPeriod,
+  type DesignSpectrum,
+  defaultDesignPeriodsS,
+  designPsaG,
+} from '../../spectrum/design.js';
 import { count } from '../announce.js';
 import { type AxisCliOptions, addAxisOption, svgAxisFromOptions } from '../options/axis.js';
 import { addDesignOptions, type DesignCliOptions, designFromOptions } from '../options/design.js';
@@ -19,7 +23,7 @@ export function registerDesign(program: Command): void {
   command
     .option(
       '--periods <grid>',
-      'periods, s: a list or a:b:n (default: 0 and 0.01:10:120 where the spectrum is defined; a table’s own rows, and a multi-period table’s)',
+      'periods, s: a list or a:b:n (default: the default grid where the spectrum is defined, and its last period; a table’s own rows, and a multi-period table’s)',
     )
     .option('--frequencies <grid>', FREQUENCIES_HELP);
   addAxisOption(command);
@@ -54,9 +58,7 @@ export function designPeriods(
   spectrum: DesignSpectrum,
   options: { periods?: string; frequencies?: string },
 ): Float64Array {
-  const fallback = () =>
-    spectrum.tabulatedPeriodsS ?? defaultPeriodsS().filter((t) => coversPeriod(spectrum, t));
-  const periodsS = periodsFromOptions(options, fallback);
+  const periodsS = periodsFromOptions(options, () => defaultDesignPeriodsS(spectrum));
   if (options.periods !== undefined || options.frequencies !== undefined)
     for (const t of periodsS) checkPeriod(spectrum, t);
   return periodsS;

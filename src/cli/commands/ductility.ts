@@ -52,7 +52,7 @@ export function registerDuctility(program: Command): void {
   addInelasticOptions(command)
     .option(
       '--periods <grid>',
-      'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01:10:120; with --strength 0.01:10:120, as T = 0 has no finite demand)',
+      'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01 to 10 s, 40 a decade, 1-2-5 on it; with --strength the same without 0, as T = 0 has no finite demand)',
     )
     .option('--frequencies <grid>', FREQUENCIES_HELP)
     .option('--damping <list>', 'damping ratios as fractions or percentages, e.g. 0.02,5%', '5%')

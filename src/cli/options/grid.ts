@@ -22,7 +22,7 @@ export function addGridOptions(command: Command, defaultDamping = '5%'): Command
   return command
     .option(
       '--periods <grid>',
-      'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01:10:120)',
+      'periods, s: a list (0,0.1,0.5) or a:b:n log-spaced (default: 0 and 0.01 to 10 s, 40 a decade, 1-2-5 on it)',
     )
     .option('--frequencies <grid>', FREQUENCIES_HELP)
     .option('--damping <list>', 'damping ratios as fractions or percentages, e.g. 0.02,5%', defaultDamping)

@@ -100,9 +100,9 @@ describe('gridFromOptions', () => {
     );
   });
 
-  it('defaults to T = 0 and 120 periods from 0.01 s to 10 s, 5%, Newmark average acceleration', () => {
+  it('defaults to T = 0 and 121 periods from 0.01 s to 10 s, 5%, Newmark average acceleration', () => {
     const grid = gridFromOptions({});
-    expect(grid.periodsS).toHaveLength(121);
+    expect(grid.periodsS).toHaveLength(122);
     expect(Array.from(grid.dampings)).toEqual([0.05]);
     expect(grid.method).toBe('newmark-average');
   });
