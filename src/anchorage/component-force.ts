@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { verticalSpectrum } from '../spectrum/vertical.js';
 import { type CodeForce, codeHorizontalForce } from './code-force.js';
 import { type Asce722Force, asce722HorizontalForce } from './code-force-7-22.js';
@@ -49,7 +50,7 @@ export function verticalSpectralDemand(equipment: Equipment): VerticalSpectralDe
   };
 }
 
-const n = (value: number) => Number(value.toPrecision(4)).toString();
+const n = (value: number) => formatNumber(value);
 
 /** The code force's statements for the assumptions of every output, in the words of its edition. */
 export function componentForceStatements(equipment: Equipment, code: ComponentForce): string[] {

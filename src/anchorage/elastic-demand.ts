@@ -1,4 +1,5 @@
 import { inputError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { Method } from '../oscillator/recurrence.js';
 import type { GroundRecord } from '../record/record.js';
@@ -10,8 +11,6 @@ export interface SpectralValue {
   psaG: number;
   how: string;
 }
-
-const short = (value: number) => Number(value.toPrecision(5)).toString();
 
 /**
  * PSA at period T read from a tabulated spectrum (periods in s, PSA in g, same length) by
@@ -31,13 +30,13 @@ export function psaAtPeriod(
         'extend the grid rather than extrapolate',
     );
   }
-  const between = `between ${short(periodsS[found.lo])} s and ${short(periodsS[found.hi])} s`;
+  const between = `between ${formatNumber(periodsS[found.lo])} s and ${formatNumber(periodsS[found.hi])} s`;
   const how = {
     point: 'a point of the grid',
     linear: `interpolated linearly ${between}`,
     'log-log': `interpolated log–log ${between}`,
   }[found.rule];
-  return { psaG: found.value, how: `PSA at T = ${periodS} s, ${how}` };
+  return { psaG: found.value, how: `PSA at T = ${formatNumber(periodS)} s, ${how}` };
 }
 
 /**
@@ -78,6 +77,6 @@ export function recordPsaForComponent(
   const spectrum = responseSpectrum(record, { periodsS: [periodS], dampings: [damping], method });
   return {
     psaG: spectrum.curves[0].psaMS2[0] / STANDARD_GRAVITY_MS2,
-    how: `PSA = ω²·SD of ${record.name} at T = ${periodS} s, ζ = ${damping}, computed for the component`,
+    how: `PSA = ω²·SD of ${record.name} at T = ${formatNumber(periodS)} s, ζ = ${damping}, computed for the component`,
   };
 }

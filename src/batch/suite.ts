@@ -1,4 +1,5 @@
 import { inputError, isQuakesweepError, usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { coversPeriod, type DesignSpectrum } from '../spectrum/design.js';
 import { SCALE_CRITERION, type ScaleResult, scaleToTarget } from '../spectrum/scale.js';
 import { compareText } from './glob.js';
@@ -116,9 +117,7 @@ export function targetDampingIndex(dampings: readonly number[], target: DesignSp
   const wanted = target.damping ?? (dampings.length === 1 ? dampings[0] : 0.05);
   const index = dampings.findIndex((d) => Math.abs(d - wanted) < 1e-12);
   if (index < 0)
-    throw usageError(
-      `the target is for ${Number((100 * wanted).toPrecision(6))}% damping: include it in --damping`,
-    );
+    throw usageError(`the target is for ${formatNumber(100 * wanted, 6)}% damping: include it in --damping`);
   return index;
 }
 
@@ -141,13 +140,13 @@ export function checkSuitePlan(
   for (const [what, range] of ranges) {
     if (range === undefined) continue;
     const inside = settings.periodsS.filter((t) => t >= range[0] && t <= range[1]);
-    const [from, to] = range.map((t) => Number(t.toPrecision(4)));
+    const [from, to] = range.map((t) => formatNumber(t));
     if (inside.length === 0)
       throw usageError(`no period of the grid lies in the ${what} range ${from}–${to} s`);
     const outside = inside.find((t) => !coversPeriod(target, t));
     if (outside !== undefined)
       throw usageError(
-        `the ${what} range ${from}–${to} s reaches T = ${Number(outside.toPrecision(4))} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
+        `the ${what} range ${from}–${to} s reaches T = ${formatNumber(outside)} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
       );
   }
 }

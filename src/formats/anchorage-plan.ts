@@ -1,5 +1,6 @@
 import type { AnchorageAnalysis } from '../anchorage/anchorage.js';
 import { centroid, EQUIPMENT_UNITS } from '../anchorage/equipment.js';
+import { formatNumber, formatSignificant } from '../base/numbers.js';
 
 /** The input of the anchor plan figure (plot/anchor-plan.ts) from an analysis, in the equipment's units. */
 export function anchorPlanInput(analysis: AnchorageAnalysis) {
@@ -17,8 +18,8 @@ export function anchorPlanInput(analysis: AnchorageAnalysis) {
     cgPlan: e.cgPlanM.map(l) as [number, number],
     centroid: centroid(e.anchorsM).map(l) as [number, number],
     subtitle: [
-      `Horizontal force for the anchors ${(analysis.horizontalForAnchorsKN / system.kNPerForce).toPrecision(4)} ${system.force} ` +
-        `(${analysis.governing === 'code' ? `${e.code === 'asce7-22' ? 'ASCE 7-22' : 'ASCE 7-16'} §13.3.1 code force` : 'record elastic demand'}) at h_cg = ${Number(l(e.cgHeightM).toPrecision(4))} ${system.length}; W_p = ${(e.weightKN / system.kNPerForce).toPrecision(4)} ${system.force}`,
+      `Horizontal force for the anchors ${formatSignificant(analysis.horizontalForAnchorsKN / system.kNPerForce)} ${system.force} ` +
+        `(${analysis.governing === 'code' ? `${e.code === 'asce7-22' ? 'ASCE 7-22' : 'ASCE 7-16'} §13.3.1 code force` : 'record elastic demand'}) at h_cg = ${formatNumber(l(e.cgHeightM))} ${system.length}; W_p = ${formatSignificant(e.weightKN / system.kNPerForce)} ${system.force}`,
       `Method: rigid base, elastic bolt group, anchor rule ${a.rule}${a.rule === 'projected' ? ' (T_i = M·d_i/Σd_j² − D/n, neutral axis perpendicular to the shaking)' : ' (general elastic solution, moment equilibrium about both plan axes)'}`,
     ],
     notes: [

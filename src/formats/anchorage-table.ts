@@ -1,6 +1,7 @@
 import { ANCHORAGE_SCOPE, type AnchorageAnalysis } from '../anchorage/anchorage.js';
 import { EQUIPMENT_UNITS } from '../anchorage/equipment.js';
 import { wrapText } from '../base/caution.js';
+import { formatNumber, formatSignificant } from '../base/numbers.js';
 import { alignRight, assumptionLines, terminalText } from './layout.js';
 
 /** The terminal report: the caution first, then scope, forces, anchors and assumptions. */
@@ -33,7 +34,7 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
   if (e.omega0 !== null) out.push(force('Ω₀·F_p', analysis.codeForAnchorsKN));
   out.push(
     elasticKN !== null && elastic !== null
-      ? force('record elastic PSA·W_p', elasticKN, `(PSA ${elastic.psaG.toPrecision(4)} g)`)
+      ? force('record elastic PSA·W_p', elasticKN, `(PSA ${formatSignificant(elastic.psaG)} g)`)
       : '  record elastic PSA·W_p                  —      (no ground motion used)',
     force(
       `for the anchors (--demand ${analysis.demand})`,
@@ -47,7 +48,7 @@ export function anchorTable(analysis: AnchorageAnalysis): string {
   const v = analysis.verticalSpectral;
   if (v !== null) {
     out.push(
-      `          S_av(T_v)·W_p = ${f(v.forceKN)} ${unit}   (§11.9: S_av ${v.savG.toPrecision(4)} g at T_v ${v.periodS} s, C_v ${Number(v.cv.toPrecision(4))}; information only, governs nothing)`,
+      `          S_av(T_v)·W_p = ${f(v.forceKN)} ${unit}   (§11.9: S_av ${formatSignificant(v.savG)} g at T_v ${v.periodS} s, C_v ${formatNumber(v.cv)}; information only, governs nothing)`,
     );
   }
   const a = analysis.anchors;

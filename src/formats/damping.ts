@@ -1,4 +1,5 @@
 import { CAUTION } from '../base/caution.js';
+import { formatNumber } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { DampingComparison, DampingCurveComparison } from '../spectrum/damping.js';
@@ -61,6 +62,10 @@ export function dampingToJson(spectrum: Spectrum, comparison: DampingComparison,
   };
 }
 
+/** A published ratio on a `#` line: four significant figures, empty where there is none. */
+const note = (value: number | null | undefined) =>
+  value === null || value === undefined ? '' : formatNumber(value);
+
 /** Every PSA, then every ratio, one column a damping; the published ratios on `#` lines. */
 export function dampingToCsv(spectrum: Spectrum, comparison: DampingComparison): string {
   const notes = [
@@ -69,7 +74,7 @@ export function dampingToCsv(spectrum: Spectrum, comparison: DampingComparison):
     `reference damping: ${dampingLabel(comparison.referenceDamping)}`,
     ...comparison.curves.map(({ damping, published }) => {
       const nh = published.newmarkHall;
-      return `published ratio at ${dampingLabel(damping)}: EC8 eta ${published.ec8Eta}; Newmark-Hall acceleration ${nh.acceleration ?? ''} velocity ${nh.velocity ?? ''} displacement ${nh.displacement ?? ''}`;
+      return `published ratio at ${dampingLabel(damping)}: EC8 eta ${note(published.ec8Eta)}; Newmark-Hall acceleration ${note(nh.acceleration)} velocity ${note(nh.velocity)} displacement ${note(nh.displacement)}`;
     }),
   ];
   const { curves } = comparison;

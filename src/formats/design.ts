@@ -1,4 +1,5 @@
 import { CAUTION } from '../base/caution.js';
+import { formatNumber, formatSignificant } from '../base/numbers.js';
 import type { DesignSpectrum } from '../spectrum/design.js';
 import { frequenciesHz } from './frequency.js';
 import { alignRight, csvText, terminalText } from './layout.js';
@@ -27,7 +28,7 @@ export function designToCsv(spectrum: DesignSpectrum, periodsS: Float64Array, ps
 export function designTable(spectrum: DesignSpectrum, periodsS: Float64Array, psaG: Float64Array): string {
   const widths = [10, 12];
   const rows = Array.from(psaG, (psa, i) =>
-    alignRight([Number(periodsS[i].toPrecision(4)).toString(), psa.toPrecision(5)], widths),
+    alignRight([formatNumber(periodsS[i]), formatSignificant(psa)], widths),
   );
   const header = spectrum.vertical ? ['T_v (s)', 'S_av (g)'] : ['T (s)', 'PSA (g)'];
   return terminalText([spectrum.description, '', alignRight(header, widths), ...rows]);

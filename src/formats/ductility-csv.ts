@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import type {
   DemandCurve,
   DuctilityCurve,
@@ -63,7 +64,7 @@ const DEMAND_QUANTITIES: Quantity<DemandCurve>[] = [
 
 function recordNotes(record: SpectrumRecordInfo): string[] {
   return [
-    `record: ${record.name}; npts ${record.npts}; dt ${record.dtS} s`,
+    `record: ${record.name}; npts ${record.npts}; dt ${formatNumber(record.dtS, 6)} s`,
     ...record.processing.map((step) => `processing: ${step.description}`),
   ];
 }

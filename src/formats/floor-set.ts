@@ -1,4 +1,5 @@
 import { CAUTION } from '../base/caution.js';
+import { formatNumber, formatSignificant } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 as G, gFromMS2 } from '../base/units.js';
 import { type BuildingMode, FLOOR_METHOD_DESCRIPTION } from '../spectrum/floor.js';
 import { type FloorSpectrumSet, recordLabels } from '../spectrum/floor-set.js';
@@ -101,7 +102,7 @@ export function floorSetToCsv(set: FloorSpectrumSet, assumptions: string[]): str
   const notes = [
     ...set.members.map(
       (m, i) =>
-        `record: ${labels[i]}; ${m.spectrum.record.source}; npts ${m.floor.accelMS2.length}; dt ${m.floor.dtS} s`,
+        `record: ${labels[i]}; ${m.spectrum.record.source}; npts ${m.floor.accelMS2.length}; dt ${formatNumber(m.floor.dtS, 6)} s`,
     ),
     `method: ${set.method}`,
     `building: ${set.members[0].floor.processing.at(-1)?.description ?? ''}`,
@@ -153,7 +154,7 @@ export function floorSetTable(set: FloorSpectrumSet, building: BuildingMode, ass
   const table = rows.map((row, r) => {
     const cells = row.curves.flatMap((c) => {
       const peak = peakOf(set.periodsS, c.psaMS2);
-      return [(peak.value / G).toPrecision(4), formatPeriod(peak.periodS)];
+      return [formatSignificant(peak.value / G), formatPeriod(peak.periodS)];
     });
     const line = [row.label.padEnd(first), alignRight(cells, widths.slice(1))].join(' ');
     return r === rows.length - 1 ? `${line}  (from ${from})` : line;

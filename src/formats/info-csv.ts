@@ -1,3 +1,4 @@
+import { formatNumber, formatRange } from '../base/numbers.js';
 import { type CsvCell, csvRows } from './csv-rows.js';
 import type { InfoJson } from './info.js';
 
@@ -32,9 +33,9 @@ const MEASURES: [keyof InfoJson, string][] = [
 export function infoToCsv(json: InfoJson): string {
   const r = json.record;
   const notes = [
-    `record: ${r.name}; source ${r.source}; npts ${r.npts}; dt ${r.dt_s} s; units read ${r.units_read}`,
+    `record: ${r.name}; source ${r.source}; npts ${r.npts}; dt ${formatNumber(r.dt_s, 6)} s; units read ${r.units_read}`,
     ...json.processing.steps.map((step) => `processing: ${step.description}`),
-    `mean period band: ${json.mean_period_band_hz[0]}-${json.mean_period_band_hz[1]} Hz`,
+    `mean period band: ${formatRange(json.mean_period_band_hz[0], json.mean_period_band_hz[1], 'Hz')}`,
     ...Object.entries(json.methods).map(([key, text]) => `method ${key}: ${text}`),
   ];
   const rows = MEASURES.map(([key, unit]): CsvCell[] => [key, json[key] as number | null, unit]);

@@ -1,4 +1,5 @@
 import { CAUTION } from '../base/caution.js';
+import { formatNumber, formatRange, formatSignificant } from '../base/numbers.js';
 import { gFromMS2, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
@@ -65,7 +66,7 @@ export type InfoJson = ReturnType<typeof infoToJson>;
 /** A readable table for the terminal: the caution first, then one measure a line. */
 export function infoTable(json: InfoJson): string {
   const r = json.record;
-  const fourDigits = (value: number) => value.toPrecision(4);
+  const fourDigits = (value: number) => formatSignificant(value);
   const seconds = (value: number) => value.toFixed(2);
   const at = (t: number) => `at t = ${t.toFixed(3)} s`;
   const steps = json.processing.steps.map((step) => step.description);
@@ -74,7 +75,7 @@ export function infoTable(json: InfoJson): string {
       ? 'threshold never reached'
       : `${seconds(json.bracket_start_s)} to ${seconds(json.bracket_end_s ?? 0)} s`;
   const meanPeriod = json.mean_period_s === null ? '—' : fourDigits(json.mean_period_s);
-  const band = `${json.mean_period_band_hz[0]}–${fourDigits(json.mean_period_band_hz[1])} Hz`;
+  const band = formatRange(json.mean_period_band_hz[0], json.mean_period_band_hz[1], 'Hz');
   const predominantPsa = `PSA ${fourDigits(json.predominant_psa_g)} g at 5%`;
   const rows: [string, string, string, string][] = [
     ['PGA', fourDigits(json.pga_g), 'g', at(json.pga_time_s)],
@@ -90,7 +91,7 @@ export function infoTable(json: InfoJson): string {
   ];
   const width = Math.max(...rows.map((row) => row[0].length));
   return terminalText([
-    `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dt_s} s, ${seconds(r.duration_s)} s long`,
+    `record  ${r.name} (${r.source}), ${r.npts} samples at ${formatNumber(r.dt_s, 6)} s, ${seconds(r.duration_s)} s long`,
     ...(steps.length === 0 ? ['nothing (as read)'] : steps).map((step) => `        processed: ${step}`),
     '',
     ...rows.map(([label, value, unit, note]) =>

@@ -1,4 +1,5 @@
 import { cautionLines, wrapText } from '../base/caution.js';
+import { formatNumber, formatSignificant } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
 import { notFiniteError } from './finite.js';
@@ -6,20 +7,20 @@ import { frequencyHz } from './frequency.js';
 
 /** Percent label of a damping ratio, e.g. 0.05 → "5%". */
 export function dampingLabel(damping: number): string {
-  return `${Number((damping * 100).toPrecision(6))}%`;
+  return `${formatNumber(damping * 100, 6)}%`;
 }
 
-/** A period as the tables write it: three significant digits, no trailing zeros. */
+/** A period as the tables write it: formatNumber's four significant figures, no trailing zeros. */
 export function formatPeriod(t: number): string {
-  return t === 0 ? '0' : Number(t.toPrecision(3)).toString();
+  return formatNumber(t);
 }
 
 /** `name (source), N samples at dt s`: the record as a terminal table opens with it. */
 export const recordLine = (r: SpectrumRecordInfo) =>
-  `record  ${r.name} (${r.source}), ${r.npts} samples at ${r.dtS} s`;
+  `record  ${r.name} (${r.source}), ${r.npts} samples at ${formatNumber(r.dtS, 6)} s`;
 
-/** `PGA 0.3800 g` of an acceleration in m/s². */
-export const pgaText = (pgaMS2: number) => `PGA ${(pgaMS2 / STANDARD_GRAVITY_MS2).toFixed(4)} g`;
+/** `PGA 0.38 g` of an acceleration in m/s². */
+export const pgaText = (pgaMS2: number) => `PGA ${formatNumber(pgaMS2 / STANDARD_GRAVITY_MS2)} g`;
 
 /**
  * A column by period: its CSV header and, when the terminal table shows it, its heading and width
@@ -98,7 +99,7 @@ export function periodTable(periodsS: Float64Array, allColumns: readonly PeriodC
   for (const p of summaryRows(periodsS, toEnds)) {
     const cells = columns.map((c) => {
       const value = c.at(p);
-      return value === null ? '-' : (c.format?.(value) ?? value.toPrecision(4));
+      return value === null ? '-' : (c.format?.(value) ?? formatSignificant(value));
     });
     lines.push(alignRight([formatPeriod(periodsS[p]), ...cells], widths));
   }

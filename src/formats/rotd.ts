@@ -1,4 +1,5 @@
 import { CAUTION } from '../base/caution.js';
+import { formatNumber } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 as G } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { RotDCurve, RotDSpectra } from '../spectrum/rotd.js';
@@ -45,7 +46,7 @@ export function rotdToJson(spectra: RotDSpectra) {
 export function rotdToCsv(spectra: RotDSpectra): string {
   const header = [
     ...spectra.records.flatMap((r) => [
-      `record: ${r.name}; npts ${r.npts}; dt ${r.dtS} s`,
+      `record: ${r.name}; npts ${r.npts}; dt ${formatNumber(r.dtS, 6)} s`,
       ...r.processing.map((step) => `processing of ${r.name}: ${step.description}`),
     ]),
     `method: ${spectra.method}`,

@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 as G, LENGTH_UNITS, type LengthUnit } from '../base/units.js';
 import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
@@ -31,7 +32,7 @@ export function spectrumToCsv(spectrum: Spectrum, options: CsvOptions = {}): str
   const { record } = spectrum;
   const target = options.target;
   const notes = [
-    `record: ${record.name}; npts ${record.npts}; dt ${record.dtS} s`,
+    `record: ${record.name}; npts ${record.npts}; dt ${formatNumber(record.dtS, 6)} s`,
     `method: ${spectrum.method}`,
     ...record.processing.map((step) => `processing: ${step.description}`),
     ...(target === undefined ? [] : targetCsvNotes(target)),

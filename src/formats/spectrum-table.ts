@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { METHOD_DESCRIPTIONS } from '../oscillator/recurrence.js';
 import type { Spectrum } from '../spectrum/spectrum.js';
@@ -20,7 +21,7 @@ export function summaryTable(spectrum: Spectrum, lengthUnit: LengthUnit, target?
     let peak = 0;
     for (let p = 1; p < curve.psaMS2.length; p++) if (curve.psaMS2[p] > curve.psaMS2[peak]) peak = p;
     out.push(
-      `peak PSA at ${dampingLabel(curve.damping)}: ${(curve.psaMS2[peak] / STANDARD_GRAVITY_MS2).toPrecision(4)} g at T = ${formatPeriod(spectrum.periodsS[peak])} s`,
+      `peak PSA at ${dampingLabel(curve.damping)}: ${formatNumber(curve.psaMS2[peak] / STANDARD_GRAVITY_MS2)} g at T = ${formatPeriod(spectrum.periodsS[peak])} s`,
     );
   }
   out.push(`(${spectrum.periodsS.length} periods; --format json or csv for all of them)`);

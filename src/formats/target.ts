@@ -1,3 +1,4 @@
+import { formatNumber, formatRange } from '../base/numbers.js';
 import type { TargetFit } from '../spectrum/target.js';
 import { dampingLabel } from './layout.js';
 
@@ -29,17 +30,17 @@ export function targetToJson(fit: TargetFit) {
 export function targetCsvNotes(fit: TargetFit): string[] {
   return [
     `target: ${fit.description}`,
-    `scaling: factor ${fit.factor} over ${fit.rangeS[0]}-${fit.rangeS[1]} s (${fit.periodCount} periods); record/target after scaling mean ${fit.meanRatio} min ${fit.minRatio} max ${fit.maxRatio}; ${fit.applied ? 'applied' : 'not applied'}`,
+    `scaling: factor ${formatNumber(fit.factor)} over ${formatRange(fit.rangeS[0], fit.rangeS[1], 's')} (${fit.periodCount} periods); record/target after scaling mean ${formatNumber(fit.meanRatio)} min ${formatNumber(fit.minRatio)} max ${formatNumber(fit.maxRatio)}; ${fit.applied ? 'applied' : 'not applied'}`,
     `scaling criterion: ${fit.criterion}`,
   ];
 }
 
 /** The lines a target adds under the terminal summary. */
 export function targetTableLines(fit: TargetFit): string[] {
-  const f = (value: number) => value.toPrecision(4);
+  const f = (value: number) => formatNumber(value);
   return [
     `target  ${fit.description}`,
-    `scale   × ${f(fit.factor)} to match it at ${dampingLabel(fit.damping)} over ${fit.rangeS[0]}–${fit.rangeS[1]} s (${fit.periodCount} periods)${fit.applied ? ', applied to every number above' : ', not applied (--apply-scale)'}`,
+    `scale   × ${f(fit.factor)} to match it at ${dampingLabel(fit.damping)} over ${formatRange(fit.rangeS[0], fit.rangeS[1], 's')} (${fit.periodCount} periods)${fit.applied ? ', applied to every number above' : ', not applied (--apply-scale)'}`,
     `        after scaling, record/target: mean ${f(fit.meanRatio)}, min ${f(fit.minRatio)}, max ${f(fit.maxRatio)}`,
     `        criterion: ${fit.criterion}`,
   ];

@@ -1,4 +1,5 @@
 import { usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import type { DuctilitySpectra } from './ductility.js';
 import { type Hysteresis, postYieldRatio } from './hysteresis.js';
 
@@ -195,7 +196,7 @@ function referenceNotes(
   const tc = corners
     .map(
       ({ damping, tcS }) =>
-        `${Number((damping * 100).toPrecision(6))}%: ${Number.isFinite(tcS) ? `${Number(tcS.toPrecision(3))} s` : 'not above T_b, not drawn'}`,
+        `${formatNumber(damping * 100, 6)}%: ${Number.isFinite(tcS) ? `${formatNumber(tcS, 3)} s` : 'not above T_b, not drawn'}`,
     )
     .join('; ');
   const nkAlpha =
@@ -206,7 +207,7 @@ function referenceNotes(
         : `α = ${nk.alpha}, the coefficients linear in α between the table's rows 0, 0.02, 0.10`;
   return [
     `${NEWMARK_HALL_LABEL}: R = 1 for T ≤ T_a = 1/33 s, √(2μ−1) from T_b = 0.125 s to T_c' = T_c·√(2μ−1)/μ, μ from T_c, log–log between. T_c ${givenTcS === undefined ? `= 2π·PSV_max/PSA_max of the elastic spectrum (common practice)` : 'as given'}: ${tc}. Source: ${NEWMARK_HALL_SOURCE}.`,
-    `${NASSAR_KRAWINKLER_LABEL}: R = [c(μ−1)+1]^(1/c), c = T^a/(1+T^a) + b/T, ${nkAlpha}: a = ${Number(nk.a.toPrecision(4))}, b = ${Number(nk.b.toPrecision(4))}. Source: ${NASSAR_KRAWINKLER_SOURCE}.`,
+    `${NASSAR_KRAWINKLER_LABEL}: R = [c(μ−1)+1]^(1/c), c = T^a/(1+T^a) + b/T, ${nkAlpha}: a = ${formatNumber(nk.a)}, b = ${formatNumber(nk.b)}. Source: ${NASSAR_KRAWINKLER_SOURCE}.`,
     'Both are smoothed fits over many recorded motions at about 5% damping: references for the record’s R_y, not predictions of it.',
   ];
 }

@@ -6,9 +6,11 @@ export const DEFAULT_PERIODS_PER_DECADE = 40;
 /**
  * The default period grid: T = 0 (rigid) and 121 periods from 0.01 s to 10 s, 40 a decade evenly
  * spaced in log T and anchored on the decades (T = 10^(k/40) s), where the point nearest to each
- * 2 and 5 of a decade (10^(12/40) = 1.995…, 10^(28/40) = 5.012…) is replaced by it. So the round
- * periods 0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1, 2, 5 and 10 s are on the grid exactly, and no step
- * differs from 10^(1/40) (5.9%) by more than a quarter of a percent.
+ * 1.5, 2, 3, 5 and 7.5 of a decade (10^(7/40) = 1.496…, 10^(12/40) = 1.995…, 10^(19/40) = 2.985…,
+ * 10^(28/40) = 5.012…, 10^(35/40) = 7.499…) is replaced by it. So the round periods 0.01, 0.02,
+ * 0.05, 0.1, 0.2, 0.5, 1, 2, 5 and 10 s (and 0.03, 0.3, 3, 0.075, 0.75, 7.5, 0.015, 0.15, 1.5 s,
+ * which the terminal tables show too) are on the grid exactly, and no step differs from 10^(1/40)
+ * (5.9%) by more than half a percent.
  */
 export function defaultPeriodsS(): Float64Array {
   const periodsS = [0];
@@ -26,11 +28,14 @@ export function defaultPeriodsS(): Float64Array {
   return Float64Array.from(periodsS);
 }
 
-/** The steps of a decade (k of 10^(k/40)) that become its round 1, 2 and 5 (1 is k = 0 exactly). */
+/** The steps of a decade (k of 10^(k/40)) that become its round periods (1 is k = 0 exactly). */
 const ROUND_STEPS = new Map([
   [0, 1],
+  [7, 1.5],
   [12, 2],
+  [19, 3],
   [28, 5],
+  [35, 7.5],
 ]);
 
 /** `count` periods spaced evenly in log T from `fromS` to `toS`, both included. */

@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { finishPage } from './footer.js';
 import { startPage } from './header.js';
 import { axisTicks, makeScale } from './layout.js';
@@ -151,7 +152,7 @@ export function anchorPlanSvg(input: AnchorPlanInput): string {
     const governing = i === input.governingAnchor && maxTension > 0;
     const r = 4 + (maxTension > 0 ? 8 * Math.sqrt(p.tension / maxTension) : 0);
     const [cx, cy] = [px(p.x), py(p.y)];
-    const label = `${i + 1}: T = ${Number(p.tension.toPrecision(4))} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
+    const label = `${i + 1}: T = ${formatNumber(p.tension)} ${input.forceUnit}${governing ? ' (governs)' : ''}`;
     const halfWidth = textWidthPx(label, LABEL_PX) / 2;
     const x = Math.min(plotRight - halfWidth - 3, Math.max(plot.left + halfWidth + 3, cx));
     const y = cy + (p.y >= input.centroid[1] ? -r - 4 : r + 12);

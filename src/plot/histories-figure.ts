@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { renderFigure } from './figure.js';
 import type { PanelContext, PanelSpec } from './panel.js';
@@ -64,7 +65,7 @@ export function historiesFigure(input: HistoriesFigureInput, options: HistoriesF
     };
   });
   const subtitle = [
-    `${recordNameLine(input.name, input.source)}; ${n} samples at Δt = ${input.dtS} s`,
+    `${recordNameLine(input.name, input.source)}; ${n} samples at Δt = ${formatNumber(input.dtS, 6)} s`,
     ...processingLines(input.processing),
     `Method: ${input.integrationDescription ?? 'velocity and displacement by the trapezoidal rule from rest (v = u = 0 at t = 0)'}`,
   ];

@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { clearLabelSpot, type LabelSpot, type Segment } from './label-spot.js';
 import { lineChart } from './line-chart.js';
 import type { PanelContext } from './panel.js';
@@ -28,7 +29,7 @@ export function husidFigure(input: HusidFigureInput): string {
   const timesS = Float64Array.from({ length: n }, (_, i) => i * input.dtS);
   const durationS = n > 1 ? timesS[n - 1] : input.dtS;
   const subtitle = [
-    `${recordNameLine(input.name, input.source)}; ${n} samples at Δt = ${input.dtS} s`,
+    `${recordNameLine(input.name, input.source)}; ${n} samples at Δt = ${formatNumber(input.dtS, 6)} s`,
     ...processingLines(input.processing, 'Processed: nothing (as read)'),
     'Method: I(t) = ∫₀ᵗ a² dt / ∫₀ᵀ a² dt by the trapezoidal rule (Husid 1969; Arias 1970)',
   ];

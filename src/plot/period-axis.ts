@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import type { AxisSpec } from './panel.js';
 
 /** What a spectrum's horizontal axis shows: period T in s, or frequency f = 1/T in Hz. */
@@ -19,7 +20,5 @@ export function periodAxisSpec(axis: PeriodAxis = 'period'): AxisSpec {
 /** A period as it is named on the figure's axis: "T_b = 0.5 s", or "f_b = 2 Hz (T_b = 0.5 s)". */
 export function periodLabel(symbol: string, periodS: number, axis: PeriodAxis = 'period'): string {
   const period = `T${symbol} = ${periodS} s`;
-  return axis === 'frequency'
-    ? `f${symbol} = ${Number((1 / periodS).toPrecision(4))} Hz (${period})`
-    : period;
+  return axis === 'frequency' ? `f${symbol} = ${formatNumber(1 / periodS)} Hz (${period})` : period;
 }

@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
 
@@ -25,21 +26,17 @@ export function wrapText(text: string, widthPx: number, fontSizePx: number): str
 
 /** A damping ratio as a percentage, e.g. 0.05 → "5%". */
 export function percentLabel(damping: number): string {
-  return `${Number((damping * 100).toPrecision(6))}%`;
+  return `${formatNumber(damping * 100, 6)}%`;
 }
 
-/** A peak value for a label, four significant digits. */
+/** A peak value for a label: formatNumber's four significant figures, with a true minus sign. */
 export function formatValue(value: number): string {
-  if (value === 0) return '0';
-  const magnitude = Math.abs(value);
-  const text =
-    magnitude >= 1e-3 && magnitude < 1e5 ? String(Number(value.toPrecision(4))) : value.toExponential(3);
-  return text.replace('-', '−');
+  return formatNumber(value).replace('-', '−');
 }
 
 /** The subtitle line that names a record: its name and file, samples, step and PGA. */
 export function recordLine(label: string, r: SpectrumRecordInfo): string {
-  return `${label}: ${r.name} (${r.source}); ${r.npts} samples at Δt = ${r.dtS} s; PGA = ${formatValue(r.pgaMS2 / STANDARD_GRAVITY_MS2)} g`;
+  return `${label}: ${r.name} (${r.source}); ${r.npts} samples at Δt = ${formatNumber(r.dtS, 6)} s; PGA = ${formatValue(r.pgaMS2 / STANDARD_GRAVITY_MS2)} g`;
 }
 
 /** The subtitle line that states the method and the damping ratios drawn. */

@@ -1,4 +1,5 @@
 import { usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 
 /**
  * Butterworth filters (Butterworth 1930, Wireless Engineer 7): the analog prototype of order n,
@@ -128,6 +129,6 @@ export function describeFilter(spec: FilterSpec): string {
   }[spec.kind];
   return (
     `${name} Butterworth, order ${spec.order}, ${corners} Hz, zero-phase (forward and backward), ` +
-    `zero pads of ${Number(padDurationS(spec).toPrecision(3))} s at each end; bilinear transform with prewarping`
+    `zero pads of ${formatNumber(padDurationS(spec), 3)} s at each end; bilinear transform with prewarping`
   );
 }

@@ -1,4 +1,5 @@
 import { inputError } from '../base/errors.js';
+import { formatNumber, formatSignificant } from '../base/numbers.js';
 import { ACCELERATION_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { integrateRecord } from './integrate.js';
 import type { GroundRecord } from './record.js';
@@ -34,7 +35,7 @@ export function plausibilityWarnings(record: GroundRecord): string[] {
   if (pgaG > PLAUSIBLE.pgaMaxG * (1 + SPARE) || pgaG < PLAUSIBLE.pgaMinG * (1 - SPARE)) {
     const bound = pgaG > PLAUSIBLE.pgaMaxG ? `above ${PLAUSIBLE.pgaMaxG} g` : `below ${PLAUSIBLE.pgaMinG} g`;
     warnings.push(
-      `PGA ${pgaG.toPrecision(3)} g read in ${unit} is ${bound}: are the units right?${alternatives(record)}`,
+      `PGA ${formatSignificant(pgaG, 3)} g read in ${unit} is ${bound}: are the units right?${alternatives(record)}`,
     );
   }
   const { velocityMS, displacementM } = integrateRecord(record);
@@ -44,15 +45,15 @@ export function plausibilityWarnings(record: GroundRecord): string[] {
   const asRead = ' (as read, before any baseline correction)';
   if (pgvMS > PLAUSIBLE.pgvMaxMS)
     warnings.push(
-      `PGV ${pgvMS.toPrecision(3)} m/s is above ${PLAUSIBLE.pgvMaxMS} m/s${asRead}: are the units and the time step right?`,
+      `PGV ${formatSignificant(pgvMS, 3)} m/s is above ${PLAUSIBLE.pgvMaxMS} m/s${asRead}: are the units and the time step right?`,
     );
   if (pgdM > PLAUSIBLE.pgdMaxM)
     warnings.push(
-      `PGD ${pgdM.toPrecision(3)} m is above ${PLAUSIBLE.pgdMaxM} m${asRead}: are the units and the time step right, or does the record need a baseline correction?`,
+      `PGD ${formatSignificant(pgdM, 3)} m is above ${PLAUSIBLE.pgdMaxM} m${asRead}: are the units and the time step right, or does the record need a baseline correction?`,
     );
   if (durationS > PLAUSIBLE.durationMaxS)
     warnings.push(
-      `the record lasts ${(durationS / 3600).toPrecision(3)} h, above ${PLAUSIBLE.durationMaxS / 3600} h: is the time step in seconds?`,
+      `the record lasts ${formatSignificant(durationS / 3600, 3)} h, above ${PLAUSIBLE.durationMaxS / 3600} h: is the time step in seconds?`,
     );
   return warnings;
 }
@@ -64,7 +65,7 @@ function alternatives(record: GroundRecord): string {
   for (const [unit, factor] of Object.entries(ACCELERATION_UNITS)) {
     if (unit === 'gal' || factor === readFactor) continue;
     const altG = (record.pgaMS2 / readFactor) * (factor / STANDARD_GRAVITY_MS2);
-    if (altG >= 0.01 && altG <= 2) out.push(`in ${unit} it would be ${altG.toPrecision(3)} g`);
+    if (altG >= 0.01 && altG <= 2) out.push(`in ${unit} it would be ${formatSignificant(altG, 3)} g`);
   }
   return out.length > 0 ? `; ${out.join(', ')}` : '';
 }
@@ -91,8 +92,8 @@ export function checkTimeScale(
   if (dtS < TIME_LIMITS.dtMaxS && durationS <= TIME_LIMITS.durationMaxS) return;
   const what =
     dtS >= TIME_LIMITS.dtMaxS
-      ? `a time step of ${Number(dtS.toPrecision(6))} s (${where})`
-      : `a duration of ${Number((durationS / 3600).toPrecision(3))} h (${where})`;
+      ? `a time step of ${formatNumber(dtS, 6)} s (${where})`
+      : `a duration of ${formatNumber(durationS / 3600, 3)} h (${where})`;
   throw inputError(
     `${what} is not a ground-motion record's in seconds: if the times are milliseconds give --time-unit ms, if they are seconds --time-unit s`,
     { file: source },

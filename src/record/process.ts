@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { BASELINE_NAMES, removePolynomialBaseline } from './baseline.js';
 import { describeFilter, type FilterSpec, padDurationS, zeroPhaseFilter } from './filter.js';
 import { type GroundRecord, withProcessing } from './record.js';
@@ -36,7 +37,7 @@ export function applyProcessingPlan(record: GroundRecord, plan: ProcessingPlan):
   if (fraction !== undefined) {
     out = withProcessing(out, cosineTaper(out.accelMS2, fraction), {
       operation: 'taper',
-      description: `cosine (Tukey) taper of ${Number((fraction * 100).toPrecision(6))}% of the record at each end`,
+      description: `cosine (Tukey) taper of ${formatNumber(fraction * 100, 6)}% of the record at each end`,
       parameters: { fraction_each_end: fraction },
     });
   }
@@ -59,8 +60,8 @@ export function applyProcessingPlan(record: GroundRecord, plan: ProcessingPlan):
     const filterNote =
       antiAliasHz === null
         ? 'finer step, no anti-alias filter needed'
-        : `after a zero-phase Butterworth anti-alias low-pass of order ${ANTI_ALIAS_ORDER} at ${Number(antiAliasHz.toPrecision(4))} Hz`;
-    const description = `resampled from ${out.dtS} s to ${newDtS} s by Lanczos-windowed sinc interpolation (${LANCZOS_LOBES} lobes), ${filterNote}`;
+        : `after a zero-phase Butterworth anti-alias low-pass of order ${ANTI_ALIAS_ORDER} at ${formatNumber(antiAliasHz)} Hz`;
+    const description = `resampled from ${formatNumber(out.dtS, 6)} s to ${formatNumber(newDtS, 6)} s by Lanczos-windowed sinc interpolation (${LANCZOS_LOBES} lobes), ${filterNote}`;
     const parameters = { from_dt_s: out.dtS, to_dt_s: newDtS, anti_alias_hz: antiAliasHz };
     out = withProcessing(out, values, { operation: 'resample', description, parameters }, newDtS);
   }

@@ -1,4 +1,5 @@
 import { inputError, usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { ACCELERATION_UNITS, STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { quote } from './fields.js';
 import { expandTouching, fieldWidth } from './fixed.js';
@@ -397,5 +398,5 @@ function columnCount(columns: number): string {
 }
 
 function formatS(valueS: number): string {
-  return Number(valueS.toPrecision(6)).toString();
+  return formatNumber(valueS, 6);
 }

@@ -1,4 +1,5 @@
 import { inputError, usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { ACCELERATION_UNIT_NAMES, ACCELERATION_UNITS, type AccelerationUnit } from '../base/units.js';
 import { columnNameUnit, type HeaderKeys, timeNameInMs } from './header.js';
 import { type LayoutSeen, wrappedHint } from './layout-choice.js';
@@ -218,5 +219,5 @@ function fixedText(declared: readonly number[] | undefined, end: ReadEnd): strin
 }
 
 function formatS(valueS: number): string {
-  return Number(valueS.toPrecision(6)).toString();
+  return formatNumber(valueS, 6);
 }

@@ -1,3 +1,5 @@
+import { formatNumber as formatBase } from '../base/numbers.js';
+
 /** A figure of the report: the SVG text as the figure functions write it, and the file it is also saved as. */
 export interface ReportFigure {
   file: string;
@@ -18,9 +20,7 @@ export type Cell = string | number | null;
 /** A number for a table: `digits` significant figures, "—" for null or NaN. */
 export function formatNumber(value: number | null | undefined, digits = 4): string {
   if (value === null || value === undefined || Number.isNaN(value)) return '—';
-  if (value === 0) return '0';
-  if (!Number.isFinite(value)) return String(value);
-  return Number(value.toPrecision(digits)).toString();
+  return formatBase(value, digits);
 }
 
 /** "a to b s", each with four significant figures. */

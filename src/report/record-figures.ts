@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { INFO_METHODS } from '../formats/info.js';
 import { logSpaced } from '../oscillator/grid.js';
 import { type FourierFigureInput, fourierFigure } from '../plot/fourier-figure.js';
@@ -48,7 +49,7 @@ export function recordFigures(
         centresHz,
       }),
       smoothingLabel: `Konno–Ohmachi 1998, b = ${smoothingB}`,
-      smoothingNote: `The smoothed curve starts at ${Number(fLow.toPrecision(2))} Hz: below it the window's main lobe holds fewer than ${SMOOTHING_LINES} spectral lines (spacing ${Number(dfHz.toPrecision(3))} Hz), and its average is one line's value, a staircase.`,
+      smoothingNote: `The smoothed curve starts at ${formatNumber(fLow, 2)} Hz: below it the window's main lobe holds fewer than ${SMOOTHING_LINES} spectral lines (spacing ${formatNumber(dfHz, 3)} Hz), and its average is one line's value, a staircase.`,
     };
   }
   const histories = { ...integrateRecord(record), integrationDescription: INFO_METHODS.integration };

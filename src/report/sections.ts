@@ -22,12 +22,12 @@ export function recordSection(read: RecordFacts, processed: { dtS: number; npts:
     ['Name', read.name],
     ['Source file', read.source],
     ['Units read', `${read.unitsRead} (converted to m/s² inside the program)`],
-    ['Time step Δt as read', `${read.dtS} s`],
+    ['Time step Δt as read', `${formatNumber(read.dtS, 6)} s`],
     ['Samples as read', String(npts)],
     ['Length as read', `${formatNumber((npts - 1) * read.dtS, 6)} s`],
   ];
   if (processed.dtS !== read.dtS || processed.npts !== npts) {
-    rows.push(['Time step after processing', `${processed.dtS} s`]);
+    rows.push(['Time step after processing', `${formatNumber(processed.dtS, 6)} s`]);
     rows.push(['Samples after processing', String(processed.npts)]);
   }
   return definitionTable('Table 1. The record', rows);

@@ -1,3 +1,4 @@
+import { formatNumber } from '../base/numbers.js';
 import { type Asce716Parameters, asceTwoPeriodShape, checkPeriod, type DesignSpectrum } from './design.js';
 import { type SpectrumTable, tableSpectrum } from './design-table.js';
 
@@ -23,7 +24,7 @@ export function asce722TwoPeriodSpectrum(parameters: Asce716Parameters): DesignS
   const shape = asceTwoPeriodShape(parameters, 'ASCE 7-22');
   return {
     code: 'asce7-22',
-    description: `ASCE/SEI 7-22 §11.4.5.2 two-period design spectrum, 5% damping: S_DS = ${sdsG} g, S_D1 = ${sd1G} g, T_L = ${tlS} s (T0 = ${round(shape.t0S)} s, TS = ${round(shape.tsS)} s)`,
+    description: `ASCE/SEI 7-22 §11.4.5.2 two-period design spectrum, 5% damping: S_DS = ${sdsG} g, S_D1 = ${sd1G} g, T_L = ${tlS} s (T0 = ${formatNumber(shape.t0S)} s, TS = ${formatNumber(shape.tsS)} s)`,
     parameters: { form: 'two-period', sds_g: sdsG, sd1_g: sd1G, tl_s: tlS, t0_s: shape.t0S, ts_s: shape.tsS },
     damping: 0.05,
     minPeriodS: 0,
@@ -59,8 +60,4 @@ export function asce722MultiPeriodSpectrum(table: SpectrumTable, source: string)
       return read.psaG(periodS);
     },
   };
-}
-
-function round(value: number): number {
-  return Number(value.toPrecision(4));
 }

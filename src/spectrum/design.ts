@@ -1,4 +1,5 @@
 import { inputError, usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { defaultPeriodsS } from '../oscillator/grid.js';
 
 /**
@@ -50,7 +51,7 @@ export function asce716Spectrum(parameters: Asce716Parameters): DesignSpectrum {
   const shape = asceTwoPeriodShape(parameters, 'ASCE 7-16');
   return {
     code: 'asce7-16',
-    description: `ASCE/SEI 7-16 §11.4.6 design spectrum, 5% damping: S_DS = ${sdsG} g, S_D1 = ${sd1G} g, T_L = ${tlS} s (T0 = ${round(shape.t0S)} s, TS = ${round(shape.tsS)} s)`,
+    description: `ASCE/SEI 7-16 §11.4.6 design spectrum, 5% damping: S_DS = ${sdsG} g, S_D1 = ${sd1G} g, T_L = ${tlS} s (T0 = ${formatNumber(shape.t0S)} s, TS = ${formatNumber(shape.tsS)} s)`,
     parameters: { sds_g: sdsG, sd1_g: sd1G, tl_s: tlS, t0_s: shape.t0S, ts_s: shape.tsS },
     damping: 0.05,
     minPeriodS: 0,
@@ -171,7 +172,7 @@ export function ec8Spectrum(parameters: Ec8Parameters): DesignSpectrum {
   const plateau = 2.5 * agG * s * eta;
   return {
     code: 'ec8',
-    description: `EN 1998-1 §3.2.2.2 horizontal elastic spectrum, Type ${type}, ground ${ground}: a_g = ${agG} g, S = ${s}, T_B = ${tbS} s, T_C = ${tcS} s, T_D = ${tdS} s, ξ = ${round(100 * damping)}% (η = ${round(eta)}); recommended Table 3.2/3.3 values`,
+    description: `EN 1998-1 §3.2.2.2 horizontal elastic spectrum, Type ${type}, ground ${ground}: a_g = ${agG} g, S = ${s}, T_B = ${tbS} s, T_C = ${tcS} s, T_D = ${tdS} s, ξ = ${formatNumber(100 * damping)}% (η = ${formatNumber(eta)}); recommended Table 3.2/3.3 values`,
     parameters: { type, ground, ag_g: agG, damping, eta, s, tb_s: tbS, tc_s: tcS, td_s: tdS },
     damping,
     minPeriodS: 0,
@@ -229,8 +230,4 @@ function spectrumName(spectrum: DesignSpectrum): string {
 function positive(name: string, value: number): void {
   if (!(value > 0) || !Number.isFinite(value))
     throw usageError(`${name} must be a positive number, got ${value}`);
-}
-
-function round(value: number): number {
-  return Number(value.toPrecision(4));
 }

@@ -1,4 +1,5 @@
 import { inputError, usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { type GroundRecord, type ProcessingStep, withProcessing } from '../record/record.js';
 import { coversPeriod, type DesignSpectrum } from './design.js';
 import type { Spectrum, SpectrumCurve } from './spectrum.js';
@@ -53,7 +54,7 @@ export function scaleToTarget(
     const t = periodsS[i];
     if (!coversPeriod(target, t)) {
       throw inputError(
-        `the scaling range reaches T = ${Number(t.toPrecision(4))} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
+        `the scaling range reaches T = ${formatNumber(t)} s, outside the target (defined from ${target.minPeriodS} s to ${target.maxPeriodS} s)`,
       );
     }
     if (!(recordPsaG[i] > 0))
@@ -87,7 +88,7 @@ export function parseScaleRange(text: string, option = '--scale-range'): [number
 export function scaleStep(result: ScaleResult, target: DesignSpectrum): ProcessingStep {
   return {
     operation: 'scale',
-    description: `amplitude × ${Number(result.factor.toPrecision(6))} to match the ${target.code} target over ${Number(result.rangeS[0].toPrecision(4))}–${Number(result.rangeS[1].toPrecision(4))} s (least squares in ln PSA)`,
+    description: `amplitude × ${formatNumber(result.factor)} to match the ${target.code} target over ${formatNumber(result.rangeS[0])}–${formatNumber(result.rangeS[1])} s (least squares in ln PSA)`,
     parameters: {
       factor: result.factor,
       range_from_s: result.rangeS[0],
@@ -168,7 +169,7 @@ export function scaleOverlays(
   ];
   if (!fit.applied) {
     overlays.push({
-      label: `record × ${Number(fit.factor.toPrecision(4))} (ζ = ${Number((100 * fit.damping).toPrecision(6))}%, not applied)`,
+      label: `record × ${formatNumber(fit.factor)} (ζ = ${formatNumber(100 * fit.damping, 6)}%, not applied)`,
       periodsS: Array.from(periodsS),
       psaG: Array.from(recordPsaG, (value) => value * fit.factor),
     });

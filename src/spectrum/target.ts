@@ -1,4 +1,5 @@
 import { usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { GroundRecord } from '../record/record.js';
 import { asce722TwoPeriodSpectrum } from './asce722.js';
@@ -220,9 +221,7 @@ function targetCurve(spectrum: Spectrum, target: DesignSpectrum): SpectrumCurve 
   const wanted = target.damping ?? (spectrum.curves.length === 1 ? spectrum.curves[0].damping : 0.05);
   const curve = spectrum.curves.find((c) => Math.abs(c.damping - wanted) < 1e-12);
   if (curve === undefined) {
-    throw usageError(
-      `the target is for ${Number((100 * wanted).toPrecision(6))}% damping: include it in --damping`,
-    );
+    throw usageError(`the target is for ${formatNumber(100 * wanted, 6)}% damping: include it in --damping`);
   }
   return curve;
 }

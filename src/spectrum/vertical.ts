@@ -1,4 +1,5 @@
 import { usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import { checkPeriod, type DesignSpectrum } from './design.js';
 
 /** The editions of ASCE/SEI 7 whose §11.9 vertical spectrum is built here. */
@@ -104,7 +105,7 @@ export function verticalSpectrum(parameters: VerticalParameters): DesignSpectrum
   return {
     code: edition,
     vertical: true,
-    description: `${standard} §11.9 design vertical spectrum S_av (2/3 of S_aMv, §11.9.2), 5% damping: S_DS = ${sdsG} g, S_S = ${ssG} g, site class ${siteClass}, C_v = ${round(cv)} (Table 11.9-1)`,
+    description: `${standard} §11.9 design vertical spectrum S_av (2/3 of S_aMv, §11.9.2), 5% damping: S_DS = ${sdsG} g, S_S = ${ssG} g, site class ${siteClass}, C_v = ${formatNumber(cv)} (Table 11.9-1)`,
     parameters: { direction: 'vertical', sds_g: sdsG, ss_g: ssG, site_class: siteClass, cv },
     damping: 0.05,
     minPeriodS: 0,
@@ -117,8 +118,4 @@ export function verticalSpectrum(parameters: VerticalParameters): DesignSpectrum
       return plateau * (0.15 / periodS) ** 0.75;
     },
   };
-}
-
-function round(value: number): number {
-  return Number(value.toPrecision(4));
 }

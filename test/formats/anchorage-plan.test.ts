@@ -59,7 +59,7 @@ describe('anchorPlanInput', () => {
     expect(plan.subtitle[0]).toMatch(
       /^Horizontal force for the anchors 7500 lb \(ASCE 7-16 §13\.3\.1 code force\)/,
     );
-    expect(plan.subtitle[0]).toContain('at h_cg = 40 in; W_p = 1.000e+4 lb');
+    expect(plan.subtitle[0]).toContain('at h_cg = 40 in; W_p = 10000 lb');
     expect(plan.subtitle[1]).toContain('anchor rule projected');
     expect(plan.notes.join(' ')).toContain('capacities');
     const record = anchorPlanInput(

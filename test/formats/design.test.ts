@@ -42,7 +42,7 @@ describe('design outputs', () => {
   it('the terminal table starts with the caution and gives a row per period', () => {
     const lines = designTable(spectrum, periods, psa).trimEnd().split('\n');
     expect(lines[0].startsWith('! Preliminary')).toBe(true);
-    expect(lines.at(-1)).toBe(`${'10'.padStart(10)} ${'0.048000'.padStart(12)}`);
-    expect(lines.at(-4)).toBe(`${'0'.padStart(10)} ${'0.40000'.padStart(12)}`);
+    expect(lines.at(-1)).toBe(`${'10'.padStart(10)} ${'0.04800'.padStart(12)}`);
+    expect(lines.at(-4)).toBe(`${'0'.padStart(10)} ${'0.4000'.padStart(12)}`);
   });
 });

@@ -22,12 +22,13 @@ describe('labels', () => {
     expect(dampingLabel(0.125)).toBe('12.5%');
   });
 
-  it('writes a period to three significant digits, and PGA in g to four decimals', () => {
+  it('writes a period and PGA in g to four significant figures, trailing zeros dropped', () => {
     expect(formatPeriod(0)).toBe('0');
-    expect(formatPeriod(0.020137)).toBe('0.0201');
+    expect(formatPeriod(0.020137)).toBe('0.02014');
     expect(formatPeriod(1.4700001)).toBe('1.47');
     expect(formatPeriod(10)).toBe('10');
-    expect(pgaText(0.38 * 9.80665)).toBe('PGA 0.3800 g'); // standard gravity 9.80665 m/s² (CGPM 1901)
+    expect(pgaText(0.38 * 9.80665)).toBe('PGA 0.38 g'); // standard gravity 9.80665 m/s² (CGPM 1901)
+    expect(pgaText(0.123456 * 9.80665)).toBe('PGA 0.1235 g');
   });
 });
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { formatNumber } from '../../src/base/numbers.js';
 import { targetCsvNotes, targetTableLines, targetToJson } from '../../src/formats/target.js';
 import { asce716Spectrum } from '../../src/spectrum/design.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
@@ -34,10 +35,11 @@ describe('targetToJson', () => {
 });
 
 describe('targetCsvNotes', () => {
-  it('gives the target, the factor over its range and whether it was applied, in full precision', () => {
+  it('gives the target, the factor over its range and whether it was applied, to four figures', () => {
     const notes = targetCsvNotes(fit);
     expect(notes[0]).toBe(`target: ${target.description}`);
-    expect(notes[1]).toContain(`factor ${fit.factor} over 0.2-1 s (3 periods)`);
+    // 1.79963… to four significant figures, trailing zeros dropped (src/base/numbers.ts)
+    expect(notes[1]).toContain('factor 1.8 over 0.2–1 s (3 periods)');
     expect(notes[1].endsWith('; not applied')).toBe(true);
     expect(targetCsvNotes(applied)[1].endsWith('; applied')).toBe(true);
     expect(notes[2]).toBe(`scaling criterion: ${fit.criterion}`);
@@ -48,9 +50,9 @@ describe('targetTableLines', () => {
   it('gives the factor and the ratios to four significant digits, and the damping in percent', () => {
     const lines = targetTableLines(fit);
     expect(lines[0]).toBe(`target  ${target.description}`);
-    expect(lines[1]).toContain(`× ${fit.factor.toPrecision(4)} to match it at 5% over 0.2–1 s (3 periods)`);
+    expect(lines[1]).toContain('× 1.8 to match it at 5% over 0.2–1 s (3 periods)');
     expect(lines[1]).toContain('not applied (--apply-scale)');
     expect(targetTableLines(applied)[1]).toContain('applied to every number above');
-    expect(lines[2]).toContain(`mean ${fit.meanRatio.toPrecision(4)}`);
+    expect(lines[2]).toContain(`mean ${formatNumber(fit.meanRatio)}`);
   });
 });

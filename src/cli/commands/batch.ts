@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import { type Command, Option } from 'commander';
 import { CAUTION } from '../../base/caution.js';
 import { QuakesweepError, usageError } from '../../base/errors.js';
+import { formatNumber } from '../../base/numbers.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
 import { shardSlice } from '../../batch/shard.js';
@@ -122,7 +123,7 @@ export async function runBatch(
     }
     const check = analysis.check;
     if (check !== undefined)
-      result = `; suite check ${check.pass ? 'PASS' : 'FAIL'} (least mean/target ${Number(check.worstRatio.toPrecision(3))} at ${Number(check.worstPeriodS.toPrecision(3))} s, needs ${check.fraction}; preliminary)`;
+      result = `; suite check ${check.pass ? 'PASS' : 'FAIL'} (least mean/target ${formatNumber(check.worstRatio, 3)} at ${formatNumber(check.worstPeriodS, 3)} s, needs ${check.fraction}; preliminary)`;
   }
   outputs.write();
   process.stderr.write(`quakesweep: ${CAUTION}\n`);

@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../base/caution.js';
+import { formatSignificant } from '../../base/numbers.js';
 import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
 import { announceSuccess, count } from '../announce.js';
@@ -44,7 +45,7 @@ export async function runDemo({ out }: { out: string }): Promise<void> {
   }
   const scaling = spectra.scaling as { factor: number } | undefined;
   if (scaling)
-    lines.push('', `scale factor to the target at 5%: ${scaling.factor.toPrecision(4)} (not applied)`);
+    lines.push('', `scale factor to the target at 5%: ${formatSignificant(scaling.factor)} (not applied)`);
   lines.push(
     '',
     `${'equipment'.padEnd(52)} ${'code'.padEnd(8)} ${'horizontal'.padStart(12)} ${'max tension'.padStart(12)}`,
@@ -54,7 +55,7 @@ export async function runDemo({ out }: { out: string }): Promise<void> {
     const unit = a.force_unit as string;
     const code = String(a.horizontal.code ?? 'asce7-16');
     lines.push(
-      `${String(a.equipment.name).padEnd(52)} ${code.padEnd(8)} ${`${a.horizontal.force_for_anchors.toPrecision(4)} ${unit}`.padStart(12)} ${`${a.anchors.max_tension.toPrecision(4)} ${unit}`.padStart(12)}`,
+      `${String(a.equipment.name).padEnd(52)} ${code.padEnd(8)} ${`${formatSignificant(a.horizontal.force_for_anchors)} ${unit}`.padStart(12)} ${`${formatSignificant(a.anchors.max_tension)} ${unit}`.padStart(12)}`,
     );
   }
   lines.push('(anchor demands only: capacities are not checked)');

@@ -1,4 +1,5 @@
 import type { Command } from 'commander';
+import { formatNumber } from '../../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 } from '../../base/units.js';
 import { infoTable, infoToJson } from '../../formats/info.js';
 import { infoToCsv } from '../../formats/info-csv.js';
@@ -48,6 +49,6 @@ export async function runInfo(source: string, options: InfoCliOptions): Promise<
     csv: () => infoToCsv(json),
     table: () => infoTable(json),
     figures: () => recordFigures(record, measures, smoothing),
-    summary: `ground-motion measures of ${record.name}, ${count(record.accelMS2.length, 'sample')} at ${record.dtS} s`,
+    summary: `ground-motion measures of ${record.name}, ${count(record.accelMS2.length, 'sample')} at ${formatNumber(record.dtS, 6)} s`,
   });
 }

@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
+import { formatNumber } from '../../base/numbers.js';
 import { parseAccelerationUnit, parseLengthUnit } from '../../base/units.js';
 import { type RecordOutputOptions, recordToCsv, recordToJson, recordToText } from '../../formats/record.js';
 import { appliedSteps } from '../../record/reading.js';
@@ -86,7 +87,7 @@ export async function runRecord(source: string, options: RecordCommandCliOptions
     csv: () => recordToCsv(record, output),
     table: () => recordToText(record, output),
     figures: () => [],
-    summary: `record ${record.name}, ${count(record.accelMS2.length, 'sample')} at ${record.dtS} s, ${steps.length === 0 ? 'as read' : steps.join(', ')}, acceleration in ${output.accelUnit}`,
+    summary: `record ${record.name}, ${count(record.accelMS2.length, 'sample')} at ${formatNumber(record.dtS, 6)} s, ${steps.length === 0 ? 'as read' : steps.join(', ')}, acceleration in ${output.accelUnit}`,
   });
 }
 
