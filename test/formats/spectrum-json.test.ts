@@ -16,6 +16,17 @@ const record = createRecord({
 const spectrum = responseSpectrum(record, { periodsS: [0, 0.5], dampings: [0.05, 0.1] });
 
 describe('spectrumToJson', () => {
+  it('echoes a PGA read in g as it was given, not 0.42·g/g (0.41999999999999993)', () => {
+    // Invented: a record read in g whose peak is 0.42 g, stored as 0.42 × 9.80665 m/s².
+    const peaked = createRecord({
+      name: 'invented',
+      dtS: 0.01,
+      accelMS2: Float64Array.of(0, 0.42 * 9.80665, 0),
+    });
+    const json = spectrumToJson(responseSpectrum(peaked, { periodsS: [0], dampings: [0.05] }));
+    expect(json.record.pga_g).toBe(0.42);
+  });
+
   it('writes the contract: caution, record in g, method, periods and a curve per damping', () => {
     const json = spectrumToJson(spectrum);
     expect(Object.keys(json)).toEqual([

@@ -59,7 +59,7 @@ describe('quakesweep ductility', () => {
 
   it('--strength: the demand of the library, over the default grid without T = 0', async () => {
     const out = await json('ductility', ...record, '--strength', '2,4', '--damping', '2%');
-    expect(out.periods_s).toHaveLength(120);
+    expect(out.periods_s).toHaveLength(121);
     expect(out.periods_s[0]).toBe(0.01);
     const expected = asWritten(
       ductilityDemandToJson(
