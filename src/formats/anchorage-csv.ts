@@ -1,5 +1,6 @@
 import type { AnchorageAnalysis } from '../anchorage/anchorage.js';
 import { EQUIPMENT_UNITS } from '../anchorage/equipment.js';
+import { formatNumber } from '../base/numbers.js';
 import { csvRows } from './csv-rows.js';
 
 /**
@@ -11,8 +12,8 @@ export function anchorageToCsv(analysis: AnchorageAnalysis): string {
   const e = analysis.equipment;
   const { force, length, kNPerForce, mPerLength } = EQUIPMENT_UNITS[e.units];
   const f = (kN: number) => kN / kNPerForce;
-  // Notes are read by people: six significant figures there, every digit in the rows.
-  const shown = (kN: number) => String(Number(f(kN).toPrecision(6)));
+  // Notes are read by people: the rule of src/base/numbers.ts there, every digit in the rows.
+  const shown = (kN: number) => formatNumber(f(kN));
   const a = analysis.anchors;
   const notes = [
     `equipment: ${e.name}; units ${e.units} (${force}, ${length})`,

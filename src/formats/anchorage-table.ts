@@ -8,8 +8,8 @@ import { alignRight, assumptionLines, terminalText } from './layout.js';
 export function anchorTable(analysis: AnchorageAnalysis): string {
   const e = analysis.equipment;
   const system = EQUIPMENT_UNITS[e.units];
-  const f = (kN: number) => (kN / system.kNPerForce).toPrecision(4);
-  const l = (m: number) => Number((m / system.mPerLength).toPrecision(4)).toString();
+  const f = (kN: number) => formatSignificant(kN / system.kNPerForce);
+  const l = (m: number) => formatNumber(m / system.mPerLength);
   const unit = system.force;
   const out = wrapText(ANCHORAGE_SCOPE, 92, 'scope     ', '          ');
   out.push('', `equipment ${e.name} (${e.units}: ${unit}, ${system.length})`);
@@ -92,9 +92,9 @@ function asce722Lines(
   const f = e.factors;
   if (c.edition !== 'asce7-22' || f.code !== 'asce7-22') return [];
   const unit = EQUIPMENT_UNITS[e.units].force;
-  const v = (kN: number) => (kN / EQUIPMENT_UNITS[e.units].kNPerForce).toPrecision(4);
+  const v = (kN: number) => formatSignificant(kN / EQUIPMENT_UNITS[e.units].kNPerForce);
   const b = f.building;
-  const r = (x: number | null) => (x === null ? '—' : Number(x.toPrecision(4)).toString());
+  const r = (x: number | null) => (x === null ? '—' : formatNumber(x));
   const hf = c.heightFactor;
   const building =
     b === null

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { cautionLines } from '../../base/caution.js';
-import { formatSignificant } from '../../base/numbers.js';
+import { formatNumber, formatSignificant } from '../../base/numbers.js';
 import { OutputSet } from '../../output/output-set.js';
 import { assembleReport } from '../../report/assemble.js';
 import { announceSuccess, count } from '../announce.js';
@@ -40,7 +40,7 @@ export async function runDemo({ out }: { out: string }): Promise<void> {
       if (spectra.periods_s[i] > 0 && v > curve.psa_g[best]) best = i;
     });
     lines.push(
-      `${`${curve.damping * 100}%`.padEnd(9)} ${curve.psa_g[best].toPrecision(4).padStart(11)} ${Number(spectra.periods_s[best].toPrecision(3)).toString().padStart(8)}`,
+      `${`${curve.damping * 100}%`.padEnd(9)} ${formatSignificant(curve.psa_g[best]).padStart(11)} ${formatNumber(spectra.periods_s[best]).padStart(8)}`,
     );
   }
   const scaling = spectra.scaling as { factor: number } | undefined;
