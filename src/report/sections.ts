@@ -203,7 +203,7 @@ export function targetSection(t: TargetFit, tableNumber: number): string {
     definitionTable(`Table ${tableNumber}. Target and amplitude scaling`, [
       ['Target', t.description],
       ['Damping compared', `${formatNumber(t.damping * 100, 6)}%`],
-      ['Scale factor', formatNumber(t.factor, 5)],
+      ['Scale factor', formatNumber(t.factor)],
       ['Fitted over', `${span(t.rangeS[0], t.rangeS[1])} (${t.periodCount} grid periods)`],
       [
         'Scaled record / target',
