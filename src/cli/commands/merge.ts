@@ -3,15 +3,18 @@ import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { inputError, usageError } from '../../base/errors.js';
 import { sanitiseName } from '../../batch/names.js';
+import { analyseSuite } from '../../batch/suite.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { SHARD_FORMAT, type ShardJson, suiteJson } from '../../formats/suite.js';
+import { suiteToCsv } from '../../formats/suite-csv.js';
+import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
 import { OutputSet } from '../../output/output-set.js';
 import { announceSuccess } from '../announce.js';
 
 export function registerMerge(program: Command): void {
   program
     .command('merge')
-    .description('combine the outputs of `batch --shard` runs into the suite.json of a single run')
+    .description('combine the outputs of `batch --shard` runs into the suite files of a single run')
     .argument('<dirs...>', 'folders holding shard-i-of-N.json files (and the shards’ record folders)')
     .requiredOption(
       '--out <dir>',
@@ -23,7 +26,7 @@ export function registerMerge(program: Command): void {
 const SHARD_FILE = /^shard-\d+-of-\d+\.json$/;
 
 /** Read every shard summary, check that they make one whole run, copy the record folders, write suite.json. */
-export function runMerge(dirs: string[], { out }: { out: string }): void {
+export async function runMerge(dirs: string[], { out }: { out: string }): Promise<void> {
   const shards: { dir: string; file: string; json: ShardJson }[] = [];
   for (const dir of dirs) {
     if (!existsSync(dir)) throw usageError(`${dir}: no such folder`);
@@ -77,6 +80,26 @@ export function runMerge(dirs: string[], { out }: { out: string }): void {
   const records = shards.flatMap((shard) => shard.json.records);
   const failed = shards.flatMap((shard) => shard.json.failed);
   const suite = join(out, 'suite.json');
-  outputs.file(suite, formatJson(suiteJson(records, failed, first.settings))).write();
-  announceSuccess(`merged ${count} shards: ${records.length} records, ${failed.length} failed`, [suite]);
+  // The same suite files a single run without a target writes (the suite options are not taken with --shard).
+  const analysis = analyseSuite(records, first.settings);
+  outputs.file(suite, formatJson(suiteJson(records, failed, first.settings, analysis)));
+  outputs.file(join(out, 'suite.csv'), suiteToCsv(analysis, first.settings.periodsS));
+  const written = [suite, join(out, 'suite.csv')];
+  if (records.length > 0) {
+    const { suiteFigures } = await import('../../report/suite-outputs.js');
+    const figures = await suiteFigures({
+      analysis,
+      settings: first.settings,
+      failed,
+      methodDescription: METHOD_DESCRIPTIONS[first.settings.method],
+      commandLine: ['merge', ...dirs, '--out', out],
+      written: ['suite.json', 'suite.csv', 'suite.svg'],
+    });
+    for (const [name, text] of figures) {
+      outputs.file(join(out, name), text);
+      written.push(join(out, name));
+    }
+  }
+  outputs.write();
+  announceSuccess(`merged ${count} shards: ${records.length} records, ${failed.length} failed`, written);
 }

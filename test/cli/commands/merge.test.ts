@@ -35,6 +35,10 @@ describe('quakesweep merge', () => {
     expect(merged.code).toBe(0);
     expect(merged.stderr).toMatch(/merged 2 shards: 3 records, 0 failed/);
     expect(read('merged', 'suite.json')).toBe(read('whole', 'suite.json'));
+    // The suite table and figure too (the report differs only in the command line it quotes).
+    expect(read('merged', 'suite.csv')).toBe(read('whole', 'suite.csv'));
+    expect(read('merged', 'suite.svg')).toBe(read('whole', 'suite.svg'));
+    expect(read('merged', 'suite.html')).toContain('quakesweep merge s1 s2 --out merged');
     for (const name of ['a', 'b', 'c'])
       expect(read('merged', name, 'spectra.json')).toBe(read('whole', name, 'spectra.json'));
   });
