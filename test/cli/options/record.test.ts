@@ -225,7 +225,11 @@ describe('standard input is bounded', () => {
     await expect(read()).rejects.toThrow(/^more than 5000 bytes on standard input/);
     expect(seen).toEqual([1000, 1000, 1000, 1000, 1000]);
     const text = [];
-    for await (const chunk of boundedStdin(['0.1\n', '0.2\n'], 8)) text.push(chunk);
+    async function* two() {
+      yield '0.1\n';
+      yield '0.2\n';
+    }
+    for await (const chunk of boundedStdin(two(), 8)) text.push(chunk);
     expect(text).toEqual(['0.1\n', '0.2\n']);
   });
 });
