@@ -4,11 +4,18 @@
  * value in one fixed shape (decimals and exponent digits), a last line with no line break whose
  * last value is printed shorter than the values in its place before is taken as cut: common
  * practice for files written with a fixed format. Free formats (`0.5`, `0.25`) never agree over the
- * lines looked at, so they are never judged.
+ * lines looked at, and shortest round-trip output has too many decimals, so neither is judged.
  */
 
 /** Complete lines before the last that must agree on each value's shape. */
-export const LINES_COMPARED = 3;
+export const LINES_COMPARED = 8;
+
+/**
+ * Most decimals of a shape judged fixed: printf-style formats print up to about ten, while the
+ * shortest round-trip form of a double (JavaScript's String, Python's repr) prints 15 to 17 and
+ * sometimes fewer by chance, which must never look cut.
+ */
+const MAX_FIXED_DECIMALS = 12;
 
 const SHAPE = /^[+-]?\d*(?:\.(\d*))?(?:[eEdD]([+-]?\d+))?$/;
 
@@ -43,7 +50,7 @@ export function cutValue(before: readonly string[], last: string): string | unde
   const place = lastValues.length - 1;
   if (place < 0 || rows.some((row) => row.length <= place)) return undefined;
   const fixed = shapeOf(rows[0][place]);
-  if (fixed === undefined) return undefined;
+  if (fixed === undefined || fixed.decimals > MAX_FIXED_DECIMALS) return undefined;
   for (const row of rows) {
     const shape = shapeOf(row[place]);
     if (
@@ -61,8 +68,11 @@ export function cutValue(before: readonly string[], last: string): string | unde
   return shorter ? lastValues[place] : undefined;
 }
 
-/** Up to `count` complete lines of `text` that end before `end` (just past a line break), oldest first. */
-export function linesBefore(text: string, end: number, count: number): string[] {
+/**
+ * Up to `count` complete lines of `text` that end before `end` (just past a line break), oldest
+ * first; the text's first line only when `startsLine` (it did not begin in an earlier piece).
+ */
+export function linesBefore(text: string, end: number, count: number, startsLine = false): string[] {
   const lines: string[] = [];
   let stop = end;
   while (lines.length < count && stop > 0) {
@@ -74,7 +84,7 @@ export function linesBefore(text: string, end: number, count: number): string[] 
       if (c === 10 || c === 13) break;
       start--;
     }
-    if (start === 0) break; // may have begun in an earlier piece of text: not taken
+    if (start === 0 && !startsLine) break; // may have begun in an earlier piece of text: not taken
     const line = text.slice(start, lineEnd);
     if (line.trim() !== '') lines.unshift(line);
     stop = start;

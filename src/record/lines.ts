@@ -40,6 +40,7 @@ export class LineSplitter {
     const length = text.length;
     if (length === 0) return;
     let from = 0;
+    const startsLine = this.rest === '';
     if (this.afterCarriageReturn) {
       this.afterCarriageReturn = false;
       if (text.charCodeAt(from) === 10) from++;
@@ -85,7 +86,7 @@ export class LineSplitter {
     }
     this.reader.textDone();
     if (from > 0) {
-      const lines = linesBefore(text, from, LINES_COMPARED);
+      const lines = linesBefore(text, from, LINES_COMPARED, startsLine);
       this.before = lines.length < LINES_COMPARED ? [...this.before, ...lines].slice(-LINES_COMPARED) : lines;
     }
     if (from < length) {
