@@ -1,4 +1,4 @@
-import { existsSync, readdirSync, statSync } from 'node:fs';
+import { existsSync, readdirSync, realpathSync, statSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 
 /** Whether a path names a pattern: `*` or `?` in its last segment (no `/` or `\` after it). */
@@ -21,9 +21,16 @@ export function patternRegExp(pattern: string): RegExp {
 /**
  * Expand the arguments of `batch`: a plain path is taken as is (the run reports a missing file); a
  * pattern is matched against the files of its literal folder (no recursion, no `**`, no brackets).
- * `files`: every file named or matched, once each, sorted; `unmatched`: patterns that matched none.
+ * `files`: every file named or matched, once each, sorted; `unmatched`: patterns that matched none;
+ * `duplicates`: spellings dropped because they name a file already taken (the same real path, as
+ * `s//x.csv` and `s/x.csv`, `../s/x.csv`, a link, or a pattern and the name it matched), each with
+ * the spelling kept (the first in sorted order).
  */
-export function expandPatterns(args: readonly string[]): { files: string[]; unmatched: string[] } {
+export function expandPatterns(args: readonly string[]): {
+  files: string[];
+  unmatched: string[];
+  duplicates: { dropped: string; kept: string }[];
+} {
   const found = new Set<string>();
   const unmatched: string[] = [];
   for (const arg of args) {
@@ -44,7 +51,34 @@ export function expandPatterns(args: readonly string[]): { files: string[]; unma
     if (matches.length === 0) unmatched.push(arg);
     for (const path of matches) found.add(path);
   }
-  return { files: [...found].sort(compareText), unmatched };
+  return { ...uniqueByRealPath([...found].sort(compareText)), unmatched };
+}
+
+/** Keep the first of the paths that resolve to one real file; a path that does not resolve stays. */
+function uniqueByRealPath(sorted: readonly string[]): {
+  files: string[];
+  duplicates: { dropped: string; kept: string }[];
+} {
+  const byReal = new Map<string, string>();
+  const files: string[] = [];
+  const duplicates: { dropped: string; kept: string }[] = [];
+  for (const path of sorted) {
+    let real: string;
+    try {
+      real = realpathSync(path);
+    } catch {
+      files.push(path); // missing or unreadable: the run reports it
+      continue;
+    }
+    const kept = byReal.get(real);
+    if (kept !== undefined) {
+      duplicates.push({ dropped: path, kept });
+      continue;
+    }
+    byReal.set(real, path);
+    files.push(path);
+  }
+  return { files, duplicates };
 }
 
 /** Code-unit order: the same on every machine and locale. */

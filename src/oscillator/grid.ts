@@ -147,6 +147,25 @@ function tooShort(text: string, periodS: number): string {
   return `--periods '${text}': ${periodS} s is shorter than ${MIN_PERIOD_S} s; use 0 for a rigid oscillator`;
 }
 
+/** Largest damping ratio accepted (10000%): the largest checked against the exact reference. */
+export const MAX_DAMPING_RATIO = 100;
+
+/**
+ * Largest damping ratio of the full accuracy campaign (1000%, docs/methods-and-verification.md):
+ * above it only a subset was checked, and every output warns.
+ */
+export const CAMPAIGN_DAMPING_RATIO = 10;
+
+/** The warning for dampings above CAMPAIGN_DAMPING_RATIO, if any. */
+export function dampingWarnings(dampings: ArrayLike<number>): string[] {
+  const heavy = Array.from(dampings).filter((z) => z > CAMPAIGN_DAMPING_RATIO);
+  if (heavy.length === 0) return [];
+  const list = heavy.map((z) => `${Number((z * 100).toPrecision(6))}%`).join(', ');
+  return [
+    `damping ${list} is above ${CAMPAIGN_DAMPING_RATIO * 100}%: the 0.5% accuracy rule was measured on every method up to ${CAMPAIGN_DAMPING_RATIO * 100}% and only spot-checked beyond; check these values independently`,
+  ];
+}
+
 /**
  * Parse damping ratios, comma separated: fractions (`0.05`) or percentages (`5%`). A bare number
  * above 1 is refused (almost always a percentage without `%`); overdamped ones take a `%`.
@@ -155,15 +174,21 @@ export function parseDampings(text: string): Float64Array {
   const values = text.split(',').map((raw) => {
     const part = raw.trim();
     const percent = part.endsWith('%');
-    const value = Number(percent ? part.slice(0, -1).trim() : part);
-    if (part === '' || !Number.isFinite(value)) throw usageError(`--damping: '${raw}' is not a number`);
+    const number = percent ? part.slice(0, -1).trim() : part;
+    const value = Number(number);
+    if (number === '' || !Number.isFinite(value)) throw usageError(`--damping: '${raw}' is not a number`);
     if (value < 0) throw usageError(`--damping: ${part} is negative; damping ratios are ≥ 0`);
     if (!percent && value > 1) {
       throw usageError(
         `--damping: ${part} is above 1; write ${part}% for a percentage, or a fraction such as 0.05`,
       );
     }
-    return percent ? value / 100 : value;
+    const ratio = percent ? value / 100 : value;
+    if (ratio > MAX_DAMPING_RATIO)
+      throw usageError(
+        `--damping: ${part} is above ${MAX_DAMPING_RATIO * 100}%, the largest damping the accuracy rule was measured at`,
+      );
+    return ratio;
   });
   const twice = values.find((value, i) => values.indexOf(value) !== i);
   if (twice !== undefined) throw usageError(`--damping: ${twice} appears twice`);

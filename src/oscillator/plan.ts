@@ -71,7 +71,42 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
       groups.push(bucket.slice(start, start + GROUP_WIDTH));
     }
   }
-  return { method, prewarp, dtS, periodsS, dampings, bounds, groups };
+  const plan = { method, prewarp, dtS, periodsS, dampings, bounds, groups };
+  checkCoefficients(plan);
+  return plan;
+}
+
+/**
+ * Longest natural period over executed step the coefficients keep their precision for: the
+ * pre-warped recurrences lose digits as T/h grows (measured: all of them past about 6e8, where the
+ * WebAssembly kernel's f64x2 max would turn the NaN that follows into 0); a factor of 6 kept.
+ */
+export const MAX_PERIOD_STEPS = 1e8;
+
+/** Largest damping ratio a sweep runs: the largest measured against the exact reference (ζ = 100). */
+export const MAX_DAMPING = 100;
+
+/**
+ * Refuse, before any kernel runs, a plan whose coefficients are not finite or have lost precision:
+ * both kernels then step only rows that are numbers (the SIMD kernel's max discards NaN).
+ */
+function checkCoefficients(plan: SweepPlan): void {
+  const row = new Float64Array(COEFFICIENT_STRIDE);
+  for (const group of plan.groups) {
+    for (const oscillator of group) {
+      const stepS = plan.dtS / oscillator.substeps;
+      const at = `T = ${oscillator.periodS} s, ζ = ${oscillator.damping}`;
+      if (oscillator.periodS / stepS > MAX_PERIOD_STEPS)
+        throw inputError(
+          `${at}: the period is ${(oscillator.periodS / stepS).toExponential(1)} steps of ${stepS} s, more than ${MAX_PERIOD_STEPS.toExponential(0)}, beyond which the step coefficients lose their precision; use periods up to ${Number((MAX_PERIOD_STEPS * stepS).toPrecision(3))} s for this record`,
+        );
+      packCoefficients(row, 0, oscillator, plan.method, stepS, plan.bounds, plan.prewarp);
+      if (!row.every(Number.isFinite))
+        throw inputError(
+          `${at}: the step coefficients are not finite numbers (the sweep would give no peaks)`,
+        );
+    }
+  }
 }
 
 /** Oscillator-steps the whole plan executes over a record of `samples` values. */
@@ -119,6 +154,11 @@ export function checkSweep(
   if (period !== undefined) throw inputError(`periods must be finite and ≥ 0 s, got ${period}`);
   const damping = dampings.find((z) => !(z >= 0) || !Number.isFinite(z));
   if (damping !== undefined) throw inputError(`damping ratios must be finite and ≥ 0, got ${damping}`);
+  const heavy = dampings.find((z) => z > MAX_DAMPING);
+  if (heavy !== undefined)
+    throw inputError(
+      `damping ratio ${heavy} (${heavy * 100}%) is above ${MAX_DAMPING} (${MAX_DAMPING * 100}%), the largest the accuracy rule was measured at`,
+    );
 }
 
 /**

@@ -109,8 +109,25 @@ export function padDurationS(spec: FilterSpec): number {
   return (1.5 * spec.order) / lowest;
 }
 
+/**
+ * The lowest corner a record of `durationS` may be filtered at: a tenth of 1/duration. Below it the
+ * record holds less than a tenth of a cycle of the corner, so the filter removes nothing it can
+ * tell from the baseline, while its zero pads (padDurationS) grow past a hundred record lengths.
+ */
+export function lowestCornerHz(durationS: number): number {
+  return 1 / (LOWEST_CORNER_CYCLES * durationS);
+}
+
+const LOWEST_CORNER_CYCLES = 10;
+
 export function zeroPhaseFilter(values: Float64Array, dtS: number, spec: FilterSpec): Float64Array {
   const sections = filterSections(spec, dtS);
+  const durationS = (values.length - 1) * dtS;
+  const lowest = spec.kind === 'lowpass' ? spec.highCornerHz! : spec.lowCornerHz!;
+  if (lowest < lowestCornerHz(durationS))
+    throw usageError(
+      `the ${spec.kind === 'lowpass' ? 'low-pass' : 'high-pass'} corner ${lowest} Hz is below ${Number(lowestCornerHz(durationS).toPrecision(3))} Hz, a tenth of 1/duration of this ${Number(durationS.toPrecision(4))} s record: it cannot act on it`,
+    );
   const pad = Math.ceil(padDurationS(spec) / dtS);
   const work = new Float64Array(values.length + 2 * pad);
   work.set(values, pad);

@@ -1,4 +1,6 @@
-import { lineFields, longLineError } from './fields.js';
+import { inputError } from '../base/errors.js';
+import { cutValue, LINES_COMPARED, linesBefore } from './cut-line.js';
+import { lineFields, longLineError, quote } from './fields.js';
 import { fixedFields } from './fixed.js';
 import { NUMBER } from './number.js';
 import type { RecordReader } from './reader.js';
@@ -19,6 +21,8 @@ export class LineSplitter {
   private line = 1;
   /** The last text ended with `\r`: a `\n` first in the next one is the second half of `\r\n`. */
   private afterCarriageReturn = false;
+  /** The last few complete lines before `rest`: the shapes its values are compared with at the end. */
+  private before: string[] = [];
 
   /** `head`: the text's first piece, which chooses the reader's separator (`partial`: it is cut short). */
   constructor(reader: RecordReader, head: string, partial: boolean) {
@@ -36,6 +40,7 @@ export class LineSplitter {
     const length = text.length;
     if (length === 0) return;
     let from = 0;
+    const startsLine = this.rest === '';
     if (this.afterCarriageReturn) {
       this.afterCarriageReturn = false;
       if (text.charCodeAt(from) === 10) from++;
@@ -80,6 +85,10 @@ export class LineSplitter {
       this.rest = '';
     }
     this.reader.textDone();
+    if (from > 0) {
+      const lines = linesBefore(text, from, LINES_COMPARED, startsLine);
+      this.before = lines.length < LINES_COMPARED ? [...this.before, ...lines].slice(-LINES_COMPARED) : lines;
+    }
     if (from < length) {
       this.rest += from === 0 ? text : text.slice(from);
       if (this.rest.length > MAX_LINE_CHARACTERS) throw longLineError(this.reader.options.source, this.line);
@@ -90,7 +99,15 @@ export class LineSplitter {
   end(): void {
     if (this.rest === '') return;
     this.reader.endedWithoutBreak = true;
+    const number = this.line;
+    const data = !this.reader.inHeader;
     this.take(this.rest);
+    const cut = data ? cutValue(this.before, this.rest) : undefined;
+    if (cut !== undefined)
+      throw inputError(
+        `the file ends here with no line break, on ${quote(cut)}, printed shorter than the values above it: it looks cut short (still being written or copied?); read it once it is whole`,
+        { file: this.reader.options.source, line: number },
+      );
   }
 
   private take(line: string): void {

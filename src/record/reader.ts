@@ -31,6 +31,7 @@ const MAX_ABS_ACCELERATION_MS2 = MAX_ABS_ACCELERATION_G * STANDARD_GRAVITY_MS2;
 /** A letter of any script, which a header line has and a row of numbers has not. */
 const LETTER = /\p{L}/u;
 const DIGIT = /\d/;
+const NUMBER_START = /^[+-]?\.?\d/;
 /** Only what numbers are written with: a field of these is a malformed number, not a word. */
 const NUMERIC_CHARACTERS = /^[\d.,eEdD+-]+$/;
 /** Control characters and the replacement character that stands for bytes that are not UTF-8. */
@@ -152,7 +153,7 @@ export class RecordReader {
       fields = split;
     }
     if (this.seen === undefined) {
-      if (this.isHeader(fields)) {
+      if (this.isHeader(fields, line)) {
         this.header(fields, line);
         return;
       }
@@ -290,8 +291,10 @@ export class RecordReader {
    * A header line: not all numbers, and some letters or no digits at all (so `0\t0,5` is refused
    * as data, not skipped, while `-----` and `time,accel` are skipped).
    */
-  private isHeader(fields: string[]): boolean {
+  private isHeader(fields: string[], line: number): boolean {
     if (fields.every((f) => this.isNumber(f))) return false;
+    // A row of numbers with a letter slipped in (`0,0x10`, `0.1O`) is a bad row, not a header: refused.
+    if (this.keyLine !== line && fields.every((f) => this.isNumber(f) || slippedNumber(f))) return false;
     // The E of `1.0E-022.0E-02` (values touching without a sign) is no word: that is a row, refused.
     const word = (f: string) => LETTER.test(f) && !NUMERIC_CHARACTERS.test(f);
     return fields.some(word) || !fields.some((f) => DIGIT.test(f));
@@ -391,6 +394,11 @@ export class RecordReader {
       valueColumn: this.valueColumn,
     });
   }
+}
+
+/** A field that begins as a number and holds a letter: `0x10`, `0.1O`, `1.5e-3s`. */
+function slippedNumber(field: string): boolean {
+  return NUMBER_START.test(field) && LETTER.test(field);
 }
 
 function columnCount(columns: number): string {

@@ -179,7 +179,7 @@ export class ReadingSources {
     return { ...record, processing: [step, ...warnings.map(warningStep)] };
   }
 
-  /** A header's point count must be what was read, unless the file is plainly cut short (a warning then). */
+  /** A header's point count must be what was read; fewer at an end with no line break is a file cut short. */
   private checkPoints(count: number, endedWithoutBreak: boolean): void {
     const points = this.keys.points;
     if (points === undefined || points.value === count) return;
@@ -195,8 +195,9 @@ export class ReadingSources {
         `${stated} but the file holds ${count} values: is the layout right, or is the file incomplete?`,
         place,
       );
-    this.warnings.push(
-      `${stated} (line ${points.line}) but the file ends after ${count}, on a line with no line break: it looks cut short; the ${count} values read are used`,
+    throw inputError(
+      `${stated} but the file ends after ${count}, on a line with no line break: it looks cut short (still being written or copied?); read it once it is whole`,
+      place,
     );
   }
 }

@@ -10,6 +10,9 @@ import type { SweepKernel, SweepOptions } from '../oscillator/sweep.js';
 import type { GroundRecord } from '../record/record.js';
 import { recordInfo, type SpectrumRecordInfo } from './spectrum.js';
 
+/** Finest rotation step, degrees: 18,000 angles, already far past any change in RotD50 or RotD100. */
+export const MIN_ANGLE_STEP_DEG = 0.01;
+
 /** Two-component spectra of a pair of horizontal records at one damping ratio, m/s², by period. */
 export interface RotDCurve {
   damping: number;
@@ -82,9 +85,16 @@ export function prepareRotD(first: GroundRecord, second: GroundRecord, options: 
   const periodsS = Float64Array.from(options.periodsS);
   const dampings = Float64Array.from(options.dampings);
   const angleStepDeg = options.angleStepDeg ?? 1;
+  // 0.01° makes 18,000 angles, each a sweep of the pair; finer changes RotD50 by less than rounding.
   const angles = Math.round(180 / angleStepDeg);
-  if (!(angleStepDeg > 0) || angleStepDeg > 1 || Math.abs(angles * angleStepDeg - 180) > 1e-9) {
-    throw usageError(`angle step ${angleStepDeg}°: use at most 1° and a divisor of 180° (1, 0.5, 0.25, …)`);
+  if (
+    !(angleStepDeg >= MIN_ANGLE_STEP_DEG) ||
+    angleStepDeg > 1 ||
+    Math.abs(angles * angleStepDeg - 180) > 1e-9
+  ) {
+    throw usageError(
+      `angle step ${angleStepDeg}°: use a divisor of 180° from ${MIN_ANGLE_STEP_DEG}° to 1° (1, 0.5, 0.25, …)`,
+    );
   }
   if (Math.abs(first.dtS - second.dtS) > 1e-9 * first.dtS) {
     throw inputError(

@@ -57,7 +57,7 @@ describe('parseAccelerationUnit', () => {
       /^unknown acceleration unit 'furlong\/s2'; accepted: g,/,
     );
     // Keys every object has are no units (a plain `in` test would take them).
-    for (const name of ['toString', 'constructor', 's^2']) {
+    for (const name of ['toString', 'constructor', '__proto__', 'hasOwnProperty', 's^2']) {
       expect(() => parseAccelerationUnit(name)).toThrow(/unknown acceleration unit/);
     }
   });
@@ -68,7 +68,8 @@ describe('parseLengthUnit', () => {
     expect(parseLengthUnit(' MM ')).toBe('mm');
     expect(parseLengthUnit('ft')).toBe('ft');
     expect(() => parseLengthUnit('yd')).toThrow("unknown length unit 'yd'; accepted: m, cm, mm, in, ft");
-    expect(() => parseLengthUnit('constructor')).toThrow(/unknown length unit/);
+    for (const name of ['constructor', '__proto__'])
+      expect(() => parseLengthUnit(name)).toThrow(/unknown length unit/);
   });
 });
 

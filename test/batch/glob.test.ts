@@ -1,4 +1,4 @@
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -53,7 +53,28 @@ describe('expandPatterns', () => {
 
   it('lists the patterns that matched nothing, and a missing folder matches nothing', () => {
     const none = [join(folder, '*.json'), join(folder, 'nowhere', '*.txt')];
-    expect(expandPatterns(none)).toEqual({ files: [], unmatched: none });
+    expect(expandPatterns(none)).toEqual({ files: [], unmatched: none, duplicates: [] });
+  });
+
+  it('takes one file once however it is spelled: //, .., a link, a pattern and its name', () => {
+    const link = join(folder, 'link-to-b.txt');
+    symlinkSync(join(folder, 'b.txt'), link);
+    try {
+      const spellings = [
+        `${folder}//a.txt`,
+        `${folder}/sub.txt/../a.txt`, // join would tidy these two spellings away
+        join(folder, 'a*.txt'),
+        link,
+        join(folder, 'b.txt'),
+      ];
+      const { files, duplicates } = expandPatterns(spellings);
+      expect(files.filter((f) => f.endsWith('a.txt') && !f.endsWith('1.txt'))).toHaveLength(1);
+      expect(files.filter((f) => f.endsWith('b.txt'))).toHaveLength(1);
+      expect(files).toContain(join(folder, 'a1.txt'));
+      expect(duplicates.map((d) => d.dropped).sort(compareText)).toHaveLength(3);
+    } finally {
+      rmSync(link);
+    }
   });
 
   it('sorts by code unit, the same in every locale', () => {

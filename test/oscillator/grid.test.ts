@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  dampingWarnings,
   defaultPeriodsS,
   logSpaced,
   MAX_FREQUENCY_HZ,
@@ -120,5 +121,20 @@ describe('frequency grids', () => {
     ['2,1,2', '--frequencies: 2 Hz appears twice'],
   ])('refuses %s', (text, message) => {
     expect(() => parseFrequencies(text)).toThrow(message);
+  });
+});
+
+describe('damping limits', () => {
+  // The measured range of docs/methods-and-verification.md: the campaign to ζ = 10, a subset to 100.
+  it('refuses a bare % and damping above 10000%', () => {
+    expect(() => parseDampings('%')).toThrow("--damping: '%' is not a number");
+    expect(() => parseDampings('5%, %')).toThrow("' %' is not a number");
+    expect(() => parseDampings('1e7%')).toThrow(/above 10000%/);
+    expect(parseDampings('10000%')[0]).toBe(100);
+  });
+
+  it('warns above 1000%, and not at it', () => {
+    expect(dampingWarnings(parseDampings('5%,1000%'))).toEqual([]);
+    expect(dampingWarnings(parseDampings('5%,2000%'))[0]).toMatch(/^damping 2000% is above 1000%/);
   });
 });

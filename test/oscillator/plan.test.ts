@@ -5,6 +5,7 @@ import {
   planSweep,
   sweepThreads,
 } from '../../src/oscillator/plan.js';
+import { sweepOscillators } from '../../src/oscillator/sweep.js';
 import { synthesizeRecord } from '../../src/record/synth.js';
 
 // 10,001 samples: 2,400 oscillators make 24 million oscillator-steps, above the rule's 20 million.
@@ -39,5 +40,29 @@ describe('sweepThreads: the one thread rule of the CLI and the library', () => {
   it('takes a number of threads as given', () => {
     expect(sweepThreads(small, record.accelMS2.length, 3, 8)).toBe(3);
     expect(sweepThreads(large, record.accelMS2.length, 1, 8)).toBe(1);
+  });
+});
+
+describe('coefficients checked before the sweep', () => {
+  // The cases: T = 1e7 s at 0.01 s (T/h = 1e9) gave 0 from the SIMD kernel and NaN from the
+  // TypeScript one; ζ = 1e5 made the sub-step count explode. Both are refused, for both kernels.
+  const short = synthesizeRecord({ seed: 3, dtS: 0.01, durationS: 2 });
+  it('refuses a period too many steps long for the coefficients’ precision, on either kernel', () => {
+    for (const kernel of ['js', 'wasm'] as const)
+      expect(() =>
+        sweepOscillators(short.accelMS2, short.dtS, { periodsS: [1, 1e7], dampings: [0.05], kernel }),
+      ).toThrow(/T = 10000000 s.*lose their precision/);
+  });
+
+  it('refuses damping above the largest measured, and takes it up to there', () => {
+    expect(() => planSweep(short.accelMS2, short.dtS, { periodsS: [1], dampings: [1e5] })).toThrow(
+      /above 100 \(10000%\)/,
+    );
+    const peaks = sweepOscillators(short.accelMS2, short.dtS, {
+      periodsS: [1],
+      dampings: [100],
+      kernel: 'js',
+    });
+    expect(Number.isFinite(peaks.sdM[0]) && peaks.sdM[0] > 0).toBe(true);
   });
 });

@@ -126,3 +126,17 @@ describe('filterSections refuses what would be silently wrong', () => {
     );
   });
 });
+
+describe('corners the record can resolve', () => {
+  // A corner below a tenth of 1/duration cannot act on the record, and its zero pads grow past a
+  // hundred record lengths (highpass:2e-6 on a 40 s record once asked for 4.7 GB).
+  it('refuses a high-pass far below 1/duration, in one line, and takes one at a tenth of it', () => {
+    const values = new Float64Array(4001).map((_, i) => Math.sin(i / 10)); // invented: 40 s at 0.01 s
+    expect(() => zeroPhaseFilter(values, 0.01, { kind: 'highpass', order: 4, lowCornerHz: 2e-6 })).toThrow(
+      /^the high-pass corner 0\.000002 Hz is below 0\.0025 Hz, a tenth of 1\/duration of this 40 s record/,
+    );
+    expect(zeroPhaseFilter(values, 0.01, { kind: 'highpass', order: 4, lowCornerHz: 0.0025 }).length).toBe(
+      4001,
+    );
+  });
+});

@@ -230,3 +230,23 @@ describe('runs of rows from the row scanner', () => {
     expect(alone.accelMS2[1]).toBe(Number((Math.sin(1 / 9) / 3).toFixed(7)) * G);
   });
 });
+
+describe('a first row with a letter slipped into a number', () => {
+  // Invented rows. A header line is a line of words; a row of numbers with one bad field is a bad
+  // row, refused with its line (common practice: never drop data silently).
+  it('refuses `0,0x10` and `0.1O` naming the line, not dropping them as a header', () => {
+    const csv = refusal(() =>
+      readRecordText('0,0x10\n0.01,0.2\n0.02,0.3\n', { units: 'g', source: 'x.csv' }),
+    );
+    expect(csv.text).toBe("x.csv:1: '0x10' is not a number");
+    const one = refusal(() => readRecordText('0.1O\n0.2\n0.3\n', { units: 'g', dtS: 0.01, source: 'y.txt' }));
+    expect(one.text).toBe("y.txt:1: '0.1O' is not a number");
+  });
+
+  it('still skips real text headers: names, keys with numbers, a count then a word', () => {
+    for (const head of ['time_s,accel_g', 'NPTS= 3 DT= 0.01 SEC', '3 POINTS', 'acc (g) 2nd floor']) {
+      const r = readRecordText(`${head}\n0.1\n0.2\n0.3\n`, { units: 'g', dtS: 0.01, source: 'z.txt' });
+      expect(r.accelMS2.length).toBe(3);
+    }
+  });
+});

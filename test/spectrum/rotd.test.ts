@@ -110,6 +110,10 @@ describe('RotD50, RotD100 and geometric mean (Boore 2010)', () => {
     expect(() => rotDSpectra(one, two, { periodsS, dampings: [0.05], angleStepDeg: 0.7 })).toThrow(
       /angle step/,
     );
+    // 1e-5° divides 180° but means 18 million angles (once minutes of work): refused below 0.01°.
+    expect(() => rotDSpectra(one, two, { periodsS, dampings: [0.05], angleStepDeg: 1e-5 })).toThrow(
+      /angle step 0\.00001°: use a divisor of 180° from 0\.01° to 1°/,
+    );
   });
 });
 

@@ -77,8 +77,10 @@ export async function runBatch(
   commandLine: readonly string[] = ['batch', ...args],
 ): Promise<void> {
   const { out, settings, threads, shard, options: suite, targetFiles } = batchPlan(options);
-  const { files: all, unmatched } = expandPatterns(args);
+  const { files: all, unmatched, duplicates } = expandPatterns(args);
   if (all.length === 0) throw usageError(`no file matches ${unmatched.join(', ')}`);
+  for (const { dropped, kept } of duplicates)
+    process.stderr.write(`quakesweep: ${dropped} is the same file as ${kept}; swept once\n`);
   const names = assignNames(all);
   const mine = shard === null ? all : shardSlice(all, shard);
   const inputs = [...all, ...targetFiles];

@@ -3,6 +3,7 @@ import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { inputError, usageError } from '../../base/errors.js';
 import { sanitiseName } from '../../batch/names.js';
+import { checkShard, spectraDisagreement } from '../../batch/shard-check.js';
 import { analyseSuite } from '../../batch/suite.js';
 import { formatJson } from '../../formats/spectrum-json.js';
 import { SHARD_FORMAT, type ShardJson, suiteJson } from '../../formats/suite.js';
@@ -41,6 +42,7 @@ export async function runMerge(dirs: string[], { out }: { out: string }): Promis
       }
       if (json?.format !== SHARD_FORMAT)
         throw inputError(`not a shard summary (format ${SHARD_FORMAT})`, { file });
+      checkShard(json, file);
       shards.push({ dir, file, json });
     }
   }
@@ -67,14 +69,37 @@ export async function runMerge(dirs: string[], { out }: { out: string }): Promis
     throw usageError(`shard${missing.length > 1 ? 's' : ''} ${missing.join(', ')} of ${count} missing`);
 
   const outputs = new OutputSet().folder(out);
+  const names = new Map<string, string>();
+  const files = new Map<string, string>();
   for (const { dir, file, json } of shards) {
     const sameFolder = existsSync(out) && realpathSync(dir) === realpathSync(resolve(out));
-    for (const { name } of json.records) {
+    for (const record of json.records) {
+      const { name } = record;
       if (typeof name !== 'string' || sanitiseName(name) !== name) {
         throw inputError(`record name ${JSON.stringify(name)} is not a safe folder name`, { file });
       }
-      if (!sameFolder)
-        outputs.folder(join(out, name), [['spectra.json', readFileSync(join(dir, name, 'spectra.json'))]]);
+      const twice = names.get(name) ?? files.get(record.file);
+      if (twice !== undefined)
+        throw inputError(
+          `record ${name} (${record.file}) is also in ${twice}: a record belongs to one shard`,
+          {
+            file,
+          },
+        );
+      names.set(name, file);
+      files.set(record.file, file);
+      const copied = join(dir, name, 'spectra.json');
+      const bytes = readFileSync(copied);
+      let spectra: unknown;
+      try {
+        spectra = JSON.parse(bytes.toString('utf8'));
+      } catch {
+        throw inputError('not valid JSON; expected the spectra of a record of the batch', { file: copied });
+      }
+      const problem = spectraDisagreement(record, first.settings, spectra);
+      if (problem !== undefined)
+        throw inputError(`${problem}: the shard or the record was changed after the batch`, { file: copied });
+      if (!sameFolder) outputs.folder(join(out, name), [['spectra.json', bytes]]);
     }
   }
   const records = shards.flatMap((shard) => shard.json.records);

@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
 import {
+  dampingWarnings,
   defaultPeriodsS,
   MAX_OSCILLATORS,
   parseDampings,
@@ -61,5 +62,6 @@ export function gridFromOptions(options: GridCliOptions) {
   if (count > MAX_OSCILLATORS && !options.force) {
     throw usageError(`${count} oscillators is more than ${MAX_OSCILLATORS}; add --force if you mean it`);
   }
+  for (const warning of dampingWarnings(dampings)) process.stderr.write(`quakesweep: warning: ${warning}\n`);
   return { periodsS, dampings, method };
 }

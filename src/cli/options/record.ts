@@ -1,6 +1,6 @@
 import { closeSync, openSync, readSync } from 'node:fs';
 import type { Command } from 'commander';
-import { usageError } from '../../base/errors.js';
+import { inputError, usageError } from '../../base/errors.js';
 import { parseAccelerationUnit } from '../../base/units.js';
 import { parseFixedWidths } from '../../record/fixed.js';
 import { type ReadOptions, type RecordLayout, readRecordStream, unitWarnings } from '../../record/read.js';
@@ -84,7 +84,7 @@ function columnOption(text: string): number | string {
  */
 export async function loadRecord(source: string, options: RecordCliOptions): Promise<GroundRecord> {
   const readOptions = recordReadOptions(source, options);
-  const chunks = source === '-' ? process.stdin : fileChunks(source);
+  const chunks = source === '-' ? boundedStdin(process.stdin) : fileChunks(source);
   const record = await readRecordStream(chunks, readOptions).catch((error: unknown) => {
     // Errors of reading (a folder, say) come without the path; give them the one the user typed.
     const errno = error as NodeJS.ErrnoException;
@@ -94,6 +94,29 @@ export async function loadRecord(source: string, options: RecordCliOptions): Pro
   for (const warning of unitWarnings(record))
     process.stderr.write(`quakesweep: warning: ${source}: ${warning}\n`);
   return record;
+}
+
+/**
+ * Most bytes read from standard input (2 GiB): a stream has no size to check first, and one that
+ * never ends would grow the record's memory without bound. Beyond it, save the record to a file.
+ */
+export const MAX_STDIN_BYTES = 2 ** 31;
+
+/** A stream's chunks, refused once they pass `limit` bytes in all. */
+export async function* boundedStdin(
+  input: AsyncIterable<string | Uint8Array>,
+  limit = MAX_STDIN_BYTES,
+): AsyncGenerator<string | Uint8Array> {
+  let bytes = 0;
+  for await (const chunk of input) {
+    bytes += typeof chunk === 'string' ? Buffer.byteLength(chunk) : chunk.length;
+    if (bytes > limit)
+      throw inputError(
+        `more than ${limit >= 2 ** 30 ? `${limit / 2 ** 30} GiB` : `${limit} bytes`} on standard input, the most read from a stream; save the record to a file and name it instead`,
+        { file: 'stdin' },
+      );
+    yield chunk;
+  }
 }
 
 /**

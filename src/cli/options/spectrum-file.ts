@@ -28,6 +28,20 @@ export function readSpectrumFile(
   if (!Array.isArray(periods) || !periods.every((t) => typeof t === 'number')) {
     throw inputError('"periods_s" must be a list of periods (s); is this spectrum JSON?', { file });
   }
+  const badPeriod = periods.findIndex(
+    (t, i) => !Number.isFinite(t) || t < 0 || (i > 0 && !(t > periods[i - 1])),
+  );
+  if (badPeriod >= 0) {
+    const t = periods[badPeriod];
+    const why =
+      !Number.isFinite(t) || t < 0
+        ? 'is not a finite period ≥ 0 s'
+        : `does not follow ${periods[badPeriod - 1]} upwards`;
+    throw inputError(
+      `"periods_s"[${badPeriod}] = ${t} ${why}; periods must be finite, ≥ 0 and strictly ascending (only the first may be 0, the rigid one)`,
+      { file },
+    );
+  }
   if (!Array.isArray(spectra) || spectra.length === 0) {
     throw inputError('"spectra" must be a non-empty list of curves; is this spectrum JSON?', { file });
   }
@@ -44,6 +58,12 @@ export function readSpectrumFile(
   if (!Array.isArray(psa) || psa.length !== periods.length || !psa.every((v) => typeof v === 'number')) {
     throw inputError(`"${where}[${index}].psa_g" must be a list of ${periods.length} numbers`, { file });
   }
+  const badPsa = psa.findIndex((v) => !Number.isFinite(v) || v < 0);
+  if (badPsa >= 0)
+    throw inputError(
+      `"${where}[${index}].psa_g"[${badPsa}] = ${psa[badPsa]} at T = ${periods[badPsa]} s: a PSA must be a finite number ≥ 0`,
+      { file },
+    );
   const building = object['building'] as Record<string, unknown> | undefined;
   const isFloor = building !== undefined && building !== null;
   let value: ElasticInput;
@@ -55,7 +75,7 @@ export function readSpectrumFile(
     const pgaKey = envelope ? 'envelope.pga_g' : 'record.pga_g';
     if (zero >= 0)
       value = { psaG: psa[zero], how: 'PSA at T = 0 (PGA) of the spectrum, rigid component', source: file };
-    else if (typeof pga === 'number')
+    else if (typeof pga === 'number' && Number.isFinite(pga) && pga >= 0)
       value = { psaG: pga, how: `"${pgaKey}" of the spectrum file, rigid component`, source: file };
     else throw inputError(`has neither T = 0 nor "${pgaKey}" for a rigid component`, { file });
   } else {

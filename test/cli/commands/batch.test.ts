@@ -77,6 +77,24 @@ describe('quakesweep batch', () => {
     expect(suite.spectra[0].mean_psa_g[0]).toBeCloseTo(mean, 12);
   });
 
+  it('sweeps one file once however it is named (//, .., a pattern and its name), and says so', async () => {
+    const result = await run([
+      'batch',
+      'in//rec1.txt',
+      'in/../in/rec1.txt',
+      'in/rec?.txt',
+      ...grid,
+      '--jobs',
+      '1',
+      '--out',
+      'twice',
+    ]);
+    expect(result.code).toBe(0);
+    expect(result.stderr).toMatch(/is the same file as .*rec1\.txt; swept once/);
+    const suite = JSON.parse(readFileSync(join(folder, 'twice', 'suite.json'), 'utf8'));
+    expect(suite.records).toEqual(['rec1', 'rec2', 'rec3', 'rec4', 'rec5']);
+  });
+
   it('three shards merged give the same suite.json byte for byte (Slurm and Kubernetes variables too)', async () => {
     await run(['batch', 'in/*.txt', ...grid, '--jobs', '1', '--out', 'single1']);
     const one = await run(['batch', 'in/*.txt', ...grid, '--shard', '1/3', '--out', 'shards-a']);

@@ -87,4 +87,49 @@ describe('quakesweep merge', () => {
       /record name "\.\.\/escape" is not a safe folder name/,
     );
   });
+
+  it('refuses edited shards: zero, non-numeric or huge counts, bad PSA, a record twice, numbers unlike the copied spectra', async () => {
+    const refusal = async (...args: string[]) => expectOneLineFailure(await folder.run('merge', ...args));
+    // biome-ignore lint/suspicious/noExplicitAny: the summaries are edited as loose JSON on purpose
+    type Loose = any;
+    const edited = async (name: string, edit: (shard: Loose) => void, spectra?: (s: Loose) => void) => {
+      cpSync(join(folder.path, 's2'), join(folder.path, name), { recursive: true });
+      const shard = JSON.parse(read('s2', 'shard-2-of-2.json'));
+      edit(shard);
+      writeFileSync(join(folder.path, name, 'shard-2-of-2.json'), JSON.stringify(shard));
+      if (spectra !== undefined) {
+        const record = shard.records[0].name;
+        const json = JSON.parse(read('s2', record, 'spectra.json'));
+        spectra(json);
+        writeFileSync(join(folder.path, name, record, 'spectra.json'), JSON.stringify(json));
+      }
+      return refusal('s1', name, '--out', `${name}-out`);
+    };
+    expect(await edited('e1', (s) => (s.shard.count = 0))).toMatch(
+      /"shard\.count" must be a whole number from 1 to 100000, got 0/,
+    );
+    expect(await edited('e2', (s) => (s.shard.count = 'two'))).toMatch(
+      /"shard\.count" must be a whole number/,
+    );
+    // count 1e9 once aborted V8 (an array of a billion shard numbers): refused first.
+    expect(await edited('e3', (s) => (s.shard.count = 1e9))).toMatch(/got 1000000000/);
+    expect(await edited('e4', (s) => (s.records[0].psaG[0][1] = -1))).toMatch(
+      /"psaG" must be 1 × 4 finite numbers ≥ 0/,
+    );
+    // The first shard's record listed again in the second: not among the second shard's files.
+    const first = JSON.parse(read('s1', 'shard-1-of-2.json')).records[0];
+    expect(await edited('e5', (s) => s.records.push(first))).toMatch(
+      /is not one of the files of shard 2 of 2/,
+    );
+    expect(await edited('e6', (s) => (s.records[0].psaG[0][2] *= 2))).toMatch(
+      /spectra\.json: says PSA .* g at T = 0\.3 s, ζ = 0\.05, where the shard summary says/,
+    );
+    expect(
+      await edited(
+        'e7',
+        () => {},
+        (j) => (j.spectra[0].psa_g[1] *= 1.01),
+      ),
+    ).toMatch(/says PSA .* at T = 0\.1 s/);
+  });
 });

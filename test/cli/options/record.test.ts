@@ -209,3 +209,27 @@ describe('never silently wrong', () => {
     expect(record.accelMS2.length).toBe(3); // three data lines after two skipped lines, by counting
   });
 });
+
+describe('standard input is bounded', () => {
+  // A stream has no size to check first; past the bound it is refused, not read into memory.
+  it('passes chunks up to the bound and refuses the one that passes it, naming stdin', async () => {
+    const { boundedStdin, MAX_STDIN_BYTES } = await import('../../../src/cli/options/record.js');
+    expect(MAX_STDIN_BYTES).toBe(2 ** 31);
+    async function* endless() {
+      for (;;) yield new Uint8Array(1000);
+    }
+    const seen: number[] = [];
+    const read = async () => {
+      for await (const chunk of boundedStdin(endless(), 5000)) seen.push(chunk.length);
+    };
+    await expect(read()).rejects.toThrow(/^more than 5000 bytes on standard input/);
+    expect(seen).toEqual([1000, 1000, 1000, 1000, 1000]);
+    const text = [];
+    async function* two() {
+      yield '0.1\n';
+      yield '0.2\n';
+    }
+    for await (const chunk of boundedStdin(two(), 8)) text.push(chunk);
+    expect(text).toEqual(['0.1\n', '0.2\n']);
+  });
+});

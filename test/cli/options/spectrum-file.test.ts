@@ -125,3 +125,30 @@ describe('readSpectrumFile', () => {
     expect((thrown as { file?: string } | undefined)?.file).toBe(join(folder, 'text.json'));
   });
 });
+
+describe('readSpectrumFile refuses spectra that cannot be', () => {
+  // Invented edited files: a PSA is ≥ 0 and finite, a period grid ascends from T ≥ 0 (definitions).
+  const edited = (name: string, change: Partial<typeof spectrum>) => file(name, { ...spectrum, ...change });
+  it('refuses a negative or huge (1e999 reads as Infinity) PSA, naming the curve, index and period', () => {
+    const negative = edited('neg.json', {
+      spectra: [{ damping: 0.05, psa_g: [0.3, -0.7, 0.3] }] as typeof spectrum.spectra,
+    });
+    expect(() => readSpectrumFile(negative, at(0.1))).toThrow(
+      '"spectra[0].psa_g"[1] = -0.7 at T = 0.1 s: a PSA must be a finite number ≥ 0',
+    );
+    const huge = file('huge.json', JSON.stringify(spectrum).replace('0.7', '1e999'));
+    expect(() => readSpectrumFile(huge, at(1))).toThrow(/= Infinity at T = 0\.1 s/);
+  });
+
+  it('refuses unsorted, repeated or negative periods', () => {
+    expect(() => readSpectrumFile(edited('unsorted.json', { periods_s: [0, 1, 0.1] }), at(0.5))).toThrow(
+      '"periods_s"[2] = 0.1 does not follow 1 upwards',
+    );
+    expect(() => readSpectrumFile(edited('twice.json', { periods_s: [0, 0.1, 0.1] }), at(0.5))).toThrow(
+      /does not follow 0\.1 upwards/,
+    );
+    expect(() => readSpectrumFile(edited('negative.json', { periods_s: [-1, 0.1, 1] }), at(0.5))).toThrow(
+      '"periods_s"[0] = -1 is not a finite period ≥ 0 s',
+    );
+  });
+});
