@@ -22,6 +22,10 @@ export function writeAtomic(path: string, contents: string | Uint8Array): void {
   } catch (error) {
     if (fd !== undefined) closeSync(fd);
     rmSync(temporary, { force: true });
+    // A failed write to the open file (ENOSPC, EIO) carries no path: name the output it was for.
+    const errno = error as NodeJS.ErrnoException;
+    if (errno !== null && typeof errno === 'object' && errno.code !== undefined && errno.path === undefined)
+      errno.path = target;
     throw error;
   }
 }
