@@ -91,16 +91,45 @@ export function boltGroupAtDirection(
  * step on either side. The maxima therefore do not depend on the step.
  */
 export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
+  return sweepDirections(input, false);
+}
+
+/**
+ * boltGroupForces by its plain definition: every anchor at every direction of the sweep, O(n²) in
+ * anchors. The oracle of the tests; boltGroupForces gives the same result in O(n log n).
+ */
+export function boltGroupForcesExhaustive(input: BoltGroupInput): BoltGroupResult {
+  return sweepDirections(input, true);
+}
+
+/**
+ * The sweep's directions are the step's grid and three exact directions an anchor. Every anchor
+ * meets the whole grid (a fixed number), its own three, and, of the other anchors' directions, only
+ * those near one of its own peaks, where its value can come within the tolerance of its largest:
+ * each of its values is a smooth function with one or two peaks (a cosine for biaxial tension, a
+ * cosine of 2θ under the root for shear, a ratio of a cosine to a quadratic form for projected
+ * tension), decreasing away from them, so the directions sorted once are searched by bisection and
+ * walked outward while the value stays within the tolerance. A function flat to the tolerance needs
+ * none of them: the grid's 0° wins every tie.
+ */
+function sweepDirections(input: BoltGroupInput, exhaustive: boolean): BoltGroupResult {
   const k = coefficients(input);
   const { n, rule, A, B, L } = k;
   const step = input.stepDeg ?? 1;
   const directions: number[] = [];
   for (let j = 0; j * step < 360 - 1e-9; j++) directions.push(j * step);
+  const gridCount = directions.length;
+  const tensionPeaks: number[][] = [];
   for (let i = 0; i < n; i++) {
     if (rule === 'biaxial') {
-      if (A[i] !== 0 || B[i] !== 0) directions.push(normalizeDeg((Math.atan2(B[i], A[i]) * 180) / Math.PI));
+      const peak = A[i] !== 0 || B[i] !== 0 ? [normalizeDeg((Math.atan2(B[i], A[i]) * 180) / Math.PI)] : [];
+      directions.push(...peak);
+      tensionPeaks.push(peak);
     } else {
-      directions.push(worstProjectedDirectionDeg((deg) => k.tension(i, ...unitVector(deg)), step));
+      const f = (deg: number) => k.tension(i, ...unitVector(deg));
+      const peaks = projectedPeaksDeg(f, step);
+      directions.push(peaks[0]);
+      tensionPeaks.push(peaks);
     }
     const worst = worstShearDirectionDeg(L[i]);
     directions.push(worst, normalizeDeg(worst + 180));
@@ -113,14 +142,45 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
   // Larger by more than the tolerance, or as large in a smaller direction (so ties resolve alike everywhere).
   const worse = (value: number, worst: number, deg: number, worstDeg: number) =>
     value > worst + tolerance || (Math.abs(value - worst) <= tolerance && deg < worstDeg);
-  for (const deg of directions) {
-    const [c, s] = unitVector(deg);
+  // The unit vectors once for all anchors (the same arithmetic as unitVector at every use).
+  const cosines = directions.map((deg) => Math.cos((deg * Math.PI) / 180));
+  const sines = directions.map((deg) => Math.sin((deg * Math.PI) / 180));
+  const visit = (a: AnchorDemand, i: number, j: number, tension: boolean, shear: boolean) => {
+    const deg = directions[j];
+    const c = cosines[j];
+    const s = sines[j];
+    if (tension) {
+      const value = k.tension(i, c, s);
+      if (worse(value, a.tension, deg, a.tensionDirectionDeg))
+        [a.tension, a.tensionDirectionDeg] = [value, deg];
+    }
+    if (shear) {
+      const value = k.shear(i, c, s);
+      if (worse(value, a.shear, deg, a.shearDirectionDeg)) [a.shear, a.shearDirectionDeg] = [value, deg];
+    }
+  };
+  if (exhaustive) {
+    for (let j = 0; j < directions.length; j++)
+      perAnchor.forEach((a, i) => {
+        visit(a, i, j, true, true);
+      });
+  } else {
+    const near = new NearDirections(directions, 4 * tolerance);
     perAnchor.forEach((a, i) => {
-      const tension = k.tension(i, c, s);
-      const shear = k.shear(i, c, s);
-      if (worse(tension, a.tension, deg, a.tensionDirectionDeg))
-        [a.tension, a.tensionDirectionDeg] = [tension, deg];
-      if (worse(shear, a.shear, deg, a.shearDirectionDeg)) [a.shear, a.shearDirectionDeg] = [shear, deg];
+      const tensionAt = (deg: number) => k.tension(i, ...unitVector(deg));
+      const shearAt = (deg: number) => k.shear(i, ...unitVector(deg));
+      const tensionIndices = new Set<number>();
+      const shearIndices = new Set<number>();
+      for (let j = 0; j < gridCount; j++) visit(a, i, j, true, true);
+      if (tensionSpread(k, i) > tolerance)
+        for (const peak of tensionPeaks[i]) near.around(peak, tensionAt, tensionIndices);
+      if (shearSpread(L[i], input.horizontalForce) > tolerance) {
+        const worst = worstShearDirectionDeg(L[i]);
+        for (const peak of [worst, normalizeDeg(worst + 180)]) near.around(peak, shearAt, shearIndices);
+      }
+      const indices = [...new Set([...tensionIndices, ...shearIndices])].filter((j) => j >= gridCount);
+      for (const j of indices.sort((x, y) => x - y))
+        visit(a, i, j, tensionIndices.has(j), shearIndices.has(j));
     });
   }
   let governingAnchor = 0;
@@ -141,16 +201,87 @@ export function boltGroupForces(input: BoltGroupInput): BoltGroupResult {
   };
 }
 
+/** The sweep's directions sorted once, for the walk outward from a peak. */
+class NearDirections {
+  private readonly order: number[];
+  private readonly sortedDeg: number[];
+  constructor(
+    directions: readonly number[],
+    private readonly margin: number,
+  ) {
+    this.order = directions.map((_, j) => j).sort((x, y) => directions[x] - directions[y] || x - y);
+    this.sortedDeg = this.order.map((j) => directions[j]);
+  }
+
+  /** Add to `into` the indices of the directions next to `peakDeg` where f is within the margin of its largest there. */
+  around(peakDeg: number, f: (deg: number) => number, into: Set<number>): void {
+    const m = this.order.length;
+    let lo = 0;
+    let hi = m;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (this.sortedDeg[mid] < peakDeg) lo = mid + 1;
+      else hi = mid;
+    }
+    const best = Math.max(f(peakDeg), f(this.sortedDeg[lo % m]), f(this.sortedDeg[(lo + m - 1) % m]));
+    // Walk up from the first direction at or after the peak, then down from the one before it.
+    for (const [start, delta] of [
+      [lo, 1],
+      [lo + m - 1, -1],
+    ]) {
+      for (let t = 0; t < m; t++) {
+        const position = (((start + delta * t) % m) + m) % m;
+        const j = this.order[position];
+        if (f(this.sortedDeg[position]) < best - this.margin) break;
+        if (into.has(j) && t > 0) break;
+        into.add(j);
+      }
+    }
+  }
+}
+
+/** An upper bound of how much anchor i's tension varies with the direction. */
+function tensionSpread(k: ReturnType<typeof coefficients>, i: number): number {
+  if (k.rule === 'biaxial') return 2 * Math.hypot(k.A[i], k.B[i]);
+  // |M r·u / uᵀIu| ≤ |M| |r| / λ_min(I).
+  return (2 * Math.abs(k.moment) * Math.hypot(k.rx[i], k.ry[i])) / k.smallestMoment;
+}
+
+/** How much |F·L u| varies with u: |F| (σ_max − σ_min) of L. */
+function shearSpread([a, b, c, d]: Matrix2, force: number): number {
+  const p = a * a + c * c;
+  const q = a * b + c * d;
+  const r = b * b + d * d;
+  const half = Math.hypot((p - r) / 2, q);
+  const mean = (p + r) / 2;
+  return Math.abs(force) * (Math.sqrt(mean + half) - Math.sqrt(Math.max(0, mean - half)));
+}
+
 /**
- * The direction (degrees) of the largest value of a smooth periodic function: sampled every `step`
- * degrees, then refined by golden-section search (Kiefer 1953) within one step of the best sample.
+ * The peaks (degrees) of a smooth periodic function, the largest first: sampled every `step`
+ * degrees (1 at most), then each local maximum of the samples refined by golden-section search
+ * (Kiefer 1953) within one step of it.
  */
-function worstProjectedDirectionDeg(f: (deg: number) => number, step: number): number {
+function projectedPeaksDeg(f: (deg: number) => number, step: number): number[] {
   const sampleDeg = Math.min(step, 1);
+  const samples: [number, number][] = [];
+  for (let deg = 0; deg < 360; deg += sampleDeg) samples.push([deg, f(deg)]);
   let best = 0;
-  for (let deg = 0; deg < 360; deg += sampleDeg) if (f(deg) > f(best)) best = deg;
-  let lo = best - sampleDeg;
-  let hi = best + sampleDeg;
+  for (const [deg, value] of samples) if (value > f(best)) best = deg;
+  const peaks = [goldenPeakDeg(f, best, sampleDeg)];
+  const count = samples.length;
+  samples.forEach(([deg, value], j) => {
+    const before = samples[(j + count - 1) % count][1];
+    const after = samples[(j + 1) % count][1];
+    if (deg !== best && value >= before && value >= after) peaks.push(goldenPeakDeg(f, deg, sampleDeg));
+  });
+  return peaks;
+}
+
+/** The direction of the largest value of f within `halfWidth` degrees of `centreDeg`, by golden-section search. */
+function goldenPeakDeg(f: (deg: number) => number, centreDeg: number, halfWidth: number): number {
+  let lo = centreDeg - halfWidth;
+  let hi = centreDeg + halfWidth;
   const ratio = (Math.sqrt(5) - 1) / 2;
   let x1 = hi - ratio * (hi - lo);
   let x2 = lo + ratio * (hi - lo);
@@ -231,5 +362,7 @@ function coefficients(input: BoltGroupInput) {
     const [l11, l12, l21, l22] = L[i];
     return Math.abs(F) * Math.hypot(l11 * c + l12 * s, l21 * c + l22 * s);
   };
-  return { n, rule, A, B, L, tension, shear };
+  // The smallest principal second moment, which bounds how far projected tension varies.
+  const smallestMoment = (ixx + iyy) / 2 - Math.hypot((ixx - iyy) / 2, ixy);
+  return { n, rule, A, B, L, tension, shear, moment, rx, ry, smallestMoment };
 }

@@ -1,4 +1,5 @@
 import { inputError } from '../base/errors.js';
+import { printable } from '../base/printable.js';
 import { MIN_PERIOD_S } from '../oscillator/grid.js';
 import {
   BUILDING_KEYS,
@@ -199,7 +200,7 @@ export function parseEquipment(text: string, file: string): Equipment {
   if (object['notes'] !== undefined && typeof object['notes'] !== 'string') fail('notes', 'must be a string');
 
   return {
-    name: name as string,
+    name: printable(name as string),
     units: units as EquipmentUnits,
     weightKN: weight * system.kNPerForce,
     cgHeightM: cgHeight * m,

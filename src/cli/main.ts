@@ -1,5 +1,6 @@
 import { Command, CommanderError } from 'commander';
 import { isQuakesweepError, usageError } from '../base/errors.js';
+import { printable } from '../base/printable.js';
 import { VERSION } from '../base/version.js';
 import { closestName } from './suggest.js';
 
@@ -55,13 +56,42 @@ export async function buildProgram(only?: string): Promise<Command> {
 
 /** Run the CLI; every failure becomes one line on stderr and an exit code, never a stack trace. */
 export async function main(argv: string[]): Promise<number> {
+  watchStandardStreams();
+  let code: number;
   try {
     checkHelpTopic(argv);
     await (await buildProgram(argv[0])).parseAsync(argv, { from: 'user' });
-    return 0;
+    code = 0;
   } catch (error) {
-    return reportError(error);
+    code = reportError(error);
   }
+  return streamFailure ?? code;
+}
+
+/** The exit code once standard output failed (closed pipe, full disk), if it did. */
+let streamFailure: number | undefined;
+
+/**
+ * A failure of standard output (EPIPE when the reader stops early, as `| head -1` does; ENOSPC on a
+ * full device) ends the run with one line on stderr and exit code 2, not a stack trace; later
+ * writes are dropped. A failing stderr is dropped silently (there is nowhere left to say it).
+ */
+function watchStandardStreams(): void {
+  if (process.stdout.listenerCount('error') > 0) return;
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (streamFailure !== undefined) return;
+    streamFailure = EXIT_INPUT;
+    process.exitCode = EXIT_INPUT;
+    process.stdout.write = (() => true) as typeof process.stdout.write;
+    const reason =
+      error.code === 'EPIPE'
+        ? 'standard output was closed before the end; the output is cut short'
+        : `standard output: ${FILE_ERRORS.get(error.code ?? '') ?? error.code ?? error.message}; the output is cut short`;
+    process.stderr.write(`quakesweep: ${reason}\n`);
+  });
+  process.stderr.on('error', () => {
+    process.stderr.write = (() => true) as typeof process.stderr.write;
+  });
 }
 
 /** `help <topic>` names a command; anything else is refused (exit 2) with the nearest name, if any. */
@@ -81,6 +111,19 @@ const FILE_ERRORS = new Map([
   ['EACCES', 'permission denied'],
   ['EISDIR', 'is a folder'],
   ['ENOTDIR', 'not a folder'],
+  ['EPERM', 'operation not permitted'],
+  ['EROFS', 'read-only file system'],
+  ['ENOSPC', 'no space left on the device'],
+  ['EDQUOT', 'disk quota exceeded'],
+  ['ENAMETOOLONG', 'name too long'],
+  ['ELOOP', 'too many symbolic links'],
+  ['EEXIST', 'already exists'],
+  ['ENOTEMPTY', 'folder not empty'],
+  ['EMFILE', 'too many open files'],
+  ['ENFILE', 'too many open files'],
+  ['EIO', 'input/output error'],
+  ['EBUSY', 'busy'],
+  ['EXDEV', 'on another file system'],
 ]);
 
 export function reportError(error: unknown): number {
@@ -93,7 +136,9 @@ export function reportError(error: unknown): number {
   const errno = error as NodeJS.ErrnoException | undefined;
   const reason = FILE_ERRORS.get(errno?.code ?? '');
   if (reason !== undefined) {
-    process.stderr.write(`quakesweep: ${oneLine(`${errno?.path ?? ''}: ${reason}`)}\n`);
+    // An error of a write to an open file carries no path; its syscall says what failed.
+    const where = errno?.path ?? (errno?.syscall === undefined ? 'file' : `${errno.syscall}`);
+    process.stderr.write(`quakesweep: ${oneLine(`${where}: ${reason}`)}\n`);
     return EXIT_INPUT;
   }
   const message = error instanceof Error ? error.message : String(error);
@@ -103,7 +148,10 @@ export function reportError(error: unknown): number {
   return EXIT_INTERNAL;
 }
 
-/** A message on one line: breaks that came in with a file name or an option value become spaces. */
+/**
+ * A message on one line: breaks that came in with a file name or an option value become spaces,
+ * and terminal control sequences are removed (see printable).
+ */
 function oneLine(text: string): string {
-  return text.trim().replace(/[\r\n\u2028\u2029]+/g, ' ');
+  return printable(text.trim().replace(/[\r\n\u2028\u2029]+/g, ' '));
 }

@@ -1,4 +1,5 @@
 import { cautionLines } from '../base/caution.js';
+import { csvCell, csvNote } from './csv-cell.js';
 import { notFiniteError } from './finite.js';
 
 /** A CSV cell: a number (refused unless finite), a word, or empty (null). */
@@ -6,17 +7,16 @@ export type CsvCell = number | string | null;
 
 /**
  * CSV text of rows that are not by period: the caution and the `notes` on `#` lines (each on one
- * line), the header, then the rows. A word holding a comma or a quote is quoted (RFC 4180).
+ * line), the header, then the rows. Words and header cells go through csvCell (no formula, quoted
+ * when they hold a comma or a quote).
  */
 export function csvRows(
   notes: readonly string[],
   header: readonly string[],
   rows: readonly CsvCell[][],
 ): string {
-  const lines = [...cautionLines(), ...notes.map((note) => note.replace(/[\r\n]+/g, ' '))].map(
-    (l) => `# ${l}`,
-  );
-  lines.push(header.join(','));
+  const lines = [...cautionLines(), ...notes.map(csvNote)].map((l) => `# ${l}`);
+  lines.push(header.map(csvCell).join(','));
   for (const row of rows) {
     const cells = row.map((cell, i) => {
       if (cell === null) return '';
@@ -24,7 +24,7 @@ export function csvRows(
         if (!Number.isFinite(cell)) throw notFiniteError(`${header[i]} = ${cell}`);
         return String(cell);
       }
-      return /[",]/.test(cell) ? `"${cell.replace(/"/g, '""')}"` : cell;
+      return csvCell(cell);
     });
     lines.push(cells.join(','));
   }

@@ -87,9 +87,6 @@ export function floorSetToJson(set: FloorSpectrumSet, building: BuildingMode, as
   };
 }
 
-/** A CSV header cell, quoted (RFC 4180) when a record's label holds a comma, a quote or a line break. */
-const csvCell = (text: string) => (/[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
-
 /**
  * The CSV of several floor spectra: one row per period and, for each damping, a PSA column (g)
  * per record, then the mean and the envelope (`psa_g@5%:marrowby-h1`, …, `psa_g@5%:mean`,
@@ -110,7 +107,7 @@ export function floorSetToCsv(set: FloorSpectrumSet, assumptions: string[]): str
     ...assumptions.slice(-2),
   ];
   const columns: PeriodColumn[] = set.envelope.curves.flatMap((curve, d) => {
-    const name = (label: string) => csvCell(`psa_g@${dampingLabel(curve.damping)}:${label}`);
+    const name = (label: string) => `psa_g@${dampingLabel(curve.damping)}:${label}`;
     const psaG = (c: SpectrumCurve) => (p: number) => c.psaMS2[p] / G;
     return [
       ...set.members.map((m, i) => ({ name: name(labels[i]), at: psaG(m.spectrum.curves[d]) })),

@@ -2,6 +2,7 @@ import { cautionLines, wrapText } from '../base/caution.js';
 import { formatNumber, formatSignificant } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
+import { csvCell, csvNote } from './csv-cell.js';
 import { notFiniteError } from './finite.js';
 import { frequencyHz } from './frequency.js';
 
@@ -63,9 +64,9 @@ export function columnsByDamping<Curve extends { damping: number }>(
  */
 export function csvText(notes: readonly string[], periodsS: Float64Array, columns: readonly PeriodColumn[]) {
   const header = ['period_s', 'frequency_hz', ...columns.map((c) => c.name)];
-  const oneLineNotes = notes.map((note) => note.replace(/[\r\n]+/g, ' '));
+  const oneLineNotes = notes.map(csvNote);
   const lines = [...cautionLines(), ...oneLineNotes].map((line) => `# ${line}`);
-  lines.push(header.join(','));
+  lines.push(header.map(csvCell).join(','));
   for (let p = 0; p < periodsS.length; p++) {
     const cells = [periodsS[p], frequencyHz(periodsS[p]), ...columns.map((c) => c.at(p))];
     const bad = cells.findIndex((cell) => cell !== null && !Number.isFinite(cell));

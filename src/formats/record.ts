@@ -4,6 +4,7 @@ import { integrateRecord } from '../record/integrate.js';
 import { PROCESSING_ORDER } from '../record/process.js';
 import { appliedSteps } from '../record/reading.js';
 import type { GroundRecord } from '../record/record.js';
+import { csvNote } from './csv-cell.js';
 import { notFiniteError } from './finite.js';
 
 /** What `quakesweep record` writes: the acceleration in `accelUnit`, and on request its integrals. */
@@ -103,7 +104,7 @@ function rowTexts(record: GroundRecord, columns: readonly Column[]): string[][] 
 export function recordToCsv(record: GroundRecord, o: RecordOutputOptions): string {
   const columns = recordColumns(record, o);
   const names = ['time_s', ...columns.map((c) => c.name)];
-  const lines = recordHeader(record, o, names).map((line) => `# ${line}`);
+  const lines = recordHeader(record, o, names).map((line) => `# ${csvNote(line)}`);
   lines.push(names.join(','));
   for (const row of rowTexts(record, columns)) lines.push(row.join(','));
   return `${lines.join('\n')}\n`;

@@ -21,7 +21,16 @@ export function writeAtomic(path: string, contents: string | Uint8Array): void {
     renameSync(temporary, target);
   } catch (error) {
     if (fd !== undefined) closeSync(fd);
-    rmSync(temporary, { force: true });
+    try {
+      rmSync(temporary, { force: true });
+    } catch {
+      // A temporary name the file system refused (ENAMETOOLONG) was never made: nothing to remove.
+    }
+    // A failed write to the open file (ENOSPC, EIO) carries no path, a failed open (EROFS, EACCES)
+    // the temporary name the user never gave: name the output it was for.
+    const errno = error as NodeJS.ErrnoException;
+    if (errno !== null && typeof errno === 'object' && errno.code !== undefined)
+      if (errno.path === undefined || errno.path === temporary) errno.path = target;
     throw error;
   }
 }

@@ -17,8 +17,10 @@ export interface HeaderKeys {
   units?: { value: AccelerationUnit; line: number; text: string };
 }
 
-const NUMBER_TEXT = '([+-]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eEdD][+-]?\\d+)?)';
-const SEPARATOR = '\\s*[=:]?\\s*';
+// Each pattern here lets a character match one way only (no `\d+\.?\d*`, no `\s*[=:]?\s*`, whose
+// runs meet anywhere), so that a long run of digits or blanks is scanned in linear time.
+const NUMBER_TEXT = '([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eEdD][+-]?\\d+)?)';
+const SEPARATOR = '\\s*(?:[=:]\\s*)?';
 const DT = new RegExp(
   `(?:^|[^a-z])(?:dt|delta[ _-]?t|time[ _-]?step|sample[ _-]?interval)${SEPARATOR}${NUMBER_TEXT}\\s*(seconds?|secs?|ms|s)?(?![a-z])`,
   'i',
@@ -32,7 +34,7 @@ const POINTS_BEFORE = /(?:^|[^\d.])(\d+)\s+(?:points|samples)(?![a-z])/i;
 const UNIT_TEXT =
   '(gal|g|(?:mm|cm|m|in|ft)\\s*/\\s*(?:s|sec)\\s*(?:\\^\\s*2|\\*\\*\\s*2|2|²|/\\s*(?:s|sec)))';
 const UNITS = new RegExp(
-  `(?:^|[^a-z])units?${SEPARATOR}(?:of\\s+acceleration\\s*)?[([]?\\s*${UNIT_TEXT}(?![a-z0-9])`,
+  `(?:^|[^a-z])units?${SEPARATOR}(?:of\\s+acceleration\\s*)?(?:[([]\\s*)?${UNIT_TEXT}(?![a-z0-9])`,
   'i',
 );
 const COLUMN_UNIT = new RegExp(`[\\s_([]${UNIT_TEXT}\\s*[)\\]]?$`, 'i');

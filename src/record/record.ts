@@ -1,4 +1,5 @@
 import { inputError } from '../base/errors.js';
+import { printable } from '../base/printable.js';
 import type { AccelerationUnit } from '../base/units.js';
 
 /** One processing operation that was applied to a record, as stated in every output that used it. */
@@ -47,8 +48,9 @@ export function createRecord(fields: RecordFields): GroundRecord {
     throw inputError(`sample ${i + 1} is not a finite number (${accelMS2[i]})`, { file: source });
   }
   return {
-    name,
-    source,
+    // Names and paths reach terminals, SVG and HTML: no control sequences, nothing XML forbids.
+    name: printable(name),
+    source: printable(source),
     dtS,
     accelMS2,
     unitsRead: fields.unitsRead ?? 'm/s2',

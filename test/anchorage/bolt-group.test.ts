@@ -1,5 +1,11 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { boltGroupAtDirection, boltGroupForces } from '../../src/anchorage/bolt-group.js';
+import {
+  boltGroupAtDirection,
+  boltGroupForces,
+  boltGroupForcesExhaustive,
+} from '../../src/anchorage/bolt-group.js';
+import { FUZZ_SEED, runs } from '../helpers/fuzz-budget.js';
 
 /*
  * Hand calculation (closed form; elastic bolt group about the centroid, common practice):
@@ -214,5 +220,53 @@ describe('boltGroupForces, projected rule (default), the same rectangle', () => 
 
   it('shear is the same under both rules (the rules differ in the overturning share only)', () => {
     expect(boltGroupForces(projected).maxShear).toBeCloseTo(boltGroupForces(rectangle).maxShear, 12);
+  });
+});
+
+describe('boltGroupForces takes only the directions that can matter to each anchor', () => {
+  // The oracle is the definition itself: every anchor at every direction of the sweep.
+  const coordinate = fc.double({ min: -2, max: 2, noNaN: true });
+  const group = fc.record({
+    anchors: fc.array(fc.tuple(coordinate, coordinate), { minLength: 3, maxLength: 9 }),
+    cgPlan: fc.tuple(
+      fc.double({ min: -1, max: 1, noNaN: true }),
+      fc.double({ min: -1, max: 1, noNaN: true }),
+    ),
+    cgHeight: fc.double({ min: 0, max: 3, noNaN: true }),
+    horizontalForce: fc.double({ min: 0, max: 100, noNaN: true }),
+    deadLoad: fc.double({ min: 0, max: 100, noNaN: true }),
+    stepDeg: fc.constantFrom(0.5, 1, 5, 15),
+    rule: fc.constantFrom('projected' as const, 'biaxial' as const),
+  });
+  /** Anchors spread out enough to make a group (a group on one line has no second moment across it). */
+  const spread = (anchors: [number, number][]) => {
+    const [x0, y0] = anchors[0];
+    return anchors.some(
+      ([x, y]) => Math.abs((x - x0) * (anchors[1][1] - y0) - (y - y0) * (anchors[1][0] - x0)) > 0.05,
+    );
+  };
+
+  it("gives the exhaustive sweep's result on random small groups (property test)", () => {
+    fc.assert(
+      fc.property(group, (input) => {
+        fc.pre(spread(input.anchors));
+        expect(boltGroupForces(input)).toEqual(boltGroupForcesExhaustive(input));
+      }),
+      { seed: FUZZ_SEED, numRuns: runs(100) },
+    );
+  });
+
+  it('gives it on a symmetric grid, where directions tie between anchors', () => {
+    const anchors: [number, number][] = [];
+    for (let i = 0; i < 6; i++) for (let j = 0; j < 5; j++) anchors.push([i * 0.2 - 0.5, j * 0.2 - 0.4]);
+    for (const rule of ['projected', 'biaxial'] as const)
+      for (const cgPlan of [
+        [0, 0],
+        [0.1, 0],
+        [0.13, -0.07],
+      ] as [number, number][]) {
+        const input = { anchors, cgPlan, cgHeight: 1.2, horizontalForce: 30, deadLoad: 20, rule };
+        expect(boltGroupForces(input)).toEqual(boltGroupForcesExhaustive(input));
+      }
   });
 });

@@ -3,12 +3,15 @@
  * folder as a file, an empty file and an unreadable file exits 2 with one line on stderr and no
  * stack trace (the project's rule for errors; common practice for command-line tools).
  */
-import { chmodSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+
+import { spawnSync } from 'node:child_process';
+import { chmodSync, existsSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { JSDOM } from 'jsdom';
 import { afterAll, describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
 import { writeFixtures } from '../helpers/fixtures.js';
-import { expectOneLineFailure, runMain } from '../helpers/run-cli.js';
+import { BIN, expectOneLineFailure, runChild, runMain, STACK_TRACE } from '../helpers/run-cli.js';
 
 const f = writeFixtures();
 const unreadable = join(f.dir, 'unreadable.txt');
@@ -223,4 +226,86 @@ describe('every command ends a success with a summary and the caution on stderr'
       expect(lines[1]).toBe(`quakesweep: caution: ${CAUTION}`);
     });
   }
+});
+
+describe('failing streams and OS errors: one line, exit 2, no stack trace', () => {
+  it('standard output closed early (EPIPE, as `| head -1` does)', () => {
+    // Invented record long enough that its CSV overflows the pipe after head has gone.
+    const long = join(f.dir, 'long.csv');
+    const rows = Array.from(
+      { length: 100_000 },
+      (_, i) => `${(i * 0.01).toFixed(2)},${(0.1 * Math.sin(i)).toFixed(5)}`,
+    );
+    writeFileSync(long, `time_s,accel_g\n${rows.join('\n')}\n`);
+    const result = spawnSync(
+      '/bin/sh',
+      ['-c', `"${process.execPath}" "${BIN}" record "${long}" --units g --format csv | head -1`],
+      {
+        encoding: 'utf8',
+        timeout: 20_000,
+      },
+    );
+    // The shell's status is head's; the one line tells ours (stderr passes the pipe by).
+    const lines = result.stderr.split('\n').filter((l) => /^quakesweep: (?!done|caution)/.test(l));
+    expect(lines).toEqual(['quakesweep: standard output was closed before the end; the output is cut short']);
+    expect(result.stderr).not.toMatch(STACK_TRACE);
+  });
+
+  it.runIf(existsSync('/dev/full'))('standard output on a full device (ENOSPC)', () => {
+    const result = spawnSync(
+      '/bin/sh',
+      ['-c', `"${process.execPath}" "${BIN}" spectrum "${f.h1}" > /dev/full; echo "exit $?" >&2`],
+      {
+        encoding: 'utf8',
+        timeout: 20_000,
+      },
+    );
+    expect(result.stderr).toContain(
+      'quakesweep: standard output: no space left on the device; the output is cut short',
+    );
+    expect(result.stderr).toContain('exit 2');
+    expect(result.stderr).not.toMatch(STACK_TRACE);
+  });
+
+  it('a file name too long for the file system (ENAMETOOLONG) names the path', async () => {
+    const out = join(f.dir, `${'n'.repeat(300)}.json`);
+    const line = expectOneLineFailure(await runMain(['spectrum', f.h1, '--out', out]));
+    expect(line).toMatch(/n{100}\.json: name too long$/);
+    expect(line).not.toMatch(/internal error/);
+  });
+
+  it('a write into a folder that refuses it (EACCES, or EROFS) names the path', async () => {
+    const folder = join(f.dir, 'read-only');
+    const { mkdirSync } = await import('node:fs');
+    mkdirSync(folder);
+    chmodSync(folder, 0o500);
+    try {
+      const result = await runMain(['spectrum', f.h1, '--out', join(folder, 'x.json')]);
+      // Root writes into any folder whatever its mode; then only the success can be checked.
+      if (result.code !== 0) expect(expectOneLineFailure(result)).toMatch(/read-only.*: permission denied$/);
+    } finally {
+      chmodSync(folder, 0o700);
+    }
+  });
+});
+
+describe('hostile record names (invented)', () => {
+  it('a control character in a name leaves the SVG well-formed XML, and no escape reaches stderr', () => {
+    const folder = join(f.dir, 'named');
+    const result = runChild([
+      'spectrum',
+      f.h1,
+      '--name',
+      'h1\u0001\u001b[31m,=HYPERLINK(1)',
+      '--svg',
+      folder,
+    ]);
+    expect(result.code).toBe(0);
+    const text = readFileSync(join(folder, 'psa.svg'), 'utf8');
+    const doc = new JSDOM(text, { contentType: 'image/svg+xml' }).window.document;
+    expect(doc.getElementsByTagName('parsererror').length).toBe(0);
+    expect(text).toContain('h1,=HYPERLINK(1)');
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: looking for control characters is the point
+    expect(result.stderr + result.stdout).not.toMatch(/[\u0000-\u0008\u001b]/);
+  });
 });

@@ -67,3 +67,30 @@ describe('units in names', () => {
     expect(timeNameInMs('time_s')).toBe(false);
   });
 });
+
+describe('long header lines', () => {
+  it('still reads a separator, an "of acceleration" and a bracket between key and value', () => {
+    expect(keys('units = ( g )').units?.value).toBe('g');
+    expect(keys('UNITS:  of acceleration [cm/s2]').units?.value).toBe('cm/s2');
+    expect(keys('units   g').units?.value).toBe('g');
+    expect(keys('dt :0.01 s').dtS?.value).toBe(0.01);
+  });
+
+  it('scans runs of a million blanks or digits after a key at once', () => {
+    // Generous bound on purpose (speed is measured in bench/): the earlier `\s*[=:]?\s*…\s*` took
+    // 13 s on 4,000 blanks after `units` (cubic), the linear patterns take milliseconds on 999,000.
+    const run = 999_000;
+    for (const line of [
+      `units${' '.repeat(run)}x`,
+      `dt${' '.repeat(run)}x`,
+      `dt=${'1'.repeat(run)}x`,
+      `${'1'.repeat(run)} pointsx`,
+      `acc${' '.repeat(run)}(`,
+    ]) {
+      const start = performance.now();
+      const found = keys(line);
+      expect(performance.now() - start).toBeLessThan(2000);
+      expect(found.units).toBeUndefined();
+    }
+  });
+});

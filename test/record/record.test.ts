@@ -31,3 +31,16 @@ describe('createRecord', () => {
     );
   });
 });
+
+describe('createRecord names', () => {
+  it('strips terminal control sequences and what XML forbids from the name and the source', () => {
+    // Invented name and path.
+    const record = createRecord({
+      name: 'site\u001b[2J\u0001h1',
+      source: 'in\u0007/x.csv',
+      dtS: 0.01,
+      accelMS2: Float64Array.from([0, 1]),
+    });
+    expect([record.name, record.source]).toEqual(['siteh1', 'in/x.csv']);
+  });
+});
