@@ -76,12 +76,16 @@ export function stageFile(target: string, contents: string | Uint8Array, replace
  * (ENXIO) rather than waited for.
  */
 export function writeThrough(path: string, contents: string | Uint8Array, fifo: boolean): void {
-  if (fifo) closeSync(openSync(path, constants.O_WRONLY | constants.O_NONBLOCK));
-  const fd = openSync(path, constants.O_WRONLY | (fifo ? 0 : constants.O_TRUNC));
+  // The probe stays open until the real descriptor is, so that the reader never sees an end between.
+  const probe = fifo ? openSync(path, constants.O_WRONLY | constants.O_NONBLOCK) : undefined;
+  let fd: number | undefined;
   try {
+    fd = openSync(path, constants.O_WRONLY | (fifo ? 0 : constants.O_TRUNC));
+    if (probe !== undefined) closeSync(probe);
     writeAll(fd, contents);
   } finally {
-    closeSync(fd);
+    if (fd !== undefined) closeSync(fd);
+    else if (probe !== undefined) closeSync(probe);
   }
 }
 

@@ -127,7 +127,8 @@ export class OutputSet {
       try {
         writeThrough(d.file.path, d.file.contents, d.through === 'fifo');
       } catch (error) {
-        throw describeWriteError(error, [d], 'the other outputs were written');
+        const others = destinations.length > 1 ? 'the other outputs were written' : 'nothing was written';
+        throw describeWriteError(error, [d], others);
       }
     }
     if (this.stdoutText !== undefined) process.stdout.write(this.stdoutText);
