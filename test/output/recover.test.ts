@@ -3,6 +3,8 @@
  * of a dead process is finished (every staged file renamed into place), its kept copies and stray
  * temporaries removed; a live process's files and other dot-files are left alone.
  */
+
+import { spawnSync } from 'node:child_process';
 import {
   existsSync,
   mkdirSync,
@@ -57,5 +59,48 @@ describe('recoverFolder', () => {
     recoverFolder(folder);
     expect(readdirSync(folder).sort()).toEqual([live, '.qs-notes', 'a.json'].sort());
     expect(existsSync(join(folder, live))).toBe(true);
+  });
+});
+
+describe('a SIGKILL between two renames', () => {
+  it('leaves a journal from which the next run finishes the new set', () => {
+    const folder = join(dir, 'killed');
+    mkdirSync(folder);
+    for (const name of ['a.json', 'b.csv', 'c.svg']) writeFileSync(join(folder, name), `old ${name}`);
+    const dist = (name: string) => JSON.stringify(new URL(`../../dist/output/${name}`, import.meta.url).href);
+    // The built transaction (test/global-setup.ts builds dist/), killed by SIGKILL before its third rename.
+    const script = `
+      const { renameSync, statSync } = require('node:fs');
+      const { join } = require('node:path');
+      Promise.all([import(${dist('transaction.js')}), import(${dist('atomic.js')})]).then(([{ commitFiles }, { stageFile }]) => {
+        const folder = ${JSON.stringify(folder)};
+        const planned = ['a.json', 'b.csv', 'c.svg', 'd.html'].map((name) => {
+          const final = join(folder, name);
+          let replaces; try { replaces = statSync(final); } catch {}
+          return { final, contents: 'new ' + name, replaces };
+        });
+        let renames = 0;
+        commitFiles(planned, folder, { stage: stageFile, rename(from, to) {
+          if (renames++ === 2) process.kill(process.pid, 'SIGKILL');
+          renameSync(from, to);
+        } });
+      });`;
+    const result = spawnSync(process.execPath, ['-e', script], { encoding: 'utf8' });
+    expect(result.signal, result.stderr).toBe('SIGKILL');
+    const mixed = readdirSync(folder);
+    expect(mixed.some((name) => name.endsWith('.jnl'))).toBe(true);
+    recoverFolder(folder);
+    expect(
+      Object.fromEntries(
+        readdirSync(folder)
+          .sort()
+          .map((n) => [n, readFileSync(join(folder, n), 'utf8')]),
+      ),
+    ).toEqual({
+      'a.json': 'new a.json',
+      'b.csv': 'new b.csv',
+      'c.svg': 'new c.svg',
+      'd.html': 'new d.html',
+    });
   });
 });
