@@ -1,10 +1,8 @@
 import { readFileSync } from 'node:fs';
-import { join } from 'node:path';
 import { isQuakesweepError } from '../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { formatJson, spectrumToJson, toG } from '../formats/spectrum-json.js';
 import type { Method } from '../oscillator/recurrence.js';
-import { OutputSet } from '../output/output-set.js';
 import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';
 import { type ReadOptions, readRecordText, unitWarnings } from '../record/read.js';
 import { responseSpectrum } from '../spectrum/spectrum.js';
@@ -27,7 +25,16 @@ export interface RecordTask {
 }
 
 export type RecordOutcome =
-  | { ok: true; file: string; name: string; psaG: number[][]; pgaG: number; warnings: string[] }
+  | {
+      ok: true;
+      file: string;
+      name: string;
+      psaG: number[][];
+      pgaG: number;
+      warnings: string[];
+      /** The text of <name>/spectra.json, written by the command with the rest of the suite, in one transaction. */
+      spectra: string;
+    }
   | { ok: false; file: string; name: string; error: string };
 
 /** One line for a person from whatever a record's reading or sweeping threw. */
@@ -42,7 +49,7 @@ function describeError(error: unknown, file: string): string {
   return `${file}: ${message.split('\n')[0]}`;
 }
 
-/** Read, process and sweep a record into outDir/name/spectra.json; a failure comes back as its outcome. */
+/** Read, process and sweep a record into the text of its spectra.json; a failure comes back as its outcome. */
 export function processRecord(task: RecordTask): RecordOutcome {
   const { file, name, settings } = task;
   try {
@@ -53,13 +60,9 @@ export function processRecord(task: RecordTask): RecordOutcome {
     );
     const spectrum = responseSpectrum(record, settings);
     const spectra = formatJson(spectrumToJson(spectrum));
-    new OutputSet([file])
-      .folder(task.outDir)
-      .folder(join(task.outDir, name), [['spectra.json', spectra]])
-      .write();
     const psaG = spectrum.curves.map((curve) => toG(curve.psaMS2));
     const pgaG = spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2;
-    return { ok: true, file, name, psaG, pgaG, warnings: unitWarnings(record) };
+    return { ok: true, file, name, psaG, pgaG, warnings: unitWarnings(record), spectra };
   } catch (error) {
     return { ok: false, file, name, error: describeError(error, file) };
   }

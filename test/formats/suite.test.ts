@@ -83,7 +83,7 @@ describe('suiteOutcomes', () => {
   it('keeps the records that were swept and lists the patterns that matched nothing first', () => {
     const { records: swept, failed: failures } = suiteOutcomes(
       [
-        { ok: true, file: 'in/a.csv', name: 'a', psaG: [[0.1]], pgaG: 0.1, warnings: [] },
+        { ok: true, file: 'in/a.csv', name: 'a', psaG: [[0.1]], pgaG: 0.1, warnings: [], spectra: '' },
         { ok: false, file: 'in/b.csv', name: 'b', error: 'in/b.csv: no values' },
       ],
       ['in/*.txt'],

@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -47,8 +47,6 @@ describe('the batch worker', () => {
     tasks('here').forEach((task, i) => {
       expect(posted[i].outcome).toEqual(processRecord(task));
     });
-    expect(readFileSync(join(folder, 'worker', 'rec-1', 'spectra.json'), 'utf8')).toBe(
-      readFileSync(join(folder, 'here', 'rec-1', 'spectra.json'), 'utf8'),
-    );
+    // The outcomes (spectra.json text included) are equal; nothing is written by a worker.
   });
 });

@@ -84,7 +84,15 @@ export async function runBatch(
   const names = assignNames(all);
   const mine = shard === null ? all : shardSlice(all, shard);
   const inputs = [...all, ...targetFiles];
-  new OutputSet(inputs).folder(out).write();
+  // Every output checked against every input before any work; all written at the end, as one set.
+  const planned =
+    shard === null ? ['suite.json', 'suite.csv', 'suite.svg', 'suite.html'] : [shardFileName(shard)];
+  const early = new OutputSet(inputs).folder(
+    out,
+    planned.map((f): [string, string] => [f, '']),
+  );
+  for (const file of mine) early.folder(join(out, names.get(file) as string), [['spectra.json', '']]);
+  early.check();
   const tasks = mine.map((file) => ({ file, name: names.get(file) as string, outDir: out, settings }));
   const outcomes = await runWithProgress(tasks, threads);
   for (const outcome of outcomes) {
@@ -95,7 +103,9 @@ export async function runBatch(
   // A pattern that matched nothing counts against the whole run, so only the first shard lists it.
   const listed = shard === null || shard.index === 1 ? unmatched : [];
   const { records, failed } = suiteOutcomes(outcomes, listed);
-  const outputs = new OutputSet(inputs);
+  const outputs = new OutputSet(inputs).folder(out);
+  for (const outcome of outcomes)
+    if (outcome.ok) outputs.folder(join(out, outcome.name), [['spectra.json', outcome.spectra]]);
   let what: string;
   let result = '';
   if (shard !== null) {
@@ -106,7 +116,6 @@ export async function runBatch(
     const analysis = analyseSuite(records, settings, suite);
     for (const warning of analysis.check?.warnings ?? [])
       process.stderr.write(`quakesweep: warning: suite check: ${warning}\n`);
-    outputs.file(join(out, what), formatJson(suiteJson(records, failed, settings, analysis)));
     outputs.file(join(out, 'suite.csv'), suiteToCsv(analysis, settings.periodsS));
     if (records.length > 0) {
       const written = ['suite.json', 'suite.csv', 'suite.svg'];
@@ -123,6 +132,8 @@ export async function runBatch(
       });
       for (const [file, text] of figures) outputs.file(join(out, file), text);
     }
+    // suite.json, which names the others, is renamed last.
+    outputs.file(join(out, what), formatJson(suiteJson(records, failed, settings, analysis)));
     const check = analysis.check;
     if (check !== undefined)
       result = `; suite check ${check.pass ? 'PASS' : 'FAIL'} (least mean/target ${formatNumber(check.worstRatio, 3)} at ${formatNumber(check.worstPeriodS, 3)} s, needs ${check.fraction}; preliminary)`;

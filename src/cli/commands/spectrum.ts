@@ -6,7 +6,7 @@ import { spectrumToJson } from '../../formats/spectrum-json.js';
 import { summaryTable } from '../../formats/spectrum-table.js';
 import { targetToJson } from '../../formats/target.js';
 import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
-import { checkFolder } from '../../output/output-set.js';
+import { checkFolderInputs } from '../../output/output-set.js';
 import { scaleOverlays } from '../../spectrum/scale.js';
 import { responseSpectrumParallel, type Spectrum } from '../../spectrum/spectrum.js';
 import { fitTarget, targetRecord } from '../../spectrum/target.js';
@@ -75,8 +75,11 @@ export async function runSpectrum(source: string, options: SpectrumCliOptions): 
   const axes = figureAxes(options.axes);
   const axis = svgAxisFromOptions(options);
   if (options.histories && options.svg === undefined) throw usageError('--histories needs --svg <dir>');
-  if (options.svg !== undefined) checkFolder({ path: options.svg, option: '--svg' });
   const target = targetFromOptions(options);
+  if (options.svg !== undefined)
+    checkFolderInputs({ path: options.svg, option: '--svg' }, [source, ...(target?.files ?? [])], (name) =>
+      name.endsWith('.svg'),
+    );
   const sweep = sweepFromOptions(options);
   const processed = applyProcessing(await loadRecord(source, options), options);
   const swept = await responseSpectrumParallel(processed, { ...grid, ...sweep });

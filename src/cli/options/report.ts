@@ -4,7 +4,7 @@ import { parseEquipment } from '../../anchorage/equipment.js';
 import { isQuakesweepError, usageError } from '../../base/errors.js';
 import { parseLengthUnit } from '../../base/units.js';
 import { parsePeriods } from '../../oscillator/grid.js';
-import { checkFolder } from '../../output/output-set.js';
+import { checkFolderInputs } from '../../output/output-set.js';
 import type { ReportRequest } from '../../report/assemble.js';
 import { type AxisCliOptions, periodAxisFromOptions } from './axis.js';
 import { type BuildingCliOptions, broadeningFromOptions, buildingFromOptions } from './building.js';
@@ -78,7 +78,14 @@ export async function reportRequest(
     workingDirectory: process.cwd(),
     generatedAt: generationTime(),
   };
-  checkFolder({ path: out, option: '--out' });
+  // Before any work: no input where the report would write (the output set checks the names again).
+  const named = [
+    source,
+    options.pair ?? '-',
+    ...equipment.map((e) => e.file),
+    ...(settings.target?.files ?? []),
+  ];
+  checkFolderInputs({ path: out, option: '--out' }, named, isReportFile);
   const read = await loadRecord(source, options);
   let pair: ReportRequest['pair'];
   if (options.pair !== undefined) {
@@ -133,3 +140,7 @@ export function optionWords(options: ReportCliOptions): string[] {
   }
   return words;
 }
+
+/** The names a report may write in its folder (assemble.ts): report.html, spectra.*, anchorage-N.json, figures. */
+const isReportFile = (name: string) =>
+  /^(report\.html|spectra\.(json|csv)|anchorage-\d+\.json)$/.test(name) || name.endsWith('.svg');
