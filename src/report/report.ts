@@ -11,6 +11,7 @@ import { DUCTILITY_LIMIT, ductilitySection, type ReportDuctility } from './ducti
 import type { ReportFigure } from './html.js';
 import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';
+import { CAUTION_BLOCK, pageStart } from './page.js';
 import {
   dampingSection,
   measuresSection,
@@ -21,7 +22,6 @@ import {
   rotdSection,
   targetSection,
 } from './sections.js';
-import { REPORT_CSS } from './styles.js';
 import { usableBand, usableBandText } from './usable-band.js';
 
 /** Everything one report shows. The function that renders it does no I/O. */
@@ -149,22 +149,10 @@ export function renderReport(input: ReportInput): string {
   add('limits', 'Limits of use', list([...LIMITS_OF_USE, ...(input.ductility ? [DUCTILITY_LIMIT] : [])]));
   add('reproduce', 'Reproducing this report', reproduceSection(input, tableNumber));
 
-  return `<!DOCTYPE html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<meta name="generator" content="quakesweep ${escapeHtml(VERSION)}">
-<title>${escapeHtml(input.title)}</title>
-<style>${REPORT_CSS}</style>
-</head>
-<body>
-<header class="title">
-<h1>${escapeHtml(input.title)}</h1>
-<p>Response spectrum calculation · quakesweep ${escapeHtml(VERSION)} · record ${escapeHtml(input.read.name)}</p>
+  return `${pageStart(input.title, `Response spectrum calculation · quakesweep ${escapeHtml(VERSION)} · record ${escapeHtml(input.read.name)}`)}
 ${titleBlockTable(input.titleBlock ?? {}, input.generatedAt)}
 </header>
-<div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
+${CAUTION_BLOCK}
 ${input.notes.map((note) => paragraph(note, 'intro')).join('\n')}
 <nav class="contents"><strong>Contents</strong><ol class="plain">
 ${contents.join('\n')}

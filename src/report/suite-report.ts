@@ -5,8 +5,8 @@ import type { SuiteAnalysis } from '../batch/suite.js';
 import { SUITE_CHECK_NOTE } from '../batch/suite-check.js';
 import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table } from './html.js';
 import { inlineSvg } from './inline-svg.js';
+import { CAUTION_BLOCK, pageStart } from './page.js';
 import { shellQuote } from './report.js';
-import { REPORT_CSS } from './styles.js';
 
 /** Everything the suite report shows; rendering it does no I/O. */
 export interface SuiteReportInput {
@@ -97,21 +97,9 @@ export function renderSuiteReport(input: SuiteReportInput): string {
       ? ''
       : `<h2>Records that failed</h2>\n${list(input.failed.map((f) => f.error))}`;
   const command = ['quakesweep', ...input.commandLine].map(shellQuote).join(' ');
-  return `<!DOCTYPE html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<meta name="generator" content="quakesweep ${escapeHtml(VERSION)}">
-<title>${escapeHtml(input.title)}</title>
-<style>${REPORT_CSS}</style>
-</head>
-<body>
-<header class="title">
-<h1>${escapeHtml(input.title)}</h1>
-<p>Suite of response spectra · quakesweep ${escapeHtml(VERSION)} · ${members.length} records</p>
+  return `${pageStart(input.title, `Suite of response spectra · quakesweep ${escapeHtml(VERSION)} · ${members.length} records`)}
 </header>
-<div class="caution" role="note" id="caution"><strong>Caution</strong>${escapeHtml(CAUTION)}</div>
+${CAUTION_BLOCK}
 ${check === undefined ? '' : paragraph(SUITE_CHECK_NOTE, 'caution-inline')}
 ${definitionTable('Table 1. The suite at a glance', facts)}
 <figure id="figure-1">
