@@ -141,7 +141,7 @@ export function floorSpectrumSet(
   return {
     ...combineSpectra(members.map((m) => m.spectrum)),
     members,
-    grounds: grounds.map(recordInfo),
+    grounds: grounds.map((ground) => recordInfo(ground)),
     broadening,
   };
 }

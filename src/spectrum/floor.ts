@@ -104,7 +104,7 @@ export function floorCascadeSpectrum(
   });
   if (!periods.includes(0)) floorPeak = cascadePeak(record, building, 0, 0).saMS2;
   return {
-    record: { ...recordInfo(floor), pgaMS2: floorPeak },
+    record: { ...recordInfo(floor, grid.dampings), pgaMS2: floorPeak },
     method: 'piecewise-exact',
     periodsS: periods,
     curves,

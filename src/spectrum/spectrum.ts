@@ -1,6 +1,8 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { dampingWarnings } from '../oscillator/grid.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { type Peaks, type SweepOptions, sweepOscillators } from '../oscillator/sweep.js';
+import { warningStep } from '../record/reading.js';
 import type { GroundRecord, ProcessingStep } from '../record/record.js';
 import type { ParallelSweepOptions } from '../threads/sweep-pool.js';
 
@@ -98,7 +100,7 @@ export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
     return { damping, sdM, psvMS, psaMS2, svMS, saMS2 };
   });
   return {
-    record: recordInfo(record),
+    record: recordInfo(record, peaks.dampings),
     method: peaks.method,
     periodsS: peaks.periodsS,
     curves,
@@ -106,15 +108,20 @@ export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
   };
 }
 
-/** What outputs say about the record a spectrum came from. */
-export function recordInfo(record: GroundRecord): SpectrumRecordInfo {
+/**
+ * What outputs say about the record a spectrum came from. With the dampings swept, a damping above
+ * the range the accuracy rule was measured over (dampingWarnings) is added to its processing list
+ * as a warning, so that every output of the spectrum carries it as it carries the reader's warnings.
+ */
+export function recordInfo(record: GroundRecord, dampings: ArrayLike<number> = []): SpectrumRecordInfo {
+  const warnings = dampingWarnings(dampings).map((text) => warningStep(text));
   return {
     name: record.name,
     source: record.source,
     npts: record.accelMS2.length,
     dtS: record.dtS,
     pgaMS2: record.pgaMS2,
-    processing: record.processing,
+    processing: warnings.length === 0 ? record.processing : [...record.processing, ...warnings],
   };
 }
 

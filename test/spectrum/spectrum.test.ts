@@ -16,3 +16,20 @@ describe('responseSpectrumParallel', () => {
     }
   });
 });
+
+describe('a damping above the measured range of the accuracy rule (ζ > 10) is warned in the spectrum itself', () => {
+  // docs/methods-and-verification.md: the rule was measured for ζ = 0–10 and spot-checked beyond.
+  const record = synthesizeRecord({ seed: 7, dtS: 0.01, durationS: 4, pgaG: 0.3, groundFrequencyHz: 2.5 });
+  const warnings = (dampings: number[]) =>
+    responseSpectrum(record, { periodsS: [0.5], dampings }).record.processing.filter(
+      (step) => step.operation === 'warning',
+    );
+  it('at ζ = 20 every output of the spectrum carries it (its record processing list)', () => {
+    const found = warnings([0.05, 20]);
+    expect(found).toHaveLength(1);
+    expect(found[0].description).toMatch(/2000% is above 1000%/);
+  });
+  it('not at ζ = 10', () => {
+    expect(warnings([0.05, 10])).toHaveLength(0);
+  });
+});
