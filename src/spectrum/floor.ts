@@ -81,8 +81,9 @@ export function floorCascadeSpectrum(
   checkBuilding(building);
   const record = cascadeRecord(ground.accelMS2, ground.dtS);
   const periods = Float64Array.from(grid.periodsS);
+  // The floor's own peak (T = 0) does not depend on the component damping: computed once.
+  const rigid = cascadePeak(record, building, 0, 0, grid.stepsPerPeriod);
   let steps = 0;
-  let floorPeak = 0;
   const curves = Array.from(grid.dampings, (damping): SpectrumCurve => {
     const n = periods.length;
     const curve = {
@@ -95,16 +96,14 @@ export function floorCascadeSpectrum(
     };
     for (let p = 0; p < n; p++) {
       const t = periods[p];
-      const peak = cascadePeak(record, building, t, damping, grid.stepsPerPeriod);
+      const peak = t === 0 ? rigid : cascadePeak(record, building, t, damping, grid.stepsPerPeriod);
       steps += peak.substeps * (ground.accelMS2.length - 1);
       writePeak(curve, p, t, peak);
-      if (t === 0) floorPeak = peak.saMS2;
     }
     return curve;
   });
-  if (!periods.includes(0)) floorPeak = cascadePeak(record, building, 0, 0).saMS2;
   return {
-    record: { ...recordInfo(floor, grid.dampings), pgaMS2: floorPeak },
+    record: { ...recordInfo(floor, grid.dampings), pgaMS2: rigid.saMS2 },
     method: 'piecewise-exact',
     periodsS: periods,
     curves,
