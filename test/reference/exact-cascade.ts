@@ -7,7 +7,7 @@
 // sampled peak within 1% of the largest on a grid 32 times finer, then by the parabola through
 // the three highest points. Checked against ODEX in exact-cascade.test.ts.
 import { expm as mathjsExpm, matrix } from 'mathjs';
-import { densePoints, type ExactPeaks } from './exact-response.js';
+import { densePoints, type ExactPeaks, refinedPeak } from './exact-response.js';
 
 export interface ExactBuilding {
   periodS: number;
@@ -101,27 +101,13 @@ export function exactCascadePeaks(
   const result: ExactPeaks = { sdM: 0, svMS: 0, saMS2: 0 };
   for (const [key, value] of quantities) {
     const sampled = (j: number) => value(stateAt(j), groundAt(j));
-    let largest = 0;
-    for (let j = 0; j < count; j++) largest = Math.max(largest, sampled(j));
-    let peak = largest;
-    for (let j = 1; j < count; j++) {
-      const here = sampled(j);
-      const isLocalPeak = here >= sampled(j - 1) && (j === count - 1 || here >= sampled(j + 1));
-      if (!isLocalPeak || here < 0.99 * largest) continue;
+    result[key] = refinedPeak(count, sampled, (j) => {
       const values: number[] = [sampled(j - 1)];
       walk(fine, points * REFINE, (j - 1) * REFINE, 2 * REFINE, stateAt(j - 1), (_i, x, p) =>
         values.push(value(x, p)),
       );
-      let best = 0;
-      for (let i = 1; i < values.length; i++) if (values[i] > values[best]) best = i;
-      peak = Math.max(peak, values[best]);
-      if (best > 0 && best < values.length - 1) {
-        const [a, bb, d] = [values[best - 1], values[best], values[best + 1]];
-        const curvature = a - 2 * bb + d;
-        if (curvature < 0) peak = Math.max(peak, bb - ((a - d) * (a - d)) / (8 * curvature));
-      }
-    }
-    result[key] = peak;
+      return values;
+    });
   }
   return result;
 }

@@ -93,30 +93,46 @@ export function exactPeaks(accel: Float64Array, dtS: number, periodS: number, ze
   ];
   const result: ExactPeaks = { sdM: 0, svMS: 0, saMS2: 0 };
   for (const [key, sampled, value] of quantities) {
-    let largest = 0;
-    for (let j = 0; j < count; j++) largest = Math.max(largest, sampled(j));
-    let peak = largest;
-    for (let j = 1; j < count; j++) {
-      const here = sampled(j);
-      const isLocalPeak = here >= sampled(j - 1) && (j === count - 1 || here >= sampled(j + 1));
-      if (!isLocalPeak || here < 0.99 * largest) continue;
+    result[key] = refinedPeak(count, sampled, (j) => {
       // From the sample before to the one after, on the fine grid.
       const values: number[] = [sampled(j - 1)];
       walk(fine, points * REFINE, (j - 1) * REFINE, 2 * REFINE, u[j - 1], v[j - 1], (_i, uu, vv) =>
         values.push(value(uu, vv)),
       );
-      let best = 0;
-      for (let i = 1; i < values.length; i++) if (values[i] > values[best]) best = i;
-      peak = Math.max(peak, values[best]);
-      if (best > 0 && best < values.length - 1) {
-        const [a, b, d] = [values[best - 1], values[best], values[best + 1]];
-        const curvature = a - 2 * b + d;
-        if (curvature < 0) peak = Math.max(peak, b - ((a - d) * (a - d)) / (8 * curvature));
-      }
-    }
-    result[key] = peak;
+      return values;
+    });
   }
   return result;
+}
+
+/**
+ * The peak of a densely sampled quantity: the largest sample, raised by every local peak within 1%
+ * of it resampled finely around it (`fine(j)`: the values from sample j − 1 to j + 1 on the finer
+ * grid) and by the parabola through the three highest fine values.
+ */
+export function refinedPeak(
+  count: number,
+  sampled: (j: number) => number,
+  fine: (j: number) => number[],
+): number {
+  let largest = 0;
+  for (let j = 0; j < count; j++) largest = Math.max(largest, sampled(j));
+  let peak = largest;
+  for (let j = 1; j < count; j++) {
+    const here = sampled(j);
+    const isLocalPeak = here >= sampled(j - 1) && (j === count - 1 || here >= sampled(j + 1));
+    if (!isLocalPeak || here < 0.99 * largest) continue;
+    const values = fine(j);
+    let best = 0;
+    for (let i = 1; i < values.length; i++) if (values[i] > values[best]) best = i;
+    peak = Math.max(peak, values[best]);
+    if (best > 0 && best < values.length - 1) {
+      const [a, b, d] = [values[best - 1], values[best], values[best + 1]];
+      const curvature = a - 2 * b + d;
+      if (curvature < 0) peak = Math.max(peak, b - ((a - d) * (a - d)) / (8 * curvature));
+    }
+  }
+  return peak;
 }
 
 /**
