@@ -1,14 +1,14 @@
 import { existsSync, readdirSync, readFileSync, renameSync, rmSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { TEMPORARY_NAME } from './atomic.js';
-import type { JournalEntry } from './transaction.js';
+import type { Journal } from './transaction.js';
 
 /**
  * What a process killed outright (SIGKILL, power loss) can leave in a folder, and how the next run
  * into that folder cleans it before writing: temporaries `.qs-<pid>-<tag>.tmp|old|jtmp` whose
  * process no longer runs are removed, and a journal `.qs-<pid>-<tag>.jnl` of such a process means
  * its renames had begun with every file staged, so they are finished (roll forward, giving the
- * new set whole) before the journal and the kept old copies are removed.
+ * new set whole) before the journal, its copies in other folders and the kept old copies are removed.
  */
 export function recoverFolder(folder: string): void {
   let names: string[];
@@ -45,9 +45,12 @@ function rollForwardIn(folder: string, names: string[]): void {
 }
 
 function rollForward(journal: string): void {
-  let entries: JournalEntry[] = [];
+  let entries: Journal['entries'];
+  let journals: string[];
   try {
-    entries = (JSON.parse(readFileSync(journal, 'utf8')) as { entries: JournalEntry[] }).entries;
+    const parsed = JSON.parse(readFileSync(journal, 'utf8')) as Journal;
+    entries = parsed.entries;
+    journals = parsed.journals ?? [journal];
   } catch {
     // A journal is written atomically; one that does not parse is not ours. Leave it.
     return;
@@ -55,7 +58,7 @@ function rollForward(journal: string): void {
   for (const entry of entries) {
     if (existsSync(entry.temporary)) renameSync(entry.temporary, entry.final);
   }
-  rmSync(journal, { force: true });
+  for (const copy of new Set([journal, ...journals])) rmSync(copy, { force: true });
   for (const entry of entries) if (entry.backup !== undefined) rmSync(entry.backup, { force: true });
 }
 

@@ -17,6 +17,13 @@ export interface JournalEntry {
   backup?: string;
 }
 
+/** A journal file: the renames, and every copy of the journal (removed together once they are done). */
+export interface Journal {
+  pid: number;
+  entries: JournalEntry[];
+  journals?: string[];
+}
+
 /** The file operations a transaction uses; a test swaps one to make it fail at a chosen point. */
 export interface TransactionIo {
   stage: typeof stageFile;
@@ -30,7 +37,9 @@ const REAL_IO: TransactionIo = { stage: stageFile, rename: renameSync };
  * 1. stage each file under a short temporary name in its own folder, flushed (a failure, e.g. disk
  *    full, removes the staged ones and leaves the old set untouched);
  * 2. keep each file being replaced under a second name (a hard link, else a copy);
- * 3. write a journal in `journalFolder` listing the renames (written atomically itself);
+ * 3. write a journal in `journalFolder` listing the renames (written atomically itself), and a copy
+ *    in every other folder receiving a file that a run into it would not find from there (recover.ts
+ *    looks in a folder and its parent): a run into any one folder finishes the whole set;
  * 4. rename each staged file over its destination, in the given order (callers put the file that
  *    names the others last); if one rename fails, the ones done are undone from the kept copies;
  * 5. remove the journal, then the kept copies.
@@ -57,7 +66,7 @@ export function commitFiles(
     }
   };
   remember(cleanup);
-  let journal: string | undefined;
+  let journals: string[] = [];
   try {
     for (const file of planned) {
       entries.push({ temporary: io.stage(file.final, file.contents, file.replaces), final: file.final });
@@ -65,9 +74,11 @@ export function commitFiles(
     for (const [i, file] of planned.entries()) {
       if (file.replaces !== undefined) entries[i].backup = keepCopy(file.final);
     }
-    journal = temporaryPath(journalFolder, 'jnl');
-    writeAtomic(journal, `${JSON.stringify({ pid: process.pid, entries })}\n`);
+    journals = journalFolders(entries, journalFolder).map((folder) => temporaryPath(folder, 'jnl'));
+    const text = `${JSON.stringify({ pid: process.pid, entries, journals } satisfies Journal)}\n`;
+    for (const journal of journals) writeAtomic(journal, text);
   } catch (error) {
+    for (const journal of journals) rmSync(journal, { force: true });
     cleanup();
     forget(cleanup);
     throw error;
@@ -78,13 +89,26 @@ export function commitFiles(
   } catch (error) {
     undo(entries.slice(0, done));
     cleanup();
-    rmSync(journal, { force: true });
+    for (const journal of journals) rmSync(journal, { force: true });
     forget(cleanup);
     throw error;
   }
-  rmSync(journal, { force: true });
+  for (const journal of journals) rmSync(journal, { force: true });
   cleanup();
   forget(cleanup);
+}
+
+/**
+ * Where the journal goes: `main`, and every folder of the entries that is neither `main` nor one of
+ * its subfolders (a batch's record folders are found from their parent).
+ */
+function journalFolders(entries: readonly JournalEntry[], main: string): string[] {
+  const folders = new Set([main]);
+  for (const entry of entries) {
+    const folder = dirname(entry.final);
+    if (folder !== main && dirname(folder) !== main) folders.add(folder);
+  }
+  return [...folders];
 }
 
 function commitOne(file: PlannedWrite): void {

@@ -103,4 +103,45 @@ describe('a SIGKILL between two renames', () => {
       'd.html': 'new d.html',
     });
   });
+
+  it('with files in two folders, a run into either one finishes the whole set (a journal in each)', () => {
+    const main = join(dir, 'two', 'out');
+    const figures = join(dir, 'two', 'figures');
+    mkdirSync(main, { recursive: true });
+    mkdirSync(figures, { recursive: true });
+    writeFileSync(join(main, 'a.json'), 'old a.json');
+    writeFileSync(join(figures, 'b.svg'), 'old b.svg');
+    writeFileSync(join(figures, 'c.svg'), 'old c.svg');
+    const dist = (name: string) => JSON.stringify(new URL(`../../dist/output/${name}`, import.meta.url).href);
+    // Killed after two of four renames: a.json and b.svg are new, c.svg is old, d.json not yet there.
+    const script = `
+      const { renameSync, statSync } = require('node:fs');
+      const { join } = require('node:path');
+      Promise.all([import(${dist('transaction.js')}), import(${dist('atomic.js')})]).then(([{ commitFiles }, { stageFile }]) => {
+        const planned = [[${JSON.stringify(main)}, 'a.json'], [${JSON.stringify(figures)}, 'b.svg'],
+          [${JSON.stringify(figures)}, 'c.svg'], [${JSON.stringify(main)}, 'd.json']].map(([folder, name]) => {
+          const final = join(folder, name);
+          let replaces; try { replaces = statSync(final); } catch {}
+          return { final, contents: 'new ' + name, replaces };
+        });
+        let renames = 0;
+        commitFiles(planned, ${JSON.stringify(main)}, { stage: stageFile, rename(from, to) {
+          if (renames++ === 2) process.kill(process.pid, 'SIGKILL');
+          renameSync(from, to);
+        } });
+      });`;
+    const result = spawnSync(process.execPath, ['-e', script], { encoding: 'utf8' });
+    expect(result.signal, result.stderr).toBe('SIGKILL');
+    expect(readdirSync(figures).some((name) => name.endsWith('.jnl'))).toBe(true);
+    const contents = (folder: string) =>
+      Object.fromEntries(
+        readdirSync(folder)
+          .sort()
+          .map((n) => [n, readFileSync(join(folder, n), 'utf8')]),
+      );
+    // The next run writes into the figures folder only.
+    recoverFolder(figures);
+    expect(contents(figures)).toEqual({ 'b.svg': 'new b.svg', 'c.svg': 'new c.svg' });
+    expect(contents(main)).toEqual({ 'a.json': 'new a.json', 'd.json': 'new d.json' });
+  });
 });
