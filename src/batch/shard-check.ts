@@ -10,7 +10,7 @@ export interface CheckedShard {
   allFiles: string[];
   periodsS: number[];
   dampings: number[];
-  records: { name: string; file: string; psaG: number[][]; pgaG?: number }[];
+  records: { name: string; file: string; psaG: number[][]; pgaG?: number; warnings?: string[] }[];
   failed: { file: string; error: string }[];
 }
 
@@ -75,6 +75,9 @@ export function checkShard(json: unknown, file: string): CheckedShard {
       );
     if (record['pgaG'] !== undefined && !finiteAtLeastZero(record['pgaG']))
       throw fail(`${at} (${record['name']}): "pgaG" must be a finite number ≥ 0`);
+    const warnings = record['warnings'];
+    if (warnings !== undefined && !(Array.isArray(warnings) && warnings.every((w) => typeof w === 'string')))
+      throw fail(`${at} (${record['name']}): "warnings" must be a list of texts`);
   }
   return {
     shard: { index: index as number, count: count as number },

@@ -1,5 +1,6 @@
 import { inputError, isQuakesweepError, usageError } from '../base/errors.js';
 import { formatNumber } from '../base/numbers.js';
+import { dampingWarnings } from '../oscillator/grid.js';
 import { coversPeriod, type DesignSpectrum } from '../spectrum/design.js';
 import { SCALE_CRITERION, type ScaleResult, scaleToTarget } from '../spectrum/scale.js';
 import { compareText } from './glob.js';
@@ -13,6 +14,8 @@ export interface SuiteMember {
   psaG: number[][];
   /** Peak ground acceleration as read and processed, g (absent in shard files of older versions). */
   pgaG?: number;
+  /** What reading the record warned of (absent in shard files of older versions). */
+  warnings?: string[];
 }
 
 /** What to do with a suite beyond its statistics. */
@@ -34,6 +37,8 @@ export interface MemberScaling extends Omit<ScaleResult, 'criterion'> {
 export interface SuiteAnalysis {
   /** Members sorted by name, their PSA scaled when `scaling` is present. */
   members: SuiteMember[];
+  /** The warnings of the suite: dampings beyond the measured accuracy range, then each record's, "name: text". */
+  warnings: string[];
   /** The factor applied to each member, in the order of `members` (1 when not scaled). */
   factors: number[];
   /** Statistics of the members' PSA as used (scaled when scaling). */
@@ -63,11 +68,16 @@ export function analyseSuite(
 ): SuiteAnalysis {
   const sorted = [...records].sort((a, b) => compareText(a.name, b.name));
   const { periodsS, dampings } = settings;
+  const warnings = [
+    ...dampingWarnings(dampings),
+    ...sorted.flatMap((member) => (member.warnings ?? []).map((w) => `${member.name}: ${w}`)),
+  ];
   const spectrum = options.target;
   if (spectrum === undefined) {
     if (options.scaleEach || options.check) throw usageError('scaling and the suite check need a target');
     return {
       members: sorted,
+      warnings,
       factors: sorted.map(() => 1),
       statistics: suiteStatistics(sorted, dampings, periodsS.length),
     };
@@ -106,7 +116,7 @@ export function analyseSuite(
     options.check === undefined
       ? undefined
       : checkSuite(periodsS, statistics[dampingIndex].mean_psa_g, target.psaG, options.check);
-  return { members, factors, statistics, target, scaling, check };
+  return { members, warnings, factors, statistics, target, scaling, check };
 }
 
 /**

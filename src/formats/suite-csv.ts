@@ -13,7 +13,7 @@ const r4 = (value: number) => Number(value.toPrecision(4));
  * Leading `#` lines: the caution, how the numbers were made, each record's factor and the check.
  */
 export function suiteToCsv(analysis: SuiteAnalysis, periodsS: readonly number[]): string {
-  const { members, statistics, target, scaling, check } = analysis;
+  const { members, statistics, target, scaling, check, warnings } = analysis;
   const columns: PeriodColumn[] = [];
   statistics.forEach((curve, d) => {
     const at = dampingLabel(curve.damping);
@@ -39,6 +39,7 @@ export function suiteToCsv(analysis: SuiteAnalysis, periodsS: readonly number[])
   const notes = [
     `suite of ${members.length} records; per-record columns <record>_psa_g@<damping> ${scaling ? 'are scaled by the factors below' : 'are as read and processed'}`,
     'band: minus_1_sigma = median·exp(−σ), plus_1_sigma = median·exp(+σ), σ = sigma_ln_psa (log-normal fit, n − 1)',
+    ...warnings.map((w) => `warning: ${w}`),
   ];
   if (target !== undefined)
     notes.push(`target: ${target.spectrum.description} (at ${dampingLabel(target.damping)})`);

@@ -14,6 +14,8 @@ export interface SuiteRecord {
   psaG: number[][];
   /** PGA as read and processed, g (absent in shard files of older versions). */
   pgaG?: number;
+  /** What reading the record warned of (absent in shard files of older versions). */
+  warnings?: string[];
 }
 
 export interface SuiteFailure {
@@ -37,6 +39,7 @@ export function suiteJson(
     caution: CAUTION,
     records: members.map((r) => r.name),
     failed: [...failed].sort((a, b) => compareText(a.file, b.file)),
+    warnings: analysis.warnings,
     periods_s: [...settings.periodsS],
     frequencies_hz: frequenciesHz(settings.periodsS),
     statistics: STATISTICS_METHOD,
@@ -130,7 +133,13 @@ export function suiteOutcomes(outcomes: readonly RecordOutcome[], unmatched: rea
   }));
   for (const outcome of outcomes) {
     if (outcome.ok)
-      records.push({ name: outcome.name, file: outcome.file, psaG: outcome.psaG, pgaG: outcome.pgaG });
+      records.push({
+        name: outcome.name,
+        file: outcome.file,
+        psaG: outcome.psaG,
+        pgaG: outcome.pgaG,
+        warnings: outcome.warnings,
+      });
     else failed.push({ file: outcome.file, error: outcome.error });
   }
   return { records, failed };

@@ -2,6 +2,7 @@ import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/uni
 import { dampingLabel } from '../formats/layout.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
+import { appliedSteps } from '../record/reading.js';
 import type { GroundRecord } from '../record/record.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
@@ -39,18 +40,39 @@ export function processingSection(
   const none = 'None: the record is used as read (no baseline correction, taper, filter or resampling).';
   const noFilter =
     'Usable period band after filtering: not limited by a filter (the record was not filtered).';
-  if (steps.length === 0) return [paragraph(none), paragraph(noFilter, 'usable-band')].join('\n');
-  const band = usableBand(steps);
-  return [
-    paragraph(`Applied in this order (the program's fixed order is ${PROCESSING_ORDER.join(' → ')}):`),
-    `<ol>\n${steps.map((s) => `<li><strong>${escapeHtml(s.operation)}</strong>: ${escapeHtml(s.description)}</li>`).join('\n')}\n</ol>`,
-    paragraph(
-      band === null
-        ? noFilter
-        : `Usable period band after filtering: ${usableBandText(band)}, by the rule ${USABLE_BAND_RULE}.`,
-      'usable-band',
-    ),
-  ].join('\n');
+  const parts = steps
+    .filter((s) => s.operation === 'read')
+    .map((s) => paragraph(`How it was read: ${s.description.replace(/^as read: /, '').replace(/\.$/, '')}.`));
+  const applied = appliedSteps(steps);
+  if (applied.length === 0) parts.push(paragraph(none), paragraph(noFilter, 'usable-band'));
+  else {
+    const band = usableBand(applied);
+    parts.push(
+      paragraph(`Applied in this order (the program's fixed order is ${PROCESSING_ORDER.join(' → ')}):`),
+      `<ol>\n${applied.map((s) => `<li><strong>${escapeHtml(s.operation)}</strong>: ${escapeHtml(s.description)}</li>`).join('\n')}\n</ol>`,
+      paragraph(
+        band === null
+          ? noFilter
+          : `Usable period band after filtering: ${usableBandText(band)}, by the rule ${USABLE_BAND_RULE}.`,
+        'usable-band',
+      ),
+    );
+  }
+  parts.push(...warningsBlock(steps.filter((s) => s.operation === 'warning').map(warningText)));
+  return parts.join('\n');
+}
+
+/** The text of a warning step, without its "warning: " label. */
+function warningText(step: { description: string; parameters?: Record<string, unknown> }): string {
+  const text = step.parameters?.warning;
+  return typeof text === 'string' ? text : step.description.replace(/^warning: /, '');
+}
+
+/** A block of warnings a reader cannot miss (none when there are none). */
+export function warningsBlock(warnings: readonly string[]): string[] {
+  if (warnings.length === 0) return [];
+  const items = warnings.map((w) => `<li>${escapeHtml(w)}</li>`).join('\n');
+  return [`<div class="warnings" role="note"><strong>Warnings</strong>\n<ul>\n${items}\n</ul></div>`];
 }
 
 export function measuresSection(m: GroundMotionMeasures): string {

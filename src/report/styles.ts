@@ -16,6 +16,9 @@ header.title p { margin: 2px 0; color: #333; }
 .caution { border: 2px solid #8a5a00; background: #fff6e0; padding: 8px 12px; margin: 12px 0 18px; font-weight: 600; }
 p.intro { margin: 6px 0; }
 .caution-inline { border-left: 4px solid #8a5a00; padding: 4px 10px; font-weight: 600; }
+.warnings { border-left: 4px solid #8a5a00; padding: 4px 10px; margin: 8px 0; }
+.warnings strong { display: block; font-size: 9pt; text-transform: uppercase; letter-spacing: 0.06em; color: #6b4500; }
+.warnings ul { margin: 2px 0; padding-left: 18px; }
 .caution strong { display: block; text-transform: uppercase; letter-spacing: 0.06em; font-size: 9pt; color: #6b4500; margin-bottom: 2px; }
 nav.contents ol { margin: 4px 0 0; padding-left: 0; list-style: none; columns: 2; }
 h2 { font-size: 13pt; margin: 22px 0 6px; border-bottom: 1px solid #999; padding-bottom: 2px; }

@@ -1,6 +1,7 @@
 import type { SuiteAnalysis } from '../batch/suite.js';
 import type { SuiteSettings } from '../batch/work.js';
 import type { SuiteFailure } from '../formats/suite.js';
+import { dampingWarnings } from '../oscillator/grid.js';
 
 /**
  * suite.svg and suite.html of a whole batch run; the figure and report modules (and jsdom) load
@@ -28,11 +29,14 @@ export async function suiteFigures(input: {
     target: target && { description: target.spectrum.description, psaG: target.psaG },
     check,
     methodDescription: input.methodDescription,
-    notes: scaling
-      ? [
-          `Scaling: each record by one factor, ${scaling.criterion}; factors in suite.html, suite.json and suite.csv.`,
-        ]
-      : [],
+    notes: [
+      ...(scaling
+        ? [
+            `Scaling: each record by one factor, ${scaling.criterion}; factors in suite.html, suite.json and suite.csv.`,
+          ]
+        : []),
+      ...figureWarnings(analysis, settings.dampings[d]),
+    ],
   });
   const html = renderSuiteReport({
     title: 'Suite of ground-motion records: response spectra',
@@ -48,6 +52,17 @@ export async function suiteFigures(input: {
     ['suite.svg', svg],
     ['suite.html', html],
   ];
+}
+
+/** The warnings that concern the figure (its damping's, the records'), the first few of them. */
+function figureWarnings(analysis: SuiteAnalysis, damping: number): string[] {
+  const heavy = new Set(dampingWarnings(analysis.statistics.map((c) => c.damping)));
+  const warnings = [...dampingWarnings([damping]), ...analysis.warnings.filter((w) => !heavy.has(w))];
+  const shown = 3;
+  const lines = warnings.slice(0, shown).map((w) => `Warning: ${w}`);
+  if (warnings.length > shown)
+    lines.push(`… and ${warnings.length - shown} more warnings, listed in suite.html and suite.json.`);
+  return lines;
 }
 
 /** The damping drawn: the target's, else 5% when swept, else the first. */

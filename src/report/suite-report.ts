@@ -7,6 +7,7 @@ import { definitionTable, escapeHtml, formatNumber, list, paragraph, span, table
 import { inlineSvg } from './inline-svg.js';
 import { CAUTION_BLOCK, pageStart } from './page.js';
 import { shellQuote } from './report.js';
+import { warningsBlock } from './sections.js';
 
 /** Everything the suite report shows; rendering it does no I/O. */
 export interface SuiteReportInput {
@@ -102,6 +103,7 @@ export function renderSuiteReport(input: SuiteReportInput): string {
 ${CAUTION_BLOCK}
 ${check === undefined ? '' : paragraph(SUITE_CHECK_NOTE, 'caution-inline')}
 ${definitionTable('Table 1. The suite at a glance', facts)}
+${warningsBlock(analysis.warnings).join('\n')}
 <figure id="figure-1">
 ${inlineSvg(input.figureSvg, 'suite-1')}
 <figcaption><strong>Figure 1.</strong> ${escapeHtml(`The records' PSA${scaled ? ' (scaled)' : ''}, their mean, median and ±1σ band${target ? ', the target' : ''}${check ? ', the fraction of it checked and the check range' : ''}`)} (also saved as <code>suite.svg</code>)</figcaption>

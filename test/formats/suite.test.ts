@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
 import { STATISTICS_METHOD } from '../../src/batch/statistics.js';
+import { analyseSuite } from '../../src/batch/suite.js';
 import { SHARD_FORMAT, shardFileName, shardJson, suiteJson, suiteOutcomes } from '../../src/formats/suite.js';
+import { suiteToCsv } from '../../src/formats/suite-csv.js';
 
 const settings = {
   read: { units: 'g' as const },
@@ -27,6 +29,7 @@ describe('suiteJson', () => {
       'caution',
       'records',
       'failed',
+      'warnings',
       'periods_s',
       'frequencies_hz',
       'statistics',
@@ -79,16 +82,59 @@ describe('shards', () => {
   });
 });
 
+describe('the warnings of a suite', () => {
+  it('lists a damping above 1000% and each record’s warnings by name, in suite.json and suite.csv', () => {
+    // The issue's rule: a damping beyond the measured accuracy range is warned in every output.
+    const warned = [
+      {
+        ...records[0],
+        psaG: [
+          [0.4, 0.1],
+          [0.2, 0.05],
+        ],
+        warnings: ['PGV 6 m/s is above 5 m/s'],
+      },
+      {
+        ...records[1],
+        psaG: [
+          [0.1, 0.4],
+          [0.05, 0.2],
+        ],
+      },
+    ];
+    const heavy = { ...settings, dampings: [0.05, 20] };
+    const json = suiteJson(warned, [], heavy);
+    expect(json.warnings).toEqual([
+      expect.stringMatching(/^damping 2000% is above 1000%/),
+      'b (invented): PGV 6 m/s is above 5 m/s',
+    ]);
+    const csv = suiteToCsv(analyseSuite(warned, heavy), heavy.periodsS);
+    expect(csv).toMatch(/^# warning: damping 2000% is above 1000%/m);
+    expect(csv).toContain('# warning: b (invented): PGV 6 m/s is above 5 m/s');
+    expect(suiteJson(records, [], settings).warnings).toEqual([]);
+  });
+});
+
 describe('suiteOutcomes', () => {
   it('keeps the records that were swept and lists the patterns that matched nothing first', () => {
     const { records: swept, failed: failures } = suiteOutcomes(
       [
-        { ok: true, file: 'in/a.csv', name: 'a', psaG: [[0.1]], pgaG: 0.1, warnings: [], spectra: '' },
+        {
+          ok: true,
+          file: 'in/a.csv',
+          name: 'a',
+          psaG: [[0.1]],
+          pgaG: 0.1,
+          warnings: ['PGA 9 g is above 5 g'],
+          spectra: '',
+        },
         { ok: false, file: 'in/b.csv', name: 'b', error: 'in/b.csv: no values' },
       ],
       ['in/*.txt'],
     );
-    expect(swept).toEqual([{ name: 'a', file: 'in/a.csv', psaG: [[0.1]], pgaG: 0.1 }]);
+    expect(swept).toEqual([
+      { name: 'a', file: 'in/a.csv', psaG: [[0.1]], pgaG: 0.1, warnings: ['PGA 9 g is above 5 g'] },
+    ]);
     expect(failures).toEqual([
       { file: 'in/*.txt', error: 'in/*.txt: no file matches' },
       { file: 'in/b.csv', error: 'in/b.csv: no values' },

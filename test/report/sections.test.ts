@@ -5,6 +5,7 @@ import { CAUTION } from '../../src/base/caution.js';
 import { STANDARD_GRAVITY_MS2 } from '../../src/base/units.js';
 import { groundMotionMeasures } from '../../src/record/measures.js';
 import { applyProcessingPlan } from '../../src/record/process.js';
+import { warningStep } from '../../src/record/reading.js';
 import { createRecord } from '../../src/record/record.js';
 import { assembleReport } from '../../src/report/assemble.js';
 import {
@@ -76,6 +77,25 @@ describe('processingSection', () => {
     expect(items).toHaveLength(2);
     expect(items[0].querySelector('strong')?.textContent).toBe('taper');
     expect(items[1].textContent).toBe(`${HOSTILE}: ${HOSTILE}`);
+  });
+
+  it('says how the record was read apart from the steps, and sets warnings in a block of their own', () => {
+    const steps = [
+      { operation: 'read', description: 'as read: Δt 0.01 s from the time column' },
+      ...applyProcessingPlan(sine, { taperFraction: 0.05 }).processing,
+      warningStep(`damping 2000% is above 1000% ${HOSTILE}`),
+    ];
+    const doc = page(processingSection(steps));
+    expect(doc.body.textContent).toMatch(/^How it was read: Δt 0\.01 s from the time column\./);
+    expect([...doc.querySelectorAll('ol > li')].map((li) => li.querySelector('strong')?.textContent)).toEqual(
+      ['taper'],
+    );
+    const warnings = [...doc.querySelectorAll('div.warnings li')].map((li) => li.textContent);
+    expect(warnings).toEqual([`damping 2000% is above 1000% ${HOSTILE}`]);
+    // Nothing but the read entry and a warning: the record is used as read, and says so.
+    const asRead = page(processingSection([steps[0], steps[2]]));
+    expect(asRead.body.textContent).toMatch(/None: the record is used as read/);
+    expect(asRead.querySelectorAll('div.warnings li')).toHaveLength(1);
   });
 
   it('states the usable period band after filtering and its rule, or that no filter limits it', () => {

@@ -43,6 +43,27 @@ describe('quakesweep merge', () => {
       expect(read('merged', name, 'spectra.json')).toBe(read('whole', name, 'spectra.json'));
   });
 
+  it('carries the warnings into the merged suite: a damping above 1000% and each record’s own', async () => {
+    // A fourth invented record whose PGA (8 g read in g) the reader warns of (PGA > 5 g, common practice).
+    writeFileSync(
+      join(folder.path, 'loud.txt'),
+      Array.from({ length: 300 }, (_, i) => 8 * Math.sin(i / 5)).join('\n'),
+    );
+    const heavy = ['loud.txt', 'a.txt', ...grid, '--damping', '5%,2000%', '--jobs', '1'];
+    for (const args of [
+      ['--out', 'hw'],
+      ['--shard', '1/2', '--out', 'h1'],
+      ['--shard', '2/2', '--out', 'h2'],
+    ])
+      expect((await folder.run('batch', ...heavy, ...args)).code).toBe(0);
+    expect((await folder.run('merge', 'h1', 'h2', '--out', 'hm')).code).toBe(0);
+    expect(read('hm', 'suite.json')).toBe(read('hw', 'suite.json'));
+    const warnings: string[] = JSON.parse(read('hm', 'suite.json')).warnings;
+    expect(warnings[0]).toMatch(/^damping 2000% is above 1000%/);
+    expect(warnings.some((w) => /^loud: PGA 8(\.\d+)? g read in g is above 5 g/.test(w))).toBe(true);
+    expect(read('hm', 'suite.html')).toContain('class="warnings"');
+  });
+
   it('merges into one of the shard folders, copying only the other shard’s records', async () => {
     cpSync(join(folder.path, 's1'), join(folder.path, 'into'), { recursive: true });
     expect((await folder.run('merge', 'into', 's2', '--out', 'into')).code).toBe(0);
