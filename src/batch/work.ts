@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { isQuakesweepError } from '../base/errors.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
 import { formatJson, spectrumToJson, toG } from '../formats/spectrum-json.js';
+import { periodWarnings } from '../oscillator/grid.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { applyProcessingPlan, type ProcessingPlan } from '../record/process.js';
 import { type ReadOptions, readRecordText, unitWarnings } from '../record/read.js';
@@ -62,7 +63,9 @@ export function processRecord(task: RecordTask): RecordOutcome {
     const spectra = formatJson(spectrumToJson(spectrum));
     const psaG = spectrum.curves.map((curve) => toG(curve.psaMS2));
     const pgaG = spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2;
-    return { ok: true, file, name, psaG, pgaG, warnings: unitWarnings(record), spectra };
+    const durationS = (record.accelMS2.length - 1) * record.dtS;
+    const warnings = [...unitWarnings(record), ...periodWarnings(settings.periodsS, durationS)];
+    return { ok: true, file, name, psaG, pgaG, warnings, spectra };
   } catch (error) {
     return { ok: false, file, name, error: describeError(error, file) };
   }

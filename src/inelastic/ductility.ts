@@ -179,7 +179,7 @@ export function assembleDuctilitySpectra(
     curves.push(...rows);
   });
   return {
-    record: recordInfo(record, plan.dampings),
+    record: recordInfo(record, plan.dampings, periodsS),
     model: plan.model,
     method: YIELDING_METHOD,
     convention: `${STRENGTH_CONVENTION}. ${RIGID_CONVENTION}`,
@@ -332,7 +332,7 @@ export function assembleDemandSpectra(
     curves.push(...rows);
   });
   return {
-    record: recordInfo(record, plan.dampings),
+    record: recordInfo(record, plan.dampings, periodsS),
     model: plan.model,
     method: YIELDING_METHOD,
     periodsS,

@@ -1,4 +1,5 @@
-import { usageError } from '../base/errors.js';
+import { inputError, usageError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 
 /** Periods per decade of the default grid. */
 export const DEFAULT_PERIODS_PER_DECADE = 40;
@@ -163,6 +164,38 @@ export function dampingWarnings(dampings: ArrayLike<number>): string[] {
   const list = heavy.map((z) => `${Number((z * 100).toPrecision(6))}%`).join(', ');
   return [
     `damping ${list} is above ${CAMPAIGN_DAMPING_RATIO * 100}%: the 0.5% accuracy rule was measured on every method up to ${CAMPAIGN_DAMPING_RATIO * 100}% and only spot-checked beyond; check these values independently`,
+  ];
+}
+
+/**
+ * Longest period swept, in record lengths: beyond a thousand an oscillator has barely begun its
+ * first cycle when the record ends (our limit, set far above any period of use).
+ */
+export const MAX_PERIOD_RECORD_LENGTHS = 1000;
+
+/** Refuse a period longer than MAX_PERIOD_RECORD_LENGTHS times the record (duration in s). */
+export function checkPeriodsForRecord(periodsS: ArrayLike<number>, durationS: number): void {
+  let longest = 0;
+  for (let i = 0; i < periodsS.length; i++) longest = Math.max(longest, periodsS[i]);
+  const limit = MAX_PERIOD_RECORD_LENGTHS * durationS;
+  if (longest > limit)
+    throw inputError(
+      `--periods: T = ${formatNumber(longest, 6)} s is more than ${MAX_PERIOD_RECORD_LENGTHS} times the record's length (${formatNumber(durationS)} s); use periods up to ${formatNumber(limit)} s for this record`,
+    );
+}
+
+/**
+ * The warning for periods longer than the record, if any: the sweep ends with the record, and so
+ * slow an oscillator may reach its peak afterwards, in free vibration, which is not counted.
+ */
+export function periodWarnings(periodsS: ArrayLike<number>, durationS: number): string[] {
+  const long = Array.from(periodsS).filter((t) => t > durationS);
+  if (long.length === 0) return [];
+  const from = formatNumber(Math.min(...long));
+  const to = formatNumber(Math.max(...long));
+  const which = long.length === 1 ? `T = ${from} s is` : `${long.length} periods, ${from}–${to} s, are`;
+  return [
+    `${which} longer than the record (${formatNumber(durationS)} s): the sweep ends with the record, and an oscillator that slow may reach its peak later, in free vibration, which is not counted; read these values as lower bounds`,
   ];
 }
 

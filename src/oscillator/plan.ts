@@ -1,4 +1,5 @@
 import { inputError } from '../base/errors.js';
+import { checkPeriodsForRecord } from './grid.js';
 import { COEFFICIENT as C, COEFFICIENT_STRIDE, GROUP_WIDTH, STEP_KEYS } from './layout.js';
 import { refinementThresholds } from './peak.js';
 import { type GroundBounds, recordStatistics } from './record-statistics.js';
@@ -38,6 +39,7 @@ export function planSweep(accelMS2: Float64Array, dtS: number, options: SweepOpt
   const dampings = Float64Array.from(options.dampings);
   checkSweep(accelMS2, dtS, periodsS, dampings);
   const durationS = (accelMS2.length - 1) * dtS;
+  checkPeriodsForRecord(periodsS, durationS);
   const { roughness, bounds } = recordStatistics(accelMS2, dtS);
   const prewarp = options.prewarp ?? true;
   const context = { durationS, prewarp, roughness, stepsPerPeriod: options.stepsPerPeriod };

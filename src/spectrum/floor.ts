@@ -1,5 +1,6 @@
 import { inputError } from '../base/errors.js';
 import { type CascadePeak, cascadePeak, cascadeRecord } from '../oscillator/cascade.js';
+import { checkPeriodsForRecord } from '../oscillator/grid.js';
 import { piecewiseExactCoefficients } from '../oscillator/recurrence.js';
 import { type GroundRecord, withProcessing } from '../record/record.js';
 import { broadenByEvaluation, type DenseBroadening, denseSpacing } from './broaden.js';
@@ -81,6 +82,7 @@ export function floorCascadeSpectrum(
   checkBuilding(building);
   const record = cascadeRecord(ground.accelMS2, ground.dtS);
   const periods = Float64Array.from(grid.periodsS);
+  checkPeriodsForRecord(periods, (ground.accelMS2.length - 1) * ground.dtS);
   // The floor's own peak (T = 0) does not depend on the component damping: computed once.
   const rigid = cascadePeak(record, building, 0, 0, grid.stepsPerPeriod);
   let steps = 0;
@@ -103,7 +105,7 @@ export function floorCascadeSpectrum(
     return curve;
   });
   return {
-    record: { ...recordInfo(floor, grid.dampings), pgaMS2: rigid.saMS2 },
+    record: { ...recordInfo(floor, grid.dampings, periods), pgaMS2: rigid.saMS2 },
     method: 'piecewise-exact',
     periodsS: periods,
     curves,

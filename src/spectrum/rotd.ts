@@ -138,7 +138,7 @@ export function finishRotD(first: GroundRecord, second: GroundRecord, job: RotDJ
   const periods = job.periodsS.length;
   const curve = (d: number, q: number) => job.results.slice((3 * d + q) * periods, (3 * d + q + 1) * periods);
   return {
-    records: [recordInfo(first, job.dampings), recordInfo(second, job.dampings)],
+    records: [recordInfo(first, job.dampings, job.periodsS), recordInfo(second, job.dampings, job.periodsS)],
     method: job.method,
     periodsS: job.periodsS,
     angleStepDeg: job.angleStepDeg,

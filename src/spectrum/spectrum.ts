@@ -1,5 +1,5 @@
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
-import { dampingWarnings } from '../oscillator/grid.js';
+import { dampingWarnings, periodWarnings } from '../oscillator/grid.js';
 import type { Method } from '../oscillator/recurrence.js';
 import { type Peaks, type SweepOptions, sweepOscillators } from '../oscillator/sweep.js';
 import { warningStep } from '../record/reading.js';
@@ -100,7 +100,7 @@ export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
     return { damping, sdM, psvMS, psaMS2, svMS, saMS2 };
   });
   return {
-    record: recordInfo(record, peaks.dampings),
+    record: recordInfo(record, peaks.dampings, peaks.periodsS),
     method: peaks.method,
     periodsS: peaks.periodsS,
     curves,
@@ -111,10 +111,18 @@ export function assembleSpectrum(record: GroundRecord, peaks: Peaks): Spectrum {
 /**
  * What outputs say about the record a spectrum came from. With the dampings swept, a damping above
  * the range the accuracy rule was measured over (dampingWarnings) is added to its processing list
- * as a warning, so that every output of the spectrum carries it as it carries the reader's warnings.
+ * as a warning, so that every output of the spectrum carries it as it carries the reader's warnings;
+ * so are periods longer than the record (periodWarnings).
  */
-export function recordInfo(record: GroundRecord, dampings: ArrayLike<number> = []): SpectrumRecordInfo {
-  const warnings = dampingWarnings(dampings).map((text) => warningStep(text));
+export function recordInfo(
+  record: GroundRecord,
+  dampings: ArrayLike<number> = [],
+  periodsS: ArrayLike<number> = [],
+): SpectrumRecordInfo {
+  const durationS = (record.accelMS2.length - 1) * record.dtS;
+  const warnings = [...dampingWarnings(dampings), ...periodWarnings(periodsS, durationS)].map((text) =>
+    warningStep(text),
+  );
   return {
     name: record.name,
     source: record.source,

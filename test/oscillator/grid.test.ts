@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  checkPeriodsForRecord,
   dampingWarnings,
   defaultPeriodsS,
   logSpaced,
@@ -9,6 +10,7 @@ import {
   parseDampings,
   parseFrequencies,
   parsePeriods,
+  periodWarnings,
 } from '../../src/oscillator/grid.js';
 
 describe('period grids', () => {
@@ -136,5 +138,21 @@ describe('damping limits', () => {
   it('warns above 1000%, and not at it', () => {
     expect(dampingWarnings(parseDampings('5%,1000%'))).toEqual([]);
     expect(dampingWarnings(parseDampings('5%,2000%'))[0]).toMatch(/^damping 2000% is above 1000%/);
+  });
+});
+
+describe('periods against the record’s length', () => {
+  it('warns of periods longer than the record (the sweep ends with it), and not of one equal to it', () => {
+    expect(periodWarnings([0, 1, 40], 40)).toEqual([]);
+    expect(periodWarnings([0, 1, 50], 40)[0]).toMatch(/^T = 50 s is longer than the record \(40 s\)/);
+    expect(periodWarnings([45, 50, 60], 40)[0]).toMatch(/^3 periods, 45–60 s, are longer than the record/);
+    expect(periodWarnings([45], 40)[0]).toMatch(/read these values as lower bounds$/);
+  });
+
+  it('refuses a period over 1000 record lengths with one line saying the longest allowed', () => {
+    expect(() => checkPeriodsForRecord([0, 1, 40_000], 40)).not.toThrow();
+    expect(() => checkPeriodsForRecord([0, 1, 40_001], 40)).toThrow(
+      "--periods: T = 40001 s is more than 1000 times the record's length (40 s); use periods up to 40000 s for this record",
+    );
   });
 });

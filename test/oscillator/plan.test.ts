@@ -48,10 +48,23 @@ describe('coefficients checked before the sweep', () => {
   // TypeScript one; ζ = 1e5 made the sub-step count explode. Both are refused, for both kernels.
   const short = synthesizeRecord({ seed: 3, dtS: 0.01, durationS: 2 });
   it('refuses a period too many steps long for the coefficients’ precision, on either kernel', () => {
+    // 3,000 s of record (a single pulse in zeros) lets T = 2e6 s pass the record-length ceiling
+    // (1000 lengths) while T/h = 2e8 is beyond the precision limit of 1e8.
+    const long = new Float64Array(300_001);
+    long[10] = 1;
     for (const kernel of ['js', 'wasm'] as const)
-      expect(() =>
-        sweepOscillators(short.accelMS2, short.dtS, { periodsS: [1, 1e7], dampings: [0.05], kernel }),
-      ).toThrow(/T = 10000000 s.*lose their precision/);
+      expect(() => sweepOscillators(long, 0.01, { periodsS: [1, 2e6], dampings: [0.05], kernel })).toThrow(
+        /T = 2000000 s.*lose their precision/,
+      );
+  });
+
+  it('refuses a period more than 1000 times the record’s length, and takes one up to there', () => {
+    // 2 s of record: 2,000 s is the longest period (our limit, src/oscillator/grid.ts).
+    expect(() => planSweep(short.accelMS2, short.dtS, { periodsS: [1, 1e7], dampings: [0.05] })).toThrow(
+      /T = 1e\+7 s is more than 1000 times the record's length \(2 s\); use periods up to 2000 s/,
+    );
+    const peaks = sweepOscillators(short.accelMS2, short.dtS, { periodsS: [2000], dampings: [0.05] });
+    expect(Number.isFinite(peaks.sdM[0])).toBe(true);
   });
 
   it('refuses damping above the largest measured, and takes it up to there', () => {
