@@ -5,6 +5,7 @@ import {
   readdirSync,
   readFileSync,
   rmSync,
+  symlinkSync,
   writeFileSync,
 } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -93,6 +94,34 @@ describe('quakesweep batch', () => {
     expect(result.stderr).toMatch(/is the same file as .*rec1\.txt; swept once/);
     const suite = JSON.parse(readFileSync(join(folder, 'twice', 'suite.json'), 'utf8'));
     expect(suite.records).toEqual(['rec1', 'rec2', 'rec3', 'rec4', 'rec5']);
+  });
+
+  it('sweeps a record and a symlink to it once, and keeps outputs off a linked input', async () => {
+    const linked = join(folder, 'linked');
+    mkdirSync(linked);
+    symlinkSync(join(inputs, 'rec2.txt'), join(linked, 'alias.txt'));
+    const result = await run([
+      'batch',
+      'in/rec2.txt',
+      'linked/alias.txt',
+      ...grid,
+      '--jobs',
+      '1',
+      '--out',
+      'links',
+    ]);
+    expect(result.code).toBe(0);
+    expect(result.stderr).toMatch(/alias\.txt is the same file as .*rec2\.txt; swept once/);
+    expect(JSON.parse(readFileSync(join(folder, 'links', 'suite.json'), 'utf8')).records).toEqual(['rec2']);
+    // A link planted where an output goes (links2/rec2/spectra.json → the input) is refused, the input intact.
+    mkdirSync(join(folder, 'links2', 'rec2'), { recursive: true });
+    const before = readFileSync(join(inputs, 'rec2.txt'), 'utf8');
+    symlinkSync(join(inputs, 'rec2.txt'), join(folder, 'links2', 'rec2', 'spectra.json'));
+    const refused = await run(['batch', 'in/rec2.txt', ...grid, '--jobs', '1', '--out', 'links2']);
+    expect(refused.code).toBe(2);
+    expect(refused.stderr).toMatch(/refusing to overwrite the input .*rec2\.txt/);
+    expect(readFileSync(join(inputs, 'rec2.txt'), 'utf8')).toBe(before);
+    expect(existsSync(join(folder, 'links2', 'suite.json'))).toBe(false);
   });
 
   it('three shards merged give the same suite.json byte for byte (Slurm and Kubernetes variables too)', async () => {
