@@ -2,21 +2,19 @@ import { join } from 'node:path';
 import { type Command, Option } from 'commander';
 import { CAUTION } from '../../base/caution.js';
 import { QuakesweepError, usageError } from '../../base/errors.js';
-import { formatNumber } from '../../base/numbers.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
 import { shardSlice } from '../../batch/shard.js';
 import { analyseSuite } from '../../batch/suite.js';
 import { formatJson } from '../../formats/spectrum-json.js';
-import { shardFileName, shardJson, suiteJson, suiteOutcomes } from '../../formats/suite.js';
-import { suiteToCsv } from '../../formats/suite-csv.js';
-import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
+import { shardFileName, shardJson, suiteOutcomes } from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
-import { type BatchCliOptions, batchPlan } from '../options/batch.js';
+import { addSuiteOptions, type BatchCliOptions, batchPlan } from '../options/batch.js';
 import { addGridOptions } from '../options/grid.js';
 import { addProcessingOptions } from '../options/processing.js';
 import { addRecordOptions } from '../options/record.js';
 import { runWithProgress } from '../progress.js';
+import { addSuiteFiles } from '../suite-files.js';
 
 export function registerBatch(program: Command): void {
   const command = program
@@ -34,28 +32,9 @@ export function registerBatch(program: Command): void {
       'output folder: DIR/<record>/spectra.json, DIR/suite.json, suite.csv, suite.svg and suite.html (created if its parent exists)',
     )
     .option('--threads <n>', 'threads, the main one included (default: the number of cores)')
-    .addOption(new Option('--jobs <n>', 'the old name of --threads').hideHelp())
-    .option(
-      '--target <spec>',
-      'target spectrum, as for `spectrum --target` (asce7-16:…, asce7-22:…, ec8:…, or a table file): drawn, and the suite mean checked against it',
-    )
-    .option('--scale-each', 'scale each record to the target (least squares in ln PSA) before the statistics')
-    .option(
-      '--scale-range <a:b>',
-      'periods, s, over which each record is fitted (default: 0.2T–2T of --structure-period, else every grid period > 0 the target covers)',
-    )
-    .option(
-      '--structure-period <s>',
-      'the structure period T: check (and scaling) range 0.2T–2T (common practice)',
-    )
-    .option(
-      '--check-range <a:b>',
-      'periods, s, over which the suite mean is checked (default: 0.2T–2T, else the scaling range)',
-    )
-    .option(
-      '--check-fraction <f>',
-      'least ratio of suite mean to target that passes, 0.9 or 90% (default 0.9)',
-    )
+    .addOption(new Option('--jobs <n>', 'the old name of --threads').hideHelp());
+  addSuiteOptions(command);
+  command
     .option(
       '--shard <i/N|auto>',
       'process only the i-th (1-based) of N slices of the sorted files; auto reads Slurm or Kubernetes variables',
@@ -114,29 +93,7 @@ export async function runBatch(
   } else {
     what = 'suite.json';
     const analysis = analyseSuite(records, settings, suite);
-    for (const warning of analysis.check?.warnings ?? [])
-      process.stderr.write(`quakesweep: warning: suite check: ${warning}\n`);
-    outputs.file(join(out, 'suite.csv'), suiteToCsv(analysis, settings.periodsS));
-    if (records.length > 0) {
-      const written = ['suite.json', 'suite.csv', 'suite.svg'];
-      const methodDescription = METHOD_DESCRIPTIONS[settings.method];
-      // The figure and report modules (and jsdom) load only here.
-      const { suiteFigures } = await import('../../report/suite-outputs.js');
-      const figures = await suiteFigures({
-        analysis,
-        settings,
-        failed,
-        methodDescription,
-        commandLine,
-        written,
-      });
-      for (const [file, text] of figures) outputs.file(join(out, file), text);
-    }
-    // suite.json, which names the others, is renamed last.
-    outputs.file(join(out, what), formatJson(suiteJson(records, failed, settings, analysis)));
-    const check = analysis.check;
-    if (check !== undefined)
-      result = `; suite check ${check.pass ? 'PASS' : 'FAIL'} (least mean/target ${formatNumber(check.worstRatio, 3)} at ${formatNumber(check.worstPeriodS, 3)} s, needs ${check.fraction}; preliminary)`;
+    ({ result } = await addSuiteFiles(outputs, out, { analysis, records, failed, settings, commandLine }));
   }
   outputs.write();
   process.stderr.write(`quakesweep: ${CAUTION}\n`);

@@ -4,30 +4,57 @@ import type { Command } from 'commander';
 import { inputError, usageError } from '../../base/errors.js';
 import { sanitiseName } from '../../batch/names.js';
 import { checkShard, spectraDisagreement } from '../../batch/shard-check.js';
-import { analyseSuite } from '../../batch/suite.js';
-import { formatJson } from '../../formats/spectrum-json.js';
-import { SHARD_FORMAT, type ShardJson, suiteJson } from '../../formats/suite.js';
-import { suiteToCsv } from '../../formats/suite-csv.js';
-import { METHOD_DESCRIPTIONS } from '../../oscillator/recurrence.js';
+import { analyseSuite, checkSuitePlan } from '../../batch/suite.js';
+import { SHARD_FORMAT, type ShardJson } from '../../formats/suite.js';
 import { OutputSet } from '../../output/output-set.js';
 import { announceSuccess } from '../announce.js';
+import { addSuiteOptions, type BatchCliOptions, suiteFromOptions } from '../options/batch.js';
+import { addSuiteFiles } from '../suite-files.js';
+
+type MergeCliOptions = Pick<
+  BatchCliOptions,
+  'out' | 'target' | 'scaleEach' | 'scaleRange' | 'structurePeriod' | 'checkRange' | 'checkFraction'
+>;
 
 export function registerMerge(program: Command): void {
-  program
+  const command = program
     .command('merge')
-    .description('combine the outputs of `batch --shard` runs into the suite files of a single run')
+    .description(
+      'combine the outputs of `batch --shard` runs into the suite files of a single run; with --target, scale and check the suite as batch does',
+    )
     .argument('<dirs...>', 'folders holding shard-i-of-N.json files (and the shards’ record folders)')
     .requiredOption(
       '--out <dir>',
       'folder for suite.json and the record folders (may be one of the shard folders)',
-    )
-    .action(runMerge);
+    );
+  addSuiteOptions(command);
+  command.action((dirs: string[], options: MergeCliOptions, cmd: Command) => {
+    const words = (cmd.parent as unknown as { rawArgs?: string[] } | null)?.rawArgs ?? process.argv.slice(2);
+    return runMerge(dirs, options, words);
+  });
 }
 
 const SHARD_FILE = /^shard-\d+-of-\d+\.json$/;
 
-/** Read every shard summary, check that they make one whole run, copy the record folders, write suite.json. */
-export async function runMerge(dirs: string[], { out }: { out: string }): Promise<void> {
+/**
+ * Read every shard summary, check that they make one whole run, copy the record folders, and write
+ * the suite files a single batch run would (with the target, scaling and check given here).
+ */
+export async function runMerge(
+  dirs: string[],
+  options: MergeCliOptions,
+  commandLine: readonly string[] = ['merge', ...dirs, '--out', options.out ?? ''],
+): Promise<void> {
+  const out = options.out;
+  if (out === undefined) throw usageError('--out <dir> is required');
+  const suite = suiteFromOptions(options);
+  // The suite files checked against the target's files before any work.
+  new OutputSet(suite.targetFiles)
+    .folder(
+      out,
+      ['suite.json', 'suite.csv', 'suite.svg', 'suite.html'].map((f): [string, string] => [f, '']),
+    )
+    .check();
   const shards: { dir: string; file: string; json: ShardJson }[] = [];
   for (const dir of dirs) {
     if (!existsSync(dir)) throw usageError(`${dir}: no such folder`);
@@ -68,7 +95,7 @@ export async function runMerge(dirs: string[], { out }: { out: string }): Promis
   if (missing.length > 0)
     throw usageError(`shard${missing.length > 1 ? 's' : ''} ${missing.join(', ')} of ${count} missing`);
 
-  const outputs = new OutputSet().folder(out);
+  const outputs = new OutputSet(suite.targetFiles).folder(out);
   const names = new Map<string, string>();
   const files = new Map<string, string>();
   for (const { dir, file, json } of shards) {
@@ -104,27 +131,19 @@ export async function runMerge(dirs: string[], { out }: { out: string }): Promis
   }
   const records = shards.flatMap((shard) => shard.json.records);
   const failed = shards.flatMap((shard) => shard.json.failed);
-  const suite = join(out, 'suite.json');
-  // The same suite files a single run without a target writes (the suite options are not taken with --shard).
-  const analysis = analyseSuite(records, first.settings);
-  outputs.file(suite, formatJson(suiteJson(records, failed, first.settings, analysis)));
-  outputs.file(join(out, 'suite.csv'), suiteToCsv(analysis, first.settings.periodsS));
-  const written = [suite, join(out, 'suite.csv')];
-  if (records.length > 0) {
-    const { suiteFigures } = await import('../../report/suite-outputs.js');
-    const figures = await suiteFigures({
-      analysis,
-      settings: first.settings,
-      failed,
-      methodDescription: METHOD_DESCRIPTIONS[first.settings.method],
-      commandLine: ['merge', ...dirs, '--out', out],
-      written: ['suite.json', 'suite.csv', 'suite.svg'],
-    });
-    for (const [name, text] of figures) {
-      outputs.file(join(out, name), text);
-      written.push(join(out, name));
-    }
-  }
+  const settings = first.settings;
+  checkSuitePlan(settings, suite.options);
+  const analysis = analyseSuite(records, settings, suite.options);
+  const { written, result } = await addSuiteFiles(outputs, out, {
+    analysis,
+    records,
+    failed,
+    settings,
+    commandLine,
+  });
   outputs.write();
-  announceSuccess(`merged ${count} shards: ${records.length} records, ${failed.length} failed`, written);
+  announceSuccess(
+    `merged ${count} shards: ${records.length} records, ${failed.length} failed${result}`,
+    written,
+  );
 }

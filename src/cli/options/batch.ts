@@ -1,4 +1,5 @@
 import { availableParallelism } from 'node:os';
+import type { Command } from 'commander';
 import { usageError } from '../../base/errors.js';
 import { parseShard } from '../../batch/shard.js';
 import { checkSuitePlan, type SuiteAnalysisOptions } from '../../batch/suite.js';
@@ -27,6 +28,32 @@ export interface BatchCliOptions extends RecordCliOptions, ProcessingCliOptions,
   checkFraction?: string;
 }
 
+/** The options of the suite's target, scaling and check (batch, and merge for sharded runs). */
+export function addSuiteOptions(command: Command): Command {
+  return command
+    .option(
+      '--target <spec>',
+      'target spectrum, as for `spectrum --target` (asce7-16:…, asce7-22:…, ec8:…, or a table file): drawn, and the suite mean checked against it',
+    )
+    .option('--scale-each', 'scale each record to the target (least squares in ln PSA) before the statistics')
+    .option(
+      '--scale-range <a:b>',
+      'periods, s, over which each record is fitted (default: 0.2T–2T of --structure-period, else every grid period > 0 the target covers)',
+    )
+    .option(
+      '--structure-period <s>',
+      'the structure period T: check (and scaling) range 0.2T–2T (common practice)',
+    )
+    .option(
+      '--check-range <a:b>',
+      'periods, s, over which the suite mean is checked (default: 0.2T–2T, else the scaling range)',
+    )
+    .option(
+      '--check-fraction <f>',
+      'least ratio of suite mean to target that passes, 0.9 or 90% (default 0.9)',
+    );
+}
+
 /** The default least ratio of suite mean to target (common practice: 90%). */
 export const DEFAULT_CHECK_FRACTION = 0.9;
 
@@ -52,7 +79,7 @@ export function batchPlan(options: BatchCliOptions) {
   const suite = suiteFromOptions(options);
   if (shard !== null && suite.options.target !== undefined)
     throw usageError(
-      '--target does not go with --shard yet: run the whole suite in one batch to scale and check it',
+      '--target does not go with --shard: give it (and the scaling and check options) to `quakesweep merge` of the shards',
     );
   checkSuitePlan(settings, suite.options);
   return { out, settings, threads: batchThreads(options), shard, ...suite };

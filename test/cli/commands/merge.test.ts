@@ -64,6 +64,32 @@ describe('quakesweep merge', () => {
     expect(read('hm', 'suite.html')).toContain('class="warnings"');
   });
 
+  it('scales and checks a sharded suite at the merge as one batch run does, byte for byte', async () => {
+    // The target, scaling and check options of batch, given to merge instead (ASCE/SEI 7-16 §11.4.6 form).
+    const suite = ['--target', 'asce7-16:sds=1.0,sd1=0.6,tl=8', '--scale-each', '--structure-period', '0.5'];
+    expect((await batch(...suite, '--out', 'tw')).code).toBe(0);
+    const merged = await folder.run('merge', 's1', 's2', '--out', 'tm', ...suite);
+    expect(merged.code).toBe(0);
+    expect(merged.stderr).toMatch(
+      /merged 2 shards: 3 records, 0 failed; suite check (PASS|FAIL) \(least mean\/target/,
+    );
+    for (const name of ['suite.json', 'suite.csv', 'suite.svg'])
+      expect(read('tm', name)).toBe(read('tw', name));
+    expect(JSON.parse(read('tm', 'suite.json')).scaling.records).toHaveLength(3);
+    // batch --shard points there; the scaling options need the target; a target is never overwritten.
+    expect(expectOneLineFailure(await batch('--shard', '1/2', ...suite, '--out', 'x1'))).toMatch(
+      /--target does not go with --shard: give it .* to `quakesweep merge`/,
+    );
+    expect(
+      expectOneLineFailure(await folder.run('merge', 's1', 's2', '--out', 'x2', '--scale-each')),
+    ).toMatch(/--scale-each needs --target/);
+    writeFileSync(join(folder.path, 'tm', 'suite.csv'), 'period_s,psa_g\n0.1,1\n1,0.5\n');
+    expect(
+      expectOneLineFailure(await folder.run('merge', 's1', 's2', '--out', 'tm', '--target', 'tm/suite.csv')),
+    ).toMatch(/refusing to overwrite the input tm\/suite\.csv/);
+    expect(read('tm', 'suite.csv')).toBe('period_s,psa_g\n0.1,1\n1,0.5\n');
+  });
+
   it('merges into one of the shard folders, copying only the other shard’s records', async () => {
     cpSync(join(folder.path, 's1'), join(folder.path, 'into'), { recursive: true });
     expect((await folder.run('merge', 'into', 's2', '--out', 'into')).code).toBe(0);

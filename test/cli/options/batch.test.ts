@@ -105,7 +105,7 @@ describe('batchPlan', () => {
     [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', checkRange: '2:1' }, "--check-range '2:1'"],
     [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', checkFraction: '0' }, "--check-fraction '0'"],
     [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', checkFraction: 'most' }, "--check-fraction 'most'"],
-    [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', shard: '1/2' }, '--target does not go with --shard yet'],
+    [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', shard: '1/2' }, '--target does not go with --shard: give it'],
     // Refused before any record is swept (base grid: 0, 0.5, 2 s; 2% and 5%).
     [{ target: 'asce7-16:sds=1,sd1=0.6,tl=8', damping: '2%' }, 'the target is for 5% damping'],
     [
