@@ -61,7 +61,7 @@ export function processRecord(task: RecordTask): RecordOutcome {
     );
     const spectrum = responseSpectrum(record, settings);
     const spectra = formatJson(spectrumToJson(spectrum));
-    const psaG = spectrum.curves.map((curve) => toG(curve.psaMS2));
+    const psaG = spectrum.curves.map((curve) => toG(curve.psaMS2, spectrum.periodsS));
     const pgaG = spectrum.record.pgaMS2 / STANDARD_GRAVITY_MS2;
     const durationS = (record.accelMS2.length - 1) * record.dtS;
     const warnings = [...unitWarnings(record), ...periodWarnings(settings.periodsS, durationS)];

@@ -51,7 +51,7 @@ export function dampingToJson(spectrum: Spectrum, comparison: DampingComparison,
     frequencies_hz: frequenciesHz(comparison.periodsS),
     spectra: comparison.curves.map((curve) => ({
       damping: curve.damping,
-      psa_g: toG(curve.psaMS2),
+      psa_g: toG(curve.psaMS2, comparison.periodsS),
       ratio_to_reference: Array.from(curve.ratio, nullable),
       geometric_mean_ratio: nullable(curve.geometricMeanRatio),
       published: {

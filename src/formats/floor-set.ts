@@ -68,20 +68,26 @@ export function floorSetToJson(set: FloorSpectrumSet, building: BuildingMode, as
       label: labels[i],
       record: recordToJson(member.spectrum.record),
       ground_pga_g: gFromMS2(set.grounds[i].pgaMS2),
-      spectra: curvesToJson(member.spectrum.curves),
-      unbroadened_psa_g: member.unbroadened.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2) })),
+      spectra: curvesToJson(member.spectrum.curves, set.periodsS),
+      unbroadened_psa_g: member.unbroadened.curves.map((c) => ({
+        damping: c.damping,
+        psa_g: toG(c.psaMS2, set.periodsS),
+      })),
     })),
     mean: {
       label: 'mean',
       records: set.members.length,
       pga_g: gFromMS2(set.mean.pgaMS2),
-      spectra: curvesToJson(set.mean.curves),
+      spectra: curvesToJson(set.mean.curves, set.periodsS),
     },
     envelope: {
       label: 'envelope',
       records: set.members.length,
       pga_g: gFromMS2(set.envelope.pgaMS2),
-      spectra: curvesToJson(set.envelope.curves).map((curve, d) => ({ ...curve, psa_governed_by: by[d] })),
+      spectra: curvesToJson(set.envelope.curves, set.periodsS).map((curve, d) => ({
+        ...curve,
+        psa_governed_by: by[d],
+      })),
     },
     assumptions,
   };

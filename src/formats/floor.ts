@@ -50,7 +50,7 @@ export function floorTable(
 }
 
 const psaCurvesG = (spectrum: Spectrum) =>
-  spectrum.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2) }));
+  spectrum.curves.map((c) => ({ damping: c.damping, psa_g: toG(c.psaMS2, spectrum.periodsS) }));
 
 /** The one-mode building as the floor JSONs state it. */
 export function buildingToJson(building: BuildingMode) {

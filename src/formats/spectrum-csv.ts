@@ -1,8 +1,9 @@
 import { formatNumber } from '../base/numbers.js';
-import { STANDARD_GRAVITY_MS2 as G, LENGTH_UNITS, type LengthUnit } from '../base/units.js';
+import { LENGTH_UNITS, type LengthUnit } from '../base/units.js';
 import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
 import type { TargetFit } from '../spectrum/target.js';
 import { columnsByDamping, csvText } from './layout.js';
+import { spectralG } from './spectrum-json.js';
 import { targetCsvNotes } from './target.js';
 
 export interface CsvOptions {
@@ -18,9 +19,14 @@ export function spectrumColumns(spectrum: Spectrum, unit: LengthUnit) {
   return columnsByDamping<SpectrumCurve>(spectrum.curves, [
     { name: `sd_${unit}`, heading: `SD ${unit}`, width: 14, at: (c, p) => c.sdM[p] * perLength },
     { name: `psv_${unit}_s`, at: (c, p) => c.psvMS[p] * perLength },
-    { name: 'psa_g', heading: 'PSA g', width: 12, at: (c, p) => c.psaMS2[p] / G },
+    {
+      name: 'psa_g',
+      heading: 'PSA g',
+      width: 12,
+      at: (c, p) => spectralG(c.psaMS2[p], spectrum.periodsS[p]),
+    },
     { name: `sv_${unit}_s`, at: (c, p) => c.svMS[p] * perLength },
-    { name: 'sa_g', at: (c, p) => c.saMS2[p] / G },
+    { name: 'sa_g', at: (c, p) => spectralG(c.saMS2[p], spectrum.periodsS[p]) },
   ]);
 }
 

@@ -5,9 +5,17 @@ import type { Spectrum, SpectrumCurve } from '../spectrum/spectrum.js';
 import { assertFiniteResult } from './finite.js';
 import { frequenciesHz } from './frequency.js';
 
-/** Accelerations, m/s², in g. */
-export const toG = (values: Float64Array): number[] =>
-  Array.from(values, (value) => value / STANDARD_GRAVITY_MS2);
+/**
+ * Accelerations, m/s², in g. With the periods, a value at T = 0 (the PGA itself) is written as
+ * pga_g is, the shortest decimal that converts back (0.42, not 0.41999999999999993); the others
+ * keep the plain quotient (the search costs too much for every value of a large suite).
+ */
+export const toG = (values: Float64Array, periodsS?: ArrayLike<number>): number[] =>
+  Array.from(values, (value, i) => spectralG(value, periodsS?.[i]));
+
+/** One acceleration, m/s², in g at period `periodS` (see toG). */
+export const spectralG = (valueMS2: number, periodS?: number): number =>
+  periodS === 0 ? gFromMS2(valueMS2) : valueMS2 / STANDARD_GRAVITY_MS2;
 
 /** The `record` object of the JSON outputs: name, source, npts, dt_s, pga_g and processing. */
 export function recordToJson(record: Spectrum['record']) {
@@ -30,19 +38,19 @@ export function spectrumToJson(spectrum: Spectrum) {
     method_description: METHOD_DESCRIPTIONS[spectrum.method],
     periods_s: Array.from(spectrum.periodsS),
     frequencies_hz: frequenciesHz(spectrum.periodsS),
-    spectra: curvesToJson(spectrum.curves),
+    spectra: curvesToJson(spectrum.curves, spectrum.periodsS),
   };
 }
 
 /** The curves of a spectrum as JSON: SD and PSV as computed, PSA and SA in g. */
-export function curvesToJson(curves: readonly SpectrumCurve[]) {
+export function curvesToJson(curves: readonly SpectrumCurve[], periodsS?: ArrayLike<number>) {
   return curves.map((curve) => ({
     damping: curve.damping,
     sd_m: Array.from(curve.sdM),
     psv_m_s: Array.from(curve.psvMS),
-    psa_g: toG(curve.psaMS2),
+    psa_g: toG(curve.psaMS2, periodsS),
     sv_m_s: Array.from(curve.svMS),
-    sa_g: toG(curve.saMS2),
+    sa_g: toG(curve.saMS2, periodsS),
   }));
 }
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../src/base/caution.js';
+import { spectrumToCsv } from '../../src/formats/spectrum-csv.js';
 import { formatJson, spectrumToJson } from '../../src/formats/spectrum-json.js';
 import { createRecord } from '../../src/record/record.js';
 import { responseSpectrum } from '../../src/spectrum/spectrum.js';
@@ -25,6 +26,11 @@ describe('spectrumToJson', () => {
     });
     const json = spectrumToJson(responseSpectrum(peaked, { periodsS: [0], dampings: [0.05] }));
     expect(json.record.pga_g).toBe(0.42);
+    // PSA and SA at T = 0 are the PGA, and are written as it is (JSON and CSV alike).
+    expect(json.spectra[0].psa_g[0]).toBe(0.42);
+    expect(json.spectra[0].sa_g[0]).toBe(0.42);
+    const csv = spectrumToCsv(responseSpectrum(peaked, { periodsS: [0, 1], dampings: [0.05] }));
+    expect(csv).toMatch(/^0,,0,0,0\.42,0,0\.42$/m);
   });
 
   it('writes the contract: caution, record in g, method, periods and a curve per damping', () => {
