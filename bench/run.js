@@ -244,16 +244,16 @@ for (const kernel of ['wasm', 'js']) {
     writeCsv(join(folder, `batch-${String(i).padStart(2, '0')}.csv`), r);
   const batchArgs = [cli, 'batch', join(folder, 'batch-*.csv'), '--units', 'g', '--damping', '5%'];
   for (const jobs of ['1', String(cores)]) {
-    const args = [...batchArgs, '--jobs', jobs, '--out', join(folder, `batch-out-${jobs}`)];
+    const args = [...batchArgs, '--threads', jobs, '--out', join(folder, `batch-out-${jobs}`)];
     const runs = Array.from({ length: QUICK ? 1 : REPEAT }, () => childMs(args));
-    row('batch CLI', `quakesweep batch (50 records) --jobs ${jobs}`, {
+    row('batch CLI', `quakesweep batch (50 records) --threads ${jobs}`, {
       ms: median(runs),
       note: `peak ${peakKb(args) ?? '?'} KB (main process; workers are threads of it)`,
     });
   }
 }
 
-// Constant-ductility spectra: the default grid (T = 0 and 120 periods 0.01–10 s, μ = 1, 1.5, 2,
+// Constant-ductility spectra: the default grid (T = 0 and 121 periods 0.01–10 s, μ = 1, 1.5, 2,
 // 4, 6, 8, elastoplastic, 5%) on a 40,000-sample record at 0.01 s, on one thread and with the
 // (damping, period) cells dealt out over all cores; each threaded call starts its threads and
 // closes them, as a command does. Target: under 5 s on all cores.
@@ -271,7 +271,7 @@ for (const kernel of ['wasm', 'js']) {
   constantDuctilitySpectra(head, options);
   await ductilitySpectraOnThreads(head, options, cores);
   const variant = (threads) =>
-    `default grid (120 periods × 6 μ × 5%), ${record.accelMS2.length} samples, ${threads} thread${threads === 1 ? '' : 's'}`;
+    `default grid (122 periods incl. T = 0 × 6 μ × 5%), ${record.accelMS2.length} samples, ${threads} thread${threads === 1 ? '' : 's'}`;
   const alone = await timed(() => constantDuctilitySpectra(record, options), repeat);
   const runs = alone.result.oscillatorRuns;
   row('ductility', variant(1), {
