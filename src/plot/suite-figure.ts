@@ -17,7 +17,12 @@ export interface SuiteFigureInput {
   /** The suite's statistics at that damping. */
   curve: SuiteCurve;
   scaled: boolean;
-  target?: { description: string; psaG: readonly (number | null)[] };
+  /** The target at the grid periods, and (to draw) at the periods of drawnTargetCurve. */
+  target?: {
+    description: string;
+    psaG: readonly (number | null)[];
+    curve?: { periodsS: readonly number[]; psaG: readonly number[] };
+  };
   check?: SuiteCheck;
   /** How the oscillators were solved, one line. */
   methodDescription: string;
@@ -96,12 +101,13 @@ export function suiteFigure(input: SuiteFigureInput): string {
     { label: 'mean', x: periodsS, y: curve.mean_psa_g, style: MEAN, kind: 'mean' },
   );
   if (target !== undefined) {
-    series.push({ label: 'target', x: periodsS, y: nonNull(target.psaG), style: TARGET, kind: 'target' });
+    const drawn = target.curve ?? { periodsS, psaG: nonNull(target.psaG) };
+    series.push({ label: 'target', x: drawn.periodsS, y: drawn.psaG, style: TARGET, kind: 'target' });
     if (check !== undefined) {
       series.push({
         label: `${n4(check.fraction)} × target`,
-        x: periodsS,
-        y: target.psaG.map((v) => (v === null ? Number.NaN : v * check.fraction)),
+        x: drawn.periodsS,
+        y: drawn.psaG.map((v) => (Number.isNaN(v) ? v : v * check.fraction)),
         style: FRACTION,
         kind: 'fraction',
       });

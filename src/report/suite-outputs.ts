@@ -2,6 +2,7 @@ import type { SuiteAnalysis } from '../batch/suite.js';
 import type { SuiteSettings } from '../batch/work.js';
 import type { SuiteFailure } from '../formats/suite.js';
 import { dampingWarnings } from '../oscillator/grid.js';
+import { drawnTargetCurve } from '../spectrum/target-curve.js';
 
 /**
  * suite.svg and suite.html of a whole batch run; the figure and report modules (and jsdom) load
@@ -26,7 +27,11 @@ export async function suiteFigures(input: {
     members: analysis.members.map((m) => ({ name: m.name, psaG: m.psaG[d] })),
     curve: analysis.statistics[d],
     scaled: scaling !== undefined,
-    target: target && { description: target.spectrum.description, psaG: target.psaG },
+    target: target && {
+      description: target.spectrum.description,
+      psaG: target.psaG,
+      curve: drawnTargetCurve(target.spectrum, settings.periodsS),
+    },
     check,
     methodDescription: input.methodDescription,
     notes: [

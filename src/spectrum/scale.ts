@@ -3,6 +3,7 @@ import { formatNumber } from '../base/numbers.js';
 import { type GroundRecord, type ProcessingStep, withProcessing } from '../record/record.js';
 import { coversPeriod, type DesignSpectrum } from './design.js';
 import type { Spectrum, SpectrumCurve } from './spectrum.js';
+import { drawnTargetCurve } from './target-curve.js';
 
 /** The criterion scaleToTarget applies, as stated in every output that uses it. */
 export const SCALE_CRITERION =
@@ -152,18 +153,17 @@ export function scaleOverlays(
   periodsS: ArrayLike<number>,
   recordPsaG: ArrayLike<number>,
   fit: ScaleResult & {
+    target: DesignSpectrum;
     psaG: readonly (number | null)[];
     description: string;
     applied: boolean;
     damping: number;
   },
 ): ScaleOverlay[] {
-  const covered = Array.from(periodsS, (_, i) => i).filter((i) => fit.psaG[i] !== null);
   const overlays: ScaleOverlay[] = [
     {
       label: `target: ${fit.description.split(': ')[0]}`,
-      periodsS: covered.map((i) => periodsS[i]),
-      psaG: covered.map((i) => fit.psaG[i] as number),
+      ...drawnTargetCurve(fit.target, periodsS),
       rangeS: fit.rangeS,
     },
   ];

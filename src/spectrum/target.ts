@@ -13,6 +13,7 @@ import {
 } from './design.js';
 import { type ScaleResult, scaleRecord, scaleSpectrum, scaleStep, scaleToTarget } from './scale.js';
 import type { Spectrum, SpectrumCurve } from './spectrum.js';
+import { drawnTargetCurve } from './target-curve.js';
 
 /**
  * A target spectrum as written on the command line: a code spectrum, already built, or the path
@@ -206,11 +207,7 @@ export function targetOverlay(
   periodsS: Float64Array,
   fit: TargetFit,
 ): { label: string; periodsS: number[]; psaG: number[] } {
-  return {
-    label: `target: ${fit.description.split(': ')[0]}`,
-    periodsS: Array.from(periodsS).filter((_, i) => fit.psaG[i] !== null),
-    psaG: fit.psaG.filter((value): value is number => value !== null),
-  };
+  return { label: `target: ${fit.description.split(': ')[0]}`, ...drawnTargetCurve(fit.target, periodsS) };
 }
 
 /**

@@ -100,6 +100,16 @@ describe('scaleOverlays', () => {
     maxRatio: 1,
     criterion: '',
     psaG: [0.4, 1, 0.6, null],
+    // Invented: 0.4 g at T = 0 rising to 1 g at 0.2 s, then 0.2/T g, defined to 1.5 s.
+    target: {
+      code: 'table' as const,
+      description: 'invented target',
+      parameters: {},
+      damping: undefined,
+      minPeriodS: 0,
+      maxPeriodS: 1.5,
+      psaG: (t: number) => (t <= 0.2 ? 0.4 + 3 * t : 0.2 / t),
+    },
     description: 'invented target: its parameters',
     applied: false,
     damping: 0.05,
@@ -108,12 +118,15 @@ describe('scaleOverlays', () => {
 
   it('gives the target over the periods it covers, with the fitting range, and the record times the factor', () => {
     const [target, scaled] = scaleOverlays(periods, [0.1, 0.5, 0.3, 0.05], fit);
-    expect(target).toEqual({
-      label: 'target: invented target',
-      periodsS: [0, 0.2, 1],
-      psaG: [0.4, 1, 0.6],
-      rangeS: [0.2, 1],
-    });
+    expect(target.label).toBe('target: invented target');
+    expect(target.rangeS).toEqual([0.2, 1]);
+    // Drawn at the grid periods it covers and densely to its own end (1.5 s), not only at 0, 0.2, 1.
+    const at = Array.from(target.periodsS);
+    expect(at[0]).toBe(0);
+    expect(at.at(-1)).toBe(1.5);
+    expect(at).toEqual(expect.arrayContaining([0.2, 1]));
+    expect(at.length).toBeGreaterThan(50);
+    expect(Array.from(target.psaG)).toEqual(at.map((t) => fit.target.psaG(t)));
     expect(scaled.label).toBe('record × 2 (ζ = 5%, not applied)');
     expect(scaled.psaG).toEqual([0.2, 1, 0.6, 0.1]);
     expect(scaled.rangeS).toBeUndefined();
