@@ -64,13 +64,22 @@ export function zeroPeriodNotes(
   return [`T = 0 s is in the period grid but cannot be drawn on a logarithmic axis; it is left off${value}.`];
 }
 
-/** One subtitle line per processing step; `none` stands alone when there were none (if given). */
+/**
+ * One subtitle line per processing step: "Read: …" for how the record was read, "Warning: …" for a
+ * warning, "Processed: …" for each step applied; `none` (if given) when no step was applied.
+ */
 export function processingLines(
-  processing: readonly { description: string }[] = [],
+  processing: readonly { operation?: string; description: string }[] = [],
   none?: string,
 ): string[] {
-  if (processing.length === 0 && none !== undefined) return [none];
-  return processing.map((step) => `Processed: ${step.description}`);
+  const lines = processing.map((step) => {
+    if (step.operation === 'read') return `Read: ${step.description.replace(/^as read: /, '')}`;
+    if (step.operation === 'warning') return `Warning: ${step.description.replace(/^warning: /, '')}`;
+    return `Processed: ${step.description}`;
+  });
+  const applied = processing.some((step) => step.operation !== 'read' && step.operation !== 'warning');
+  if (!applied && none !== undefined) lines.push(none);
+  return lines;
 }
 
 /** "Record: name (source)", the source left out when it is missing or the same as the name. */

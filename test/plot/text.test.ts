@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { wrapText, zeroPeriodNotes } from '../../src/plot/text.js';
+import { processingLines, wrapText, zeroPeriodNotes } from '../../src/plot/text.js';
 
 describe('wrapText', () => {
   it('breaks at spaces and keeps every word', () => {
@@ -20,5 +20,26 @@ describe('zeroPeriodNotes', () => {
       'T = 0 s (f = ∞) is in the period grid but cannot be drawn on a frequency axis; it is left off (index 0).',
     ]);
     expect(zeroPeriodNotes([0.1, 1], '', 'frequency')).toEqual([]);
+  });
+});
+
+describe('processingLines', () => {
+  it('says how the record was read, each step applied and each warning, each on its own label', () => {
+    const steps = [
+      { operation: 'read', description: 'as read: Δt 0.01 s from the header' },
+      { operation: 'taper', description: 'cosine taper, 5% at each end' },
+      { operation: 'warning', description: 'warning: PGA 9 g is above 5 g' },
+    ];
+    expect(processingLines(steps, 'Processed: nothing (as read)')).toEqual([
+      'Read: Δt 0.01 s from the header',
+      'Processed: cosine taper, 5% at each end',
+      'Warning: PGA 9 g is above 5 g',
+    ]);
+    // Read but not processed: the `none` line follows the reading.
+    expect(processingLines(steps.slice(0, 1), 'Processed: nothing (as read)')).toEqual([
+      'Read: Δt 0.01 s from the header',
+      'Processed: nothing (as read)',
+    ]);
+    expect(processingLines([], 'none')).toEqual(['none']);
   });
 });
