@@ -23,7 +23,7 @@ const finiteAtLeastZero = (v: unknown): v is number => typeof v === 'number' && 
 
 /**
  * Check a shard summary read back (shard-i-of-N.json, written by `batch --shard`): whole shard
- * numbers, a count up to MAX_SHARDS, the files a list of names, each record's PSA a finite, ≥ 0
+ * numbers, a count up to MAX_SHARDS, the files a list of names, the periods ascending, each record's PSA a finite, ≥ 0
  * table of dampings × periods, and its file one of this shard's slice of the run's files.
  */
 export function checkShard(json: unknown, file: string): CheckedShard {
@@ -45,6 +45,9 @@ export function checkShard(json: unknown, file: string): CheckedShard {
   const dampings = settings['dampings'];
   if (!Array.isArray(periodsS) || periodsS.length === 0 || !periodsS.every(finiteAtLeastZero))
     throw fail('"settings.periodsS" must be a list of finite periods ≥ 0 s');
+  // The grid is always written ascending without repeats (the period parser sorts and refuses twins).
+  if (!periodsS.every((t, i) => i === 0 || t > periodsS[i - 1]))
+    throw fail('"settings.periodsS" must be in ascending order without repeats');
   if (!Array.isArray(dampings) || dampings.length === 0 || !dampings.every(finiteAtLeastZero))
     throw fail('"settings.dampings" must be a list of finite damping ratios ≥ 0');
   const records = json['records'];

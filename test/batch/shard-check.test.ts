@@ -40,6 +40,21 @@ describe('checkShard', () => {
   });
 });
 
+describe('checkShard on the period grid', () => {
+  it('refuses periods out of order or repeated, as the grid is always written ascending (found by the merge fuzz test)', () => {
+    for (const periodsS of [
+      [1, 0],
+      [0, 0],
+    ]) {
+      const s = summary();
+      s.settings.periodsS = periodsS;
+      expect(() => checkShard(s, 's.json')).toThrow(
+        /"settings\.periodsS" must be in ascending order without repeats/,
+      );
+    }
+  });
+});
+
 describe('spectraDisagreement', () => {
   const record = summary().records[0];
   const settings = summary().settings;
