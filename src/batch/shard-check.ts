@@ -79,6 +79,19 @@ export function checkShard(json: unknown, file: string): CheckedShard {
     if (record['pgaG'] !== undefined && !finiteAtLeastZero(record['pgaG']))
       throw fail(`${at} (${record['name']}): "pgaG" must be a finite number ≥ 0`);
   }
+  // Each file of the slice is a record or a failure, once; a failure may also be a pattern that
+  // matched nothing (not among the files), but never another shard's file or one of the records.
+  const all = new Set(allFiles as string[]);
+  const done = new Set(records.map((record) => record['file'] as string));
+  for (const [i, { file: failure }] of (failed as { file: string }[]).entries()) {
+    if (all.has(failure) && !mine.has(failure))
+      throw fail(`"failed"[${i}]: ${failure} is not one of the files of shard ${index} of ${count}`);
+    if (done.has(failure)) throw fail(`"failed"[${i}]: ${failure} is also among the shard's records`);
+    done.add(failure);
+  }
+  const lost = [...mine].find((file) => !done.has(file));
+  if (lost !== undefined)
+    throw fail(`${lost} of shard ${index} of ${count} is neither among its records nor its failures`);
   return {
     shard: { index: index as number, count: count as number },
     allFiles: allFiles as string[],

@@ -55,6 +55,27 @@ describe('checkShard on the period grid', () => {
   });
 });
 
+describe('checkShard on records and failures', () => {
+  it('refuses a failure of another shard or of a record, and a file of the slice left out (found by the merge fuzz test)', () => {
+    const other = summary();
+    other.failed.push({ file: 'a.txt', error: 'invented' }); // a.txt is shard 1's
+    expect(() => checkShard(other, 's.json')).toThrow(
+      /"failed"\[1\]: a\.txt is not one of the files of shard 2 of 2/,
+    );
+    const twice = summary();
+    twice.failed.push({ file: 'c.txt', error: 'invented' });
+    expect(() => checkShard(twice, 's.json')).toThrow(/c\.txt is also among the shard's records/);
+    const lost = summary();
+    lost.records = [];
+    expect(() => checkShard(lost, 's.json')).toThrow(
+      /c\.txt of shard 2 of 2 is neither among its records nor its failures/,
+    );
+    const pattern = summary();
+    pattern.failed.push({ file: 'nothing-*.txt', error: 'no file matches' });
+    expect(checkShard(pattern, 's.json').failed).toHaveLength(2);
+  });
+});
+
 describe('spectraDisagreement', () => {
   const record = summary().records[0];
   const settings = summary().settings;
