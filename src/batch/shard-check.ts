@@ -80,12 +80,17 @@ export function checkShard(json: unknown, file: string): CheckedShard {
       throw fail(`${at} (${record['name']}): "pgaG" must be a finite number ≥ 0`);
   }
   // Each file of the slice is a record or a failure, once; a failure may also be a pattern that
-  // matched nothing (not among the files), but never another shard's file or one of the records.
+  // matched nothing (not among the files; only shard 1 lists those), but never another shard's
+  // file or one of the records.
   const all = new Set(allFiles as string[]);
   const done = new Set(records.map((record) => record['file'] as string));
   for (const [i, { file: failure }] of (failed as { file: string }[]).entries()) {
     if (all.has(failure) && !mine.has(failure))
       throw fail(`"failed"[${i}]: ${failure} is not one of the files of shard ${index} of ${count}`);
+    if (!all.has(failure) && index !== 1)
+      throw fail(
+        `"failed"[${i}]: ${failure} is not among the run's files (only shard 1 lists unmatched patterns)`,
+      );
     if (done.has(failure)) throw fail(`"failed"[${i}]: ${failure} is also among the shard's records`);
     done.add(failure);
   }

@@ -70,8 +70,16 @@ describe('checkShard on records and failures', () => {
     expect(() => checkShard(lost, 's.json')).toThrow(
       /c\.txt of shard 2 of 2 is neither among its records nor its failures/,
     );
+    // An unmatched pattern is listed by shard 1 alone (batch --shard).
     const pattern = summary();
     pattern.failed.push({ file: 'nothing-*.txt', error: 'no file matches' });
+    expect(() => checkShard(pattern, 's.json')).toThrow(/nothing-\*\.txt is not among the run's files/);
+    pattern.shard.index = 1;
+    pattern.records = [{ name: 'a', file: 'a.txt', psaG: [[0.3, 0.2]], pgaG: 0.3 }];
+    pattern.failed = [
+      { file: 'b.txt', error: 'invented' },
+      { file: 'nothing-*.txt', error: 'no file matches' },
+    ];
     expect(checkShard(pattern, 's.json').failed).toHaveLength(2);
   });
 });
