@@ -458,7 +458,7 @@ describe('hostile and plausible options through main()', () => {
   it('either succeed with finite, well-formed, neutralised outputs or refuse in one line leaving nothing', async () => {
     await fc.assert(
       fc.asyncProperty(optionCase, (c) => check(c, (argv, cwd) => runMainIn(cwd, argv))),
-      { seed: FUZZ_SEED + 30, numRuns: runs(40) },
+      { seed: FUZZ_SEED + 30, numRuns: runs(30) },
     );
     report('options via main()', { ...outcomes, maxMs: Math.round(outcomes.maxMs) });
   });
@@ -498,7 +498,7 @@ describe('hostile options as bounded child processes', () => {
           : base;
         return check(c, child, tally);
       }),
-      { seed: FUZZ_SEED + 31, numRuns: runs(4, 40) },
+      { seed: FUZZ_SEED + 31, numRuns: runs(3, 40) },
     );
     report('options as child processes', { ...tally, maxMs: Math.round(tally.maxMs) });
   });
