@@ -173,6 +173,8 @@ const NAME = pick(
     '=1+2',
     '+cmd',
     '-2',
+    '-cmd',
+    '-1+1',
     '@SUM(A1)',
     '\ttab',
     'bell\u0007',
@@ -252,20 +254,56 @@ const optionCase: fc.Arbitrary<OptionCase> = fc
   .map(({ command, chosen, values, ...rest }) => ({
     command,
     ...rest,
+    // A batch takes its record names from the files (--name does not apply to several records).
+    nameAs: command === 'batch' ? 'file' : rest.nameAs,
     options: TAKES[command]
       .filter((option) => chosen[option])
       .map((option): [string, string] => [option, values[option]]),
   }));
+
+/**
+ * Cases the long runs found (each once passed a hostile name or value through), run first every
+ * time, so the quick run in `npm test` holds them too.
+ */
+const plain = {
+  nameAs: 'file',
+  format: 'json',
+  svg: false,
+  outNamed: false,
+  toStdout: false,
+  options: [],
+} as const;
+const EXAMPLES: OptionCase[] = [
+  // A record name starting a suite.csv column name with '-' (formula injection).
+  { ...plain, command: 'batch', name: '-cmd', format: 'csv', options: [] },
+  // A file name with a bell in report.html and in anchor's CSV note; an escape in a unit warning.
+  { ...plain, command: 'report', name: 'bell\u0007', options: [] },
+  { ...plain, command: 'anchor', name: 'bell\u0007', format: 'csv', options: [] },
+  {
+    ...plain,
+    command: 'spectrum',
+    name: 'esc\u001b[31mred\u001b[0m',
+    outNamed: true,
+    options: [['--units', 'cm/s2']],
+  },
+  // DEL and a C1 CSI in a name, JSON on standard output.
+  { ...plain, command: 'anchor', name: 'c1\u009b31m del\u007f', toStdout: true, options: [] },
+  // Above 1000% damping: the warning in the output; 1e7% refused.
+  { ...plain, command: 'damping', name: 'site-a', options: [['--damping', '1001%']] },
+  { ...plain, command: 'spectrum', name: 'site-a', options: [['--damping', '1e7%']] },
+];
 
 const GRID = ['--periods', '0,0.1,0.5,2'];
 const READ = ['--units', 'g', '--dt', '0.01'];
 
 /** Write the case's input files into `dir`; the argv and the sorted names of the inputs. */
 function setUp(c: OptionCase, dir: string): { argv: string[]; inputs: string[] } {
-  const file = c.nameAs === 'file' ? `${c.name}.txt` : 'first.txt';
-  writeFileSync(join(dir, file), FIRST);
+  const base = c.nameAs === 'file' ? `${c.name}.txt` : 'first.txt';
+  writeFileSync(join(dir, base), FIRST);
   writeFileSync(join(dir, 'second.txt'), SECOND);
-  const inputs = [file, 'second.txt'];
+  const inputs = [base, 'second.txt'];
+  // As a person types a name starting with '-' (else it reads as an option).
+  const file = `./${base}`;
   const named = c.nameAs === 'option' ? ['--name', c.name] : [];
   const format = c.format === 'table' && !c.toStdout ? 'json' : c.format;
   const out = `${c.outNamed ? c.name : 'out'}.${format}`;
@@ -458,7 +496,7 @@ describe('hostile and plausible options through main()', () => {
   it('either succeed with finite, well-formed, neutralised outputs or refuse in one line leaving nothing', async () => {
     await fc.assert(
       fc.asyncProperty(optionCase, (c) => check(c, (argv, cwd) => runMainIn(cwd, argv))),
-      { seed: FUZZ_SEED + 30, numRuns: runs(30) },
+      { seed: FUZZ_SEED + 30, numRuns: runs(30), examples: EXAMPLES.map((c) => [c]) },
     );
     report('options via main()', { ...outcomes, maxMs: Math.round(outcomes.maxMs) });
   });
