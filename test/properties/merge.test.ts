@@ -338,6 +338,39 @@ const mergeCase = fc.record({
   out: fc.constantFrom<'new' | 'old set' | 'into s1'>('new', 'new', 'old set', 'into s1'),
 });
 
+/** Cases the long runs check at random, run first every time (issue 21's own merge cases). */
+const EXAMPLES: { mutations: Mutation[]; out: 'new' | 'old set' | 'into s1' }[] = [
+  {
+    label: 's2 shard.count = 0',
+    apply: (x: Shards) => x.edit(2, (j) => (j.shard.count = 0)),
+    harmless: false,
+  },
+  {
+    label: 's2 shard.count = 1e9',
+    apply: (x: Shards) => x.edit(2, (j) => (j.shard.count = 1e9)),
+    harmless: false,
+  },
+  {
+    label: 's2 summary PSA × 1.01',
+    apply: (x: Shards) => x.edit(2, (j) => (j.records[0].psaG[1][2] *= 1.01)),
+    harmless: false,
+  },
+  {
+    label: 's1 copied spectra PSA × 1.01',
+    apply: (x: Shards) => {
+      const json = x.spectra(1, 'a');
+      json.spectra[0].psa_g[1] *= 1.01;
+      x.writeSpectra(1, 'a', json);
+    },
+    harmless: false,
+  },
+  {
+    label: 'a record of s1 listed in s2',
+    apply: (x: Shards) => x.edit(2, (j) => j.records.push(x.summary(1).records[0])),
+    harmless: false,
+  },
+].map((m) => ({ mutations: [m], out: 'old set' as const }));
+
 let serial = 0;
 
 /** Relative path → bytes (as text) of every file under `dir` (empty if it does not exist). */
@@ -413,7 +446,7 @@ describe('merge of damaged shards through main()', () => {
     const tally = { cases: 0, merged: 0, refused: 0, maxMs: 0 };
     await fc.assert(
       fc.asyncProperty(mergeCase, (c) => check(c, (argv, cwd) => runMainIn(cwd, argv), tally)),
-      { seed: FUZZ_SEED + 40, numRuns: runs(40) },
+      { seed: FUZZ_SEED + 40, numRuns: runs(40), examples: EXAMPLES.map((c) => [c]) },
     );
     report('merge via main()', { ...tally, maxMs: Math.round(tally.maxMs) });
   });
