@@ -2,7 +2,7 @@
 // The long fuzz campaign: the property tests of test/properties/ with every case count multiplied by
 // QUAKESWEEP_FUZZ_SCALE (default 170). At the default scale: reader cases in-process (about 100,000),
 // spectrum cases through main() in-process and through a few hundred child processes, hostile and
-// plausible options across the commands (options.test.ts: 6,800 in-process, 160 bounded child
+// plausible options across the commands (options.test.ts: 5,100 in-process, 120 bounded child
 // processes), and damaged shards merged (merge.test.ts: 6,800 in-process, 120 child processes).
 // Then the crash-safety kill test (test/output/crash-safety.test.ts) with QUAKESWEEP_KILLS=100
 // random kills of `report` and `batch`, about 3 minutes; `--kills N` sets the number, `--no-kills`
