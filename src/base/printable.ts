@@ -13,8 +13,10 @@ const FORBIDDEN =
   /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g;
 
 export function printable(text: string): string {
-  return text
-    .replace(ESCAPE_SEQUENCE, '')
-    .replace(FORBIDDEN, '')
-    .replace(/[\t\r\n\u2028\u2029]/g, ' ');
+  return markupSafe(text).replace(/[\t\r\n\u2028\u2029]/g, ' ');
+}
+
+/** The same without joining lines: for text kept over several lines (a file name in a report's table or command line, a note). */
+export function markupSafe(text: string): string {
+  return text.replace(ESCAPE_SEQUENCE, '').replace(FORBIDDEN, '');
 }

@@ -23,7 +23,7 @@ const finiteAtLeastZero = (v: unknown): v is number => typeof v === 'number' && 
 
 /**
  * Check a shard summary read back (shard-i-of-N.json, written by `batch --shard`): whole shard
- * numbers, a count up to MAX_SHARDS, the files a list of names, each record's PSA a finite, ≥ 0
+ * numbers, a count up to MAX_SHARDS, the files a list of names, the periods ascending, each record's PSA a finite, ≥ 0
  * table of dampings × periods, and its file one of this shard's slice of the run's files.
  */
 export function checkShard(json: unknown, file: string): CheckedShard {
@@ -45,6 +45,9 @@ export function checkShard(json: unknown, file: string): CheckedShard {
   const dampings = settings['dampings'];
   if (!Array.isArray(periodsS) || periodsS.length === 0 || !periodsS.every(finiteAtLeastZero))
     throw fail('"settings.periodsS" must be a list of finite periods ≥ 0 s');
+  // The grid is always written ascending without repeats (the period parser sorts and refuses twins).
+  if (!periodsS.every((t, i) => i === 0 || t > periodsS[i - 1]))
+    throw fail('"settings.periodsS" must be in ascending order without repeats');
   if (!Array.isArray(dampings) || dampings.length === 0 || !dampings.every(finiteAtLeastZero))
     throw fail('"settings.dampings" must be a list of finite damping ratios ≥ 0');
   const records = json['records'];
@@ -79,6 +82,24 @@ export function checkShard(json: unknown, file: string): CheckedShard {
     if (warnings !== undefined && !(Array.isArray(warnings) && warnings.every((w) => typeof w === 'string')))
       throw fail(`${at} (${record['name']}): "warnings" must be a list of texts`);
   }
+  // Each file of the slice is a record or a failure, once; a failure may also be a pattern that
+  // matched nothing (not among the files; only shard 1 lists those), but never another shard's
+  // file or one of the records.
+  const all = new Set(allFiles as string[]);
+  const done = new Set(records.map((record) => record['file'] as string));
+  for (const [i, { file: failure }] of (failed as { file: string }[]).entries()) {
+    if (all.has(failure) && !mine.has(failure))
+      throw fail(`"failed"[${i}]: ${failure} is not one of the files of shard ${index} of ${count}`);
+    if (!all.has(failure) && index !== 1)
+      throw fail(
+        `"failed"[${i}]: ${failure} is not among the run's files (only shard 1 lists unmatched patterns)`,
+      );
+    if (done.has(failure)) throw fail(`"failed"[${i}]: ${failure} is also among the shard's records`);
+    done.add(failure);
+  }
+  const lost = [...mine].find((file) => !done.has(file));
+  if (lost !== undefined)
+    throw fail(`${lost} of shard ${index} of ${count} is neither among its records nor its failures`);
   return {
     shard: { index: index as number, count: count as number },
     allFiles: allFiles as string[],

@@ -1,4 +1,5 @@
 import { CAUTION } from '../base/caution.js';
+import { printable } from '../base/printable.js';
 
 /**
  * The two lines every successful command ends with on standard error: what was made and where it
@@ -6,7 +7,8 @@ import { CAUTION } from '../base/caution.js';
  */
 export function announceSuccess(summary: string, written: readonly string[]): void {
   const where = written.length === 0 ? '' : `; wrote ${written.join(', ')}`;
-  process.stderr.write(`quakesweep: done: ${summary}${where}\n`);
+  // Names and paths from the command line may hold terminal control sequences (see printable).
+  process.stderr.write(`quakesweep: done: ${printable(`${summary}${where}`)}\n`);
   process.stderr.write(`quakesweep: caution: ${CAUTION}\n`);
 }
 

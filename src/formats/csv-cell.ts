@@ -5,10 +5,14 @@
  * `+3e-2`) is left as it is, so numbers stay numbers. Then a cell holding a comma, a quote or a
  * line break is quoted (RFC 4180).
  */
+import { markupSafe } from '../base/printable.js';
+
 const FORMULA_START = /^[=+\-@\t\r]/;
 const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 
-export function csvCell(text: string): string {
+export function csvCell(cell: string): string {
+  // A name from a file may hold terminal escapes or control characters: removed (see printable).
+  const text = markupSafe(cell);
   const safe = FORMULA_START.test(text) && !PLAIN_NUMBER.test(text) ? `'${text}` : text;
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
@@ -19,7 +23,7 @@ export function csvCell(text: string): string {
  * would drop), since a spreadsheet splits the note at its commas too.
  */
 export function csvNote(note: string): string {
-  return note
+  return markupSafe(note)
     .replace(/[\r\n]+/g, ' ')
     .split(',')
     .map((piece, i) => {

@@ -58,9 +58,15 @@ export type SpectrumJson = ReturnType<typeof spectrumToJson>;
 
 /**
  * JSON text with two-space indentation and numbers in full precision (same input, same bytes).
- * Refuses NaN and ±Infinity, which JSON.stringify would silently turn into null.
+ * Refuses NaN and ±Infinity, which JSON.stringify would silently turn into null. DEL and the C1
+ * controls (a file name may hold them; some terminals act on U+009B as on ESC [) are written as
+ * \u escapes, which JSON.stringify leaves raw: the same JSON value, nothing a terminal acts on.
  */
 export function formatJson(value: unknown): string {
   assertFiniteResult(value);
-  return `${JSON.stringify(value, null, 2)}\n`;
+  const text = JSON.stringify(value, null, 2).replace(
+    /[\u007f-\u009f]/g,
+    (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`,
+  );
+  return `${text}\n`;
 }

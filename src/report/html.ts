@@ -1,4 +1,5 @@
 import { formatNumber as formatBase } from '../base/numbers.js';
+import { markupSafe } from '../base/printable.js';
 
 /** A figure of the report: the SVG text as the figure functions write it, and the file it is also saved as. */
 export interface ReportFigure {
@@ -9,9 +10,12 @@ export interface ReportFigure {
 
 const ENTITIES = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 
-/** Escape text for HTML element content and double-quoted attribute values. */
+/**
+ * Escape text for HTML element content and double-quoted attribute values; terminal escape
+ * sequences and characters XML forbids (a file name may hold them) are removed first.
+ */
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (character) => ENTITIES[character as keyof typeof ENTITIES]);
+  return markupSafe(text).replace(/[&<>"']/g, (character) => ENTITIES[character as keyof typeof ENTITIES]);
 }
 
 /** A table cell value: text is escaped; numbers are written with `digits` significant figures. */

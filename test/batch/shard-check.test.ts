@@ -40,6 +40,50 @@ describe('checkShard', () => {
   });
 });
 
+describe('checkShard on the period grid', () => {
+  it('refuses periods out of order or repeated, as the grid is always written ascending (found by the merge fuzz test)', () => {
+    for (const periodsS of [
+      [1, 0],
+      [0, 0],
+    ]) {
+      const s = summary();
+      s.settings.periodsS = periodsS;
+      expect(() => checkShard(s, 's.json')).toThrow(
+        /"settings\.periodsS" must be in ascending order without repeats/,
+      );
+    }
+  });
+});
+
+describe('checkShard on records and failures', () => {
+  it('refuses a failure of another shard or of a record, and a file of the slice left out (found by the merge fuzz test)', () => {
+    const other = summary();
+    other.failed.push({ file: 'a.txt', error: 'invented' }); // a.txt is shard 1's
+    expect(() => checkShard(other, 's.json')).toThrow(
+      /"failed"\[1\]: a\.txt is not one of the files of shard 2 of 2/,
+    );
+    const twice = summary();
+    twice.failed.push({ file: 'c.txt', error: 'invented' });
+    expect(() => checkShard(twice, 's.json')).toThrow(/c\.txt is also among the shard's records/);
+    const lost = summary();
+    lost.records = [];
+    expect(() => checkShard(lost, 's.json')).toThrow(
+      /c\.txt of shard 2 of 2 is neither among its records nor its failures/,
+    );
+    // An unmatched pattern is listed by shard 1 alone (batch --shard).
+    const pattern = summary();
+    pattern.failed.push({ file: 'nothing-*.txt', error: 'no file matches' });
+    expect(() => checkShard(pattern, 's.json')).toThrow(/nothing-\*\.txt is not among the run's files/);
+    pattern.shard.index = 1;
+    pattern.records = [{ name: 'a', file: 'a.txt', psaG: [[0.3, 0.2]], pgaG: 0.3 }];
+    pattern.failed = [
+      { file: 'b.txt', error: 'invented' },
+      { file: 'nothing-*.txt', error: 'no file matches' },
+    ];
+    expect(checkShard(pattern, 's.json').failed).toHaveLength(2);
+  });
+});
+
 describe('spectraDisagreement', () => {
   const record = summary().records[0];
   const settings = summary().settings;

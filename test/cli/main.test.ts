@@ -308,4 +308,16 @@ describe('hostile record names (invented)', () => {
     // biome-ignore lint/suspicious/noControlCharactersInRegex: looking for control characters is the point
     expect(result.stderr + result.stdout).not.toMatch(/[\u0000-\u0008\u001b]/);
   });
+
+  it('an escape sequence in a file name reaches neither a warning nor the summary on stderr (found by the options fuzz test)', async () => {
+    // The name of the record is made printable; the path in a unit warning and in "wrote …" once was not.
+    const file = join(f.dir, 'esc\u001b[31mred\u001b[0m.txt');
+    writeFileSync(file, readFileSync(f.h1));
+    const out = join(f.dir, 'esc\u001b]0;title\u0007.json');
+    const result = await runMain(['spectrum', file, '--units', 'cm/s2', '--out', out]);
+    expect(result.code).toBe(0);
+    expect(result.stderr).toMatch(/warning: .*escred\.txt: PGA/);
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: looking for control characters is the point
+    expect(result.stderr).not.toMatch(/[\u0000-\u0008\u001b]/);
+  });
 });

@@ -28,6 +28,13 @@ describe('csvCell', () => {
   });
 });
 
+describe('csvCell and csvNote on names from files', () => {
+  it('drop terminal escapes and control characters a file name brought in (found by the options fuzz test)', () => {
+    expect(csvCell('bell\u0007 esc\u001b[31mred')).toBe('bell escred');
+    expect(csvNote('source: bell\u0007.txt, \u001b[31m=1')).toBe("source: bell.txt,' =1");
+  });
+});
+
 describe('csvNote', () => {
   it('neutralises every piece between commas, after blanks and quotes, but not numbers', () => {
     expect(csvNote('record: x,=HYPERLINK("e"); npts 3')).toBe(`record: x,'=HYPERLINK("e"); npts 3`);

@@ -75,4 +75,10 @@ describe('formatJson', () => {
     expect(() => formatJson({ a: [1, Number.NaN] })).toThrow(/a\[1\] = NaN/);
     expect(() => formatJson({ b: { c: Number.POSITIVE_INFINITY } })).toThrow(/b\.c = Infinity/);
   });
+
+  it('writes DEL and C1 controls of a name as \\u escapes: the same value, nothing a terminal acts on (found by the options fuzz test)', () => {
+    const text = formatJson({ source: 'del\u007f c1\u009b31m.txt' });
+    expect(text).toBe('{\n  "source": "del\\u007f c1\\u009b31m.txt"\n}\n');
+    expect(JSON.parse(text).source).toBe('del\u007f c1\u009b31m.txt');
+  });
 });

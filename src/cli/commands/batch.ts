@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import { type Command, Option } from 'commander';
 import { CAUTION } from '../../base/caution.js';
 import { QuakesweepError, usageError } from '../../base/errors.js';
+import { printable } from '../../base/printable.js';
 import { expandPatterns } from '../../batch/glob.js';
 import { assignNames } from '../../batch/names.js';
 import { shardSlice } from '../../batch/shard.js';
@@ -59,7 +60,7 @@ export async function runBatch(
   const { files: all, unmatched, duplicates } = expandPatterns(args);
   if (all.length === 0) throw usageError(`no file matches ${unmatched.join(', ')}`);
   for (const { dropped, kept } of duplicates)
-    process.stderr.write(`quakesweep: ${dropped} is the same file as ${kept}; swept once\n`);
+    process.stderr.write(`quakesweep: ${printable(`${dropped} is the same file as ${kept}`)}; swept once\n`);
   const names = assignNames(all);
   const mine = shard === null ? all : shardSlice(all, shard);
   const inputs = [...all, ...targetFiles];
@@ -77,7 +78,7 @@ export async function runBatch(
   for (const outcome of outcomes) {
     if (!outcome.ok) continue;
     for (const warning of outcome.warnings)
-      process.stderr.write(`quakesweep: warning: ${outcome.file}: ${warning}\n`);
+      process.stderr.write(`quakesweep: warning: ${printable(`${outcome.file}: ${warning}`)}\n`);
   }
   // A pattern that matched nothing counts against the whole run, so only the first shard lists it.
   const listed = shard === null || shard.index === 1 ? unmatched : [];
@@ -98,10 +99,10 @@ export async function runBatch(
   outputs.write();
   process.stderr.write(`quakesweep: ${CAUTION}\n`);
   process.stderr.write(
-    `quakesweep: ${records.length} of ${records.length + failed.length} records done${result}; ${join(out, what)}\n`,
+    `quakesweep: ${records.length} of ${records.length + failed.length} records done${result}; ${printable(join(out, what))}\n`,
   );
   if (failed.length > 0) {
-    for (const f of failed) process.stderr.write(`quakesweep: failed: ${f.error}\n`);
+    for (const f of failed) process.stderr.write(`quakesweep: failed: ${printable(f.error)}\n`);
     throw new QuakesweepError(
       'internal',
       `${failed.length} record${failed.length === 1 ? '' : 's'} failed (listed above and in ${what})`,

@@ -1,6 +1,7 @@
 import { closeSync, openSync, readSync } from 'node:fs';
 import type { Command } from 'commander';
 import { inputError, usageError } from '../../base/errors.js';
+import { printable } from '../../base/printable.js';
 import { parseAccelerationUnit } from '../../base/units.js';
 import { parseFixedWidths } from '../../record/fixed.js';
 import { type ReadOptions, type RecordLayout, readRecordStream, unitWarnings } from '../../record/read.js';
@@ -92,7 +93,7 @@ export async function loadRecord(source: string, options: RecordCliOptions): Pro
     throw error;
   });
   for (const warning of unitWarnings(record))
-    process.stderr.write(`quakesweep: warning: ${source}: ${warning}\n`);
+    process.stderr.write(`quakesweep: warning: ${printable(`${source}: ${warning}`)}\n`);
   return record;
 }
 
