@@ -42,9 +42,16 @@ export function longLineError(file: string, line: number | undefined) {
 /** A field as shown in a message: quoted, cut short, with unprintable characters escaped. */
 export function quote(text: string): string {
   const short = text.length > 40 ? `${text.slice(0, 40)}…` : text;
-  // Line and paragraph separators and the byte-order mark are escaped too: the message stays one line.
-  return `'${short.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
+  return `'${escapeUnprintable(short)}'`;
+}
+
+/**
+ * Text from a file as a message shows it: unprintable characters escaped (\xNN, \uNNNN); line and
+ * paragraph separators and the byte-order mark too, so that the message stays one line.
+ */
+export function escapeUnprintable(text: string): string {
+  return text.replace(/[^\x20-\x7e\u00a0-\u2027\u202a-\ufefe\uff00-\uffff]/g, (c) => {
     const hex = c.charCodeAt(0).toString(16);
     return hex.length <= 2 ? `\\x${hex.padStart(2, '0')}` : `\\u${hex.padStart(4, '0')}`;
-  })}'`;
+  });
 }

@@ -1,6 +1,7 @@
 import { inputError, usageError } from '../base/errors.js';
 import { formatNumber } from '../base/numbers.js';
 import { ACCELERATION_UNIT_NAMES, ACCELERATION_UNITS, type AccelerationUnit } from '../base/units.js';
+import { escapeUnprintable } from './fields.js';
 import { columnNameUnit, type HeaderKeys, timeNameInMs } from './header.js';
 import { type LayoutSeen, wrappedHint } from './layout-choice.js';
 import { checkTimeScale, plausibilityWarnings } from './plausibility.js';
@@ -53,7 +54,8 @@ export class ReadingSources {
   valueColumn(columns: number, names: Names, seen?: LayoutSeen): number {
     const o = this.options;
     const named = names !== undefined && names.fields.length === columns ? names.fields : undefined;
-    const listed = named === undefined ? '' : `; its columns: ${named.join(', ')}`;
+    const shown = named?.map(escapeUnprintable).join(', ');
+    const listed = named === undefined ? '' : `; its columns: ${shown}`;
     let column: number;
     if (typeof o.column === 'string') {
       const wanted = bare(o.column);
@@ -69,8 +71,7 @@ export class ReadingSources {
     } else if (columns === 2) {
       column = 2;
     } else {
-      const which =
-        named === undefined ? `time, then ${columns - 1} value columns with no names` : named.join(', ');
+      const which = named === undefined ? `time, then ${columns - 1} value columns with no names` : shown;
       // With no names the columns may be values wrapped several a line.
       const or = named === undefined && seen !== undefined ? `; or, if it ${wrappedHint(seen)}` : '';
       throw usageError(

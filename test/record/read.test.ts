@@ -84,6 +84,18 @@ describe('layouts', () => {
     expect(values(read('t,a\n0,1\n0.02,2\n'))).toEqual([1, 2]); // one value column: no need to choose
   });
 
+  it('keeps the message one line when column names hold separators or control characters', () => {
+    // Invented names with a line and a paragraph separator (U+2028, U+2029) in them.
+    const text = 't,a\u2028x,b\u2029,c\n0,1,10,100\n0.02,2,20,200\n';
+    const message = failure(() => read(text)).message;
+    expect(message).toBe(
+      'rec.csv has 4 columns (t, a\\u2028x, b, c): choose the acceleration with --column (a name or a number from 2 to 4)',
+    );
+    expect(failure(() => read(text, { column: 'z' })).message).toMatch(
+      /its columns: t, a\\u2028x, b, c$/,
+    );
+  });
+
   it('reads values wrapped several a line, in row order, after --skip header lines', () => {
     const text = 'INVENTED STATION\nnpts 7 dt 0.02\n1 2 3\n4 5 6\n7\n';
     const record = read(text, { layout: 'wrapped', skip: 2, dtS: 0.02 });
