@@ -1,6 +1,6 @@
 import { expm } from './expm.js';
 import { recordStatistics } from './record-statistics.js';
-import { fastestPoleRatio, MIN_STEPS_PER_PERIOD, recordSubsteps } from './substeps.js';
+import { checkedSubsteps, fastestPoleRatio, MIN_STEPS_PER_PERIOD, recordSubsteps } from './substeps.js';
 
 /**
  * The exact continuous cascade of a floor spectrum: the building's mode q and the equipment
@@ -55,11 +55,16 @@ export function cascadeSubsteps(
           (record.dtS * Math.max(MIN_STEPS_PER_PERIOD * fastestPoleRatio(zeta), stepsPerPeriod)) / t - 1e-9,
         )
       : 1;
-  return Math.max(
+  const substeps = Math.max(
     Math.ceil(record.roughness * record.roughness - 1e-9),
     recordSubsteps('piecewise-exact', record.roughness),
     perPeriod(building.periodS, building.damping),
     perPeriod(periodS, damping),
+  );
+  return checkedSubsteps(
+    substeps,
+    record.dtS,
+    periodS > 0 ? Math.min(periodS, building.periodS) : building.periodS,
   );
 }
 

@@ -1,3 +1,5 @@
+import { inputError } from '../base/errors.js';
+import { formatNumber } from '../base/numbers.js';
 import type { Method } from './recurrence.js';
 
 /**
@@ -132,10 +134,30 @@ export function stepsPerPeriod(method: Method, periodS: number, context: Substep
 /** How many equal sub-steps each record step is divided into for an oscillator of period T. */
 export function substepCount(method: Method, periodS: number, dtS: number, context: SubstepContext): number {
   if (periodS <= 0) return 1;
-  return Math.max(
-    recordSubsteps(method, context.roughness ?? 0, context.damping),
-    Math.ceil((dtS * stepsPerPeriod(method, periodS, context)) / periodS - 1e-9),
+  return checkedSubsteps(
+    Math.max(
+      recordSubsteps(method, context.roughness ?? 0, context.damping),
+      Math.ceil((dtS * stepsPerPeriod(method, periodS, context)) / periodS - 1e-9),
+    ),
+    dtS,
+    periodS,
   );
+}
+
+/**
+ * Most sub-steps a record step is divided into (a million): beyond it the record's time step is
+ * implausibly long for the period (a time column in the wrong unit, a corrupt step), and the sweep
+ * would run for days or run out of memory.
+ */
+export const MAX_SUBSTEPS = 1e6;
+
+/** `substeps`, or a one-line refusal when it is not a count below MAX_SUBSTEPS. */
+export function checkedSubsteps(substeps: number, dtS: number, periodS: number): number {
+  if (!(substeps <= MAX_SUBSTEPS))
+    throw inputError(
+      `the record's time step Δt = ${formatNumber(dtS, 6)} s would need ${Number.isFinite(substeps) ? formatNumber(substeps) : 'endless'} sub-steps for T = ${formatNumber(periodS, 6)} s, more than a million: is the time step right? If it is, resample the record finer or leave out the shortest periods`,
+    );
+  return substeps;
 }
 
 /**

@@ -37,9 +37,13 @@ describe('sweepThreads: the one thread rule of the CLI and the library', () => {
     }
   });
 
-  it('takes a number of threads as given', () => {
-    expect(sweepThreads(small, record.accelMS2.length, 3, 8)).toBe(3);
+  it('takes a number of threads as given, but no more than there are groups of work', () => {
+    expect(large.groups.length).toBeGreaterThan(3);
+    expect(sweepThreads(large, record.accelMS2.length, 3, 8)).toBe(3);
     expect(sweepThreads(large, record.accelMS2.length, 1, 8)).toBe(1);
+    // The case: 256 threads for a few periods started 256 workers (2 GB, 8 s).
+    expect(sweepThreads(small, record.accelMS2.length, 256, 8)).toBe(small.groups.length);
+    expect(small.groups.length).toBeLessThan(256);
   });
 });
 

@@ -4,6 +4,7 @@ import {
   executionPlan,
   fastestPoleRatio,
   inputFrequency,
+  MAX_SUBSTEPS,
   MIN_STEPS_PER_PERIOD,
   recordSubsteps,
   SUBSTEP_RULE,
@@ -97,5 +98,15 @@ describe('executionPlan', () => {
     expect(executionPlan(20, 10, 0.02, 2)).toEqual({ steps: 4, composed: 5 });
     // Steps a period asked for by the user are executed, not composed.
     expect(executionPlan(66, 0.01, 0.01, 0.3, 66)).toEqual({ steps: 66, composed: 1 });
+  });
+});
+
+describe('a ceiling on sub-steps', () => {
+  it('refuses a record step a million sub-steps long for the period, in one line (the issue’s 1e300 s step)', () => {
+    expect(() => substepCount('newmark-average', 0.05, 1e300, context)).toThrow(
+      /^the record's time step Δt = 1e\+300 s would need .* sub-steps for T = 0\.05 s, more than a million: is the time step right\?/,
+    );
+    // A long but real step (1 s) at the shortest period (0.01 s) is far below the ceiling.
+    expect(substepCount('newmark-average', 0.01, 1, context)).toBeLessThan(MAX_SUBSTEPS / 100);
   });
 });

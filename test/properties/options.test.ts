@@ -81,10 +81,9 @@ const pick = (plausible: string[], hostile: string[]) =>
     { weight: 1, arbitrary: fc.constantFrom(...hostile) },
   );
 
-// The cases and their neighbours; not '256' (the largest allowed): one such run starts 256
-// workers however small the job (reported).
+// The cases and their neighbours, and 256 (the largest allowed, capped at the work there is).
 const THREADS = pick(
-  ['1', '2'],
+  ['1', '2', '256'],
   ['0', '-1', '1e5', 'x', '257', '100000', '1.5', '', ' 2', '0x2', '2,2', 'Infinity'],
 );
 const FILTER = pick(
@@ -514,12 +513,12 @@ describe('hostile options as bounded child processes', () => {
       heavyDampingWarned: 0,
       maxMs: 0,
     };
-    // The size-like values weighted up: these are the ones that once took gigabytes or minutes
-    // (--threads 256 is left out: it starts 256 workers even for 4 oscillators, 8 s and 2 GB; reported).
+    // The size-like values weighted up: these are the ones that once took gigabytes or minutes.
     const heavy = fc.record({
       base: optionCase,
       size: fc.constantFrom<[string, string, Command]>(
         ['--jobs', '100000', 'batch'],
+        ['--threads', '256', 'spectrum'],
         ['--filter', 'highpass:2e-6', 'spectrum'],
         ['--angle-step', '1e-5', 'rotd'],
         ['--periods', '1e7', 'spectrum'],

@@ -91,9 +91,7 @@ describe('layouts', () => {
     expect(message).toBe(
       'rec.csv has 4 columns (t, a\\u2028x, b, c): choose the acceleration with --column (a name or a number from 2 to 4)',
     );
-    expect(failure(() => read(text, { column: 'z' })).message).toMatch(
-      /its columns: t, a\\u2028x, b, c$/,
-    );
+    expect(failure(() => read(text, { column: 'z' })).message).toMatch(/its columns: t, a\\u2028x, b, c$/);
   });
 
   it('reads values wrapped several a line, in row order, after --skip header lines', () => {
