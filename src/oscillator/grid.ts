@@ -178,7 +178,8 @@ export function checkPeriodsForRecord(periodsS: ArrayLike<number>, durationS: nu
   let longest = 0;
   for (let i = 0; i < periodsS.length; i++) longest = Math.max(longest, periodsS[i]);
   const limit = MAX_PERIOD_RECORD_LENGTHS * durationS;
-  if (longest > limit)
+  // A part in a billion spared: a duration of n·Δt may fall an ulp short (0.003 s for 0.0003 × 10).
+  if (longest > limit * (1 + 1e-9))
     throw inputError(
       `--periods: T = ${formatNumber(longest, 6)} s is more than ${MAX_PERIOD_RECORD_LENGTHS} times the record's length (${formatNumber(durationS)} s); use periods up to ${formatNumber(limit)} s for this record`,
     );

@@ -156,3 +156,11 @@ describe('periods against the record’s length', () => {
     );
   });
 });
+
+describe('the period ceiling at its edge', () => {
+  it('takes a period of exactly 1000 record lengths when the length falls an ulp short (long fuzz run)', () => {
+    // 10 steps of 0.0003 s is 0.0029999999999999996 s in floating point; 3 s is 1000 lengths.
+    expect(() => checkPeriodsForRecord([3], 10 * 0.0003)).not.toThrow();
+    expect(() => checkPeriodsForRecord([3.001], 10 * 0.0003)).toThrow(/more than 1000 times/);
+  });
+});
