@@ -1,6 +1,7 @@
 import { existsSync, lstatSync, mkdirSync, realpathSync, rmdirSync, type Stats, statSync } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import { inputError, QuakesweepError, usageError } from '../base/errors.js';
+import { markupSafe } from '../base/printable.js';
 import { TEMPORARY_NAME, writeThrough } from './atomic.js';
 import { recoverFolder } from './recover.js';
 import { guardSignals } from './signals.js';
@@ -131,7 +132,8 @@ export class OutputSet {
         throw describeWriteError(error, [d], others);
       }
     }
-    if (this.stdoutText !== undefined) process.stdout.write(this.stdoutText);
+    // Standard output reaches a terminal: no escape sequence or control character from a name.
+    if (this.stdoutText !== undefined) process.stdout.write(markupSafe(this.stdoutText));
   }
 }
 

@@ -293,7 +293,7 @@ export class RecordReader {
    */
   private isHeader(fields: string[], line: number): boolean {
     if (fields.every((f) => this.isNumber(f))) return false;
-    // A row of numbers with a letter slipped in (`0,0x10`, `0.1O`) is a bad row, not a header: refused.
+    // A row of numbers with a letter slipped in (`0,0x10`, `0.1O`, `0,NaN`) is a bad row, not a header: refused.
     if (this.keyLine !== line && fields.every((f) => this.isNumber(f) || slippedNumber(f))) return false;
     // The E of `1.0E-022.0E-02` (values touching without a sign) is no word: that is a row, refused.
     const word = (f: string) => LETTER.test(f) && !NUMERIC_CHARACTERS.test(f);
@@ -396,9 +396,12 @@ export class RecordReader {
   }
 }
 
-/** A field that begins as a number and holds a letter: `0x10`, `0.1O`, `1.5e-3s`. */
+/**
+ * A field that begins as a number and holds a letter (`0x10`, `0.1O`, `1.5e-3s`), or a spelling of
+ * a value that is not finite (`NaN`, `Infinity`, `-inf`): among numbers, a bad value, not a name.
+ */
 function slippedNumber(field: string): boolean {
-  return NUMBER_START.test(field) && LETTER.test(field);
+  return (NUMBER_START.test(field) && LETTER.test(field)) || /^[+-]?(?:nan|inf(?:inity)?)$/i.test(field);
 }
 
 function columnCount(columns: number): string {

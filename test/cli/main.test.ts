@@ -309,6 +309,27 @@ describe('hostile record names (invented)', () => {
     expect(result.stderr + result.stdout).not.toMatch(/[\u0000-\u0008\u001b]/);
   });
 
+  it('a bell or an escape in a file name does not reach a table on standard output (found by the long fuzz run)', () => {
+    const file = join(f.dir, 'bell\u0007esc\u001b[31m.txt');
+    writeFileSync(file, readFileSync(f.h1));
+    const equipment = new URL('../../records/equipment-generator.json', import.meta.url).pathname;
+    const result = runChild([
+      'anchor',
+      '--equipment',
+      equipment,
+      '--record',
+      file,
+      '--units',
+      'g',
+      '--format',
+      'table',
+    ]);
+    expect(result.code, result.stderr).toBe(0);
+    expect(result.stdout).toContain('bellesc');
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: looking for control characters is the point
+    expect(result.stdout).not.toMatch(/[\u0000-\u0008\u001b\u007f-\u009f]/);
+  });
+
   it('an escape sequence in a file name reaches neither a warning nor the summary on stderr (found by the options fuzz test)', async () => {
     // The name of the record is made printable; the path in a unit warning and in "wrote …" once was not.
     const file = join(f.dir, 'esc\u001b[31mred\u001b[0m.txt');

@@ -234,6 +234,13 @@ describe('runs of rows from the row scanner', () => {
 describe('a first row with a letter slipped into a number', () => {
   // Invented rows. A header line is a line of words; a row of numbers with one bad field is a bad
   // row, refused with its line (common practice: never drop data silently).
+  it('refuses a first row of a number and NaN or Infinity naming the line, not taking it as column names (long fuzz run)', () => {
+    for (const bad of ['NaN', 'Infinity', '-inf'])
+      expect(() =>
+        readRecordText(`0.00,${bad}\n0.01,0.2\n0.02,0.3\n`, { units: 'g', source: 'x.csv' }),
+      ).toThrow(/is not a number/);
+  });
+
   it('refuses `0,0x10` and `0.1O` naming the line, not dropping them as a header', () => {
     const csv = refusal(() =>
       readRecordText('0,0x10\n0.01,0.2\n0.02,0.3\n', { units: 'g', source: 'x.csv' }),
