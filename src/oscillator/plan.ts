@@ -178,10 +178,10 @@ export function sweepThreads(
 ): number {
   // No more threads than groups of work: each thread takes whole groups (256 threads for three
   // periods took 2 GB and 8 s to start).
-  if (typeof threads === 'number') {
-    if (!Number.isInteger(threads) || threads < 1)
-      throw inputError(`the thread count must be a whole number ≥ 1, got ${threads}`);
-    return Math.min(threads, Math.max(1, plan.groups.length));
-  }
+  // A count that is no whole number ≥ 1 goes on as given, for the thread team to refuse.
+  if (typeof threads === 'number')
+    return Number.isInteger(threads) && threads >= 1
+      ? Math.min(threads, Math.max(1, plan.groups.length))
+      : threads;
   return plannedSteps(plan, samples) >= PARALLEL_MIN_OSCILLATOR_STEPS ? cores : 1;
 }

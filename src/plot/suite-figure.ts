@@ -107,7 +107,7 @@ export function suiteFigure(input: SuiteFigureInput): string {
       series.push({
         label: `${n4(check.fraction)} × target`,
         x: drawn.periodsS,
-        y: drawn.psaG.map((v) => (Number.isNaN(v) ? v : v * check.fraction)),
+        y: drawn.psaG.map((v) => v * check.fraction),
         style: FRACTION,
         kind: 'fraction',
       });

@@ -1,5 +1,6 @@
 import { formatNumber } from '../base/numbers.js';
 import { STANDARD_GRAVITY_MS2 } from '../base/units.js';
+import { appliedSteps, stepText } from '../record/reading.js';
 import type { SpectrumRecordInfo } from '../spectrum/spectrum.js';
 
 /** Rough width of running text: 0.5 em a character, a little over the average of common sans-serif faces. */
@@ -73,12 +74,10 @@ export function processingLines(
   none?: string,
 ): string[] {
   const lines = processing.map((step) => {
-    if (step.operation === 'read') return `Read: ${step.description.replace(/^as read: /, '')}`;
-    if (step.operation === 'warning') return `Warning: ${step.description.replace(/^warning: /, '')}`;
-    return `Processed: ${step.description}`;
+    const label = step.operation === 'read' ? 'Read' : step.operation === 'warning' ? 'Warning' : 'Processed';
+    return `${label}: ${stepText(step)}`;
   });
-  const applied = processing.some((step) => step.operation !== 'read' && step.operation !== 'warning');
-  if (!applied && none !== undefined) lines.push(none);
+  if (appliedSteps(processing).length === 0 && none !== undefined) lines.push(none);
   return lines;
 }
 

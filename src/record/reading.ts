@@ -66,6 +66,13 @@ function layoutText(f: ReadingFacts): string {
   return `table, acceleration in column ${f.column?.index}${name}${fixed}${after}`;
 }
 
+/** A step's description without the label of its kind ("as read: ", "warning: "), for text that labels it itself. */
+export function stepText(step: { operation?: string; description: string }): string {
+  if (step.operation === 'read') return step.description.replace(/^as read: /, '');
+  if (step.operation === 'warning') return step.description.replace(/^warning: /, '');
+  return step.description;
+}
+
 export function warningStep(text: string): ProcessingStep {
   return { operation: 'warning', description: `warning: ${text}`, parameters: { warning: text } };
 }
@@ -78,6 +85,6 @@ export function readingWarnings(record: Pick<GroundRecord, 'processing'>): strin
 }
 
 /** The steps applied to the record after reading it (processing, scaling): its list without the reading entry and warnings. */
-export function appliedSteps<Step extends { operation: string }>(processing: readonly Step[]): Step[] {
+export function appliedSteps<Step extends { operation?: string }>(processing: readonly Step[]): Step[] {
   return processing.filter((step) => step.operation !== 'read' && step.operation !== 'warning');
 }

@@ -2,7 +2,7 @@ import { LENGTH_UNITS, type LengthUnit, STANDARD_GRAVITY_MS2 } from '../base/uni
 import { dampingLabel } from '../formats/layout.js';
 import type { GroundMotionMeasures } from '../record/measures.js';
 import { PROCESSING_ORDER } from '../record/process.js';
-import { appliedSteps } from '../record/reading.js';
+import { appliedSteps, stepText } from '../record/reading.js';
 import type { GroundRecord } from '../record/record.js';
 import type { DampingComparison } from '../spectrum/damping.js';
 import type { RotDSpectra } from '../spectrum/rotd.js';
@@ -42,7 +42,7 @@ export function processingSection(
     'Usable period band after filtering: not limited by a filter (the record was not filtered).';
   const parts = steps
     .filter((s) => s.operation === 'read')
-    .map((s) => paragraph(`How it was read: ${s.description.replace(/^as read: /, '').replace(/\.$/, '')}.`));
+    .map((s) => paragraph(`How it was read: ${stepText(s).replace(/\.$/, '')}.`));
   const applied = appliedSteps(steps);
   if (applied.length === 0) parts.push(paragraph(none), paragraph(noFilter, 'usable-band'));
   else {
@@ -58,14 +58,8 @@ export function processingSection(
       ),
     );
   }
-  parts.push(...warningsBlock(steps.filter((s) => s.operation === 'warning').map(warningText)));
+  parts.push(...warningsBlock(steps.filter((s) => s.operation === 'warning').map(stepText)));
   return parts.join('\n');
-}
-
-/** The text of a warning step, without its "warning: " label. */
-function warningText(step: { description: string; parameters?: Record<string, unknown> }): string {
-  const text = step.parameters?.warning;
-  return typeof text === 'string' ? text : step.description.replace(/^warning: /, '');
 }
 
 /** A block of warnings a reader cannot miss (none when there are none). */

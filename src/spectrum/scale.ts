@@ -3,7 +3,7 @@ import { formatNumber } from '../base/numbers.js';
 import { type GroundRecord, type ProcessingStep, withProcessing } from '../record/record.js';
 import { coversPeriod, type DesignSpectrum } from './design.js';
 import type { Spectrum, SpectrumCurve } from './spectrum.js';
-import { drawnTargetCurve } from './target-curve.js';
+import { targetCurveOverlay } from './target-curve.js';
 
 /** The criterion scaleToTarget applies, as stated in every output that uses it. */
 export const SCALE_CRITERION =
@@ -160,13 +160,7 @@ export function scaleOverlays(
     damping: number;
   },
 ): ScaleOverlay[] {
-  const overlays: ScaleOverlay[] = [
-    {
-      label: `target: ${fit.description.split(': ')[0]}`,
-      ...drawnTargetCurve(fit.target, periodsS),
-      rangeS: fit.rangeS,
-    },
-  ];
+  const overlays: ScaleOverlay[] = [{ ...targetCurveOverlay(fit, periodsS), rangeS: fit.rangeS }];
   if (!fit.applied) {
     overlays.push({
       label: `record × ${formatNumber(fit.factor)} (ζ = ${formatNumber(100 * fit.damping, 6)}%, not applied)`,

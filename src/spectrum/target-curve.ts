@@ -30,3 +30,14 @@ export function drawnTargetCurve(
   const periodsS = [...periods].filter((t) => coversPeriod(target, t)).sort((a, b) => a - b);
   return { periodsS, psaG: periodsS.map((t) => target.psaG(t)) };
 }
+
+/** The target as a figure's overlay: labelled by the first part of its description, drawn as above. */
+export function targetCurveOverlay(
+  fit: { target: DesignSpectrum; description: string },
+  gridPeriodsS: ArrayLike<number>,
+): { label: string; periodsS: number[]; psaG: number[] } {
+  return {
+    label: `target: ${fit.description.split(': ')[0]}`,
+    ...drawnTargetCurve(fit.target, gridPeriodsS),
+  };
+}

@@ -13,7 +13,7 @@ import {
 } from './design.js';
 import { type ScaleResult, scaleRecord, scaleSpectrum, scaleStep, scaleToTarget } from './scale.js';
 import type { Spectrum, SpectrumCurve } from './spectrum.js';
-import { drawnTargetCurve } from './target-curve.js';
+import { targetCurveOverlay } from './target-curve.js';
 
 /**
  * A target spectrum as written on the command line: a code spectrum, already built, or the path
@@ -202,12 +202,12 @@ export function targetRecord(record: GroundRecord, fit: TargetFit | undefined): 
   return fit?.applied ? scaleRecord(record, fit.factor, scaleStep(fit, fit.target)) : record;
 }
 
-/** The target as a curve for the PSA figures: the periods it covers only, PSA in g. */
+/** The target as a curve for the PSA figures (targetCurveOverlay: its own points over the grid's span), PSA in g. */
 export function targetOverlay(
   periodsS: Float64Array,
   fit: TargetFit,
 ): { label: string; periodsS: number[]; psaG: number[] } {
-  return { label: `target: ${fit.description.split(': ')[0]}`, ...drawnTargetCurve(fit.target, periodsS) };
+  return targetCurveOverlay(fit, periodsS);
 }
 
 /**
